@@ -1,0 +1,44 @@
+// Builds the committed bundles (dist/cli.js, dist/index.js) with @vercel/ncc and regenerates the
+// README's action input/output tables from action.yml. CI rebuilds and fails when dist/ differs.
+import { createRequire } from 'node:module';
+import { existsSync } from 'node:fs';
+import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { renderActionTables } from './action-tables.mjs';
+
+const require = createRequire(import.meta.url);
+const ncc = require('@vercel/ncc');
+const root = join(dirname(fileURLToPath(import.meta.url)), '..');
+const dist = join(root, 'dist');
+
+const bundles = [
+  { entry: 'src/cli/main.ts', out: 'cli.js' },
+  { entry: 'src/action/main.ts', out: 'index.js' },
+];
+
+await rm(dist, { recursive: true, force: true });
+await mkdir(dist, { recursive: true });
+for (const { entry, out } of bundles) {
+  if (!existsSync(join(root, entry))) continue;
+  const { code, assets } = await ncc(join(root, entry), { minify: false, sourceMap: false, quiet: true, target: 'es2022' });
+  await writeFile(join(dist, out), code);
+  for (const [name, asset] of Object.entries(assets ?? {})) {
+    if (name === 'package.json') continue;
+    const target = join(dist, name);
+    await mkdir(dirname(target), { recursive: true });
+    await writeFile(target, asset.source);
+  }
+  console.log(`built dist/${out} (${Math.round(code.length / 1024)} KiB)`);
+}
+await writeFile(join(dist, 'package.json'), `${JSON.stringify({ type: 'module' }, null, 2)}\n`);
+
+if (existsSync(join(root, 'action.yml'))) {
+  const readmePath = join(root, 'README.md');
+  const readme = await readFile(readmePath, 'utf8');
+  const next = renderActionTables(readme, await readFile(join(root, 'action.yml'), 'utf8'));
+  if (next !== readme) {
+    await writeFile(readmePath, next);
+    console.log('updated the README\'s inputs and outputs tables from action.yml');
+  }
+}

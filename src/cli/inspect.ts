@@ -1,0 +1,40 @@
+import { parseArgs } from 'node:util';
+import { inspectModel, toFailure, type FileFailure, type FileReport } from '../core/inspect.js';
+import { decodeText } from '../core/parse/source.js';
+import { renderInspectJson } from '../core/render/inspect-json.js';
+import { renderInspectText } from '../core/render/inspect-text.js';
+import type { FileSource } from './files.js';
+import { SERVING_FLAGS, servingPatch } from './options.js';
+import { terminalStyle } from './terminal.js';
+import type { Console } from './console.js';
+
+export const INSPECT_USAGE = `usage: context-reach inspect FILE... [--json] [--at POINTER]
+       [--served-span N] [--trained-span N] [--sequences N] [--device-gib G]
+       [--weight-dtype D] [--cache-dtype D] [--position-dtype D]`;
+
+/** `inspect`: measure each file; exit status 2 when any file could not be read. */
+export async function runInspect(args: string[], files: FileSource, io: Console): Promise<number> {
+  const { values, positionals } = parseArgs({
+    args, allowPositionals: true, strict: true,
+    options: { json: { type: 'boolean' }, at: { type: 'string' }, ...SERVING_FLAGS },
+  });
+  if (positionals.length === 0) {
+    io.error(`inspect needs at least one FILE\n${INSPECT_USAGE}`);
+    return 2;
+  }
+  const overrides = servingPatch(values);
+  const reports: FileReport[] = [];
+  const failures: FileFailure[] = [];
+  for (const path of positionals) {
+    try {
+      const text = decodeText(await files.read(path), path);
+      reports.push(inspectModel(text, path, { at: values.at, overrides }));
+    } catch (error) {
+      failures.push(toFailure(path, error));
+    }
+  }
+  if (values.json) io.out(renderInspectJson(reports, failures));
+  else io.out(renderInspectText(reports, failures, terminalStyle(io.stdout, io.env)));
+  for (const failure of failures) if (values.json) io.error(`${failure.path}: ${failure.message}`);
+  return failures.length > 0 ? 2 : 0;
+}

@@ -1,0 +1,118 @@
+import type { ChangedFile } from './changes.js';
+import { decide, type ChangedConfig, type GateReport } from './compare/decide.js';
+import type { Judging } from './compare/judging.js';
+import { inspectModel, toFailure, type FileFailure, type FileReport } from './inspect.js';
+import type { ServingPatch } from './model.js';
+import { decodeText } from './parse/source.js';
+import { DEFAULT_POLICY, isModelConfig, parsePolicy, resolvePolicy, type Policy } from './policy/index.js';
+
+/** Reads a file's bytes at a commit; null when the file does not exist there. */
+export interface ContentSource {
+  read(ref: string, path: string): Promise<Uint8Array | null>;
+}
+
+export interface GateRequest {
+  base: string;
+  head: string;
+  changes: ChangedFile[];
+  /** Path of the policy file, read from the base commit. */
+  policyPath: string;
+  /** Labels on the pull request (default: none). */
+  labels?: string[];
+  /** Notices from gathering the changes (truncated lists, fork tokens). */
+  notices?: string[];
+  /** Serving overrides from the command line (default: none). */
+  overrides?: ServingPatch;
+  /** How many files are read at once (default: 8). */
+  concurrency?: number;
+}
+
+/** Thrown when the policy file on the base commit cannot be read: the gate fails closed. */
+export class PolicyUnreadableError extends Error {}
+
+async function readVersion(source: ContentSource, ref: string, path: string, serving: ServingPatch,
+  overrides: ServingPatch | undefined, policyPath: string): Promise<FileReport | FileFailure | null> {
+  let bytes: Uint8Array | null;
+  try {
+    bytes = await source.read(ref, path);
+  } catch (error) {
+    return toFailure(path, error);
+  }
+  if (bytes === null) return null;
+  try {
+    return inspectModel(decodeText(bytes, path), path, {
+      defaults: serving, defaultsOrigin: { key: `${policyPath} serving`, line: null },
+      overrides, overridesOrigin: { key: 'command line', line: null },
+    });
+  } catch (error) {
+    return toFailure(path, error);
+  }
+}
+
+async function mapLimited<T, R>(items: T[], limit: number, work: (item: T) => Promise<R>): Promise<R[]> {
+  const results: R[] = new Array(items.length);
+  let next = 0;
+  const workers = Array.from({ length: Math.min(limit, items.length) }, async () => {
+    while (next < items.length) {
+      const index = next++;
+      results[index] = await work(items[index]!);
+    }
+  });
+  await Promise.all(workers);
+  return results;
+}
+
+function sameBytes(a: Uint8Array | null, b: Uint8Array | null): boolean {
+  if (a === null || b === null) return a === b;
+  return a.length === b.length && a.every((byte, i) => byte === b[i]);
+}
+
+/**
+ * The whole gate over a pull request: the policy from the base commit, the changed model
+ * configs read at both commits, and one decision. Nothing from the pull request is executed;
+ * files are read as data.
+ */
+export async function runGate(source: ContentSource, request: GateRequest): Promise<GateReport> {
+  const { base, head, policyPath } = request;
+  const basePolicyBytes = await source.read(base, policyPath);
+  let policy: Policy = DEFAULT_POLICY;
+  if (basePolicyBytes !== null) {
+    policy = parsePolicy(decodeText(basePolicyBytes, policyPath), policyPath);
+  }
+  const headPolicyBytes = request.changes.some((c) => c.path === policyPath || c.previousPath === policyPath)
+    ? await source.read(head, policyPath)
+    : basePolicyBytes;
+  const policyChanged = !sameBytes(basePolicyBytes, headPolicyBytes);
+
+  const relevant = request.changes.filter((c) =>
+    isModelConfig(policy, c.path) || (c.previousPath !== null && isModelConfig(policy, c.previousPath)));
+  const deleted = relevant.filter((c) => c.status === 'deleted');
+  const judged = relevant.filter((c) => c.status !== 'deleted');
+
+  const configs = await mapLimited(judged, request.concurrency ?? 8, async (change): Promise<ChangedConfig> => {
+    const filePolicy = resolvePolicy(policy, change.path);
+    const judging: Judging = { limits: filePolicy.limits, rules: filePolicy.rules, standing: filePolicy.standing };
+    const headVersion = await readVersion(source, head, change.path, filePolicy.serving, request.overrides, policyPath)
+      ?? { path: change.path, line: null, message: `${change.path} is not a regular file at head (a symlink, a submodule or too large to read), so it was not judged` };
+    let baseVersion: FileReport | FileFailure | null = null;
+    let status = change.status;
+    if (change.status !== 'added') {
+      baseVersion = await readVersion(source, base, change.previousPath ?? change.path, filePolicy.serving, request.overrides, policyPath);
+      // A base version that is not there (a 404, a shallow history) is an added file.
+      if (baseVersion === null) status = 'added';
+    }
+    return { change: { ...change, status }, base: baseVersion, head: headVersion, judging };
+  });
+
+  const labels = request.labels ?? [];
+  const waiverLabel = policy.waiverLabel ?? null;
+  return decide({
+    configs,
+    deleted,
+    policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged },
+    waiver: { label: waiverLabel, applied: waiverLabel !== null && labels.includes(waiverLabel) },
+    notices: request.notices ?? [],
+    base,
+    head,
+  });
+}

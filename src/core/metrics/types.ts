@@ -1,0 +1,76 @@
+/**
+ * Every metric of the contract (shared METRICS.md), under exactly its name there. `null` where a
+ * metric does not apply or its inputs are degenerate.
+ */
+import type { FloatFormat } from '../model.js';
+
+export interface PrecisionMetrics {
+  /** tokens: largest n with every integer in [0, n] exact in the format. */
+  positionExactLimit: number | null;
+  /** count: p in [1, T) with fl(p) == fl(p-1); overflowing positions count. */
+  collidingPositions: number | null;
+  /** radians: max |fl(fl(p) fl(θ'_i)) - p θ'_i|; null when anything overflows. */
+  angleErrorMax: number | null;
+  /** token: first p whose position or any angle overflows. */
+  overflowPosition: number | null;
+  /** count: pairs with two neighbouring positions at the same rounded angle. */
+  blurredPairs: number | null;
+}
+
+export interface Metrics {
+  // Positional range
+  declaredSpan: number | null;
+  trainedSpan: number | null;
+  servedSpan: number | null;
+  /** `T`, the span every scan runs over (not in the contract; shown so reviewers see it). */
+  evaluationSpan: number | null;
+  reach: number | null;
+  scalingCover: number | null;
+  headroom: number | null;
+  extensionRatio: number | null;
+  fastestWavelength: number | null;
+  slowestWavelength: number | null;
+  unturnedPairs: number | null;
+  exposedPairs: number | null;
+  separationFloor: number | null;
+  separationFloorOffset: number | null;
+  discriminationSpan: number | null;
+  attentionScale: number | null;
+  alibiSlopes: number[] | null;
+  alibiHorizon: number | null;
+  receptiveField: number | null;
+  positionShare: number | null;
+  precision: Record<FloatFormat, PrecisionMetrics>;
+  // Context budget
+  params: number | null;
+  activeParams: number | null;
+  nonEmbeddingParams: number | null;
+  weightBytes: number | null;
+  cachePerTokenBytes: number | null;
+  cacheBytesAtSpan: number | null;
+  memoryBytes: number | null;
+  fitSequences: number | null;
+  flopsPerToken: number | null;
+  tokenBudget: number | null;
+}
+
+/** Scalar metric names (everything but `precision` and `alibiSlopes`), in report order. */
+export const SCALAR_METRICS = [
+  'declaredSpan', 'trainedSpan', 'servedSpan', 'evaluationSpan', 'reach', 'scalingCover', 'headroom',
+  'extensionRatio', 'fastestWavelength', 'slowestWavelength', 'unturnedPairs', 'exposedPairs',
+  'separationFloor', 'separationFloorOffset', 'discriminationSpan', 'attentionScale', 'alibiHorizon',
+  'receptiveField', 'positionShare',
+  'params', 'activeParams', 'nonEmbeddingParams', 'weightBytes', 'cachePerTokenBytes', 'cacheBytesAtSpan',
+  'memoryBytes', 'fitSequences', 'flopsPerToken', 'tokenBudget',
+] as const satisfies readonly (keyof Metrics)[];
+
+export type ScalarMetric = (typeof SCALAR_METRICS)[number];
+
+export const PRECISION_METRICS = [
+  'positionExactLimit', 'collidingPositions', 'angleErrorMax', 'overflowPosition', 'blurredPairs',
+] as const satisfies readonly (keyof PrecisionMetrics)[];
+
+export type PrecisionMetric = (typeof PRECISION_METRICS)[number];
+
+/** Names a policy can put limits on: scalar metrics and `precision.<format>.<metric>`. */
+export type MetricPath = ScalarMetric | `precision.${FloatFormat}.${PrecisionMetric}`;

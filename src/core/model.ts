@@ -1,0 +1,166 @@
+/**
+ * The one typed model description every dialect normalises into. Nothing past the parsers sees
+ * dialect keys. Fields hold what the file states (after normalisation); `null` means "not
+ * stated", and the metrics apply the documented defaults. Sizes are plain numbers that may be
+ * invalid (zero, negative, fractional, NaN): the rules report them, the metrics return null.
+ */
+
+/** Binary floating-point formats the position code can be computed in. */
+export type FloatFormat = 'fp32' | 'bf16' | 'fp16';
+export const FLOAT_FORMATS: readonly FloatFormat[] = ['fp32', 'bf16', 'fp16'];
+
+/** Storage formats for weights and the key/value cache. */
+export type StorageDType = 'fp32' | 'bf16' | 'fp16' | 'fp8' | 'int8' | 'int4';
+export const STORAGE_DTYPES: readonly StorageDType[] = ['fp32', 'bf16', 'fp16', 'fp8', 'int8', 'int4'];
+
+/** Context-extension schemes for rotary codes (METRICS.md, symbol θ'_i). */
+export type ScalingKind = 'linear' | 'ntk' | 'dynamic' | 'yarn' | 'banded';
+export const SCALING_KINDS: readonly ScalingKind[] = ['linear', 'ntk', 'dynamic', 'yarn', 'banded'];
+
+export interface Scaling {
+  kind: ScalingKind;
+  /** `s`, the scaling factor. */
+  factor: number;
+  /** The span the unscaled code was trained at, from the scaling block (default: `null`). */
+  originalSpan: number | null;
+  /** yarn ramp start `α` (default: `1`). */
+  alpha: number;
+  /** yarn ramp end `β` (default: `32`). */
+  beta: number;
+  /** banded low-frequency factor (default: `1`). */
+  low: number;
+  /** banded high-frequency factor (default: `4`). */
+  high: number;
+}
+
+export type PositionCode =
+  | { kind: 'sinusoidal' }
+  | { kind: 'learned' }
+  | {
+      kind: 'rotary';
+      /** Rotary base (default: `10000`). */
+      base: number;
+      /** Share of each head's width that rotates (default: `1`). */
+      fraction: number;
+      scaling: Scaling | null;
+    }
+  | { kind: 'alibi' }
+  | { kind: 'none' };
+
+export type PositionKind = PositionCode['kind'];
+export const POSITION_KINDS: readonly PositionKind[] = ['sinusoidal', 'learned', 'rotary', 'alibi', 'none'];
+
+/** The encoder of an encoder-decoder model; the top-level fields describe the decoder. */
+export interface EncoderStack {
+  layers: number;
+  heads: number;
+  kvHeads: number;
+  headDim: number;
+  ffn: number;
+}
+
+export interface Serving {
+  /** Served span in tokens (default: `null`, the declared span is evaluated). */
+  span: number | null;
+  /** Concurrent sequences held in the cache (default: `1`). */
+  sequences: number | null;
+  /** Device memory budget in GiB (default: `null`, no budget). */
+  deviceGiB: number | null;
+  /** Fraction of device memory kept free (default: `0.1`). */
+  reserve: number | null;
+  /** Tokens reserved for the model's output (default: `null`). */
+  outputTokens: number | null;
+  /** Tokens reserved for a fixed prompt (default: `null`). */
+  promptTokens: number | null;
+}
+
+export interface ModelSpec {
+  /** Free-form model name (default: `null`). */
+  name: string | null;
+  /** Decoder (or only) stack: layers. */
+  layers: number;
+  hidden: number;
+  heads: number;
+  /** Key/value heads (default: `heads`). */
+  kvHeads: number;
+  /** Width of one head (default: `hidden / heads`). */
+  headDim: number;
+  /** Feed-forward width (default: `4 * hidden`). */
+  ffn: number;
+  /** Gated feed-forward with three matrices (default: `false`). */
+  gated: boolean;
+  vocab: number;
+  /** Output matrix shares the token embedding (default: `true`). */
+  tied: boolean;
+  /** Biases on linear layers and norms (default: `false`). */
+  bias: boolean;
+  /** Mixture of experts (default: `null`, dense). */
+  experts: { total: number; active: number } | null;
+  /** Encoder stack of an encoder-decoder model (default: `null`). */
+  encoder: EncoderStack | null;
+  position: PositionCode;
+  /** The config's maximum positions. */
+  declaredSpan: number;
+  /** Explicitly stated trained span (default: `null`). */
+  trainedSpan: number | null;
+  /** Sliding attention window (default: `null`, full attention). */
+  slidingWindow: number | null;
+  /** How many decoder layers use the sliding window (default: all layers). */
+  windowLayers: number | null;
+  dtypes: {
+    /** Weight storage (default: `bf16`). */
+    weights: StorageDType | null;
+    /** Key/value cache storage (default: the weight dtype). */
+    cache: StorageDType | null;
+    /** Format positions and angles are computed in (default: `fp32`). */
+    positions: FloatFormat | null;
+  };
+  /** Standard deviation of the embedding initialisation (default: `null`, unknown). */
+  embeddingInitStd: number | null;
+  /** Factor token embeddings are multiplied by, e.g. sqrt(hidden) (default: `1`). */
+  embeddingMultiplier: number | null;
+  serving: Serving;
+}
+
+/** Where a normalised field came from: the dialect key and its 1-based line. */
+export interface SourceLocation {
+  /** The key as written in the file, as a dotted path (e.g. `rope_scaling.factor`). */
+  key: string;
+  line: number | null;
+}
+
+/** Spec field path (e.g. `position.base`, `serving.span`) to where it was stated. */
+export type LocationMap = Record<string, SourceLocation>;
+
+export type Severity = 'block' | 'warn' | 'info';
+export const SEVERITIES: readonly Severity[] = ['block', 'warn', 'info'];
+
+export interface Finding {
+  /** Rule id of the engine or the gate (see `src/core/rules`). */
+  rule: string;
+  severity: Severity;
+  /** Quotes the values and says what to change. */
+  message: string;
+  /** Dialect key the finding is about (default: `null`, the whole file). */
+  key: string | null;
+  line: number | null;
+}
+
+export type Dialect = 'context-reach' | 'checkpoint';
+
+/**
+ * Serving values from outside the model file (policy `serving` block, CLI flags), in spec terms.
+ * A policy gives defaults (the file's own values win); CLI flags override.
+ */
+export interface ServingPatch {
+  span?: number;
+  sequences?: number;
+  deviceGiB?: number;
+  reserve?: number;
+  outputTokens?: number;
+  promptTokens?: number;
+  weights?: StorageDType;
+  cache?: StorageDType;
+  positions?: FloatFormat;
+  trainedSpan?: number;
+}

@@ -1,0 +1,53 @@
+/**
+ * Everything that reaches markdown or HTML from a pull request (paths, keys, values, messages
+ * quoting them) goes through one of these two functions. GitHub renders comments as GFM with
+ * inline HTML, links bare URLs and turns `@name` and `#123` into mentions and references, so
+ * plain markdown escaping is not enough.
+ */
+
+const ZERO_WIDTH_SPACE = '\u200b';
+
+const HTML_ENTITIES: Record<string, string> = {
+  '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;',
+};
+
+/** Text for HTML element content or a quoted attribute value. */
+export function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (c) => HTML_ENTITIES[c]!);
+}
+
+/**
+ * Text for a markdown paragraph or a table cell: no element, link, emphasis, mention, reference
+ * or comment survives, and a table keeps its shape (`|` and line breaks cannot split a cell).
+ * One pass over the characters, so no entity is escaped twice.
+ */
+export function escapeMarkdown(text: string): string {
+  return text
+    .replace(/\r\n|[\r\n\u2028\u2029]|[\u0000-\u0008\u000b-\u001f\u007f]/g, ' ')
+    .replace(/[&<>"|#\\`*_{}[\]()!~+=-]/g, (c) => MARKDOWN_ESCAPES[c] ?? `\\${c}`)
+    // Mentions, team mentions and issue references are linked from text nodes, after entities
+    // are decoded; a zero-width space after the sign stops the link and reads the same.
+    .replace(/(@|&#35;)(?=[\p{L}\p{N}_])/gu, `$1${ZERO_WIDTH_SPACE}`)
+    // Bare URLs and www. hosts are autolinked; break the scheme separator and the www. prefix.
+    .replace(/:\/\//g, `:${ZERO_WIDTH_SPACE}//`)
+    .replace(/\b(www)\./gi, `$1${ZERO_WIDTH_SPACE}.`)
+    .replace(/ {2,}/g, ' ');
+}
+
+/**
+ * Entities for characters that would open an element, split a table cell or start a heading or
+ * reference; other GFM punctuation is backslash-escaped so it prints as itself.
+ */
+const MARKDOWN_ESCAPES: Record<string, string> = {
+  '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', '|': '&#124;', '#': '&#35;',
+};
+
+/** Untrusted text shown as code: `<code>` with escaped content (backticks cannot be nested safely). */
+export function codeSpan(text: string): string {
+  return `<code>${escapeMarkdown(text)}</code>`;
+}
+
+/** A path segment for a link target, percent-encoded so a crafted path cannot leave the URL. */
+export function encodePath(path: string): string {
+  return path.split('/').map((segment) => encodeURIComponent(segment)).join('/');
+}

@@ -1,0 +1,36 @@
+import type { GateReport } from '../compare/decide.js';
+import { ESTIMATE_NOTICE } from './notice.js';
+
+/**
+ * The versioned JSON report of the gate: the decision, and per file both versions' spec, metrics
+ * and findings. Locations are left out (the findings carry key and line).
+ */
+export function renderGateJson(report: GateReport): string {
+  const files = report.files.map((file) => ({
+    path: file.path,
+    previousPath: file.previousPath,
+    status: file.status,
+    dialect: file.dialect,
+    verdict: file.verdict,
+    deltas: file.deltas,
+    findings: file.findings,
+    base: file.base ? { spec: file.base.spec, metrics: file.base.metrics } : null,
+    head: file.head ? { spec: file.head.spec, metrics: file.head.metrics } : null,
+    baseError: file.baseError,
+    headError: file.headError,
+  }));
+  return `${JSON.stringify({
+    version: report.version,
+    notice: ESTIMATE_NOTICE,
+    verdict: report.verdict,
+    blocking: report.blocking,
+    warnings: report.warnings,
+    base: report.base,
+    head: report.head,
+    policy: report.policy,
+    waiver: report.waiver,
+    notices: report.notices,
+    deleted: report.deleted,
+    files,
+  }, null, 2)}\n`;
+}

@@ -1,0 +1,20 @@
+import type { FileFailure, FileReport } from '../inspect.js';
+import { ESTIMATE_NOTICE } from './notice.js';
+
+/** Version of the JSON documents context-reach writes; bumped on any incompatible change. */
+export const REPORT_VERSION = 1;
+
+/** The one JSON document of `inspect --json`. Unreadable files carry `error` and no metrics. */
+export function renderInspectJson(reports: FileReport[], failures: FileFailure[]): string {
+  const files = [
+    ...reports.map((r) => ({
+      path: r.path, dialect: r.dialect, spec: r.spec, metrics: r.metrics, findings: r.findings,
+    })),
+    ...failures.map((f) => ({
+      path: f.path, dialect: null, spec: null, metrics: null,
+      findings: [{ rule: 'config-unreadable', severity: 'block', message: f.message, key: null, line: f.line }],
+      error: { message: f.message, line: f.line },
+    })),
+  ];
+  return `${JSON.stringify({ version: REPORT_VERSION, notice: ESTIMATE_NOTICE, files }, null, 2)}\n`;
+}

@@ -1,0 +1,63 @@
+import type { FileDecision } from '../compare/decide.js';
+import { memoryAtSpan, usableDeviceBytes } from '../metrics/memory-curve.js';
+import { formatNumber } from '../units.js';
+
+const GIB = 1024 ** 3;
+
+/** Spans to plot: powers of two from 1k up to the larger evaluation span, plus both spans themselves. */
+export function chartSpans(...spans: (number | null)[]): number[] {
+  const known = spans.filter((s): s is number => s !== null && Number.isFinite(s) && s > 0);
+  if (known.length === 0) return [];
+  const top = Math.max(...known);
+  const points = new Set<number>(known);
+  for (let s = 1024; s < top; s *= 2) points.add(s);
+  let sorted = [...points].sort((a, b) => a - b);
+  // Keep the chart readable: at most 12 points, always keeping the evaluated spans.
+  while (sorted.length > 12) {
+    const drop = sorted.findIndex((s, i) => i > 0 && !known.includes(s));
+    if (drop < 0) break;
+    sorted = sorted.filter((_, i) => i !== drop);
+  }
+  return sorted;
+}
+
+function spanLabel(span: number): string {
+  if (span >= 1024 * 1024 && span % (1024 * 1024) === 0) return `${span / (1024 * 1024)}M`;
+  if (span >= 1024 && span % 1024 === 0) return `${span / 1024}k`;
+  return String(span);
+}
+
+/**
+ * A Mermaid line chart (GitHub renders it in comments): weights plus key/value cache in GiB
+ * against span, for base and head, with the usable device budget as a flat line. Only numbers
+ * and our own labels go into it, never text from the pull request.
+ */
+export function memoryChart(file: FileDecision): string | null {
+  const base = file.base;
+  const head = file.head;
+  if (!head) return null;
+  const spans = chartSpans(base?.metrics.evaluationSpan ?? null, head.metrics.evaluationSpan);
+  if (spans.length < 2) return null;
+  const series: { name: string; values: number[] }[] = [];
+  for (const [name, report] of [['base', base], ['head', head]] as const) {
+    if (!report) continue;
+    const values = spans.map((s) => memoryAtSpan(report.spec, s));
+    if (values.every((v): v is number => v !== null)) series.push({ name, values: values.map((v) => v / GIB) });
+  }
+  if (series.length === 0) return null;
+  const budget = usableDeviceBytes(head.spec);
+  if (budget !== null) series.push({ name: 'usable device memory', values: spans.map(() => budget / GIB) });
+  const top = Math.max(...series.flatMap((s) => s.values));
+  const round = (v: number) => formatNumber(v, 4).replace(/,/g, '');
+  const lines = [
+    '```mermaid',
+    'xychart-beta',
+    '    title "Weights + key/value cache (GiB) against span"',
+    `    x-axis "span (tokens)" [${spans.map((s) => `"${spanLabel(s)}"`).join(', ')}]`,
+    `    y-axis "GiB" 0 --> ${round(top * 1.1)}`,
+    ...series.map((s) => `    line [${s.values.map(round).join(', ')}]`),
+    '```',
+  ];
+  const legend = series.map((s, i) => `${i + 1}. ${s.name}`).join(' · ');
+  return `<details open><summary>Memory against span</summary>\n\n${lines.join('\n')}\n\nLines, in order: ${legend}. Sequences held: base ${base?.spec.serving.sequences ?? 1}, head ${head.spec.serving.sequences ?? 1}.\n\n</details>`;
+}

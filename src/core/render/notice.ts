@@ -1,0 +1,3 @@
+/** Said in every report: what the numbers are and are not. */
+export const ESTIMATE_NOTICE =
+  'These metrics are estimates computed from the config alone, to support a review; they are not a guarantee of model quality, and a model can fail or succeed for reasons no config shows.';

@@ -1,0 +1,102 @@
+import type { Severity } from '../model.js';
+
+export interface RuleInfo {
+  /** Default severity; a policy's `rules` block can change it or turn it off. */
+  severity: Severity;
+  /** One line, for reports and SARIF rule metadata. */
+  title: string;
+  /** What to do about it, for SARIF `help`. */
+  help: string;
+  /** Where it is decided: a file on its own, or a change between base and head. */
+  scope: 'file' | 'change' | 'limit' | 'read';
+}
+
+/** Every rule id context-reach raises. Ids are stable: policies refer to them. */
+export const RULES = {
+  'config-unreadable': {
+    severity: 'block', scope: 'read',
+    title: 'The model config cannot be read or parsed',
+    help: 'Fix the syntax error, or exclude the file from the policy\'s `files` globs if it is not a model config.',
+  },
+  'value-invalid': {
+    severity: 'block', scope: 'file',
+    title: 'A value has the wrong type or is outside what the schema allows',
+    help: 'Give the key a value of the documented type.',
+  },
+  'size-invalid': {
+    severity: 'block', scope: 'file',
+    title: 'A size is zero, negative, fractional or not finite',
+    help: 'Sizes (layers, widths, heads, spans, vocabulary) must be positive whole numbers.',
+  },
+  'kv-heads-indivisible': {
+    severity: 'block', scope: 'file',
+    title: 'Key/value heads do not divide the attention heads',
+    help: 'Grouped-query attention shares each key/value head among heads/kvHeads query heads; pick a divisor of heads.',
+  },
+  'rotary-width-odd': {
+    severity: 'block', scope: 'file',
+    title: 'The rotary width is not an even whole number',
+    help: 'Rotary codes rotate pairs of channels: head size times rotary fraction must be an even integer.',
+  },
+  'scaling-factor-below-one': {
+    severity: 'block', scope: 'file',
+    title: 'A context scaling factor below 1',
+    help: 'Scaling factors stretch the trained span; a factor below 1 shrinks it. Use 1 or more, or remove the scaling block.',
+  },
+  'original-span-above-declared': {
+    severity: 'block', scope: 'file',
+    title: 'The scaling block\'s original span exceeds the declared span',
+    help: 'The original (trained) span of a scaled code should not exceed the maximum positions the config declares.',
+  },
+  'scaling-kind-unknown': {
+    severity: 'block', scope: 'file',
+    title: 'An unknown context scaling kind',
+    help: 'Use one of the known kinds, or describe the model in the context-reach model format.',
+  },
+  'span-past-reach': {
+    severity: 'block', scope: 'file',
+    title: 'The evaluated span goes past what the position code supports',
+    help: 'Raise the scaling factor, use a learned table as large as the span, or serve a shorter span.',
+  },
+  'span-beyond-scaling-cover': {
+    severity: 'warn', scope: 'file',
+    title: 'The declared span goes beyond what the scaling accounts for, and no trained span is stated',
+    help: 'State the trained span explicitly, or raise the scaling factor so original span times factor covers the declared span.',
+  },
+  'positions-collide': {
+    severity: 'block', scope: 'file',
+    title: 'Neighbouring positions round to the same value in the position dtype',
+    help: 'Compute positions in a wider format (fp32 holds every integer up to 16,777,216), or serve a shorter span.',
+  },
+  'pairs-blurred': {
+    severity: 'warn', scope: 'file',
+    title: 'Some frequency pairs give neighbouring positions the same rounded angle',
+    help: 'Compute angles in a wider format, or accept that those pairs cannot tell neighbours apart.',
+  },
+  'span-grew-code-unchanged': {
+    severity: 'block', scope: 'change',
+    title: 'The declared span grew while the position code stayed the same',
+    help: 'A longer span needs a position code that reaches it: add or raise context scaling, or retrain at the longer span and state it.',
+  },
+  'frequencies-changed': {
+    severity: 'warn', scope: 'change',
+    title: 'The rotary base or the position frequencies changed',
+    help: 'Changing the frequencies after training is a retraining-level change: make sure the checkpoint was trained or tuned for them.',
+  },
+  'cache-per-token-changed': {
+    severity: 'info', scope: 'change',
+    title: 'Key/value cache per token changed',
+    help: 'Key/value heads, head size or cache dtype changed the memory each token holds.',
+  },
+  'limit-crossed': {
+    severity: 'block', scope: 'limit',
+    title: 'A metric crossed a limit of the team\'s policy',
+    help: 'Change the config so the metric is within the limit, or change the limit in the policy on the base branch.',
+  },
+} as const satisfies Record<string, RuleInfo>;
+
+export type RuleId = keyof typeof RULES;
+
+export function isRuleId(id: string): id is RuleId {
+  return Object.prototype.hasOwnProperty.call(RULES, id);
+}

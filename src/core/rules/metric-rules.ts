@@ -1,0 +1,74 @@
+import type { Finding, LocationMap, ModelSpec } from '../model.js';
+import type { Metrics } from '../metrics/types.js';
+import { formatInteger, formatTokens } from '../units.js';
+import { RULES, type RuleId } from './catalog.js';
+
+function at(locations: LocationMap, ...paths: string[]): { key: string | null; line: number | null } {
+  for (const path of paths) {
+    const found = locations[path];
+    if (found) return { key: found.key, line: found.line };
+  }
+  return { key: null, line: null };
+}
+
+function finding(rule: RuleId, message: string, where: { key: string | null; line: number | null }): Finding {
+  return { rule, severity: RULES[rule].severity, message, ...where };
+}
+
+function spanName(spec: ModelSpec, locations: LocationMap): { label: string; where: { key: string | null; line: number | null } } {
+  if (spec.serving.span !== null) return { label: 'served span', where: at(locations, 'serving.span') };
+  return { label: 'declared span', where: at(locations, 'declaredSpan') };
+}
+
+function codeLabel(spec: ModelSpec): string {
+  const code = spec.position;
+  if (code.kind !== 'rotary') return `${code.kind} position code`;
+  return code.scaling ? `rotary code with ${code.scaling.kind} scaling` : 'rotary code without scaling';
+}
+
+/** Findings that follow from one file's metrics: span past reach, unaccounted spans, rounding. */
+export function metricFindings(spec: ModelSpec, metrics: Metrics, locations: LocationMap): Finding[] {
+  const findings: Finding[] = [];
+  const T = metrics.evaluationSpan;
+  const { label, where } = spanName(spec, locations);
+
+  if (metrics.headroom !== null && metrics.headroom < 0 && metrics.reach !== null && T !== null) {
+    const L0 = metrics.trainedSpan;
+    let advice: string;
+    if (spec.position.kind === 'learned') {
+      advice = `grow the position table to ${formatInteger(T)} rows (retraining it), or serve at most ${formatInteger(metrics.reach)} tokens`;
+    } else if (spec.position.kind === 'rotary' && L0 !== null && L0 > 0) {
+      const kind = spec.position.scaling?.kind ?? 'linear';
+      advice = `raise the ${kind} scaling factor to at least ${formatInteger(Math.ceil(T / L0))} (covers ${formatInteger(Math.ceil(T / L0) * L0)}), or serve at most ${formatInteger(metrics.reach)} tokens`;
+    } else {
+      advice = `serve at most ${formatInteger(metrics.reach)} tokens`;
+    }
+    findings.push(finding('span-past-reach',
+      `The ${label} ${formatTokens(T)} is ${formatInteger(-metrics.headroom)} tokens past the reach ${formatTokens(metrics.reach)} of the ${codeLabel(spec)} (trained span ${formatTokens(L0)}); ${advice}.`,
+      where));
+  }
+
+  if (spec.position.kind === 'rotary' && spec.position.scaling && spec.trainedSpan === null
+    && metrics.scalingCover !== null && metrics.declaredSpan !== null && metrics.declaredSpan > metrics.scalingCover) {
+    const scaling = spec.position.scaling;
+    findings.push(finding('span-beyond-scaling-cover',
+      `The declared span ${formatTokens(metrics.declaredSpan)} goes beyond the ${formatTokens(metrics.scalingCover)} that ${scaling.kind} scaling accounts for (original span ${formatTokens(metrics.trainedSpan)} × factor ${scaling.factor}), and no trained span is stated; state the trained span if the model was tuned longer, or raise the factor to ${formatInteger(Math.ceil(metrics.declaredSpan / (metrics.trainedSpan ?? 1)))}.`,
+      at(locations, 'declaredSpan')));
+  }
+
+  const format = spec.dtypes.positions ?? 'fp32';
+  const rounding = metrics.precision[format];
+  const formatWhere = at(locations, 'dtypes.positions', 'serving.span', 'declaredSpan');
+  if (rounding.collidingPositions !== null && rounding.collidingPositions > 0 && T !== null) {
+    const overflow = rounding.overflowPosition !== null ? `; from position ${formatInteger(rounding.overflowPosition)} on it overflows` : '';
+    findings.push(finding('positions-collide',
+      `In ${format}, ${formatInteger(rounding.collidingPositions)} of the ${formatInteger(T - 1)} neighbouring position pairs in the ${label} ${formatTokens(T)} round to the same value (every integer is exact only up to ${formatInteger(rounding.positionExactLimit)})${overflow}; compute positions in fp32, or serve at most ${formatInteger(rounding.positionExactLimit)} tokens.`,
+      formatWhere));
+  }
+  if (rounding.blurredPairs !== null && rounding.blurredPairs > 0) {
+    findings.push(finding('pairs-blurred',
+      `In ${format}, ${formatInteger(rounding.blurredPairs)} frequency pairs give two neighbouring positions within the ${label} ${formatTokens(T)} the same rounded angle, so those pairs cannot tell the neighbours apart; compute angles in a wider format if the model relies on them.`,
+      formatWhere));
+  }
+  return findings;
+}

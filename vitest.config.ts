@@ -1,0 +1,13 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    include: ['test/**/*.test.ts'],
+    testTimeout: 30_000,
+    coverage: {
+      provider: 'v8',
+      include: ['src/core/**'],
+      reporter: ['text-summary', 'json-summary'],
+    },
+  },
+});
