@@ -1,39 +1,56 @@
+import { DIFF_USAGE, runDiff } from './diff.js';
+import { runDemo } from './demo.js';
 import { INSPECT_USAGE, runInspect } from './inspect.js';
 import type { Console } from './console.js';
 import type { FileSource } from './files.js';
 import { UsageError } from './options.js';
+import { VERSION } from '../core/version.js';
 
 export interface CliDeps {
   files: FileSource;
   io: Console;
 }
 
+const DEMO_USAGE = 'usage: context-reach demo [--format markdown|text|json] [--keep]';
+
 const USAGE = `context-reach: positional-range and context-budget review of transformer model configs
 
 ${INSPECT_USAGE}
 
-Run 'context-reach COMMAND --help' for a command's options.`;
+${DIFF_USAGE}
+
+${DEMO_USAGE}
+
+'context-reach COMMAND --help' shows one command's usage.`;
+
+const COMMANDS: Record<string, { usage: string; run: (args: string[], deps: CliDeps) => Promise<number> }> = {
+  inspect: { usage: INSPECT_USAGE, run: (args, deps) => runInspect(args, deps.files, deps.io) },
+  diff: { usage: DIFF_USAGE, run: (args, deps) => runDiff(args, deps.io) },
+  demo: { usage: DEMO_USAGE, run: (args, deps) => runDemo(args, deps.io) },
+};
 
 /** Dispatch a command; returns the exit status. Usage mistakes exit 2 with one line, no stack trace. */
 export async function run(argv: string[], deps: CliDeps): Promise<number> {
   const [command, ...rest] = argv;
+  if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
+    deps.io.out(`${USAGE}\n`);
+    return command === undefined ? 2 : 0;
+  }
+  if (command === '--version') {
+    deps.io.out(`context-reach ${VERSION}\n`);
+    return 0;
+  }
+  const entry = COMMANDS[command];
   try {
-    switch (command) {
-      case 'inspect':
-        if (rest.includes('--help')) { deps.io.out(`${INSPECT_USAGE}\n`); return 0; }
-        return await runInspect(rest, deps.files, deps.io);
-      case undefined: case '--help': case '-h': case 'help':
-        deps.io.out(`${USAGE}\n`);
-        return command === undefined ? 2 : 0;
-      case '--version':
-        deps.io.out('context-reach 0.1.0\n');
-        return 0;
-      default:
-        throw new UsageError(`unknown command '${command}'`);
+    if (!entry) throw new UsageError(`unknown command '${command}'`);
+    if (rest.includes('--help') || rest.includes('-h')) {
+      deps.io.out(`${entry.usage}\n`);
+      return 0;
     }
+    return await entry.run(rest, deps);
   } catch (error) {
-    if (error instanceof UsageError || (error as { code?: string })?.code?.startsWith('ERR_PARSE_ARGS')) {
-      deps.io.error(`context-reach: ${(error as Error).message}\n${USAGE}`);
+    if (error instanceof UsageError || String((error as { code?: unknown })?.code ?? '').startsWith('ERR_PARSE_ARGS')) {
+      deps.io.error(`context-reach: ${(error as Error).message}\n${entry?.usage ?? USAGE}`);
       return 2;
     }
     throw error;

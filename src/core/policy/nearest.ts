@@ -24,12 +24,17 @@ export function editDistance(a: string, b: string): number {
   return previous[t.length];
 }
 
-/** The candidate closest to `name` (the first of equals, in the candidates' order), or null if none. */
+/**
+ * The candidate a mistyped `name` most likely meant, or null when none is plausibly meant: the
+ * closest within max(2, length / 3) edits (first of equals, in the candidates' order), else a
+ * candidate that is a prefix of the name or has it as a prefix (`minimum` → `min`).
+ */
 export function nearestName(name: string, candidates: readonly string[]): string | null {
-  let best: string | null = null;
-  let bestDistance = Infinity;
   // Names longer than any candidate by far are noise, not typos; cap the work they cost.
   const probe = name.slice(0, 200);
+  const allowed = Math.max(2, Math.floor(probe.length / 3));
+  let best: string | null = null;
+  let bestDistance = Infinity;
   for (const candidate of candidates) {
     const distance = editDistance(probe, candidate);
     if (distance < bestDistance) {
@@ -37,5 +42,10 @@ export function nearestName(name: string, candidates: readonly string[]): string
       bestDistance = distance;
     }
   }
-  return best;
+  if (best !== null && bestDistance <= allowed) return best;
+  const lower = probe.toLowerCase();
+  return candidates.find((candidate) => {
+    const other = candidate.toLowerCase();
+    return Math.min(other.length, lower.length) >= 3 && (lower.startsWith(other) || other.startsWith(lower));
+  }) ?? null;
 }

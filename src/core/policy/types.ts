@@ -41,6 +41,7 @@ export type LimitTable = Readonly<Record<string, LimitSetting | null>>;
 export type RuleTable = Readonly<Record<string, RuleLevel>>;
 
 export interface PolicyOverride {
+  /** Globs of the configs this entry applies to. */
   files: readonly string[];
   serving: ServingPatch;
   limits: LimitTable;
@@ -56,7 +57,9 @@ export interface Policy {
   exclude: readonly string[];
   /** Serving defaults for every config; a value the config states wins (default: `{}`). */
   serving: ServingPatch;
+  /** Limits keyed by metric name exactly as in the metric contract (default: `{}`, no limits). */
   limits: LimitTable;
+  /** Rule id to level (default: `{}`, every rule at its own severity). */
   rules: RuleTable;
   /** Applied in order to the configs their globs match; later entries win (default: `[]`). */
   overrides: readonly PolicyOverride[];

@@ -5,11 +5,10 @@ import { formatInteger, formatNumber } from '../units.js';
 import { codeSpan, encodePath, escapeMarkdown } from './escape.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { memoryChart } from './memory-chart.js';
-import { ESTIMATE_NOTICE } from './notice.js';
+import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
 import { METRIC_PATHS, metricValue as metricOf } from '../compare/metric-path.js';
 
-/** Hidden first line of the pull-request comment; the action finds its own comment by it. */
-export const COMMENT_MARKER = '<!-- context-reach:pull-request-report -->';
+export { COMMENT_MARKER };
 
 /** GitHub refuses comment bodies over 65,536 characters; keep a margin for the trim notice. */
 export const COMMENT_LIMIT = 65_536;

@@ -41,5 +41,5 @@ export function formatChange(metric: MetricPath, change: number | null, pct: num
   if (change === 0) return '0';
   const sign = change > 0 ? '+' : '−';
   const magnitude = formatMetric(metric, Math.abs(change)).replace(/ \(\d+[kM]\)$/, '');
-  return pct === null ? `${sign}${magnitude}` : `${sign}${magnitude} (${pct > 0 ? '+' : ''}${formatNumber(pct, 3)} %)`;
+  return pct === null ? `${sign}${magnitude}` : `${sign}${magnitude} (${sign}${formatNumber(Math.abs(pct), 3)} %)`;
 }

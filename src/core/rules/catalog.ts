@@ -53,6 +53,16 @@ export const RULES = {
     title: 'An unknown context scaling kind',
     help: 'Use one of the known kinds, or describe the model in the context-reach model format.',
   },
+  'position-code-assumed': {
+    severity: 'warn', scope: 'file',
+    title: 'The config states no position code the reader can use, so one was assumed',
+    help: 'State the position code (rope_theta, position_embedding_type or alibi), or describe the model in the context-reach model format.',
+  },
+  'key-ignored': {
+    severity: 'warn', scope: 'file',
+    title: 'A key is stated but has no effect on the model as read',
+    help: 'Remove the key, or change the keys it depends on so that it takes effect.',
+  },
   'span-past-reach': {
     severity: 'block', scope: 'file',
     title: 'The evaluated span goes past what the position code supports',
@@ -72,6 +82,11 @@ export const RULES = {
     severity: 'warn', scope: 'file',
     title: 'Some frequency pairs give neighbouring positions the same rounded angle',
     help: 'Compute angles in a wider format, or accept that those pairs cannot tell neighbours apart.',
+  },
+  'memory-over-budget': {
+    severity: 'block', scope: 'file',
+    title: 'Weights plus key/value cache at the span do not fit the device budget',
+    help: 'Hold fewer concurrent sequences, store the cache in a narrower dtype, use fewer key/value heads, or serve a shorter span.',
   },
   'span-grew-code-unchanged': {
     severity: 'block', scope: 'change',

@@ -1,6 +1,7 @@
 import type { Finding, LocationMap, ModelSpec } from '../model.js';
 import type { Metrics } from '../metrics/types.js';
-import { formatInteger, formatTokens } from '../units.js';
+import { usableDeviceBytes } from '../metrics/memory-curve.js';
+import { formatBytes, formatInteger, formatTokens } from '../units.js';
 import { RULES, type RuleId } from './catalog.js';
 
 function at(locations: LocationMap, ...paths: string[]): { key: string | null; line: number | null } {
@@ -54,6 +55,17 @@ export function metricFindings(spec: ModelSpec, metrics: Metrics, locations: Loc
     findings.push(finding('span-beyond-scaling-cover',
       `The declared span ${formatTokens(metrics.declaredSpan)} goes beyond the ${formatTokens(metrics.scalingCover)} that ${scaling.kind} scaling accounts for (original span ${formatTokens(metrics.trainedSpan)} × factor ${scaling.factor}), and no trained span is stated; state the trained span if the model was tuned longer, or raise the factor to ${formatInteger(Math.ceil(metrics.declaredSpan / (metrics.trainedSpan ?? 1)))}.`,
       at(locations, 'declaredSpan')));
+  }
+
+  const usable = usableDeviceBytes(spec);
+  if (usable !== null && metrics.memoryBytes !== null && metrics.memoryBytes > usable) {
+    const sequences = spec.serving.sequences ?? 1;
+    const fit = metrics.fitSequences !== null && metrics.fitSequences > 0
+      ? `at most ${formatInteger(metrics.fitSequences)} sequence${metrics.fitSequences === 1 ? '' : 's'} of ${formatTokens(T)} fit`
+      : 'not even one sequence at this span fits';
+    findings.push(finding('memory-over-budget',
+      `Weights (${formatBytes(metrics.weightBytes)}) plus the key/value cache for ${formatInteger(sequences)} sequence${sequences === 1 ? '' : 's'} of ${formatTokens(T)} tokens (${formatBytes(metrics.cacheBytesAtSpan)}) need ${formatBytes(metrics.memoryBytes)}, over the ${formatBytes(usable)} usable of ${formatInteger(spec.serving.deviceGiB)} GiB; ${fit}: hold fewer sequences, a narrower cache dtype or fewer key/value heads, or serve a shorter span.`,
+      at(locations, 'serving.sequences', 'serving.span', 'serving.deviceGiB', 'dtypes.cache')));
   }
 
   const format = spec.dtypes.positions ?? 'fp32';

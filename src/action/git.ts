@@ -1,0 +1,260 @@
+/**
+ * The one adapter for git: every git call of the action and the CLI goes through here. Git runs
+ * as a child process with an argument array (never a shell), bounded output and a timeout.
+ * Revisions and paths come from events and pull requests, so they are checked before use and
+ * blobs are read with `cat-file` (no textconv or filters from the pull request's attributes).
+ */
+import { execFile } from 'node:child_process';
+import type { ChangedFile } from '../core/changes.js';
+
+/** Largest model config read, in bytes; larger blobs are refused unread (default: `4 MiB`). */
+export const MAX_CONFIG_BYTES = 4 * 1024 * 1024;
+
+/** A file refused because it is larger than `limit` bytes. */
+export class ContentTooLargeError extends Error {
+  constructor(readonly path: string, readonly size: number, readonly limit: number) {
+    super(`${path} is ${size} bytes; expected at most ${limit} bytes for a model config (the file was not read)`);
+    this.name = 'ContentTooLargeError';
+  }
+}
+
+/** A git call that failed: exit status, signal, or output past its bound. */
+export class GitError extends Error {
+  constructor(message: string, readonly args: readonly string[], readonly exitCode: number | null, readonly stderr: string) {
+    super(message);
+    this.name = 'GitError';
+  }
+}
+
+export type TreeEntryKind = 'file' | 'symlink' | 'submodule' | 'directory';
+
+/** One entry of a commit's tree. */
+export interface TreeEntry {
+  kind: TreeEntryKind;
+  /** Octal mode as git prints it: `100644`, `100755`, `120000`, `160000`, `040000`. */
+  mode: string;
+  /** Object id of the blob, tree or commit. */
+  oid: string;
+}
+
+export interface GitReader {
+  /** Whether `rev` names a commit present in the local repository (false in a shallow clone that lacks it). */
+  hasCommit(rev: string): Promise<boolean>;
+  /** Full object id of the commit `rev` names, or null when there is none. */
+  resolveCommit(rev: string): Promise<string | null>;
+  /** Files that differ between two commits, renames detected (`git diff --name-status -M -z`). */
+  changedFiles(base: string, head: string): Promise<ChangedFile[]>;
+  /** The tree entry at `path` in `commit`, or null when absent; symlinks are reported, never followed. */
+  entry(commit: string, path: string): Promise<TreeEntry | null>;
+  /**
+   * Bytes of the regular file at `path` in `commit`; null when absent or not a regular file
+   * (symlink, submodule, directory). Throws `ContentTooLargeError` past `MAX_CONFIG_BYTES`.
+   */
+  show(commit: string, path: string): Promise<Uint8Array | null>;
+  /** Best common ancestor of two commits, or null when they share none. */
+  mergeBase(a: string, b: string): Promise<string | null>;
+}
+
+export interface GitReaderOptions {
+  /** Git executable (default: `git` from PATH). */
+  git?: string;
+  /** Time one git call may take, in milliseconds (default: `30000`). */
+  timeoutMs?: number;
+  /** Largest output of a listing call (diff, ls-tree), in bytes (default: `64 MiB`). */
+  maxListBytes?: number;
+  /** Largest file `show` reads, in bytes (default: `MAX_CONFIG_BYTES`). */
+  maxFileBytes?: number;
+}
+
+interface RunResult {
+  code: number;
+  stdout: Buffer;
+  stderr: string;
+}
+
+/** A revision from an event or an input: no option lookalikes, no control characters, sane length. */
+function checkRevision(rev: string): string {
+  if (typeof rev !== 'string' || rev === '' || rev.length > 256 || rev.startsWith('-') || /[\u0000-\u0020\u007f]/.test(rev)) {
+    throw new GitError(`revision ${JSON.stringify(rev)} is not usable; expected a commit id or ref name without spaces or a leading "-"`, [], null, '');
+  }
+  return rev;
+}
+
+function checkPath(path: string): string {
+  if (typeof path !== 'string' || path === '' || path.includes('\u0000') || path.startsWith('/') || path.split('/').some((part) => part === '' || part === '.' || part === '..')) {
+    throw new GitError(`path ${JSON.stringify(path)} is not usable; expected a repository-relative path without empty, "." or ".." parts`, [], null, '');
+  }
+  return path;
+}
+
+const KINDS: Record<string, TreeEntryKind> = { blob: 'file', tree: 'directory', commit: 'submodule' };
+
+export function createGitReader(cwd: string, options: GitReaderOptions = {}): GitReader {
+  const git = options.git ?? 'git';
+  const timeout = options.timeoutMs ?? 30_000;
+  const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
+  const maxFile = options.maxFileBytes ?? MAX_CONFIG_BYTES;
+
+  /** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
+  function run(args: string[], maxBuffer: number): Promise<RunResult> {
+    // The checkout's own settings stay, but nothing may prompt or run a file-system monitor.
+    const full = ['-c', 'core.fsmonitor=false', '-c', 'core.quotePath=false', ...args];
+    return new Promise((resolve, reject) => {
+      execFile(git, full, {
+        cwd,
+        encoding: 'buffer',
+        maxBuffer,
+        timeout,
+        windowsHide: true,
+        env: { ...process.env, GIT_TERMINAL_PROMPT: '0', GIT_OPTIONAL_LOCKS: '0', LC_ALL: 'C' },
+      }, (error, stdout, stderr) => {
+        const errText = stderr.toString('utf8').slice(0, 2000).trim();
+        if (!error) {
+          resolve({ code: 0, stdout, stderr: errText });
+          return;
+        }
+        const failure = error as NodeJS.ErrnoException & { code?: string | number; killed?: boolean; signal?: string | null };
+        if (failure.code === 'ERR_CHILD_PROCESS_STDIO_MAXBUFFER') {
+          reject(new GitError(`git ${args[0]} wrote more than ${maxBuffer} bytes; expected less (output refused)`, args, null, errText));
+        } else if (failure.killed || failure.signal) {
+          reject(new GitError(`git ${args[0]} did not finish within ${timeout} ms (stopped with ${failure.signal ?? 'a signal'})`, args, null, errText));
+        } else if (typeof failure.code === 'number') {
+          resolve({ code: failure.code, stdout, stderr: errText });
+        } else {
+          reject(new GitError(`git could not be started (${failure.code ?? failure.message}); expected a git executable at ${JSON.stringify(git)}`, args, null, errText));
+        }
+      });
+    });
+  }
+
+  function failed(args: string[], result: RunResult): GitError {
+    const reason = result.stderr.split('\n')[0] || 'no message';
+    return new GitError(`git ${args.join(' ')} failed with exit status ${result.code}: ${reason}`, args, result.code, result.stderr);
+  }
+
+  async function resolveCommit(rev: string): Promise<string | null> {
+    const args = ['rev-parse', '--verify', '--quiet', `${checkRevision(rev)}^{commit}`];
+    const result = await run(args, 4096);
+    if (result.code === 0) return result.stdout.toString('utf8').trim();
+    // --quiet turns "no such commit" into exit status 1 and nothing else.
+    if (result.code === 1) return null;
+    throw failed(args, result);
+  }
+
+  async function entry(commit: string, path: string): Promise<TreeEntry | null> {
+    checkPath(path);
+    const slash = path.lastIndexOf('/');
+    const dir = slash < 0 ? '' : path.slice(0, slash);
+    const name = path.slice(slash + 1);
+    // List the parent tree and compare names exactly: ls-tree's own path arguments are patterns.
+    const tree = dir === '' ? `${checkRevision(commit)}^{tree}` : `${checkRevision(commit)}:${dir}`;
+    const args = ['ls-tree', '-z', tree];
+    const result = await run(args, maxList);
+    if (result.code !== 0) {
+      // The parent is missing or is not a directory (a file, or a symlink git does not follow).
+      if (/not a tree object|Not a valid object name|does not exist|bad revision/i.test(result.stderr)) return null;
+      throw failed(args, result);
+    }
+    for (const record of result.stdout.toString('utf8').split('\u0000')) {
+      const tab = record.indexOf('\t');
+      if (tab < 0 || record.slice(tab + 1) !== name) continue;
+      const [mode, type, oid] = record.slice(0, tab).split(' ');
+      const kind: TreeEntryKind = mode === '120000' ? 'symlink' : KINDS[type] ?? 'file';
+      return { kind, mode, oid };
+    }
+    return null;
+  }
+
+  return {
+    async hasCommit(rev) {
+      return (await resolveCommit(rev)) !== null;
+    },
+    resolveCommit,
+    async changedFiles(base, head) {
+      const args = ['diff', '--name-status', '-M', '-z', '--no-ext-diff', '--no-textconv', '--no-color', checkRevision(base), checkRevision(head), '--'];
+      const result = await run(args, maxList);
+      if (result.code !== 0) throw failed(args, result);
+      return parseNameStatus(result.stdout.toString('utf8'));
+    },
+    entry,
+    async show(commit, path) {
+      const found = await entry(commit, path);
+      if (found === null || found.kind !== 'file') return null;
+      const sizeArgs = ['cat-file', '-s', found.oid];
+      const sized = await run(sizeArgs, 4096);
+      if (sized.code !== 0) throw failed(sizeArgs, sized);
+      const size = Number(sized.stdout.toString('utf8').trim());
+      if (!Number.isSafeInteger(size) || size > maxFile) throw new ContentTooLargeError(path, size, maxFile);
+      const blobArgs = ['cat-file', 'blob', found.oid];
+      const blob = await run(blobArgs, maxFile + 1);
+      if (blob.code !== 0) throw failed(blobArgs, blob);
+      return new Uint8Array(blob.stdout.buffer, blob.stdout.byteOffset, blob.stdout.byteLength);
+    },
+    async mergeBase(a, b) {
+      const args = ['merge-base', checkRevision(a), checkRevision(b)];
+      const result = await run(args, 4096);
+      if (result.code === 0) return result.stdout.toString('utf8').trim();
+      if (result.code === 1) return null;
+      throw failed(args, result);
+    },
+  };
+}
+
+/**
+ * Parses `git diff --name-status -z` output: `STATUS NUL path NUL`, or for renames and copies
+ * `R<score> NUL old NUL new NUL`. Copies count as added files; type changes as modified.
+ */
+export function parseNameStatus(output: string): ChangedFile[] {
+  const fields = output.split('\u0000');
+  if (fields[fields.length - 1] === '') fields.pop();
+  const files: ChangedFile[] = [];
+  for (let i = 0; i < fields.length;) {
+    const status = fields[i];
+    const letter = status.charAt(0);
+    if (letter === 'R' || letter === 'C') {
+      const previous = fields[i + 1];
+      const path = fields[i + 2];
+      if (previous === undefined || path === undefined) throw new GitError(`git diff output ends inside a ${JSON.stringify(status)} record; expected two paths`, [], null, '');
+      files.push(letter === 'R' ? { status: 'renamed', path, previousPath: previous } : { status: 'added', path, previousPath: null });
+      i += 3;
+      continue;
+    }
+    const path = fields[i + 1];
+    if (path === undefined) throw new GitError(`git diff output ends after status ${JSON.stringify(status)}; expected a path`, [], null, '');
+    if (letter === 'A') files.push({ status: 'added', path, previousPath: null });
+    else if (letter === 'M' || letter === 'T') files.push({ status: 'modified', path, previousPath: null });
+    else if (letter === 'D') files.push({ status: 'deleted', path, previousPath: null });
+    else throw new GitError(`git diff reported status ${JSON.stringify(status)} for ${JSON.stringify(path)}; expected A, M, T, D, R or C`, [], null, '');
+    i += 2;
+  }
+  return files;
+}
+
+/** A throwaway repository the CLI's demo writes commits into (never the user's checkout). */
+export interface ScratchRepository {
+  init(): Promise<void>;
+  /** Stages everything in the work tree and commits it; returns the new commit's id. */
+  commitAll(message: string): Promise<string>;
+}
+
+export function createScratchRepository(cwd: string, git = 'git'): ScratchRepository {
+  const run = (args: string[]) => new Promise<string>((resolve, reject) => {
+    execFile(git, ['-c', 'user.name=context-reach demo', '-c', 'user.email=demo@context-reach.invalid', '-c', 'commit.gpgsign=false', ...args], {
+      cwd, timeout: 30_000, maxBuffer: 1024 * 1024,
+      env: { ...process.env, GIT_TERMINAL_PROMPT: '0', LC_ALL: 'C' },
+    }, (error, stdout, stderr) => {
+      if (error) reject(new GitError(`git ${args[0]} failed in the scratch repository: ${String(stderr).split('\n')[0] || error.message}`, args, null, String(stderr)));
+      else resolve(String(stdout).trim());
+    });
+  });
+  return {
+    async init() {
+      await run(['init', '--quiet', '--initial-branch=main']);
+    },
+    async commitAll(message) {
+      await run(['add', '--all']);
+      await run(['commit', '--quiet', '--allow-empty', '--no-verify', '-m', message]);
+      return run(['rev-parse', 'HEAD']);
+    },
+  };
+}

@@ -1,0 +1,334 @@
+/**
+ * The one adapter for the GitHub REST API. Octokit with the retry plugin (5xx and connection
+ * failures, with growing waits) and the throttling plugin (primary and secondary rate limits,
+ * waiting as long as GitHub asks, within a bound). Errors leave as `ApiError`; the token never
+ * reaches a log line or an error message.
+ */
+import { getOctokit } from '@actions/github';
+import { defaults as actionsDefaults } from '@actions/github/lib/utils';
+import { retry } from '@octokit/plugin-retry';
+import { throttling } from '@octokit/plugin-throttling';
+import type { ChangedFile } from '../core/changes.js';
+import { ContentTooLargeError, MAX_CONFIG_BYTES } from './git.js';
+
+/** GitHub lists at most this many files of a pull request (REST API documentation, "List pull requests files"). */
+export const PULL_REQUEST_FILE_CAP = 3000;
+
+/** A failed API call. `status` is the HTTP status; 500 also stands for a connection failure. */
+export class ApiError extends Error {
+  constructor(readonly status: number, message: string, readonly operation: string) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+/** A 403 that is not a rate limit: the token may not do this, e.g. comment from a fork's read-only token. */
+export function isPermissionError(error: unknown): boolean {
+  return error instanceof ApiError && error.status === 403 && !/rate limit/i.test(error.message);
+}
+
+/** The resource is not there (or the token may not see it). */
+export function isNotFoundError(error: unknown): boolean {
+  return error instanceof ApiError && (error.status === 404 || error.status === 410);
+}
+
+export interface Comment {
+  id: number;
+  /** Link to the comment on github.com. */
+  url: string;
+  body: string;
+  /** Login of the author, null for a deleted account. */
+  author: string | null;
+}
+
+export interface PullRequestInfo {
+  number: number;
+  baseSha: string;
+  headSha: string;
+  labels: string[];
+  /** Head and base live in different repositories. */
+  isFork: boolean;
+  /** Files GitHub counts as changed (may exceed what the file list returns). */
+  changedFiles: number;
+}
+
+export interface PullRequestFiles {
+  files: ChangedFile[];
+  /** GitHub's list stops at `PULL_REQUEST_FILE_CAP` files; more may have changed. */
+  truncated: boolean;
+}
+
+export interface GitHubClient {
+  /** Every file of a pull request, paginated. */
+  listPullRequestFiles(owner: string, repo: string, number: number): Promise<PullRequestFiles>;
+  /**
+   * Bytes of a regular file at `ref`; null when absent, a directory, a submodule or a symlink.
+   * Throws `ContentTooLargeError` past `MAX_CONFIG_BYTES` without downloading the file.
+   */
+  getFileContent(owner: string, repo: string, path: string, ref: string): Promise<Uint8Array | null>;
+  /** The oldest comment whose body starts with `marker`, written by the action's identity. */
+  findComment(owner: string, repo: string, issueNumber: number, marker: string): Promise<Comment | null>;
+  /** A comment by id, null when it was deleted. */
+  getComment(owner: string, repo: string, commentId: number): Promise<Comment | null>;
+  createComment(owner: string, repo: string, issueNumber: number, body: string): Promise<Comment>;
+  /** Throws `ApiError` 404 when the comment is gone; the caller then creates a new one. */
+  updateComment(owner: string, repo: string, commentId: number, body: string): Promise<Comment>;
+  getPullRequest(owner: string, repo: string, number: number): Promise<PullRequestInfo>;
+}
+
+export interface ClientLog {
+  debug(message: string): void;
+  info(message: string): void;
+  warn(message: string): void;
+}
+
+export interface GitHubClientOptions {
+  /** REST API root, e.g. `GITHUB_API_URL` (default: `https://api.github.com`). */
+  baseUrl?: string;
+  log: ClientLog;
+  /**
+   * Login whose comments `findComment` may take over (default: `null`, any bot account:
+   * the workflow token comments as `github-actions[bot]`, an app token as `<app>[bot]`).
+   */
+  commentAuthor?: string | null;
+  /** Milliseconds per second of every wait GitHub asks for; tests shrink it (default: `1000`). */
+  msPerSecond?: number;
+  /** Retries of one call after 5xx answers or connection failures (default: `3`). */
+  retries?: number;
+  /** Retries after a rate limit (default: `2`). */
+  rateLimitRetries?: number;
+  /** Longest rate-limit wait honoured, in seconds; a longer one fails the call (default: `120`). */
+  maxRateLimitWaitSeconds?: number;
+  /** Time one HTTP request may take, in milliseconds (default: `30000`). */
+  requestTimeoutMs?: number;
+}
+
+type Octokit = ReturnType<typeof getOctokit>;
+
+/** Pages of comments read at most, 100 each: past that a pull request is not a place to search. */
+const MAX_COMMENT_PAGES = 100;
+
+let clientCount = 0;
+
+function toComment(data: { id: number; html_url: string; body?: string | null; user?: { login: string } | null }): Comment {
+  return { id: data.id, url: data.html_url, body: data.body ?? '', author: data.user?.login ?? null };
+}
+
+function toChangedFile(entry: { filename: string; status: string; previous_filename?: string }): ChangedFile {
+  switch (entry.status) {
+    case 'added': case 'copied': return { status: 'added', path: entry.filename, previousPath: null };
+    case 'removed': return { status: 'deleted', path: entry.filename, previousPath: null };
+    case 'renamed':
+      return { status: 'renamed', path: entry.filename, previousPath: entry.previous_filename ?? null };
+    // `modified`, `changed` (mode only) and `unchanged` all keep the path.
+    default: return { status: 'modified', path: entry.filename, previousPath: null };
+  }
+}
+
+/** Reads a response stream, refusing it past `limit` bytes rather than holding it whole. */
+async function readBounded(body: unknown, path: string, limit: number): Promise<Uint8Array> {
+  if (body instanceof ArrayBuffer) {
+    if (body.byteLength > limit) throw new ContentTooLargeError(path, body.byteLength, limit);
+    return new Uint8Array(body);
+  }
+  if (typeof body === 'string') return readBounded(new TextEncoder().encode(body).buffer as ArrayBuffer, path, limit);
+  const reader = (body as ReadableStream<Uint8Array>).getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > limit) {
+      await reader.cancel();
+      throw new ContentTooLargeError(path, total, limit);
+    }
+    chunks.push(value);
+  }
+  const bytes = new Uint8Array(total);
+  let offset = 0;
+  for (const chunk of chunks) {
+    bytes.set(chunk, offset);
+    offset += chunk.byteLength;
+  }
+  return bytes;
+}
+
+export function createGitHubClient(token: string, options: GitHubClientOptions): GitHubClient {
+  const msPerSecond = options.msPerSecond ?? 1000;
+  const rateLimitRetries = options.rateLimitRetries ?? 2;
+  const maxWait = options.maxRateLimitWaitSeconds ?? 120;
+  const timeoutMs = options.requestTimeoutMs ?? 30_000;
+  const commentAuthor = options.commentAuthor ?? null;
+
+  /** Whatever octokit or a plugin logs passes here first: the token is cut out of every line. */
+  const redact = (args: unknown[]): string => {
+    let text = args.map((arg) => (arg instanceof Error ? arg.message : typeof arg === 'string' ? arg : JSON.stringify(arg) ?? String(arg))).join(' ');
+    if (token.length >= 4) text = text.split(token).join('***');
+    return text;
+  };
+  const log = {
+    debug: (...args: unknown[]) => options.log.debug(redact(args)),
+    info: (...args: unknown[]) => options.log.info(redact(args)),
+    warn: (...args: unknown[]) => options.log.warn(redact(args)),
+    error: (...args: unknown[]) => options.log.warn(redact(args)),
+  };
+
+  const baseFetch = (actionsDefaults.request?.fetch ?? globalThis.fetch) as typeof fetch;
+  const timedFetch = (url: string | URL | Request, init?: RequestInit): Promise<Response> =>
+    baseFetch(url, { ...init, signal: init?.signal ?? AbortSignal.timeout(timeoutMs) });
+
+  const limitHandler = (kind: string) => (retryAfter: number, request: { method: string; url: string }, _octokit: unknown, retryCount: number): boolean => {
+    const retrying = retryCount < rateLimitRetries && retryAfter <= maxWait;
+    log.warn(`GitHub ${kind} on ${request.method} ${request.url}: ${retrying ? `waiting ${retryAfter} s, then retry ${retryCount + 1} of ${rateLimitRetries}` : `not retrying (asked to wait ${retryAfter} s; retries used ${retryCount} of ${rateLimitRetries}, longest wait ${maxWait} s)`}`);
+    return retrying;
+  };
+
+  clientCount += 1;
+  const octokit: Octokit = getOctokit(token, {
+    baseUrl: options.baseUrl ?? 'https://api.github.com',
+    log,
+    request: { ...actionsDefaults.request, fetch: timedFetch },
+    retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
+    throttle: {
+      // One limiter set per client: spacing between writes is per run, not shared across clients.
+      id: `context-reach-${clientCount}`,
+      retryAfterBaseValue: msPerSecond,
+      onRateLimit: limitHandler('rate limit'),
+      onSecondaryRateLimit: limitHandler('secondary rate limit'),
+    },
+  }, retry, throttling);
+
+  async function call<T>(operation: string, run: () => Promise<T>): Promise<T> {
+    try {
+      return await run();
+    } catch (error) {
+      if (error instanceof ApiError || error instanceof ContentTooLargeError) throw error;
+      const status = typeof (error as { status?: unknown }).status === 'number' ? (error as { status: number }).status : 0;
+      const reason = redact([(error as Error).message ?? String(error)]);
+      throw new ApiError(status, `GitHub API ${operation} failed${status ? ` with status ${status}` : ''}: ${reason}`, operation);
+    }
+  }
+
+  const isOurs = (comment: { body?: string | null; user?: { login: string; type?: string } | null }, marker: string): boolean => {
+    if (!(comment.body ?? '').startsWith(marker) || !comment.user) return false;
+    return commentAuthor !== null ? comment.user.login === commentAuthor : comment.user.type === 'Bot';
+  };
+
+  return {
+    listPullRequestFiles(owner, repo, number) {
+      return call(`list files of pull request #${number}`, async () => {
+        const entries = await octokit.paginate(octokit.rest.pulls.listFiles, { owner, repo, pull_number: number, per_page: 100 });
+        const files = entries.map(toChangedFile);
+        return { files, truncated: files.length >= PULL_REQUEST_FILE_CAP };
+      });
+    },
+
+    getFileContent(owner, repo, path, ref) {
+      return call(`read ${path} at ${ref}`, async () => {
+        let data: unknown;
+        try {
+          ({ data } = await octokit.rest.repos.getContent({ owner, repo, path, ref }));
+        } catch (error) {
+          if ((error as { status?: number }).status === 404) return null;
+          throw error;
+        }
+        if (Array.isArray(data) || data === null || typeof data !== 'object') return null;
+        const item = data as { type: string; path: string; size: number; encoding?: string; content?: string };
+        // GitHub answers a symlink to a file in the repository with that file: its path gives it away.
+        if (item.type !== 'file' || item.path !== path) return null;
+        if (item.size > MAX_CONFIG_BYTES) throw new ContentTooLargeError(path, item.size, MAX_CONFIG_BYTES);
+        if (item.size === 0) return new Uint8Array(0);
+        if (item.encoding === 'base64' && item.content) {
+          const bytes = Buffer.from(item.content, 'base64');
+          if (bytes.byteLength > MAX_CONFIG_BYTES) throw new ContentTooLargeError(path, bytes.byteLength, MAX_CONFIG_BYTES);
+          return new Uint8Array(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+        }
+        // Files over 1 MB come without content (encoding "none"); the raw media type carries them.
+        const raw = await octokit.rest.repos.getContent({
+          owner, repo, path, ref, mediaType: { format: 'raw' }, request: { parseSuccessResponseBody: false },
+        });
+        return readBounded(raw.data, path, MAX_CONFIG_BYTES);
+      });
+    },
+
+    findComment(owner, repo, issueNumber, marker) {
+      return call(`list comments of #${issueNumber}`, async () => {
+        let pages = 0;
+        for await (const page of octokit.paginate.iterator(octokit.rest.issues.listComments, { owner, repo, issue_number: issueNumber, per_page: 100 })) {
+          const found = page.data.find((comment) => isOurs(comment, marker));
+          if (found) return toComment(found);
+          pages += 1;
+          if (pages >= MAX_COMMENT_PAGES) {
+            log.warn(`Stopped looking for the report comment after ${pages * 100} comments on #${issueNumber}.`);
+            break;
+          }
+        }
+        return null;
+      });
+    },
+
+    getComment(owner, repo, commentId) {
+      return call(`read comment ${commentId}`, async () => {
+        try {
+          const { data } = await octokit.rest.issues.getComment({ owner, repo, comment_id: commentId });
+          return toComment(data);
+        } catch (error) {
+          if ((error as { status?: number }).status === 404) return null;
+          throw error;
+        }
+      });
+    },
+
+    createComment(owner, repo, issueNumber, body) {
+      return call(`create a comment on #${issueNumber}`, async () => {
+        const { data } = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body });
+        return toComment(data);
+      });
+    },
+
+    updateComment(owner, repo, commentId, body) {
+      return call(`update comment ${commentId}`, async () => {
+        const { data } = await octokit.rest.issues.updateComment({ owner, repo, comment_id: commentId, body });
+        return toComment(data);
+      });
+    },
+
+    getPullRequest(owner, repo, number) {
+      return call(`read pull request #${number}`, async () => {
+        const { data } = await octokit.rest.pulls.get({ owner, repo, pull_number: number });
+        return {
+          number: data.number,
+          baseSha: data.base.sha,
+          headSha: data.head.sha,
+          labels: data.labels.map((label) => label.name),
+          isFork: data.head.repo === null || data.head.repo.full_name !== data.base.repo.full_name,
+          changedFiles: data.changed_files,
+        };
+      });
+    },
+  };
+}
+
+/**
+ * Keeps exactly one report comment: updates the one found by `marker`, creates one when there
+ * is none or the found one is gone (404, or 422 when a fresh read confirms it is gone).
+ */
+export async function publishComment(
+  client: GitHubClient,
+  target: { owner: string; repo: string; issueNumber: number; marker: string; body: string },
+): Promise<{ comment: Comment; action: 'created' | 'updated' }> {
+  const { owner, repo, issueNumber, marker, body } = target;
+  const existing = await client.findComment(owner, repo, issueNumber, marker);
+  if (existing) {
+    try {
+      return { comment: await client.updateComment(owner, repo, existing.id, body), action: 'updated' };
+    } catch (error) {
+      if (!(error instanceof ApiError)) throw error;
+      const gone = isNotFoundError(error)
+        || (error.status === 422 && (await client.getComment(owner, repo, existing.id)) === null);
+      if (!gone) throw error;
+    }
+  }
+  return { comment: await client.createComment(owner, repo, issueNumber, body), action: 'created' };
+}

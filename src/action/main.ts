@@ -1,0 +1,23 @@
+import * as core from '@actions/core';
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { dirname } from 'node:path';
+import { createGitReader } from './git.js';
+import { createGitHubClient } from './github.js';
+import { runAction } from './run-action.js';
+import { createRunnerOutput } from './runner-output.js';
+
+// The entry only wires the real adapters to the action; errors become one failed-check message.
+runAction({
+  env: process.env,
+  getInput: (name) => core.getInput(name),
+  out: createRunnerOutput(),
+  readJson: async (path) => JSON.parse(await readFile(path, 'utf8')) as unknown,
+  writeFile: async (path, text) => {
+    await mkdir(dirname(path), { recursive: true });
+    await writeFile(path, text);
+  },
+  createGit: (cwd) => createGitReader(cwd),
+  createGitHub: (token, options) => createGitHubClient(token, options),
+}).catch((error: unknown) => {
+  core.setFailed(`context-reach failed: ${error instanceof Error ? error.message : String(error)}`);
+});

@@ -1,0 +1,140 @@
+import type { ChangedFile } from '../core/changes.js';
+import type { GateReport, Verdict } from '../core/compare/decide.js';
+import { runGate, type ContentSource } from '../core/gate.js';
+import { planAnnotations } from '../core/render/annotations.js';
+import { renderComment } from '../core/render/comment.js';
+import { renderGateJson } from '../core/render/gate-json.js';
+import { COMMENT_MARKER } from '../core/render/notice.js';
+import { renderSarif } from '../core/render/sarif.js';
+import { VERSION } from '../core/version.js';
+import { parseEvent, type EventInfo } from './event.js';
+import type { GitReader } from './git.js';
+import { isPermissionError, publishComment, type GitHubClient, type GitHubClientOptions } from './github.js';
+import { readSettings, type GetInput, type Settings } from './inputs.js';
+import { SUMMARY_LIMIT, type RunnerOutput } from './runner-output.js';
+
+/** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
+export interface ActionDeps {
+  env: Readonly<Record<string, string | undefined>>;
+  getInput: GetInput;
+  out: RunnerOutput;
+  readJson(path: string): Promise<unknown>;
+  writeFile(path: string, text: string): Promise<void>;
+  createGit(cwd: string): GitReader;
+  createGitHub(token: string, options: GitHubClientOptions): GitHubClient;
+}
+
+export const FORK_NOTICE = 'The token cannot comment on this pull request (a read-only token, as pull requests from forks get). The report is in the job summary and the annotations, and the verdict still decides the check. To get the comment on fork pull requests, use the two-workflow recipe in the README ("Pull requests from forks").';
+
+interface Changes {
+  base: string;
+  head: string;
+  changes: ChangedFile[];
+  source: ContentSource;
+  notices: string[];
+}
+
+/** Base and head, the changed files and a way to read them: local git when it has both commits, else the REST API. */
+async function gatherChanges(event: EventInfo, base: string, git: GitReader, api: GitHubClient | null): Promise<Changes> {
+  const [baseSha, headSha] = await Promise.all([git.resolveCommit(base), git.resolveCommit(event.head)]);
+  if (baseSha !== null && headSha !== null) {
+    return {
+      base: baseSha, head: headSha, changes: await git.changedFiles(baseSha, headSha),
+      source: { read: (ref, path) => git.show(ref, path) }, notices: [],
+    };
+  }
+  if (api === null || event.pullNumber === null) {
+    throw new Error(`The checkout lacks commit ${baseSha === null ? base : event.head} and there is ${api === null ? 'no token' : 'no pull request'} to ask the API instead; check out with fetch-depth: 0, or give a base input that exists.`);
+  }
+  const listed = await api.listPullRequestFiles(event.owner, event.repo, event.pullNumber);
+  const notices = listed.truncated
+    ? [`GitHub lists only the first 3,000 files of a pull request and this one has more; files past that were not judged. Check out with fetch-depth: 0 so the action can read the whole change from git.`]
+    : [];
+  return {
+    base, head: event.head, changes: listed.files,
+    source: { read: (ref, path) => api.getFileContent(event.owner, event.repo, path, ref) }, notices,
+  };
+}
+
+function failsCheck(verdict: Verdict, failOn: Settings['failOn']): boolean {
+  if (failOn === 'never') return false;
+  return verdict === 'block' || (failOn === 'warn' && verdict === 'warn');
+}
+
+function setOutputs(out: RunnerOutput, report: Pick<GateReport, 'verdict' | 'blocking' | 'warnings'>, reportPath: string, commentUrl: string): void {
+  out.output('verdict', report.verdict);
+  out.output('blocking', String(report.blocking));
+  out.output('warnings', String(report.warnings));
+  out.output('report-json', reportPath);
+  out.output('comment-url', commentUrl);
+}
+
+/** The action: settings, event, changes, one decision, then summary, annotations, files, comment, outputs. */
+export async function runAction(deps: ActionDeps): Promise<void> {
+  const { env, out } = deps;
+  const settings = readSettings(deps.getInput, env);
+  if (settings.token) out.secret(settings.token);
+
+  const payload = env.GITHUB_EVENT_PATH ? await deps.readJson(env.GITHUB_EVENT_PATH) : {};
+  const event = parseEvent(env.GITHUB_EVENT_NAME ?? '', payload, settings.base, env.GITHUB_SHA);
+  if (event.base === null) {
+    out.notice('This event has no base commit to compare with (a new branch\'s first push): nothing was judged. Give the base input to compare against a ref.');
+    setOutputs(out, { verdict: 'ok', blocking: 0, warnings: 0 }, '', '');
+    return;
+  }
+  const api = settings.token
+    ? deps.createGitHub(settings.token, { baseUrl: env.GITHUB_API_URL, log: { debug: () => {}, info: (m) => out.info(m), warn: (m) => out.warning(m) } })
+    : null;
+  const git = deps.createGit(env.GITHUB_WORKSPACE ?? '.');
+  const gathered = await gatherChanges(event, event.base, git, api);
+
+  let labels = event.labels;
+  if (api && event.pullNumber !== null) {
+    // Labels added after the event (the usual way to apply a waiver) count on a re-run.
+    labels = await api.getPullRequest(event.owner, event.repo, event.pullNumber).then((pr) => pr.labels, () => event.labels);
+  }
+
+  let report: GateReport;
+  try {
+    report = await runGate(gathered.source, {
+      base: gathered.base, head: gathered.head, changes: gathered.changes, policyPath: settings.policyPath,
+      labels, notices: gathered.notices,
+    });
+  } catch (error) {
+    // A policy that cannot be read fails closed: the check fails and says where.
+    const message = `context-reach could not judge this change: ${error instanceof Error ? error.message : String(error)}`;
+    setOutputs(out, { verdict: 'block', blocking: 1, warnings: 0 }, '', '');
+    out.fail(message);
+    return;
+  }
+
+  const server = env.GITHUB_SERVER_URL ?? 'https://github.com';
+  const blobUrl = `${server}/${event.owner}/${event.repo}/blob/${gathered.head}`;
+  const { annotations, omitted } = planAnnotations(report);
+  for (const annotation of annotations) out.annotate(annotation);
+
+  await deps.writeFile(settings.reportJson, renderGateJson(report));
+  if (settings.sarif) await deps.writeFile(settings.sarif, renderSarif(report, VERSION));
+
+  let commentUrl = '';
+  let forkNotice = false;
+  if (settings.comment === 'update' && event.pullNumber !== null && api) {
+    const body = renderComment(report, { blobUrl, unannotated: omitted });
+    try {
+      const published = await publishComment(api, { owner: event.owner, repo: event.repo, issueNumber: event.pullNumber, marker: COMMENT_MARKER, body });
+      commentUrl = published.comment.url;
+      out.info(`${published.action === 'created' ? 'Created' : 'Updated'} the report comment: ${commentUrl}`);
+    } catch (error) {
+      if (!isPermissionError(error)) throw error;
+      forkNotice = true;
+      out.notice(FORK_NOTICE);
+    }
+  }
+  const summaryReport = forkNotice ? { ...report, notices: [...report.notices, FORK_NOTICE] } : report;
+  await out.summary(renderComment(summaryReport, { blobUrl, unannotated: omitted, limit: SUMMARY_LIMIT - 1024 }));
+  setOutputs(out, report, settings.reportJson, commentUrl);
+  out.info(`context-reach verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings)`);
+  if (failsCheck(report.verdict, settings.failOn)) {
+    out.fail(`context-reach: ${report.verdict === 'block' ? `${report.blocking} blocking finding${report.blocking === 1 ? '' : 's'}` : `${report.warnings} warning${report.warnings === 1 ? '' : 's'}`} (fail-on: ${settings.failOn}). See the job summary.`);
+  }
+}

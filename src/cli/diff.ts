@@ -1,0 +1,81 @@
+import { parseArgs } from 'node:util';
+import { runGate } from '../core/gate.js';
+import { renderComment } from '../core/render/comment.js';
+import { renderDiffText } from '../core/render/diff-text.js';
+import { renderGateJson } from '../core/render/gate-json.js';
+import type { GateReport } from '../core/compare/decide.js';
+import { createGitReader, type GitReader } from '../action/git.js';
+import type { Console } from './console.js';
+import { SERVING_FLAGS, UsageError, servingPatch } from './options.js';
+import { terminalStyle } from './terminal.js';
+
+export const DIFF_USAGE = `usage: context-reach diff [--base REF] [--head REF] [--policy FILE]
+       [--format text|markdown|json] [--fail-on block|warn|never] [--label NAME]...
+       [--served-span N] [--sequences N] [--device-gib G] [--cache-dtype D] ...`;
+
+const FORMATS = ['text', 'markdown', 'json'] as const;
+const FAIL_ON = ['block', 'warn', 'never'] as const;
+
+/** Exit status for a verdict under `--fail-on`: 1 fails the check, 0 passes it. */
+export function exitStatus(report: GateReport, failOn: (typeof FAIL_ON)[number]): number {
+  if (failOn === 'never') return 0;
+  if (report.verdict === 'block') return 1;
+  return failOn === 'warn' && report.verdict === 'warn' ? 1 : 0;
+}
+
+export function renderReport(report: GateReport, format: (typeof FORMATS)[number], io: Console): string {
+  if (format === 'json') return renderGateJson(report);
+  if (format === 'markdown') return renderComment(report);
+  return renderDiffText(report, terminalStyle(io.stdout, io.env));
+}
+
+async function commitOf(git: GitReader, rev: string, flag: string): Promise<string> {
+  const sha = await git.resolveCommit(rev);
+  if (sha === null) throw new UsageError(`${flag} ${rev} names no commit in this repository`);
+  return sha;
+}
+
+/**
+ * Without `--base`: where the branch left the main line (the first of origin/HEAD, origin/main,
+ * origin/master, main, master that exists), or the parent commit when already on it.
+ */
+async function defaultBase(git: GitReader, head: string): Promise<string> {
+  for (const candidate of ['origin/HEAD', 'origin/main', 'origin/master', 'main', 'master']) {
+    const tip = await git.resolveCommit(candidate);
+    if (tip === null) continue;
+    const fork = await git.mergeBase(head, tip);
+    if (fork !== null && fork !== head) return fork;
+  }
+  const parent = await git.resolveCommit(`${head}~1`);
+  if (parent === null) throw new UsageError('no base to compare with: give --base REF');
+  return parent;
+}
+
+/** `diff`: the gate's decision between two commits of the git checkout in the working folder. */
+export async function runDiff(args: string[], io: Console): Promise<number> {
+  const { values } = parseArgs({
+    args, allowPositionals: false, strict: true,
+    options: {
+      base: { type: 'string' }, head: { type: 'string' }, policy: { type: 'string' },
+      format: { type: 'string' }, 'fail-on': { type: 'string' }, label: { type: 'string', multiple: true },
+      ...SERVING_FLAGS,
+    },
+  });
+  const format = (values.format ?? 'text') as (typeof FORMATS)[number];
+  if (!FORMATS.includes(format)) throw new UsageError(`--format takes one of ${FORMATS.join(', ')}, got '${values.format}'`);
+  const failOn = (values['fail-on'] ?? 'block') as (typeof FAIL_ON)[number];
+  if (!FAIL_ON.includes(failOn)) throw new UsageError(`--fail-on takes one of ${FAIL_ON.join(', ')}, got '${values['fail-on']}'`);
+
+  const git = createGitReader(io.cwd);
+  const head = await commitOf(git, values.head ?? 'HEAD', '--head');
+  const base = values.base !== undefined ? await commitOf(git, values.base, '--base') : await defaultBase(git, head);
+  const changes = await git.changedFiles(base, head);
+  const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
+    base, head, changes,
+    policyPath: values.policy ?? '.github/context-reach.yml',
+    labels: values.label ?? [],
+    overrides: servingPatch(values),
+  });
+  io.out(renderReport(report, format, io));
+  return exitStatus(report, failOn);
+}

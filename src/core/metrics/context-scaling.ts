@@ -1,0 +1,109 @@
+/**
+ * Context scaling of rotary frequencies, `θ_i → θ'_i` (METRICS.md, symbol `θ'_i`).
+ */
+import type { Scaling } from '../model.js';
+import { allPositiveFinite } from './frequencies.js';
+import { positiveFinite } from './sizes.js';
+
+/** yarn ramp start `α` for the Llama family (Peng et al. 2023, YaRN, §3.2). */
+export const YARN_ALPHA = 1;
+/** yarn ramp end `β` for the Llama family (Peng et al. 2023, YaRN, §3.2). */
+export const YARN_BETA = 32;
+
+/**
+ * base: NTK-aware base `b' = b s^(r/(r-2))` (Peng et al. 2023, YaRN, §3.1, Eq. 16); null when
+ * `r <= 2` or the result is not finite.
+ */
+export function ntkBase(base: number, factor: number, r: number): number | null {
+  if (positiveFinite(base) === null || positiveFinite(factor) === null || !(r > 2)) return null;
+  return positiveFinite(base * Math.pow(factor, r / (r - 2)));
+}
+
+/**
+ * ratio: yarn ramp `γ = clamp((ρ - α)/(β - α), 0, 1)` of `ρ = L0/λ` (Peng et al. 2023, YaRN,
+ * Eq. 18; METRICS.md takes `λ` from the unscaled frequencies); null when `α = β`.
+ */
+export function yarnRamp(rho: number, alpha: number, beta: number): number | null {
+  if (!Number.isFinite(alpha) || !Number.isFinite(beta) || alpha === beta || Number.isNaN(rho)) return null;
+  const g = (rho - alpha) / (beta - alpha);
+  return g < 0 ? 0 : g > 1 ? 1 : g;
+}
+
+/**
+ * ratio: softmax temperature factor `0.1 ln(s) + 1` (Peng et al. 2023, YaRN, Eq. 22); null for a
+ * factor that is not a positive finite number.
+ */
+export function yarnAttentionScale(factor: number): number | null {
+  return positiveFinite(factor) === null ? null : 0.1 * Math.log(factor) + 1;
+}
+
+/**
+ * factor: effective scaling factor `s`: the configured factor; `max(1, T/L0)` for dynamic
+ * scaling (Peng et al. 2023, YaRN, §3.3).
+ */
+export function effectiveFactor(scaling: Scaling, span: number | null, trained: number | null): number | null {
+  if (scaling.kind === 'dynamic') {
+    if (span === null || trained === null) return null;
+    return Math.max(1, span / trained);
+  }
+  return positiveFinite(scaling.factor);
+}
+
+/**
+ * per token: scaled frequencies `θ'_i` (METRICS.md): linear `θ/s` (Chen et al. 2023, eq. 4);
+ * ntk and dynamic `b'^(-2i/r)` (Peng et al. 2023, Eq. 16 and §3.3); yarn `(1-γ)θ/s + γθ`
+ * (Peng et al. 2023, Eqs. 17–20); banded: common practice. No scaling: `θ` itself.
+ * `span` is `T`, `trained` is `L0`; null for degenerate input.
+ */
+export function scaleFrequencies(
+  theta: Float64Array,
+  base: number,
+  r: number,
+  scaling: Scaling | null,
+  span: number | null,
+  trained: number | null,
+): Float64Array | null {
+  if (scaling === null) return theta;
+  const s = effectiveFactor(scaling, span, trained);
+  if (s === null) return null;
+  const out = new Float64Array(theta.length);
+  switch (scaling.kind) {
+    case 'linear':
+      for (let i = 0; i < theta.length; i++) out[i] = theta[i] / s;
+      break;
+    case 'ntk':
+    case 'dynamic': {
+      const b = ntkBase(base, s, r);
+      if (b === null) return null;
+      for (let i = 0; i < theta.length; i++) out[i] = Math.pow(b, (-2 * i) / r);
+      break;
+    }
+    case 'yarn': {
+      if (trained === null) return null;
+      for (let i = 0; i < theta.length; i++) {
+        const rho = trained / ((2 * Math.PI) / theta[i]);
+        const g = yarnRamp(rho, scaling.alpha, scaling.beta);
+        if (g === null) return null;
+        out[i] = ((1 - g) * theta[i]) / s + g * theta[i];
+      }
+      break;
+    }
+    case 'banded': {
+      const { low, high } = scaling;
+      if (trained === null || !(Number.isFinite(low) && Number.isFinite(high) && low >= 0 && high > low)) return null;
+      for (let i = 0; i < theta.length; i++) {
+        const lambda = (2 * Math.PI) / theta[i];
+        if (lambda < trained / high) out[i] = theta[i];
+        else if (lambda > trained / low) out[i] = theta[i] / s;
+        else {
+          const g = (trained / lambda - low) / (high - low);
+          out[i] = ((1 - g) * theta[i]) / s + g * theta[i];
+        }
+      }
+      break;
+    }
+    default:
+      return null;
+  }
+  return allPositiveFinite(out) ? out : null;
+}

@@ -1,0 +1,61 @@
+/**
+ * Frequency pairs of a position code before any context scaling (METRICS.md, symbols `P`, `θ_i`).
+ */
+import type { ModelSpec } from '../model.js';
+import { positiveCount, positiveFinite } from './sizes.js';
+
+/**
+ * count: most frequency pairs any scan accepts; wider codes are degenerate input and give null
+ * frequency metrics rather than exhausting memory (no published code comes near: heads are a
+ * few hundred wide at most).
+ */
+export const MAX_PAIRS = 65536;
+
+/** Sinusoidal base `10000` (Vaswani et al. 2017, §3.5). */
+export const SINUSOIDAL_BASE = 10000;
+
+/**
+ * dimensions: rotated width `r = 2 floor(headDim * fraction / 2)` (Su et al. 2021, RoFormer,
+ * §3.2.2, with the partial-rotation fraction of common practice); null for degenerate input.
+ */
+export function rotaryWidth(headDim: number, fraction: number): number | null {
+  const width = positiveCount(headDim);
+  if (width === null || !(fraction > 0 && fraction <= 1)) return null;
+  const r = 2 * Math.floor((width * fraction) / 2);
+  return r >= 2 && r / 2 <= MAX_PAIRS ? r : null;
+}
+
+/**
+ * per token: `θ_i = base^(-2i/d)`, `i = 0..P-1`, `P = d/2` (Vaswani et al. 2017 §3.5 with
+ * base 10000 and `d = d_model`; Su et al. 2021, RoFormer, eq. 15 with `d = r`).
+ */
+export function geometricFrequencies(base: number, d: number): Float64Array | null {
+  if (positiveFinite(base) === null || positiveCount(d) === null || d % 2 !== 0 || d / 2 > MAX_PAIRS) return null;
+  const pairs = d / 2;
+  const theta = new Float64Array(pairs);
+  for (let i = 0; i < pairs; i++) theta[i] = Math.pow(base, (-2 * i) / d);
+  return allPositiveFinite(theta) ? theta : null;
+}
+
+/**
+ * per token: the unscaled frequencies `θ_i` of the spec's code: sinusoidal over `hidden`
+ * (odd widths are degenerate), rotary over `r`; null for learned, ALiBi and position-free codes.
+ */
+export function baseFrequencies(spec: ModelSpec): Float64Array | null {
+  const code = spec.position;
+  if (code?.kind === 'sinusoidal') return geometricFrequencies(SINUSOIDAL_BASE, spec.hidden);
+  if (code?.kind === 'rotary') {
+    const r = rotaryWidth(spec.headDim, code.fraction);
+    return r === null ? null : geometricFrequencies(code.base, r);
+  }
+  return null;
+}
+
+/** True when every entry is finite and above zero (a frequency of zero never turns). */
+export function allPositiveFinite(values: Float64Array): boolean {
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (!(v > 0 && v < Infinity)) return false;
+  }
+  return values.length > 0;
+}

@@ -1,0 +1,47 @@
+/**
+ * How far a position scheme reaches and how the served span compares (METRICS.md: `reach`,
+ * `scalingCover`, `headroom`, `extensionRatio`).
+ */
+import type { ModelSpec } from '../model.js';
+import { positiveFinite } from './sizes.js';
+
+/** factor: the configured rotary scaling factor `s` (1 without scaling); null when degenerate. */
+export function scalingFactor(spec: ModelSpec): number | null {
+  const code = spec.position;
+  if (code?.kind !== 'rotary' || code.scaling === null || code.scaling === undefined) return 1;
+  return positiveFinite(code.scaling.factor);
+}
+
+/**
+ * tokens: `reach`: a learned table's size; otherwise `L0·factor`, and when the trained span was
+ * not stated explicitly at least `declaredSpan` (METRICS.md).
+ */
+export function reach(spec: ModelSpec, trained: number | null, declared: number | null): number | null {
+  if (spec.position?.kind === 'learned') return declared;
+  const factor = scalingFactor(spec);
+  if (trained === null || factor === null) return null;
+  const r = trained * factor;
+  if (!Number.isFinite(r)) return null;
+  if (spec.trainedSpan !== null && spec.trainedSpan !== undefined) return r;
+  return declared === null ? null : Math.max(r, declared);
+}
+
+/** tokens: `scalingCover = L0·factor` for scaled rotary codes; null otherwise. */
+export function scalingCover(spec: ModelSpec, trained: number | null): number | null {
+  const code = spec.position;
+  if (code?.kind !== 'rotary' || !code.scaling || trained === null) return null;
+  const factor = scalingFactor(spec);
+  if (factor === null) return null;
+  const c = trained * factor;
+  return Number.isFinite(c) ? c : null;
+}
+
+/** tokens: `headroom = reach - T` (negative: the span goes past what the scheme supports). */
+export function headroom(reachTokens: number | null, span: number | null): number | null {
+  return reachTokens === null || span === null ? null : reachTokens - span;
+}
+
+/** ratio: `extensionRatio = T / L0`. */
+export function extensionRatio(span: number | null, trained: number | null): number | null {
+  return span === null || trained === null ? null : span / trained;
+}

@@ -1,0 +1,438 @@
+/**
+ * Checkpoint-style configs: the `config.json` keys widely used by published open models
+ * (`hidden_size`, `num_hidden_layers`, `rope_theta`, `rope_scaling`, …), including the compact
+ * GPT-2 keys (`n_embd`, `n_layer`, …), encoder-decoder keys (`d_model`, `encoder_layers`, …) and
+ * the T5 keys (`num_layers`, `d_kv`, `d_ff`). `null` means "not set", as those files write it.
+ *
+ * Where a file is silent, these choices apply (each is a documented default, and a guessed
+ * position code is reported as `position-code-assumed`):
+ * - Position code, first match: `position_embedding_type` (absolute → learned, sinusoidal, rotary,
+ *   alibi, none; relative_key / relative_key_query → none, reported as assumed); `alibi: true` (also
+ *   under `attn_config`); `sinusoidal_pos_embds: true`; any rotary key (`rope_theta`,
+ *   `rotary_emb_base`, `rope_parameters`, `rope_scaling`, `partial_rotary_factor`, `rotary_pct`,
+ *   `rotary_dim`) → rotary; otherwise the code of the `model_type` family in the tables below
+ *   (rotary families without `rope_theta` get base 10000, reported as assumed); otherwise GPT-2
+ *   compact keys → learned; otherwise none, reported as assumed.
+ * - Gated feed-forward: the activation (`hidden_act`, `hidden_activation`, `activation_function`,
+ *   `dense_act_fn`) is one that gated models are configured with: silu, swish, swiglu, geglu,
+ *   reglu; or T5's `feed_forward_proj` starts with `gated-`; or the `model_type` is one whose
+ *   block is always gated (GATED_FAMILIES: Llama, Mistral, Qwen, Gemma, … — Gemma writes
+ *   `gelu_pytorch_tanh`, which non-gated models use too, so the name alone is not enough).
+ * - Output matrix tied unless `tie_word_embeddings` is false (the checkpoint libraries' default).
+ * - Biases: `attention_bias`, `mlp_bias`, `bias` or `use_bias` when stated; otherwise on for the
+ *   families listed in BIAS_FAMILIES and for GPT-2 style configs, off for the rest.
+ * - Sliding window: `sliding_window` unless `use_sliding_window` is false (Qwen families default it
+ *   to false when absent); `layer_types` counts the windowed layers; `max_window_layers` marks
+ *   the first windowed layer (layers at that index and above use the window, as the Qwen code does).
+ * - Weight format: `dtype` or `torch_dtype` (float32 → fp32, bfloat16 → bf16, float16 → fp16).
+ * - Embedding multiplier: `scale_embedding: true` → sqrt(hidden); Gemma families → sqrt(hidden).
+ */
+import type { StorageDType } from '../model.js';
+import type { FieldReader } from './fields.js';
+import type { PathSegment } from './quote.js';
+import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
+import {
+  DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_ROTARY_BASE, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA, isCount,
+} from './spec-defaults.js';
+import type { SourceMapping, SourceValue } from './source.js';
+
+/** Keys whose presence marks a mapping as a checkpoint-style model config. */
+export const CHECKPOINT_MARKERS: readonly string[] = [
+  'hidden_size', 'num_hidden_layers', 'num_attention_heads', 'n_embd', 'n_layer', 'n_head', 'd_model',
+  'encoder_layers', 'decoder_layers', 'num_layers', 'num_heads',
+];
+
+/** Activations gated feed-forward configs are written with. */
+export const GATED_ACTIVATIONS: readonly string[] = ['silu', 'swish', 'swiglu', 'geglu', 'reglu'];
+
+const ROTARY_FAMILIES = new Set([
+  'llama', 'mistral', 'mixtral', 'qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe', 'gemma', 'gemma2', 'gemma3_text', 'phi',
+  'phi3', 'gpt_neox', 'gptj', 'stablelm', 'starcoder2', 'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2',
+  'deepseek_v3', 'granite', 'falcon',
+]);
+const LEARNED_FAMILIES = new Set([
+  'gpt2', 'gpt_bigcode', 'gpt_neo', 'opt', 'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra',
+  'bart', 'mbart', 'biogpt', 'blenderbot', 'whisper',
+]);
+const SINUSOIDAL_FAMILIES = new Set(['marian', 'fsmt', 'pegasus', 'm2m_100', 'xglm', 'speech_to_text']);
+const ALIBI_FAMILIES = new Set(['bloom', 'mpt']);
+/** Families with relative position biases, which no modelled code describes. */
+const RELATIVE_FAMILIES = new Set(['t5', 'mt5', 'umt5', 'longt5', 'switch_transformers', 'deberta', 'deberta-v2']);
+const BIAS_FAMILIES = new Set([
+  'gpt2', 'gpt_bigcode', 'gpt_neo', 'opt', 'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra',
+  'bart', 'mbart', 'biogpt', 'blenderbot', 'whisper', 'marian', 'fsmt', 'pegasus', 'm2m_100', 'xglm', 'bloom',
+  'gpt_neox', 'phi',
+]);
+const ENCODER_DECODER_FAMILIES = new Set([
+  't5', 'mt5', 'umt5', 'longt5', 'switch_transformers', 'bart', 'mbart', 'marian', 'pegasus', 'm2m_100', 'fsmt',
+  'blenderbot', 'whisper', 'speech_to_text',
+]);
+const GEMMA_FAMILIES = new Set(['gemma', 'gemma2', 'gemma3_text']);
+/** Families whose feed-forward block is always gated (three matrices), whatever activation the file names. */
+const GATED_FAMILIES = new Set([
+  'llama', 'mistral', 'mixtral', 'qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe', 'gemma', 'gemma2', 'gemma3_text', 'phi3',
+  'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2', 'deepseek_v3', 'granite',
+]);
+/** Families whose config class turns the window off unless `use_sliding_window` is true. */
+const WINDOW_OFF_FAMILIES = new Set(['qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe']);
+
+const POSITION_TYPES: Readonly<Record<string, PositionDraft['kind']>> = {
+  absolute: 'learned', learned: 'learned', sinusoidal: 'sinusoidal', rotary: 'rotary', rope: 'rotary', alibi: 'alibi', none: 'none',
+};
+const RELATIVE_POSITION_TYPES = new Set(['relative_key', 'relative_key_query']);
+
+/** `rope_type` / `type` of a scaling block to our kind; `default` is no scaling. */
+const SCALING_TYPES: Readonly<Record<string, ScalingDraft['kind'] | 'default'>> = {
+  default: 'default', linear: 'linear', dynamic: 'dynamic', yarn: 'yarn', llama3: 'banded',
+};
+
+const DTYPES: Readonly<Record<string, StorageDType>> = { float32: 'fp32', bfloat16: 'bf16', float16: 'fp16' };
+
+const ROTARY_KEYS = ['rope_theta', 'rotary_emb_base', 'rope_parameters', 'rope_scaling', 'partial_rotary_factor', 'rotary_pct', 'rotary_dim'];
+
+function isMapping(v: SourceValue | undefined): v is SourceMapping {
+  return v !== null && v !== undefined && typeof v === 'object' && !Array.isArray(v);
+}
+
+/** Whether `value` looks like a checkpoint-style model config. */
+export function isCheckpointConfig(value: SourceMapping): boolean {
+  return CHECKPOINT_MARKERS.some((k) => Object.prototype.hasOwnProperty.call(value, k) && value[k] !== null);
+}
+
+/** Reads a checkpoint-style config from `r.root` into a draft; every problem becomes a finding on `r`. */
+export function readCheckpoint(r: FieldReader): SpecDraft {
+  const modelType = typeof r.get(['model_type']) === 'string' ? String(r.get(['model_type'])).toLowerCase() : null;
+  const gpt2Style = r.has(['n_embd']) || r.has(['n_layer']);
+  const encoderDecoder = r.get(['is_encoder_decoder']) === true || r.has(['encoder_layers']) || r.has(['num_decoder_layers'])
+    || (modelType !== null && ENCODER_DECODER_FAMILIES.has(modelType));
+
+  const size = (field: string, candidates: string[], what: string, required: boolean): number | undefined => {
+    const path = r.first(candidates.map((k) => [k]));
+    if (path !== null) return r.count(field, path, what);
+    if (!required) return undefined;
+    const also = candidates.length > 1 ? ` (read from ${candidates.join(', ')}, the first present)` : '';
+    return r.missing([candidates[0]], `${what}${also}`);
+  };
+
+  const hidden = size('hidden', ['hidden_size', 'n_embd', 'd_model'], 'the model width', true)!;
+  const layers = size('layers', encoderDecoder
+    ? ['decoder_layers', 'num_decoder_layers', 'num_layers', 'num_hidden_layers', 'n_layer']
+    : ['num_hidden_layers', 'n_layer', 'num_layers'], encoderDecoder ? 'the number of decoder layers' : 'the number of layers', true)!;
+  const heads = size('heads', encoderDecoder
+    ? ['decoder_attention_heads', 'num_heads', 'num_attention_heads', 'n_head']
+    : ['num_attention_heads', 'n_head', 'num_heads'], 'the number of attention heads', true)!;
+  let kvHeads = size('kvHeads', ['num_key_value_heads', 'num_kv_heads', 'n_head_kv'], 'key/value heads', false);
+  if (kvHeads === undefined && r.get(['multi_query']) === true) {
+    r.locate('kvHeads', ['multi_query']);
+    kvHeads = 1;
+  }
+  const headDim = size('headDim', ['head_dim', 'd_kv'], 'the width of one head', false);
+  const ffn = size('ffn', encoderDecoder
+    ? ['decoder_ffn_dim', 'd_ff', 'intermediate_size', 'ffn_dim']
+    : ['intermediate_size', 'n_inner', 'ffn_dim', 'd_ff'], 'the feed-forward width', false);
+  const vocab = size('vocab', ['vocab_size'], 'the vocabulary size', true)!;
+  const declaredSpan = size('declaredSpan', ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length'], 'the maximum positions', true)!;
+
+  const encoder = encoderDecoder
+    ? {
+        layers: size('encoder.layers', ['encoder_layers', 'num_layers'], 'the number of encoder layers', true)!,
+        heads: size('encoder.heads', ['encoder_attention_heads', 'num_heads'], 'the number of encoder heads', true)!,
+        headDim: size('encoder.headDim', ['d_kv'], 'the width of one head', false),
+        ffn: size('encoder.ffn', ['encoder_ffn_dim', 'd_ff'], 'the encoder feed-forward width', false),
+      }
+    : null;
+
+  const experts = readExperts(r, size);
+  const position = readPosition(r, modelType, gpt2Style, headDim ?? (isCount(hidden) && isCount(heads) ? hidden / heads : NaN));
+  const window = readWindow(r, modelType, layers);
+
+  return {
+    name: null,
+    layers,
+    hidden,
+    heads,
+    kvHeads,
+    headDim,
+    ffn,
+    gated: readGated(r, modelType),
+    vocab,
+    tied: r.flag('tied', ['tie_word_embeddings']),
+    bias: readBias(r, modelType, gpt2Style),
+    experts,
+    encoder,
+    position,
+    declaredSpan,
+    trainedSpan: null,
+    slidingWindow: window.size,
+    windowLayers: window.layers,
+    dtypes: { weights: readWeights(r), cache: null, positions: null },
+    embeddingInitStd: r.real('embeddingInitStd', ['initializer_range'], 'standard deviation', {
+      test: (n) => n > 0,
+      expected: 'a standard deviation above 0',
+    }) ?? null,
+    embeddingMultiplier: readMultiplier(r, modelType, hidden),
+  };
+}
+
+type SizeReader = (field: string, candidates: string[], what: string, required: boolean) => number | undefined;
+
+function readExperts(r: FieldReader, size: SizeReader): SpecDraft['experts'] {
+  const totalKeys = ['num_local_experts', 'num_experts', 'n_routed_experts'];
+  if (r.first(totalKeys.map((k) => [k])) === null) return null;
+  return {
+    total: size('experts.total', totalKeys, 'the number of experts', true)!,
+    active: size('experts.active', ['num_experts_per_tok'], 'the number of experts each token uses', true)!,
+  };
+}
+
+function readGated(r: FieldReader, modelType: string | null): boolean | undefined {
+  const proj = r.text(null, ['feed_forward_proj'], 'the feed-forward kind, e.g. "gated-gelu"');
+  if (proj !== undefined) {
+    r.locate('gated', ['feed_forward_proj']);
+    return proj.startsWith('gated-');
+  }
+  const path = r.first([['hidden_act'], ['hidden_activation'], ['activation_function'], ['dense_act_fn']]);
+  const act = path === null ? undefined : r.text('gated', path, 'an activation name');
+  if (act !== undefined && GATED_ACTIVATIONS.includes(act.toLowerCase())) return true;
+  // The architecture decides, whatever activation it is configured with.
+  if (modelType !== null && GATED_FAMILIES.has(modelType)) {
+    r.locate('gated', ['model_type']);
+    return true;
+  }
+  return path === null ? undefined : false;
+}
+
+function readBias(r: FieldReader, modelType: string | null, gpt2Style: boolean): boolean | undefined {
+  const stated = [['attention_bias'], ['mlp_bias'], ['bias'], ['use_bias']].filter((p) => r.has(p));
+  if (stated.length > 0) {
+    const values = stated.map((p) => ({ p, v: r.flag('bias', p) }));
+    const on = values.find((x) => x.v === true);
+    if (on) r.locate('bias', on.p);
+    else r.locate('bias', values[0].p);
+    return on ? true : values.some((x) => x.v === false) ? false : undefined;
+  }
+  if ((modelType !== null && BIAS_FAMILIES.has(modelType)) || (modelType === null && gpt2Style)) {
+    r.locate('bias', modelType !== null ? ['model_type'] : r.has(['n_embd']) ? ['n_embd'] : ['n_layer']);
+    return true;
+  }
+  return undefined;
+}
+
+function readWeights(r: FieldReader): StorageDType | null {
+  const path = r.first([['dtype'], ['torch_dtype']]);
+  if (path === null) return null;
+  const name = r.text('dtypes.weights', path, 'a weight format');
+  if (name === undefined) return null;
+  if (name === 'auto') {
+    r.report('key-ignored', path, `${r.key(path)} is "auto", which names no format; the weights are read at the default bf16, so state float32, bfloat16 or float16`);
+    return null;
+  }
+  const dtype = DTYPES[name];
+  if (dtype === undefined) {
+    r.report('value-invalid', path, `${r.key(path)} is ${r.quote(path)}; expected one of ${Object.keys(DTYPES).join(', ')}`);
+    return null;
+  }
+  return dtype;
+}
+
+function readMultiplier(r: FieldReader, modelType: string | null, hidden: number): number | null {
+  const scale = r.flag('embeddingMultiplier', ['scale_embedding']);
+  const root = isCount(hidden) ? Math.sqrt(hidden) : NaN;
+  if (scale !== undefined) return scale ? root : 1;
+  if (modelType !== null && GEMMA_FAMILIES.has(modelType)) {
+    r.locate('embeddingMultiplier', ['model_type']);
+    return root;
+  }
+  return null;
+}
+
+function readWindow(r: FieldReader, modelType: string | null, layers: number): { size: number | null; layers: number | null } {
+  if (!r.has(['sliding_window'])) return { size: null, layers: null };
+  const use = r.flag(null, ['use_sliding_window']);
+  if (use === false) return { size: null, layers: null };
+  if (use === undefined && !r.has(['use_sliding_window']) && modelType !== null && WINDOW_OFF_FAMILIES.has(modelType)) {
+    r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: use_sliding_window is not stated, and model_type "${modelType}" turns the window off unless it is true; add "use_sliding_window": true, or remove sliding_window`);
+    return { size: null, layers: null };
+  }
+  const size = r.count('slidingWindow', ['sliding_window'], 'tokens') ?? null;
+
+  const types = r.get(['layer_types']);
+  if (Array.isArray(types)) {
+    r.locate('windowLayers', ['layer_types']);
+    const windowed = types.filter((t) => t === 'sliding_attention').length;
+    if (windowed === 0) {
+      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: no entry of ${r.key(['layer_types'])} is "sliding_attention"`);
+      return { size: null, layers: null };
+    }
+    return { size, layers: windowed };
+  }
+  if (r.has(['max_window_layers'])) {
+    const first = r.count('windowLayers', ['max_window_layers'], 'layer index');
+    if (first === undefined || Number.isNaN(first) || !isCount(layers)) return { size, layers: first === undefined ? null : NaN };
+    const windowed = layers - Math.max(0, first);
+    if (windowed <= 0) {
+      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: layers from index ${r.key(['max_window_layers'])} (${first}) on use the window, and there are ${layers} layers; lower max_window_layers to below ${layers}, or remove sliding_window`);
+      delete r.locations.windowLayers;
+      return { size: null, layers: null };
+    }
+    return { size, layers: windowed };
+  }
+  return { size, layers: null };
+}
+
+function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boolean, headDim: number): PositionDraft {
+  const typePath = ['position_embedding_type'];
+  const alibiPath = r.get(['alibi']) === true ? ['alibi'] : r.get(['attn_config', 'alibi']) === true ? ['attn_config', 'alibi'] : null;
+  const rotaryKeys = ROTARY_KEYS.filter((k) => r.has([k]));
+  let kind: PositionDraft['kind'];
+  let assumed: string | null = null;
+
+  const stated = r.text('position', typePath, 'a position embedding type');
+  if (stated !== undefined) {
+    const lower = stated.toLowerCase();
+    if (POSITION_TYPES[lower] !== undefined) kind = POSITION_TYPES[lower];
+    else if (RELATIVE_POSITION_TYPES.has(lower)) {
+      kind = 'none';
+      assumed = `${r.key(typePath)} is ${r.quote(typePath)}: relative position embeddings are not one of the modelled codes (learned, sinusoidal, rotary, alibi), so the code is read as none and positional-range metrics are not computed`;
+    } else {
+      r.report('value-invalid', typePath, `${r.key(typePath)} is ${r.quote(typePath)}; expected one of ${[...Object.keys(POSITION_TYPES), ...RELATIVE_POSITION_TYPES].join(', ')}`);
+      kind = 'none';
+    }
+  } else if (r.has(typePath)) {
+    kind = 'none';
+  } else if (alibiPath !== null) {
+    r.locate('position', alibiPath);
+    kind = 'alibi';
+  } else if (r.get(['sinusoidal_pos_embds']) === true) {
+    r.locate('position', ['sinusoidal_pos_embds']);
+    kind = 'sinusoidal';
+  } else if (rotaryKeys.length > 0) {
+    r.locate('position', [rotaryKeys[0]]);
+    kind = 'rotary';
+  } else if (modelType !== null && (ROTARY_FAMILIES.has(modelType) || LEARNED_FAMILIES.has(modelType) || SINUSOIDAL_FAMILIES.has(modelType) || ALIBI_FAMILIES.has(modelType) || RELATIVE_FAMILIES.has(modelType))) {
+    r.locate('position', ['model_type']);
+    if (ROTARY_FAMILIES.has(modelType)) {
+      kind = 'rotary';
+      assumed = `model_type "${modelType}" uses a rotary code, but no rotary key (rope_theta, rope_parameters) is stated, so the base is read as ${DEFAULT_ROTARY_BASE}; state rope_theta`;
+    } else if (RELATIVE_FAMILIES.has(modelType)) {
+      kind = 'none';
+      assumed = `model_type "${modelType}" uses relative position biases, which are not one of the modelled codes (learned, sinusoidal, rotary, alibi), so the code is read as none and positional-range metrics are not computed`;
+    } else {
+      kind = LEARNED_FAMILIES.has(modelType) ? 'learned' : SINUSOIDAL_FAMILIES.has(modelType) ? 'sinusoidal' : 'alibi';
+    }
+  } else if (gpt2Style) {
+    r.locate('position', r.has(['n_positions']) ? ['n_positions'] : ['n_embd']);
+    kind = 'learned';
+  } else {
+    kind = 'none';
+    assumed = `no position code is stated (no rope_theta, position_embedding_type or alibi key) and model_type ${modelType === null ? 'is not stated' : `"${modelType}" is not a known family`}, so the code is read as none and positional-range metrics are not computed; state rope_theta for a rotary code or position_embedding_type otherwise`;
+  }
+  if (assumed !== null) r.report('position-code-assumed', r.has(typePath) ? typePath : r.has(['model_type']) ? ['model_type'] : null, assumed);
+
+  if (alibiPath !== null && kind !== 'alibi') {
+    r.report('key-ignored', alibiPath, `${r.key(alibiPath)} has no effect: ${r.key(typePath)} states the ${kind} code; remove one of them`);
+  }
+  if (kind !== 'rotary') {
+    for (const key of rotaryKeys) {
+      r.report('key-ignored', [key], `${r.key([key])} has no effect: it applies to rotary codes, and the code is read as ${kind}${r.has(typePath) ? ` (${r.key(typePath)})` : alibiPath ? ` (${r.key(alibiPath)})` : ''}`);
+    }
+    return { kind };
+  }
+  return readRotary(r, headDim);
+}
+
+function readRotary(r: FieldReader, headDim: number): PositionDraft {
+  // Newer checkpoint libraries put every rotary value in rope_parameters, per layer type where types differ.
+  let params: PathSegment[] | null = null;
+  const rp = r.get(['rope_parameters']);
+  if (isMapping(rp)) {
+    const nested = Object.keys(rp).filter((k) => isMapping(rp[k]));
+    if (nested.length > 0 && !('rope_type' in rp) && !('rope_theta' in rp)) {
+      const chosen = nested.includes('full_attention') ? 'full_attention' : nested[0];
+      params = ['rope_parameters', chosen];
+      for (const other of nested.filter((k) => k !== chosen)) {
+        r.report('key-ignored', ['rope_parameters', other], `${r.key(['rope_parameters', other])} is not read: one rotary code describes the model, taken from ${r.key(params)}`);
+      }
+    } else params = ['rope_parameters'];
+  } else if (rp !== undefined) {
+    r.report('value-invalid', ['rope_parameters'], `${r.key(['rope_parameters'])} ${r.is(['rope_parameters'])}; expected a mapping with rope_type and rope_theta`);
+  }
+
+  const basePath = r.first([...(params ? [[...params, 'rope_theta']] : []), ['rope_theta'], ['rotary_emb_base']]);
+  const base = basePath === null ? undefined : r.real('position.base', basePath, 'rotary base', {
+    test: (n) => n > 1,
+    expected: 'a rotary base above 1 (commonly 10000 or more)',
+  });
+
+  let fraction: number | undefined;
+  const fractionPath = r.first([...(params ? [[...params, 'partial_rotary_factor']] : []), ['partial_rotary_factor'], ['rotary_pct']]);
+  if (fractionPath !== null) {
+    fraction = r.real('position.fraction', fractionPath, 'share', { test: (n) => n > 0 && n <= 1, expected: 'a share of the head above 0 and at most 1' });
+  } else if (r.has(['rotary_dim'])) {
+    const dim = r.count('position.fraction', ['rotary_dim'], 'rotated channels per head');
+    if (dim !== undefined && !Number.isNaN(dim)) fraction = isCount(headDim) ? dim / headDim : NaN;
+  }
+
+  let scalingPath: PathSegment[] | null = null;
+  if (params !== null && typeof r.get([...params, 'rope_type']) === 'string' && r.get([...params, 'rope_type']) !== 'default') scalingPath = params;
+  else if (r.has(['rope_scaling'])) scalingPath = ['rope_scaling'];
+  return { kind: 'rotary', base, fraction, scaling: scalingPath === null ? null : readScaling(r, scalingPath) };
+}
+
+function readScaling(r: FieldReader, at: PathSegment[]): ScalingDraft | null {
+  const block = r.get(at);
+  if (!isMapping(block)) {
+    r.report('value-invalid', at, `${r.key(at)} ${r.is(at)}; expected a mapping with rope_type and factor`);
+    return null;
+  }
+  const typePath = r.first([[...at, 'rope_type'], [...at, 'type']]);
+  if (typePath === null) {
+    r.report('scaling-kind-unknown', at, `${r.key(at)} states no rope_type (or type); known kinds: ${knownKinds()}; without a kind the code is read unscaled`);
+    return null;
+  }
+  const name = r.text('position.scaling', typePath, 'a scaling kind');
+  if (name === undefined) return null;
+  const kind = SCALING_TYPES[name];
+  if (kind === undefined) {
+    r.report('scaling-kind-unknown', typePath, `${r.key(typePath)} is ${r.quote(typePath)}, not a known scaling kind (${knownKinds()}); the code is read unscaled, so its reach is understated or wrong — describe the model in the context-reach format if its scaling is one of linear, ntk, dynamic, yarn or banded`);
+    return null;
+  }
+  if (kind === 'default') return null;
+
+  const factor = r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor') ?? r.missing([...at, 'factor'], 'the scaling factor (extended span over original span)');
+  const originalPath = r.first([[...at, 'original_max_position_embeddings'], ['original_max_position_embeddings']]);
+  const draft: ScalingDraft = {
+    kind,
+    factor,
+    originalSpan: originalPath === null ? null : r.count('position.scaling.originalSpan', originalPath, 'tokens'),
+  };
+  if (kind === 'yarn') {
+    draft.alpha = r.real('position.scaling.alpha', [...at, 'beta_slow'], 'ramp start', { test: (n) => n >= 0, expected: 'a ramp start of at least 0' });
+    draft.beta = r.real('position.scaling.beta', [...at, 'beta_fast'], 'ramp end', { test: (n) => n > 0, expected: 'a ramp end above 0' });
+    ordered(r, at, 'beta_slow', draft.alpha, DEFAULT_YARN_ALPHA, 'beta_fast', draft.beta, DEFAULT_YARN_BETA);
+    for (const key of ['attention_factor', 'mscale', 'mscale_all_dim']) {
+      if (r.has([...at, key])) {
+        r.report('key-ignored', [...at, key], `${r.key([...at, key])} is not modelled: attentionScale uses 0.1·ln(s) + 1 (YaRN, Peng et al. 2023, eq. 22), whatever this key sets`);
+      }
+    }
+  }
+  if (kind === 'banded') {
+    draft.low = r.real('position.scaling.low', [...at, 'low_freq_factor'], 'low-frequency factor', { test: (n) => n > 0, expected: 'a factor above 0' });
+    draft.high = r.real('position.scaling.high', [...at, 'high_freq_factor'], 'high-frequency factor', { test: (n) => n > 0, expected: 'a factor above 0' });
+    ordered(r, at, 'low_freq_factor', draft.low, DEFAULT_BANDED_LOW, 'high_freq_factor', draft.high, DEFAULT_BANDED_HIGH);
+  }
+  return draft;
+}
+
+/** Ramp ends must be ordered (defaults standing in for an unstated end), or the ramp divides by zero or runs backwards. */
+function ordered(r: FieldReader, at: PathSegment[], lowKey: string, low: number | undefined, lowDefault: number, highKey: string, high: number | undefined, highDefault: number): void {
+  if (low === undefined && high === undefined) return;
+  low ??= lowDefault;
+  high ??= highDefault;
+  if (Number.isNaN(low) || Number.isNaN(high) || high > low) return;
+  r.report('value-invalid', r.has([...at, highKey]) ? [...at, highKey] : [...at, lowKey], `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards`);
+}
+
+function knownKinds(): string {
+  return 'linear, dynamic, yarn, llama3 (read as banded), default (no scaling)';
+}

@@ -1,0 +1,188 @@
+/**
+ * Typed reading of single keys for the dialect readers: each read records where the value came
+ * from and turns an unusable value into a finding plus NaN (or no value), never an exception.
+ * Ranges of sizes are left to the spec rules, so both dialects report them alike.
+ */
+import type { Finding, LocationMap } from '../model.js';
+import { RULES } from '../rules/catalog.js';
+import type { RuleId } from '../rules/catalog.js';
+import { dottedKey, kindOf, quoteValue } from './quote.js';
+import type { PathSegment } from './quote.js';
+import type { SourceDocument, SourceMapping, SourceValue } from './source.js';
+
+/** What the reader expects of a number besides being one. */
+export interface NumberCheck {
+  /** True when the value is acceptable. */
+  test(n: number): boolean;
+  /** Completes "expected …", e.g. "a rotary base above 1". */
+  expected: string;
+}
+
+export class FieldReader {
+  readonly findings: Finding[] = [];
+  readonly locations: LocationMap = {};
+
+  /**
+   * @param doc the parsed file
+   * @param root the mapping the model is read from (the whole file, or the `--at` block)
+   * @param prefix document path of `root`, so keys are reported as written in the file
+   * @param nullIsAbsent checkpoint configs write `null` for "not set"; the own dialect refuses it
+   */
+  constructor(
+    readonly doc: SourceDocument,
+    readonly root: SourceMapping,
+    readonly prefix: readonly PathSegment[],
+    private readonly nullIsAbsent: boolean,
+  ) {}
+
+  /** The value at `path` under the root; undefined when absent (or null, where null means absent). */
+  get(path: readonly PathSegment[]): SourceValue | undefined {
+    let current: SourceValue | undefined = this.root;
+    for (const segment of path) {
+      if (Array.isArray(current) && typeof segment === 'number') current = current[segment];
+      else if (current !== null && typeof current === 'object' && !Array.isArray(current) && typeof segment === 'string') {
+        current = Object.prototype.hasOwnProperty.call(current, segment) ? current[segment] : undefined;
+      } else return undefined;
+    }
+    if (current === null && this.nullIsAbsent) return undefined;
+    return current;
+  }
+
+  has(path: readonly PathSegment[]): boolean {
+    return this.get(path) !== undefined;
+  }
+
+  /** The first of `candidates` that is present, or null. */
+  first(candidates: readonly (readonly PathSegment[])[]): readonly PathSegment[] | null {
+    return candidates.find((p) => this.has(p)) ?? null;
+  }
+
+  /** The key as written: dotted, from the top of the file. */
+  key(path: readonly PathSegment[]): string {
+    return dottedKey([...this.prefix, ...path]);
+  }
+
+  /** Line of the key; for an absent key, the line of the nearest present parent. */
+  line(path: readonly PathSegment[]): number | null {
+    for (let n = path.length; n >= 0; n--) {
+      const line = this.doc.lineOf([...this.prefix, ...path.slice(0, n)]);
+      if (line !== null) return line;
+    }
+    return null;
+  }
+
+  /** The value quoted as written in the file. */
+  quote(path: readonly PathSegment[]): string {
+    return quoteValue(this.get(path) ?? null, this.doc.literalOf([...this.prefix, ...path]));
+  }
+
+  /** "is 12 (text)"-style description of the value at `path`, for "… ; expected …" messages. */
+  is(path: readonly PathSegment[]): string {
+    const v = this.get(path);
+    return v === null || v === undefined ? 'is empty' : `is ${this.quote(path)} (${kindOf(v)})`;
+  }
+
+  /** Records that spec field `field` came from `path`. */
+  locate(field: string, path: readonly PathSegment[]): void {
+    this.locations[field] = { key: this.key(path), line: this.line(path) };
+  }
+
+  /**
+   * Adds a finding about `path` (null: the whole file), unless one about the same key or a key
+   * containing it was already made: one problem, one finding.
+   */
+  report(rule: RuleId, path: readonly PathSegment[] | null, message: string): void {
+    const key = path === null ? null : this.key(path);
+    if (key !== null && this.findings.some((f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)))) return;
+    this.findings.push({ rule, severity: RULES[rule].severity, message, key, line: path === null ? null : this.line(path) });
+  }
+
+  /** Whether a finding about `path` (or a key containing it) has been made. */
+  reported(path: readonly PathSegment[]): boolean {
+    const key = this.key(path);
+    return this.findings.some((f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)));
+  }
+
+  /** Reports `path` as missing; `what` completes "expected …". Returns NaN for the spec. */
+  missing(path: readonly PathSegment[], what: string): number {
+    this.report('value-invalid', path, `${this.key(path)} is missing; expected ${what}`);
+    return NaN;
+  }
+
+  /**
+   * A size (whole number expected). Undefined when absent; NaN, reported, when not a usable
+   * number; otherwise the number as written (zero, negative or fractional sizes go to the spec
+   * rules).
+   */
+  count(field: string, path: readonly PathSegment[], what: string): number | undefined {
+    return this.number(field, path, `a whole number (${what})`, true);
+  }
+
+  /** A real number; `check` adds a range. Undefined when absent; NaN, reported, when unusable. */
+  real(field: string, path: readonly PathSegment[], what: string, check?: NumberCheck): number | undefined {
+    const n = this.number(field, path, check ? check.expected : `a number (${what})`, false);
+    if (n === undefined || Number.isNaN(n) || !check || check.test(n)) return n;
+    this.report('value-invalid', path, `${this.key(path)} is ${this.quote(path)}; expected ${check.expected}`);
+    return NaN;
+  }
+
+  /** true or false. Undefined when absent or unusable (reported). */
+  flag(field: string | null, path: readonly PathSegment[]): boolean | undefined {
+    const v = this.get(path);
+    if (v === undefined) return undefined;
+    if (field !== null) this.locate(field, path);
+    if (typeof v === 'boolean') return v;
+    this.report('value-invalid', path, `${this.key(path)} ${this.is(path)}; expected true or false`);
+    return undefined;
+  }
+
+  /** Text. Undefined when absent or unusable (reported). */
+  text(field: string | null, path: readonly PathSegment[], what: string): string | undefined {
+    const v = this.get(path);
+    if (v === undefined) return undefined;
+    if (field !== null) this.locate(field, path);
+    if (typeof v === 'string') return v;
+    this.report('value-invalid', path, `${this.key(path)} ${this.is(path)}; expected text (${what})`);
+    return undefined;
+  }
+
+  /**
+   * One of the names in `choices` (compared exactly), mapped to its spec value. Undefined when
+   * absent; null, reported, when not one of them.
+   */
+  choice<T>(field: string, path: readonly PathSegment[], choices: Readonly<Record<string, T>>, what: string): T | null | undefined {
+    const v = this.text(field, path, what);
+    if (v === undefined) return this.has(path) ? null : undefined;
+    if (Object.prototype.hasOwnProperty.call(choices, v)) return choices[v];
+    this.report('value-invalid', path, `${this.key(path)} is ${this.quote(path)}; expected one of ${Object.keys(choices).join(', ')} (${what})`);
+    return null;
+  }
+
+  private number(field: string, path: readonly PathSegment[], expected: string, whole: boolean): number | undefined {
+    const v = this.get(path);
+    if (v === undefined) return undefined;
+    this.locate(field, path);
+    const key = this.key(path);
+    if (typeof v !== 'number') {
+      this.report('value-invalid', path, `${key} ${this.is(path)}; expected ${expected}`);
+      return NaN;
+    }
+    if (Number.isNaN(v)) {
+      this.report('value-invalid', path, `${key} is ${this.quote(path)}, which is not a number; expected ${expected}`);
+      return NaN;
+    }
+    if (!Number.isFinite(v)) {
+      this.report('value-invalid', path, `${key} is ${this.quote(path)}, which overflows to ${v > 0 ? '' : '-'}Infinity in a double; expected ${expected}`);
+      return NaN;
+    }
+    if (whole && Number.isInteger(v) && !Number.isSafeInteger(v)) {
+      this.report(
+        'value-invalid',
+        path,
+        `${key} is ${this.quote(path)}, beyond 2^53 − 1 = 9007199254740991, so it is not held exactly (neighbouring whole numbers share one double); expected ${expected}`,
+      );
+      return NaN;
+    }
+    return v;
+  }
+}

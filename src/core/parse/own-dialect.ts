@@ -1,0 +1,239 @@
+/**
+ * context-reach's own model description (`format: context-reach-model/1`, YAML or JSON, kebab-case
+ * keys). `schema/model.schema.json` is its definition; the shipped schema is checked with ajv and
+ * each schema error becomes a finding naming the key and its line.
+ */
+import { Ajv } from 'ajv';
+import type { ErrorObject, ValidateFunction } from 'ajv';
+import modelSchema from '../../../schema/model.schema.json' with { type: 'json' };
+import type { FloatFormat, PositionKind, ScalingKind, StorageDType } from '../model.js';
+import { FLOAT_FORMATS, POSITION_KINDS, SCALING_KINDS, STORAGE_DTYPES } from '../model.js';
+import type { FieldReader, NumberCheck } from './fields.js';
+import { parsePointer } from './json-pointer.js';
+import { quoteValue } from './quote.js';
+import type { PathSegment } from './quote.js';
+import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
+import { DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA } from './spec-defaults.js';
+import { suggestKey } from './suggest.js';
+
+/** The value of `format` that marks the own dialect. */
+export const MODEL_FORMAT = 'context-reach-model/1';
+/** What every version of the own dialect's `format` starts with. */
+export const MODEL_FORMAT_FAMILY = 'context-reach-model/';
+
+/** The model description's JSON Schema, as shipped in `schema/model.schema.json`. */
+export const MODEL_SCHEMA: Readonly<Record<string, unknown>> = modelSchema;
+
+let compiled: ValidateFunction | null = null;
+
+/** Schema errors for a parsed own-dialect document (empty when it conforms); errors carry `data` and `parentSchema`. */
+export function validateModelValue(value: unknown): ErrorObject[] {
+  if (compiled === null) compiled = new Ajv({ allErrors: true, verbose: true, strict: true }).compile(modelSchema);
+  return compiled(value) ? [] : [...(compiled.errors ?? [])];
+}
+
+/**
+ * Keys whose range the spec rules judge (`size-invalid`, `scaling-factor-below-one`): schema
+ * range errors on them are left to those rules, so both dialects report a bad size alike.
+ */
+const RULE_CHECKED = new Set([
+  '/model/layers', '/model/hidden', '/model/heads', '/model/kv-heads', '/model/head-dim', '/model/feed-forward/size',
+  '/model/vocab', '/model/experts/total', '/model/experts/active', '/model/encoder/layers', '/model/encoder/heads',
+  '/model/encoder/kv-heads', '/model/encoder/head-dim', '/model/encoder/feed-forward/size', '/model/declared-span',
+  '/model/trained-span', '/model/sliding-window/size', '/model/sliding-window/layers', '/model/position/scaling/factor',
+  '/model/position/scaling/original-span', '/serving/span', '/serving/sequences', '/serving/device-memory-gib',
+  '/serving/output-tokens', '/serving/prompt-tokens',
+]);
+const RANGE_KEYWORDS = new Set(['minimum', 'maximum', 'exclusiveMinimum', 'exclusiveMaximum', 'multipleOf']);
+
+const COMPARISON_WORDS: Record<string, string> = { '>=': 'at least', '>': 'above', '<=': 'at most', '<': 'below' };
+const TYPE_WORDS: Record<string, string> = {
+  integer: 'a whole number', number: 'a number', string: 'text', array: 'a list', object: 'a mapping', boolean: 'true or false',
+};
+
+const STORAGE = Object.fromEntries(STORAGE_DTYPES.map((d) => [d, d])) as Record<string, StorageDType>;
+const FLOATS = Object.fromEntries(FLOAT_FORMATS.map((d) => [d, d])) as Record<string, FloatFormat>;
+const CODES = Object.fromEntries(POSITION_KINDS.map((k) => [k, k])) as Record<string, PositionKind>;
+const KINDS = Object.fromEntries(SCALING_KINDS.map((k) => [k, k])) as Record<string, ScalingKind>;
+
+/** Required blocks the reader does not read as single values, and what they should hold. */
+const REQUIRED_BLOCKS: Readonly<Record<string, string>> = {
+  model: 'the model block (layers, hidden, heads, vocab, position, declared-span)',
+  position: 'the position block, e.g. "position: {code: rotary, base: 10000}"',
+};
+
+const above = (limit: number, what: string): NumberCheck => ({ test: (n) => n > limit, expected: `${what} above ${limit}` });
+
+/** Reads the own dialect from `r.root` into a draft; every problem becomes a finding on `r`. */
+export function readOwnDialect(r: FieldReader): SpecDraft {
+  for (const error of validateModelValue(r.root)) schemaFinding(r, error);
+
+  const m = (...p: string[]): string[] => ['model', ...p];
+  const need = (n: number | undefined, path: string[], what: string): number => n ?? r.missing(path, what);
+
+  const draft: SpecDraft = {
+    name: r.text('name', m('name'), 'a model name') ?? null,
+    layers: need(r.count('layers', m('layers'), 'decoder layers'), m('layers'), 'the number of decoder layers'),
+    hidden: need(r.count('hidden', m('hidden'), 'model width'), m('hidden'), 'the model width'),
+    heads: need(r.count('heads', m('heads'), 'attention heads'), m('heads'), 'the number of attention heads'),
+    kvHeads: r.count('kvHeads', m('kv-heads'), 'key/value heads'),
+    headDim: r.count('headDim', m('head-dim'), 'head width'),
+    ffn: r.count('ffn', m('feed-forward', 'size'), 'feed-forward width'),
+    gated: r.flag('gated', m('feed-forward', 'gated')),
+    vocab: need(r.count('vocab', m('vocab'), 'vocabulary size'), m('vocab'), 'the vocabulary size'),
+    tied: r.flag('tied', m('tied-output')),
+    bias: r.flag('bias', m('bias')),
+    experts: r.has(m('experts'))
+      ? {
+          total: need(r.count('experts.total', m('experts', 'total'), 'experts'), m('experts', 'total'), 'the number of experts'),
+          active: need(r.count('experts.active', m('experts', 'active'), 'active experts'), m('experts', 'active'), 'the number of experts each token uses'),
+        }
+      : null,
+    encoder: r.has(m('encoder'))
+      ? {
+          layers: need(r.count('encoder.layers', m('encoder', 'layers'), 'encoder layers'), m('encoder', 'layers'), 'the number of encoder layers'),
+          heads: need(r.count('encoder.heads', m('encoder', 'heads'), 'encoder heads'), m('encoder', 'heads'), 'the number of encoder heads'),
+          kvHeads: r.count('encoder.kvHeads', m('encoder', 'kv-heads'), 'encoder key/value heads'),
+          headDim: r.count('encoder.headDim', m('encoder', 'head-dim'), 'encoder head width'),
+          ffn: r.count('encoder.ffn', m('encoder', 'feed-forward', 'size'), 'encoder feed-forward width'),
+        }
+      : null,
+    position: readPosition(r, m('position')),
+    declaredSpan: need(r.count('declaredSpan', m('declared-span'), 'tokens'), m('declared-span'), 'the maximum positions the model declares'),
+    trainedSpan: r.count('trainedSpan', m('trained-span'), 'tokens') ?? null,
+    slidingWindow: r.has(m('sliding-window'))
+      ? need(r.count('slidingWindow', m('sliding-window', 'size'), 'tokens'), m('sliding-window', 'size'), 'the window size in tokens')
+      : null,
+    windowLayers: r.count('windowLayers', m('sliding-window', 'layers'), 'layers') ?? null,
+    dtypes: {
+      weights: r.choice('dtypes.weights', m('dtypes', 'weights'), STORAGE, 'weight storage') ?? null,
+      cache: r.choice('dtypes.cache', m('dtypes', 'cache'), STORAGE, 'key/value cache storage') ?? null,
+      positions: r.choice('dtypes.positions', m('dtypes', 'positions'), FLOATS, 'position format') ?? null,
+    },
+    embeddingInitStd: r.real('embeddingInitStd', m('embedding-init', 'std'), 'standard deviation', above(0, 'a standard deviation')) ?? null,
+    embeddingMultiplier: r.real('embeddingMultiplier', m('embedding-init', 'multiplier'), 'factor', above(0, 'a factor')) ?? null,
+    serving: {
+      span: r.count('serving.span', ['serving', 'span'], 'tokens') ?? null,
+      sequences: r.count('serving.sequences', ['serving', 'sequences'], 'sequences') ?? null,
+      deviceGiB: r.real('serving.deviceGiB', ['serving', 'device-memory-gib'], 'GiB') ?? null,
+      reserve: r.real('serving.reserve', ['serving', 'reserve'], 'share', {
+        test: (n) => n >= 0 && n < 1,
+        expected: 'a share from 0 up to but not including 1',
+      }) ?? null,
+      outputTokens: r.count('serving.outputTokens', ['serving', 'output-tokens'], 'tokens') ?? null,
+      promptTokens: r.count('serving.promptTokens', ['serving', 'prompt-tokens'], 'tokens') ?? null,
+    },
+  };
+  return draft;
+}
+
+function readPosition(r: FieldReader, at: string[]): PositionDraft {
+  const code = r.choice('position', [...at, 'code'], CODES, 'the position code');
+  if (code === undefined && !r.reported([...at, 'code'])) r.missing([...at, 'code'], `the position code: ${POSITION_KINDS.join(', ')}`);
+  if (code !== 'rotary') {
+    for (const key of ['base', 'fraction', 'scaling']) {
+      if (code && r.has([...at, key])) {
+        r.report('key-ignored', [...at, key], `${r.key([...at, key])} has no effect: it applies to rotary codes, and ${r.key([...at, 'code'])} is ${code}; remove it or set the code to rotary`);
+      }
+    }
+    return { kind: code ?? 'none' };
+  }
+  const base = r.real('position.base', [...at, 'base'], 'rotary base', above(1, 'a rotary base'));
+  const fraction = r.real('position.fraction', [...at, 'fraction'], 'share', {
+    test: (n) => n > 0 && n <= 1,
+    expected: 'a share of the head above 0 and at most 1',
+  });
+  return { kind: 'rotary', base, fraction, scaling: r.has([...at, 'scaling']) ? readScaling(r, [...at, 'scaling']) : null };
+}
+
+function readScaling(r: FieldReader, at: string[]): ScalingDraft | null {
+  const kind = r.choice('position.scaling', [...at, 'kind'], KINDS, 'the scaling kind');
+  if (!kind) {
+    if (kind === undefined) r.missing([...at, 'kind'], `the scaling kind: ${SCALING_KINDS.join(', ')}`);
+    return null;
+  }
+  const factor = r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor') ?? r.missing([...at, 'factor'], 'the scaling factor (extended span over original span)');
+  const draft: ScalingDraft = {
+    kind,
+    factor,
+    originalSpan: r.count('position.scaling.originalSpan', [...at, 'original-span'], 'tokens') ?? null,
+    alpha: r.real('position.scaling.alpha', [...at, 'alpha'], 'ramp start', { test: (n) => n >= 0, expected: 'a ramp start of at least 0' }),
+    beta: r.real('position.scaling.beta', [...at, 'beta'], 'ramp end', above(0, 'a ramp end')),
+    low: r.real('position.scaling.low', [...at, 'low'], 'low-frequency factor', above(0, 'a low-frequency factor')),
+    high: r.real('position.scaling.high', [...at, 'high'], 'high-frequency factor', above(0, 'a high-frequency factor')),
+  };
+  orderedPair(r, at, 'alpha', draft.alpha, DEFAULT_YARN_ALPHA, 'beta', draft.beta, DEFAULT_YARN_BETA);
+  orderedPair(r, at, 'low', draft.low, DEFAULT_BANDED_LOW, 'high', draft.high, DEFAULT_BANDED_HIGH);
+  for (const key of kind === 'yarn' ? ['low', 'high'] : kind === 'banded' ? ['alpha', 'beta'] : ['alpha', 'beta', 'low', 'high']) {
+    if (r.has([...at, key])) {
+      r.report('key-ignored', [...at, key], `${r.key([...at, key])} has no effect on ${kind} scaling (alpha and beta are yarn's, low and high are banded's); remove it`);
+    }
+  }
+  return draft;
+}
+
+/** Ramp ends must be ordered (defaults standing in for an unstated end), or the ramp divides by zero or runs backwards. */
+function orderedPair(r: FieldReader, at: string[], lowKey: string, low: number | undefined, lowDefault: number, highKey: string, high: number | undefined, highDefault: number): void {
+  if (low === undefined && high === undefined) return;
+  low ??= lowDefault;
+  high ??= highDefault;
+  if (Number.isNaN(low) || Number.isNaN(high) || high > low) return;
+  const path = r.has([...at, highKey]) ? [...at, highKey] : [...at, lowKey];
+  r.report('value-invalid', path, `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards; raise ${highKey} or lower ${lowKey}`);
+}
+
+function schemaFinding(r: FieldReader, error: ErrorObject): void {
+  const pointer = error.instancePath;
+  // Numbers of the wrong kind (1e400, 2.5 layers) are the readers' and the spec rules' to report.
+  if (error.keyword === 'type' && typeof error.data === 'number') return;
+  if (RULE_CHECKED.has(pointer) && RANGE_KEYWORDS.has(error.keyword)) return;
+  const path: PathSegment[] = parsePointer(pointer);
+  const key = r.key(path);
+  const params = error.params as Record<string, unknown>;
+  const schema = (error.parentSchema ?? {}) as { properties?: Record<string, unknown> };
+  switch (error.keyword) {
+    case 'required': {
+      // Single values are the reader's to call missing, in its words; only whole blocks are named here.
+      const name = String(params.missingProperty);
+      const block = REQUIRED_BLOCKS[name];
+      if (block !== undefined) r.report('value-invalid', [...path, name], `${r.key([...path, name])} is missing; expected ${block}`);
+      return;
+    }
+    case 'additionalProperties': {
+      const name = String(params.additionalProperty);
+      const known = Object.keys(schema.properties ?? {}).filter((k) => k !== '$schema');
+      const nearest = suggestKey(name, known);
+      const where = path.length === 0 ? 'at the top level' : `under ${key}`;
+      r.report(
+        'value-invalid',
+        [...path, name],
+        `${r.key([...path, name])} is not a known key ${where}${nearest === null ? '' : `; did you mean "${nearest}"?`} (known keys: ${known.join(', ')})`,
+      );
+      return;
+    }
+    case 'type': {
+      const types = (Array.isArray(params.type) ? params.type : String(params.type).split(',')).map((t) => TYPE_WORDS[String(t)] ?? String(t));
+      r.report('value-invalid', path, `${key} ${r.is(path)}; expected ${types.join(' or ')}`);
+      return;
+    }
+    case 'enum': {
+      const allowed = (params.allowedValues as unknown[]).map(String);
+      const nearest = typeof error.data === 'string' ? suggestKey(error.data, allowed) : null;
+      const hint = nearest === null ? '' : `; did you mean "${nearest}"?`;
+      if (pointer.endsWith('/scaling/kind')) {
+        r.report('scaling-kind-unknown', path, `${key} is ${r.quote(path)}, not a known scaling kind (${allowed.join(', ')})${hint}; without a known kind the code is read unscaled`);
+      } else {
+        r.report('value-invalid', path, `${key} is ${r.quote(path)}; expected one of ${allowed.join(', ')}${hint}`);
+      }
+      return;
+    }
+    case 'minimum': case 'maximum': case 'exclusiveMinimum': case 'exclusiveMaximum':
+      r.report('value-invalid', path, `${key} is ${r.quote(path)}; expected a number ${COMPARISON_WORDS[String(params.comparison)] ?? String(params.comparison)} ${String(params.limit)}`);
+      return;
+    case 'maxLength':
+      r.report('value-invalid', path, `${key} is ${String(error.data).length} characters long; expected at most ${String(params.limit)}`);
+      return;
+    default:
+      r.report('value-invalid', path, `${key} is ${quoteValue(error.data)}; ${error.message ?? 'not allowed by the model schema'}`);
+  }
+}

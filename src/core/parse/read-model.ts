@@ -1,0 +1,94 @@
+/**
+ * Reads one model file, in either dialect, into the one `ModelSpec`: text → parsed document →
+ * the `--at` block → dialect → draft → defaults. Anything that makes the file unreadable throws
+ * `ReadError`; everything about single values is a finding, so one run lists all of them.
+ */
+import type { Dialect, Finding, LocationMap, ModelSpec } from '../model.js';
+import { isCheckpointConfig, readCheckpoint } from './checkpoint-dialect.js';
+import { ReadError } from './errors.js';
+import { FieldReader } from './fields.js';
+import { PointerError, formatPointer, resolvePointer } from './json-pointer.js';
+import { MODEL_FORMAT, MODEL_FORMAT_FAMILY, readOwnDialect } from './own-dialect.js';
+import { kindOf, quoteValue } from './quote.js';
+import type { PathSegment } from './quote.js';
+import { completeSpec } from './spec-defaults.js';
+import { parseSource } from './source.js';
+import type { SourceDocument, SourceMapping, SourceValue } from './source.js';
+
+export interface ModelRead {
+  dialect: Dialect;
+  spec: ModelSpec;
+  /** Spec field path (`layers`, `position.scaling.factor`, `serving.span`, …) to the key it was read from. */
+  locations: LocationMap;
+  /** Problems with single values, found while reading (the spec rules are separate: `specFindings`). */
+  findings: Finding[];
+}
+
+export interface ReadModelOptions {
+  /** JSON pointer (RFC 6901) to the model block inside a larger document (default: the whole document). */
+  at?: string;
+}
+
+function isMapping(v: SourceValue | undefined): v is SourceMapping {
+  return v !== null && v !== undefined && typeof v === 'object' && !Array.isArray(v);
+}
+
+/** Which dialect `value` is written in (any `context-reach-model/` version counts as the own one), or null when it is not a model description. */
+export function detectDialect(value: SourceMapping): Dialect | null {
+  const format = value.format;
+  if (typeof format === 'string' && format.startsWith(MODEL_FORMAT_FAMILY)) return 'context-reach';
+  if (isCheckpointConfig(value)) return 'checkpoint';
+  return null;
+}
+
+/**
+ * Reads the model description in `text` (JSON or YAML) from file `path`.
+ * Throws `ReadError` naming the file and line when the text cannot be read as a model at all.
+ */
+export function readModel(text: string, path: string, options: ReadModelOptions = {}): ModelRead {
+  const doc = parseSource(text, path);
+  const { root, prefix } = selectBlock(doc, path, options.at);
+
+  const format = root.format;
+  if (typeof format === 'string' && format.startsWith(MODEL_FORMAT_FAMILY) && format !== MODEL_FORMAT) {
+    const formatPath = [...prefix, 'format'];
+    throw new ReadError(path, doc.lineOf(formatPath), `format ${quoteValue(format)} is not supported; this version reads ${MODEL_FORMAT}`, 'format');
+  }
+  const dialect = detectDialect(root);
+  if (dialect === null) throw notAModel(doc, root, prefix, path);
+
+  const reader = new FieldReader(doc, root, prefix, dialect === 'checkpoint');
+  const draft = dialect === 'context-reach' ? readOwnDialect(reader) : readCheckpoint(reader);
+  return { dialect, spec: completeSpec(draft), locations: reader.locations, findings: reader.findings };
+}
+
+function selectBlock(doc: SourceDocument, file: string, at: string | undefined): { root: SourceMapping; prefix: PathSegment[] } {
+  if (at === undefined || at === '') return { root: doc.value, prefix: [] };
+  let selected: { value: unknown; path: PathSegment[] };
+  try {
+    selected = resolvePointer(doc.value, at);
+  } catch (error) {
+    if (!(error instanceof PointerError)) throw error;
+    const line = error.resolvedPath.length === 0 ? null : doc.lineOf(error.resolvedPath);
+    throw new ReadError(file, line, `--at ${error.message}`);
+  }
+  if (!isMapping(selected.value as SourceValue)) {
+    throw new ReadError(file, doc.lineOf(selected.path), `--at ${JSON.stringify(at)} selects ${kindOf(selected.value)}; expected a mapping holding a model`);
+  }
+  return { root: selected.value as SourceMapping, prefix: selected.path };
+}
+
+function notAModel(doc: SourceDocument, root: SourceMapping, prefix: PathSegment[], file: string): ReadError {
+  const where = prefix.length === 0 ? 'at the top level' : `under ${JSON.stringify(formatPointer(prefix.map(String)))}`;
+  const line = prefix.length === 0 ? (Object.keys(root).length > 0 ? doc.lineOf([Object.keys(root)[0]]) : null) : doc.lineOf(prefix);
+  // A model nested one level down (multimodal configs keep it under text_config) is worth naming.
+  const nested = Object.keys(root).find((k) => isMapping(root[k]) && detectDialect(root[k] as SourceMapping) !== null);
+  const hint = nested === undefined
+    ? ''
+    : `; ${nested} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;
+  return new ReadError(
+    file,
+    line,
+    `not a model config: expected "format: ${MODEL_FORMAT}" or checkpoint keys such as hidden_size and num_hidden_layers ${where}${hint}`,
+  );
+}

@@ -1,0 +1,113 @@
+/**
+ * What a policy says for one model config: matching globs, and the top level with every
+ * matching override laid over it.
+ */
+import picomatch from 'picomatch';
+import type { Limit } from '../compare/judging.js';
+import { METRIC_PATHS } from '../compare/metric-path.js';
+import type { ServingPatch, Severity, SourceLocation } from '../model.js';
+import type { FilePolicy, LimitSetting, Policy, PolicyOverride, RuleLevel } from './types.js';
+
+type Matcher = (path: string) => boolean;
+
+const GLOB_OPTIONS = { dot: true } as const;
+const matchers = new WeakMap<readonly string[], Matcher>();
+
+/** One compiled matcher per glob list; policies are parsed once and asked about many paths. */
+function matcherFor(globs: readonly string[]): Matcher {
+  let matcher = matchers.get(globs);
+  if (!matcher) {
+    matcher = globs.length === 0 ? () => false : picomatch([...globs], GLOB_OPTIONS);
+    matchers.set(globs, matcher);
+  }
+  return matcher;
+}
+
+/** Repository paths as globs see them: forward slashes, no leading `./`. */
+function normalise(path: string): string {
+  return path.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
+}
+
+/** Whether the policy's `files` globs pick `path` and its `exclude` globs leave it in. */
+export function isModelConfig(policy: Policy, path: string): boolean {
+  const file = normalise(path);
+  if (file === '') return false;
+  return matcherFor(policy.files)(file) && !matcherFor(policy.exclude)(file);
+}
+
+/** The overrides whose globs match `path`, in file order. */
+export function matchingOverrides(policy: Policy, path: string): PolicyOverride[] {
+  const file = normalise(path);
+  return policy.overrides.filter((override) => matcherFor(override.files)(file));
+}
+
+interface LimitState extends LimitSetting {
+  origin: SourceLocation | null;
+}
+
+/** The policy for one config: serving defaults, limits and rule levels after the overrides. */
+export function resolvePolicy(policy: Policy, filePath: string): FilePolicy {
+  const file = normalise(filePath);
+  const serving: Record<string, unknown> = {};
+  const rules: Record<string, RuleLevel> = Object.create(null);
+  const limits = new Map<string, LimitState>();
+  const origins: Record<string, SourceLocation> = Object.create(null);
+  const where = (name: string): SourceLocation => policy.locations[name] ?? { key: name, line: null };
+
+  const layer = (block: Pick<PolicyOverride, 'serving' | 'limits' | 'rules'>, prefix: string): void => {
+    for (const [field, value] of Object.entries(block.serving)) {
+      if (value === undefined) continue;
+      serving[field] = value;
+      origins[`serving.${field}`] = where(`${prefix}serving.${field}`);
+    }
+    for (const [metric, setting] of Object.entries(block.limits)) {
+      const origin = where(`${prefix}limits.${metric}`);
+      origins[`limits.${metric}`] = origin;
+      if (setting === null) {
+        limits.delete(metric);
+        continue;
+      }
+      // Key by key: an override can change a severity and keep the bound set above it.
+      const state: LimitState = { ...(limits.get(metric) ?? {}), origin };
+      if (setting.max !== undefined) state.max = setting.max;
+      if (setting.min !== undefined) state.min = setting.min;
+      if (setting.maxIncreasePct !== undefined) state.maxIncreasePct = setting.maxIncreasePct;
+      if (setting.severity !== undefined) state.severity = setting.severity;
+      limits.set(metric, state);
+    }
+    for (const [id, level] of Object.entries(block.rules)) {
+      rules[id] = level;
+      origins[`rules.${id}`] = where(`${prefix}rules.${id}`);
+    }
+  };
+
+  layer(policy, '');
+  policy.overrides.forEach((override, index) => {
+    if (matcherFor(override.files)(file)) layer(override, `overrides[${index}].`);
+  });
+
+  const resolved: Record<string, Limit> = Object.create(null);
+  // Contract order, so reports list limits the same way every time.
+  for (const metric of METRIC_PATHS) {
+    const state = limits.get(metric);
+    if (!state) continue;
+    const limit: Limit = { severity: state.severity ?? 'block' };
+    if (typeof state.max === 'number') limit.max = state.max;
+    if (typeof state.min === 'number') limit.min = state.min;
+    if (typeof state.maxIncreasePct === 'number') limit.maxIncreasePct = state.maxIncreasePct;
+    if (limit.max !== undefined || limit.min !== undefined || limit.maxIncreasePct !== undefined) resolved[metric] = limit;
+  }
+  return {
+    limits: resolved,
+    rules,
+    standing: policy.standing,
+    serving: serving as ServingPatch,
+    waiverLabel: policy.waiverLabel,
+    origins,
+  };
+}
+
+/** The level a rule runs at for one config: the policy's choice, else the rule's own severity. */
+export function ruleLevel(filePolicy: Pick<FilePolicy, 'rules'>, ruleId: string, ownSeverity: Severity): RuleLevel {
+  return Object.prototype.hasOwnProperty.call(filePolicy.rules, ruleId) ? filePolicy.rules[ruleId] : ownSeverity;
+}

@@ -1,0 +1,204 @@
+import { execFileSync } from 'node:child_process';
+import { chmodSync, mkdirSync, mkdtempSync, rmSync, statSync, symlinkSync, unlinkSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { ContentTooLargeError, GitError, MAX_CONFIG_BYTES, createGitReader, parseNameStatus } from '../../src/action/git.js';
+import type { GitReader } from '../../src/action/git.js';
+
+let root: string;
+let repo: string;
+let base: string;
+let head: string;
+let reader: GitReader;
+
+function git(...args: string[]): string {
+  return execFileSync('git', args, {
+    cwd: repo,
+    encoding: 'utf8',
+    env: { ...process.env, GIT_AUTHOR_NAME: 'Test Author', GIT_AUTHOR_EMAIL: 'author@example.invalid', GIT_COMMITTER_NAME: 'Test Author', GIT_COMMITTER_EMAIL: 'author@example.invalid' },
+  }).trim();
+}
+
+function write(path: string, content: string | Buffer): void {
+  mkdirSync(dirname(join(repo, path)), { recursive: true });
+  writeFileSync(join(repo, path), content);
+}
+
+const CONFIG_A = '{"hidden_size": 4096, "num_attention_heads": 32}\n';
+const RENAMED = `${'{"layers": 24, "hidden": 2048, "heads": 16, "span": 4096}\n'.repeat(20)}`;
+const ODD_NAME = 'models/ü ber #1 [x]*.json';
+const NEWLINE_NAME = 'models/line\nbreak.json';
+
+beforeAll(() => {
+  root = mkdtempSync(join(tmpdir(), 'context-reach-git-'));
+  repo = join(root, 'repo');
+  mkdirSync(repo);
+  git('init', '-q', '-b', 'main');
+  write('models/a/config.json', CONFIG_A);
+  write('models/old.reach.yaml', RENAMED);
+  write('notes/delete-me.txt', 'gone soon\n');
+  write('models/stays.json', '{}\n');
+  git('add', '-A');
+  git('commit', '-q', '-m', 'base');
+  base = git('rev-parse', 'HEAD');
+
+  write('models/a/config.json', CONFIG_A.replace('4096', '5120'));
+  git('mv', 'models/old.reach.yaml', 'models/new.reach.yaml');
+  git('rm', '-q', 'notes/delete-me.txt');
+  write(ODD_NAME, '{"odd": true}\n');
+  write(NEWLINE_NAME, '{"newline": true}\n');
+  // A link out of the checkout, a link to a file inside it, and a directory reached through a link.
+  symlinkSync('../../../../etc/passwd', join(repo, 'models/outside.json'));
+  symlinkSync('a/config.json', join(repo, 'models/inside.json'));
+  symlinkSync('models/a', join(repo, 'linked'));
+  // One byte past the limit: refused by size, never read.
+  write('models/big/config.json', Buffer.alloc(MAX_CONFIG_BYTES + 1, 0x20));
+  write('models/exact/config.json', Buffer.alloc(MAX_CONFIG_BYTES, 0x20));
+  git('add', '-A');
+  git('commit', '-q', '-m', 'head');
+  head = git('rev-parse', 'HEAD');
+  reader = createGitReader(repo);
+});
+
+afterAll(() => {
+  rmSync(root, { recursive: true, force: true });
+});
+
+describe('changedFiles(base, head)', () => {
+  test('lists modified, renamed (with the old path), deleted and added files as git diff does', async () => {
+    const files = await reader.changedFiles(base, head);
+    const byPath = new Map(files.map((file) => [file.path, file]));
+    expect(byPath.get('models/a/config.json')).toEqual({ status: 'modified', path: 'models/a/config.json', previousPath: null });
+    expect(byPath.get('models/new.reach.yaml')).toEqual({ status: 'renamed', path: 'models/new.reach.yaml', previousPath: 'models/old.reach.yaml' });
+    expect(byPath.get('notes/delete-me.txt')).toEqual({ status: 'deleted', path: 'notes/delete-me.txt', previousPath: null });
+    expect(byPath.get(ODD_NAME)?.status).toBe('added');
+    expect(byPath.get(NEWLINE_NAME)?.status).toBe('added');
+    expect(byPath.get('models/outside.json')?.status).toBe('added');
+    expect(byPath.has('models/stays.json')).toBe(false);
+    // Cross-check the count against git's own summary of the same diff.
+    expect(files).toHaveLength(git('diff', '--name-only', '-M', base, head, '-z').split('\u0000').filter(Boolean).length);
+  });
+
+  test('is empty between a commit and itself', async () => {
+    expect(await reader.changedFiles(head, head)).toEqual([]);
+  });
+});
+
+describe('show(commit, path)', () => {
+  test('gives the bytes of a file at each commit', async () => {
+    expect(Buffer.from((await reader.show(base, 'models/a/config.json')) as Uint8Array).toString('utf8')).toBe(CONFIG_A);
+    expect(Buffer.from((await reader.show(head, 'models/a/config.json')) as Uint8Array).toString('utf8')).toBe(CONFIG_A.replace('4096', '5120'));
+  });
+
+  test('reads names with spaces, glob characters, non-ASCII letters and a newline exactly', async () => {
+    expect(Buffer.from((await reader.show(head, ODD_NAME)) as Uint8Array).toString('utf8')).toBe('{"odd": true}\n');
+    expect(Buffer.from((await reader.show(head, NEWLINE_NAME)) as Uint8Array).toString('utf8')).toBe('{"newline": true}\n');
+    // "*" in the name is not a pattern: no other file answers for it.
+    expect(await reader.show(head, 'models/ü ber #1 [x]x.json')).toBeNull();
+  });
+
+  test('is null for a path absent at that commit (the renamed file at base, the deleted one at head)', async () => {
+    expect(await reader.show(base, 'models/new.reach.yaml')).toBeNull();
+    expect(await reader.show(head, 'notes/delete-me.txt')).toBeNull();
+    expect(await reader.show(head, 'models/none/config.json')).toBeNull();
+  });
+
+  test('never follows a symlink: out of the checkout, inside it, or as a parent directory', async () => {
+    expect(await reader.show(head, 'models/outside.json')).toBeNull();
+    expect(await reader.show(head, 'models/inside.json')).toBeNull();
+    expect(await reader.show(head, 'linked/config.json')).toBeNull();
+    expect(await reader.entry(head, 'models/outside.json')).toEqual(expect.objectContaining({ kind: 'symlink', mode: '120000' }));
+  });
+
+  test('is null for a directory', async () => {
+    expect(await reader.show(head, 'models/a')).toBeNull();
+    expect((await reader.entry(head, 'models/a'))?.kind).toBe('directory');
+  });
+
+  test('reads a file of exactly MAX_CONFIG_BYTES and refuses one byte more', async () => {
+    expect(MAX_CONFIG_BYTES).toBe(4 * 1024 * 1024);
+    expect((await reader.show(head, 'models/exact/config.json'))?.byteLength).toBe(statSync(join(repo, 'models/exact/config.json')).size);
+    const error = await reader.show(head, 'models/big/config.json').catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(ContentTooLargeError);
+    expect((error as ContentTooLargeError).size).toBe(statSync(join(repo, 'models/big/config.json')).size);
+    expect((error as Error).message).toContain('models/big/config.json');
+  });
+
+  test('refuses paths that climb out or are absolute, before running git', async () => {
+    for (const path of ['../etc/passwd', '/etc/passwd', 'models/../../x', '', 'a//b']) {
+      await expect(reader.show(head, path)).rejects.toBeInstanceOf(GitError);
+    }
+  });
+});
+
+describe('hasCommit(rev), resolveCommit(rev), mergeBase(a, b)', () => {
+  test('knows the commits of the repository and no others', async () => {
+    expect(await reader.hasCommit(base)).toBe(true);
+    expect(await reader.hasCommit('main')).toBe(true);
+    expect(await reader.hasCommit('0123456789abcdef0123456789abcdef01234567')).toBe(false);
+    expect(await reader.resolveCommit('HEAD')).toBe(head);
+    expect(await reader.resolveCommit('no-such-branch')).toBeNull();
+  });
+
+  test('mergeBase of a commit and its descendant is the commit', async () => {
+    expect(await reader.mergeBase(base, head)).toBe(git('merge-base', base, head));
+    expect(await reader.mergeBase(base, head)).toBe(base);
+  });
+
+  test('a revision that looks like an option is refused, not passed to git', async () => {
+    await expect(reader.hasCommit('--output=/tmp/x')).rejects.toBeInstanceOf(GitError);
+    await expect(reader.changedFiles('-p', head)).rejects.toThrow(/not usable/);
+    await expect(reader.changedFiles(base, 'HEAD with space')).rejects.toThrow(/not usable/);
+  });
+
+  test('outside a repository git\'s failure is an error, not "no such commit"', async () => {
+    const empty = mkdtempSync(join(root, 'not-a-repo-'));
+    const error = await createGitReader(empty).hasCommit('HEAD').catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(GitError);
+    expect((error as GitError).exitCode).toBe(128);
+  });
+});
+
+describe('bounds', () => {
+  test('a git call that runs past the timeout is stopped', async () => {
+    const slow = join(root, 'slow-git');
+    writeFileSync(slow, '#!/bin/sh\nsleep 5\n');
+    chmodSync(slow, 0o755);
+    const started = Date.now();
+    const error = await createGitReader(repo, { git: slow, timeoutMs: 200 }).hasCommit('HEAD').catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(GitError);
+    expect((error as Error).message).toMatch(/did not finish within 200 ms/);
+    expect(Date.now() - started).toBeLessThan(4000);
+    unlinkSync(slow);
+  });
+
+  test('listing output past its bound is refused', async () => {
+    const error = await createGitReader(repo, { maxListBytes: 16 }).changedFiles(base, head).catch((e: unknown) => e);
+    expect((error as Error).message).toMatch(/more than 16 bytes/);
+  });
+
+  test('a missing git executable is a clear error', async () => {
+    const error = await createGitReader(repo, { git: join(root, 'no-git-here') }).hasCommit('HEAD').catch((e: unknown) => e);
+    expect((error as Error).message).toMatch(/could not be started \(ENOENT\)/);
+  });
+});
+
+describe('parseNameStatus(output)', () => {
+  test('reads type changes as modified and copies as added', () => {
+    expect(parseNameStatus('T\u0000a.json\u0000C075\u0000b.json\u0000c.json\u0000')).toEqual([
+      { status: 'modified', path: 'a.json', previousPath: null },
+      { status: 'added', path: 'c.json', previousPath: null },
+    ]);
+  });
+
+  test('refuses an unknown status and a record cut short', () => {
+    expect(() => parseNameStatus('X\u0000a.json\u0000')).toThrow(/status "X"/);
+    expect(() => parseNameStatus('R100\u0000a.json\u0000')).toThrow(/ends inside/);
+    expect(() => parseNameStatus('M\u0000')).toThrow(/ends after status/);
+  });
+
+  test('is empty for empty output', () => {
+    expect(parseNameStatus('')).toEqual([]);
+  });
+});

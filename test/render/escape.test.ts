@@ -1,0 +1,84 @@
+import { marked } from 'marked';
+import { describe, expect, it } from 'vitest';
+import { markdownTable } from 'markdown-table';
+import { codeSpan, encodePath, escapeHtml, escapeMarkdown } from '../../src/core/render/escape.js';
+import { COMMENT_MARKER } from '../../src/core/render/notice.js';
+
+// Rendered with `marked` in GFM mode, a general-purpose GFM renderer from npm, standing in for
+// GitHub's renderer. Mentions and references are GitHub features marked does not have, so those
+// are checked on the text: no `@` or `#` directly followed by a word character may remain.
+const render = (md: string) => marked.parse(md, { gfm: true, async: false }) as string;
+
+const HOSTILE = [
+  '<script>alert(1)</script>',
+  '<img src=x onerror=alert(1)>',
+  '[click](https://evil.example/steal)',
+  'https://evil.example/x and www.evil.example',
+  '@someone and @org/team',
+  'fixes #123 and GH-1',
+  '`code` and ``two``',
+  '**bold** _em_ ~~strike~~',
+  '<!-- hidden --> and ' + COMMENT_MARKER,
+  'a | b | c',
+  'line\nbreak\r\nand\u2028more',
+  '![image](https://evil.example/i.png)',
+  '<details open><summary>x</summary>',
+  '&lt;script&gt; already escaped',
+  '\\| escaped pipe',
+];
+
+describe('escapeMarkdown(text)', () => {
+  it.each(HOSTILE)('renders %j as text with no element, link or comment', (input) => {
+    const html = render(`before ${escapeMarkdown(input)} after`);
+    expect(html).not.toMatch(/<(script|img|a|details|summary|strong|em|del|code)\b/i);
+    expect(html).not.toContain('<!--');
+    expect(html.trim().startsWith('<p>')).toBe(true);
+    expect(html.match(/<p>/g)).toHaveLength(1);
+  });
+
+  it('leaves no mention, team mention or issue reference', () => {
+    // Entities are decoded before GitHub looks for references, so decode them here too.
+    const text = escapeMarkdown('@someone @org/team #123 user@example.com').replace(/&#35;/g, '#');
+    expect(text).not.toMatch(/@\w/);
+    expect(text).not.toMatch(/#\d/);
+  });
+
+  it('keeps a table at three columns whatever the cells hold', () => {
+    const table = markdownTable([
+      ['a', 'b', 'c'],
+      ...HOSTILE.map((h) => [escapeMarkdown(h), escapeMarkdown(h), 'x']),
+    ]);
+    const html = render(table);
+    const rows = html.match(/<tr>[\s\S]*?<\/tr>/g) ?? [];
+    expect(rows).toHaveLength(HOSTILE.length + 1);
+    for (const row of rows) expect(row.match(/<t[dh][ >]/g)).toHaveLength(3);
+  });
+
+  it('prints the same visible text (zero-width spaces aside) for plain punctuation', () => {
+    const input = 'rope_scaling.factor = 4 (was 2) [ok] *x* -1 + 2 ! ~';
+    const html = render(escapeMarkdown(input));
+    const text = html.replace(/<\/?p>/g, '').replace(/\u200b/g, '').trim();
+    expect(text).toBe(input);
+  });
+});
+
+describe('escapeHtml(text)', () => {
+  it('escapes the five HTML-significant characters', () => {
+    expect(escapeHtml(`<a href="x" title='y'>&</a>`)).toBe('&lt;a href=&quot;x&quot; title=&#39;y&#39;&gt;&amp;&lt;/a&gt;');
+  });
+});
+
+describe('codeSpan(text)', () => {
+  it('shows a key containing backticks as code without breaking out', () => {
+    const html = render(`key ${codeSpan('a`b`<i>c</i>')} end`);
+    expect(html).toContain('<code>');
+    expect(html).not.toMatch(/<i>/);
+  });
+});
+
+describe('encodePath(path)', () => {
+  it('percent-encodes each segment so a path cannot leave the link', () => {
+    expect(encodePath('models/a b/c)d.json')).toBe('models/a%20b/c)d.json');
+    expect(encodePath('x/../y?z#w')).toBe('x/../y%3Fz%23w');
+  });
+});
