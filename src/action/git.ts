@@ -89,14 +89,16 @@ function checkPath(path: string): string {
 
 const KINDS: Record<string, TreeEntryKind> = { blob: 'file', tree: 'directory', commit: 'submodule' };
 
-export function createGitReader(cwd: string, options: GitReaderOptions = {}): GitReader {
-  const git = options.git ?? 'git';
-  const timeout = options.timeoutMs ?? 30_000;
-  const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
-  const maxFile = options.maxFileBytes ?? MAX_CONFIG_BYTES;
+type Run = (args: string[], maxBuffer: number) => Promise<RunResult>;
 
-  /** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
-  function run(args: string[], maxBuffer: number): Promise<RunResult> {
+/** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
+/** The git command of an argument list (`commit` in `-c user.name=x commit -m y`), for messages. */
+function verb(args: readonly string[]): string {
+  return args.find((arg, i) => !arg.startsWith('-') && args[i - 1] !== '-c') ?? 'command';
+}
+
+function runner(cwd: string, git: string, timeout: number): Run {
+  return function run(args, maxBuffer) {
     // The checkout's own settings stay, but nothing may prompt or run a file-system monitor.
     const full = ['-c', 'core.fsmonitor=false', '-c', 'core.quotePath=false', ...args];
     return new Promise((resolve, reject) => {
@@ -115,9 +117,9 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
         }
         const failure = error as NodeJS.ErrnoException & { code?: string | number; killed?: boolean; signal?: string | null };
         if (failure.code === 'ERR_CHILD_PROCESS_STDIO_MAXBUFFER') {
-          reject(new GitError(`git ${args[0]} wrote more than ${maxBuffer} bytes; expected less (output refused)`, args, null, errText));
+          reject(new GitError(`git ${verb(args)} wrote more than ${maxBuffer} bytes; expected less (output refused)`, args, null, errText));
         } else if (failure.killed || failure.signal) {
-          reject(new GitError(`git ${args[0]} did not finish within ${timeout} ms (stopped with ${failure.signal ?? 'a signal'})`, args, null, errText));
+          reject(new GitError(`git ${verb(args)} did not finish within ${timeout} ms (stopped with ${failure.signal ?? 'a signal'})`, args, null, errText));
         } else if (typeof failure.code === 'number') {
           resolve({ code: failure.code, stdout, stderr: errText });
         } else {
@@ -125,12 +127,20 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
         }
       });
     });
-  }
+  };
+}
 
-  function failed(args: string[], result: RunResult): GitError {
-    const reason = result.stderr.split('\n')[0] || 'no message';
-    return new GitError(`git ${args.join(' ')} failed with exit status ${result.code}: ${reason}`, args, result.code, result.stderr);
-  }
+function failed(args: string[], result: RunResult): GitError {
+  const reason = result.stderr.split('\n')[0] || 'no message';
+  return new GitError(`git ${args.join(' ')} failed with exit status ${result.code}: ${reason}`, args, result.code, result.stderr);
+}
+
+export function createGitReader(cwd: string, options: GitReaderOptions = {}): GitReader {
+  const git = options.git ?? 'git';
+  const timeout = options.timeoutMs ?? 30_000;
+  const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
+  const maxFile = options.maxFileBytes ?? MAX_CONFIG_BYTES;
+  const run = runner(cwd, git, timeout);
 
   async function resolveCommit(rev: string): Promise<string | null> {
     const args = ['rev-parse', '--verify', '--quiet', `${checkRevision(rev)}^{commit}`];
@@ -200,6 +210,38 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
   };
 }
 
+/** A throwaway repository the demo and tests commit trees into. */
+export interface ScratchRepository {
+  /** `git init` with `main` as the branch. */
+  init(): Promise<void>;
+  /** Stages everything in the working tree and commits it; resolves with the new commit id. */
+  commitAll(message: string): Promise<string>;
+}
+
+/** Identity of scratch commits: invented, so no one's global git settings are needed or used. */
+const SCRATCH_IDENTITY = ['-c', 'user.name=context-reach demo', '-c', 'user.email=demo@example.invalid', '-c', 'commit.gpgsign=false'];
+
+export function createScratchRepository(cwd: string, options: Pick<GitReaderOptions, 'git' | 'timeoutMs'> = {}): ScratchRepository {
+  const run = runner(cwd, options.git ?? 'git', options.timeoutMs ?? 30_000);
+  const must = async (args: string[]): Promise<string> => {
+    const result = await run(args, 1024 * 1024);
+    if (result.code !== 0) throw failed(args, result);
+    return result.stdout.toString('utf8').trim();
+  };
+  return {
+    async init() {
+      await must(['init', '-q']);
+      // `init -b` needs git 2.28; pointing HEAD works on any git.
+      await must(['symbolic-ref', 'HEAD', 'refs/heads/main']);
+    },
+    async commitAll(message) {
+      await must(['add', '-A']);
+      await must([...SCRATCH_IDENTITY, 'commit', '-q', '--allow-empty', '--no-verify', '-m', message]);
+      return must(['rev-parse', 'HEAD']);
+    },
+  };
+}
+
 /**
  * Parses `git diff --name-status -z` output: `STATUS NUL path NUL`, or for renames and copies
  * `R<score> NUL old NUL new NUL`. Copies count as added files; type changes as modified.
@@ -228,33 +270,4 @@ export function parseNameStatus(output: string): ChangedFile[] {
     i += 2;
   }
   return files;
-}
-
-/** A throwaway repository the CLI's demo writes commits into (never the user's checkout). */
-export interface ScratchRepository {
-  init(): Promise<void>;
-  /** Stages everything in the work tree and commits it; returns the new commit's id. */
-  commitAll(message: string): Promise<string>;
-}
-
-export function createScratchRepository(cwd: string, git = 'git'): ScratchRepository {
-  const run = (args: string[]) => new Promise<string>((resolve, reject) => {
-    execFile(git, ['-c', 'user.name=context-reach demo', '-c', 'user.email=demo@context-reach.invalid', '-c', 'commit.gpgsign=false', ...args], {
-      cwd, timeout: 30_000, maxBuffer: 1024 * 1024,
-      env: { ...process.env, GIT_TERMINAL_PROMPT: '0', LC_ALL: 'C' },
-    }, (error, stdout, stderr) => {
-      if (error) reject(new GitError(`git ${args[0]} failed in the scratch repository: ${String(stderr).split('\n')[0] || error.message}`, args, null, String(stderr)));
-      else resolve(String(stdout).trim());
-    });
-  });
-  return {
-    async init() {
-      await run(['init', '--quiet', '--initial-branch=main']);
-    },
-    async commitAll(message) {
-      await run(['add', '--all']);
-      await run(['commit', '--quiet', '--allow-empty', '--no-verify', '-m', message]);
-      return run(['rev-parse', 'HEAD']);
-    },
-  };
 }

@@ -163,7 +163,17 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
 
   /** Whatever octokit or a plugin logs passes here first: the token is cut out of every line. */
   const redact = (args: unknown[]): string => {
-    let text = args.map((arg) => (arg instanceof Error ? arg.message : typeof arg === 'string' ? arg : JSON.stringify(arg) ?? String(arg))).join(' ');
+    const show = (arg: unknown): string => {
+      if (arg instanceof Error) return arg.message;
+      if (typeof arg === 'string') return arg;
+      try {
+        return JSON.stringify(arg) ?? String(arg);
+      } catch {
+        // Circular request objects: their shape is not worth a crash in a log call.
+        return String(arg);
+      }
+    };
+    let text = args.map(show).join(' ');
     if (token.length >= 4) text = text.split(token).join('***');
     return text;
   };

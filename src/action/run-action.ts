@@ -36,7 +36,9 @@ interface Changes {
 
 /** Base and head, the changed files and a way to read them: local git when it has both commits, else the REST API. */
 async function gatherChanges(event: EventInfo, base: string, git: GitReader, api: GitHubClient | null): Promise<Changes> {
-  const [baseSha, headSha] = await Promise.all([git.resolveCommit(base), git.resolveCommit(event.head)]);
+  // A checkout without the history (or without git at all) falls back to the API.
+  const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
+  const [baseSha, headSha] = await Promise.all([local(base), local(event.head)]);
   if (baseSha !== null && headSha !== null) {
     return {
       base: baseSha, head: headSha, changes: await git.changedFiles(baseSha, headSha),

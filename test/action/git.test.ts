@@ -3,7 +3,9 @@ import { chmodSync, mkdirSync, mkdtempSync, rmSync, statSync, symlinkSync, unlin
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { ContentTooLargeError, GitError, MAX_CONFIG_BYTES, createGitReader, parseNameStatus } from '../../src/action/git.js';
+import {
+  ContentTooLargeError, GitError, MAX_CONFIG_BYTES, createGitReader, createScratchRepository, parseNameStatus,
+} from '../../src/action/git.js';
 import type { GitReader } from '../../src/action/git.js';
 
 let root: string;
@@ -200,5 +202,34 @@ describe('parseNameStatus(output)', () => {
 
   test('is empty for empty output', () => {
     expect(parseNameStatus('')).toEqual([]);
+  });
+});
+
+describe('createScratchRepository(cwd)', () => {
+  test('init and commitAll build a repository the reader can compare, with no git identity configured anywhere', async () => {
+    const scratch = mkdtempSync(join(root, 'scratch-'));
+    const emptyConfig = join(root, 'empty-gitconfig');
+    writeFileSync(emptyConfig, '');
+    const saved = { global: process.env.GIT_CONFIG_GLOBAL, nosystem: process.env.GIT_CONFIG_NOSYSTEM };
+    // Hide the machine's own settings: the scratch identity must be enough on a bare runner.
+    process.env.GIT_CONFIG_GLOBAL = emptyConfig;
+    process.env.GIT_CONFIG_NOSYSTEM = '1';
+    try {
+      const repository = createScratchRepository(scratch);
+      await repository.init();
+      writeFileSync(join(scratch, 'config.json'), '{"n_positions": 1024}\n');
+      const first = await repository.commitAll('before');
+      writeFileSync(join(scratch, 'config.json'), '{"n_positions": 2048}\n');
+      const second = await repository.commitAll('after');
+      const reader = createGitReader(scratch);
+      expect(await reader.resolveCommit('main')).toBe(second);
+      expect(await reader.changedFiles(first, second)).toEqual([{ status: 'modified', path: 'config.json', previousPath: null }]);
+      expect(execFileSync('git', ['log', '-1', '--format=%an <%ae>'], { cwd: scratch, encoding: 'utf8' }).trim()).toBe('context-reach demo <demo@example.invalid>');
+      // A commit with nothing changed still gets its own id.
+      expect(await repository.commitAll('again')).not.toBe(second);
+    } finally {
+      if (saved.global === undefined) delete process.env.GIT_CONFIG_GLOBAL; else process.env.GIT_CONFIG_GLOBAL = saved.global;
+      if (saved.nosystem === undefined) delete process.env.GIT_CONFIG_NOSYSTEM; else process.env.GIT_CONFIG_NOSYSTEM = saved.nosystem;
+    }
   });
 });

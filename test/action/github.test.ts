@@ -51,6 +51,7 @@ afterEach(async () => {
   // Every request the adapter made is one GitHub's REST description allows, and the fake's answers match it too.
   expect(fake.mismatches).toEqual([]);
   expect(fake.responseMismatches).toEqual([]);
+  expect(fake.unhandled).toEqual([]);
   for (const line of logs) expect(line).not.toContain(fake.state.token);
   expect(fake.requests.every((request) => request.authorized || request.fault)).toBe(true);
   await fake.close();

@@ -3,23 +3,7 @@ import { ReadError } from '../../src/core/parse/errors.js';
 import {
   FORBIDDEN_KEYS, MAX_ALIASES, MAX_NESTING, MAX_TEXT_LENGTH, decodeText, parseSource,
 } from '../../src/core/parse/source.js';
-
-/** 1-based line of the first line containing `needle`, found by scanning the text itself. */
-function lineOf(text: string, needle: string): number {
-  const index = text.split('\n').findIndex((l) => l.includes(needle));
-  if (index < 0) throw new Error(`test text lacks ${needle}`);
-  return index + 1;
-}
-
-function readError(run: () => unknown): ReadError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof ReadError) return error;
-    throw error;
-  }
-  throw new Error('expected a ReadError');
-}
+import { lineOf, readError } from './helpers.js';
 
 const JSON_TEXT = `{
   "model_type": "llama",

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { DEFAULT_EXCLUDE, DEFAULT_FILES, MAX_POLICY_CHARS, PolicyError, parsePolicy } from '../../src/core/policy/index.js';
+import { DEFAULT_EXCLUDE, DEFAULT_FILES, MAX_POLICY_CHARS, PolicyError, parsePolicy, parsePolicyBytes } from '../../src/core/policy/index.js';
 
 const FILE = '.github/context-reach.yml';
 
@@ -210,5 +210,29 @@ describe('parsePolicy(text, path)', () => {
 
   test('hexadecimal and exponent numbers are numbers (YAML 1.2 core schema)', () => {
     expect(parsePolicy('serving:\n  span: 0x1000\n  device-memory-gib: 8e1\n', FILE).serving).toEqual({ span: 4096, deviceGiB: 80 });
+  });
+});
+
+describe('parsePolicyBytes(bytes, path)', () => {
+  const encode = (text: string): Uint8Array => new TextEncoder().encode(text);
+
+  test('reads UTF-8 text, with or without a byte-order mark', () => {
+    expect(parsePolicyBytes(encode('standing: block\n'), FILE).standing).toBe('block');
+    expect(parsePolicyBytes(new Uint8Array([0xef, 0xbb, 0xbf, ...encode('standing: block\n')]), FILE).standing).toBe('block');
+  });
+
+  test('refuses bytes that are not UTF-8, naming the line of the first bad byte', () => {
+    // 0xFF never occurs in UTF-8 (RFC 3629, section 1).
+    const bytes = new Uint8Array([...encode('standing: report\nwaiver-label: a'), 0xff, ...encode('\n')]);
+    expect(() => parsePolicyBytes(bytes, FILE)).toThrow(`${FILE}:2: is not UTF-8 text; expected a YAML file saved as UTF-8`);
+  });
+
+  test('refuses more than MAX_POLICY_CHARS bytes without decoding them', () => {
+    const error = (() => { try { parsePolicyBytes(new Uint8Array(MAX_POLICY_CHARS + 1), FILE); } catch (e) { return e as PolicyError; } return null; })();
+    expect(error?.message).toBe(`${FILE}: is ${MAX_POLICY_CHARS + 1} bytes long; expected at most ${MAX_POLICY_CHARS} (a policy is a short file)`);
+  });
+
+  test('binary content (NUL bytes) is an error with a line, not a crash', () => {
+    expect(() => parsePolicyBytes(new Uint8Array([0, 1, 2, 3, 10, 0]), FILE)).toThrow(PolicyError);
   });
 });

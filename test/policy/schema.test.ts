@@ -38,6 +38,7 @@ describe('schema/policy.schema.json', () => {
     }
   });
 
+  // After adding a rule: node scripts/sync-policy-schema-rules.mjs
   test('enumerates exactly the rule ids of the catalogue, each with a description', () => {
     expect(Object.keys(definitions.rules.properties).sort()).toEqual(Object.keys(RULES).sort());
     for (const [id, entry] of Object.entries(definitions.rules.properties as Record<string, Schema>)) {

@@ -110,6 +110,8 @@ export interface FakeGitHub {
   mismatches: Mismatch[];
   /** Answers of the fake that do not match the description (a fault in the fake itself). */
   responseMismatches: Mismatch[];
+  /** Valid operations the fake has no handler for (answered 404): the adapter called something new. */
+  unhandled: string[];
   /** Queues faults for an operation id (e.g. `issues/create-comment`), or `*` for any request. */
   fail(operationId: string, ...faults: Fault[]): void;
   /** Requests for one operation id. */
@@ -204,6 +206,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
   const requests: LoggedRequest[] = [];
   const mismatches: Mismatch[] = [];
   const responseMismatches: Mismatch[] = [];
+  const unhandled: string[] = [];
   const faults = new Map<string, Fault[]>();
   let url = '';
 
@@ -379,6 +382,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         return { status: 204 };
       }
       default:
+        unhandled.push(`${operation.method} ${operation.template} (${operation.operationId})`);
         return notFound();
     }
   }
@@ -461,6 +465,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     requests,
     mismatches,
     responseMismatches,
+    unhandled,
     fail(operationId, ...queued) {
       faults.set(operationId, [...(faults.get(operationId) ?? []), ...queued]);
     },

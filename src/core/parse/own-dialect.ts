@@ -185,7 +185,8 @@ function orderedPair(r: FieldReader, at: string[], lowKey: string, low: number |
 function schemaFinding(r: FieldReader, error: ErrorObject): void {
   const pointer = error.instancePath;
   // Numbers of the wrong kind (1e400, 2.5 layers) are the readers' and the spec rules' to report.
-  if (error.keyword === 'type' && typeof error.data === 'number') return;
+  const expects = String((error.params as { type?: unknown }).type ?? '');
+  if (error.keyword === 'type' && typeof error.data === 'number' && (expects === 'integer' || expects === 'number')) return;
   if (RULE_CHECKED.has(pointer) && RANGE_KEYWORDS.has(error.keyword)) return;
   const path: PathSegment[] = parsePointer(pointer);
   const key = r.key(path);

@@ -14,9 +14,15 @@ export function truncate(s: string, max = MAX_QUOTED): string {
   return s.length <= max ? s : `${s.slice(0, max - 1)}…`;
 }
 
-/** A number as a reader would write it: `-0` stays `-0`, others as JavaScript prints them. */
+/**
+ * A number as a reader would write it: `-0` stays `-0`, whole numbers past 2^53 in full (the
+ * exact value of the double, not JavaScript's shortest form `1152921504606847000`), others as
+ * JavaScript prints them.
+ */
 export function formatNumber(n: number): string {
-  return Object.is(n, -0) ? '-0' : String(n);
+  if (Object.is(n, -0)) return '-0';
+  if (Number.isInteger(n) && !Number.isSafeInteger(n) && Math.abs(n) < 1e21) return BigInt(n).toString();
+  return String(n);
 }
 
 /** A string in double quotes with JSON escapes, so spaces, quotes and controls stay visible. */

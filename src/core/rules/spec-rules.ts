@@ -127,13 +127,13 @@ function derivation(spec: ModelSpec, locations: LocationMap, field: string): { s
   const key = (f: string): string => locations[f]?.key ?? f;
   if (field === 'headDim' && isCount(spec.hidden) && isCount(spec.heads)) {
     return {
-      subject: `the head width is not stated, and ${key('hidden')} / ${key('heads')} = ${spec.hidden} / ${spec.heads} = ${formatNumber(spec.headDim)}`,
+      subject: `the head width is not stated, and ${key('hidden')} / ${key('heads')} = ${spec.hidden} / ${spec.heads} = ${formatNumber(Number(spec.headDim.toPrecision(6)))}`,
       advice: `state the width of one head, or use a head count that divides ${spec.hidden}`,
     };
   }
   if (field === 'encoder.headDim' && spec.encoder && isCount(spec.hidden) && isCount(spec.encoder.heads)) {
     return {
-      subject: `the encoder head width is not stated, and ${key('hidden')} / ${key('encoder.heads')} = ${spec.hidden} / ${spec.encoder.heads} = ${formatNumber(spec.encoder.headDim)}`,
+      subject: `the encoder head width is not stated, and ${key('hidden')} / ${key('encoder.heads')} = ${spec.hidden} / ${spec.encoder.heads} = ${formatNumber(Number(spec.encoder.headDim.toPrecision(6)))}`,
       advice: `state the width of one encoder head, or use an encoder head count that divides ${spec.hidden}`,
     };
   }

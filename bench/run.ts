@@ -1,0 +1,229 @@
+/**
+ * Benchmark for issue 4: speed of the exact positional scans.
+ *
+ *   W1  one rotary config, 64 pairs, T = 2^20, all positional metrics in fp32, bf16, fp16
+ *       (computeMetrics, in process, median of several warm runs; also cold in a child process)
+ *   W2  the same at T = 2^24, wall time and peak RSS measured in a child process
+ *   baselines at W1: the straightforward TypeScript loops (bench/straightforward.ts), numpy
+ *   (bench/numpy_baseline.py via python3; skipped with a line when missing), and a calibration
+ *   loop of one multiply-add per (position, pair) element.
+ *
+ * All results must agree (counts identical, floats within 1e-9 relative) before any ratio is
+ * printed; then bench/results.json is written. Run from the repository root. Flags:
+ * `--runs=N` (default 5), `--baseline-runs=N` (default 3), `--strict` (exit 1 when a target is missed).
+ */
+import { spawnSync } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { computeMetrics, frequencyPlan } from '../src/core/metrics/compute.js';
+import type { Metrics } from '../src/core/metrics/types.js';
+import type { FloatFormat } from '../src/core/model.js';
+import { calibrationLoop } from './calibration.js';
+import { straightforwardScan } from './straightforward.js';
+import type { ScanResult } from './straightforward.js';
+import { W1, W2 } from './workloads.js';
+import type { Workload } from './workloads.js';
+
+const FORMATS: FloatFormat[] = ['fp32', 'bf16', 'fp16'];
+const TARGETS = { w1MaxMs: 500, w1MaxCalibrationRatio: 4, w2MaxRssMiB: 200, w2MaxW1Ratio: 20 };
+
+function flag(name: string, fallback: number): number {
+  const hit = process.argv.find((a) => a.startsWith(`--${name}=`));
+  const n = hit ? Number(hit.split('=')[1]) : fallback;
+  return Number.isInteger(n) && n > 0 ? n : fallback;
+}
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)];
+}
+
+function timeRuns<T>(runs: number, f: () => T): { ms: number[]; result: T } {
+  const ms: number[] = [];
+  let result!: T;
+  for (let r = 0; r < runs; r++) {
+    const start = performance.now();
+    result = f();
+    ms.push(performance.now() - start);
+  }
+  return { ms, result };
+}
+
+/** The scanned metrics of a computeMetrics result, shaped like the baselines' output. */
+function scanned(m: Metrics): ScanResult {
+  const precision = {} as ScanResult['precision'];
+  for (const f of FORMATS) {
+    const p = m.precision[f];
+    precision[f] = {
+      collidingPositions: p.collidingPositions as number,
+      angleErrorMax: p.angleErrorMax,
+      overflowPosition: p.overflowPosition,
+      blurredPairs: p.blurredPairs as number,
+    };
+  }
+  return {
+    separationFloor: m.separationFloor,
+    separationFloorOffset: m.separationFloorOffset,
+    discriminationSpan: m.discriminationSpan,
+    precision,
+  };
+}
+
+/** Differences between two results: counts must be identical, floats within 1e-9 relative. */
+function disagreements(a: ScanResult, b: ScanResult, label: string): string[] {
+  const out: string[] = [];
+  const float = (x: number | null, y: number | null, what: string) => {
+    const ok = x === null || y === null ? x === y : Math.abs(x - y) <= 1e-9 * Math.max(Math.abs(y), Number.MIN_VALUE);
+    if (!ok) out.push(`${label} ${what}: ${x} vs ${y}`);
+  };
+  const count = (x: number | null, y: number | null, what: string) => {
+    if (x !== y) out.push(`${label} ${what}: ${x} vs ${y}`);
+  };
+  float(a.separationFloor, b.separationFloor, 'separationFloor');
+  count(a.separationFloorOffset, b.separationFloorOffset, 'separationFloorOffset');
+  count(a.discriminationSpan, b.discriminationSpan, 'discriminationSpan');
+  for (const f of FORMATS) {
+    count(a.precision[f].collidingPositions, b.precision[f].collidingPositions, `${f}.collidingPositions`);
+    count(a.precision[f].overflowPosition, b.precision[f].overflowPosition, `${f}.overflowPosition`);
+    count(a.precision[f].blurredPairs, b.precision[f].blurredPairs, `${f}.blurredPairs`);
+    float(a.precision[f].angleErrorMax, b.precision[f].angleErrorMax, `${f}.angleErrorMax`);
+  }
+  return out;
+}
+
+interface ChildReport {
+  ms: number;
+  maxRssKiB: number;
+  result: ScanResult;
+}
+
+/** Child mode: one cold computeMetrics run; prints wall time, peak RSS and the scanned metrics. */
+function child(name: string): void {
+  const w: Workload = name === 'W1' ? W1 : W2;
+  const start = performance.now();
+  const m = computeMetrics(w.spec);
+  const ms = performance.now() - start;
+  const report: ChildReport = { ms, maxRssKiB: process.resourceUsage().maxRSS, result: scanned(m) };
+  process.stdout.write(JSON.stringify(report));
+}
+
+function runChild(name: 'W1' | 'W2'): ChildReport {
+  const script = process.argv[1];
+  const r = spawnSync(process.execPath, [...process.execArgv, script, `--child=${name}`], { encoding: 'utf8', maxBuffer: 1 << 24 });
+  if (r.status !== 0) throw new Error(`child ${name} failed (exit ${r.status}): ${r.stderr}`);
+  return JSON.parse(r.stdout) as ChildReport;
+}
+
+interface NumpyReport {
+  skipped?: string;
+  numpy?: string;
+  ms?: number[];
+  medianMs?: number;
+  result?: ScanResult & Record<FloatFormat, ScanResult['precision'][FloatFormat]>;
+}
+
+function runNumpy(theta: Float64Array, span: number, runs: number): NumpyReport {
+  const script = path.join(process.cwd(), 'bench', 'numpy_baseline.py');
+  const r = spawnSync('python3', [script, String(span), String(runs)], {
+    input: JSON.stringify(Array.from(theta)),
+    encoding: 'utf8',
+    maxBuffer: 1 << 24,
+  });
+  if (r.error) return { skipped: `python3 could not be started: ${r.error.message}` };
+  if (r.status !== 0) throw new Error(`numpy baseline failed (exit ${r.status}): ${r.stderr}`);
+  return JSON.parse(r.stdout) as NumpyReport;
+}
+
+function main(): void {
+  const runs = flag('runs', 5);
+  const baselineRuns = flag('baseline-runs', 3);
+  const strict = process.argv.includes('--strict');
+  const theta = frequencyPlan(W1.spec, W1.span, W1.span)!.scaled;
+  const line = (s: string) => process.stdout.write(`${s}\n`);
+  line(`context-reach bench: ${theta.length} pairs, node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown cpu'})`);
+
+  computeMetrics(W1.spec); // warm-up: JIT compiles the scan kernels
+  const fast = timeRuns(runs, () => computeMetrics(W1.spec));
+  const fastResult = scanned(fast.result);
+  line(`W1 engine (warm, in process): median ${median(fast.ms).toFixed(1)} ms over ${runs} runs`);
+
+  calibrationLoop(theta, W1.span);
+  const calibration = timeRuns(runs, () => calibrationLoop(theta, W1.span));
+  line(`calibration loop (${theta.length} x 2^20 multiply-adds): median ${median(calibration.ms).toFixed(1)} ms`);
+
+  const straight = timeRuns(baselineRuns, () => straightforwardScan(theta, W1.span));
+  line(`straightforward TypeScript loops: median ${median(straight.ms).toFixed(1)} ms over ${baselineRuns} runs`);
+
+  const numpy = runNumpy(theta, W1.span, baselineRuns);
+  if (numpy.skipped) line(`numpy baseline skipped: ${numpy.skipped}`);
+  else line(`numpy ${numpy.numpy} baseline: median ${numpy.medianMs!.toFixed(1)} ms over ${baselineRuns} runs`);
+
+  const w1Cold = Array.from({ length: 3 }, () => runChild('W1'));
+  const w2 = Array.from({ length: 3 }, () => runChild('W2'));
+  const w1ColdMs = median(w1Cold.map((c) => c.ms));
+  const w2Ms = median(w2.map((c) => c.ms));
+  const w2RssMiB = Math.max(...w2.map((c) => c.maxRssKiB)) / 1024;
+  line(`W1 engine (cold, child process): median ${w1ColdMs.toFixed(1)} ms`);
+  line(`W2 engine (cold, child process): median ${w2Ms.toFixed(1)} ms, peak RSS ${w2RssMiB.toFixed(1)} MiB`);
+
+  const problems = [
+    ...disagreements(fastResult, straight.result, 'engine vs straightforward'),
+    ...w1Cold.flatMap((c) => disagreements(c.result, fastResult, 'cold child vs warm engine')),
+    ...w2.slice(1).flatMap((c) => disagreements(c.result, w2[0].result, 'W2 run vs W2 run')),
+  ];
+  if (numpy.result) {
+    const np = numpy.result;
+    const shaped: ScanResult = { ...np, precision: { fp32: np.fp32, bf16: np.bf16, fp16: np.fp16 } };
+    problems.push(...disagreements(fastResult, shaped, 'engine vs numpy'));
+  }
+  if (problems.length > 0) {
+    for (const p of problems) line(`DISAGREEMENT ${p}`);
+    line('results disagree: no ratios printed, results.json not written');
+    process.exitCode = 1;
+    return;
+  }
+  line('all results agree (counts identical, floats within 1e-9 relative)');
+
+  const w1Ms = median(fast.ms);
+  const ratios = {
+    w1OverCalibration: w1Ms / median(calibration.ms),
+    straightforwardOverW1: median(straight.ms) / w1Ms,
+    numpyOverW1: numpy.medianMs === undefined ? null : numpy.medianMs / w1Ms,
+    w2OverW1Cold: w2Ms / w1ColdMs,
+    w2OverW1Warm: w2Ms / w1Ms,
+  };
+  const targets = {
+    w1WithinMs: w1Ms <= TARGETS.w1MaxMs,
+    w1WithinCalibrationRatio: ratios.w1OverCalibration <= TARGETS.w1MaxCalibrationRatio,
+    w2WithinRss: w2RssMiB <= TARGETS.w2MaxRssMiB,
+    w2WithinW1Ratio: ratios.w2OverW1Cold <= TARGETS.w2MaxW1Ratio,
+  };
+  line(`ratios: W1/calibration ${ratios.w1OverCalibration.toFixed(2)} (target <= ${TARGETS.w1MaxCalibrationRatio}), straightforward/W1 ${ratios.straightforwardOverW1.toFixed(1)}, numpy/W1 ${ratios.numpyOverW1 === null ? 'n/a' : ratios.numpyOverW1.toFixed(1)}, W2/W1 ${ratios.w2OverW1Cold.toFixed(2)} cold, ${ratios.w2OverW1Warm.toFixed(2)} against warm (target <= ${TARGETS.w2MaxW1Ratio})`);
+  for (const [name, ok] of Object.entries(targets)) line(`${ok ? 'met   ' : 'MISSED'} ${name}`);
+
+  const results = {
+    date: new Date().toISOString(),
+    node: process.version,
+    cpus: os.cpus().length,
+    cpu: os.cpus()[0]?.model ?? null,
+    pairs: theta.length,
+    targets: TARGETS,
+    w1: { span: W1.span, warmMs: fast.ms, warmMedianMs: w1Ms, coldMs: w1Cold.map((c) => c.ms), coldMedianMs: w1ColdMs },
+    w2: { span: W2.span, coldMs: w2.map((c) => c.ms), coldMedianMs: w2Ms, peakRssMiB: w2RssMiB },
+    calibration: { ms: calibration.ms, medianMs: median(calibration.ms) },
+    straightforward: { ms: straight.ms, medianMs: median(straight.ms) },
+    numpy: numpy.skipped ? { skipped: numpy.skipped } : { version: numpy.numpy, ms: numpy.ms, medianMs: numpy.medianMs },
+    ratios,
+    targetsMet: targets,
+    w1Result: fastResult,
+    w2Result: w2[0].result,
+  };
+  writeFileSync(path.join(process.cwd(), 'bench', 'results.json'), `${JSON.stringify(results, null, 2)}\n`);
+  line('wrote bench/results.json');
+  if (strict && Object.values(targets).some((ok) => !ok)) process.exitCode = 1;
+}
+
+const childName = process.argv.find((a) => a.startsWith('--child='))?.split('=')[1];
+if (childName) child(childName);
+else main();

@@ -1,0 +1,92 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { createGitReader } from '../../src/action/git.js';
+import { createGitHubClient } from '../../src/action/github.js';
+import { runAction } from '../../src/action/run-action.js';
+import { startFakeGitHub, type FakeGitHub, type FakePullFile } from './fake-github.js';
+import { createRecordingOutput, type RecordingOutput } from './recording-output.js';
+import { pullRequestEvent } from './run-bundle.js';
+import { scenarioRepo, type Tree } from './scenario-repo.js';
+
+export const OWNER = 'example-org';
+export const REPO = 'model-zoo';
+
+export interface ScenarioOptions {
+  base: Tree;
+  head: Tree;
+  labels?: string[];
+  /** The token may read but not write (a fork's pull request). */
+  readOnly?: boolean;
+  fork?: boolean;
+  inputs?: Record<string, string>;
+  /** The checkout lacks the commits: the action must use the REST API (default: `false`). */
+  noHistory?: boolean;
+  /** Comments already on the pull request (re-runs). */
+  fake?: FakeGitHub;
+  /** Prepare the fake API before the run (faults, extra state). */
+  prepare?: (fake: FakeGitHub) => void;
+}
+
+export interface ScenarioResult {
+  out: RecordingOutput;
+  fake: FakeGitHub;
+  written: Record<string, string>;
+  error: unknown;
+  base: string;
+  head: string;
+}
+
+function pullFiles(base: Tree, head: Tree): FakePullFile[] {
+  const files: FakePullFile[] = [];
+  for (const path of new Set([...Object.keys(base), ...Object.keys(head)])) {
+    if (!(path in head)) files.push({ filename: path, status: 'removed' });
+    else if (!(path in base)) files.push({ filename: path, status: 'added' });
+    else if (String(base[path]) !== String(head[path])) files.push({ filename: path, status: 'modified' });
+  }
+  return files;
+}
+
+/**
+ * Runs the action in-process with the real git and GitHub adapters, against a temporary git
+ * repository and the loopback API stand-in; waits GitHub asks for are shrunk to milliseconds.
+ */
+export async function runScenario(options: ScenarioOptions): Promise<ScenarioResult> {
+  const repo = scenarioRepo(options.base, options.head);
+  const fake = options.fake ?? await startFakeGitHub({ owner: OWNER, repo: REPO });
+  fake.state.readOnly = options.readOnly ?? false;
+  fake.state.pulls.set(7, {
+    number: 7, baseSha: repo.base, headSha: repo.head, baseRef: 'main', headRef: 'feature',
+    labels: options.labels ?? [], headRepo: options.fork ? `someone-else/${REPO}` : `${OWNER}/${REPO}`,
+    files: pullFiles(options.base, options.head),
+  });
+  const { tree } = await import('./fake-github.js');
+  const asFakeTree = (t: Tree) => tree(Object.fromEntries(Object.entries(t).map(([p, v]) => [p, typeof v === 'object' && !(v instanceof Uint8Array) ? { type: 'symlink' as const, target: v.symlink } : v])));
+  fake.state.trees.set(repo.base, asFakeTree(options.base));
+  fake.state.trees.set(repo.head, asFakeTree(options.head));
+  options.prepare?.(fake);
+  const out = createRecordingOutput();
+  const written: Record<string, string> = {};
+  const temp = mkdtempSync(join(tmpdir(), 'context-reach-harness-'));
+  const inputs: Record<string, string> = { 'github-token': fake.state.token, ...options.inputs };
+  let error: unknown = null;
+  try {
+    await runAction({
+      env: {
+        GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: 'event.json', GITHUB_API_URL: fake.url,
+        GITHUB_SERVER_URL: 'https://github.example', RUNNER_TEMP: temp,
+        GITHUB_WORKSPACE: options.noHistory ? mkdtempSync(join(tmpdir(), 'context-reach-empty-')) : repo.dir,
+      },
+      getInput: (name) => inputs[name] ?? '',
+      out,
+      readJson: async () => pullRequestEvent({ owner: OWNER, repo: REPO, number: 7, base: repo.base, head: repo.head, labels: options.labels, fork: options.fork }),
+      writeFile: async (path, text) => { written[path] = text; },
+      createGit: (cwd) => createGitReader(cwd),
+      createGitHub: (token, clientOptions) => createGitHubClient(token, { ...clientOptions, msPerSecond: 1 }),
+    });
+  } catch (caught) {
+    error = caught;
+  }
+  repo.remove();
+  return { out, fake, written, error, base: repo.base, head: repo.head };
+}

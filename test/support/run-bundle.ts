@@ -1,0 +1,133 @@
+import { spawn } from 'node:child_process';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+
+export const ACTION_BUNDLE = resolve(import.meta.dirname, '../../dist/index.js');
+
+export interface BundleRun {
+  code: number | null;
+  stdout: string;
+  stderr: string;
+  outputs: Record<string, string>;
+  summary: string;
+  /** Workflow commands the action printed (`::error file=…::message`). */
+  annotations: { level: string; properties: Record<string, string>; message: string }[];
+  /** Every file the run wrote into its temporary folder, for leak checks. */
+  files: Record<string, string>;
+  elapsedMs: number;
+}
+
+/** Parses the `name<<delimiter` blocks the toolkit appends to GITHUB_OUTPUT. */
+export function parseOutputFile(text: string): Record<string, string> {
+  const outputs: Record<string, string> = {};
+  const lines = text.split('\n');
+  for (let i = 0; i < lines.length; i += 1) {
+    const match = /^([^<=]+)<<(.+)$/.exec(lines[i]!);
+    if (!match) continue;
+    const [, name, delimiter] = match;
+    const value: string[] = [];
+    for (i += 1; i < lines.length && lines[i] !== delimiter; i += 1) value.push(lines[i]!);
+    outputs[name!] = value.join('\n');
+  }
+  return outputs;
+}
+
+function unescapeCommand(text: string): string {
+  return text.replace(/%0D/g, '\r').replace(/%0A/g, '\n').replace(/%3A/g, ':').replace(/%2C/g, ',').replace(/%25/g, '%');
+}
+
+export function parseAnnotations(stdout: string): BundleRun['annotations'] {
+  const found: BundleRun['annotations'] = [];
+  for (const line of stdout.split('\n')) {
+    const match = /^::(error|warning|notice)( [^:]*)?::(.*)$/.exec(line);
+    if (!match) continue;
+    const properties: Record<string, string> = {};
+    for (const pair of (match[2] ?? '').trim().split(',').filter(Boolean)) {
+      const eq = pair.indexOf('=');
+      properties[pair.slice(0, eq)] = unescapeCommand(pair.slice(eq + 1));
+    }
+    found.push({ level: match[1]!, properties, message: unescapeCommand(match[3]!) });
+  }
+  return found;
+}
+
+/**
+ * Runs the bundled action as the runner does: a child process with the runner's environment
+ * (event, repository, workspace, API URL, summary and output files, `INPUT_*`).
+ */
+export async function runBundle(options: {
+  eventName: string;
+  event: unknown;
+  workspace: string;
+  apiUrl: string;
+  inputs: Record<string, string>;
+  repository: string;
+  timeoutMs?: number;
+}): Promise<BundleRun> {
+  const temp = mkdtempSync(join(tmpdir(), 'context-reach-runner-'));
+  const eventPath = join(temp, 'event.json');
+  const outputPath = join(temp, 'output.txt');
+  const summaryPath = join(temp, 'summary.md');
+  writeFileSync(eventPath, JSON.stringify(options.event));
+  writeFileSync(outputPath, '');
+  writeFileSync(summaryPath, '');
+  const env: Record<string, string> = {
+    PATH: process.env.PATH ?? '',
+    HOME: process.env.HOME ?? temp,
+    GITHUB_ACTIONS: 'true',
+    GITHUB_EVENT_NAME: options.eventName,
+    GITHUB_EVENT_PATH: eventPath,
+    GITHUB_REPOSITORY: options.repository,
+    GITHUB_WORKSPACE: options.workspace,
+    GITHUB_API_URL: options.apiUrl,
+    GITHUB_SERVER_URL: 'https://github.example',
+    GITHUB_STEP_SUMMARY: summaryPath,
+    GITHUB_OUTPUT: outputPath,
+    RUNNER_TEMP: temp,
+  };
+  for (const [name, value] of Object.entries(options.inputs)) env[`INPUT_${name.toUpperCase()}`] = value;
+  const started = performance.now();
+  const child = spawn(process.execPath, [ACTION_BUNDLE], { cwd: options.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  let stdout = '';
+  let stderr = '';
+  child.stdout.on('data', (chunk) => { stdout += chunk; });
+  child.stderr.on('data', (chunk) => { stderr += chunk; });
+  const code = await new Promise<number | null>((done, fail) => {
+    const timer = setTimeout(() => { child.kill('SIGKILL'); fail(new Error(`the action did not finish within ${options.timeoutMs ?? 20_000} ms`)); }, options.timeoutMs ?? 20_000);
+    child.on('close', (exit) => { clearTimeout(timer); done(exit); });
+  });
+  const elapsedMs = performance.now() - started;
+  const files: Record<string, string> = {};
+  const { readdirSync, statSync } = await import('node:fs');
+  const walk = (dir: string) => {
+    for (const name of readdirSync(dir)) {
+      const path = join(dir, name);
+      if (statSync(path).isDirectory()) walk(path);
+      else files[path] = readFileSync(path, 'utf8');
+    }
+  };
+  walk(temp);
+  return {
+    code, stdout, stderr, elapsedMs, files,
+    outputs: parseOutputFile(readFileSync(outputPath, 'utf8')),
+    summary: readFileSync(summaryPath, 'utf8'),
+    annotations: parseAnnotations(stdout),
+  };
+}
+
+/** A pull_request event payload as GitHub sends it (the fields the action reads, and a few more). */
+export function pullRequestEvent(options: { owner: string; repo: string; number: number; base: string; head: string; labels?: string[]; fork?: boolean }) {
+  const full = `${options.owner}/${options.repo}`;
+  return {
+    action: 'synchronize',
+    number: options.number,
+    pull_request: {
+      number: options.number,
+      labels: (options.labels ?? []).map((name, i) => ({ id: i + 1, name })),
+      base: { sha: options.base, ref: 'main', repo: { full_name: full } },
+      head: { sha: options.head, ref: 'feature', repo: { full_name: options.fork ? `someone-else/${options.repo}` : full } },
+    },
+    repository: { name: options.repo, full_name: full, owner: { login: options.owner } },
+  };
+}
