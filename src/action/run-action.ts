@@ -27,7 +27,10 @@ export interface ActionDeps {
 export const FORK_NOTICE = 'The token cannot comment on this pull request (a read-only token, as pull requests from forks get). The report is in the job summary and the annotations, and the verdict still decides the check. To get the comment on fork pull requests, use the two-workflow recipe in the README ("Pull requests from forks").';
 
 interface Changes {
+  /** Where the pull request's changes start: the merge base when git knows it. */
   base: string;
+  /** The base branch's commit from the event: the policy is read there. */
+  policyRef: string;
   head: string;
   changes: ChangedFile[];
   source: ContentSource;
@@ -40,8 +43,11 @@ async function gatherChanges(event: EventInfo, base: string, git: GitReader, api
   const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
   const [baseSha, headSha] = await Promise.all([local(base), local(event.head)]);
   if (baseSha !== null && headSha !== null) {
+    // Like the pull request's own diff: changes since head left the base branch, not the base
+    // branch's later commits. The policy still comes from the base branch's commit.
+    const start = (await git.mergeBase(baseSha, headSha).catch(() => null)) ?? baseSha;
     return {
-      base: baseSha, head: headSha, changes: await git.changedFiles(baseSha, headSha),
+      base: start, policyRef: baseSha, head: headSha, changes: await git.changedFiles(start, headSha),
       source: { read: (ref, path) => git.show(ref, path) }, notices: [],
     };
   }
@@ -53,7 +59,7 @@ async function gatherChanges(event: EventInfo, base: string, git: GitReader, api
     ? [`GitHub lists only the first 3,000 files of a pull request and this one has more; files past that were not judged. Check out with fetch-depth: 0 so the action can read the whole change from git.`]
     : [];
   return {
-    base, head: event.head, changes: listed.files,
+    base, policyRef: base, head: event.head, changes: listed.files,
     source: { read: (ref, path) => api.getFileContent(event.owner, event.repo, path, ref) }, notices,
   };
 }
@@ -99,7 +105,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   let report: GateReport;
   try {
     report = await runGate(gathered.source, {
-      base: gathered.base, head: gathered.head, changes: gathered.changes, policyPath: settings.policyPath,
+      base: gathered.base, head: gathered.head, changes: gathered.changes, policyPath: settings.policyPath, policyRef: gathered.policyRef,
       labels, notices: gathered.notices,
     });
   } catch (error) {

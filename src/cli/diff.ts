@@ -69,9 +69,11 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
   const git = createGitReader(io.cwd);
   const head = await commitOf(git, values.head ?? 'HEAD', '--head');
   const base = values.base !== undefined ? await commitOf(git, values.base, '--base') : await defaultBase(git, head);
-  const changes = await git.changedFiles(base, head);
+  // Changes since head left the base (as a pull request shows them); the policy from the base itself.
+  const start = (await git.mergeBase(base, head)) ?? base;
+  const changes = await git.changedFiles(start, head);
   const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
-    base, head, changes,
+    base: start, policyRef: base, head, changes,
     policyPath: values.policy ?? '.github/context-reach.yml',
     labels: values.label ?? [],
     overrides: servingPatch(values),

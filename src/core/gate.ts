@@ -17,6 +17,8 @@ export interface GateRequest {
   changes: ChangedFile[];
   /** Path of the policy file, read from the base commit. */
   policyPath: string;
+  /** Commit the policy is read at (default: `base`): the base branch's tip when `base` is the merge base. */
+  policyRef?: string;
   /** Labels on the pull request (default: none). */
   labels?: string[];
   /** Notices from gathering the changes (truncated lists, fork tokens). */
@@ -74,7 +76,7 @@ function sameBytes(a: Uint8Array | null, b: Uint8Array | null): boolean {
  */
 export async function runGate(source: ContentSource, request: GateRequest): Promise<GateReport> {
   const { base, head, policyPath } = request;
-  const basePolicyBytes = await source.read(base, policyPath);
+  const basePolicyBytes = await source.read(request.policyRef ?? base, policyPath);
   let policy: Policy = DEFAULT_POLICY;
   if (basePolicyBytes !== null) {
     policy = parsePolicy(decodeText(basePolicyBytes, policyPath), policyPath);

@@ -98,6 +98,24 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
     );
   });
 
+  it('equal the reference for large angles kθ up to 1e9, where the seeds are reduced by whole turns', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: Math.log(50), max: Math.log(3e5), noNaN: true }), { minLength: 1, maxLength: 6 }),
+        fc.integer({ min: 600, max: 3000 }),
+        (logs, span) => {
+          const theta = Float64Array.from(logs, Math.exp);
+          const fast = similarityScan(theta, span);
+          const ref = referenceSimilarity(theta, span);
+          expect(fast.separationFloorOffset).toBe(ref.separationFloorOffset);
+          expect(fast.discriminationSpan).toBe(ref.discriminationSpan);
+          expectClose(fast.separationFloor, ref.separationFloor, 'separationFloor');
+        },
+      ),
+      { numRuns: 80, seed: 31337 },
+    );
+  });
+
   it('picks the smallest offset among tied floors: θ = 2π/q repeats S(k) exactly every q', () => {
     for (const q of [3, 7, 50, 64, 100]) {
       const theta = Float64Array.from([(2 * Math.PI) / q, (4 * Math.PI) / q]);

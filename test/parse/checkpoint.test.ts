@@ -417,6 +417,16 @@ describe('readModel(checkpoint) invalid values', () => {
     );
   });
 
+  test('readModel reports a bare NaN or Infinity in config.json (Python json writes them) as value-invalid', () => {
+    const text = configText(BASE).replace('"num_hidden_layers": 4', '"num_hidden_layers": NaN').replace('"vocab_size": 1000', '"vocab_size": Infinity');
+    const { spec, findings } = readModel(text, 'config.json');
+    expect(findings.map((f) => [f.key, f.line, f.message])).toEqual([
+      ['num_hidden_layers', lineOf(text, 'NaN'), 'num_hidden_layers is NaN, which is not a number; expected a whole number (the number of layers)'],
+      ['vocab_size', lineOf(text, 'Infinity'), 'vocab_size is Infinity, which is not finite; expected a whole number (the vocabulary size)'],
+    ]);
+    expect([spec.layers, spec.vocab].every(Number.isNaN)).toBe(true);
+  });
+
   test('readModel reports 2^60 as not exact: past 2^53 - 1, neighbouring integers share a double (IEEE 754 binary64)', () => {
     const text = '{"hidden_size": 1024, "num_hidden_layers": 4, "num_attention_heads": 16, "vocab_size": 1152921504606846976, "max_position_embeddings": 2048, "rope_theta": 10000}';
     const { spec, findings } = readModel(text, 'c.json');

@@ -108,14 +108,47 @@ describe('parseSource(text, file) numbers', () => {
 });
 
 describe('parseSource(text, file) errors', () => {
-  test('parseSource throws ReadError naming file and line on a JSON syntax error (the line missing its comma)', () => {
+  test('parseSource(text, "x.json") throws ReadError naming file and line on a JSON syntax error', () => {
     const text = '{\n  "a": 1,\n  "b": 2\n  "c": 3\n}\n';
     const error = readError(() => parseSource(text, 'models/x/config.json'));
     expect(error.file).toBe('models/x/config.json');
+    // JSON.parse (the reference reader) stops at the key that should have followed a comma.
+    expect(error.line).toBe(lineOf(text, '"c"'));
+    expect(error.reason).toBe("is not valid JSON: Expected ',' or '}' after property value");
+    expect(error.message).toBe(`models/x/config.json, line ${error.line}: ${error.reason}`);
+  });
+
+  test.each([
+    ['a bare word', '{\n  "hidden_size": 4096,\n  oops\n}\n', 3],
+    ['a trailing comma', '{\n  "a": 1,\n}\n', 3],
+    ['single quotes', "{\n  'a': 1\n}\n", 2],
+    ['text after the document', '{"a": 1}\n{"b": 2}\n', 2],
+    ['an unclosed mapping', '{\n  "a": 1\n', 3],
+  ])('parseSource(text, "x.json") refuses %s, which YAML would read but JSON loaders refuse', (_, text, line) => {
+    const error = readError(() => parseSource(text, 'config.json'));
+    expect(error.reason).toMatch(/^is not valid JSON: /);
+    expect(error.line).toBe(line);
+  });
+
+  test('parseSource(text, "x.yaml") reads JSON-like text as YAML flow style, trailing comma included', () => {
+    expect(parseSource('{"a": 1,}', 'config.yaml').value.a).toBe(1);
+  });
+
+  test('parseSource(text, "x.json") reads bare NaN, Infinity and -Infinity as numbers, as Python\'s json module writes and reads them', () => {
+    const v = parseSource('{"a": NaN, "b": Infinity, "c": -Infinity, "d": "NaN"}', 'config.json').value;
+    expect(Number.isNaN(v.a)).toBe(true);
+    expect([v.b, v.c, v.d]).toEqual([Infinity, -Infinity, 'NaN']);
+  });
+
+  test('parseSource(text, "x.yaml") leaves NaN as text: YAML 1.2 writes it .nan', () => {
+    expect(parseSource('a: NaN\nb: .nan\n', 'f.yaml').value.a).toBe('NaN');
+  });
+
+  test('parseSource throws ReadError on a YAML syntax error in JSON-like text, with a hint about commas', () => {
+    const text = '{\n  "a": 1,\n  "b": 2\n  "c": 3\n}\n';
+    const error = readError(() => parseSource(text, 'config.yaml'));
     expect(error.line).toBe(lineOf(text, '"b"'));
     expect(error.reason).toContain('missing comma');
-    expect(error.message).toContain('models/x/config.json');
-    expect(error.message).toContain(`line ${error.line}`);
   });
 
   test('parseSource throws ReadError on a YAML indentation error, with its line', () => {
@@ -317,9 +350,15 @@ describe('decodeText(bytes, path)', () => {
     expect(error.reason).toContain('UTF-16');
   });
 
-  test('UTF-16 text without a mark decodes (its bytes are valid UTF-8) but parseSource refuses its NULs', () => {
-    const utf16 = new Uint8Array([0x7b, 0x00, 0x7d, 0x00]);
-    const text = decodeText(utf16, 'utf16.json');
-    expect(() => parseSource(text, 'utf16.json')).toThrow(/NUL/);
+  test('decodeText refuses UTF-16 without a mark by its NUL bytes, though they are valid UTF-8', () => {
+    const utf16 = new Uint8Array([0x7b, 0x00, 0x0a, 0x00, 0x7d, 0x00]);
+    const error = readError(() => decodeText(utf16, 'utf16.json'));
+    expect(error.reason).toContain('NUL');
+    expect(error.line).toBe(1);
+  });
+
+  test('decodeText refuses binary data (a PNG signature: 89 50 4E 47 0D 0A 1A 0A, then NULs)', () => {
+    const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d]);
+    expect(() => decodeText(png, 'image.json')).toThrow(ReadError);
   });
 });

@@ -34,6 +34,7 @@ export function alibiSlopes(heads: number): number[] | null {
  */
 export function alibiHorizon(slopes: readonly number[] | null): number | null {
   if (slopes === null || slopes.length === 0) return null;
-  const slowest = Math.min(...slopes);
+  let slowest = Infinity;
+  for (const m of slopes) if (m < slowest) slowest = m;
   return slowest > 0 && Number.isFinite(slowest) ? Math.ceil(Math.log(1e4) / slowest) : null;
 }

@@ -18,9 +18,8 @@ function layerTokenBytes(spec: ModelSpec): number | null {
 }
 
 /**
- * count: decoder layers with a sliding window: `windowLayers` (default: every layer when a window
- * is set), 0 without a window; null when the window or the count is degenerate or the count
- * exceeds the layers.
+ * count: decoder layers with a sliding window, 0 without a window; null when the window or the
+ * count is degenerate or the count exceeds the layers (default: every layer when a window is set).
  */
 export function windowedLayers(spec: ModelSpec): number | null {
   const layers = positiveCount(spec.layers);
@@ -39,7 +38,7 @@ export function cachePerTokenBytes(spec: ModelSpec): number | null {
   return layers === null || perLayer === null ? null : finite(layers * perLayer);
 }
 
-/** count: sequences held in the cache (default: `1`); null when stated but not a positive whole number. */
+/** count: sequences held in the cache; null when stated but not a positive whole number (default: `1`). */
 export function servedSequences(spec: ModelSpec): number | null {
   const s = spec.serving?.sequences;
   return s === null || s === undefined ? DEFAULT_SEQUENCES : positiveCount(s);

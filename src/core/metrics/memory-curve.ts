@@ -14,7 +14,7 @@ export function memoryAtSpan(spec: ModelSpec, span: number): number | null {
   return memoryBytes(weightBytes(spec, counts ? counts.params : null), cacheBytesAtSpan(spec, t));
 }
 
-/** bytes: `deviceGiB · 2^30 · (1 - reserve)` (reserve default: `0.1`); null without a device budget. */
+/** bytes: `deviceGiB · 2^30 · (1 - reserve)`, null without a device budget (reserve default: `0.1`). */
 export function usableDeviceBytes(spec: ModelSpec): number | null {
   const device = positiveFinite(spec.serving?.deviceGiB);
   const stated = spec.serving?.reserve;

@@ -9,7 +9,7 @@ import { bytesPerElement, weightDType } from './storage-bytes.js';
 /** Fraction of device memory kept free when the serving block states none (default: `0.1`). */
 export const DEFAULT_RESERVE = 0.1;
 
-/** bytes: `weightBytes = params · bytes(weight dtype)` (default dtype: `bf16`). */
+/** bytes: `weightBytes = params · bytes(weight dtype)` (weight dtype default: `bf16`). */
 export function weightBytes(spec: ModelSpec, params: number | null): number | null {
   const bytes = bytesPerElement(weightDType(spec));
   if (params === null || bytes === null) return null;

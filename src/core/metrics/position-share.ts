@@ -7,10 +7,10 @@ import { finiteOrNull, positiveCount, positiveFinite } from './sizes.js';
 
 /**
  * 0..1: `code / (code + token)` per token at initialisation, with token energy
- * `hidden·std²·multiplier²` (multiplier default: `1`) and code energy `hidden/2` for sinusoidal
- * codes (each pair's sin² + cos² = 1; Vaswani et al. 2017, §3.5), or `hidden·std²` for a learned
- * table, assumed initialised like the token embedding (common practice). Null for other codes,
- * an unknown or degenerate std, or a degenerate multiplier.
+ * `hidden·std²·multiplier²` and code energy `hidden/2` for sinusoidal codes (each pair's
+ * sin² + cos² = 1; Vaswani et al. 2017, §3.5), or `hidden·std²` for a learned table, assumed
+ * initialised like the token embedding (common practice). Null for other codes, an unknown or
+ * degenerate std, or a degenerate multiplier (multiplier default: `1`).
  */
 export function positionShare(spec: ModelSpec): number | null {
   const kind = spec.position?.kind;

@@ -9,14 +9,14 @@
  * that loop, not close to it. Blocks of B = 512 offsets are filled pair by pair with the Chebyshev
  * recurrence `c_{j+1} = 2cos(θ) c_j - c_{j-1}` (one multiply, one subtract per element; eight
  * pairs interleaved so the chains overlap), re-seeded exactly at every block start from
- * Math.cos/Math.sin of `k0 θ` (reduced by whole turns first, adding under 16ε, because large
+ * Math.cos/Math.sin of `k0 θ` (reduced by whole turns first, adding under 20ε, because large
  * arguments take a slow path). With unit roundoff ε = 2^-53 and `|U_n(cos θ)| <= n + 1`, seeds
- * within 14ε and 30ε and local errors of 8ε per step (4ε of them from `2cos θ`) leave a
- * recurrence value after n <= B steps within ε(4n² + 44n) of the cosine of the seeded argument;
+ * within 22ε and 56ε and local errors of 8ε per step (4ε of them from `2cos θ`) leave a
+ * recurrence value after n <= B steps within ε(4n² + 78n) of the cosine of the seeded argument;
  * the seed argument and the reference's own argument `fl(kθ)` are both within `ε kθ` of `kθ`;
  * the two pair-order sums add `P² ε` each. So the approximate sum at k differs from the
  * reference sum by at most
- *   bound(k) = ε (P (4B² + 48B + 2) + 2 k Σθ + 2P² + 4P)   (≈ 1e-8 for P = 64, B = 512, k = 2^20).
+ *   bound(k) = ε (P (4B² + 80B + 2) + 2 k Σθ + 2P² + 4P)   (≈ 1e-8 for P = 64, B = 512, k = 2^20).
  * Decisions are then made with a margin of 2.5 bound: an offset is re-evaluated exactly (the
  * reference expression, Math.cos per pair) when its approximate sum is within the margin of the
  * best approximate sum seen so far, or within the margin of zero while no negative sum has been
@@ -81,7 +81,7 @@ export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: n
   for (let k0 = kStart; k0 < kEnd; k0 += BLOCK) {
     const n = Math.min(BLOCK, kEnd - k0);
     fillBlock(theta, a2, cT, sT, k0, n, buf, seedNow, seedBefore);
-    const margin = 2.5 * EPS * (P * (4 * n * n + 48 * n + 2) + 2 * (k0 + n) * sumTheta + 2 * P * P + 4 * P);
+    const margin = 2.5 * EPS * (P * (4 * n * n + 80 * n + 2) + 2 * (k0 + n) * sumTheta + 2 * P * P + 4 * P);
     let threshold = bestApprox - margin;
     for (let j = 0; j < n; j++) {
       const v = buf[j];
@@ -127,22 +127,26 @@ export function similarityScan(theta: Float64Array | null, span: number | null):
   return { separationFloor: r.floor, separationFloorOffset: r.offset, discriminationSpan: r.negative };
 }
 
-// 2π split in three: A and B have 24 significant bits, so n·A and n·B are exact for n < 2^29.
+// 2π = A + B + C + D: A and B have 24 significant bits, so n·A and n·B are exact for n < 2^29;
+// A + B + C is exactly the binary64 value 2·Math.PI, and D = 2π - 2·Math.PI = 2(π - Math.PI)
+// (π - Math.PI = 1.2246467991473531772e-16) carries the rest, so the turn itself is off by
+// under 1e-31 per turn instead of 2.4e-16.
 const TURN_A = Math.fround(2 * Math.PI);
 const TURN_B = Math.fround(2 * Math.PI - TURN_A);
 const TURN_C = 2 * Math.PI - TURN_A - TURN_B;
+const TURN_D = 2.4492935982947064e-16;
 const MAX_TURNS = 2 ** 29;
 
 /**
  * radians: `x - n·2π` for the nearest whole n (Cody–Waite reduction), so the seeds avoid the slow
- * large-argument path of Math.cos. `x - n·A` is exact (Sterbenz), the rest adds under 16ε; and the
- * split of 2π is exact to ~2^-100, far below ε. Arguments past `2^29` turns are left alone.
+ * large-argument path of Math.cos. `x - n·A` is exact (Sterbenz), the three later steps add
+ * under 20ε for a result within π. Arguments past `2^29` turns are left to Math.cos.
  */
 function reduceTurns(x: number): number {
   if (!(x > 1e5)) return x;
   const n = Math.round(x / (2 * Math.PI));
   if (n >= MAX_TURNS) return x;
-  return x - n * TURN_A - n * TURN_B - n * TURN_C;
+  return x - n * TURN_A - n * TURN_B - n * TURN_C - n * TURN_D;
 }
 
 /**

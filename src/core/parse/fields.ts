@@ -172,7 +172,9 @@ export class FieldReader {
       return NaN;
     }
     if (!Number.isFinite(v)) {
-      this.report('value-invalid', path, `${key} is ${this.quote(path)}, which overflows to ${v > 0 ? '' : '-'}Infinity in a double; expected ${expected}`);
+      const written = this.quote(path);
+      const overflow = /inf/i.test(written) ? ', which is not finite' : `, which overflows to ${v > 0 ? '' : '-'}Infinity in a double`;
+      this.report('value-invalid', path, `${key} is ${written}${overflow}; expected ${expected}`);
       return NaN;
     }
     if (whole && Number.isInteger(v) && !Number.isSafeInteger(v)) {

@@ -45,7 +45,8 @@ const BOM = '\uFEFF';
 
 /**
  * Bytes of a file as text: strict UTF-8 (a byte sequence that is not UTF-8 is refused, never
- * replaced), a leading byte-order mark dropped. Throws `ReadError` naming `path`.
+ * replaced), a leading byte-order mark dropped, and the text checks of `parseSource` applied
+ * (no NUL, so no binary or UTF-16 data; bounded length). Throws `ReadError` naming `path`.
  */
 export function decodeText(bytes: Uint8Array, path: string): string {
   if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) {
@@ -61,7 +62,9 @@ export function decodeText(bytes: Uint8Array, path: string): string {
     throw new ReadError(path, line, `is not UTF-8 text: bytes ${hex} at byte offset ${at} do not form a UTF-8 character (save the file as UTF-8)`);
   }
   // A decoder with ignoreBOM false drops the mark itself; this covers a doubled one.
-  return text.startsWith(BOM) ? text.slice(1) : text;
+  if (text.startsWith(BOM)) text = text.slice(1);
+  checkText(text, path);
+  return text;
 }
 
 /**
@@ -72,6 +75,9 @@ export function decodeText(bytes: Uint8Array, path: string): string {
 export function parseSource(text: string, file: string): SourceDocument {
   if (text.startsWith(BOM)) text = text.slice(1);
   checkText(text, file);
+  // YAML would read a broken config.json (a bare word, a trailing comma) that JSON loaders refuse.
+  const json = /\.json$/i.test(file);
+  if (json) checkJson(text, file);
 
   const lineCounter = new LineCounter();
   const tokens = Array.from(new Parser(lineCounter.addNewLine).parse(text));
@@ -107,7 +113,7 @@ export function parseSource(text: string, file: string): SourceDocument {
     throw new ReadError(file, lineAt(root.range?.[0] ?? 0), `top level is ${what}; expected a mapping of keys`);
   }
 
-  const builder = new Builder(doc, text, file, lineAt);
+  const builder = new Builder(doc, text, file, lineAt, json);
   const value = builder.build(root, [], 1) as SourceMapping;
   return {
     value,
@@ -146,6 +152,31 @@ function checkText(text: string, file: string): void {
   const lone = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/.exec(text);
   if (lone) {
     throw new ReadError(file, lineOfIndex(lone.index), 'contains a lone UTF-16 surrogate, which no UTF-8 file can hold; save the file as UTF-8');
+  }
+}
+
+/**
+ * Strict JSON syntax, as the JSON loaders of the checkpoint libraries apply it: their Python
+ * reader also takes bare NaN, Infinity and -Infinity, so those pass here too (and read as numbers).
+ */
+function checkJson(text: string, file: string): void {
+  // Same-length stand-ins keep error positions true to the file.
+  const standIn = text.replace(/"(?:[^"\\]|\\.)*"|-?Infinity|NaN/g, (m) => (m.startsWith('"') ? m : `0${' '.repeat(m.length - 1)}`));
+  try {
+    JSON.parse(standIn);
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    const at = /at position (\d+)/.exec(message);
+    const lineCol = /\(line (\d+) column \d+\)/.exec(message);
+    let line: number | null = null;
+    if (at) line = text.slice(0, Number(at[1])).split('\n').length;
+    else if (lineCol) line = Number(lineCol[1]);
+    else if (/Unexpected end/.test(message)) line = text.split('\n').length;
+    const reason = message
+      .replace(/ in JSON at position \d+.*$/s, '')
+      .replace(/ \(line \d+ column \d+\)$/, '')
+      .replace(/, ".*" is not valid JSON$/s, '');
+    throw new ReadError(file, line, `is not valid JSON: ${reason}`);
   }
 }
 
@@ -193,6 +224,7 @@ class Builder {
     private readonly text: string,
     private readonly file: string,
     private readonly lineAt: (offset: number) => number,
+    private readonly json: boolean,
   ) {}
 
   build(node: unknown, path: PathSegment[], level: number): SourceValue {
@@ -278,8 +310,9 @@ class Builder {
     return key;
   }
 
-  private scalar(node: { value: unknown; range?: [number, number, number] | null }, path: PathSegment[]): SourceValue {
+  private scalar(node: { value: unknown; type?: string; range?: [number, number, number] | null }, path: PathSegment[]): SourceValue {
     const v = node.value;
+    if (this.json && node.type === 'PLAIN' && (v === 'NaN' || v === 'Infinity' || v === '-Infinity')) return Number(v);
     if (v === null || typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean') return v;
     throw new ReadError(this.file, this.nodeLine(node), `${this.where(path)} holds a value of an unsupported kind; expected text, a number, a boolean or empty`);
   }
