@@ -5,13 +5,13 @@
  *
  * Method, and why it is exact. The definitions visit every (p, i); these functions return what
  * that loop returns (counts identical, the maximum bit for bit) while skipping provably
- * irrelevant elements. Positions come in runs of equal `fl_D(p)`: single positions below `2^p`,
- * runs of up to `2^(e-p+1)` positions above. Over a run the rounded angle `c` is constant and
+ * irrelevant elements. With m significant bits in D, positions come in runs of equal `fl_D(p)`:
+ * single positions below `2^m`, runs of up to `2^(e-m+1)` positions in the binade `[2^e, 2^(e+1))`. Over a run the rounded angle `c` is constant and
  * `c - fl(pθ)` is monotone in p, so its largest magnitude sits at an end of the run. Runs are
  * visited from the top of the span down, and the scan stops once
  *   bound(v) = spacing_D(v t)/2 + v |t - θ| + (run half-width) θ   (+ binary64 slack)
  * falls below the best error found: every term is non-decreasing in the position, so no lower
- * run can do better. Below `2^p` (fp32: the whole of `T <= 2^24`) the run ends coincide and a
+ * run can do better. Below `2^m` (fp32: the whole of `T <= 2^24`) the run ends coincide and a
  * tight descending loop with Math.fround checks the bound once per chunk of positions.
  * Blurred pairs: in a binade of the angle with spacing u, neighbouring angles `x`, `x + t`
  * cannot round together when `t > u`, and must when `t < u/2` and the angles cover `2u`
@@ -95,7 +95,7 @@ function pairAngleError(format: FloatFormat, th: number, span: number, best: num
   const exactLimit = 2 ** m;
   const t = roundToFormat(th, format);
   const d = Math.abs(t - th);
-  // Above 2^p: runs of positions sharing one rounded value v, visited downwards.
+  // Above 2^m: runs of positions sharing one rounded value v, visited downwards.
   let p = span - 1;
   while (p >= exactLimit) {
     const v = roundToFormat(p, format);
@@ -113,7 +113,7 @@ function pairAngleError(format: FloatFormat, th: number, span: number, best: num
     if (e2 > best) best = e2;
     p = lo - 1;
   }
-  // Below 2^p every position is exact: fl_D(p) = p.
+  // Below 2^m every position is exact: fl_D(p) = p.
   const top = Math.min(p, span - 1);
   if (top < 1) return best;
   // All products p t exact in D: no rounding term in the bound (and no error at all when t = θ).
@@ -146,7 +146,7 @@ function pairAngleError(format: FloatFormat, th: number, span: number, best: num
 /**
  * count: `blurredPairs`, pairs i for which some p in [1, T) has
  * `fl_D(fl_D(p) t_i) == fl_D(fl_D(p-1) t_i)` with `t_i = fl_D(θ'_i)` (METRICS.md). Once T passes
- * `2^p + 1` two positions share a rounded value and every pair is blurred.
+ * `2^m + 1` (m significant bits) two positions share a rounded value and every pair is blurred.
  */
 export function blurredPairs(format: FloatFormat, theta: Float64Array, span: number): number {
   if (span < 2) return 0;
@@ -156,7 +156,7 @@ export function blurredPairs(format: FloatFormat, theta: Float64Array, span: num
   return n;
 }
 
-/** Positions [0, span) all exact here (span <= 2^p + 1). */
+/** Positions [0, span) all exact here (span <= 2^m + 1). */
 function pairBlurred(format: FloatFormat, th: number, span: number): boolean {
   const t = roundToFormat(th, format);
   if (t === 0) return span >= 2;

@@ -17,7 +17,8 @@
  * the two pair-order sums add `P² ε` each. So the approximate sum at k differs from the
  * reference sum by at most
  *   bound(k) = ε (P (4B² + 80B + 2) + 2 k Σθ + 2P² + 4P)   (≈ 1e-8 for P = 64, B = 512, k = 2^20).
- * Decisions are then made with a margin of 2.5 bound: an offset is re-evaluated exactly (the
+ * Decisions are then made with a margin of 2.5 bound (two approximate sums are compared, and a
+ * quarter of the bound each is spare): an offset is re-evaluated exactly (the
  * reference expression, Math.cos per pair) when its approximate sum is within the margin of the
  * best approximate sum seen so far, or within the margin of zero while no negative sum has been
  * found; every other offset provably cannot change the floor, its offset (ties go to the
