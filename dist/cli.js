@@ -18879,7 +18879,10 @@ function alibiSlopes(heads) {
 function alibiHorizon(slopes) {
     if (slopes === null || slopes.length === 0)
         return null;
-    const slowest = Math.min(...slopes);
+    let slowest = Infinity;
+    for (const m of slopes)
+        if (m < slowest)
+            slowest = m;
     return slowest > 0 && Number.isFinite(slowest) ? Math.ceil(Math.log(1e4) / slowest) : null;
 }
 
@@ -19093,9 +19096,8 @@ function layerTokenBytes(spec) {
     return kv === null || headDim === null || bytes === null ? null : 2 * kv * headDim * bytes;
 }
 /**
- * count: decoder layers with a sliding window: `windowLayers` (default: every layer when a window
- * is set), 0 without a window; null when the window or the count is degenerate or the count
- * exceeds the layers.
+ * count: decoder layers with a sliding window, 0 without a window; null when the window or the
+ * count is degenerate or the count exceeds the layers (default: every layer when a window is set).
  */
 function windowedLayers(spec) {
     const layers = positiveCount(spec.layers);
@@ -19116,7 +19118,7 @@ function cachePerTokenBytes(spec) {
     const perLayer = layerTokenBytes(spec);
     return layers === null || perLayer === null ? null : finite(layers * perLayer);
 }
-/** count: sequences held in the cache (default: `1`); null when stated but not a positive whole number. */
+/** count: sequences held in the cache; null when stated but not a positive whole number (default: `1`). */
 function servedSequences(spec) {
     const s = spec.serving?.sequences;
     return s === null || s === undefined ? DEFAULT_SEQUENCES : positiveCount(s);
@@ -19144,7 +19146,7 @@ function finite(x) {
 
 /** Fraction of device memory kept free when the serving block states none (default: `0.1`). */
 const DEFAULT_RESERVE = 0.1;
-/** bytes: `weightBytes = params · bytes(weight dtype)` (default dtype: `bf16`). */
+/** bytes: `weightBytes = params · bytes(weight dtype)` (weight dtype default: `bf16`). */
 function weightBytes(spec, params) {
     const bytes = bytesPerElement(weightDType(spec));
     if (params === null || bytes === null)
@@ -19376,7 +19378,7 @@ function pairAngleError(format, th, span, best) {
     const exactLimit = 2 ** m;
     const t = roundToFormat(th, format);
     const d = Math.abs(t - th);
-    // Above 2^p: runs of positions sharing one rounded value v, visited downwards.
+    // Above 2^m: runs of positions sharing one rounded value v, visited downwards.
     let p = span - 1;
     while (p >= exactLimit) {
         const v = roundToFormat(p, format);
@@ -19397,7 +19399,7 @@ function pairAngleError(format, th, span, best) {
             best = e2;
         p = lo - 1;
     }
-    // Below 2^p every position is exact: fl_D(p) = p.
+    // Below 2^m every position is exact: fl_D(p) = p.
     const top = Math.min(p, span - 1);
     if (top < 1)
         return best;
@@ -19435,7 +19437,7 @@ function pairAngleError(format, th, span, best) {
 /**
  * count: `blurredPairs`, pairs i for which some p in [1, T) has
  * `fl_D(fl_D(p) t_i) == fl_D(fl_D(p-1) t_i)` with `t_i = fl_D(θ'_i)` (METRICS.md). Once T passes
- * `2^p + 1` two positions share a rounded value and every pair is blurred.
+ * `2^m + 1` (m significant bits) two positions share a rounded value and every pair is blurred.
  */
 function blurredPairs(format, theta, span) {
     if (span < 2)
@@ -19448,7 +19450,7 @@ function blurredPairs(format, theta, span) {
             n++;
     return n;
 }
-/** Positions [0, span) all exact here (span <= 2^p + 1). */
+/** Positions [0, span) all exact here (span <= 2^m + 1). */
 function pairBlurred(format, th, span) {
     const t = roundToFormat(th, format);
     if (t === 0)
@@ -19652,10 +19654,10 @@ function parameterCounts(spec) {
 
 /**
  * 0..1: `code / (code + token)` per token at initialisation, with token energy
- * `hidden·std²·multiplier²` (multiplier default: `1`) and code energy `hidden/2` for sinusoidal
- * codes (each pair's sin² + cos² = 1; Vaswani et al. 2017, §3.5), or `hidden·std²` for a learned
- * table, assumed initialised like the token embedding (common practice). Null for other codes,
- * an unknown or degenerate std, or a degenerate multiplier.
+ * `hidden·std²·multiplier²` and code energy `hidden/2` for sinusoidal codes (each pair's
+ * sin² + cos² = 1; Vaswani et al. 2017, §3.5), or `hidden·std²` for a learned table, assumed
+ * initialised like the token embedding (common practice). Null for other codes, an unknown or
+ * degenerate std, or a degenerate multiplier (multiplier default: `1`).
  */
 function positionShare(spec) {
     const kind = spec.position?.kind;
@@ -19743,15 +19745,16 @@ function receptiveField(spec) {
  * that loop, not close to it. Blocks of B = 512 offsets are filled pair by pair with the Chebyshev
  * recurrence `c_{j+1} = 2cos(θ) c_j - c_{j-1}` (one multiply, one subtract per element; eight
  * pairs interleaved so the chains overlap), re-seeded exactly at every block start from
- * Math.cos/Math.sin of `k0 θ` (reduced by whole turns first, adding under 16ε, because large
+ * Math.cos/Math.sin of `k0 θ` (reduced by whole turns first, adding under 20ε, because large
  * arguments take a slow path). With unit roundoff ε = 2^-53 and `|U_n(cos θ)| <= n + 1`, seeds
- * within 14ε and 30ε and local errors of 8ε per step (4ε of them from `2cos θ`) leave a
- * recurrence value after n <= B steps within ε(4n² + 44n) of the cosine of the seeded argument;
+ * within 22ε and 56ε and local errors of 8ε per step (4ε of them from `2cos θ`) leave a
+ * recurrence value after n <= B steps within ε(4n² + 78n) of the cosine of the seeded argument;
  * the seed argument and the reference's own argument `fl(kθ)` are both within `ε kθ` of `kθ`;
  * the two pair-order sums add `P² ε` each. So the approximate sum at k differs from the
  * reference sum by at most
- *   bound(k) = ε (P (4B² + 48B + 2) + 2 k Σθ + 2P² + 4P)   (≈ 1e-8 for P = 64, B = 512, k = 2^20).
- * Decisions are then made with a margin of 2.5 bound: an offset is re-evaluated exactly (the
+ *   bound(k) = ε (P (4B² + 80B + 2) + 2 k Σθ + 2P² + 4P)   (≈ 1e-8 for P = 64, B = 512, k = 2^20).
+ * Decisions are then made with a margin of 2.5 bound (two approximate sums are compared, and a
+ * quarter of the bound each is spare): an offset is re-evaluated exactly (the
  * reference expression, Math.cos per pair) when its approximate sum is within the margin of the
  * best approximate sum seen so far, or within the margin of zero while no negative sum has been
  * found; every other offset provably cannot change the floor, its offset (ties go to the
@@ -19800,7 +19803,7 @@ function scanSimilarityRange(theta, kStart, kEnd) {
     for (let k0 = kStart; k0 < kEnd; k0 += BLOCK) {
         const n = Math.min(BLOCK, kEnd - k0);
         fillBlock(theta, a2, cT, sT, k0, n, buf, seedNow, seedBefore);
-        const margin = 2.5 * EPS * (P * (4 * n * n + 48 * n + 2) + 2 * (k0 + n) * sumTheta + 2 * P * P + 4 * P);
+        const margin = 2.5 * EPS * (P * (4 * n * n + 80 * n + 2) + 2 * (k0 + n) * sumTheta + 2 * P * P + 4 * P);
         let threshold = bestApprox - margin;
         for (let j = 0; j < n; j++) {
             const v = buf[j];
@@ -19848,15 +19851,19 @@ function similarityScan(theta, span) {
         return none;
     return { separationFloor: r.floor, separationFloorOffset: r.offset, discriminationSpan: r.negative };
 }
-// 2π split in three: A and B have 24 significant bits, so n·A and n·B are exact for n < 2^29.
+// 2π = A + B + C + D: A and B have 24 significant bits, so n·A and n·B are exact for n < 2^29;
+// A + B + C is exactly the binary64 value 2·Math.PI, and D = 2π - 2·Math.PI = 2(π - Math.PI)
+// (π - Math.PI = 1.2246467991473531772e-16) carries the rest, so the turn itself is off by
+// under 1e-31 per turn instead of 2.4e-16.
 const TURN_A = Math.fround(2 * Math.PI);
 const TURN_B = Math.fround(2 * Math.PI - TURN_A);
 const TURN_C = 2 * Math.PI - TURN_A - TURN_B;
+const TURN_D = 2.4492935982947064e-16;
 const MAX_TURNS = 2 ** 29;
 /**
  * radians: `x - n·2π` for the nearest whole n (Cody–Waite reduction), so the seeds avoid the slow
- * large-argument path of Math.cos. `x - n·A` is exact (Sterbenz), the rest adds under 16ε; and the
- * split of 2π is exact to ~2^-100, far below ε. Arguments past `2^29` turns are left alone.
+ * large-argument path of Math.cos. `x - n·A` is exact (Sterbenz), the three later steps add
+ * under 20ε for a result within π. Arguments past `2^29` turns are left to Math.cos.
  */
 function reduceTurns(x) {
     if (!(x > 1e5))
@@ -19864,7 +19871,7 @@ function reduceTurns(x) {
     const n = Math.round(x / (2 * Math.PI));
     if (n >= MAX_TURNS)
         return x;
-    return x - n * TURN_A - n * TURN_B - n * TURN_C;
+    return x - n * TURN_A - n * TURN_B - n * TURN_C - n * TURN_D;
 }
 /**
  * Fills buf[j] with an approximation of Σ_i cos((k0 + j) θ_i), j < n (error bound above).
@@ -20073,7 +20080,7 @@ function attentionScale(spec) {
         return yarnAttentionScale(code.scaling.factor);
     return 1;
 }
-/** Every metric of METRICS.md for one spec (sinusoidal base: {@link SINUSOIDAL_BASE}). */
+/** Every metric of METRICS.md for one spec; null where a metric does not apply or its inputs are degenerate. */
 function computeMetrics(spec) {
     const declared = declaredSpan(spec);
     const served = servedSpan(spec);
@@ -20126,6 +20133,118 @@ function computeMetrics(spec) {
         flopsPerToken: flopsPerToken(counts ? counts.nonEmbeddingParams : null, positiveCount(spec.layers), span, heads, headDim),
         tokenBudget: tokenBudget(spec.serving, span),
     };
+}
+
+;// CONCATENATED MODULE: ./src/core/parse/errors.ts
+/**
+ * The one error the readers throw: the file cannot be read as a model description at all
+ * (bad text, bad syntax, an unsafe or unreadable structure, no model in it). Problems with
+ * single values are findings instead, so one run reports all of them.
+ */
+class ReadError extends Error {
+    name = 'ReadError';
+    /** The file as the caller named it. */
+    file;
+    /** 1-based line the problem was found at (default: `null`, the whole file). */
+    line;
+    /** Dotted key the problem is about (default: `null`). */
+    key;
+    /** The problem without the file and line prefix. */
+    reason;
+    constructor(file, line, reason, key = null) {
+        super(`${file}${line === null ? '' : `, line ${line}`}: ${reason}`);
+        this.file = file;
+        this.line = line;
+        this.key = key;
+        this.reason = reason;
+    }
+}
+/**
+ * The text parsed but holds no model description (no format marker, no checkpoint keys). The
+ * gate skips such files when only its default globs picked them, since `config.json` is a common
+ * name for other things.
+ */
+class NotAModelError extends ReadError {
+}
+
+;// CONCATENATED MODULE: ./src/core/parse/quote.ts
+/**
+ * How values, keys and paths from an untrusted file are quoted in messages: short, exact and
+ * unambiguous. Escaping for markdown or HTML is the renderer's job; this only keeps messages
+ * readable (bounded length, visible quotes, `-0` kept).
+ */
+const MAX_QUOTED = 60;
+/** `s` cut to `max` characters with an ellipsis (default: `60`). */
+function truncate(s, max = MAX_QUOTED) {
+    return s.length <= max ? s : `${s.slice(0, max - 1)}…`;
+}
+/**
+ * A number as a reader would write it: `-0` stays `-0`, whole numbers past 2^53 in full (the
+ * exact value of the double, not JavaScript's shortest form `1152921504606847000`), others as
+ * JavaScript prints them.
+ */
+function formatNumber(n) {
+    if (Object.is(n, -0))
+        return '-0';
+    if (Number.isInteger(n) && !Number.isSafeInteger(n) && Math.abs(n) < 1e21)
+        return BigInt(n).toString();
+    return String(n);
+}
+/** A string in double quotes with JSON escapes, so spaces, quotes and controls stay visible. */
+function quoteText(s) {
+    return truncate(JSON.stringify(s), MAX_QUOTED + 2);
+}
+/**
+ * The dotted form of a path as written in the file: keys joined by `.`, list indexes in
+ * brackets (`rope_scaling.factor`, `layer_types[3]`).
+ */
+function dottedKey(path) {
+    let out = '';
+    for (const segment of path) {
+        if (typeof segment === 'number')
+            out += `[${segment}]`;
+        else
+            out += out === '' ? truncate(segment) : `.${truncate(segment)}`;
+    }
+    return out;
+}
+/** What kind of value `v` is, in words, for "expected …" messages. */
+function kindOf(v) {
+    if (v === null || v === undefined)
+        return 'empty';
+    if (Array.isArray(v))
+        return 'a list';
+    switch (typeof v) {
+        case 'string':
+            return 'text';
+        case 'number':
+            return 'a number';
+        case 'boolean':
+            return 'a boolean';
+        case 'object':
+            return 'a mapping';
+        default:
+            return typeof v;
+    }
+}
+/**
+ * The value as it appears in the file: `literal` (the scalar's source text) when known,
+ * otherwise a short rendering; collections are named, not dumped.
+ */
+function quoteValue(v, literal = null) {
+    if (Array.isArray(v))
+        return `a list of ${v.length} item${v.length === 1 ? '' : 's'}`;
+    if (v !== null && typeof v === 'object')
+        return 'a mapping';
+    if (typeof v === 'string')
+        return quoteText(v);
+    if (literal !== null && literal.trim() !== '')
+        return truncate(literal.trim());
+    if (v === null || v === undefined)
+        return 'empty';
+    if (typeof v === 'number')
+        return formatNumber(v);
+    return String(v);
 }
 
 ;// CONCATENATED MODULE: ./src/core/parse/spec-defaults.ts
@@ -20220,6 +20339,7 @@ function completeScaling(s) {
 
 ;// CONCATENATED MODULE: ./src/core/parse/checkpoint-dialect.ts
 
+
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
 const CHECKPOINT_MARKERS = [
     'hidden_size', 'num_hidden_layers', 'num_attention_heads', 'n_embd', 'n_layer', 'n_head', 'd_model',
@@ -20306,7 +20426,7 @@ function readCheckpoint(r) {
         ? ['decoder_ffn_dim', 'd_ff', 'intermediate_size', 'ffn_dim']
         : ['intermediate_size', 'n_inner', 'ffn_dim', 'd_ff'], 'the feed-forward width', false);
     const vocab = size('vocab', ['vocab_size'], 'the vocabulary size', true);
-    const declaredSpan = size('declaredSpan', ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length'], 'the maximum positions', true);
+    const declaredSpan = size('declaredSpan', ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length', 'max_target_positions'], 'the maximum positions', true);
     const encoder = encoderDecoder
         ? {
             layers: size('encoder.layers', ['encoder_layers', 'num_layers'], 'the number of encoder layers', true),
@@ -20347,7 +20467,12 @@ function readCheckpoint(r) {
 }
 function readExperts(r, size) {
     const totalKeys = ['num_local_experts', 'num_experts', 'n_routed_experts'];
-    if (r.first(totalKeys.map((k) => [k])) === null)
+    const totalPath = r.first(totalKeys.map((k) => [k]));
+    if (totalPath === null)
+        return null;
+    // Dense configs of mixture-capable families write 0 or 1 experts.
+    const stated = r.get(totalPath);
+    if (stated === 0 || stated === 1)
         return null;
     return {
         total: size('experts.total', totalKeys, 'the number of experts', true),
@@ -20507,7 +20632,7 @@ function readPosition(r, modelType, gpt2Style, headDim) {
     }
     else {
         kind = 'none';
-        assumed = `no position code is stated (no rope_theta, position_embedding_type or alibi key) and model_type ${modelType === null ? 'is not stated' : `"${modelType}" is not a known family`}, so the code is read as none and positional-range metrics are not computed; state rope_theta for a rotary code or position_embedding_type otherwise`;
+        assumed = `no position code is stated (no rope_theta, position_embedding_type or alibi key) and model_type ${modelType === null ? 'is not stated' : `${quoteText(modelType)} is not a known family`}, so the code is read as none and positional-range metrics are not computed; state rope_theta for a rotary code or position_embedding_type otherwise`;
     }
     if (assumed !== null)
         r.report('position-code-assumed', r.has(typePath) ? typePath : r.has(['model_type']) ? ['model_type'] : null, assumed);
@@ -20622,31 +20747,6 @@ function knownKinds() {
     return 'linear, dynamic, yarn, llama3 (read as banded), default (no scaling)';
 }
 
-;// CONCATENATED MODULE: ./src/core/parse/errors.ts
-/**
- * The one error the readers throw: the file cannot be read as a model description at all
- * (bad text, bad syntax, an unsafe or unreadable structure, no model in it). Problems with
- * single values are findings instead, so one run reports all of them.
- */
-class ReadError extends Error {
-    name = 'ReadError';
-    /** The file as the caller named it. */
-    file;
-    /** 1-based line the problem was found at (default: `null`, the whole file). */
-    line;
-    /** Dotted key the problem is about (default: `null`). */
-    key;
-    /** The problem without the file and line prefix. */
-    reason;
-    constructor(file, line, reason, key = null) {
-        super(`${file}${line === null ? '' : `, line ${line}`}: ${reason}`);
-        this.file = file;
-        this.line = line;
-        this.key = key;
-        this.reason = reason;
-    }
-}
-
 ;// CONCATENATED MODULE: ./src/core/rules/catalog.ts
 /** Every rule id context-reach raises. Ids are stable: policies refer to them. */
 const RULES = {
@@ -20748,78 +20848,6 @@ const RULES = {
 };
 function isRuleId(id) {
     return Object.prototype.hasOwnProperty.call(RULES, id);
-}
-
-;// CONCATENATED MODULE: ./src/core/parse/quote.ts
-/**
- * How values, keys and paths from an untrusted file are quoted in messages: short, exact and
- * unambiguous. Escaping for markdown or HTML is the renderer's job; this only keeps messages
- * readable (bounded length, visible quotes, `-0` kept).
- */
-const MAX_QUOTED = 60;
-/** `s` cut to `max` characters with an ellipsis (default: `60`). */
-function truncate(s, max = MAX_QUOTED) {
-    return s.length <= max ? s : `${s.slice(0, max - 1)}…`;
-}
-/** A number as a reader would write it: `-0` stays `-0`, others as JavaScript prints them. */
-function formatNumber(n) {
-    return Object.is(n, -0) ? '-0' : String(n);
-}
-/** A string in double quotes with JSON escapes, so spaces, quotes and controls stay visible. */
-function quoteText(s) {
-    return truncate(JSON.stringify(s), MAX_QUOTED + 2);
-}
-/**
- * The dotted form of a path as written in the file: keys joined by `.`, list indexes in
- * brackets (`rope_scaling.factor`, `layer_types[3]`).
- */
-function dottedKey(path) {
-    let out = '';
-    for (const segment of path) {
-        if (typeof segment === 'number')
-            out += `[${segment}]`;
-        else
-            out += out === '' ? truncate(segment) : `.${truncate(segment)}`;
-    }
-    return out;
-}
-/** What kind of value `v` is, in words, for "expected …" messages. */
-function kindOf(v) {
-    if (v === null || v === undefined)
-        return 'empty';
-    if (Array.isArray(v))
-        return 'a list';
-    switch (typeof v) {
-        case 'string':
-            return 'text';
-        case 'number':
-            return 'a number';
-        case 'boolean':
-            return 'a boolean';
-        case 'object':
-            return 'a mapping';
-        default:
-            return typeof v;
-    }
-}
-/**
- * The value as it appears in the file: `literal` (the scalar's source text) when known,
- * otherwise a short rendering; collections are named, not dumped.
- */
-function quoteValue(v, literal = null) {
-    if (Array.isArray(v))
-        return `a list of ${v.length} item${v.length === 1 ? '' : 's'}`;
-    if (v !== null && typeof v === 'object')
-        return 'a mapping';
-    if (typeof v === 'string')
-        return quoteText(v);
-    if (literal !== null && literal.trim() !== '')
-        return truncate(literal.trim());
-    if (v === null || v === undefined)
-        return 'empty';
-    if (typeof v === 'number')
-        return formatNumber(v);
-    return String(v);
 }
 
 ;// CONCATENATED MODULE: ./src/core/parse/fields.ts
@@ -20981,7 +21009,9 @@ class FieldReader {
             return NaN;
         }
         if (!Number.isFinite(v)) {
-            this.report('value-invalid', path, `${key} is ${this.quote(path)}, which overflows to ${v > 0 ? '' : '-'}Infinity in a double; expected ${expected}`);
+            const written = this.quote(path);
+            const overflow = /inf/i.test(written) ? ', which is not finite' : `, which overflows to ${v > 0 ? '' : '-'}Infinity in a double`;
+            this.report('value-invalid', path, `${key} is ${written}${overflow}; expected ${expected}`);
             return NaN;
         }
         if (whole && Number.isInteger(v) && !Number.isSafeInteger(v)) {
@@ -20993,6 +21023,12 @@ class FieldReader {
 }
 
 ;// CONCATENATED MODULE: ./src/core/parse/json-pointer.ts
+/**
+ * JSON Pointer (RFC 6901) over parsed documents, to pick a model block inside a larger file
+ * (`--at /model`). Both the string form (`/a/b`) and the URI-fragment form (`#/a/b`, section 6)
+ * are read.
+ */
+
 /** A pointer that is malformed or does not lead anywhere in the document. */
 class PointerError extends Error {
     name = 'PointerError';
@@ -21069,7 +21105,7 @@ function resolvePointer(root, pointer) {
         else if (current !== null && typeof current === 'object') {
             if (!Object.prototype.hasOwnProperty.call(current, token)) {
                 const keys = Object.keys(current);
-                const some = keys.slice(0, 8).map((k) => JSON.stringify(k)).join(', ');
+                const some = keys.slice(0, 8).map((k) => quoteText(k)).join(', ');
                 throw new PointerError(pointer, path, `stops at ${where(path)}: no key ${JSON.stringify(token)} there${keys.length ? ` (keys: ${some}${keys.length > 8 ? ', …' : ''})` : ' (the mapping is empty)'}`);
             }
             current = current[token];
@@ -21197,7 +21233,7 @@ function normalise(name) {
 function suggestKey(name, known) {
     if (known.length === 0)
         return null;
-    const synonym = CHECKPOINT_SYNONYMS[name];
+    const synonym = Object.prototype.hasOwnProperty.call(CHECKPOINT_SYNONYMS, name) ? CHECKPOINT_SYNONYMS[name] : undefined;
     if (synonym !== undefined && known.includes(synonym))
         return synonym;
     const probe = normalise(name.slice(0, 100));
@@ -21470,7 +21506,8 @@ const FORBIDDEN_KEYS = ['__proto__', 'constructor', 'prototype'];
 const BOM = '\uFEFF';
 /**
  * Bytes of a file as text: strict UTF-8 (a byte sequence that is not UTF-8 is refused, never
- * replaced), a leading byte-order mark dropped. Throws `ReadError` naming `path`.
+ * replaced), a leading byte-order mark dropped, and the text checks of `parseSource` applied
+ * (no NUL, so no binary or UTF-16 data; bounded length). Throws `ReadError` naming `path`.
  */
 function decodeText(bytes, path) {
     if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) {
@@ -21487,7 +21524,10 @@ function decodeText(bytes, path) {
         throw new ReadError(path, line, `is not UTF-8 text: bytes ${hex} at byte offset ${at} do not form a UTF-8 character (save the file as UTF-8)`);
     }
     // A decoder with ignoreBOM false drops the mark itself; this covers a doubled one.
-    return text.startsWith(BOM) ? text.slice(1) : text;
+    if (text.startsWith(BOM))
+        text = text.slice(1);
+    checkText(text, path);
+    return text;
 }
 /**
  * Parses JSON or YAML `text` holding one document whose top level is a mapping.
@@ -21498,6 +21538,10 @@ function parseSource(text, file) {
     if (text.startsWith(BOM))
         text = text.slice(1);
     checkText(text, file);
+    // YAML would read a broken config.json (a bare word, a trailing comma) that JSON loaders refuse.
+    const json = /\.json$/i.test(file);
+    if (json)
+        checkJson(text, file);
     const lineCounter = new dist/* LineCounter */.HN();
     const tokens = Array.from(new dist/* Parser */.iX(lineCounter.addNewLine).parse(text));
     const lineAt = (offset) => lineCounter.linePos(offset).line;
@@ -21531,7 +21575,7 @@ function parseSource(text, file) {
         const what = (0,dist/* isSeq */.oP)(root) ? 'a list' : (0,dist/* isScalar */.jn)(root) ? quoteValue(root.value) : 'not a mapping';
         throw new ReadError(file, lineAt(root.range?.[0] ?? 0), `top level is ${what}; expected a mapping of keys`);
     }
-    const builder = new Builder(doc, text, file, lineAt);
+    const builder = new Builder(doc, text, file, lineAt, json);
     const value = builder.build(root, [], 1);
     return {
         value,
@@ -21560,6 +21604,34 @@ function checkText(text, file) {
     const lone = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/.exec(text);
     if (lone) {
         throw new ReadError(file, lineOfIndex(lone.index), 'contains a lone UTF-16 surrogate, which no UTF-8 file can hold; save the file as UTF-8');
+    }
+}
+/**
+ * Strict JSON syntax, as the JSON loaders of the checkpoint libraries apply it: their Python
+ * reader also takes bare NaN, Infinity and -Infinity, so those pass here too (and read as numbers).
+ */
+function checkJson(text, file) {
+    // Same-length stand-ins keep error positions true to the file.
+    const standIn = text.replace(/"(?:[^"\\]|\\.)*"|-?Infinity|NaN/g, (m) => (m.startsWith('"') ? m : `0${' '.repeat(m.length - 1)}`));
+    try {
+        JSON.parse(standIn);
+    }
+    catch (error) {
+        const message = error instanceof Error ? error.message : String(error);
+        const at = /at position (\d+)/.exec(message);
+        const lineCol = /\(line (\d+) column \d+\)/.exec(message);
+        let line = null;
+        if (at)
+            line = text.slice(0, Number(at[1])).split('\n').length;
+        else if (lineCol)
+            line = Number(lineCol[1]);
+        else if (/Unexpected end/.test(message))
+            line = text.split('\n').length;
+        const reason = message
+            .replace(/ in JSON at position \d+.*$/s, '')
+            .replace(/ \(line \d+ column \d+\)$/, '')
+            .replace(/, ".*" is not valid JSON$/s, '');
+        throw new ReadError(file, line, `is not valid JSON: ${reason}`);
     }
 }
 /** Offset of the first collection nested deeper than `MAX_NESTING`, or null; walks the syntax tree without recursion. */
@@ -21603,16 +21675,18 @@ class Builder {
     text;
     file;
     lineAt;
+    json;
     notes = new WeakMap();
     aliases = 0;
     aliasValues = 0;
     expanding = new Set();
     insideAlias = 0;
-    constructor(doc, text, file, lineAt) {
+    constructor(doc, text, file, lineAt, json) {
         this.doc = doc;
         this.text = text;
         this.file = file;
         this.lineAt = lineAt;
+        this.json = json;
     }
     build(node, path, level) {
         if (this.insideAlias > 0 && ++this.aliasValues > MAX_ALIAS_VALUES) {
@@ -21696,6 +21770,8 @@ class Builder {
     }
     scalar(node, path) {
         const v = node.value;
+        if (this.json && node.type === 'PLAIN' && (v === 'NaN' || v === 'Infinity' || v === '-Infinity'))
+            return Number(v);
         if (v === null || typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean')
             return v;
         throw new ReadError(this.file, this.nodeLine(node), `${this.where(path)} holds a value of an unsupported kind; expected text, a number, a boolean or empty`);
@@ -21821,8 +21897,8 @@ function notAModel(doc, root, prefix, file) {
     const nested = Object.keys(root).find((k) => read_model_isMapping(root[k]) && detectDialect(root[k]) !== null);
     const hint = nested === undefined
         ? ''
-        : `; ${nested} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;
-    return new ReadError(file, line, `not a model config: expected "format: ${MODEL_FORMAT}" or checkpoint keys such as hidden_size and num_hidden_layers ${where}${hint}`);
+        : `; ${truncate(nested)} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;
+    return new NotAModelError(file, line, `not a model config: expected "format: ${MODEL_FORMAT}" or checkpoint keys such as hidden_size and num_hidden_layers ${where}${hint}`);
 }
 
 ;// CONCATENATED MODULE: ./src/core/rules/spec-rules.ts
@@ -21955,14 +22031,27 @@ function derivedFrom(field, locations) {
 function headGrouping(heads, kvHeads, headsField, kvField, name, push) {
     if (!spec_rules_isCount(heads) || !spec_rules_isCount(kvHeads) || heads % kvHeads === 0)
         return;
-    const divisors = [];
-    for (let d = 1; d <= heads && divisors.length < 4096; d++)
-        if (heads % d === 0)
-            divisors.push(d);
+    const divisors = divisorsOf(heads);
     const below = divisors.filter((d) => d < kvHeads).pop();
     const above = divisors.find((d) => d > kvHeads);
     const choices = [below, above].filter((d) => d !== undefined);
-    push('kv-heads-indivisible', kvField, `${name(kvField)} is ${kvHeads}, which does not divide ${name(headsField)} ${heads}; use a divisor of ${heads} such as ${choices.join(' or ')}`);
+    const examples = choices.length > 0 ? ` such as ${choices.join(' or ')}` : '';
+    push('kv-heads-indivisible', kvField, `${name(kvField)} is ${kvHeads}, which does not divide ${name(headsField)} ${heads}; use a divisor of ${heads}${examples}`);
+}
+/** Divisors of `n` in ascending order, by trial up to sqrt(n); none past 2^32, where the trial would take too long for a message. */
+function divisorsOf(n) {
+    if (n > 2 ** 32)
+        return [];
+    const small = [];
+    const large = [];
+    for (let d = 1; d * d <= n; d++) {
+        if (n % d !== 0)
+            continue;
+        small.push(d);
+        if (d * d !== n)
+            large.unshift(n / d);
+    }
+    return [...small, ...large];
 }
 /**
  * Rotary codes turn channel pairs, so `headDim * fraction` must be an even whole number
@@ -22007,7 +22096,7 @@ function memoryAtSpan(spec, span) {
     const counts = parameterCounts(spec);
     return memoryBytes(weightBytes(spec, counts ? counts.params : null), cacheBytesAtSpan(spec, t));
 }
-/** bytes: `deviceGiB · 2^30 · (1 - reserve)` (reserve default: `0.1`); null without a device budget. */
+/** bytes: `deviceGiB · 2^30 · (1 - reserve)`, null without a device budget (reserve default: `0.1`). */
 function usableDeviceBytes(spec) {
     const device = positiveFinite(spec.serving?.deviceGiB);
     const stated = spec.serving?.reserve;
@@ -22228,6 +22317,7 @@ function worse(a, b) {
 
 
 
+
 /** Turns anything thrown while reading a file into a failure that names the file and line. */
 function toFailure(path, error) {
     const line = error?.line;
@@ -22235,6 +22325,7 @@ function toFailure(path, error) {
         path,
         line: typeof line === 'number' ? line : null,
         message: error instanceof Error ? error.message : String(error),
+        ...(error instanceof NotAModelError ? { notAModel: true } : {}),
     };
 }
 /** Read, measure and judge one model config. Throws `ReadError` when the text cannot be read. */
@@ -23183,7 +23274,7 @@ function sameBytes(a, b) {
  */
 async function runGate(source, request) {
     const { base, head, policyPath } = request;
-    const basePolicyBytes = await source.read(base, policyPath);
+    const basePolicyBytes = await source.read(request.policyRef ?? base, policyPath);
     let policy = DEFAULT_POLICY;
     if (basePolicyBytes !== null) {
         policy = parsePolicy(decodeText(basePolicyBytes, policyPath), policyPath);
@@ -23210,14 +23301,24 @@ async function runGate(source, request) {
         }
         return { change: { ...change, status }, base: baseVersion, head: headVersion, judging };
     });
+    // `config.json` is a common name for things that are not models: when only the default globs
+    // picked such a file, it is named in a notice instead of blocking.
+    const notices = [...(request.notices ?? [])];
+    const judgedConfigs = configs.filter((config) => {
+        const head = config.head;
+        const skip = policy.files === DEFAULT_POLICY.files && head !== null && 'notAModel' in head && head.notAModel === true;
+        if (skip)
+            notices.push(`${config.change.path} matched the default file globs but is not a model config; it was not judged (list your model files under \`files\` in the policy to judge exactly those).`);
+        return !skip;
+    });
     const labels = request.labels ?? [];
     const waiverLabel = policy.waiverLabel ?? null;
     return decide({
-        configs,
+        configs: judgedConfigs,
         deleted,
         policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged },
         waiver: { label: waiverLabel, applied: waiverLabel !== null && labels.includes(waiverLabel) },
-        notices: request.notices ?? [],
+        notices,
         base,
         head,
     });
@@ -24269,13 +24370,13 @@ function checkPath(path) {
     return path;
 }
 const git_KINDS = { blob: 'file', tree: 'directory', commit: 'submodule' };
-function createGitReader(cwd, options = {}) {
-    const git = options.git ?? 'git';
-    const timeout = options.timeoutMs ?? 30_000;
-    const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
-    const maxFile = options.maxFileBytes ?? MAX_CONFIG_BYTES;
-    /** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
-    function run(args, maxBuffer) {
+/** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
+/** The git command of an argument list (`commit` in `-c user.name=x commit -m y`), for messages. */
+function verb(args) {
+    return args.find((arg, i) => !arg.startsWith('-') && args[i - 1] !== '-c') ?? 'command';
+}
+function runner(cwd, git, timeout) {
+    return function run(args, maxBuffer) {
         // The checkout's own settings stay, but nothing may prompt or run a file-system monitor.
         const full = ['-c', 'core.fsmonitor=false', '-c', 'core.quotePath=false', ...args];
         return new Promise((resolve, reject) => {
@@ -24294,10 +24395,10 @@ function createGitReader(cwd, options = {}) {
                 }
                 const failure = error;
                 if (failure.code === 'ERR_CHILD_PROCESS_STDIO_MAXBUFFER') {
-                    reject(new GitError(`git ${args[0]} wrote more than ${maxBuffer} bytes; expected less (output refused)`, args, null, errText));
+                    reject(new GitError(`git ${verb(args)} wrote more than ${maxBuffer} bytes; expected less (output refused)`, args, null, errText));
                 }
                 else if (failure.killed || failure.signal) {
-                    reject(new GitError(`git ${args[0]} did not finish within ${timeout} ms (stopped with ${failure.signal ?? 'a signal'})`, args, null, errText));
+                    reject(new GitError(`git ${verb(args)} did not finish within ${timeout} ms (stopped with ${failure.signal ?? 'a signal'})`, args, null, errText));
                 }
                 else if (typeof failure.code === 'number') {
                     resolve({ code: failure.code, stdout, stderr: errText });
@@ -24307,11 +24408,18 @@ function createGitReader(cwd, options = {}) {
                 }
             });
         });
-    }
-    function failed(args, result) {
-        const reason = result.stderr.split('\n')[0] || 'no message';
-        return new GitError(`git ${args.join(' ')} failed with exit status ${result.code}: ${reason}`, args, result.code, result.stderr);
-    }
+    };
+}
+function failed(args, result) {
+    const reason = result.stderr.split('\n')[0] || 'no message';
+    return new GitError(`git ${args.join(' ')} failed with exit status ${result.code}: ${reason}`, args, result.code, result.stderr);
+}
+function createGitReader(cwd, options = {}) {
+    const git = options.git ?? 'git';
+    const timeout = options.timeoutMs ?? 30_000;
+    const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
+    const maxFile = options.maxFileBytes ?? MAX_CONFIG_BYTES;
+    const run = runner(cwd, git, timeout);
     async function resolveCommit(rev) {
         const args = ['rev-parse', '--verify', '--quiet', `${checkRevision(rev)}^{commit}`];
         const result = await run(args, 4096);
@@ -24388,6 +24496,29 @@ function createGitReader(cwd, options = {}) {
         },
     };
 }
+/** Identity of scratch commits: invented, so no one's global git settings are needed or used. */
+const SCRATCH_IDENTITY = ['-c', 'user.name=context-reach demo', '-c', 'user.email=demo@example.invalid', '-c', 'commit.gpgsign=false'];
+function createScratchRepository(cwd, options = {}) {
+    const run = runner(cwd, options.git ?? 'git', options.timeoutMs ?? 30_000);
+    const must = async (args) => {
+        const result = await run(args, 1024 * 1024);
+        if (result.code !== 0)
+            throw failed(args, result);
+        return result.stdout.toString('utf8').trim();
+    };
+    return {
+        async init() {
+            await must(['init', '-q']);
+            // `init -b` needs git 2.28; pointing HEAD works on any git.
+            await must(['symbolic-ref', 'HEAD', 'refs/heads/main']);
+        },
+        async commitAll(message) {
+            await must(['add', '-A']);
+            await must([...SCRATCH_IDENTITY, 'commit', '-q', '--allow-empty', '--no-verify', '-m', message]);
+            return must(['rev-parse', 'HEAD']);
+        },
+    };
+}
 /**
  * Parses `git diff --name-status -z` output: `STATUS NUL path NUL`, or for renames and copies
  * `R<score> NUL old NUL new NUL`. Copies count as added files; type changes as modified.
@@ -24423,29 +24554,6 @@ function parseNameStatus(output) {
         i += 2;
     }
     return files;
-}
-function createScratchRepository(cwd, git = 'git') {
-    const run = (args) => new Promise((resolve, reject) => {
-        (0,external_node_child_process_namespaceObject.execFile)(git, ['-c', 'user.name=context-reach demo', '-c', 'user.email=demo@context-reach.invalid', '-c', 'commit.gpgsign=false', ...args], {
-            cwd, timeout: 30_000, maxBuffer: 1024 * 1024,
-            env: { ...process.env, GIT_TERMINAL_PROMPT: '0', LC_ALL: 'C' },
-        }, (error, stdout, stderr) => {
-            if (error)
-                reject(new GitError(`git ${args[0]} failed in the scratch repository: ${String(stderr).split('\n')[0] || error.message}`, args, null, String(stderr)));
-            else
-                resolve(String(stdout).trim());
-        });
-    });
-    return {
-        async init() {
-            await run(['init', '--quiet', '--initial-branch=main']);
-        },
-        async commitAll(message) {
-            await run(['add', '--all']);
-            await run(['commit', '--quiet', '--allow-empty', '--no-verify', '-m', message]);
-            return run(['rev-parse', 'HEAD']);
-        },
-    };
 }
 
 ;// CONCATENATED MODULE: ./src/cli/options.ts
@@ -24601,9 +24709,11 @@ async function runDiff(args, io) {
     const git = createGitReader(io.cwd);
     const head = await commitOf(git, values.head ?? 'HEAD', '--head');
     const base = values.base !== undefined ? await commitOf(git, values.base, '--base') : await defaultBase(git, head);
-    const changes = await git.changedFiles(base, head);
+    // Changes since head left the base (as a pull request shows them); the policy from the base itself.
+    const start = (await git.mergeBase(base, head)) ?? base;
+    const changes = await git.changedFiles(start, head);
     const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
-        base, head, changes,
+        base: start, policyRef: base, head, changes,
         policyPath: values.policy ?? '.github/context-reach.yml',
         labels: values.label ?? [],
         overrides: servingPatch(values),

@@ -106,14 +106,24 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     return { change: { ...change, status }, base: baseVersion, head: headVersion, judging };
   });
 
+  // `config.json` is a common name for things that are not models: when only the default globs
+  // picked such a file, it is named in a notice instead of blocking.
+  const notices = [...(request.notices ?? [])];
+  const judgedConfigs = configs.filter((config) => {
+    const head = config.head;
+    const skip = policy.files === DEFAULT_POLICY.files && head !== null && 'notAModel' in head && head.notAModel === true;
+    if (skip) notices.push(`${config.change.path} matched the default file globs but is not a model config; it was not judged (list your model files under \`files\` in the policy to judge exactly those).`);
+    return !skip;
+  });
+
   const labels = request.labels ?? [];
   const waiverLabel = policy.waiverLabel ?? null;
   return decide({
-    configs,
+    configs: judgedConfigs,
     deleted,
     policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged },
     waiver: { label: waiverLabel, applied: waiverLabel !== null && labels.includes(waiverLabel) },
-    notices: request.notices ?? [],
+    notices,
     base,
     head,
   });

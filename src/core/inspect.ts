@@ -1,6 +1,7 @@
 import type { Dialect, Finding, LocationMap, ModelSpec, ServingPatch, SourceLocation } from './model.js';
 import type { Metrics } from './metrics/types.js';
 import { computeMetrics } from './metrics/compute.js';
+import { NotAModelError } from './parse/errors.js';
 import { readModel } from './parse/read-model.js';
 import { specFindings } from './rules/spec-rules.js';
 import { metricFindings } from './rules/metric-rules.js';
@@ -22,6 +23,8 @@ export interface FileFailure {
   path: string;
   line: number | null;
   message: string;
+  /** The text parsed but is not a model description at all (default: `false`). */
+  notAModel?: boolean;
 }
 
 /** Turns anything thrown while reading a file into a failure that names the file and line. */
@@ -31,6 +34,7 @@ export function toFailure(path: string, error: unknown): FileFailure {
     path,
     line: typeof line === 'number' ? line : null,
     message: error instanceof Error ? error.message : String(error),
+    ...(error instanceof NotAModelError ? { notAModel: true } : {}),
   };
 }
 

@@ -166,4 +166,23 @@ describe('gate scenarios', () => {
     expect(result.out.failed).toMatch(/context-reach\.yml/);
     expect(result.out.failed).toMatch(/context-reach\.yml:2: limits\.headroom\.minimum/);
   });
+
+  it('names, but does not block on, a config.json that is not a model when only the default globs picked it', async () => {
+    result = await runScenario({
+      base: { 'web/config.json': '{"port": 8080}\n' },
+      head: { 'web/config.json': '{"port": 8081}\n' },
+    });
+    expect(result.out.outputs.verdict).toBe('ok');
+    expect(comments(result)[0]!.body).toContain('matched the default file globs but is not a model config');
+  });
+
+  it('blocks the same file when the policy lists it as a model config', async () => {
+    const policy = 'files: ["web/config.json"]\n';
+    result = await runScenario({
+      base: { '.github/context-reach.yml': policy, 'web/config.json': '{"port": 8080}\n' },
+      head: { '.github/context-reach.yml': policy, 'web/config.json': '{"port": 8081}\n' },
+    });
+    expect(result.out.outputs.verdict).toBe('block');
+    expect(result.out.annotations[0]).toMatchObject({ level: 'error', file: 'web/config.json', line: 1 });
+  });
 });

@@ -497,6 +497,11 @@ describe('readModel(checkpoint) invalid values', () => {
     expect(findings.map((f) => [f.rule, f.key])).toEqual([['value-invalid', 'rope_scaling.beta_fast']]);
   });
 
+  test('readModel reads 0 or 1 experts as a dense model', () => {
+    expect(readConfig({ ...BASE, num_local_experts: 0 }).spec.experts).toBeNull();
+    expect(readConfig({ ...BASE, num_experts: 1, num_experts_per_tok: 1 }).spec.experts).toBeNull();
+  });
+
   test('readModel reports experts without num_experts_per_tok as missing', () => {
     const { spec, findings } = readConfig({ ...BASE, num_local_experts: 8 });
     expect(findings.map((f) => [f.rule, f.key])).toEqual([['value-invalid', 'num_experts_per_tok']]);

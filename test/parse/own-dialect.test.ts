@@ -264,6 +264,14 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
     ]);
   });
 
+  test('a long unknown key and a long bad value give short messages', () => {
+    const key = 'k'.repeat(900);
+    const value = 'v'.repeat(100_000);
+    const { all } = readText(`${BASE}${key}: 1\n`.replace('code: rotary', `code: "${value}"`));
+    expect(all).toHaveLength(2);
+    for (const f of all) expect(f.message.length).toBeLessThan(400);
+  });
+
   test('readModel(own JSON) names JSON lines too', () => {
     const text = fixture('own-minimal.reach.json').replace('"layers": 24', '"layers": "24"');
     const [f] = readModel(text, 'm.json').findings;

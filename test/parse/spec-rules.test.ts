@@ -55,6 +55,18 @@ describe('kv-heads-indivisible: GQA splits the query heads into groups sharing o
     expect(specFindings(spec({ kvHeads: kv }), {})).toEqual([]);
   });
 
+  test('a huge odd head count is judged at once, without a list of divisors', () => {
+    const start = performance.now();
+    // Trial division to sqrt(2^53) would take about 10^8 steps; the rule must not try.
+    const f = specFindings(spec({ heads: 2 ** 53 - 111, kvHeads: 2 }), {}).find((x) => x.rule === 'kv-heads-indivisible');
+    expect(performance.now() - start).toBeLessThan(1000);
+    expect(f?.message).toBe('kvHeads is 2, which does not divide heads 9007199254740881; use a divisor of 9007199254740881');
+  });
+
+  test('36 heads and 5 key/value heads: the divisors of 36 next to 5 are 4 and 6', () => {
+    expect(specFindings(spec({ heads: 36, hidden: 36 * 64, kvHeads: 5 }), {})[0].message).toContain('such as 4 or 6');
+  });
+
   test('an encoder stack is checked too', () => {
     const s = spec({ encoder: { layers: 6, heads: 16, kvHeads: 5 } });
     expect(specFindings(s, {}).map((f) => [f.rule, f.message])).toEqual([

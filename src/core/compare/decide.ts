@@ -8,6 +8,7 @@ import { SEVERITY_ORDER } from '../severity.js';
 import { formatInteger, formatNumber, percentChange } from '../units.js';
 import type { Judging, Limit } from './judging.js';
 import { METRIC_PATHS, METRIC_SOURCES, metricValue } from './metric-path.js';
+import type { CombinedRemedy, RemedyFields } from '../remedy/types.js';
 
 export type Verdict = 'ok' | 'warn' | 'block';
 
@@ -20,7 +21,9 @@ export interface ChangedConfig {
 }
 
 /** A finding of the head version, as the gate judged it. */
-export interface JudgedFinding extends Finding {
+export interface JudgedFinding extends Finding, Partial<RemedyFields> {
+  /** The metric a `limit-crossed` finding is about (default: absent for other rules). */
+  metric?: MetricPath;
   /** The base version already had it (same rule and key). */
   standing: boolean;
   /** The severity the verdict counts, after policy, standing and waiver (null: counts for nothing). */
@@ -60,6 +63,8 @@ export interface FileDecision {
   /** Set when a version could not be read. */
   baseError: FileFailure | null;
   headError: FileFailure | null;
+  /** Every blocking finding's first remedy applied at once, and whether that passes (default: absent). */
+  remedyTogether?: CombinedRemedy | null;
 }
 
 export interface PolicyInfo {
@@ -161,7 +166,8 @@ export function changeFindings(base: FileReport, head: FileReport): Finding[] {
   return findings;
 }
 
-function checkLimit(limit: Limit, base: number | null, head: number | null): { crossed: string[]; judged: boolean } {
+/** Which bounds of `limit` the head value (and its change over base) crosses, and whether any was judged. */
+export function checkLimit(limit: Limit, base: number | null, head: number | null): { crossed: string[]; judged: boolean } {
   const crossed: string[] = [];
   let judged = false;
   if (head !== null) {
@@ -178,9 +184,9 @@ function checkLimit(limit: Limit, base: number | null, head: number | null): { c
   return { crossed, judged };
 }
 
-function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judging: Judging): { deltas: MetricDelta[]; findings: Finding[] } {
+function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judging: Judging): { deltas: MetricDelta[]; findings: (Finding & { metric?: MetricPath })[] } {
   const deltas: MetricDelta[] = [];
-  const findings: Finding[] = [];
+  const findings: (Finding & { metric?: MetricPath })[] = [];
   for (const metric of METRIC_PATHS) {
     const b = base ? metricValue(base.metrics, metric) : null;
     const h = metricValue(head.metrics, metric);
@@ -195,6 +201,7 @@ function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judgi
           rule: 'limit-crossed', severity: limit.severity,
           message: `${metric} is ${formatNumber(h, 6)}${b !== null && b !== h ? ` (base ${formatNumber(b, 6)})` : ''}: ${crossed.join('; ')}.`,
           ...locate(head.locations, METRIC_SOURCES[metric.startsWith('precision.') ? 'collidingPositions' : metric] ?? ['serving.span', 'declaredSpan']),
+          metric,
         });
       }
     }
@@ -214,7 +221,7 @@ export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileD
   const base = isReport(config.base) ? config.base : null;
   const head = isReport(config.head) ? config.head : null;
   const headError = isFailure(config.head) ? config.head : null;
-  let raw: Finding[] = [];
+  let raw: (Finding & { metric?: MetricPath })[] = [];
   let deltas: MetricDelta[] = [];
   if (head) {
     const limits = deltasAndLimitFindings(base, head, judging);

@@ -8,7 +8,7 @@ import type { Metrics, PrecisionMetrics } from './types.js';
 import { alibiHorizon, alibiSlopes } from './alibi-slopes.js';
 import { scaleFrequencies, yarnAttentionScale } from './context-scaling.js';
 import { flopsPerToken } from './flops.js';
-import { baseFrequencies, rotaryWidth, SINUSOIDAL_BASE } from './frequencies.js';
+import { baseFrequencies, rotaryWidth } from './frequencies.js';
 import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from './kv-cache.js';
 import { fitSequences, memoryBytes, weightBytes } from './memory-fit.js';
 import { numberFormatMetrics } from './number-format.js';
@@ -53,7 +53,7 @@ export function attentionScale(spec: ModelSpec): number | null {
   return 1;
 }
 
-/** Every metric of METRICS.md for one spec (sinusoidal base: {@link SINUSOIDAL_BASE}). */
+/** Every metric of METRICS.md for one spec; null where a metric does not apply or its inputs are degenerate. */
 export function computeMetrics(spec: ModelSpec): Metrics {
   const declared = declaredSpan(spec);
   const served = servedSpan(spec);

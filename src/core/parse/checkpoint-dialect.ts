@@ -26,9 +26,14 @@
  *   the first windowed layer (layers at that index and above use the window, as the Qwen code does).
  * - Weight format: `dtype` or `torch_dtype` (float32 → fp32, bfloat16 → bf16, float16 → fp16).
  * - Embedding multiplier: `scale_embedding: true` → sqrt(hidden); Gemma families → sqrt(hidden).
+ * - Experts: `num_local_experts`, `num_experts` or `n_routed_experts` with `num_experts_per_tok`;
+ *   a stated 0 or 1 is a dense model.
+ * - Declared span: `max_position_embeddings`, else `n_positions`, `n_ctx`, `max_seq_len`,
+ *   `seq_length`, or the decoder's `max_target_positions`.
  */
 import type { StorageDType } from '../model.js';
 import type { FieldReader } from './fields.js';
+import { quoteText } from './quote.js';
 import type { PathSegment } from './quote.js';
 import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
 import {
@@ -131,7 +136,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     ? ['decoder_ffn_dim', 'd_ff', 'intermediate_size', 'ffn_dim']
     : ['intermediate_size', 'n_inner', 'ffn_dim', 'd_ff'], 'the feed-forward width', false);
   const vocab = size('vocab', ['vocab_size'], 'the vocabulary size', true)!;
-  const declaredSpan = size('declaredSpan', ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length'], 'the maximum positions', true)!;
+  const declaredSpan = size('declaredSpan', ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length', 'max_target_positions'], 'the maximum positions', true)!;
 
   const encoder = encoderDecoder
     ? {
@@ -178,7 +183,11 @@ type SizeReader = (field: string, candidates: string[], what: string, required: 
 
 function readExperts(r: FieldReader, size: SizeReader): SpecDraft['experts'] {
   const totalKeys = ['num_local_experts', 'num_experts', 'n_routed_experts'];
-  if (r.first(totalKeys.map((k) => [k])) === null) return null;
+  const totalPath = r.first(totalKeys.map((k) => [k]));
+  if (totalPath === null) return null;
+  // Dense configs of mixture-capable families write 0 or 1 experts.
+  const stated = r.get(totalPath);
+  if (stated === 0 || stated === 1) return null;
   return {
     total: size('experts.total', totalKeys, 'the number of experts', true)!,
     active: size('experts.active', ['num_experts_per_tok'], 'the number of experts each token uses', true)!,
@@ -325,7 +334,7 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
     kind = 'learned';
   } else {
     kind = 'none';
-    assumed = `no position code is stated (no rope_theta, position_embedding_type or alibi key) and model_type ${modelType === null ? 'is not stated' : `"${modelType}" is not a known family`}, so the code is read as none and positional-range metrics are not computed; state rope_theta for a rotary code or position_embedding_type otherwise`;
+    assumed = `no position code is stated (no rope_theta, position_embedding_type or alibi key) and model_type ${modelType === null ? 'is not stated' : `${quoteText(modelType)} is not a known family`}, so the code is read as none and positional-range metrics are not computed; state rope_theta for a rotary code or position_embedding_type otherwise`;
   }
   if (assumed !== null) r.report('position-code-assumed', r.has(typePath) ? typePath : r.has(['model_type']) ? ['model_type'] : null, assumed);
 

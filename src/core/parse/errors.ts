@@ -22,3 +22,10 @@ export class ReadError extends Error {
     this.reason = reason;
   }
 }
+
+/**
+ * The text parsed but holds no model description (no format marker, no checkpoint keys). The
+ * gate skips such files when only its default globs picked them, since `config.json` is a common
+ * name for other things.
+ */
+export class NotAModelError extends ReadError {}

@@ -3,6 +3,7 @@
  * (`--at /model`). Both the string form (`/a/b`) and the URI-fragment form (`#/a/b`, section 6)
  * are read.
  */
+import { quoteText } from './quote.js';
 import type { PathSegment } from './quote.js';
 
 /** A pointer that is malformed or does not lead anywhere in the document. */
@@ -81,7 +82,7 @@ export function resolvePointer(root: unknown, pointer: string): { value: unknown
     } else if (current !== null && typeof current === 'object') {
       if (!Object.prototype.hasOwnProperty.call(current, token)) {
         const keys = Object.keys(current);
-        const some = keys.slice(0, 8).map((k) => JSON.stringify(k)).join(', ');
+        const some = keys.slice(0, 8).map((k) => quoteText(k)).join(', ');
         throw new PointerError(pointer, path, `stops at ${where(path)}: no key ${JSON.stringify(token)} there${keys.length ? ` (keys: ${some}${keys.length > 8 ? ', …' : ''})` : ' (the mapping is empty)'}`);
       }
       current = (current as Record<string, unknown>)[token];

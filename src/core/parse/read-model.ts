@@ -5,11 +5,11 @@
  */
 import type { Dialect, Finding, LocationMap, ModelSpec } from '../model.js';
 import { isCheckpointConfig, readCheckpoint } from './checkpoint-dialect.js';
-import { ReadError } from './errors.js';
+import { NotAModelError, ReadError } from './errors.js';
 import { FieldReader } from './fields.js';
 import { PointerError, formatPointer, resolvePointer } from './json-pointer.js';
 import { MODEL_FORMAT, MODEL_FORMAT_FAMILY, readOwnDialect } from './own-dialect.js';
-import { kindOf, quoteValue } from './quote.js';
+import { kindOf, quoteValue, truncate } from './quote.js';
 import type { PathSegment } from './quote.js';
 import { completeSpec } from './spec-defaults.js';
 import { parseSource } from './source.js';
@@ -78,15 +78,15 @@ function selectBlock(doc: SourceDocument, file: string, at: string | undefined):
   return { root: selected.value as SourceMapping, prefix: selected.path };
 }
 
-function notAModel(doc: SourceDocument, root: SourceMapping, prefix: PathSegment[], file: string): ReadError {
+function notAModel(doc: SourceDocument, root: SourceMapping, prefix: PathSegment[], file: string): NotAModelError {
   const where = prefix.length === 0 ? 'at the top level' : `under ${JSON.stringify(formatPointer(prefix.map(String)))}`;
   const line = prefix.length === 0 ? (Object.keys(root).length > 0 ? doc.lineOf([Object.keys(root)[0]]) : null) : doc.lineOf(prefix);
   // A model nested one level down (multimodal configs keep it under text_config) is worth naming.
   const nested = Object.keys(root).find((k) => isMapping(root[k]) && detectDialect(root[k] as SourceMapping) !== null);
   const hint = nested === undefined
     ? ''
-    : `; ${nested} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;
-  return new ReadError(
+    : `; ${truncate(nested)} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;
+  return new NotAModelError(
     file,
     line,
     `not a model config: expected "format: ${MODEL_FORMAT}" or checkpoint keys such as hidden_size and num_hidden_layers ${where}${hint}`,

@@ -156,12 +156,25 @@ function headGrouping(
   push: (rule: RuleId, field: string | null, message: string) => void,
 ): void {
   if (!isCount(heads) || !isCount(kvHeads) || heads % kvHeads === 0) return;
-  const divisors: number[] = [];
-  for (let d = 1; d <= heads && divisors.length < 4096; d++) if (heads % d === 0) divisors.push(d);
+  const divisors = divisorsOf(heads);
   const below = divisors.filter((d) => d < kvHeads).pop();
   const above = divisors.find((d) => d > kvHeads);
   const choices = [below, above].filter((d): d is number => d !== undefined);
-  push('kv-heads-indivisible', kvField, `${name(kvField)} is ${kvHeads}, which does not divide ${name(headsField)} ${heads}; use a divisor of ${heads} such as ${choices.join(' or ')}`);
+  const examples = choices.length > 0 ? ` such as ${choices.join(' or ')}` : '';
+  push('kv-heads-indivisible', kvField, `${name(kvField)} is ${kvHeads}, which does not divide ${name(headsField)} ${heads}; use a divisor of ${heads}${examples}`);
+}
+
+/** Divisors of `n` in ascending order, by trial up to sqrt(n); none past 2^32, where the trial would take too long for a message. */
+function divisorsOf(n: number): number[] {
+  if (n > 2 ** 32) return [];
+  const small: number[] = [];
+  const large: number[] = [];
+  for (let d = 1; d * d <= n; d++) {
+    if (n % d !== 0) continue;
+    small.push(d);
+    if (d * d !== n) large.unshift(n / d);
+  }
+  return [...small, ...large];
 }
 
 /**

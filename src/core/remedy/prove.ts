@@ -1,0 +1,122 @@
+/**
+ * The proof behind every remedy: the changed description is measured again (every metric of the
+ * contract) and judged again by the same policy against the same base, exactly as the gate judges
+ * a pull request. A change passes when the finding it targets no longer blocks and nothing blocks
+ * that did not block before.
+ */
+import type { ChangedFile } from '../changes.js';
+import { decideFile, type FileDecision } from '../compare/decide.js';
+import type { Judging } from '../compare/judging.js';
+import { sortFindings, type FileReport } from '../inspect.js';
+import { computeMetrics } from '../metrics/compute.js';
+import type { Metrics } from '../metrics/types.js';
+import type { Finding, ModelSpec } from '../model.js';
+import { metricFindings } from '../rules/metric-rules.js';
+import { specFindings } from '../rules/spec-rules.js';
+import { applyChange } from './apply-change.js';
+import type { Change } from './types.js';
+
+/** What a finding is, for telling findings before and after a change apart: the rule, and the metric of a limit. */
+export interface FindingIdentity {
+  rule: string;
+  metric?: string;
+}
+
+/** `rule` or `rule:metric`. */
+export function identityOf(finding: FindingIdentity): string {
+  return finding.metric ? `${finding.rule}:${finding.metric}` : finding.rule;
+}
+
+/** One file as the gate judged it, and what a proof compares against. */
+export interface RemedyContext {
+  head: FileReport;
+  base: FileReport | null;
+  judging: Judging;
+  change: ChangedFile;
+  /** Findings of the reader (about the text itself), which a change to the description leaves as they are. */
+  readFindings: Finding[];
+  /** Blocking findings of the head as it is, counted by identity. */
+  blockingBefore: Map<string, number>;
+  /** Every finding identity of the head as it is. */
+  findingsBefore: Set<string>;
+}
+
+function sameFinding(a: Finding, b: Finding): boolean {
+  return a.rule === b.rule && a.message === b.message && a.key === b.key && a.line === b.line;
+}
+
+/** The head's findings less the ones its spec and metrics give again: those came from reading the text. */
+function readerFindings(head: FileReport): Finding[] {
+  const derived = [...specFindings(head.spec, head.locations), ...metricFindings(head.spec, head.metrics, head.locations)];
+  const out: Finding[] = [];
+  for (const finding of head.findings) {
+    const at = derived.findIndex((d) => sameFinding(d, finding));
+    if (at >= 0) derived.splice(at, 1);
+    else out.push(finding);
+  }
+  return out;
+}
+
+function blockingCounts(decision: FileDecision): Map<string, number> {
+  const counts = new Map<string, number>();
+  for (const finding of decision.findings) {
+    if (finding.severity !== 'block') continue;
+    const id = identityOf(finding);
+    counts.set(id, (counts.get(id) ?? 0) + 1);
+  }
+  return counts;
+}
+
+/** The context of one file: judged once as it is, so proofs compare like with like. */
+export function remedyContext(head: FileReport, base: FileReport | null, judging: Judging, change: ChangedFile): RemedyContext {
+  const decision = decideFile({ change, base, head, judging }, false);
+  return {
+    head, base, judging, change,
+    readFindings: readerFindings(head),
+    blockingBefore: blockingCounts(decision),
+    findingsBefore: new Set(decision.findings.map(identityOf)),
+  };
+}
+
+/** The changed description, measured and judged. */
+export interface Proof {
+  spec: ModelSpec;
+  metrics: Metrics;
+  decision: FileDecision;
+  /** True when the target no longer blocks and no other finding blocks more than before (all-clear for no target). */
+  passes: boolean;
+  /** Identities that make it fail: the target if it still blocks, and any new blocking finding. */
+  blockers: string[];
+  /** Non-blocking findings the head did not have before. */
+  raises: string[];
+}
+
+/** A spec measured and judged as the gate would judge the head (waivers do not apply: the proof is of the severity). */
+export function judgeSpec(ctx: RemedyContext, spec: ModelSpec): { metrics: Metrics; decision: FileDecision } {
+  const metrics = computeMetrics(spec);
+  const findings = sortFindings([
+    ...ctx.readFindings, ...specFindings(spec, ctx.head.locations), ...metricFindings(spec, metrics, ctx.head.locations),
+  ]);
+  const head: FileReport = { ...ctx.head, spec, metrics, findings };
+  return { metrics, decision: decideFile({ change: ctx.change, base: ctx.base, head, judging: ctx.judging }, false) };
+}
+
+/**
+ * Applies `change` to the head and judges it. With a `target`, passing means the target's
+ * identity no longer blocks and no identity blocks more often than before; with `null`, that
+ * nothing blocks at all (all remedies of a file applied together).
+ */
+export function prove(ctx: RemedyContext, target: FindingIdentity | null, change: Change): Proof {
+  const spec = applyChange(ctx.head.spec, change);
+  const { metrics, decision } = judgeSpec(ctx, spec);
+  const after = blockingCounts(decision);
+  const blockers: string[] = [];
+  const targetId = target ? identityOf(target) : null;
+  for (const [id, count] of after) {
+    if (target === null || id === targetId || count > (ctx.blockingBefore.get(id) ?? 0)) blockers.push(id);
+  }
+  const raises = [...new Set(decision.findings
+    .filter((f) => f.severity !== 'block' && !ctx.findingsBefore.has(identityOf(f)))
+    .map(identityOf))];
+  return { spec, metrics, decision, passes: blockers.length === 0, blockers, raises };
+}
