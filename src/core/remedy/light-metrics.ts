@@ -1,0 +1,78 @@
+/**
+ * The metrics a remedy search moves, computed alone: the same functions `computeMetrics` calls,
+ * without the positional scans, so a search can try dozens of values in microseconds before the
+ * one full proof. Each returns exactly what `computeMetrics` reports under the same name.
+ */
+import type { ModelSpec } from '../model.js';
+import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from '../metrics/kv-cache.js';
+import { fitSequences, memoryBytes, weightBytes } from '../metrics/memory-fit.js';
+import { parameterCounts } from '../metrics/parameter-count.js';
+import { frequencyPlan } from '../metrics/compute.js';
+import { collidingPositions } from '../metrics/position-rounding.js';
+import { extensionRatio, headroom, reach, scalingCover } from '../metrics/reach.js';
+import { declaredSpan, evaluationSpan, trainedSpan } from '../metrics/spans.js';
+import type { FloatFormat } from '../model.js';
+
+/** Context-budget metrics of METRICS.md for `spec`. */
+export interface BudgetMetrics {
+  weightBytes: number | null;
+  cachePerTokenBytes: number | null;
+  cacheBytesAtSpan: number | null;
+  memoryBytes: number | null;
+  fitSequences: number | null;
+}
+
+export function budgetMetrics(spec: ModelSpec): BudgetMetrics {
+  const counts = parameterCounts(spec);
+  const weights = weightBytes(spec, counts ? counts.params : null);
+  const cache = cacheBytesAtSpan(spec, evaluationSpan(spec));
+  return {
+    weightBytes: weights,
+    cachePerTokenBytes: cachePerTokenBytes(spec),
+    cacheBytesAtSpan: cache,
+    memoryBytes: memoryBytes(weights, cache),
+    fitSequences: fitSequences(spec, weights, cache, servedSequences(spec)),
+  };
+}
+
+/** Range metrics of METRICS.md that need no scan. */
+export interface RangeMetrics {
+  declaredSpan: number | null;
+  trainedSpan: number | null;
+  evaluationSpan: number | null;
+  reach: number | null;
+  scalingCover: number | null;
+  headroom: number | null;
+  extensionRatio: number | null;
+}
+
+export function rangeMetrics(spec: ModelSpec): RangeMetrics {
+  const declared = declaredSpan(spec);
+  const trained = trainedSpan(spec);
+  const span = evaluationSpan(spec);
+  const r = reach(spec, trained, declared);
+  return {
+    declaredSpan: declared, trainedSpan: trained, evaluationSpan: span, reach: r,
+    scalingCover: scalingCover(spec, trained), headroom: headroom(r, span), extensionRatio: extensionRatio(span, trained),
+  };
+}
+
+/**
+ * The value of `metric` for `spec` when it needs no scan, else `undefined` (the caller measures
+ * in full): budget and range metrics, and `precision.<D>.collidingPositions`.
+ */
+export function lightMetric(spec: ModelSpec, metric: string): number | null | undefined {
+  if (metric in BUDGET_NAMES) return budgetMetrics(spec)[metric as keyof BudgetMetrics];
+  if (metric in RANGE_NAMES) return rangeMetrics(spec)[metric as keyof RangeMetrics];
+  const colliding = /^precision\.(fp32|bf16|fp16)\.collidingPositions$/.exec(metric);
+  if (colliding) {
+    // Null without frequencies, as `numberFormatMetrics` reports it.
+    const span = evaluationSpan(spec);
+    if (span === null || frequencyPlan(spec, span, trainedSpan(spec)) === null) return null;
+    return collidingPositions(colliding[1] as FloatFormat, span);
+  }
+  return undefined;
+}
+
+const BUDGET_NAMES = { weightBytes: 1, cachePerTokenBytes: 1, cacheBytesAtSpan: 1, memoryBytes: 1, fitSequences: 1 };
+const RANGE_NAMES = { declaredSpan: 1, trainedSpan: 1, evaluationSpan: 1, reach: 1, scalingCover: 1, headroom: 1, extensionRatio: 1 };

@@ -1,0 +1,70 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import * as core from '../../src/core/index.js';
+import { METRIC_PATHS } from '../../src/core/compare/metric-path.js';
+import { SCALAR_METRICS } from '../../src/core/metrics/types.js';
+
+const ROOT = resolve(import.meta.dirname, '../..');
+const read = (path: string) => readFileSync(resolve(ROOT, path), 'utf8');
+
+describe('the core\'s public surface', () => {
+  it('exports exactly this list (widen it on purpose)', () => {
+    expect(Object.keys(core).sort()).toEqual([
+      'ANNOTATIONS_PER_LEVEL', 'COMMENT_LIMIT', 'COMMENT_MARKER', 'DEFAULT_POLICY', 'DEFAULT_POLICY_PATH',
+      'ESTIMATE_NOTICE', 'FLOAT_FORMATS', 'METRIC_PATHS', 'NotAModelError', 'PLAIN', 'PolicyError', 'REPORT_VERSION',
+      'RULES', 'ReadError', 'STORAGE_DTYPES', 'VERSION', 'computeMetrics', 'decide', 'decodeText', 'escapeHtml',
+      'escapeMarkdown', 'inspectModel', 'isModelConfig', 'metricValue', 'parsePolicy', 'planAnnotations', 'readModel',
+      'renderComment', 'renderDiffText', 'renderGateJson', 'renderInspectJson', 'renderInspectText', 'renderSarif',
+      'resolvePolicy', 'runGate', 'toFailure',
+    ]);
+  });
+
+  it('imports nothing with side effects: no fs, process, child_process or @actions in src/core', async () => {
+    const { readdirSync, statSync } = await import('node:fs');
+    const files: string[] = [];
+    const walk = (dir: string) => {
+      for (const name of readdirSync(dir)) {
+        const path = resolve(dir, name);
+        if (statSync(path).isDirectory()) walk(path);
+        else if (path.endsWith('.ts')) files.push(path);
+      }
+    };
+    walk(resolve(ROOT, 'src/core'));
+    for (const file of files) {
+      const text = readFileSync(file, 'utf8');
+      expect(text, file).not.toMatch(/from ['"](node:)?(fs|fs\/promises|child_process|os|http|https|net|worker_threads)['"]/);
+      expect(text, file).not.toMatch(/from ['"]@actions\//);
+      expect(text, file).not.toMatch(/\bprocess\.(env|exit|argv|stdout|cwd)/);
+    }
+  });
+});
+
+describe('the project\'s documents', () => {
+  it('keeps the version in package.json and the code equal', () => {
+    expect(JSON.parse(read('package.json')).version).toBe(core.VERSION);
+  });
+
+  it('documents every metric of the contract in docs/metrics.md and the README', () => {
+    const contract = read('docs/metrics.md');
+    const readme = read('README.md');
+    for (const metric of SCALAR_METRICS.filter((m) => m !== 'evaluationSpan')) {
+      expect(contract, metric).toContain(`\`${metric}\``);
+      expect(readme, metric).toContain(metric);
+    }
+    expect(METRIC_PATHS.length).toBe(SCALAR_METRICS.length + 15);
+  });
+
+  it('has the two-command quick start at the top of the README', () => {
+    const readme = read('README.md');
+    const quick = readme.slice(readme.indexOf('## Quick start'), readme.indexOf('## Quick start') + 600);
+    expect(quick).toContain('node dist/cli.js demo');
+    expect(quick).toContain('npm ci && npm test');
+    expect(readme.slice(0, 1500)).toMatch(/pull request/);
+  });
+
+  it('calls the README\'s test command from CI', () => {
+    expect(read('.ci/run')).toMatch(/^npm test$/m);
+    expect(JSON.parse(read('package.json')).scripts.test).toBe('vitest run');
+  });
+});
