@@ -22476,6 +22476,7 @@ function changeFindings(base, head) {
     }
     return findings;
 }
+/** Which bounds of `limit` the head value (and its change over base) crosses, and whether any was judged. */
 function checkLimit(limit, base, head) {
     const crossed = [];
     let judged = false;
@@ -22517,6 +22518,7 @@ function deltasAndLimitFindings(base, head, judging) {
                     rule: 'limit-crossed', severity: limit.severity,
                     message: `${metric} is ${units_formatNumber(h, 6)}${b !== null && b !== h ? ` (base ${units_formatNumber(b, 6)})` : ''}: ${crossed.join('; ')}.`,
                     ...locate(head.locations, METRIC_SOURCES[metric.startsWith('precision.') ? 'collidingPositions' : metric] ?? ['serving.span', 'declaredSpan']),
+                    metric,
                 });
             }
         }
@@ -23222,7 +23224,782 @@ function ruleLevel(filePolicy, ruleId, ownSeverity) {
 
 
 
+;// CONCATENATED MODULE: ./src/core/compare/judging.ts
+const BUILT_IN_JUDGING = { limits: {}, rules: {}, standing: 'report' };
+
+;// CONCATENATED MODULE: ./src/core/remedy/apply-change.ts
+
+
+/** Every field path a remedy may change, in the order reports list them. */
+const CHANGE_KEYS = [
+    'position.base', 'position.scaling.kind', 'position.scaling.factor', 'position.scaling.originalSpan',
+    'kvHeads', 'dtypes.cache', 'dtypes.positions', 'serving.span', 'serving.sequences',
+];
+/** Thrown for a change no remedy can produce: an unknown field or a value of the wrong kind. */
+class ChangeError extends Error {
+}
+function isKey(key) {
+    return CHANGE_KEYS.includes(key);
+}
+function numberOf(key, value) {
+    if (typeof value !== 'number' || !Number.isFinite(value))
+        throw new ChangeError(`change ${key} = ${JSON.stringify(value)}: expected a finite number`);
+    return value;
+}
+function nameOf(key, value, allowed) {
+    if (typeof value !== 'string' || !allowed.includes(value)) {
+        throw new ChangeError(`change ${key} = ${JSON.stringify(value)}: expected one of ${allowed.join(', ')}`);
+    }
+    return value;
+}
+/** A scaling block with the documented defaults, for a code that had none (linear unless told). */
+function freshScaling(kind) {
+    return { kind, factor: 1, originalSpan: null, alpha: DEFAULT_YARN_ALPHA, beta: DEFAULT_YARN_BETA, low: DEFAULT_BANDED_LOW, high: DEFAULT_BANDED_HIGH };
+}
+/**
+ * A copy of `spec` with `change` applied; `spec` is not touched. Scaling fields on a rotary code
+ * without scaling add a scaling block (linear unless the change names the kind). Throws
+ * `ChangeError` for an unknown field, a value of the wrong kind, or a rotary field on another code.
+ */
+function applyChange(spec, change) {
+    const next = { ...spec, dtypes: { ...spec.dtypes }, serving: { ...spec.serving } };
+    const position = spec.position.kind === 'rotary'
+        ? { ...spec.position, scaling: spec.position.scaling ? { ...spec.position.scaling } : null }
+        : spec.position;
+    const rotary = () => {
+        if (position.kind !== 'rotary')
+            throw new ChangeError(`change to the rotary code of a ${position.kind} position code`);
+        return position;
+    };
+    const scaling = () => {
+        const code = rotary();
+        if (code.scaling === null) {
+            const kind = change['position.scaling.kind'];
+            code.scaling = freshScaling(kind === undefined ? 'linear' : nameOf('position.scaling.kind', kind, SCALING_KINDS));
+        }
+        return code.scaling;
+    };
+    for (const [key, value] of Object.entries(change)) {
+        if (!isKey(key))
+            throw new ChangeError(`change ${key}: not a field a remedy changes (${CHANGE_KEYS.join(', ')})`);
+        switch (key) {
+            case 'position.base':
+                rotary().base = numberOf(key, value);
+                break;
+            case 'position.scaling.kind':
+                scaling().kind = nameOf(key, value, SCALING_KINDS);
+                break;
+            case 'position.scaling.factor':
+                scaling().factor = numberOf(key, value);
+                break;
+            case 'position.scaling.originalSpan':
+                scaling().originalSpan = numberOf(key, value);
+                break;
+            case 'kvHeads':
+                next.kvHeads = numberOf(key, value);
+                break;
+            case 'dtypes.cache':
+                next.dtypes.cache = nameOf(key, value, STORAGE_DTYPES);
+                break;
+            case 'dtypes.positions':
+                next.dtypes.positions = nameOf(key, value, FLOAT_FORMATS);
+                break;
+            case 'serving.span':
+                next.serving.span = numberOf(key, value);
+                break;
+            case 'serving.sequences':
+                next.serving.sequences = numberOf(key, value);
+                break;
+        }
+    }
+    next.position = position;
+    return next;
+}
+/** The value a field has before the change, in the change's terms; null when not stated (a default applies). */
+function currentValue(spec, key) {
+    const code = spec.position;
+    const scaling = code.kind === 'rotary' ? code.scaling : null;
+    switch (key) {
+        case 'position.base': return code.kind === 'rotary' ? code.base : null;
+        case 'position.scaling.kind': return scaling ? scaling.kind : null;
+        case 'position.scaling.factor': return scaling ? scaling.factor : null;
+        case 'position.scaling.originalSpan': return scaling ? scaling.originalSpan : null;
+        case 'kvHeads': return spec.kvHeads;
+        case 'dtypes.cache': return spec.dtypes.cache;
+        case 'dtypes.positions': return spec.dtypes.positions;
+        case 'serving.span': return spec.serving.span;
+        case 'serving.sequences': return spec.serving.sequences;
+        default: return null;
+    }
+}
+/** The change's entries in `CHANGE_KEYS` order, so every report lists them the same way. */
+function changeEntries(change) {
+    return CHANGE_KEYS.filter((key) => Object.hasOwn(change, key)).map((key) => [key, change[key]]);
+}
+
+;// CONCATENATED MODULE: ./src/core/remedy/light-metrics.ts
+
+
+
+
+
+
+
+function budgetMetrics(spec) {
+    const counts = parameterCounts(spec);
+    const weights = weightBytes(spec, counts ? counts.params : null);
+    const cache = cacheBytesAtSpan(spec, evaluationSpan(spec));
+    return {
+        weightBytes: weights,
+        cachePerTokenBytes: cachePerTokenBytes(spec),
+        cacheBytesAtSpan: cache,
+        memoryBytes: memoryBytes(weights, cache),
+        fitSequences: fitSequences(spec, weights, cache, servedSequences(spec)),
+    };
+}
+function rangeMetrics(spec) {
+    const declared = declaredSpan(spec);
+    const trained = trainedSpan(spec);
+    const span = evaluationSpan(spec);
+    const r = reach(spec, trained, declared);
+    return {
+        declaredSpan: declared, trainedSpan: trained, evaluationSpan: span, reach: r,
+        scalingCover: scalingCover(spec, trained), headroom: headroom(r, span), extensionRatio: extensionRatio(span, trained),
+    };
+}
+/**
+ * The value of `metric` for `spec` when it needs no scan, else `undefined` (the caller measures
+ * in full): budget and range metrics, and `precision.<D>.collidingPositions`.
+ */
+function lightMetric(spec, metric) {
+    if (metric in BUDGET_NAMES)
+        return budgetMetrics(spec)[metric];
+    if (metric in RANGE_NAMES)
+        return rangeMetrics(spec)[metric];
+    const colliding = /^precision\.(fp32|bf16|fp16)\.collidingPositions$/.exec(metric);
+    if (colliding) {
+        // Null without frequencies, as `numberFormatMetrics` reports it.
+        const span = evaluationSpan(spec);
+        if (span === null || frequencyPlan(spec, span, trainedSpan(spec)) === null)
+            return null;
+        return collidingPositions(colliding[1], span);
+    }
+    return undefined;
+}
+const BUDGET_NAMES = { weightBytes: 1, cachePerTokenBytes: 1, cacheBytesAtSpan: 1, memoryBytes: 1, fitSequences: 1 };
+const RANGE_NAMES = { declaredSpan: 1, trainedSpan: 1, evaluationSpan: 1, reach: 1, scalingCover: 1, headroom: 1, extensionRatio: 1 };
+
+;// CONCATENATED MODULE: ./src/core/remedy/prove.ts
+
+
+
+
+
+
+/** `rule` or `rule:metric`. */
+function identityOf(finding) {
+    return finding.metric ? `${finding.rule}:${finding.metric}` : finding.rule;
+}
+function sameFinding(a, b) {
+    return a.rule === b.rule && a.message === b.message && a.key === b.key && a.line === b.line;
+}
+/** The head's findings less the ones its spec and metrics give again: those came from reading the text. */
+function readerFindings(head) {
+    const derived = [...specFindings(head.spec, head.locations), ...metricFindings(head.spec, head.metrics, head.locations)];
+    const out = [];
+    for (const finding of head.findings) {
+        const at = derived.findIndex((d) => sameFinding(d, finding));
+        if (at >= 0)
+            derived.splice(at, 1);
+        else
+            out.push(finding);
+    }
+    return out;
+}
+function blockingCounts(decision) {
+    const counts = new Map();
+    for (const finding of decision.findings) {
+        if (finding.severity !== 'block')
+            continue;
+        const id = identityOf(finding);
+        counts.set(id, (counts.get(id) ?? 0) + 1);
+    }
+    return counts;
+}
+/** The context of one file: judged once as it is, so proofs compare like with like. */
+function remedyContext(head, base, judging, change) {
+    const decision = decideFile({ change, base, head, judging }, false);
+    return {
+        head, base, judging, change,
+        readFindings: readerFindings(head),
+        blockingBefore: blockingCounts(decision),
+        findingsBefore: new Set(decision.findings.map(identityOf)),
+    };
+}
+/** A spec measured and judged as the gate would judge the head (waivers do not apply: the proof is of the severity). */
+function judgeSpec(ctx, spec) {
+    const metrics = computeMetrics(spec);
+    const findings = sortFindings([
+        ...ctx.readFindings, ...specFindings(spec, ctx.head.locations), ...metricFindings(spec, metrics, ctx.head.locations),
+    ]);
+    const head = { ...ctx.head, spec, metrics, findings };
+    return { metrics, decision: decideFile({ change: ctx.change, base: ctx.base, head, judging: ctx.judging }, false) };
+}
+/**
+ * Applies `change` to the head and judges it. With a `target`, passing means the target's
+ * identity no longer blocks and no identity blocks more often than before; with `null`, that
+ * nothing blocks at all (all remedies of a file applied together).
+ */
+function prove(ctx, target, change) {
+    const spec = applyChange(ctx.head.spec, change);
+    const { metrics, decision } = judgeSpec(ctx, spec);
+    const after = blockingCounts(decision);
+    const blockers = [];
+    const targetId = target ? identityOf(target) : null;
+    for (const [id, count] of after) {
+        if (target === null || id === targetId || count > (ctx.blockingBefore.get(id) ?? 0))
+            blockers.push(id);
+    }
+    const raises = [...new Set(decision.findings
+            .filter((f) => f.severity !== 'block' && !ctx.findingsBefore.has(identityOf(f)))
+            .map(identityOf))];
+    return { spec, metrics, decision, passes: blockers.length === 0, blockers, raises };
+}
+
+;// CONCATENATED MODULE: ./src/core/remedy/rotary-base.ts
+/**
+ * The rotary base nearest to the current one that a criterion accepts, typically the long-range
+ * criterion of Men et al. 2024 ("Base of RoPE Bounds Context Length", Thm 1, Eqs. 9–11: the
+ * smallest base with `Σ_i cos(k θ_i) >= 0` for every k up to the span, solved numerically there
+ * too).
+ *
+ * Method. Which bases pass is NOT monotone in the base (SOURCES.md §12: a larger base can fail
+ * where a smaller one passes), so plain bisection could return a base that fails. The search
+ * (1) moves away from the current base by doubling (halving, downwards) until a base passes;
+ * (2) bisects geometrically between the last failing and the first passing base, keeping the
+ * passing end, to a ratio of 1.001; (3) rounds that passing base to two significant digits in
+ * the search's direction, as published bases are written, and verifies the rounded value; when it
+ * fails (a pocket of failing bases), it steps along the two-digit grid to the first base that
+ * passes; (4) when the grid finds none within its steps, it offers the bisection's own base,
+ * which passed. Every base returned was accepted by the criterion; a smaller passing base may
+ * exist in a pocket the doubling stepped over, so this is the nearest base found, not
+ * necessarily the nearest there is. Each step is capped and the result says when a cap stopped it.
+ */
+const DEFAULT_BASE_CAPS = { doublings: 30, bisections: 40, gridSteps: 30 };
+/**
+ * base: `x` rounded to two significant digits, up or down (`1,294,337` → `1,300,000` up,
+ * `1,200,000` down); null for a value that is not positive and finite.
+ */
+function roundBase(x, direction) {
+    if (!(x > 0 && Number.isFinite(x)))
+        return null;
+    const e = Math.floor(Math.log10(x)) - 1;
+    const scaled = x / 10 ** e;
+    // Within 1e-9 of a grid value counts as on it: the division is inexact.
+    const m = direction === 'up' ? Math.ceil(scaled - 1e-9) : Math.floor(scaled + 1e-9);
+    return Number((m * 10 ** e).toPrecision(2));
+}
+/** base: the next two-significant-digit value after `g` (itself on the grid), in `direction`. */
+function nextGridBase(g, direction) {
+    const e = Math.floor(Math.log10(g)) - 1;
+    const m = Math.round(g / 10 ** e);
+    if (direction === 'up')
+        return Number(((m + 1) * 10 ** e).toPrecision(2));
+    // 10 × 10^e steps down to 99 × 10^(e-1).
+    return m <= 10 ? Number((99 * 10 ** (e - 1)).toPrecision(2)) : Number(((m - 1) * 10 ** e).toPrecision(2));
+}
+/**
+ * base: the nearest base to `from` in `direction` that `passes`, found as the file doc says;
+ * null when `from` is not a positive finite number or nothing passed within the caps.
+ */
+function searchRotaryBase(from, direction, passes, caps = DEFAULT_BASE_CAPS) {
+    let evaluations = 0;
+    const test = (b) => { evaluations += 1; return passes(b); };
+    if (!(from > 0 && Number.isFinite(from)))
+        return { base: null, evaluations, capped: false };
+    const step = direction === 'up' ? 2 : 0.5;
+    // (1) doubling away from the current base
+    let failing = from;
+    let passing = null;
+    for (let i = 0; i < caps.doublings; i++) {
+        const b = failing * step;
+        if (!Number.isFinite(b) || b <= 0)
+            break;
+        if (test(b)) {
+            passing = b;
+            break;
+        }
+        failing = b;
+    }
+    if (passing === null)
+        return { base: null, evaluations, capped: true };
+    // (2) geometric bisection, keeping the passing end
+    let bisected = 0;
+    while (Math.max(passing, failing) / Math.min(passing, failing) > 1.001 && bisected < caps.bisections) {
+        const mid = Math.sqrt(passing * failing);
+        if (test(mid))
+            passing = mid;
+        else
+            failing = mid;
+        bisected += 1;
+    }
+    // (3) the two-digit grid, stepping past pockets of failing bases
+    let g = roundBase(passing, direction);
+    for (let i = 0; g !== null && i < caps.gridSteps; i++) {
+        if (test(g))
+            return { base: g, evaluations, capped: false };
+        g = nextGridBase(g, direction);
+    }
+    // (4) the bisection's own base passed
+    return { base: passing, evaluations, capped: true };
+}
+
+;// CONCATENATED MODULE: ./src/core/remedy/scaling-factor.ts
+/**
+ * The scaling factor that makes a rotary code reach a span.
+ */
+/**
+ * factor: `ceil(span / L0)`, the smallest whole factor `s` with `L0 · s >= span`. Position
+ * interpolation stretches a code trained at `L` to `L'` with `s = L'/L` (Chen et al. 2023, §2.3,
+ * Eq. 4: `f'(x, m) = f(x, mL/L')`), and `reach = L0 · factor` for every scaling kind (METRICS.md);
+ * whole factors, as Chen et al. 2023 Table 1 and common configs use. Null when either span is not
+ * a positive whole number.
+ */
+function coveringFactor(span, trained) {
+    if (!Number.isSafeInteger(span) || span < 1 || !Number.isSafeInteger(trained) || trained < 1)
+        return null;
+    return Math.max(1, Math.ceil(span / trained));
+}
+
+;// CONCATENATED MODULE: ./src/core/remedy/whole-search.ts
+/**
+ * Bisection over whole numbers for a predicate that holds up to some point and fails after it
+ * (memory against sequences or span, colliding positions against span): exact, and at most
+ * `ceil(log2(hi - lo + 1)) + 1` evaluations (54 for any range of safe integers).
+ */
+/**
+ * count: the largest whole n in [lo, hi] with `passes(n)`, for a `passes` that is true on
+ * [lo, n*] and false above; null when `passes(lo)` is false or the range is empty.
+ */
+function largestPassing(lo, hi, passes) {
+    let evaluations = 0;
+    const test = (n) => { evaluations += 1; return passes(n); };
+    if (!(Number.isSafeInteger(lo) && Number.isSafeInteger(hi)) || hi < lo || !test(lo))
+        return { value: null, evaluations };
+    if (test(hi))
+        return { value: hi, evaluations };
+    let good = lo;
+    let bad = hi;
+    while (bad - good > 1) {
+        const mid = good + Math.floor((bad - good) / 2);
+        if (test(mid))
+            good = mid;
+        else
+            bad = mid;
+    }
+    return { value: good, evaluations };
+}
+
+;// CONCATENATED MODULE: ./src/core/remedy/propose.ts
+/**
+ * For one blocking finding, the nearest change that passes. Each kind of change (a scaling
+ * factor, a served span, a sequence count, a cache dtype, a key/value head count, a rotary base,
+ * a position format) first searches the cheap metrics it moves for the nearest value that clears
+ * the finding, then proves that value: the whole description measured and judged again (see
+ * `prove.ts`). The first kind that proves is the remedy, the other kinds that prove are
+ * alternatives, and when none proves the reasons are given. Searches are bounded: a whole-number
+ * bisection (at most 54 steps), at most `MAX_PROOFS_PER_KIND` full proofs per kind, and the
+ * capped stages of the base search (`rotary-base.ts`).
+ */
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+
+/** Full proofs one kind of change may run before it gives up (default: `4`). */
+const MAX_PROOFS_PER_KIND = 4;
+const none = (whyNot) => ({ remedy: null, whyNot });
+/** The value of a metric for a changed spec: cheaply when it needs no scan, else measured in full. */
+function propose_valueOf(spec, metric) {
+    const light = lightMetric(spec, metric);
+    if (light !== undefined)
+        return light;
+    return isMetricPath(metric) ? metricValue(computeMetrics(spec), metric) : null;
+}
+/** Whether a changed spec clears the target finding, judged on the metrics it depends on. */
+function resolver(ctx, target) {
+    switch (target.rule) {
+        case 'span-past-reach':
+            return (spec) => { const h = rangeMetrics(spec).headroom; return h !== null && h >= 0; };
+        case 'span-beyond-scaling-cover':
+        case 'span-grew-code-unchanged':
+            return (spec) => {
+                const r = rangeMetrics(spec);
+                return r.scalingCover !== null && r.declaredSpan !== null && r.scalingCover >= r.declaredSpan;
+            };
+        case 'memory-over-budget':
+            return (spec) => {
+                const usable = usableDeviceBytes(spec);
+                const memory = budgetMetrics(spec).memoryBytes;
+                return usable === null || (memory !== null && memory <= usable);
+            };
+        case 'positions-collide':
+            return (spec) => {
+                const colliding = lightMetric(spec, `precision.${spec.dtypes.positions ?? 'fp32'}.collidingPositions`);
+                return !(typeof colliding === 'number' && colliding > 0);
+            };
+        case 'limit-crossed': {
+            const { limit, metric } = target;
+            if (!limit || !metric)
+                return null;
+            return (spec) => checkLimit(limit, target.baseValue, propose_valueOf(spec, metric)).crossed.length === 0;
+        }
+        default:
+            return null;
+    }
+}
+function blockerText(id) {
+    return id.startsWith('limit-crossed:') ? `the ${id.slice('limit-crossed:'.length)} limit` : id;
+}
+function describeBlockers(proof) {
+    return proof.blockers.map(blockerText).join(', ');
+}
+function remedyOf(change, proof, shown, target) {
+    const metrics = {};
+    for (const name of [...(target.metric ? [target.metric] : []), ...shown]) {
+        if (isMetricPath(name) && !(name in metrics))
+            metrics[name] = metricValue(proof.metrics, name);
+    }
+    return { change, metrics, raises: proof.raises };
+}
+/**
+ * Proves candidate changes in order (at most `MAX_PROOFS_PER_KIND`), returning the first that
+ * passes; `what` names the kind in reasons.
+ */
+function proveFirst(ctx, target, candidates, shown, what) {
+    let last = null;
+    const tried = candidates.slice(0, MAX_PROOFS_PER_KIND);
+    for (const change of tried) {
+        const proof = prove(ctx, target, change);
+        if (proof.passes)
+            return { remedy: remedyOf(change, proof, shown, target), whyNot: null };
+        last = proof;
+    }
+    if (last === null)
+        return none(`no ${what} to try`);
+    const capped = candidates.length > tried.length ? ` (stopped after ${tried.length} proofs)` : '';
+    return none(`${what} ${tried.length === 1 ? 'clears it but still blocks' : 'cleared it but each still blocked'} on ${describeBlockers(last)}${capped}`);
+}
+// ---- kinds of change -------------------------------------------------------------------------
+/**
+ * A scaling factor on the code, adding a linear scaling block when there is none, and stating
+ * the original span when the changed description would otherwise take another trained span.
+ */
+function factorChange(spec, factor, trained) {
+    const code = spec.position;
+    const change = code.kind === 'rotary' && code.scaling
+        ? { 'position.scaling.factor': factor }
+        : { 'position.scaling.kind': 'linear', 'position.scaling.factor': factor };
+    if (trainedSpan(applyChange(spec, change)) !== trained)
+        change['position.scaling.originalSpan'] = trained;
+    return change;
+}
+/** The smallest whole scaling factor (of the kind in use, else linear) with `L0 · f` covering `need`. */
+function factorKind(ctx, target, resolves, trained, need) {
+    const spec = ctx.head.spec;
+    const code = spec.position;
+    if (code.kind !== 'rotary')
+        return none(`a ${code.kind} position code has no scaling factor`);
+    if (trained === null || need === null)
+        return none('the trained span or the span to cover is unknown');
+    const f0 = coveringFactor(need, trained);
+    if (f0 === null)
+        return none(`no whole factor covers ${formatTokens(need)} from ${formatTokens(trained)}`);
+    const current = code.scaling ? code.scaling.factor : 1;
+    if (f0 <= current) {
+        return none(`the ${code.scaling ? `${code.scaling.kind} factor ${units_formatNumber(current)}` : 'code'} already covers ${formatTokens(need)}; state the trained span if the model was tuned at it`);
+    }
+    const candidates = [];
+    for (let f = f0; f < f0 + MAX_PROOFS_PER_KIND; f++) {
+        const change = factorChange(spec, f, trained);
+        if (resolves(applyChange(spec, change)))
+            candidates.push(change);
+    }
+    const shown = ['reach', 'scalingCover', 'headroom', 'trainedSpan', 'discriminationSpan', 'exposedPairs',
+        ...(code.scaling?.kind === 'yarn' ? ['attentionScale'] : [])];
+    const kind = code.scaling ? code.scaling.kind : 'linear';
+    return proveFirst(ctx, target, candidates, shown, `a ${kind} factor of ${f0}${candidates.length > 1 ? ' or more' : ''}`);
+}
+/** The longest served span that clears the finding. */
+function spanKind(ctx, target, resolves) {
+    const spec = ctx.head.spec;
+    const T = evaluationSpan(spec);
+    if (T === null || T < 2)
+        return none('the span is not a whole number above 1');
+    const found = largestPassing(1, T - 1, (t) => resolves(applyChange(spec, { 'serving.span': t })));
+    if (found.value === null)
+        return none(`no served span from 1 to ${formatInteger(T - 1)} tokens clears it`);
+    return proveFirst(ctx, target, [{ 'serving.span': found.value }], ['evaluationSpan', 'headroom', 'memoryBytes', 'fitSequences'], `serving at most ${formatTokens(found.value)} tokens`);
+}
+/** The most concurrent sequences that clear the finding. */
+function sequencesKind(ctx, target, resolves) {
+    const spec = ctx.head.spec;
+    const current = servedSequences(spec);
+    if (current === null)
+        return none('the sequence count is not a whole number');
+    if (current <= 1)
+        return none('the service already holds one sequence');
+    const found = largestPassing(1, current - 1, (n) => resolves(applyChange(spec, { 'serving.sequences': n })));
+    if (found.value === null)
+        return none(`not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it`);
+    return proveFirst(ctx, target, [{ 'serving.sequences': found.value }], ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'], `${found.value} sequence${found.value === 1 ? '' : 's'}`);
+}
+/** The widest cache dtype narrower than the current one that clears the finding. */
+function cacheDtypeKind(ctx, target, resolves) {
+    const spec = ctx.head.spec;
+    const current = cacheDType(spec);
+    const bytes = bytesPerElement(current);
+    if (bytes === null)
+        return none(`the cache dtype ${current} is unknown`);
+    const narrower = STORAGE_DTYPES.filter((d) => (bytesPerElement(d) ?? Infinity) < bytes);
+    if (narrower.length === 0)
+        return none(`the cache is already in ${current}, the narrowest dtype`);
+    const candidates = narrower.filter((d) => resolves(applyChange(spec, { 'dtypes.cache': d })))
+        .map((d) => ({ 'dtypes.cache': d }));
+    if (candidates.length === 0)
+        return none(`even a ${narrower[narrower.length - 1]} cache does not clear it`);
+    return proveFirst(ctx, target, candidates, ['cachePerTokenBytes', 'memoryBytes', 'fitSequences'], `a ${candidates[0]['dtypes.cache']} cache`);
+}
+/** Divisors of `n` below `below`, largest first (grouped-query attention needs kvHeads to divide heads). */
+function divisorsBelow(n, below) {
+    const out = [];
+    for (let d = Math.min(n, below - 1); d >= 1 && out.length < 64; d--)
+        if (n % d === 0)
+            out.push(d);
+    return out;
+}
+/** The most key/value heads, a divisor of the heads, that clear the finding. */
+function kvHeadsKind(ctx, target, resolves) {
+    const spec = ctx.head.spec;
+    const heads = positiveCount(spec.heads);
+    const kv = positiveCount(spec.kvHeads);
+    if (heads === null || kv === null)
+        return none('heads or key/value heads are not whole numbers');
+    if (kv <= 1)
+        return none('the model already has one key/value head');
+    const candidates = divisorsBelow(heads, kv).filter((d) => resolves(applyChange(spec, { kvHeads: d })))
+        .map((d) => ({ kvHeads: d }));
+    if (candidates.length === 0)
+        return none('even one key/value head does not clear it');
+    return proveFirst(ctx, target, candidates, ['cachePerTokenBytes', 'weightBytes', 'memoryBytes', 'fitSequences'], `${candidates[0].kvHeads} key/value heads (a retraining-level change)`);
+}
+/** The narrowest position format with every position in the span distinct. */
+function formatKind(ctx, target, resolves) {
+    const spec = ctx.head.spec;
+    const current = spec.dtypes.positions ?? 'fp32';
+    const order = [...FLOAT_FORMATS].sort((a, b) => positionExactLimit(a) - positionExactLimit(b));
+    const candidates = order.filter((f) => f !== current && resolves(applyChange(spec, { 'dtypes.positions': f })))
+        .map((f) => ({ 'dtypes.positions': f }));
+    if (candidates.length === 0) {
+        return none(`no format keeps every position of ${formatTokens(evaluationSpan(spec))} distinct (fp32 holds every whole number up to ${formatInteger(positionExactLimit('fp32'))})`);
+    }
+    const format = candidates[0]['dtypes.positions'];
+    return proveFirst(ctx, target, candidates, [`precision.${format}.collidingPositions`, `precision.${format}.angleErrorMax`], `positions in ${format}`);
+}
+/** Which way the base must move for the crossed bound of a discrimination or separation limit. */
+function baseDirection(metric, limit, value) {
+    if (value === null)
+        return null;
+    const below = limit.min !== undefined && value < limit.min;
+    // A larger base turns slower: far offsets stay positive longer, but neighbours separate less.
+    if (metric === 'discriminationSpan')
+        return below ? 'up' : 'down';
+    if (metric === 'separationFloor')
+        return below ? 'down' : 'up';
+    return null;
+}
+/** The nearest rotary base (two significant digits) that clears a discrimination or separation limit. */
+function baseKind(ctx, target) {
+    const spec = ctx.head.spec;
+    const code = spec.position;
+    const { metric, limit } = target;
+    if (code.kind !== 'rotary')
+        return none(`a ${code.kind} position code has no base to change`);
+    if (!metric || !limit)
+        return none('no limit to meet');
+    const T = evaluationSpan(spec);
+    const L0 = trainedSpan(spec);
+    const direction = baseDirection(metric, limit, metricValue(ctx.head.metrics, metric));
+    if (T === null || direction === null)
+        return none('the span or the current value is unknown');
+    const scaledAt = (base) => frequencyPlan(applyChange(spec, { 'position.base': base }), T, L0)?.scaled ?? null;
+    // discriminationSpan >= min: no negative sum before min(T, min), so only that far is scanned.
+    const onlyMin = metric === 'discriminationSpan' && direction === 'up' && limit.max === undefined && limit.maxIncreasePct === undefined;
+    const passes = (base) => {
+        const theta = scaledAt(base);
+        if (theta === null)
+            return false;
+        if (onlyMin) {
+            const end = Math.min(T, Math.ceil(limit.min));
+            return end <= 1 || scanSimilarityRange(theta, 1, end)?.negative === null;
+        }
+        const value = similarityScan(theta, T)[metric];
+        return checkLimit(limit, target.baseValue, value).crossed.length === 0;
+    };
+    const search = searchRotaryBase(code.base, direction, passes);
+    if (search.base === null) {
+        return none(`no rotary base ${direction === 'up' ? 'above' : 'below'} ${units_formatNumber(code.base, 6)} meets the ${metric} limit within the search's caps (${search.evaluations} scans)`);
+    }
+    return proveFirst(ctx, target, [{ 'position.base': search.base }], ['discriminationSpan', 'separationFloor', 'unturnedPairs', 'slowestWavelength'], `a rotary base of ${units_formatNumber(search.base, 6)} (a retraining-level change)`);
+}
+function kindsFor(ctx, target) {
+    const spec = ctx.head.spec;
+    const range = rangeMetrics(spec);
+    const T = range.evaluationSpan;
+    const memory = [sequencesKind, cacheDtypeKind, kvHeadsKind, spanKind];
+    switch (target.rule) {
+        case 'span-past-reach':
+            return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T), spanKind];
+        case 'span-beyond-scaling-cover':
+            return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, range.declaredSpan)];
+        case 'span-grew-code-unchanged':
+            // The trained span is the base's: the head's own is only its (grown) declared span.
+            return [(c, t, r) => factorKind(c, t, r, ctx.base?.metrics.trainedSpan ?? null, range.declaredSpan)];
+        case 'memory-over-budget':
+            return memory;
+        case 'positions-collide':
+            return [formatKind, spanKind];
+        case 'limit-crossed': {
+            const metric = target.metric ?? '';
+            const limit = target.limit;
+            if (!limit)
+                return `the policy has no limit on ${metric}`;
+            if (metric === 'discriminationSpan' || metric === 'separationFloor')
+                return [(c, t) => baseKind(c, t)];
+            if (metric === 'memoryBytes' || metric === 'cacheBytesAtSpan')
+                return memory;
+            if (metric === 'fitSequences')
+                return [cacheDtypeKind, kvHeadsKind, spanKind];
+            if (metric === 'cachePerTokenBytes')
+                return [cacheDtypeKind, kvHeadsKind];
+            if (metric === 'headroom' && limit.min !== undefined && T !== null) {
+                return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T + Math.max(0, Math.ceil(limit.min))), spanKind];
+            }
+            if (metric === 'reach' && limit.min !== undefined) {
+                return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, Math.ceil(limit.min))];
+            }
+            if (/^precision\.(fp32|bf16|fp16)\.collidingPositions$/.test(metric))
+                return [spanKind];
+            return `no remedy is searched for a limit on ${metric}: remedies cover spans and reach, rotary discrimination and separation, memory, and colliding positions`;
+        }
+        default: {
+            const help = isRuleId(target.rule) ? ` ${RULES[target.rule].help}` : '';
+            return `no remedy is searched for ${target.rule}: the value itself must be corrected, as the message says.${help}`;
+        }
+    }
+}
+/**
+ * The remedy of one blocking finding of `ctx`'s head: the first kind of change that proves, the
+ * other kinds that prove as alternatives, or why none does.
+ */
+function proposeRemedy(ctx, finding) {
+    const metric = finding.metric;
+    const limit = finding.rule === 'limit-crossed' && metric ? ctx.judging.limits[metric] ?? null : null;
+    const baseValue = metric && ctx.base && isMetricPath(metric) ? metricValue(ctx.base.metrics, metric) : null;
+    const target = { rule: finding.rule, ...(metric ? { metric } : {}), limit, baseValue };
+    const kinds = kindsFor(ctx, target);
+    if (typeof kinds === 'string')
+        return { remedy: null, remedyWhyNot: kinds, remedyAlternatives: [] };
+    const resolves = resolver(ctx, target);
+    if (resolves === null)
+        return { remedy: null, remedyWhyNot: `no remedy is searched for ${finding.rule}`, remedyAlternatives: [] };
+    const outcomes = kinds.map((kind) => kind(ctx, target, resolves));
+    const proven = outcomes.filter((o) => o.remedy !== null).map((o) => o.remedy);
+    if (proven.length === 0) {
+        return { remedy: null, remedyWhyNot: `No change found that passes: ${outcomes.map((o) => o.whyNot).join('; ')}.`, remedyAlternatives: [] };
+    }
+    return { remedy: proven[0], remedyWhyNot: null, remedyAlternatives: proven.slice(1) };
+}
+
+;// CONCATENATED MODULE: ./src/core/remedy/attach.ts
+
+
+
+
+
+const UNREADABLE = {
+    remedy: null,
+    remedyWhyNot: 'The head version could not be read, so there is no description to change.',
+    remedyAlternatives: [],
+};
+/**
+ * Every blocking finding's first remedy applied at once, proven the same way; null with fewer
+ * than two remedies (one is already shown) or when two remedies set one field differently.
+ */
+function combineRemedies(ctx, findings) {
+    const remedies = findings.map((f) => f.remedy).filter((r) => r !== null && r !== undefined);
+    if (remedies.length < 2)
+        return null;
+    const change = {};
+    for (const remedy of remedies) {
+        for (const [key, value] of changeEntries(remedy.change)) {
+            if (key in change && change[key] !== value)
+                return null;
+            change[key] = value;
+        }
+    }
+    const proof = prove(ctx, null, change);
+    const metrics = {};
+    for (const remedy of remedies) {
+        for (const name of Object.keys(remedy.metrics))
+            if (isMetricPath(name))
+                metrics[name] = metricValue(proof.metrics, name);
+    }
+    return { change, metrics, passes: proof.passes, stillBlocking: proof.blockers };
+}
+function withRemedies(file, config) {
+    if (!file.findings.some((f) => f.severity === 'block'))
+        return file;
+    if (!file.head || !config) {
+        return { ...file, findings: file.findings.map((f) => (f.severity === 'block' ? { ...f, ...UNREADABLE } : f)) };
+    }
+    const ctx = remedyContext(file.head, file.base, config.judging, config.change);
+    const findings = file.findings.map((f) => (f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f));
+    return { ...file, findings, remedyTogether: combineRemedies(ctx, findings) };
+}
+/** The gate's report with a remedy (or the reason there is none) on every blocking finding. */
+function attachRemedies(report, configs) {
+    const byPath = new Map(configs.map((c) => [c.change.path, c]));
+    return { ...report, files: report.files.map((file) => withRemedies(file, byPath.get(file.path))) };
+}
+/**
+ * One inspected file with a remedy on every blocking finding, judged with the built-in rules and
+ * no base version; `remedyTogether` when two or more remedies apply at once.
+ */
+function remedyFileReport(report) {
+    if (!report.findings.some((f) => f.severity === 'block'))
+        return { ...report, remedyTogether: null };
+    const ctx = remedyContext(report, null, BUILT_IN_JUDGING, { status: 'added', path: report.path, previousPath: null });
+    const findings = report.findings.map((f) => (f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f));
+    return { ...report, findings, remedyTogether: combineRemedies(ctx, findings) };
+}
+
 ;// CONCATENATED MODULE: ./src/core/gate.ts
+
 
 
 
@@ -23313,7 +24090,8 @@ async function runGate(source, request) {
     });
     const labels = request.labels ?? [];
     const waiverLabel = policy.waiverLabel ?? null;
-    return decide({
+    // Every blocking finding gets its remedy here, proven against the same policy and base.
+    return attachRemedies(decide({
         configs: judgedConfigs,
         deleted,
         policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged },
@@ -23321,7 +24099,7 @@ async function runGate(source, request) {
         notices,
         base,
         head,
-    });
+    }), judgedConfigs);
 }
 
 ;// CONCATENATED MODULE: ./node_modules/markdown-table/index.js
@@ -23919,7 +24697,68 @@ const ESTIMATE_NOTICE = 'These metrics are estimates computed from the config al
 /** Hidden first line of the pull-request comment; the action finds its own comment by it. */
 const COMMENT_MARKER = '<!-- context-reach:pull-request-report -->';
 
+;// CONCATENATED MODULE: ./src/core/render/remedy-text.ts
+
+
+
+const TOKEN_KEYS = new Set(['serving.span', 'position.scaling.originalSpan']);
+/** A change value in the unit people read it in. */
+function formatChangeValue(key, value) {
+    if (value === null)
+        return 'not set';
+    if (typeof value === 'string')
+        return value;
+    if (TOKEN_KEYS.has(key))
+        return formatTokens(value);
+    if (key === 'position.base')
+        return units_formatNumber(value, 6);
+    if (Number.isInteger(value))
+        return formatInteger(value);
+    return units_formatNumber(value, 6);
+}
+function changeParts(change, spec) {
+    return changeEntries(change).map(([key, value]) => {
+        const before = spec ? currentValue(spec, key) : null;
+        return { key, before: spec ? formatChangeValue(key, before) : null, after: formatChangeValue(key, value) };
+    });
+}
+/** `position.scaling.factor 4 → 8, serving.sequences 8 → 5`. */
+function changeText(change, spec) {
+    return changeParts(change, spec).map((p) => (p.before === null ? `${p.key} = ${p.after}` : `${p.key} ${p.before} → ${p.after}`)).join(', ');
+}
+function metricParts(metrics) {
+    return Object.entries(metrics).map(([metric, value]) => ({ metric, value: value === null && metric === 'discriminationSpan' ? 'none within the span' : formatMetric(metric, value) }));
+}
+/** `reach 262,144 (256k), headroom 0`. */
+function metricsText(metrics) {
+    return metricParts(metrics).map((p) => `${p.metric} ${p.value}`).join(', ');
+}
+/** `position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k), headroom 0 (also raises frequencies-changed)`. */
+function remedyText(remedy, spec) {
+    const raises = remedy.raises.length > 0 ? ` (also raises ${remedy.raises.join(', ')})` : '';
+    return `${changeText(remedy.change, spec)} ⇒ ${metricsText(remedy.metrics)}${raises}`;
+}
+/** Lines for one finding: the remedy, each alternative, or why there is none; empty for findings without remedy fields. */
+function remedyLines(fields, spec) {
+    if (fields.remedy === undefined)
+        return [];
+    if (fields.remedy === null)
+        return [{ label: 'no remedy', text: fields.remedyWhyNot ?? 'none found' }];
+    return [
+        { label: 'remedy', text: remedyText(fields.remedy, spec) },
+        ...(fields.remedyAlternatives ?? []).map((r) => ({ label: 'or', text: remedyText(r, spec) })),
+    ];
+}
+/** `All remedies together (a, b) pass` or what still blocks. */
+function togetherText(together, spec) {
+    const verdict = together.passes ? 'pass: nothing blocks' : `still block on ${together.stillBlocking.join(', ')}`;
+    return `All first remedies together (${changeText(together.change, spec)}) ${verdict} ⇒ ${metricsText(together.metrics)}`;
+}
+/** Said once wherever remedies are shown. */
+const REMEDY_NOTE = 'Each remedy was applied to the description, measured and judged again by the same rules and limits before it is shown.';
+
 ;// CONCATENATED MODULE: ./src/core/render/comment.ts
+
 
 
 
@@ -24023,6 +24862,7 @@ function fileSection(file, ctx, parts) {
     if (findings.length < file.findings.length) {
         lines.push(`_${file.findings.length - findings.length} more findings are in the job summary and the JSON report._`, '');
     }
+    lines.push(...remedySection(file));
     if (parts.chart && file.head) {
         const chart = memoryChart(file);
         if (chart)
@@ -24032,6 +24872,51 @@ function fileSection(file, ctx, parts) {
         lines.push(fullMetrics(file), '');
     return lines.join('\n');
 }
+/** `` `key` before → **after**, … ⇒ metric value, … `` with every part escaped. */
+function changeMarkdown(change, spec) {
+    return changeParts(change, spec)
+        .map((p) => `${codeSpan(p.key)} ${p.before === null ? '' : `${escapeMarkdown(p.before)} → `}**${escapeMarkdown(p.after)}**`).join(', ');
+}
+function metricsMarkdown(metrics, max = Infinity) {
+    return metricParts(metrics).slice(0, max).map((m) => `${escapeMarkdown(m.metric)} ${escapeMarkdown(m.value)}`).join(', ');
+}
+function remedyMarkdown(remedy, spec, maxMetrics = Infinity) {
+    const raises = remedy.raises.length > 0 ? ` _(also raises ${remedy.raises.map((r) => escapeMarkdown(r)).join(', ')})_` : '';
+    return `${changeMarkdown(remedy.change, spec)} ⇒ ${metricsMarkdown(remedy.metrics, maxMetrics)}${raises}`;
+}
+/** The first line under a blocking finding: its remedy, or why there is none. */
+function firstRemedyLine(finding, spec) {
+    if (finding.remedy === undefined)
+        return null;
+    if (finding.remedy === null)
+        return `⛔ no remedy: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`;
+    return `✅ **remedy**: ${remedyMarkdown(finding.remedy, spec, 3)}`;
+}
+/** The remedies of a file's blocking findings: the proven change, its alternatives, or why there is none. */
+function remedySection(file) {
+    const blocking = file.findings.filter((f) => f.severity === 'block' && f.remedy !== undefined);
+    if (blocking.length === 0)
+        return [];
+    const spec = file.head?.spec ?? null;
+    const lines = [`**Remedies** <sub>${escapeMarkdown(REMEDY_NOTE)}</sub>`, ''];
+    for (const finding of blocking) {
+        lines.push(`- \`${finding.rule}\`${finding.metric ? ` (${codeSpan(finding.metric)})` : ''}`);
+        if (!finding.remedy) {
+            lines.push(`  - ⛔ no remedy: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`);
+            continue;
+        }
+        lines.push(`  - ✅ **remedy**: ${remedyMarkdown(finding.remedy, spec)}`);
+        for (const alternative of finding.remedyAlternatives ?? [])
+            lines.push(`  - or: ${remedyMarkdown(alternative, spec)}`);
+    }
+    const together = file.remedyTogether;
+    if (together) {
+        const verdict = together.passes ? 'pass: nothing blocks' : `still block on ${together.stillBlocking.map((b) => escapeMarkdown(b)).join(', ')}`;
+        lines.push(`- ${together.passes ? '✅' : '⚠️'} All first remedies together (${changeMarkdown(together.change, spec)}) ${verdict}.`);
+    }
+    lines.push('');
+    return lines;
+}
 function headline(report) {
     const counts = `${formatInteger(report.blocking)} blocking, ${formatInteger(report.warnings)} warning${report.warnings === 1 ? '' : 's'}`;
     return `## context-reach · ${VERDICT_LINE[report.verdict]} · ${counts}`;
@@ -24040,7 +24925,13 @@ function blockers(report, ctx) {
     const rows = report.files.flatMap((file) => file.findings.filter((f) => f.counts === 'block').map((f) => ({ file, f })));
     if (rows.length === 0)
         return [];
-    return ['**What blocks:**', '', ...rows.map(({ file, f }) => `- ${codeSpan(file.path)} ${comment_where(file, f, ctx)}: \`${f.rule}\` ${escapeMarkdown(f.message)}`), ''];
+    return ['**What blocks:**', '', ...rows.flatMap(({ file, f }) => {
+            const first = firstRemedyLine(f, file.head?.spec ?? null);
+            return [
+                `- ${codeSpan(file.path)} ${comment_where(file, f, ctx)}: \`${f.rule}\` ${escapeMarkdown(f.message)}`,
+                ...(first ? [`  - ${first}`] : []),
+            ];
+        }), ''];
 }
 function preamble(report, ctx) {
     const lines = [];
@@ -24128,6 +25019,7 @@ function renderComment(report, ctx = {}) {
 
 
 
+
 const PLAIN = { bold: (t) => t, dim: (t) => t, severity: (_s, t) => t };
 function section(style, title, rows) {
     const shown = rows.filter(([, value]) => value !== '—');
@@ -24201,14 +25093,19 @@ function budgetRows(m) {
         ['token budget', formatTokens(m.tokenBudget)],
     ];
 }
-function findingLines(style, path, findings) {
+function findingLines(style, report) {
+    const { path, findings } = report;
     if (findings.length === 0)
         return ['', `  ${style.bold('Findings')}`, '    none'];
-    return ['', `  ${style.bold('Findings')}`, ...findings.map((f) => {
+    const lines = ['', `  ${style.bold('Findings')}`, ...findings.map((f) => {
             const where = f.line !== null ? `${path}:${f.line}` : path;
             const key = f.key ? ` ${f.key}` : '';
-            return `    ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule}  ${style.dim(`${where}${key}`)}\n          ${f.message}`;
+            const remedies = remedyLines(f, report.spec).map((r) => `\n          ${style.bold(`${r.label}:`)} ${r.text}`).join('');
+            return `    ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule}  ${style.dim(`${where}${key}`)}\n          ${f.message}${remedies}`;
         })];
+    if (report.remedyTogether)
+        lines.push(`    ${style.bold('together:')} ${togetherText(report.remedyTogether, report.spec)}`);
+    return lines;
 }
 /** The readable report of `inspect` for one file. */
 function renderFileText(report, style = PLAIN) {
@@ -24226,7 +25123,7 @@ function renderFileText(report, style = PLAIN) {
         lines.push('', `  ${style.bold('Number formats')} ${style.dim(`(positions computed in ${own})`)}`, ...precision);
     }
     lines.push(...section(style, 'Budget', budgetRows(m)));
-    lines.push(...findingLines(style, report.path, report.findings));
+    lines.push(...findingLines(style, report));
     return lines.join('\n');
 }
 /** The whole `inspect` text output: each file, each failure, and the estimate notice. */
@@ -24241,6 +25138,7 @@ function renderInspectText(reports, failures, style = PLAIN) {
 }
 
 ;// CONCATENATED MODULE: ./src/core/render/diff-text.ts
+
 
 
 
@@ -24274,7 +25172,11 @@ function renderDiffText(report, style = PLAIN) {
             const tags = [f.standing ? 'standing' : 'new', f.waived ? 'waived' : null].filter(Boolean).join(', ');
             const at = f.line !== null ? `${file.path}:${f.line}` : file.path;
             lines.push(`  ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule} (${tags})  ${style.dim(at)}`, `        ${f.message}`);
+            for (const r of remedyLines(f, file.head?.spec ?? null))
+                lines.push(`        ${style.bold(`${r.label}:`)} ${r.text}`);
         }
+        if (file.remedyTogether)
+            lines.push(`  ${file.remedyTogether.passes ? style.bold('together:') : style.severity('warn', 'together:')} ${togetherText(file.remedyTogether, file.head?.spec ?? null)}`);
     }
     if (report.deleted.length > 0)
         lines.push('', `deleted, not judged: ${report.deleted.map((d) => d.path).join(', ')}`);
@@ -24286,7 +25188,9 @@ function renderDiffText(report, style = PLAIN) {
 
 /**
  * The versioned JSON report of the gate: the decision, and per file both versions' spec, metrics
- * and findings. Locations are left out (the findings carry key and line).
+ * and findings. Locations are left out (the findings carry key and line). Every blocking finding
+ * carries `remedy` (`{change, metrics, raises}`, or null), `remedyWhyNot` and
+ * `remedyAlternatives`; a file with two or more remedies carries `remedyTogether`.
  */
 function renderGateJson(report) {
     const files = report.files.map((file) => ({
@@ -24301,6 +25205,7 @@ function renderGateJson(report) {
         head: file.head ? { spec: file.head.spec, metrics: file.head.metrics } : null,
         baseError: file.baseError,
         headError: file.headError,
+        ...(file.remedyTogether ? { remedyTogether: file.remedyTogether } : {}),
     }));
     return `${JSON.stringify({
         version: report.version,
@@ -24792,12 +25697,17 @@ async function runDemo(args, io) {
 
 /** Version of the JSON documents context-reach writes; bumped on any incompatible change. */
 const REPORT_VERSION = 1;
-/** The one JSON document of `inspect --json`. Unreadable files carry `error` and no metrics. */
+/**
+ * The one JSON document of `inspect --json`. Unreadable files carry `error` and no metrics;
+ * blocking findings carry `remedy`, `remedyWhyNot` and `remedyAlternatives` when the caller
+ * attached them (`remedyFileReport`), and a file `remedyTogether` when two or more apply.
+ */
 function renderInspectJson(reports, failures) {
     const files = [
-        ...reports.map((r) => ({
-            path: r.path, dialect: r.dialect, spec: r.spec, metrics: r.metrics, findings: r.findings,
-        })),
+        ...reports.map((r) => {
+            const together = r.remedyTogether;
+            return { path: r.path, dialect: r.dialect, spec: r.spec, metrics: r.metrics, findings: r.findings, ...(together ? { remedyTogether: together } : {}) };
+        }),
         ...failures.map((f) => ({
             path: f.path, dialect: null, spec: null, metrics: null,
             findings: [{ rule: 'config-unreadable', severity: 'block', message: f.message, key: null, line: f.line }],
@@ -24808,6 +25718,7 @@ function renderInspectJson(reports, failures) {
 }
 
 ;// CONCATENATED MODULE: ./src/cli/inspect.ts
+
 
 
 
@@ -24834,7 +25745,8 @@ async function runInspect(args, files, io) {
     for (const path of positionals) {
         try {
             const text = decodeText(await files.read(path), path);
-            reports.push(inspectModel(text, path, { at: values.at, overrides }));
+            // Blocking findings get their remedies, judged with the built-in rules.
+            reports.push(remedyFileReport(inspectModel(text, path, { at: values.at, overrides })));
         }
         catch (error) {
             failures.push(toFailure(path, error));

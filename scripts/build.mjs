@@ -21,7 +21,8 @@ await rm(dist, { recursive: true, force: true });
 await mkdir(dist, { recursive: true });
 for (const { entry, out } of bundles) {
   if (!existsSync(join(root, entry))) continue;
-  const { code, assets } = await ncc(join(root, entry), { minify: false, sourceMap: false, quiet: true, target: 'es2022' });
+  // Minified: start-up is dominated by compiling the bundle, and half the text compiles in half the time.
+  const { code, assets } = await ncc(join(root, entry), { minify: true, sourceMap: false, quiet: true, target: 'es2022' });
   await writeFile(join(dist, out), code);
   for (const [name, asset] of Object.entries(assets ?? {})) {
     if (name === 'package.json') continue;

@@ -134,3 +134,51 @@ export function parseEvent(eventName: string, payload: unknown, baseInput: strin
       throw new EventError(`The event ${JSON.stringify(eventName)} is not supported; expected one of ${SUPPORTED_EVENTS.join(', ')}.`);
   }
 }
+
+/** A finished workflow run, as the `workflow_run` event describes it: what publish mode needs. */
+export interface WorkflowRunInfo {
+  owner: string;
+  repo: string;
+  /** Id of the run that wrote the report. */
+  runId: number;
+  /** Event that started that run, e.g. `pull_request`. */
+  event: string;
+  /** Head commit of that run: the only commit a report may be published for. */
+  headSha: string;
+  /** `owner:branch` of the head, for finding its pull request; null when the head repository is gone. */
+  headLabel: string | null;
+  /** Pull requests GitHub links to the run (empty for pull requests from forks). */
+  pullNumbers: number[];
+}
+
+/**
+ * The triggering run of a `workflow_run` event. Everything here comes from GitHub's payload,
+ * never from the run's artifacts.
+ */
+export function parseWorkflowRun(payload: unknown): WorkflowRunInfo {
+  const name = 'workflow_run';
+  if (payload === null || typeof payload !== 'object') {
+    throw new EventError(`The ${name} event payload is ${payload === null ? 'null' : typeof payload}; expected the JSON object at GITHUB_EVENT_PATH.`);
+  }
+  const runId = field(payload, 'workflow_run.id', name);
+  if (!Number.isSafeInteger(runId) || (runId as number) < 1) {
+    throw new EventError(`The ${name} event payload has "workflow_run.id" = ${JSON.stringify(runId)}; expected a positive whole number.`);
+  }
+  const pulls = field(payload, 'workflow_run.pull_requests', name);
+  if (!Array.isArray(pulls)) {
+    throw new EventError(`The ${name} event payload has "workflow_run.pull_requests" = ${JSON.stringify(pulls)}; expected a list.`);
+  }
+  const headRepo = field(payload, 'workflow_run.head_repository', name) as Json | null;
+  const headOwner = (headRepo?.owner as Json | undefined)?.login;
+  const headBranch = field(payload, 'workflow_run.head_branch', name);
+  return {
+    ...repository(payload, name),
+    runId: runId as number,
+    event: text(payload, 'workflow_run.event', name),
+    headSha: sha(payload, 'workflow_run.head_sha', name),
+    headLabel: typeof headOwner === 'string' && typeof headBranch === 'string' && headOwner !== '' && headBranch !== '' ? `${headOwner}:${headBranch}` : null,
+    pullNumbers: pulls
+      .map((pull) => (pull as Json | null)?.number)
+      .filter((number): number is number => Number.isSafeInteger(number) && (number as number) > 0),
+  };
+}

@@ -52,6 +52,14 @@ export interface PullRequestInfo {
   changedFiles: number;
 }
 
+/** A pull request as GitHub's list gives it. */
+export interface PullRequestSummary {
+  number: number;
+  headSha: string;
+  /** `owner:branch` of the head. */
+  headLabel: string;
+}
+
 export interface PullRequestFiles {
   files: ChangedFile[];
   /** GitHub's list stops at `PULL_REQUEST_FILE_CAP` files; more may have changed. */
@@ -70,10 +78,16 @@ export interface GitHubClient {
   findComment(owner: string, repo: string, issueNumber: number, marker: string): Promise<Comment | null>;
   /** A comment by id, null when it was deleted. */
   getComment(owner: string, repo: string, commentId: number): Promise<Comment | null>;
+  /**
+   * Not retried on its own: a create whose answer is lost may have landed, so `publishComment`
+   * looks before it tries again.
+   */
   createComment(owner: string, repo: string, issueNumber: number, body: string): Promise<Comment>;
   /** Throws `ApiError` 404 when the comment is gone; the caller then creates a new one. */
   updateComment(owner: string, repo: string, commentId: number, body: string): Promise<Comment>;
   getPullRequest(owner: string, repo: string, number: number): Promise<PullRequestInfo>;
+  /** Open pull requests whose head is `head` (`owner:branch`), paginated. */
+  listOpenPullRequests(owner: string, repo: string, head: string): Promise<PullRequestSummary[]>;
 }
 
 export interface ClientLog {
@@ -292,7 +306,7 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
 
     createComment(owner, repo, issueNumber, body) {
       return call(`create a comment on #${issueNumber}`, async () => {
-        const { data } = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body });
+        const { data } = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body, request: { retries: 0 } });
         return toComment(data);
       });
     },
@@ -317,8 +331,23 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
         };
       });
     },
+
+    listOpenPullRequests(owner, repo, head) {
+      return call(`list open pull requests of ${head}`, async () => {
+        const entries = await octokit.paginate(octokit.rest.pulls.list, { owner, repo, state: 'open', head, per_page: 100 });
+        return entries.map((entry) => ({ number: entry.number, headSha: entry.head.sha, headLabel: entry.head.label }));
+      });
+    },
   };
 }
+
+/** Whether a failed call may still have taken effect: no answer, or a server error. */
+function outcomeUnknown(error: unknown): boolean {
+  return error instanceof ApiError && (error.status === 0 || error.status >= 500);
+}
+
+/** Tries to create a comment at most this many times when the answers are lost. */
+const CREATE_ATTEMPTS = 3;
 
 /**
  * Keeps exactly one report comment: updates the one found by `marker`, creates one when there
@@ -340,5 +369,18 @@ export async function publishComment(
       if (!gone) throw error;
     }
   }
-  return { comment: await client.createComment(owner, repo, issueNumber, body), action: 'created' };
+  // A create whose answer was lost may have landed: look for it before trying again, so a
+  // dropped connection never leaves two report comments.
+  for (let attempt = 1; ; attempt += 1) {
+    try {
+      return { comment: await client.createComment(owner, repo, issueNumber, body), action: 'created' };
+    } catch (error) {
+      if (!outcomeUnknown(error) || attempt >= CREATE_ATTEMPTS) throw error;
+    }
+    const landed = await client.findComment(owner, repo, issueNumber, marker);
+    if (landed) {
+      const comment = landed.body === body ? landed : await client.updateComment(owner, repo, landed.id, body);
+      return { comment, action: 'created' };
+    }
+  }
 }

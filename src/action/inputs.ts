@@ -27,6 +27,16 @@ export interface Settings {
   base: string | null;
   /** Where a standalone HTML report is written, null for none (default: `null`). */
   htmlReport: string | null;
+  /**
+   * Link to the HTML report for the comment, e.g. where a later step publishes it; null links
+   * this workflow run's page (its artifacts) when `htmlReport` is set (default: `null`).
+   */
+  htmlReportUrl: string | null;
+  /**
+   * Publish mode: the JSON report a first, unprivileged workflow wrote, to post as the comment of
+   * the pull request whose head the triggering `workflow_run` names; null runs the gate (default: `null`).
+   */
+  publishReport: string | null;
 }
 
 /** Reads one input as the runner passes it: empty string when unset. */
@@ -50,10 +60,24 @@ function oneOf<T extends string>(name: string, raw: string, allowed: readonly T[
   throw new InputError(name, `Input "${name}" is ${quote(raw)}; expected one of ${allowed.join(', ')} (action.yml, input ${name}).`);
 }
 
-/** A path the action writes to: no control characters. */
+/** A path the action writes to or reads its own files from: no control characters. */
 function outputPath(name: string, raw: string): string {
   if (/[\u0000-\u001f]/.test(raw)) {
     throw new InputError(name, `Input "${name}" is ${quote(raw)}; expected a file path without control characters (action.yml, input ${name}).`);
+  }
+  return raw;
+}
+
+/** A link for the comment: an absolute http(s) URL without spaces or control characters. */
+function webLink(name: string, raw: string): string {
+  let url: URL | null = null;
+  try {
+    url = new URL(raw);
+  } catch {
+    url = null;
+  }
+  if (url === null || !/^https?:$/.test(url.protocol) || /[\s\u0000-\u001f]/.test(raw)) {
+    throw new InputError(name, `Input "${name}" is ${quote(raw)}; expected an absolute http or https URL such as "https://example.org/report.html" (action.yml, input ${name}).`);
   }
   return raw;
 }
@@ -86,6 +110,8 @@ export function readSettings(getInput: GetInput, env: Readonly<Record<string, st
   const reportRaw = read('report-json');
   const sarifRaw = read('sarif');
   const htmlRaw = read('html-report');
+  const htmlUrlRaw = read('html-report-url');
+  const publishRaw = read('publish-report');
   const temp = env.RUNNER_TEMP && env.RUNNER_TEMP !== '' ? env.RUNNER_TEMP : tmpdir();
   return {
     token,
@@ -96,5 +122,7 @@ export function readSettings(getInput: GetInput, env: Readonly<Record<string, st
     sarif: sarifRaw === '' ? null : outputPath('sarif', sarifRaw),
     base: baseRaw === '' ? null : baseRaw,
     htmlReport: htmlRaw === '' ? null : outputPath('html-report', htmlRaw),
+    htmlReportUrl: htmlUrlRaw === '' ? null : webLink('html-report-url', htmlUrlRaw),
+    publishReport: publishRaw === '' ? null : outputPath('publish-report', publishRaw),
   };
 }

@@ -1,6 +1,7 @@
 import * as core from '@actions/core';
 import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
+import { createFileSource } from '../cli/files.js';
 import { createGitReader } from './git.js';
 import { createGitHubClient } from './github.js';
 import { runAction } from './run-action.js';
@@ -12,6 +13,7 @@ runAction({
   getInput: (name) => core.getInput(name),
   out: createRunnerOutput(),
   readJson: async (path) => JSON.parse(await readFile(path, 'utf8')) as unknown,
+  readFile: (path, maxBytes) => createFileSource(maxBytes).read(path),
   writeFile: async (path, text) => {
     await mkdir(dirname(path), { recursive: true });
     await writeFile(path, text);

@@ -4,6 +4,7 @@ import { runGate, type ContentSource } from '../core/gate.js';
 import { planAnnotations } from '../core/render/annotations.js';
 import { renderComment } from '../core/render/comment.js';
 import { renderGateJson } from '../core/render/gate-json.js';
+import { renderHtmlReport } from '../core/render/html-report.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
 import { renderSarif } from '../core/render/sarif.js';
 import { VERSION } from '../core/version.js';
@@ -11,6 +12,7 @@ import { parseEvent, type EventInfo } from './event.js';
 import type { GitReader } from './git.js';
 import { isPermissionError, publishComment, type GitHubClient, type GitHubClientOptions } from './github.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
+import { runPublish } from './publish.js';
 import { SUMMARY_LIMIT, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
@@ -19,12 +21,16 @@ export interface ActionDeps {
   getInput: GetInput;
   out: RunnerOutput;
   readJson(path: string): Promise<unknown>;
+  /** Bytes of a local file, refused past `maxBytes` without reading it whole (publish mode's report). */
+  readFile(path: string, maxBytes: number): Promise<Uint8Array>;
   writeFile(path: string, text: string): Promise<void>;
   createGit(cwd: string): GitReader;
   createGitHub(token: string, options: GitHubClientOptions): GitHubClient;
 }
 
 export const FORK_NOTICE = 'The token cannot comment on this pull request (a read-only token, as pull requests from forks get). The report is in the job summary and the annotations, and the verdict still decides the check. To get the comment on fork pull requests, use the two-workflow recipe in the README ("Pull requests from forks").';
+
+export const COMMENT_FAILED_NOTICE = 'The report comment could not be written; the report is in the job summary, the annotations and the JSON report, and the verdict still decides the check';
 
 interface Changes {
   /** Where the pull request's changes start: the merge base when git knows it. */
@@ -55,9 +61,12 @@ async function gatherChanges(event: EventInfo, base: string, git: GitReader, api
     throw new Error(`The checkout lacks commit ${baseSha === null ? base : event.head} and there is ${api === null ? 'no token' : 'no pull request'} to ask the API instead; check out with fetch-depth: 0, or give a base input that exists.`);
   }
   const listed = await api.listPullRequestFiles(event.owner, event.repo, event.pullNumber);
-  const notices = listed.truncated
-    ? [`GitHub lists only the first 3,000 files of a pull request and this one has more; files past that were not judged. Check out with fetch-depth: 0 so the action can read the whole change from git.`]
-    : [];
+  const notices: string[] = [];
+  if (listed.truncated) {
+    const total = await api.getPullRequest(event.owner, event.repo, event.pullNumber).then((pr) => pr.changedFiles, () => null);
+    const unlisted = total !== null && total > listed.files.length ? `${(total - listed.files.length).toLocaleString('en-US')} of its ${total.toLocaleString('en-US')} changed files` : 'the files past that';
+    notices.push(`GitHub lists only the first ${listed.files.length.toLocaleString('en-US')} files of a pull request and this one has more: ${unlisted} were not judged. Check out with fetch-depth: 0 so the action reads the whole change from git.`);
+  }
   return {
     base, policyRef: base, head: event.head, changes: listed.files,
     source: { read: (ref, path) => api.getFileContent(event.owner, event.repo, path, ref) }, notices,
@@ -82,6 +91,13 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   const { env, out } = deps;
   const settings = readSettings(deps.getInput, env);
   if (settings.token) out.secret(settings.token);
+  const connect = () => settings.token
+    ? deps.createGitHub(settings.token, { baseUrl: env.GITHUB_API_URL, log: { debug: () => {}, info: (m) => out.info(m), warn: (m) => out.warning(m) } })
+    : null;
+  if (settings.publishReport !== null) {
+    await runPublish({ env, out, readJson: deps.readJson, readFile: deps.readFile, api: connect() }, { ...settings, publishReport: settings.publishReport });
+    return;
+  }
 
   const payload = env.GITHUB_EVENT_PATH ? await deps.readJson(env.GITHUB_EVENT_PATH) : {};
   const event = parseEvent(env.GITHUB_EVENT_NAME ?? '', payload, settings.base, env.GITHUB_SHA);
@@ -90,9 +106,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     setOutputs(out, { verdict: 'ok', blocking: 0, warnings: 0 }, '', '');
     return;
   }
-  const api = settings.token
-    ? deps.createGitHub(settings.token, { baseUrl: env.GITHUB_API_URL, log: { debug: () => {}, info: (m) => out.info(m), warn: (m) => out.warning(m) } })
-    : null;
+  const api = connect();
   const git = deps.createGit(env.GITHUB_WORKSPACE ?? '.');
   const gathered = await gatherChanges(event, event.base, git, api);
 
@@ -123,23 +137,30 @@ export async function runAction(deps: ActionDeps): Promise<void> {
 
   await deps.writeFile(settings.reportJson, renderGateJson(report));
   if (settings.sarif) await deps.writeFile(settings.sarif, renderSarif(report, VERSION));
+  if (settings.htmlReport) await deps.writeFile(settings.htmlReport, renderHtmlReport(report));
+  // The page is uploaded by a later step, so its own URL is not known yet: the run's page lists it.
+  const runPage = settings.htmlReport && env.GITHUB_RUN_ID ? `${server}/${event.owner}/${event.repo}/actions/runs/${env.GITHUB_RUN_ID}` : null;
+  const html = { htmlReportUrl: settings.htmlReportUrl ?? runPage, htmlReportWhere: settings.htmlReportUrl ? null : runPage ? 'in the artifacts of this workflow run' : null };
 
   let commentUrl = '';
-  let forkNotice = false;
+  const runNotices: string[] = [];
   if (settings.comment === 'update' && event.pullNumber !== null && api) {
-    const body = renderComment(report, { blobUrl, unannotated: omitted });
+    const body = renderComment(report, { blobUrl, unannotated: omitted, ...html });
     try {
       const published = await publishComment(api, { owner: event.owner, repo: event.repo, issueNumber: event.pullNumber, marker: COMMENT_MARKER, body });
       commentUrl = published.comment.url;
       out.info(`${published.action === 'created' ? 'Created' : 'Updated'} the report comment: ${commentUrl}`);
     } catch (error) {
-      if (!isPermissionError(error)) throw error;
-      forkNotice = true;
-      out.notice(FORK_NOTICE);
+      // The comment is a copy of the report: failing to write it loses nothing, so the verdict still decides.
+      const notice = isPermissionError(error) ? FORK_NOTICE : `${COMMENT_FAILED_NOTICE} (${error instanceof Error ? error.message : String(error)})`;
+      if (isPermissionError(error)) out.notice(notice);
+      else out.warning(notice);
+      runNotices.push(notice);
     }
   }
-  const summaryReport = forkNotice ? { ...report, notices: [...report.notices, FORK_NOTICE] } : report;
-  await out.summary(renderComment(summaryReport, { blobUrl, unannotated: omitted, limit: SUMMARY_LIMIT - 1024 }));
+  for (const notice of gathered.notices) out.warning(notice);
+  const summaryReport = runNotices.length > 0 ? { ...report, notices: [...report.notices, ...runNotices] } : report;
+  await out.summary(renderComment(summaryReport, { blobUrl, unannotated: omitted, limit: SUMMARY_LIMIT - 1024, ...html }));
   setOutputs(out, report, settings.reportJson, commentUrl);
   out.info(`context-reach verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings)`);
   if (failsCheck(report.verdict, settings.failOn)) {

@@ -6,7 +6,7 @@ import { parseArgs } from 'node:util';
 import { createGitReader, createScratchRepository } from '../action/git.js';
 import { runGate } from '../core/gate.js';
 import type { Console } from './console.js';
-import { renderReport } from './diff.js';
+import { renderReport, writeHtmlReport } from './diff.js';
 
 /** The bundled demo: `fixtures/demo` above this file, found from the source tree or from `dist/`. */
 async function findDemo(): Promise<string> {
@@ -29,7 +29,7 @@ async function replaceTree(repo: string, from: string): Promise<void> {
  * request), runs the gate on it and prints the comment as it would appear. Always exits 0: a showcase.
  */
 export async function runDemo(args: string[], io: Console): Promise<number> {
-  const { values } = parseArgs({ args, strict: true, options: { format: { type: 'string' }, keep: { type: 'boolean' } } });
+  const { values } = parseArgs({ args, strict: true, options: { format: { type: 'string' }, keep: { type: 'boolean' }, html: { type: 'string' } } });
   const format = (values.format ?? 'markdown') as 'markdown' | 'text' | 'json';
   const demo = await findDemo();
   const repo = await mkdtemp(join(tmpdir(), 'context-reach-demo-'));
@@ -45,6 +45,10 @@ export async function runDemo(args: string[], io: Console): Promise<number> {
       base, head, changes: await git.changedFiles(base, head), policyPath: '.github/context-reach.yml',
     });
     io.out(renderReport(report, ['markdown', 'text', 'json'].includes(format) ? format : 'markdown', io));
+    if (values.html !== undefined) {
+      await writeHtmlReport(values.html, report);
+      if (format !== 'json') io.out(`\nThe HTML report (charts, findings, proven remedies) is at ${values.html}; open it in a browser.\n`);
+    }
     if (format !== 'json') {
       io.out(`\nverdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings). In a workflow the check would ${report.verdict === 'block' ? 'fail' : 'pass'}; the demo exits 0.\n`);
       if (values.keep) io.out(`scratch repository kept at ${repo}\n`);

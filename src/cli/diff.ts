@@ -1,8 +1,11 @@
+import { mkdir, writeFile } from 'node:fs/promises';
+import { dirname } from 'node:path';
 import { parseArgs } from 'node:util';
 import { runGate } from '../core/gate.js';
 import { renderComment } from '../core/render/comment.js';
 import { renderDiffText } from '../core/render/diff-text.js';
 import { renderGateJson } from '../core/render/gate-json.js';
+import { renderHtmlReport } from '../core/render/html-report.js';
 import type { GateReport } from '../core/compare/decide.js';
 import { createGitReader, type GitReader } from '../action/git.js';
 import type { Console } from './console.js';
@@ -10,11 +13,17 @@ import { SERVING_FLAGS, UsageError, servingPatch } from './options.js';
 import { terminalStyle } from './terminal.js';
 
 export const DIFF_USAGE = `usage: context-reach diff [--base REF] [--head REF] [--policy FILE]
-       [--format text|markdown|json] [--fail-on block|warn|never] [--label NAME]...
+       [--format text|markdown|json] [--fail-on block|warn|never] [--label NAME]... [--html FILE]
        [--served-span N] [--sequences N] [--device-gib G] [--cache-dtype D] ...`;
 
 const FORMATS = ['text', 'markdown', 'json'] as const;
 const FAIL_ON = ['block', 'warn', 'never'] as const;
+
+/** Writes the standalone HTML report of `--html` (folders made as needed). */
+export async function writeHtmlReport(path: string, report: GateReport): Promise<void> {
+  await mkdir(dirname(path), { recursive: true });
+  await writeFile(path, renderHtmlReport(report));
+}
 
 /** Exit status for a verdict under `--fail-on`: 1 fails the check, 0 passes it. */
 export function exitStatus(report: GateReport, failOn: (typeof FAIL_ON)[number]): number {
@@ -58,7 +67,7 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
     options: {
       base: { type: 'string' }, head: { type: 'string' }, policy: { type: 'string' },
       format: { type: 'string' }, 'fail-on': { type: 'string' }, label: { type: 'string', multiple: true },
-      ...SERVING_FLAGS,
+      html: { type: 'string' }, ...SERVING_FLAGS,
     },
   });
   const format = (values.format ?? 'text') as (typeof FORMATS)[number];
@@ -79,5 +88,6 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
     overrides: servingPatch(values),
   });
   io.out(renderReport(report, format, io));
+  if (values.html !== undefined) await writeHtmlReport(values.html, report);
   return exitStatus(report, failOn);
 }

@@ -1,5 +1,6 @@
 import { parseArgs } from 'node:util';
 import { inspectModel, toFailure, type FileFailure, type FileReport } from '../core/inspect.js';
+import { remedyFileReport } from '../core/remedy/attach.js';
 import { decodeText } from '../core/parse/source.js';
 import { renderInspectJson } from '../core/render/inspect-json.js';
 import { renderInspectText } from '../core/render/inspect-text.js';
@@ -28,7 +29,8 @@ export async function runInspect(args: string[], files: FileSource, io: Console)
   for (const path of positionals) {
     try {
       const text = decodeText(await files.read(path), path);
-      reports.push(inspectModel(text, path, { at: values.at, overrides }));
+      // Blocking findings get their remedies, judged with the built-in rules.
+      reports.push(remedyFileReport(inspectModel(text, path, { at: values.at, overrides })));
     } catch (error) {
       failures.push(toFailure(path, error));
     }

@@ -11,7 +11,7 @@ export interface CliDeps {
   io: Console;
 }
 
-const DEMO_USAGE = 'usage: context-reach demo [--format markdown|text|json] [--keep]';
+const DEMO_USAGE = 'usage: context-reach demo [--format markdown|text|json] [--keep] [--html FILE]';
 
 const USAGE = `context-reach: positional-range and context-budget review of transformer model configs
 

@@ -5,6 +5,7 @@ import { inspectModel, toFailure, type FileFailure, type FileReport } from './in
 import type { ServingPatch } from './model.js';
 import { decodeText } from './parse/source.js';
 import { DEFAULT_POLICY, isModelConfig, parsePolicy, resolvePolicy, type Policy } from './policy/index.js';
+import { attachRemedies } from './remedy/attach.js';
 
 /** Reads a file's bytes at a commit; null when the file does not exist there. */
 export interface ContentSource {
@@ -118,7 +119,8 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
 
   const labels = request.labels ?? [];
   const waiverLabel = policy.waiverLabel ?? null;
-  return decide({
+  // Every blocking finding gets its remedy here, proven against the same policy and base.
+  return attachRemedies(decide({
     configs: judgedConfigs,
     deleted,
     policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged },
@@ -126,5 +128,5 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     notices,
     base,
     head,
-  });
+  }), judgedConfigs);
 }

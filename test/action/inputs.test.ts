@@ -36,6 +36,8 @@ describe('readSettings(getInput, env)', () => {
       sarif: null,
       base: null,
       htmlReport: null,
+      htmlReportUrl: null,
+      publishReport: null,
     });
   });
 
@@ -49,16 +51,20 @@ describe('readSettings(getInput, env)', () => {
       sarif: null,
       base: null,
       htmlReport: null,
+      htmlReportUrl: null,
+      publishReport: null,
     });
   });
 
   test('takes every input it is given, trimmed', () => {
     expect(readSettings(inputs({
       policy: ' config/reach-policy.yaml ', 'fail-on': 'warn', comment: 'off', 'report-json': 'out/r.json',
-      sarif: 'out/r.sarif', base: 'release/2.0', 'html-report': 'out/r.html',
+      sarif: 'out/r.sarif', base: 'release/2.0', 'html-report': 'out/r.html', 'publish-report': ' artifact/report.json ',
+      'html-report-url': ' https://example.org/reports/7.html ',
     }), { RUNNER_TEMP: '/t' })).toEqual({
       token: 'ghs_exampleToken123', policyPath: 'config/reach-policy.yaml', failOn: 'warn', comment: 'off',
-      reportJson: 'out/r.json', sarif: 'out/r.sarif', base: 'release/2.0', htmlReport: 'out/r.html',
+      reportJson: 'out/r.json', sarif: 'out/r.sarif', base: 'release/2.0', htmlReport: 'out/r.html', publishReport: 'artifact/report.json',
+      htmlReportUrl: 'https://example.org/reports/7.html',
     });
     expect(readSettings(inputs({ 'fail-on': 'never' }), {}).failOn).toBe('never');
   });
@@ -75,6 +81,9 @@ describe('readSettings(getInput, env)', () => {
     ['report-json', 'out/\u0007.json', 'Input "report-json" is "out/\\u0007.json"; expected a file path without control characters (action.yml, input report-json).'],
     ['sarif', 'a\u0000b', 'Input "sarif" is "a\\u0000b"; expected a file path without control characters (action.yml, input sarif).'],
     ['html-report', 'x\u001bb', 'Input "html-report" is "x\\u001bb"; expected a file path without control characters (action.yml, input html-report).'],
+    ['html-report-url', 'javascript:alert(1)', 'Input "html-report-url" is "javascript:alert(1)"; expected an absolute http or https URL such as "https://example.org/report.html" (action.yml, input html-report-url).'],
+    ['html-report-url', 'reports/7.html', 'Input "html-report-url" is "reports/7.html"; expected an absolute http or https URL such as "https://example.org/report.html" (action.yml, input html-report-url).'],
+    ['publish-report', 'report\n.json', 'Input "publish-report" is "report\\n.json"; expected a file path without control characters (action.yml, input publish-report).'],
   ])('input %s = %j is refused with a message naming it', (name, value, message) => {
     const read = (): unknown => readSettings(inputs({ [name]: value }), {});
     expect(read).toThrow(InputError);
@@ -91,7 +100,7 @@ describe('readSettings(getInput, env)', () => {
 describe('action.yml', () => {
   test('runs the bundle on node24 and declares the inputs and outputs of the gate', () => {
     expect(action.runs).toEqual({ using: 'node24', main: 'dist/index.js' });
-    expect(Object.keys(action.inputs)).toEqual(['github-token', 'policy', 'fail-on', 'comment', 'report-json', 'sarif', 'base', 'html-report']);
+    expect(Object.keys(action.inputs)).toEqual(['github-token', 'policy', 'fail-on', 'comment', 'report-json', 'sarif', 'base', 'html-report', 'html-report-url', 'publish-report']);
     expect(Object.keys(action.outputs)).toEqual(['verdict', 'blocking', 'warnings', 'report-json', 'comment-url']);
     expect(action.branding.icon).not.toBe('');
   });

@@ -2,6 +2,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createGitReader } from '../../src/action/git.js';
+import { createFileSource } from '../../src/cli/files.js';
 import { createGitHubClient } from '../../src/action/github.js';
 import { runAction } from '../../src/action/run-action.js';
 import { startFakeGitHub, type FakeGitHub, type FakePullFile } from './fake-github.js';
@@ -80,6 +81,7 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
       getInput: (name) => inputs[name] ?? '',
       out,
       readJson: async () => pullRequestEvent({ owner: OWNER, repo: REPO, number: 7, base: repo.base, head: repo.head, labels: options.labels, fork: options.fork }),
+      readFile: (path, maxBytes) => createFileSource(maxBytes).read(path),
       writeFile: async (path, text) => { written[path] = text; },
       createGit: (cwd) => createGitReader(cwd),
       createGitHub: (token, clientOptions) => createGitHubClient(token, { ...clientOptions, msPerSecond: 1 }),

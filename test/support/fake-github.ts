@@ -40,6 +40,8 @@ export interface FakePull {
   /** Full name of the head repository; differs from the base repository's for a fork. */
   headRepo: string;
   files: FakePullFile[];
+  /** Open unless said otherwise (default: `open`). */
+  state?: 'open' | 'closed';
 }
 
 export interface FakeComment {
@@ -79,6 +81,8 @@ export interface StatusFault {
 export type Fault =
   | StatusFault
   | { kind: 'reset' }
+  /** The request is carried out, then the connection drops before the answer: the client cannot know it worked. */
+  | { kind: 'reset-after' }
   /** No answer at all: the client's timeout has to end the request. */
   | { kind: 'hang' };
 
@@ -87,7 +91,7 @@ export interface LoggedRequest {
   path: string;
   query: string;
   operationId: string | null;
-  status: number | 'reset' | 'hang';
+  status: number | 'reset' | 'reset-after' | 'hang';
   /** The request carried the fake's token. */
   authorized: boolean;
   /** The answer came from the fault queue. */
@@ -154,6 +158,11 @@ export function statusFault(status: number, message = 'Fault'): StatusFault {
 /** The connection is dropped without an answer. */
 export function connectionReset(): Fault {
   return { kind: 'reset' };
+}
+
+/** The request takes effect, then the connection is dropped before the answer. */
+export function connectionResetAfterEffect(): Fault {
+  return { kind: 'reset-after' };
 }
 
 /** The request is accepted and never answered. */
@@ -236,6 +245,18 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     });
   };
 
+  /** A pull request as the list answers it (`pull-request-simple`), from the fake's state. */
+  const simplePull = (pull: FakePull): unknown => {
+    const baseName = `${state.owner}/${state.repo}`;
+    return deepMerge(sampleOf('pull-request-simple'), {
+      number: pull.number, state: pull.state ?? 'open', title: `Invented change ${pull.number}`,
+      url: `${url}/repos/${baseName}/pulls/${pull.number}`, html_url: `${url}/${baseName}/pull/${pull.number}`,
+      labels: pull.labels.map((name, index) => ({ id: index + 1, node_id: `LA_${index}`, url: `${url}/labels/${index}`, name, description: 'label', color: 'ededed', default: false })),
+      base: { sha: pull.baseSha, ref: pull.baseRef, label: `${state.owner}:${pull.baseRef}`, repo: repoObject(baseName), user: userObject({ login: state.owner, type: 'User', id: 7 }) },
+      head: { sha: pull.headSha, ref: pull.headRef, label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`, repo: repoObject(pull.headRepo), user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }) },
+    });
+  };
+
   const links = (path: string): Record<string, unknown> => ({
     self: `${url}/repos/${state.owner}/${state.repo}/contents/${path}`,
     git: `${url}/repos/${state.owner}/${state.repo}/git/blobs/x`,
@@ -307,13 +328,27 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         return {
           status: 200,
           json: deepMerge(sampleOf('pull-request'), {
-            number: pull.number, state: 'open', title: `Invented change ${pull.number}`,
+            number: pull.number, state: pull.state ?? 'open', title: `Invented change ${pull.number}`,
             labels: pull.labels.map((name, index) => ({ id: index + 1, node_id: `LA_${index}`, url: `${url}/labels/${index}`, name, description: null, color: 'ededed', default: false })),
             base: { sha: pull.baseSha, ref: pull.baseRef, label: `${state.owner}:${pull.baseRef}`, repo: repoObject(baseName), user: userObject({ login: state.owner, type: 'User', id: 7 }) },
             head: { sha: pull.headSha, ref: pull.headRef, label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`, repo: repoObject(pull.headRepo), user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }) },
             changed_files: pull.files.length,
           }),
         };
+      }
+      case 'pulls/list': {
+        const wanted = query.get('state') ?? 'open';
+        const head = query.get('head');
+        const baseRef = query.get('base');
+        const pulls = [...state.pulls.values()]
+          .filter((pull) => wanted === 'all' || (pull.state ?? 'open') === wanted)
+          // `head` filters by "user:ref" (REST documentation, "List pull requests").
+          .filter((pull) => head === null || `${pull.headRepo.split('/')[0]}:${pull.headRef}` === head)
+          .filter((pull) => baseRef === null || pull.baseRef === baseRef)
+          .sort((a, b) => b.number - a.number)
+          .map((pull) => simplePull(pull));
+        const { slice, headers } = page(pulls, query, pathname);
+        return { status: 200, headers, json: slice };
       }
       case 'pulls/list-files': {
         const pull = state.pulls.get(Number(params.pull_number));
@@ -427,6 +462,14 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       }
       if (fault.kind === 'hang') {
         entry.status = 'hang';
+        return;
+      }
+      if (fault.kind === 'reset-after') {
+        entry.status = 'reset-after';
+        if (authorized && check.operation && check.problems.length === 0) {
+          handle(check.operation, check.params, parsed.searchParams, body, String(req.headers.accept ?? ''), parsed.pathname);
+        }
+        req.socket.destroy();
         return;
       }
       fault.effect?.(state);

@@ -6,6 +6,9 @@ import { codeSpan, encodePath, escapeMarkdown } from './escape.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { memoryChart } from './memory-chart.js';
 import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
+import type { Remedy } from '../remedy/types.js';
+import type { ModelSpec } from '../model.js';
+import { changeParts, metricParts, REMEDY_NOTE } from './remedy-text.js';
 import { METRIC_PATHS, metricValue as metricOf } from '../compare/metric-path.js';
 
 export { COMMENT_MARKER };
@@ -18,6 +21,8 @@ export interface MarkdownContext {
   blobUrl?: string | null;
   /** Where the standalone HTML report can be downloaded (default: not mentioned). */
   htmlReportUrl?: string | null;
+  /** Where on that page the report is, e.g. `in the artifacts of this workflow run` (default: nothing said). */
+  htmlReportWhere?: string | null;
   /** Findings GitHub could not show as annotations (default: none). */
   unannotated?: number;
   /** Character budget (default: the comment limit). */
@@ -122,12 +127,59 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
   if (findings.length < file.findings.length) {
     lines.push(`_${file.findings.length - findings.length} more findings are in the job summary and the JSON report._`, '');
   }
+  lines.push(...remedySection(file));
   if (parts.chart && file.head) {
     const chart = memoryChart(file);
     if (chart) lines.push(chart, '');
   }
   if (parts.details && file.head) lines.push(fullMetrics(file), '');
   return lines.join('\n');
+}
+
+/** `` `key` before → **after**, … ⇒ metric value, … `` with every part escaped. */
+function changeMarkdown(change: Remedy['change'], spec: ModelSpec | null): string {
+  return changeParts(change, spec)
+    .map((p) => `${codeSpan(p.key)} ${p.before === null ? '' : `${escapeMarkdown(p.before)} → `}**${escapeMarkdown(p.after)}**`).join(', ');
+}
+
+function metricsMarkdown(metrics: Remedy['metrics'], max = Infinity): string {
+  return metricParts(metrics).slice(0, max).map((m) => `${escapeMarkdown(m.metric)} ${escapeMarkdown(m.value)}`).join(', ');
+}
+
+function remedyMarkdown(remedy: Remedy, spec: ModelSpec | null, maxMetrics = Infinity): string {
+  const raises = remedy.raises.length > 0 ? ` _(also raises ${remedy.raises.map((r) => escapeMarkdown(r)).join(', ')})_` : '';
+  return `${changeMarkdown(remedy.change, spec)} ⇒ ${metricsMarkdown(remedy.metrics, maxMetrics)}${raises}`;
+}
+
+/** The first line under a blocking finding: its remedy, or why there is none. */
+function firstRemedyLine(finding: JudgedFinding, spec: ModelSpec | null): string | null {
+  if (finding.remedy === undefined) return null;
+  if (finding.remedy === null) return `⛔ no remedy: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`;
+  return `✅ **remedy**: ${remedyMarkdown(finding.remedy, spec, 3)}`;
+}
+
+/** The remedies of a file's blocking findings: the proven change, its alternatives, or why there is none. */
+function remedySection(file: FileDecision): string[] {
+  const blocking = file.findings.filter((f) => f.severity === 'block' && f.remedy !== undefined);
+  if (blocking.length === 0) return [];
+  const spec = file.head?.spec ?? null;
+  const lines = [`**Remedies** <sub>${escapeMarkdown(REMEDY_NOTE)}</sub>`, ''];
+  for (const finding of blocking) {
+    lines.push(`- \`${finding.rule}\`${finding.metric ? ` (${codeSpan(finding.metric)})` : ''}`);
+    if (!finding.remedy) {
+      lines.push(`  - ⛔ no remedy: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`);
+      continue;
+    }
+    lines.push(`  - ✅ **remedy**: ${remedyMarkdown(finding.remedy, spec)}`);
+    for (const alternative of finding.remedyAlternatives ?? []) lines.push(`  - or: ${remedyMarkdown(alternative, spec)}`);
+  }
+  const together = file.remedyTogether;
+  if (together) {
+    const verdict = together.passes ? 'pass: nothing blocks' : `still block on ${together.stillBlocking.map((b) => escapeMarkdown(b)).join(', ')}`;
+    lines.push(`- ${together.passes ? '✅' : '⚠️'} All first remedies together (${changeMarkdown(together.change, spec)}) ${verdict}.`);
+  }
+  lines.push('');
+  return lines;
 }
 
 function headline(report: GateReport): string {
@@ -138,7 +190,13 @@ function headline(report: GateReport): string {
 function blockers(report: GateReport, ctx: MarkdownContext): string[] {
   const rows = report.files.flatMap((file) => file.findings.filter((f) => f.counts === 'block').map((f) => ({ file, f })));
   if (rows.length === 0) return [];
-  return ['**What blocks:**', '', ...rows.map(({ file, f }) => `- ${codeSpan(file.path)} ${where(file, f, ctx)}: \`${f.rule}\` ${escapeMarkdown(f.message)}`), ''];
+  return ['**What blocks:**', '', ...rows.flatMap(({ file, f }) => {
+    const first = firstRemedyLine(f, file.head?.spec ?? null);
+    return [
+      `- ${codeSpan(file.path)} ${where(file, f, ctx)}: \`${f.rule}\` ${escapeMarkdown(f.message)}`,
+      ...(first ? [`  - ${first}`] : []),
+    ];
+  }), ''];
 }
 
 function preamble(report: GateReport, ctx: MarkdownContext): string[] {
@@ -166,7 +224,10 @@ function footer(report: GateReport, ctx: MarkdownContext): string[] {
   if (report.deleted.length > 0) {
     lines.push(`Deleted, not judged: ${report.deleted.map((d) => codeSpan(d.path)).join(', ')}.`, '');
   }
-  if (ctx.htmlReportUrl) lines.push(`[Charts and full report (HTML)](${encodeURI(ctx.htmlReportUrl)})`, '');
+  if (ctx.htmlReportUrl) {
+    const where = ctx.htmlReportWhere ? ` ${escapeMarkdown(ctx.htmlReportWhere)}` : '';
+    lines.push(`📊 Charts, findings and proven remedies: [the HTML report](${encodeURI(ctx.htmlReportUrl).replace(/[()]/g, (c) => (c === '(' ? '%28' : '%29'))})${where}.`, '');
+  }
   lines.push(`<sub>${escapeMarkdown(ESTIMATE_NOTICE)}</sub>`);
   return lines;
 }

@@ -3,6 +3,7 @@ import { formatInteger } from '../units.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { PLAIN, type TextStyle } from './inspect-text.js';
+import { remedyLines, togetherText } from './remedy-text.js';
 
 /** The gate's decision as terminal text, for `context-reach diff --format text`. */
 export function renderDiffText(report: GateReport, style: TextStyle = PLAIN): string {
@@ -28,7 +29,9 @@ export function renderDiffText(report: GateReport, style: TextStyle = PLAIN): st
       const tags = [f.standing ? 'standing' : 'new', f.waived ? 'waived' : null].filter(Boolean).join(', ');
       const at = f.line !== null ? `${file.path}:${f.line}` : file.path;
       lines.push(`  ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule} (${tags})  ${style.dim(at)}`, `        ${f.message}`);
+      for (const r of remedyLines(f, file.head?.spec ?? null)) lines.push(`        ${style.bold(`${r.label}:`)} ${r.text}`);
     }
+    if (file.remedyTogether) lines.push(`  ${file.remedyTogether.passes ? style.bold('together:') : style.severity('warn', 'together:')} ${togetherText(file.remedyTogether, file.head?.spec ?? null)}`);
   }
   if (report.deleted.length > 0) lines.push('', `deleted, not judged: ${report.deleted.map((d) => d.path).join(', ')}`);
   lines.push('', style.dim(ESTIMATE_NOTICE));

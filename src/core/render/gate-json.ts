@@ -3,7 +3,9 @@ import { ESTIMATE_NOTICE } from './notice.js';
 
 /**
  * The versioned JSON report of the gate: the decision, and per file both versions' spec, metrics
- * and findings. Locations are left out (the findings carry key and line).
+ * and findings. Locations are left out (the findings carry key and line). Every blocking finding
+ * carries `remedy` (`{change, metrics, raises}`, or null), `remedyWhyNot` and
+ * `remedyAlternatives`; a file with two or more remedies carries `remedyTogether`.
  */
 export function renderGateJson(report: GateReport): string {
   const files = report.files.map((file) => ({
@@ -18,6 +20,7 @@ export function renderGateJson(report: GateReport): string {
     head: file.head ? { spec: file.head.spec, metrics: file.head.metrics } : null,
     baseError: file.baseError,
     headError: file.headError,
+    ...(file.remedyTogether ? { remedyTogether: file.remedyTogether } : {}),
   }));
   return `${JSON.stringify({
     version: report.version,

@@ -4,6 +4,8 @@ import type { FileFailure, FileReport } from '../inspect.js';
 import type { Metrics } from '../metrics/types.js';
 import { formatBytes, formatCount, formatInteger, formatNumber, formatTokens } from '../units.js';
 import { ESTIMATE_NOTICE } from './notice.js';
+import type { RemedyFields, CombinedRemedy } from '../remedy/types.js';
+import { remedyLines, togetherText } from './remedy-text.js';
 
 /** Terminal styling; the CLI passes ANSI codes on a terminal and `PLAIN` elsewhere. */
 export interface TextStyle {
@@ -90,13 +92,17 @@ function budgetRows(m: Metrics): Row[] {
   ];
 }
 
-function findingLines(style: TextStyle, path: string, findings: Finding[]): string[] {
+function findingLines(style: TextStyle, report: FileReport & { remedyTogether?: CombinedRemedy | null }): string[] {
+  const { path, findings } = report as { path: string; findings: (Finding & Partial<RemedyFields>)[] };
   if (findings.length === 0) return ['', `  ${style.bold('Findings')}`, '    none'];
-  return ['', `  ${style.bold('Findings')}`, ...findings.map((f) => {
+  const lines = ['', `  ${style.bold('Findings')}`, ...findings.map((f) => {
     const where = f.line !== null ? `${path}:${f.line}` : path;
     const key = f.key ? ` ${f.key}` : '';
-    return `    ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule}  ${style.dim(`${where}${key}`)}\n          ${f.message}`;
+    const remedies = remedyLines(f, report.spec).map((r) => `\n          ${style.bold(`${r.label}:`)} ${r.text}`).join('');
+    return `    ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule}  ${style.dim(`${where}${key}`)}\n          ${f.message}${remedies}`;
   })];
+  if (report.remedyTogether) lines.push(`    ${style.bold('together:')} ${togetherText(report.remedyTogether, report.spec)}`);
+  return lines;
 }
 
 /** The readable report of `inspect` for one file. */
@@ -115,7 +121,7 @@ export function renderFileText(report: FileReport, style: TextStyle = PLAIN): st
     lines.push('', `  ${style.bold('Number formats')} ${style.dim(`(positions computed in ${own})`)}`, ...precision);
   }
   lines.push(...section(style, 'Budget', budgetRows(m)));
-  lines.push(...findingLines(style, report.path, report.findings));
+  lines.push(...findingLines(style, report));
   return lines.join('\n');
 }
 

@@ -1,6 +1,6 @@
 import type { FileDecision } from '../compare/decide.js';
 import { memoryAtSpan, usableDeviceBytes } from '../metrics/memory-curve.js';
-import { formatNumber } from '../units.js';
+import { formatInteger, formatNumber } from '../units.js';
 
 const GIB = 1024 ** 3;
 
@@ -59,5 +59,5 @@ export function memoryChart(file: FileDecision): string | null {
     '```',
   ];
   const legend = series.map((s, i) => `${i + 1}. ${s.name}`).join(' · ');
-  return `<details open><summary>Memory against span</summary>\n\n${lines.join('\n')}\n\nLines, in order: ${legend}. Sequences held: base ${base?.spec.serving.sequences ?? 1}, head ${head.spec.serving.sequences ?? 1}.\n\n</details>`;
+  return `<details open><summary>Memory against span</summary>\n\n${lines.join('\n')}\n\nLines, in order: ${legend}. Sequences held: base ${base ? formatInteger(base.spec.serving.sequences ?? 1) : '—'}, head ${formatInteger(head.spec.serving.sequences ?? 1)}.\n\n</details>`;
 }

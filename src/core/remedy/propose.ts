@@ -1,0 +1,344 @@
+/**
+ * For one blocking finding, the nearest change that passes. Each kind of change (a scaling
+ * factor, a served span, a sequence count, a cache dtype, a key/value head count, a rotary base,
+ * a position format) first searches the cheap metrics it moves for the nearest value that clears
+ * the finding, then proves that value: the whole description measured and judged again (see
+ * `prove.ts`). The first kind that proves is the remedy, the other kinds that prove are
+ * alternatives, and when none proves the reasons are given. Searches are bounded: a whole-number
+ * bisection (at most 54 steps), at most `MAX_PROOFS_PER_KIND` full proofs per kind, and the
+ * capped stages of the base search (`rotary-base.ts`).
+ */
+import { checkLimit } from '../compare/decide.js';
+import type { Limit } from '../compare/judging.js';
+import { isMetricPath, metricValue } from '../compare/metric-path.js';
+import { computeMetrics, frequencyPlan } from '../metrics/compute.js';
+import { positionExactLimit } from '../metrics/float-format.js';
+import { servedSequences } from '../metrics/kv-cache.js';
+import { usableDeviceBytes } from '../metrics/memory-curve.js';
+import { scanSimilarityRange, similarityScan } from '../metrics/similarity-scan.js';
+import { positiveCount } from '../metrics/sizes.js';
+import { evaluationSpan, trainedSpan } from '../metrics/spans.js';
+import { bytesPerElement, cacheDType } from '../metrics/storage-bytes.js';
+import type { Finding, FloatFormat, ModelSpec } from '../model.js';
+import { FLOAT_FORMATS, STORAGE_DTYPES } from '../model.js';
+import { isRuleId, RULES } from '../rules/catalog.js';
+import { formatInteger, formatNumber, formatTokens } from '../units.js';
+import { applyChange } from './apply-change.js';
+import { lightMetric, rangeMetrics, budgetMetrics } from './light-metrics.js';
+import { prove, type FindingIdentity, type Proof, type RemedyContext } from './prove.js';
+import { searchRotaryBase, type BaseDirection } from './rotary-base.js';
+import { coveringFactor } from './scaling-factor.js';
+import type { Change, Remedy, RemedyFields } from './types.js';
+import { largestPassing } from './whole-search.js';
+
+/** Full proofs one kind of change may run before it gives up (default: `4`). */
+export const MAX_PROOFS_PER_KIND = 4;
+
+/** The finding a search works on, with the limit it crossed when it is a limit. */
+interface Target extends FindingIdentity {
+  limit: Limit | null;
+  /** The base version's value of the limited metric (for `max-increase-pct`). */
+  baseValue: number | null;
+}
+
+/** One kind's result: a proven remedy, or why there is none. */
+interface KindOutcome {
+  remedy: Remedy | null;
+  whyNot: string | null;
+}
+
+type Resolves = (spec: ModelSpec) => boolean;
+
+const none = (whyNot: string): KindOutcome => ({ remedy: null, whyNot });
+
+/** The value of a metric for a changed spec: cheaply when it needs no scan, else measured in full. */
+function valueOf(spec: ModelSpec, metric: string): number | null {
+  const light = lightMetric(spec, metric);
+  if (light !== undefined) return light;
+  return isMetricPath(metric) ? metricValue(computeMetrics(spec), metric) : null;
+}
+
+/** Whether a changed spec clears the target finding, judged on the metrics it depends on. */
+function resolver(ctx: RemedyContext, target: Target): Resolves | null {
+  switch (target.rule) {
+    case 'span-past-reach':
+      return (spec) => { const h = rangeMetrics(spec).headroom; return h !== null && h >= 0; };
+    case 'span-beyond-scaling-cover':
+    case 'span-grew-code-unchanged':
+      return (spec) => {
+        const r = rangeMetrics(spec);
+        return r.scalingCover !== null && r.declaredSpan !== null && r.scalingCover >= r.declaredSpan;
+      };
+    case 'memory-over-budget':
+      return (spec) => {
+        const usable = usableDeviceBytes(spec);
+        const memory = budgetMetrics(spec).memoryBytes;
+        return usable === null || (memory !== null && memory <= usable);
+      };
+    case 'positions-collide':
+      return (spec) => {
+        const colliding = lightMetric(spec, `precision.${spec.dtypes.positions ?? 'fp32'}.collidingPositions`);
+        return !(typeof colliding === 'number' && colliding > 0);
+      };
+    case 'limit-crossed': {
+      const { limit, metric } = target;
+      if (!limit || !metric) return null;
+      return (spec) => checkLimit(limit, target.baseValue, valueOf(spec, metric)).crossed.length === 0;
+    }
+    default:
+      return null;
+  }
+}
+
+function blockerText(id: string): string {
+  return id.startsWith('limit-crossed:') ? `the ${id.slice('limit-crossed:'.length)} limit` : id;
+}
+
+function describeBlockers(proof: Proof): string {
+  return proof.blockers.map(blockerText).join(', ');
+}
+
+function remedyOf(change: Change, proof: Proof, shown: string[], target: Target): Remedy {
+  const metrics: Record<string, number | null> = {};
+  for (const name of [...(target.metric ? [target.metric] : []), ...shown]) {
+    if (isMetricPath(name) && !(name in metrics)) metrics[name] = metricValue(proof.metrics, name);
+  }
+  return { change, metrics, raises: proof.raises };
+}
+
+/**
+ * Proves candidate changes in order (at most `MAX_PROOFS_PER_KIND`), returning the first that
+ * passes; `what` names the kind in reasons.
+ */
+function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], shown: string[], what: string): KindOutcome {
+  let last: Proof | null = null;
+  const tried = candidates.slice(0, MAX_PROOFS_PER_KIND);
+  for (const change of tried) {
+    const proof = prove(ctx, target, change);
+    if (proof.passes) return { remedy: remedyOf(change, proof, shown, target), whyNot: null };
+    last = proof;
+  }
+  if (last === null) return none(`no ${what} to try`);
+  const capped = candidates.length > tried.length ? ` (stopped after ${tried.length} proofs)` : '';
+  return none(`${what} ${tried.length === 1 ? 'clears it but still blocks' : 'cleared it but each still blocked'} on ${describeBlockers(last)}${capped}`);
+}
+
+// ---- kinds of change -------------------------------------------------------------------------
+
+/**
+ * A scaling factor on the code, adding a linear scaling block when there is none, and stating
+ * the original span when the changed description would otherwise take another trained span.
+ */
+function factorChange(spec: ModelSpec, factor: number, trained: number): Change {
+  const code = spec.position;
+  const change: Change = code.kind === 'rotary' && code.scaling
+    ? { 'position.scaling.factor': factor }
+    : { 'position.scaling.kind': 'linear', 'position.scaling.factor': factor };
+  if (trainedSpan(applyChange(spec, change)) !== trained) change['position.scaling.originalSpan'] = trained;
+  return change;
+}
+
+/** The smallest whole scaling factor (of the kind in use, else linear) with `L0 · f` covering `need`. */
+function factorKind(ctx: RemedyContext, target: Target, resolves: Resolves, trained: number | null, need: number | null): KindOutcome {
+  const spec = ctx.head.spec;
+  const code = spec.position;
+  if (code.kind !== 'rotary') return none(`a ${code.kind} position code has no scaling factor`);
+  if (trained === null || need === null) return none('the trained span or the span to cover is unknown');
+  const f0 = coveringFactor(need, trained);
+  if (f0 === null) return none(`no whole factor covers ${formatTokens(need)} from ${formatTokens(trained)}`);
+  const current = code.scaling ? code.scaling.factor : 1;
+  if (f0 <= current) {
+    return none(`the ${code.scaling ? `${code.scaling.kind} factor ${formatNumber(current)}` : 'code'} already covers ${formatTokens(need)}; state the trained span if the model was tuned at it`);
+  }
+  const candidates: Change[] = [];
+  for (let f = f0; f < f0 + MAX_PROOFS_PER_KIND; f++) {
+    const change = factorChange(spec, f, trained);
+    if (resolves(applyChange(spec, change))) candidates.push(change);
+  }
+  const shown = ['reach', 'scalingCover', 'headroom', 'trainedSpan', 'discriminationSpan', 'exposedPairs',
+    ...(code.scaling?.kind === 'yarn' ? ['attentionScale'] : [])];
+  const kind = code.scaling ? code.scaling.kind : 'linear';
+  return proveFirst(ctx, target, candidates, shown, `a ${kind} factor of ${f0}${candidates.length > 1 ? ' or more' : ''}`);
+}
+
+/** The longest served span that clears the finding. */
+function spanKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const T = evaluationSpan(spec);
+  if (T === null || T < 2) return none('the span is not a whole number above 1');
+  const found = largestPassing(1, T - 1, (t) => resolves(applyChange(spec, { 'serving.span': t })));
+  if (found.value === null) return none(`no served span from 1 to ${formatInteger(T - 1)} tokens clears it`);
+  return proveFirst(ctx, target, [{ 'serving.span': found.value }], ['evaluationSpan', 'headroom', 'memoryBytes', 'fitSequences'],
+    `serving at most ${formatTokens(found.value)} tokens`);
+}
+
+/** The most concurrent sequences that clear the finding. */
+function sequencesKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const current = servedSequences(spec);
+  if (current === null) return none('the sequence count is not a whole number');
+  if (current <= 1) return none('the service already holds one sequence');
+  const found = largestPassing(1, current - 1, (n) => resolves(applyChange(spec, { 'serving.sequences': n })));
+  if (found.value === null) return none(`not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it`);
+  return proveFirst(ctx, target, [{ 'serving.sequences': found.value }], ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'],
+    `${found.value} sequence${found.value === 1 ? '' : 's'}`);
+}
+
+/** The widest cache dtype narrower than the current one that clears the finding. */
+function cacheDtypeKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const current = cacheDType(spec);
+  const bytes = bytesPerElement(current);
+  if (bytes === null) return none(`the cache dtype ${current} is unknown`);
+  const narrower = STORAGE_DTYPES.filter((d) => (bytesPerElement(d) ?? Infinity) < bytes);
+  if (narrower.length === 0) return none(`the cache is already in ${current}, the narrowest dtype`);
+  const candidates = narrower.filter((d) => resolves(applyChange(spec, { 'dtypes.cache': d })))
+    .map((d): Change => ({ 'dtypes.cache': d }));
+  if (candidates.length === 0) return none(`even a ${narrower[narrower.length - 1]} cache does not clear it`);
+  return proveFirst(ctx, target, candidates, ['cachePerTokenBytes', 'memoryBytes', 'fitSequences'],
+    `a ${candidates[0]!['dtypes.cache']} cache`);
+}
+
+/** Divisors of `n` below `below`, largest first (grouped-query attention needs kvHeads to divide heads). */
+function divisorsBelow(n: number, below: number): number[] {
+  const out: number[] = [];
+  for (let d = Math.min(n, below - 1); d >= 1 && out.length < 64; d--) if (n % d === 0) out.push(d);
+  return out;
+}
+
+/** The most key/value heads, a divisor of the heads, that clear the finding. */
+function kvHeadsKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const heads = positiveCount(spec.heads);
+  const kv = positiveCount(spec.kvHeads);
+  if (heads === null || kv === null) return none('heads or key/value heads are not whole numbers');
+  if (kv <= 1) return none('the model already has one key/value head');
+  const candidates = divisorsBelow(heads, kv).filter((d) => resolves(applyChange(spec, { kvHeads: d })))
+    .map((d): Change => ({ kvHeads: d }));
+  if (candidates.length === 0) return none('even one key/value head does not clear it');
+  return proveFirst(ctx, target, candidates, ['cachePerTokenBytes', 'weightBytes', 'memoryBytes', 'fitSequences'],
+    `${candidates[0]!.kvHeads} key/value heads (a retraining-level change)`);
+}
+
+/** The narrowest position format with every position in the span distinct. */
+function formatKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const current = spec.dtypes.positions ?? 'fp32';
+  const order = [...FLOAT_FORMATS].sort((a, b) => positionExactLimit(a) - positionExactLimit(b));
+  const candidates = order.filter((f) => f !== current && resolves(applyChange(spec, { 'dtypes.positions': f })))
+    .map((f): Change => ({ 'dtypes.positions': f }));
+  if (candidates.length === 0) {
+    return none(`no format keeps every position of ${formatTokens(evaluationSpan(spec))} distinct (fp32 holds every whole number up to ${formatInteger(positionExactLimit('fp32'))})`);
+  }
+  const format = candidates[0]!['dtypes.positions'] as FloatFormat;
+  return proveFirst(ctx, target, candidates, [`precision.${format}.collidingPositions`, `precision.${format}.angleErrorMax`],
+    `positions in ${format}`);
+}
+
+/** Which way the base must move for the crossed bound of a discrimination or separation limit. */
+function baseDirection(metric: string, limit: Limit, value: number | null): BaseDirection | null {
+  if (value === null) return null;
+  const below = limit.min !== undefined && value < limit.min;
+  // A larger base turns slower: far offsets stay positive longer, but neighbours separate less.
+  if (metric === 'discriminationSpan') return below ? 'up' : 'down';
+  if (metric === 'separationFloor') return below ? 'down' : 'up';
+  return null;
+}
+
+/** The nearest rotary base (two significant digits) that clears a discrimination or separation limit. */
+function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
+  const spec = ctx.head.spec;
+  const code = spec.position;
+  const { metric, limit } = target;
+  if (code.kind !== 'rotary') return none(`a ${code.kind} position code has no base to change`);
+  if (!metric || !limit) return none('no limit to meet');
+  const T = evaluationSpan(spec);
+  const L0 = trainedSpan(spec);
+  const direction = baseDirection(metric, limit, metricValue(ctx.head.metrics, metric as 'discriminationSpan'));
+  if (T === null || direction === null) return none('the span or the current value is unknown');
+  const scaledAt = (base: number) => frequencyPlan(applyChange(spec, { 'position.base': base }), T, L0)?.scaled ?? null;
+  // discriminationSpan >= min: no negative sum before min(T, min), so only that far is scanned.
+  const onlyMin = metric === 'discriminationSpan' && direction === 'up' && limit.max === undefined && limit.maxIncreasePct === undefined;
+  const passes = (base: number): boolean => {
+    const theta = scaledAt(base);
+    if (theta === null) return false;
+    if (onlyMin) {
+      const end = Math.min(T, Math.ceil(limit.min as number));
+      return end <= 1 || scanSimilarityRange(theta, 1, end)?.negative === null;
+    }
+    const value = similarityScan(theta, T)[metric as 'discriminationSpan' | 'separationFloor'];
+    return checkLimit(limit, target.baseValue, value).crossed.length === 0;
+  };
+  const search = searchRotaryBase(code.base, direction, passes);
+  if (search.base === null) {
+    return none(`no rotary base ${direction === 'up' ? 'above' : 'below'} ${formatNumber(code.base, 6)} meets the ${metric} limit within the search's caps (${search.evaluations} scans)`);
+  }
+  return proveFirst(ctx, target, [{ 'position.base': search.base }], ['discriminationSpan', 'separationFloor', 'unturnedPairs', 'slowestWavelength'],
+    `a rotary base of ${formatNumber(search.base, 6)} (a retraining-level change)`);
+}
+
+// ---- which kinds for which finding -----------------------------------------------------------
+
+type Kind = (ctx: RemedyContext, target: Target, resolves: Resolves) => KindOutcome;
+
+function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
+  const spec = ctx.head.spec;
+  const range = rangeMetrics(spec);
+  const T = range.evaluationSpan;
+  const memory = [sequencesKind, cacheDtypeKind, kvHeadsKind, spanKind];
+  switch (target.rule) {
+    case 'span-past-reach':
+      return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T), spanKind];
+    case 'span-beyond-scaling-cover':
+      return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, range.declaredSpan)];
+    case 'span-grew-code-unchanged':
+      // The trained span is the base's: the head's own is only its (grown) declared span.
+      return [(c, t, r) => factorKind(c, t, r, ctx.base?.metrics.trainedSpan ?? null, range.declaredSpan)];
+    case 'memory-over-budget':
+      return memory;
+    case 'positions-collide':
+      return [formatKind, spanKind];
+    case 'limit-crossed': {
+      const metric = target.metric ?? '';
+      const limit = target.limit;
+      if (!limit) return `the policy has no limit on ${metric}`;
+      if (metric === 'discriminationSpan' || metric === 'separationFloor') return [(c, t) => baseKind(c, t)];
+      if (metric === 'memoryBytes' || metric === 'cacheBytesAtSpan') return memory;
+      if (metric === 'fitSequences') return [cacheDtypeKind, kvHeadsKind, spanKind];
+      if (metric === 'cachePerTokenBytes') return [cacheDtypeKind, kvHeadsKind];
+      if (metric === 'headroom' && limit.min !== undefined && T !== null) {
+        return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T + Math.max(0, Math.ceil(limit.min as number))), spanKind];
+      }
+      if (metric === 'reach' && limit.min !== undefined) {
+        return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, Math.ceil(limit.min as number))];
+      }
+      if (/^precision\.(fp32|bf16|fp16)\.collidingPositions$/.test(metric)) return [spanKind];
+      return `no remedy is searched for a limit on ${metric}: remedies cover spans and reach, rotary discrimination and separation, memory, and colliding positions`;
+    }
+    default: {
+      const help = isRuleId(target.rule) ? ` ${RULES[target.rule].help}` : '';
+      return `no remedy is searched for ${target.rule}: the value itself must be corrected, as the message says.${help}`;
+    }
+  }
+}
+
+/**
+ * The remedy of one blocking finding of `ctx`'s head: the first kind of change that proves, the
+ * other kinds that prove as alternatives, or why none does.
+ */
+export function proposeRemedy(ctx: RemedyContext, finding: Finding & { metric?: string }): RemedyFields {
+  const metric = finding.metric;
+  const limit = finding.rule === 'limit-crossed' && metric ? ctx.judging.limits[metric] ?? null : null;
+  const baseValue = metric && ctx.base && isMetricPath(metric) ? metricValue(ctx.base.metrics, metric) : null;
+  const target: Target = { rule: finding.rule, ...(metric ? { metric } : {}), limit, baseValue };
+  const kinds = kindsFor(ctx, target);
+  if (typeof kinds === 'string') return { remedy: null, remedyWhyNot: kinds, remedyAlternatives: [] };
+  const resolves = resolver(ctx, target);
+  if (resolves === null) return { remedy: null, remedyWhyNot: `no remedy is searched for ${finding.rule}`, remedyAlternatives: [] };
+  const outcomes = kinds.map((kind) => kind(ctx, target, resolves));
+  const proven = outcomes.filter((o) => o.remedy !== null).map((o) => o.remedy as Remedy);
+  if (proven.length === 0) {
+    return { remedy: null, remedyWhyNot: `No change found that passes: ${outcomes.map((o) => o.whyNot).join('; ')}.`, remedyAlternatives: [] };
+  }
+  return { remedy: proven[0]!, remedyWhyNot: null, remedyAlternatives: proven.slice(1) };
+}

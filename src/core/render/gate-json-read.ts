@@ -1,0 +1,212 @@
+/**
+ * Reading back the JSON report `renderGateJson` writes, so a second, privileged workflow can
+ * publish what a first, unprivileged one decided. That file is untrusted: on a pull request from
+ * a fork, the fork's own workflow wrote it. It is checked field by field against the report's
+ * shape (every enum, every number, every line), fields the renderers do not know are dropped,
+ * the verdict and the counts must follow from the findings, and the comment rendered from it
+ * escapes every text again, as for any report.
+ */
+import { Ajv } from 'ajv';
+import type { ErrorObject, ValidateFunction } from 'ajv';
+import type { GateReport, JudgedFinding, Verdict } from '../compare/decide.js';
+import { METRIC_PATHS } from '../compare/metric-path.js';
+import { FLOAT_FORMATS, POSITION_KINDS, SCALING_KINDS, SEVERITIES, STORAGE_DTYPES } from '../model.js';
+import type { ModelSpec } from '../model.js';
+import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
+import type { Metrics } from '../metrics/types.js';
+import { ReadError } from '../parse/errors.js';
+
+/** Longest report read back, in UTF-16 code units (default: `67108864`, 64 Mi). */
+export const MAX_REPORT_CHARS = 64 * 1024 * 1024;
+
+type Schema = Record<string, unknown>;
+
+const numberOrNull: Schema = { type: ['number', 'null'] };
+const count: Schema = { type: 'integer', minimum: 0 };
+const text: Schema = { type: 'string' };
+const textOrNull: Schema = { type: ['string', 'null'] };
+const lineOrNull: Schema = { type: ['integer', 'null'], minimum: 1 };
+const severity: Schema = { enum: [...SEVERITIES] };
+
+/** An object whose listed properties are all required (mapped from name to schema). */
+function record(properties: Record<string, Schema>, nullable = false, optional: string[] = []): Schema {
+  return {
+    type: nullable ? ['object', 'null'] : 'object',
+    properties,
+    required: Object.keys(properties).filter((name) => !optional.includes(name)),
+  };
+}
+
+const numbers = (names: readonly string[]): Record<string, Schema> => Object.fromEntries(names.map((name) => [name, numberOrNull]));
+
+const precision = record(numbers(PRECISION_METRICS));
+
+const metrics = record({
+  ...numbers(SCALAR_METRICS),
+  alibiSlopes: { type: ['array', 'null'], items: { type: 'number' } },
+  precision: record(Object.fromEntries(FLOAT_FORMATS.map((format) => [format, precision]))),
+});
+
+const spec = record({
+  name: textOrNull,
+  ...numbers(['layers', 'hidden', 'heads', 'kvHeads', 'headDim', 'ffn', 'vocab', 'declaredSpan', 'trainedSpan',
+    'slidingWindow', 'windowLayers', 'embeddingInitStd', 'embeddingMultiplier']),
+  gated: { type: 'boolean' },
+  tied: { type: 'boolean' },
+  bias: { type: 'boolean' },
+  experts: record(numbers(['total', 'active']), true),
+  encoder: record(numbers(['layers', 'heads', 'kvHeads', 'headDim', 'ffn']), true),
+  position: {
+    ...record({
+      kind: { enum: [...POSITION_KINDS] },
+      base: numberOrNull,
+      fraction: numberOrNull,
+      scaling: record({ kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high']) }, true),
+    }, false, ['base', 'fraction', 'scaling']),
+    if: { properties: { kind: { const: 'rotary' } } },
+    then: { required: ['base', 'fraction', 'scaling'] },
+  },
+  dtypes: record({
+    weights: { enum: [...STORAGE_DTYPES, null] },
+    cache: { enum: [...STORAGE_DTYPES, null] },
+    positions: { enum: [...FLOAT_FORMATS, null] },
+  }),
+  serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens'])),
+});
+
+const version = record({ spec, metrics }, true);
+
+const failure = record({ path: text, line: lineOrNull, message: text, notAModel: { type: 'boolean' } }, true, ['notAModel']);
+
+const limit = record({ max: { type: 'number' }, min: { type: 'number' }, maxIncreasePct: { type: 'number' }, severity }, true, ['max', 'min', 'maxIncreasePct']);
+
+const delta = record({
+  metric: { enum: [...METRIC_PATHS] },
+  base: numberOrNull, head: numberOrNull, change: numberOrNull, changePct: numberOrNull,
+  limit,
+  state: { enum: ['ok', 'crossed', 'unjudged'] },
+});
+
+const finding = record({
+  rule: text, severity, message: text, key: textOrNull, line: lineOrNull,
+  standing: { type: 'boolean' }, counts: { enum: [...SEVERITIES, null] }, waived: { type: 'boolean' }, file: text,
+});
+
+const verdict: Schema = { enum: ['ok', 'warn', 'block'] };
+const status: Schema = { enum: ['added', 'modified', 'renamed', 'deleted'] };
+
+const file = record({
+  path: text, previousPath: textOrNull, status, dialect: { enum: ['context-reach', 'checkpoint', null] }, verdict,
+  deltas: { type: 'array', items: delta },
+  findings: { type: 'array', items: finding },
+  base: version, head: version, baseError: failure, headError: failure,
+});
+
+/** The JSON Schema of the report `renderGateJson` writes (version 1). */
+export const GATE_JSON_SCHEMA: Readonly<Schema> = {
+  ...record({
+    version: { const: 1 },
+    verdict, blocking: count, warnings: count,
+    base: text, head: text,
+    policy: record({ source: { enum: ['file', 'built-in'] }, path: text, changedInHead: { type: 'boolean' } }),
+    waiver: record({ label: textOrNull, applied: { type: 'boolean' }, waivedBlocks: count }),
+    notices: { type: 'array', items: text },
+    deleted: { type: 'array', items: record({ status, path: text, previousPath: textOrNull }) },
+    files: { type: 'array', items: file },
+  }),
+};
+
+let compiled: ValidateFunction | null = null;
+
+function validator(): ValidateFunction {
+  // removeAdditional: fields the renderers do not know never travel on, whatever they hold.
+  compiled ??= new Ajv({ strict: true, allowUnionTypes: true, removeAdditional: 'all', allErrors: false }).compile(GATE_JSON_SCHEMA);
+  return compiled;
+}
+
+function describe(error: ErrorObject, root: unknown): string {
+  let value: unknown = root;
+  for (const part of error.instancePath.split('/').slice(1)) {
+    value = value !== null && typeof value === 'object' ? (value as Record<string, unknown>)[part.replace(/~1/g, '/').replace(/~0/g, '~')] : undefined;
+  }
+  const shown = JSON.stringify(value) ?? 'nothing';
+  const quoted = shown.length > 60 ? `${shown.slice(0, 57)}...` : shown;
+  const where = error.instancePath === '' ? 'the top level' : error.instancePath;
+  const expected = error.keyword === 'required' ? `a field ${JSON.stringify((error.params as { missingProperty: string }).missingProperty)}`
+    : error.keyword === 'enum' ? `one of ${(error.params as { allowedValues: unknown[] }).allowedValues.map((v) => JSON.stringify(v)).join(', ')}`
+      : error.message ?? error.keyword;
+  return `${where} is ${quoted}; expected ${expected}`;
+}
+
+function verdictOf(findings: readonly JudgedFinding[]): Verdict {
+  if (findings.some((f) => f.counts === 'block')) return 'block';
+  if (findings.some((f) => f.counts === 'warn')) return 'warn';
+  return 'ok';
+}
+
+/** Numbers the spec types as always present were NaN when written; JSON wrote them as null. */
+function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) return value;
+  const out: Record<string, unknown> = Object.create(null);
+  for (const [key, entry] of Object.entries(value)) {
+    out[key] = entry === null && !nullable.has(key) ? NaN : restoreNaN(entry, nullable);
+  }
+  return out;
+}
+
+/** Spec fields that are null by design ("not stated"); every other null was a NaN. */
+const NULLABLE_SPEC_FIELDS = new Set([
+  'name', 'experts', 'encoder', 'scaling', 'originalSpan', 'trainedSpan', 'slidingWindow', 'windowLayers',
+  'weights', 'cache', 'positions', 'embeddingInitStd', 'embeddingMultiplier',
+  'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens',
+]);
+
+/**
+ * The gate report in `text` (what `renderGateJson` writes), checked as untrusted input from
+ * `file`. Throws `ReadError` naming the file, the line for JSON syntax, and the first field that
+ * does not fit (its JSON pointer, the value, what was expected).
+ */
+export function readGateJson(text: string, file: string): GateReport {
+  if (text.length > MAX_REPORT_CHARS) {
+    throw new ReadError(file, null, `is ${text.length} characters long; a report is read up to ${MAX_REPORT_CHARS}`);
+  }
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    const at = /position (\d+)/.exec(message);
+    const line = at ? text.slice(0, Number(at[1])).split('\n').length : null;
+    throw new ReadError(file, line, `is not a JSON report: ${message.replace(/ in JSON at position \d+.*$/s, '')}`);
+  }
+  const validate = validator();
+  if (!validate(value)) {
+    throw new ReadError(file, null, `is not a context-reach report of version 1: ${describe(validate.errors![0]!, value)}`);
+  }
+  const report = value as GateReport;
+  for (const [index, decision] of report.files.entries()) {
+    for (const side of ['base', 'head'] as const) {
+      const read = decision[side] as unknown as { spec: unknown; metrics: Metrics } | null;
+      decision[side] = read === null ? null : {
+        path: decision.path, dialect: decision.dialect ?? 'checkpoint', locations: {}, findings: [],
+        spec: restoreNaN(read.spec, NULLABLE_SPEC_FIELDS) as ModelSpec, metrics: read.metrics,
+      };
+    }
+    if (decision.verdict !== verdictOf(decision.findings)) {
+      throw new ReadError(file, null, `/files/${index}/verdict is "${decision.verdict}" but its findings make it "${verdictOf(decision.findings)}"; the report was altered`);
+    }
+  }
+  const all = report.files.flatMap((decision) => decision.findings);
+  const expected: Record<'verdict' | 'blocking' | 'warnings' | 'waivedBlocks', string | number> = {
+    verdict: verdictOf(all), blocking: all.filter((f) => f.counts === 'block').length, warnings: all.filter((f) => f.counts === 'warn').length, waivedBlocks: 0,
+  };
+  expected.waivedBlocks = all.filter((f) => f.waived).length;
+  for (const key of ['verdict', 'blocking', 'warnings', 'waivedBlocks'] as const) {
+    const stated = key === 'waivedBlocks' ? report.waiver.waivedBlocks : report[key];
+    const path = key === 'waivedBlocks' ? '/waiver/waivedBlocks' : `/${key}`;
+    if (stated !== expected[key]) {
+      throw new ReadError(file, null, `${path} is ${JSON.stringify(stated)} but the findings make it ${JSON.stringify(expected[key])}; the report was altered`);
+    }
+  }
+  return report;
+}

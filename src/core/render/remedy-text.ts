@@ -1,0 +1,85 @@
+/**
+ * Remedies in words, the same in every report: which field changes from what to what, and the
+ * metric values the change would produce. Plain text; the markdown and HTML renderers escape it.
+ */
+import type { MetricPath } from '../metrics/types.js';
+import type { LocationMap, ModelSpec } from '../model.js';
+import { changeEntries, currentValue } from '../remedy/apply-change.js';
+import type { ChangeValue, CombinedRemedy, Remedy, RemedyFields } from '../remedy/types.js';
+import { formatInteger, formatNumber, formatTokens } from '../units.js';
+import { formatMetric } from './metric-format.js';
+
+const TOKEN_KEYS = new Set(['serving.span', 'position.scaling.originalSpan']);
+
+/** A change value in the unit people read it in. */
+export function formatChangeValue(key: string, value: ChangeValue | null): string {
+  if (value === null) return 'not set';
+  if (typeof value === 'string') return value;
+  if (TOKEN_KEYS.has(key)) return formatTokens(value);
+  if (key === 'position.base') return formatNumber(value, 6);
+  if (Number.isInteger(value)) return formatInteger(value);
+  return formatNumber(value, 6);
+}
+
+/** One field of a change: `key: before → after` (before from `spec`, when known). */
+export interface ChangePart {
+  key: string;
+  before: string | null;
+  after: string;
+  /** Where the value is set now: `line 20` in the file, or the policy or flag that set it (default: `null`, not stated). */
+  at: string | null;
+}
+
+export function changeParts(change: Remedy['change'], spec: ModelSpec | null, locations: LocationMap | null = null): ChangePart[] {
+  return changeEntries(change).map(([key, value]) => {
+    const before = spec ? currentValue(spec, key) : null;
+    const loc = locations?.[key === 'position.scaling.kind' ? 'position.scaling' : key] ?? locations?.[key];
+    const at = !loc ? null : loc.line !== null ? `line ${loc.line}` : `set by ${loc.key}`;
+    return { key, before: spec ? formatChangeValue(key, before) : null, after: formatChangeValue(key, value), at };
+  });
+}
+
+/** `position.scaling.factor 4 → 8, serving.sequences 8 → 5`. */
+export function changeText(change: Remedy['change'], spec: ModelSpec | null): string {
+  return changeParts(change, spec).map((p) => (p.before === null ? `${p.key} = ${p.after}` : `${p.key} ${p.before} → ${p.after}`)).join(', ');
+}
+
+/** One metric after a change. */
+export interface MetricPart {
+  metric: string;
+  value: string;
+}
+
+export function metricParts(metrics: Remedy['metrics']): MetricPart[] {
+  return Object.entries(metrics).map(([metric, value]) => ({ metric, value: value === null && metric === 'discriminationSpan' ? 'none within the span' : formatMetric(metric as MetricPath, value) }));
+}
+
+/** `reach 262,144 (256k), headroom 0`. */
+export function metricsText(metrics: Remedy['metrics']): string {
+  return metricParts(metrics).map((p) => `${p.metric} ${p.value}`).join(', ');
+}
+
+/** `position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k), headroom 0 (also raises frequencies-changed)`. */
+export function remedyText(remedy: Remedy, spec: ModelSpec | null): string {
+  const raises = remedy.raises.length > 0 ? ` (also raises ${remedy.raises.join(', ')})` : '';
+  return `${changeText(remedy.change, spec)} ⇒ ${metricsText(remedy.metrics)}${raises}`;
+}
+
+/** Lines for one finding: the remedy, each alternative, or why there is none; empty for findings without remedy fields. */
+export function remedyLines(fields: Partial<RemedyFields>, spec: ModelSpec | null): { label: 'remedy' | 'or' | 'no remedy'; text: string }[] {
+  if (fields.remedy === undefined) return [];
+  if (fields.remedy === null) return [{ label: 'no remedy', text: fields.remedyWhyNot ?? 'none found' }];
+  return [
+    { label: 'remedy', text: remedyText(fields.remedy, spec) },
+    ...(fields.remedyAlternatives ?? []).map((r) => ({ label: 'or' as const, text: remedyText(r, spec) })),
+  ];
+}
+
+/** `All remedies together (a, b) pass` or what still blocks. */
+export function togetherText(together: CombinedRemedy, spec: ModelSpec | null): string {
+  const verdict = together.passes ? 'pass: nothing blocks' : `still block on ${together.stillBlocking.join(', ')}`;
+  return `All first remedies together (${changeText(together.change, spec)}) ${verdict} ⇒ ${metricsText(together.metrics)}`;
+}
+
+/** Said once wherever remedies are shown. */
+export const REMEDY_NOTE = 'Each remedy was applied to the description, measured and judged again by the same rules and limits before it is shown.';
