@@ -55,6 +55,11 @@ describe('the project\'s documents', () => {
     expect(METRIC_PATHS.length).toBe(SCALAR_METRICS.length + 15);
   });
 
+  it('documents every rule id in the README\'s rules table', () => {
+    const readme = read('README.md');
+    for (const id of Object.keys(core.RULES)) expect(readme, id).toContain(`\`${id}\``);
+  });
+
   it('has the two-command quick start at the top of the README', () => {
     const readme = read('README.md');
     const quick = readme.slice(readme.indexOf('## Quick start'), readme.indexOf('## Quick start') + 600);

@@ -6,6 +6,7 @@ import type { MetricPath } from '../metrics/types.js';
 import { RULES, isRuleId } from '../rules/catalog.js';
 import { SEVERITY_ORDER } from '../severity.js';
 import { formatInteger, formatNumber, percentChange } from '../units.js';
+import { formatMetric } from '../render/metric-format.js';
 import type { Judging, Limit } from './judging.js';
 import { METRIC_PATHS, METRIC_SOURCES, metricValue } from './metric-path.js';
 import type { CombinedRemedy, RemedyFields } from '../remedy/types.js';
@@ -157,9 +158,17 @@ export function changeFindings(base: FileReport, head: FileReport): Finding[] {
   }
   if (b.cachePerTokenBytes !== null && h.cachePerTokenBytes !== null && b.cachePerTokenBytes !== h.cachePerTokenBytes) {
     const pct = percentChange(b.cachePerTokenBytes, h.cachePerTokenBytes);
+    const cacheOf = (spec: ModelSpec) => spec.dtypes.cache ?? spec.dtypes.weights ?? 'bf16';
+    const causes = [
+      base.spec.kvHeads !== head.spec.kvHeads && `key/value heads ${base.spec.kvHeads} → ${head.spec.kvHeads}`,
+      base.spec.headDim !== head.spec.headDim && `head size ${base.spec.headDim} → ${head.spec.headDim}`,
+      cacheOf(base.spec) !== cacheOf(head.spec) && `cache dtype ${cacheOf(base.spec)} → ${cacheOf(head.spec)}`,
+      base.spec.layers !== head.spec.layers && `layers ${base.spec.layers} → ${head.spec.layers}`,
+      JSON.stringify([base.spec.slidingWindow, base.spec.windowLayers]) !== JSON.stringify([head.spec.slidingWindow, head.spec.windowLayers]) && 'sliding window',
+    ].filter(Boolean).join(', ');
     findings.push({
       rule: 'cache-per-token-changed', severity: RULES['cache-per-token-changed'].severity,
-      message: `Key/value cache per token changed from ${formatInteger(b.cachePerTokenBytes)} to ${formatInteger(h.cachePerTokenBytes)} bytes (${pct === null ? 'n/a' : `${pct > 0 ? '+' : ''}${formatNumber(pct, 3)} %`}): key/value heads ${base.spec.kvHeads} → ${head.spec.kvHeads}, head size ${base.spec.headDim} → ${head.spec.headDim}, cache ${base.spec.dtypes.cache ?? base.spec.dtypes.weights ?? 'bf16'} → ${head.spec.dtypes.cache ?? head.spec.dtypes.weights ?? 'bf16'}.`,
+      message: `Key/value cache per token changed from ${formatInteger(b.cachePerTokenBytes)} to ${formatInteger(h.cachePerTokenBytes)} bytes (${pct === null ? 'n/a' : `${pct > 0 ? '+' : '−'}${formatNumber(Math.abs(pct), 3)} %`})${causes ? `: ${causes}` : ''}.`,
       ...at('kvHeads', 'dtypes.cache', 'headDim'),
     });
   }
@@ -167,12 +176,12 @@ export function changeFindings(base: FileReport, head: FileReport): Finding[] {
 }
 
 /** Which bounds of `limit` the head value (and its change over base) crosses, and whether any was judged. */
-export function checkLimit(limit: Limit, base: number | null, head: number | null): { crossed: string[]; judged: boolean } {
+export function checkLimit(limit: Limit, base: number | null, head: number | null, metric: MetricPath | null = null): { crossed: string[]; judged: boolean } {
   const crossed: string[] = [];
   let judged = false;
   if (head !== null) {
-    if (limit.max !== undefined) { judged = true; if (head > limit.max) crossed.push(`above the maximum ${formatNumber(limit.max, 6)}`); }
-    if (limit.min !== undefined) { judged = true; if (head < limit.min) crossed.push(`below the minimum ${formatNumber(limit.min, 6)}`); }
+    if (limit.max !== undefined) { judged = true; if (head > limit.max) crossed.push(`above the maximum ${(metric ? formatMetric(metric, limit.max) : formatNumber(limit.max, 6))}`); }
+    if (limit.min !== undefined) { judged = true; if (head < limit.min) crossed.push(`below the minimum ${(metric ? formatMetric(metric, limit.min) : formatNumber(limit.min, 6))}`); }
   }
   if (limit.maxIncreasePct !== undefined && base !== null && head !== null) {
     const pct = percentChange(base, head);
@@ -194,12 +203,12 @@ function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judgi
     const change = b !== null && h !== null ? h - b : null;
     let state: LimitState = 'unjudged';
     if (limit) {
-      const { crossed, judged } = checkLimit(limit, b, h);
+      const { crossed, judged } = checkLimit(limit, b, h, metric);
       state = crossed.length > 0 ? 'crossed' : judged ? 'ok' : 'unjudged';
       if (crossed.length > 0) {
         findings.push({
           rule: 'limit-crossed', severity: limit.severity,
-          message: `${metric} is ${formatNumber(h, 6)}${b !== null && b !== h ? ` (base ${formatNumber(b, 6)})` : ''}: ${crossed.join('; ')}.`,
+          message: `${metric} is ${formatMetric(metric, h)}${b !== null && b !== h ? ` (base ${formatMetric(metric, b)})` : ''}: ${crossed.join('; ')}.`,
           ...locate(head.locations, METRIC_SOURCES[metric.startsWith('precision.') ? 'collidingPositions' : metric] ?? ['serving.span', 'declaredSpan']),
           metric,
         });
