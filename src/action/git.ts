@@ -51,8 +51,20 @@ export interface GitReader {
    * (symlink, submodule, directory). Throws `ContentTooLargeError` past `MAX_CONFIG_BYTES`.
    */
   show(commit: string, path: string): Promise<Uint8Array | null>;
+  /**
+   * What `show` gives for each request, in order, with an `Error` in place of a throw; a few git
+   * processes for all of them (one tree listing per commit and one `cat-file --batch`), not
+   * three per file.
+   */
+  showMany(requests: readonly BlobRequest[]): Promise<(Uint8Array | null | Error)[]>;
   /** Best common ancestor of two commits, or null when they share none. */
   mergeBase(a: string, b: string): Promise<string | null>;
+}
+
+/** One file to read at one commit. */
+export interface BlobRequest {
+  commit: string;
+  path: string;
 }
 
 export interface GitReaderOptions {
@@ -89,7 +101,7 @@ function checkPath(path: string): string {
 
 const KINDS: Record<string, TreeEntryKind> = { blob: 'file', tree: 'directory', commit: 'submodule' };
 
-type Run = (args: string[], maxBuffer: number) => Promise<RunResult>;
+type Run = (args: string[], maxBuffer: number, input?: string) => Promise<RunResult>;
 
 /** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
 /** The git command of an argument list (`commit` in `-c user.name=x commit -m y`), for messages. */
@@ -98,11 +110,11 @@ function verb(args: readonly string[]): string {
 }
 
 function runner(cwd: string, git: string, timeout: number): Run {
-  return function run(args, maxBuffer) {
+  return function run(args, maxBuffer, input) {
     // The checkout's own settings stay, but nothing may prompt or run a file-system monitor.
     const full = ['-c', 'core.fsmonitor=false', '-c', 'core.quotePath=false', ...args];
     return new Promise((resolve, reject) => {
-      execFile(git, full, {
+      const child = execFile(git, full, {
         cwd,
         encoding: 'buffer',
         maxBuffer,
@@ -126,6 +138,11 @@ function runner(cwd: string, git: string, timeout: number): Run {
           reject(new GitError(`git could not be started (${failure.code ?? failure.message}); expected a git executable at ${JSON.stringify(git)}`, args, null, errText));
         }
       });
+      if (input !== undefined) {
+        // A git that exits before reading all of it closes the pipe; its exit status says why.
+        child.stdin?.on('error', () => {});
+        child.stdin?.end(input);
+      }
     });
   };
 }
@@ -175,6 +192,105 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     return null;
   }
 
+  /**
+   * Tree entries with their sizes for many paths of one commit, one `ls-tree` per chunk of paths.
+   * `--literal-pathspecs` keeps `*`, `[` and `:` in names literal and `--full-tree` makes paths
+   * repository-relative; a pathspec never descends through a symlink or a file, and names are
+   * compared exactly after listing, as `entry` does.
+   */
+  async function listEntries(commit: string, paths: string[]): Promise<Map<string, SizedEntry> | null> {
+    const listed = new Map<string, SizedEntry>();
+    for (const chunk of pathChunks(paths)) {
+      const args = ['--literal-pathspecs', 'ls-tree', '-z', '-l', '--full-tree', commit, '--', ...chunk];
+      const result = await run(args, maxList);
+      if (result.code !== 0) {
+        if (/not a tree object|Not a valid object name|does not exist|bad revision/i.test(result.stderr)) return null;
+        throw failed(args, result);
+      }
+      for (const record of result.stdout.toString('utf8').split('\u0000')) {
+        const tab = record.indexOf('\t');
+        if (tab < 0) continue;
+        const [mode = '', type = '', oid = '', size = ''] = record.slice(0, tab).split(/ +/);
+        const kind: TreeEntryKind = mode === '120000' ? 'symlink' : KINDS[type] ?? 'file';
+        listed.set(record.slice(tab + 1), { kind, mode, oid, size: size === '-' ? null : Number(size) });
+      }
+    }
+    return listed;
+  }
+
+  /** Blob bytes by object id, from `cat-file --batch` calls of at most `BATCH_BYTES` each. */
+  async function readBlobs(blobs: Map<string, number>): Promise<Map<string, Uint8Array | Error>> {
+    const read = new Map<string, Uint8Array | Error>();
+    let batch: string[] = [];
+    let bytes = 0;
+    const flush = async () => {
+      if (batch.length === 0) return;
+      const oids = batch;
+      // Each answer is `<oid> blob <size>\n<bytes>\n`; the sizes are known, so the bound is exact.
+      const bound = oids.reduce((sum, oid) => sum + blobs.get(oid)! + oid.length + 32, 0);
+      batch = [];
+      bytes = 0;
+      const args = ['cat-file', '--batch'];
+      try {
+        const result = await run(args, bound, `${oids.join('\n')}\n`);
+        if (result.code !== 0) throw failed(args, result);
+        parseBatch(result.stdout, oids, read, maxFile);
+      } catch (error) {
+        for (const oid of oids) if (!read.has(oid)) read.set(oid, error instanceof Error ? error : new Error(String(error)));
+      }
+    };
+    for (const [oid, size] of blobs) {
+      if (bytes + size > BATCH_BYTES) await flush();
+      batch.push(oid);
+      bytes += size;
+    }
+    await flush();
+    return read;
+  }
+
+  async function showMany(requests: readonly BlobRequest[]): Promise<(Uint8Array | null | Error)[]> {
+    const answers: (Uint8Array | null | Error)[] = requests.map(() => null);
+    const byCommit = new Map<string, number[]>();
+    requests.forEach((request, i) => {
+      try {
+        checkRevision(request.commit);
+        checkPath(request.path);
+      } catch (error) {
+        answers[i] = error as Error;
+        return;
+      }
+      const group = byCommit.get(request.commit);
+      if (group) group.push(i);
+      else byCommit.set(request.commit, [i]);
+    });
+    const wanted = new Map<number, string>();
+    const blobs = new Map<string, number>();
+    for (const [commit, indexes] of byCommit) {
+      let listed: Map<string, SizedEntry> | null;
+      try {
+        listed = await listEntries(commit, [...new Set(indexes.map((i) => requests[i]!.path))]);
+      } catch (error) {
+        for (const i of indexes) answers[i] = error as Error;
+        continue;
+      }
+      for (const i of indexes) {
+        const path = requests[i]!.path;
+        const found = listed?.get(path);
+        // Absent, a symlink, a submodule or a directory: not a regular file, never followed.
+        if (found === undefined || found.kind !== 'file') continue;
+        if (found.size === null || !Number.isSafeInteger(found.size) || found.size > maxFile) {
+          answers[i] = new ContentTooLargeError(path, found.size ?? Number.NaN, maxFile);
+          continue;
+        }
+        wanted.set(i, found.oid);
+        blobs.set(found.oid, found.size);
+      }
+    }
+    const read = await readBlobs(blobs);
+    for (const [i, oid] of wanted) answers[i] = read.get(oid) ?? new GitError(`git cat-file --batch gave nothing for ${oid}; expected the blob of ${requests[i]!.path}`, ['cat-file', '--batch'], null, '');
+    return answers;
+  }
+
   return {
     async hasCommit(rev) {
       return (await resolveCommit(rev)) !== null;
@@ -188,18 +304,11 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     },
     entry,
     async show(commit, path) {
-      const found = await entry(commit, path);
-      if (found === null || found.kind !== 'file') return null;
-      const sizeArgs = ['cat-file', '-s', found.oid];
-      const sized = await run(sizeArgs, 4096);
-      if (sized.code !== 0) throw failed(sizeArgs, sized);
-      const size = Number(sized.stdout.toString('utf8').trim());
-      if (!Number.isSafeInteger(size) || size > maxFile) throw new ContentTooLargeError(path, size, maxFile);
-      const blobArgs = ['cat-file', 'blob', found.oid];
-      const blob = await run(blobArgs, maxFile + 1);
-      if (blob.code !== 0) throw failed(blobArgs, blob);
-      return new Uint8Array(blob.stdout.buffer, blob.stdout.byteOffset, blob.stdout.byteLength);
+      const [answer] = await showMany([{ commit, path }]);
+      if (answer instanceof Error) throw answer;
+      return answer ?? null;
     },
+    showMany,
     async mergeBase(a, b) {
       const args = ['merge-base', checkRevision(a), checkRevision(b)];
       const result = await run(args, 4096);
@@ -208,6 +317,60 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
       throw failed(args, result);
     },
   };
+}
+
+/** A tree entry with the blob size `ls-tree -l` prints (null for trees and submodules). */
+interface SizedEntry extends TreeEntry {
+  size: number | null;
+}
+
+/** Paths per `ls-tree` call, and characters of them: command lines stay far below Windows' 32,767. */
+const PATHS_PER_LISTING = 200;
+const CHARS_PER_LISTING = 8000;
+
+/** Bytes of blobs one `cat-file --batch` call returns at most (default: `64 MiB`), so output stays bounded. */
+const BATCH_BYTES = 64 * 1024 * 1024;
+
+function pathChunks(paths: string[]): string[][] {
+  const chunks: string[][] = [];
+  let chunk: string[] = [];
+  let chars = 0;
+  for (const path of paths) {
+    if (chunk.length > 0 && (chunk.length >= PATHS_PER_LISTING || chars + path.length > CHARS_PER_LISTING)) {
+      chunks.push(chunk);
+      chunk = [];
+      chars = 0;
+    }
+    chunk.push(path);
+    chars += path.length + 1;
+  }
+  if (chunk.length > 0) chunks.push(chunk);
+  return chunks;
+}
+
+/**
+ * Splits `cat-file --batch` output for `oids`, in order, into `read`: `<oid> <type> <size>\n`, the
+ * bytes, `\n`; `<oid> missing\n` for an absent object. Anything else is an error for that object.
+ */
+function parseBatch(output: Buffer, oids: string[], read: Map<string, Uint8Array | Error>, maxFile: number): void {
+  let at = 0;
+  for (const oid of oids) {
+    const end = output.indexOf(0x0a, at);
+    if (end < 0) throw new GitError(`git cat-file --batch output ends before ${oid}; expected one answer per object`, ['cat-file', '--batch'], null, '');
+    const [name, type, sizeText] = output.toString('utf8', at, end).split(' ');
+    at = end + 1;
+    if (name !== oid || type !== 'blob') {
+      read.set(oid, new GitError(`git cat-file --batch answered ${JSON.stringify(`${name} ${type}`)} for ${oid}; expected a blob`, ['cat-file', '--batch'], null, ''));
+      if (type !== 'missing' && sizeText !== undefined) at += Number(sizeText) + 1;
+      continue;
+    }
+    const size = Number(sizeText);
+    if (!Number.isSafeInteger(size) || size > maxFile || at + size > output.length) {
+      throw new GitError(`git cat-file --batch gave ${sizeText} bytes for ${oid}; expected at most ${maxFile} within its output`, ['cat-file', '--batch'], null, '');
+    }
+    read.set(oid, new Uint8Array(output.buffer, output.byteOffset + at, size));
+    at += size + 1;
+  }
 }
 
 /** A throwaway repository the demo and tests commit trees into. */

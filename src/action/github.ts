@@ -4,10 +4,7 @@
  * waiting as long as GitHub asks, within a bound). Errors leave as `ApiError`; the token never
  * reaches a log line or an error message.
  */
-import { getOctokit } from '@actions/github';
-import { defaults as actionsDefaults } from '@actions/github/lib/utils';
-import { retry } from '@octokit/plugin-retry';
-import { throttling } from '@octokit/plugin-throttling';
+import type { getOctokit } from '@actions/github';
 import type { ChangedFile } from '../core/changes.js';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from './git.js';
 
@@ -198,10 +195,6 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     error: (...args: unknown[]) => options.log.warn(redact(args)),
   };
 
-  const baseFetch = (actionsDefaults.request?.fetch ?? globalThis.fetch) as typeof fetch;
-  const timedFetch = (url: string | URL | Request, init?: RequestInit): Promise<Response> =>
-    baseFetch(url, { ...init, signal: init?.signal ?? AbortSignal.timeout(timeoutMs) });
-
   const limitHandler = (kind: string) => (retryAfter: number, request: { method: string; url: string }, _octokit: unknown, retryCount: number): boolean => {
     const retrying = retryCount < rateLimitRetries && retryAfter <= maxWait;
     log.warn(`GitHub ${kind} on ${request.method} ${request.url}: ${retrying ? `waiting ${retryAfter} s, then retry ${retryCount + 1} of ${rateLimitRetries}` : `not retrying (asked to wait ${retryAfter} s; retries used ${retryCount} of ${rateLimitRetries}, longest wait ${maxWait} s)`}`);
@@ -209,22 +202,32 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
   };
 
   clientCount += 1;
-  const octokit: Octokit = getOctokit(token, {
-    baseUrl: options.baseUrl ?? 'https://api.github.com',
-    log,
-    request: { ...actionsDefaults.request, fetch: timedFetch },
-    retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
-    throttle: {
-      // One limiter set per client: spacing between writes is per run, not shared across clients.
-      id: `context-reach-${clientCount}`,
-      retryAfterBaseValue: msPerSecond,
-      onRateLimit: limitHandler('rate limit'),
-      onSecondaryRateLimit: limitHandler('secondary rate limit'),
-    },
-  }, retry, throttling);
+  const limiterId = `context-reach-${clientCount}`;
+  let octokit!: Octokit;
+  let loading: Promise<void> | null = null;
+  // The Octokit stack is loaded and built on the first call (see octokit.ts for why).
+  const connect = () => loading ??= import('./octokit.js').then(({ getOctokit, actionsDefaults, retry, throttling }) => {
+    const baseFetch = (actionsDefaults.request?.fetch ?? globalThis.fetch) as typeof fetch;
+    const timedFetch = (url: string | URL | Request, init?: RequestInit): Promise<Response> =>
+      baseFetch(url, { ...init, signal: init?.signal ?? AbortSignal.timeout(timeoutMs) });
+    octokit = getOctokit(token, {
+      baseUrl: options.baseUrl ?? 'https://api.github.com',
+      log,
+      request: { ...actionsDefaults.request, fetch: timedFetch },
+      retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
+      throttle: {
+        // One limiter set per client: spacing between writes is per run, not shared across clients.
+        id: limiterId,
+        retryAfterBaseValue: msPerSecond,
+        onRateLimit: limitHandler('rate limit'),
+        onSecondaryRateLimit: limitHandler('secondary rate limit'),
+      },
+    }, retry, throttling);
+  });
 
   async function call<T>(operation: string, run: () => Promise<T>): Promise<T> {
     try {
+      await connect();
       return await run();
     } catch (error) {
       if (error instanceof ApiError || error instanceof ContentTooLargeError) throw error;

@@ -1,4 +1,3 @@
-import * as core from '@actions/core';
 import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import { createFileSource } from '../cli/files.js';
@@ -6,12 +5,14 @@ import { createGitReader } from './git.js';
 import { createGitHubClient } from './github.js';
 import { runAction } from './run-action.js';
 import { createRunnerOutput } from './runner-output.js';
+import { readInput } from './workflow-commands.js';
 
 // The entry only wires the real adapters to the action; errors become one failed-check message.
+const out = createRunnerOutput();
 runAction({
   env: process.env,
-  getInput: (name) => core.getInput(name),
-  out: createRunnerOutput(),
+  getInput: (name) => readInput(process.env, name),
+  out,
   readJson: async (path) => JSON.parse(await readFile(path, 'utf8')) as unknown,
   readFile: (path, maxBytes) => createFileSource(maxBytes).read(path),
   writeFile: async (path, text) => {
@@ -21,5 +22,5 @@ runAction({
   createGit: (cwd) => createGitReader(cwd),
   createGitHub: (token, options) => createGitHubClient(token, options),
 }).catch((error: unknown) => {
-  core.setFailed(`context-reach failed: ${error instanceof Error ? error.message : String(error)}`);
+  out.fail(`context-reach failed: ${error instanceof Error ? error.message : String(error)}`);
 });

@@ -54,7 +54,11 @@ async function gatherChanges(event: EventInfo, base: string, git: GitReader, api
     const start = (await git.mergeBase(baseSha, headSha).catch(() => null)) ?? baseSha;
     return {
       base: start, policyRef: baseSha, head: headSha, changes: await git.changedFiles(start, headSha),
-      source: { read: (ref, path) => git.show(ref, path) }, notices: [],
+      source: {
+        read: (ref, path) => git.show(ref, path),
+        readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
+      },
+      notices: [],
     };
   }
   if (api === null || event.pullNumber === null) {

@@ -1,5 +1,5 @@
-import * as core from '@actions/core';
 import type { Annotation } from '../core/render/annotations.js';
+import { appendSummary, issueCommand, setOutput, writeLine } from './workflow-commands.js';
 
 /** The action's one adapter for what the runner shows: summary, annotations, outputs, log. */
 export interface RunnerOutput {
@@ -16,25 +16,25 @@ export interface RunnerOutput {
 /** GitHub's limit for one step's job summary; a longer summary is cut with a note. */
 export const SUMMARY_LIMIT = 1024 * 1024;
 
-export function createRunnerOutput(): RunnerOutput {
+export function createRunnerOutput(env: Readonly<Record<string, string | undefined>> = process.env): RunnerOutput {
   return {
-    secret: (value) => core.setSecret(value),
-    output: (name, value) => core.setOutput(name, value),
+    secret: (value) => issueCommand('add-mask', {}, value),
+    output: (name, value) => setOutput(env, name, value),
     async summary(markdown) {
       const text = markdown.length > SUMMARY_LIMIT - 200
         ? `${markdown.slice(0, SUMMARY_LIMIT - 400)}\n\n_The summary was cut at GitHub's 1 MiB limit; the JSON report has everything._\n`
         : markdown;
-      await core.summary.addRaw(text, true).write();
+      appendSummary(env, text);
     },
     annotate(a) {
-      const properties = { title: a.title, file: a.file, ...(a.line !== null ? { startLine: a.line } : {}) };
-      if (a.level === 'error') core.error(a.message, properties);
-      else if (a.level === 'warning') core.warning(a.message, properties);
-      else core.notice(a.message, properties);
+      issueCommand(a.level, { title: a.title, file: a.file, line: a.line ?? undefined }, a.message);
     },
-    info: (message) => core.info(message),
-    notice: (message) => core.notice(message),
-    warning: (message) => core.warning(message),
-    fail: (message) => core.setFailed(message),
+    info: (message) => writeLine(message),
+    notice: (message) => issueCommand('notice', {}, message),
+    warning: (message) => issueCommand('warning', {}, message),
+    fail: (message) => {
+      process.exitCode = 1;
+      issueCommand('error', {}, message);
+    },
   };
 }

@@ -1,5 +1,3 @@
-import { DIFF_USAGE, runDiff } from './diff.js';
-import { runDemo } from './demo.js';
 import { INSPECT_USAGE, runInspect } from './inspect.js';
 import type { Console } from './console.js';
 import type { FileSource } from './files.js';
@@ -13,7 +11,28 @@ export interface CliDeps {
 
 const DEMO_USAGE = 'usage: context-reach demo [--format markdown|text|json] [--keep] [--html FILE]';
 
-const USAGE = `context-reach: positional-range and context-budget review of transformer model configs
+interface Command {
+  usage: string;
+  run(args: string[], deps: CliDeps): Promise<number>;
+}
+
+// `diff` and `demo` (git, the gate, the HTML report) are loaded when asked for, so `inspect` and
+// `--version` start without compiling them.
+const COMMANDS: Record<string, () => Promise<Command>> = {
+  inspect: async () => ({ usage: INSPECT_USAGE, run: (args, deps) => runInspect(args, deps.files, deps.io) }),
+  diff: async () => {
+    const { DIFF_USAGE, runDiff } = await import('./diff.js');
+    return { usage: DIFF_USAGE, run: (args, deps) => runDiff(args, deps.io) };
+  },
+  demo: async () => {
+    const { runDemo } = await import('./demo.js');
+    return { usage: DEMO_USAGE, run: (args, deps) => runDemo(args, deps.io) };
+  },
+};
+
+async function usage(): Promise<string> {
+  const { DIFF_USAGE } = await import('./diff.js');
+  return `context-reach: positional-range and context-budget review of transformer model configs
 
 ${INSPECT_USAGE}
 
@@ -22,25 +41,21 @@ ${DIFF_USAGE}
 ${DEMO_USAGE}
 
 'context-reach COMMAND --help' shows one command's usage.`;
-
-const COMMANDS: Record<string, { usage: string; run: (args: string[], deps: CliDeps) => Promise<number> }> = {
-  inspect: { usage: INSPECT_USAGE, run: (args, deps) => runInspect(args, deps.files, deps.io) },
-  diff: { usage: DIFF_USAGE, run: (args, deps) => runDiff(args, deps.io) },
-  demo: { usage: DEMO_USAGE, run: (args, deps) => runDemo(args, deps.io) },
-};
+}
 
 /** Dispatch a command; returns the exit status. Usage mistakes exit 2 with one line, no stack trace. */
 export async function run(argv: string[], deps: CliDeps): Promise<number> {
   const [command, ...rest] = argv;
   if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
-    deps.io.out(`${USAGE}\n`);
+    deps.io.out(`${await usage()}\n`);
     return command === undefined ? 2 : 0;
   }
   if (command === '--version') {
     deps.io.out(`context-reach ${VERSION}\n`);
     return 0;
   }
-  const entry = COMMANDS[command];
+  const load = Object.hasOwn(COMMANDS, command) ? COMMANDS[command] : undefined;
+  const entry = load ? await load() : undefined;
   try {
     if (!entry) throw new UsageError(`unknown command '${command}'`);
     if (rest.includes('--help') || rest.includes('-h')) {
@@ -50,7 +65,7 @@ export async function run(argv: string[], deps: CliDeps): Promise<number> {
     return await entry.run(rest, deps);
   } catch (error) {
     if (error instanceof UsageError || String((error as { code?: unknown })?.code ?? '').startsWith('ERR_PARSE_ARGS')) {
-      deps.io.error(`context-reach: ${(error as Error).message}\n${entry?.usage ?? USAGE}`);
+      deps.io.error(`context-reach: ${(error as Error).message}\n${entry?.usage ?? await usage()}`);
       return 2;
     }
     throw error;

@@ -10,7 +10,21 @@ import { attachRemedies } from './remedy/attach.js';
 /** Reads a file's bytes at a commit; null when the file does not exist there. */
 export interface ContentSource {
   read(ref: string, path: string): Promise<Uint8Array | null>;
+  /**
+   * Many reads at once, answered in order with an `Error` where `read` would throw; a source that
+   * batches (git: a few processes for all files) offers it, others are read file by file.
+   */
+  readMany?(requests: readonly ContentRequest[]): Promise<(Uint8Array | null | Error)[]>;
 }
+
+/** One file at one commit. */
+export interface ContentRequest {
+  ref: string;
+  path: string;
+}
+
+/** Files whose versions are read together before they are measured: bounds the bytes held at once. */
+const READ_WINDOW = 32;
 
 export interface GateRequest {
   base: string;
@@ -26,21 +40,17 @@ export interface GateRequest {
   notices?: string[];
   /** Serving overrides from the command line (default: none). */
   overrides?: ServingPatch;
-  /** How many files are read at once (default: 8). */
+  /** How many files are read at once from a source without `readMany` (default: 8). */
   concurrency?: number;
 }
 
 /** Thrown when the policy file on the base commit cannot be read: the gate fails closed. */
 export class PolicyUnreadableError extends Error {}
 
-async function readVersion(source: ContentSource, ref: string, path: string, serving: ServingPatch,
-  overrides: ServingPatch | undefined, policyPath: string): Promise<FileReport | FileFailure | null> {
-  let bytes: Uint8Array | null;
-  try {
-    bytes = await source.read(ref, path);
-  } catch (error) {
-    return toFailure(path, error);
-  }
+/** The measured version of one file from its bytes (or the error reading them); null when absent. */
+function inspectVersion(bytes: Uint8Array | null | Error, path: string, serving: ServingPatch,
+  overrides: ServingPatch | undefined, policyPath: string): FileReport | FileFailure | null {
+  if (bytes instanceof Error) return toFailure(path, bytes);
   if (bytes === null) return null;
   try {
     return inspectModel(decodeText(bytes, path), path, {
@@ -50,6 +60,19 @@ async function readVersion(source: ContentSource, ref: string, path: string, ser
   } catch (error) {
     return toFailure(path, error);
   }
+}
+
+/** Bytes of every request, in order: one batch when the source batches, else `concurrency` reads at a time. */
+async function readAll(source: ContentSource, requests: ContentRequest[], concurrency: number): Promise<(Uint8Array | null | Error)[]> {
+  const asError = (error: unknown): Error => (error instanceof Error ? error : new Error(String(error)));
+  if (source.readMany) {
+    try {
+      return await source.readMany(requests);
+    } catch (error) {
+      return requests.map(() => asError(error));
+    }
+  }
+  return mapLimited(requests, concurrency, (r) => source.read(r.ref, r.path).catch(asError));
 }
 
 async function mapLimited<T, R>(items: T[], limit: number, work: (item: T) => Promise<R>): Promise<R[]> {
@@ -92,20 +115,31 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   const deleted = relevant.filter((c) => c.status === 'deleted');
   const judged = relevant.filter((c) => c.status !== 'deleted');
 
-  const configs = await mapLimited(judged, request.concurrency ?? 8, async (change): Promise<ChangedConfig> => {
-    const filePolicy = resolvePolicy(policy, change.path);
-    const judging: Judging = { limits: filePolicy.limits, rules: filePolicy.rules, standing: filePolicy.standing };
-    const headVersion = await readVersion(source, head, change.path, filePolicy.serving, request.overrides, policyPath)
-      ?? { path: change.path, line: null, message: `${change.path} is not a regular file at head (a symlink, a submodule or too large to read), so it was not judged` };
-    let baseVersion: FileReport | FileFailure | null = null;
-    let status = change.status;
-    if (change.status !== 'added') {
-      baseVersion = await readVersion(source, base, change.previousPath ?? change.path, filePolicy.serving, request.overrides, policyPath);
-      // A base version that is not there (a 404, a shallow history) is an added file.
-      if (baseVersion === null) status = 'added';
+  const configs: ChangedConfig[] = [];
+  for (let start = 0; start < judged.length; start += READ_WINDOW) {
+    const window = judged.slice(start, start + READ_WINDOW);
+    // Head of every file, then base of every file not added.
+    const requests: ContentRequest[] = [
+      ...window.map((change) => ({ ref: head, path: change.path })),
+      ...window.filter((change) => change.status !== 'added').map((change) => ({ ref: base, path: change.previousPath ?? change.path })),
+    ];
+    const answers = await readAll(source, requests, request.concurrency ?? 8);
+    let nextBase = window.length;
+    for (const [i, change] of window.entries()) {
+      const filePolicy = resolvePolicy(policy, change.path);
+      const judging: Judging = { limits: filePolicy.limits, rules: filePolicy.rules, standing: filePolicy.standing };
+      const headVersion = inspectVersion(answers[i]!, change.path, filePolicy.serving, request.overrides, policyPath)
+        ?? { path: change.path, line: null, message: `${change.path} is not a regular file at head (a symlink, a submodule or too large to read), so it was not judged` };
+      let baseVersion: FileReport | FileFailure | null = null;
+      let status = change.status;
+      if (change.status !== 'added') {
+        baseVersion = inspectVersion(answers[nextBase++]!, change.previousPath ?? change.path, filePolicy.serving, request.overrides, policyPath);
+        // A base version that is not there (a 404, a shallow history) is an added file.
+        if (baseVersion === null) status = 'added';
+      }
+      configs.push({ change: { ...change, status }, base: baseVersion, head: headVersion, judging });
     }
-    return { change: { ...change, status }, base: baseVersion, head: headVersion, judging };
-  });
+  }
 
   // `config.json` is a common name for things that are not models: when only the default globs
   // picked such a file, it is named in a notice instead of blocking.

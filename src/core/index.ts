@@ -26,4 +26,7 @@ export { renderInspectText, PLAIN, type TextStyle } from './render/inspect-text.
 export { renderSarif } from './render/sarif.js';
 export { planAnnotations, ANNOTATIONS_PER_LEVEL, type Annotation } from './render/annotations.js';
 export { escapeHtml, escapeMarkdown } from './render/escape.js';
+export { renderHtmlReport, type HtmlReportOptions } from './render/html-report.js';
+export { attachRemedies, remedyFileReport } from './remedy/attach.js';
+export type { Change, CombinedRemedy, Remedy, RemedyFields } from './remedy/types.js';
 export { VERSION } from './version.js';

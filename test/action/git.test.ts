@@ -134,6 +134,67 @@ describe('show(commit, path)', () => {
   });
 });
 
+describe('showMany(requests)', () => {
+  const REQUESTS = (): { commit: string; path: string }[] => [
+    { commit: base, path: 'models/a/config.json' },
+    { commit: head, path: 'models/a/config.json' },
+    { commit: head, path: ODD_NAME },
+    { commit: head, path: NEWLINE_NAME },
+    { commit: head, path: 'models/ü ber #1 [x]x.json' },
+    { commit: base, path: 'models/new.reach.yaml' },
+    { commit: head, path: 'models/outside.json' },
+    { commit: head, path: 'models/inside.json' },
+    { commit: head, path: 'linked/config.json' },
+    { commit: head, path: 'models/a' },
+    { commit: head, path: 'models/exact/config.json' },
+    { commit: head, path: 'models/big/config.json' },
+    { commit: head, path: '../etc/passwd' },
+    { commit: '0123456789abcdef0123456789abcdef01234567', path: 'models/a/config.json' },
+    { commit: head, path: 'models/a/config.json' },
+  ];
+
+  test('answers every request as show(commit, path) does, in order, errors in place of throws', async () => {
+    const requests = REQUESTS();
+    const many = await reader.showMany(requests);
+    expect(many).toHaveLength(requests.length);
+    for (const [i, request] of requests.entries()) {
+      const one = await reader.show(request.commit, request.path).catch((e: unknown) => e);
+      const got = many[i];
+      if (one instanceof Error) {
+        expect(got, request.path).toBeInstanceOf(one.constructor);
+        expect((got as Error).message).toBe(one.message);
+      } else if (one === null) {
+        expect(got, request.path).toBeNull();
+      } else {
+        expect(Buffer.from(got as Uint8Array).equals(Buffer.from(one as Uint8Array)), request.path).toBe(true);
+      }
+    }
+    // Checked against git itself, not only against show.
+    expect(Buffer.from(many[1] as Uint8Array).toString('utf8')).toBe(git('show', `${head}:models/a/config.json`) + '\n');
+    expect(many[11]).toBeInstanceOf(ContentTooLargeError);
+    expect(many[12]).toBeInstanceOf(GitError);
+  });
+
+  test('runs one listing per commit and one cat-file for all the blobs, not three processes per file', async () => {
+    const log = join(root, 'git-calls.log');
+    const counting = join(root, 'counting-git');
+    writeFileSync(counting, `#!/bin/sh\necho "$@" >> '${log}'\nexec git "$@"\n`);
+    chmodSync(counting, 0o755);
+    const requests = Array.from({ length: 40 }, (_, i) => ({ commit: i % 2 === 0 ? base : head, path: i % 4 < 2 ? 'models/a/config.json' : 'models/stays.json' }));
+    const answers = await createGitReader(repo, { git: counting }).showMany(requests);
+    expect(answers.every((a) => a instanceof Uint8Array)).toBe(true);
+    const calls = execFileSync('cat', [log], { encoding: 'utf8' }).trim().split('\n');
+    expect(calls.filter((c) => c.includes('ls-tree'))).toHaveLength(2);
+    expect(calls.filter((c) => c.includes('cat-file'))).toHaveLength(1);
+    unlinkSync(counting);
+    unlinkSync(log);
+  });
+
+  test('is empty for no requests, without running git', async () => {
+    expect(await createGitReader(repo, { git: join(root, 'no-git-here') }).showMany([])).toEqual([]);
+  });
+});
+
 describe('hasCommit(rev), resolveCommit(rev), mergeBase(a, b)', () => {
   test('knows the commits of the repository and no others', async () => {
     expect(await reader.hasCommit(base)).toBe(true);

@@ -43,7 +43,12 @@ describe('context-reach inspect', () => {
           : file.metrics[metric];
         expect(value === null || typeof value === 'number', metric).toBe(true);
       }
-      for (const finding of file.findings) expect(Object.keys(finding)).toEqual(['rule', 'severity', 'message', 'key', 'line']);
+      // Blocking findings also carry their remedy (issue 6); the others are exactly the five keys.
+      for (const finding of file.findings) {
+        expect(Object.keys(finding)).toEqual(finding.severity === 'block'
+          ? ['rule', 'severity', 'message', 'key', 'line', 'remedy', 'remedyWhyNot', 'remedyAlternatives']
+          : ['rule', 'severity', 'message', 'key', 'line']);
+      }
     }
   });
 

@@ -13,9 +13,9 @@ describe('the core\'s public surface', () => {
     expect(Object.keys(core).sort()).toEqual([
       'ANNOTATIONS_PER_LEVEL', 'COMMENT_LIMIT', 'COMMENT_MARKER', 'DEFAULT_POLICY', 'DEFAULT_POLICY_PATH',
       'ESTIMATE_NOTICE', 'FLOAT_FORMATS', 'METRIC_PATHS', 'NotAModelError', 'PLAIN', 'PolicyError', 'REPORT_VERSION',
-      'RULES', 'ReadError', 'STORAGE_DTYPES', 'VERSION', 'computeMetrics', 'decide', 'decodeText', 'escapeHtml',
-      'escapeMarkdown', 'inspectModel', 'isModelConfig', 'metricValue', 'parsePolicy', 'planAnnotations', 'readModel',
-      'renderComment', 'renderDiffText', 'renderGateJson', 'renderInspectJson', 'renderInspectText', 'renderSarif',
+      'RULES', 'ReadError', 'STORAGE_DTYPES', 'VERSION', 'attachRemedies', 'computeMetrics', 'decide', 'decodeText', 'escapeHtml',
+      'escapeMarkdown', 'inspectModel', 'isModelConfig', 'metricValue', 'parsePolicy', 'planAnnotations', 'readModel', 'remedyFileReport',
+      'renderComment', 'renderDiffText', 'renderGateJson', 'renderHtmlReport', 'renderInspectJson', 'renderInspectText', 'renderSarif',
       'resolvePolicy', 'runGate', 'toFailure',
     ]);
   });

@@ -64,6 +64,8 @@ export async function runBundle(options: {
   inputs: Record<string, string>;
   repository: string;
   timeoutMs?: number;
+  /** The bundle to run (default: `ACTION_BUNDLE`); the benchmark, compiled elsewhere, names it. */
+  bundle?: string;
 }): Promise<BundleRun> {
   const temp = mkdtempSync(join(tmpdir(), 'context-reach-runner-'));
   const eventPath = join(temp, 'event.json');
@@ -88,7 +90,7 @@ export async function runBundle(options: {
   };
   for (const [name, value] of Object.entries(options.inputs)) env[`INPUT_${name.toUpperCase()}`] = value;
   const started = performance.now();
-  const child = spawn(process.execPath, [ACTION_BUNDLE], { cwd: options.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, [options.bundle ?? ACTION_BUNDLE], { cwd: options.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
   let stdout = '';
   let stderr = '';
   child.stdout.on('data', (chunk) => { stdout += chunk; });

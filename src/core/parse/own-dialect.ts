@@ -15,6 +15,7 @@ import type { PathSegment } from './quote.js';
 import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
 import { DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA } from './spec-defaults.js';
 import { suggestKey } from './suggest.js';
+import { SCHEMA_COMPILE_OPTIONS } from '../schema-options.js';
 
 /** The value of `format` that marks the own dialect. */
 export const MODEL_FORMAT = 'context-reach-model/1';
@@ -28,7 +29,7 @@ let compiled: ValidateFunction | null = null;
 
 /** Schema errors for a parsed own-dialect document (empty when it conforms); errors carry `data` and `parentSchema`. */
 export function validateModelValue(value: unknown): ErrorObject[] {
-  if (compiled === null) compiled = new Ajv({ allErrors: true, verbose: true, strict: true }).compile(modelSchema);
+  if (compiled === null) compiled = new Ajv({ allErrors: true, verbose: true, strict: true, ...SCHEMA_COMPILE_OPTIONS }).compile(modelSchema);
   return compiled(value) ? [] : [...(compiled.errors ?? [])];
 }
 

@@ -171,12 +171,92 @@ function checkJson(text: string, file: string): void {
     let line: number | null = null;
     if (at) line = text.slice(0, Number(at[1])).split('\n').length;
     else if (lineCol) line = Number(lineCol[1]);
-    else if (/Unexpected end/.test(message)) line = text.split('\n').length;
+    else {
+      // Some engine messages ("Unexpected token …") carry no position: find it with the grammar.
+      const offset = jsonSyntaxErrorOffset(standIn);
+      if (offset >= 0) line = text.slice(0, offset).split('\n').length;
+    }
     const reason = message
       .replace(/ in JSON at position \d+.*$/s, '')
       .replace(/ \(line \d+ column \d+\)$/, '')
-      .replace(/, ".*" is not valid JSON$/s, '');
+      .replace(/, (\.\.\.)?".*$/s, '');
     throw new ReadError(file, line, `is not valid JSON: ${reason}`);
+  }
+}
+
+const JSON_NUMBER = /-?(?:0|[1-9]\d*)(?:\.\d+)?(?:[eE][+-]?\d+)?/y;
+const JSON_ESCAPES = new Set(['"', '\\', '/', 'b', 'f', 'n', 'r', 't']);
+
+/**
+ * Offset of the first character JSON's grammar (RFC 8259) does not allow there, the text's
+ * length when it ends early, or -1 when it is valid JSON. A loop with an explicit stack, so any
+ * nesting depth is safe.
+ */
+export function jsonSyntaxErrorOffset(text: string): number {
+  const n = text.length;
+  const stack: string[] = [];
+  let i = 0;
+  let expect: 'value' | 'key' | 'colon' | 'next' | 'done' = 'value';
+  const after = () => (stack.length === 0 ? 'done' : 'next');
+  /** Index after the string opening at `i`, or -(offset + 1) of the fault. */
+  const stringEnd = (start: number): number => {
+    for (let j = start + 1; j < n; j += 1) {
+      const c = text.charCodeAt(j);
+      if (c === 0x22) return j + 1;
+      if (c < 0x20) return -(j + 1);
+      if (c === 0x5c) {
+        const e = text[j + 1];
+        if (e === 'u') {
+          if (!/^[0-9a-fA-F]{4}$/.test(text.slice(j + 2, j + 6))) return -(j + 1);
+          j += 5;
+        } else if (e !== undefined && JSON_ESCAPES.has(e)) j += 1;
+        else return -(j + 1);
+      }
+    }
+    return -(n + 1);
+  };
+  for (;;) {
+    while (i < n && (text[i] === ' ' || text[i] === '\t' || text[i] === '\n' || text[i] === '\r')) i += 1;
+    if (i >= n) return expect === 'done' ? -1 : n;
+    const c = text[i];
+    if (expect === 'done') return i;
+    if (expect === 'colon') {
+      if (c !== ':') return i;
+      i += 1;
+      expect = 'value';
+    } else if (expect === 'next') {
+      const top = stack[stack.length - 1];
+      if (c === ',') {
+        i += 1;
+        expect = top === '{' ? 'key' : 'value';
+      } else if ((c === '}' && top === '{') || (c === ']' && top === '[')) {
+        i += 1;
+        stack.pop();
+        expect = after();
+      } else return i;
+    } else if (expect === 'key' || c === '"') {
+      if (c !== '"') return i;
+      const end = stringEnd(i);
+      if (end < 0) return -end - 1;
+      i = end;
+      expect = expect === 'key' ? 'colon' : after();
+    } else if (c === '{' || c === '[') {
+      stack.push(c);
+      i += 1;
+      while (i < n && /[ \t\n\r]/.test(text[i]!)) i += 1;
+      if (text[i] === (c === '{' ? '}' : ']')) {
+        i += 1;
+        stack.pop();
+        expect = after();
+      } else expect = c === '{' ? 'key' : 'value';
+    } else {
+      const literal = ['true', 'false', 'null'].find((word) => text.startsWith(word, i));
+      JSON_NUMBER.lastIndex = i;
+      const number = literal === undefined ? JSON_NUMBER.exec(text) : null;
+      if (literal === undefined && number === null) return i;
+      i += literal?.length ?? number![0].length;
+      expect = after();
+    }
   }
 }
 

@@ -4,6 +4,7 @@
  */
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
+import { SCHEMA_COMPILE_OPTIONS } from '../schema-options.js';
 import policySchema from '../../../schema/policy.schema.json' with { type: 'json' };
 
 export const POLICY_SCHEMA: Readonly<Record<string, unknown>> = policySchema;
@@ -14,7 +15,7 @@ let compiled: ValidateFunction | null = null;
 export function validatePolicyValue(value: unknown): ErrorObject[] {
   if (compiled === null) {
     // allowUnionTypes: limits admit `null` to remove a bound in an override.
-    const ajv = new Ajv({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true });
+    const ajv = new Ajv({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true, ...SCHEMA_COMPILE_OPTIONS });
     compiled = ajv.compile(policySchema);
   }
   return compiled(value) ? [] : [...(compiled.errors ?? [])];

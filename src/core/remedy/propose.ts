@@ -15,7 +15,9 @@ import { computeMetrics, frequencyPlan } from '../metrics/compute.js';
 import { positionExactLimit } from '../metrics/float-format.js';
 import { servedSequences } from '../metrics/kv-cache.js';
 import { usableDeviceBytes } from '../metrics/memory-curve.js';
-import { scanSimilarityRange, similarityScan } from '../metrics/similarity-scan.js';
+import { firstNegativeOffset } from '../metrics/first-negative.js';
+import { baseFrequencies } from '../metrics/frequencies.js';
+import { similarityScan } from '../metrics/similarity-scan.js';
 import { positiveCount } from '../metrics/sizes.js';
 import { evaluationSpan, trainedSpan } from '../metrics/spans.js';
 import { bytesPerElement, cacheDType } from '../metrics/storage-bytes.js';
@@ -26,7 +28,7 @@ import { formatInteger, formatNumber, formatTokens } from '../units.js';
 import { applyChange } from './apply-change.js';
 import { lightMetric, rangeMetrics, budgetMetrics } from './light-metrics.js';
 import { prove, type FindingIdentity, type Proof, type RemedyContext } from './prove.js';
-import { searchRotaryBase, type BaseDirection } from './rotary-base.js';
+import { searchRotaryBase, type BaseDirection, type BaseTrial } from './rotary-base.js';
 import { coveringFactor } from './scaling-factor.js';
 import type { Change, Remedy, RemedyFields } from './types.js';
 import { largestPassing } from './whole-search.js';
@@ -34,11 +36,26 @@ import { largestPassing } from './whole-search.js';
 /** Full proofs one kind of change may run before it gives up (default: `4`). */
 export const MAX_PROOFS_PER_KIND = 4;
 
+/**
+ * pair·offsets: work all the proofs for one finding may do, a proof costing its pairs times its
+ * span (the positional scans dominate); the first proof always runs (default: `2^31`, about 1.5 s
+ * at the measured 0.75 ns per pair·offset of `computeMetrics`).
+ */
+export const MAX_PROOF_WORK = 2 ** 31;
+
 /** The finding a search works on, with the limit it crossed when it is a limit. */
 interface Target extends FindingIdentity {
   limit: Limit | null;
   /** The base version's value of the limited metric (for `max-increase-pct`). */
   baseValue: number | null;
+  /** Proof work left for this finding (see `MAX_PROOF_WORK`). */
+  work: { left: number; spent: boolean };
+}
+
+/** pair·offsets a proof of `spec` scans: its frequency pairs times its span (1 without either). */
+function proofCost(spec: ModelSpec): number {
+  const pairs = baseFrequencies(spec)?.length ?? 0;
+  return Math.max(1, pairs) * Math.max(1, evaluationSpan(spec) ?? 1);
 }
 
 /** One kind's result: a proven remedy, or why there is none. */
@@ -112,15 +129,22 @@ function remedyOf(change: Change, proof: Proof, shown: string[], target: Target)
  */
 function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], shown: string[], what: string): KindOutcome {
   let last: Proof | null = null;
-  const tried = candidates.slice(0, MAX_PROOFS_PER_KIND);
-  for (const change of tried) {
+  let proofs = 0;
+  for (const change of candidates.slice(0, MAX_PROOFS_PER_KIND)) {
+    const cost = proofCost(applyChange(ctx.head.spec, change));
+    if (target.work.spent && cost > target.work.left) {
+      return none(`${what} was not proven: this finding's proof budget (${formatInteger(MAX_PROOF_WORK)} pair·offsets) is spent`);
+    }
+    target.work.left -= cost;
+    target.work.spent = true;
+    proofs += 1;
     const proof = prove(ctx, target, change);
     if (proof.passes) return { remedy: remedyOf(change, proof, shown, target), whyNot: null };
     last = proof;
   }
   if (last === null) return none(`no ${what} to try`);
-  const capped = candidates.length > tried.length ? ` (stopped after ${tried.length} proofs)` : '';
-  return none(`${what} ${tried.length === 1 ? 'clears it but still blocks' : 'cleared it but each still blocked'} on ${describeBlockers(last)}${capped}`);
+  const capped = candidates.length > proofs ? ` (stopped after ${proofs} proofs)` : '';
+  return none(`${what} ${proofs === 1 ? 'clears it but still blocks' : 'cleared it but each still blocked'} on ${describeBlockers(last)}${capped}`);
 }
 
 // ---- kinds of change -------------------------------------------------------------------------
@@ -257,24 +281,25 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
   const direction = baseDirection(metric, limit, metricValue(ctx.head.metrics, metric as 'discriminationSpan'));
   if (T === null || direction === null) return none('the span or the current value is unknown');
   const scaledAt = (base: number) => frequencyPlan(applyChange(spec, { 'position.base': base }), T, L0)?.scaled ?? null;
-  // discriminationSpan >= min: no negative sum before min(T, min), so only that far is scanned.
+  // discriminationSpan >= min: no negative sum before min(T, min), found by a scan that stops at the first one.
   const onlyMin = metric === 'discriminationSpan' && direction === 'up' && limit.max === undefined && limit.maxIncreasePct === undefined;
-  const passes = (base: number): boolean => {
+  const criterion = (base: number): BaseTrial => {
     const theta = scaledAt(base);
-    if (theta === null) return false;
+    if (theta === null) return { passes: false, cost: 0 };
     if (onlyMin) {
-      const end = Math.min(T, Math.ceil(limit.min as number));
-      return end <= 1 || scanSimilarityRange(theta, 1, end)?.negative === null;
+      const found = firstNegativeOffset(theta, 1, Math.min(T, Math.ceil(limit.min as number)));
+      return { passes: found.offset === null, cost: found.elements };
     }
     const value = similarityScan(theta, T)[metric as 'discriminationSpan' | 'separationFloor'];
-    return checkLimit(limit, target.baseValue, value).crossed.length === 0;
+    return { passes: checkLimit(limit, target.baseValue, value).crossed.length === 0, cost: theta.length * T };
   };
-  const search = searchRotaryBase(code.base, direction, passes);
+  const search = searchRotaryBase(code.base, direction, criterion);
   if (search.base === null) {
     return none(`no rotary base ${direction === 'up' ? 'above' : 'below'} ${formatNumber(code.base, 6)} meets the ${metric} limit within the search's caps (${search.evaluations} scans)`);
   }
+  const capped = search.capped ? ', the nearest found after the grid walk ran out of budget' : '';
   return proveFirst(ctx, target, [{ 'position.base': search.base }], ['discriminationSpan', 'separationFloor', 'unturnedPairs', 'slowestWavelength'],
-    `a rotary base of ${formatNumber(search.base, 6)} (a retraining-level change)`);
+    `a rotary base of ${formatNumber(search.base, 6)} (a retraining-level change${capped})`);
 }
 
 // ---- which kinds for which finding -----------------------------------------------------------
@@ -330,7 +355,7 @@ export function proposeRemedy(ctx: RemedyContext, finding: Finding & { metric?: 
   const metric = finding.metric;
   const limit = finding.rule === 'limit-crossed' && metric ? ctx.judging.limits[metric] ?? null : null;
   const baseValue = metric && ctx.base && isMetricPath(metric) ? metricValue(ctx.base.metrics, metric) : null;
-  const target: Target = { rule: finding.rule, ...(metric ? { metric } : {}), limit, baseValue };
+  const target: Target = { rule: finding.rule, ...(metric ? { metric } : {}), limit, baseValue, work: { left: MAX_PROOF_WORK, spent: false } };
   const kinds = kindsFor(ctx, target);
   if (typeof kinds === 'string') return { remedy: null, remedyWhyNot: kinds, remedyAlternatives: [] };
   const resolves = resolver(ctx, target);

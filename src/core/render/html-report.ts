@@ -22,7 +22,7 @@ import { spectrumChart, spectrumOf } from './html/spectrum-chart.js';
 import { REPORT_CSS } from './html/style.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { ESTIMATE_NOTICE } from './notice.js';
-import { changeText } from './remedy-text.js';
+import { changeParts } from './remedy-text.js';
 import { formatInteger, formatNumber } from '../units.js';
 
 export interface HtmlReportOptions {
@@ -37,6 +37,11 @@ const CSP = "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-
 
 const MEMORY_KEYS = new Set(['serving.sequences', 'dtypes.cache', 'kvHeads']);
 
+/** `factor 8, sequences 5`: a remedy short enough for a chart legend. */
+function shortChange(change: Change, spec: ModelSpec): string {
+  return changeParts(change, spec).map((p) => `${p.key.split('.').pop()} ${p.after}`).join(', ');
+}
+
 /** The head with the first remedy that changes the position code applied, for the spectrum and the similarity curve. */
 function positionVariant(file: FileDecision): { report: FileReport; label: string } | null {
   const head = file.head;
@@ -45,7 +50,7 @@ function positionVariant(file: FileDecision): { report: FileReport; label: strin
     const change = finding.remedy?.change;
     if (!change || !changeEntries(change).every(([key]) => key.startsWith('position.'))) continue;
     const spec = applyChange(head.spec, change);
-    return { report: { ...head, spec, metrics: computeMetrics(spec) }, label: `with the remedy (${changeText(change, head.spec)})` };
+    return { report: { ...head, spec, metrics: computeMetrics(spec) }, label: `with the remedy (${shortChange(change, head.spec)})` };
   }
   return null;
 }
@@ -57,7 +62,7 @@ function memoryVariant(file: FileDecision): MemoryVariant | null {
   for (const finding of file.findings) {
     const change: Change | undefined = finding.remedy?.change;
     if (!change || !changeEntries(change).every(([key]) => MEMORY_KEYS.has(key))) continue;
-    return { spec: applyChange(spec, change), label: `head with the remedy (${changeText(change, spec as ModelSpec)})` };
+    return { spec: applyChange(spec, change), label: `head with the remedy (${shortChange(change, spec)})` };
   }
   return null;
 }

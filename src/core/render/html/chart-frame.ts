@@ -15,9 +15,9 @@ export interface Frame {
   left: number;
 }
 
-/** (defaults: 560 × 300, margins 26 / 96 / 44 / 62: the right margin holds the line labels) */
+/** (defaults: 560 × 300, margins 26 / 104 / 44 / 62: the right margin holds the line labels) */
 export function frame(width = 560, height = 300): Frame {
-  return { width, height, top: 26, right: 96, bottom: 44, left: 62 };
+  return { width, height, top: 26, right: 104, bottom: 44, left: 62 };
 }
 
 export const innerWidth = (f: Frame) => f.width - f.left - f.right;

@@ -63,7 +63,7 @@ export function similarityChart(id: string, base: SimilaritySeries | null, head:
   }
   if (variant) parts.push(h('path', { class: 's-fix dash', d: minima(variant.series.buckets) ?? '', 'stroke-width': 1.6 }));
   let row = 0;
-  if (head?.trained) parts.push(vRule(f, x(head.trained), `L0 ${tokenLabel(head.trained)}`, 's-head dash', 'end', row++));
+  if (head?.trained && head.trained < maxSpan) parts.push(vRule(f, x(head.trained), `L0 ${tokenLabel(head.trained)}`, 's-head dash', 'end', row++));
   for (const [series, name] of [[base, 'base'], [head, 'head'], [variant?.series ?? null, 'fix']] as const) {
     if (!series?.discrimination) continue;
     const k = series.discrimination;

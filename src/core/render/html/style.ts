@@ -56,6 +56,7 @@ figure h3 { margin: 2px 0 4px; }
 .fix { display: flex; flex-wrap: wrap; gap: 6px 12px; align-items: baseline; border: 1px solid var(--fix); border-left: 6px solid var(--fix); border-radius: 10px; padding: 10px 14px; margin: 0 0 16px; background: var(--panel); }
 .fix.partial { border-color: var(--warn); }
 .fix .title { font-weight: 700; color: var(--fix); }
+.fix .after { font-weight: 700; color: var(--fix); }
 .fix.partial .title { color: var(--warn); }
 svg.chart { width: 100%; height: auto; display: block; overflow: visible; }
 svg.chart text { fill: var(--muted); font-size: 11px; font-family: inherit; }

@@ -1,0 +1,73 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createGitReader } from '../../src/action/git.js';
+import type { GateReport } from '../../src/core/compare/decide.js';
+import { runGate, type ContentRequest, type ContentSource } from '../../src/core/gate.js';
+import { renderGateJson } from '../../src/core/render/gate-json.js';
+import { checkpointConfig, scenarioRepo, type ScenarioRepo, type Tree } from '../support/scenario-repo.js';
+
+// The gate reads the versions of many files with one batched call per window when the source
+// offers readMany (the git adapter does), and must judge exactly as it does reading file by file.
+
+const POLICY = 'limits:\n  fitSequences: { min: 1 }\nserving:\n  device-memory-gib: 80\n  sequences: 4\n';
+/** More files than one read window (32), so the batching crosses a window edge. */
+const FILES = 45;
+
+let repo: ScenarioRepo;
+
+beforeAll(() => {
+  const base: Tree = { '.github/context-reach.yml': POLICY };
+  const head: Tree = { '.github/context-reach.yml': POLICY };
+  for (let i = 0; i < FILES; i++) {
+    const path = `models/m${String(i).padStart(2, '0')}/config.json`;
+    const text = checkpointConfig({ max_position_embeddings: 2048 * (1 + (i % 5)) });
+    if (i % 9 !== 0) base[path] = text; // every ninth file is added in head
+    if (i % 11 === 3) continue; // some are deleted in head
+    head[path] = i % 2 === 0 ? checkpointConfig({ max_position_embeddings: 4096 * (1 + (i % 5)) }) : text.replace('10000', '20000');
+  }
+  // Renamed, a symlink and a file that is not a model config, among the batched reads.
+  base['models/old-name/config.json'] = checkpointConfig({ rope_theta: 500000 });
+  head['models/new-name/config.json'] = checkpointConfig({ rope_theta: 500000 });
+  head['models/link/config.json'] = { symlink: '../m01/config.json' };
+  head['models/broken/config.json'] = '{ "hidden_size": ';
+  repo = scenarioRepo(base, head);
+});
+
+afterAll(() => repo?.remove());
+
+async function judge(source: ContentSource): Promise<GateReport> {
+  const git = createGitReader(repo.dir);
+  return runGate(source, {
+    base: repo.base, head: repo.head, changes: await git.changedFiles(repo.base, repo.head), policyPath: '.github/context-reach.yml',
+  });
+}
+
+describe('runGate(source, request) with a source that offers readMany', () => {
+  it('gives the same report as reading file by file, with one readMany call per window of 32 files', async () => {
+    const git = createGitReader(repo.dir);
+    let reads = 0;
+    const batches: number[] = [];
+    const batched = await judge({
+      read: (ref, path) => { reads += 1; return git.show(ref, path); },
+      readMany: (requests: readonly ContentRequest[]) => {
+        batches.push(requests.length);
+        return git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path })));
+      },
+    });
+    const single = await judge({ read: (ref, path) => git.show(ref, path) });
+    expect(renderGateJson(batched)).toBe(renderGateJson(single));
+    expect(batched.files.length).toBeGreaterThan(32);
+    expect(batches).toHaveLength(Math.ceil(batched.files.length / 32));
+    // Only the policy is read on its own (once at base; head's is the same file unchanged).
+    expect(reads).toBe(1);
+  });
+
+  it('turns a readMany that throws into a failure of every file of the window, as failing reads are', async () => {
+    const git = createGitReader(repo.dir);
+    const report = await judge({
+      read: (ref, path) => git.show(ref, path),
+      readMany: async () => { throw new Error('the batch broke'); },
+    });
+    const failures = report.files.filter((file) => JSON.stringify(file).includes('the batch broke'));
+    expect(failures.length).toBe(report.files.length);
+  });
+});

@@ -1,0 +1,71 @@
+import { describe, expect, it } from 'vitest';
+import { renderHtmlReport } from '../../src/core/render/html-report.js';
+import { escapeHtml } from '../../src/core/render/escape.js';
+import { h } from '../../src/core/render/html/markup.js';
+import { demoTrees, gateOver } from '../support/demo-gate.js';
+import { HOSTILE, hostileReport } from './hostile.js';
+
+const { base, head } = demoTrees();
+/** Substring checks that do not print a 170 KB page when they fail. */
+const has = (html: string, text: string) => expect(html.includes(text), text).toBe(true);
+const hasNot = (html: string, pattern: RegExp) => expect(pattern.exec(html)?.[0] ?? null, String(pattern)).toBeNull();
+const { report } = await gateOver(base, head);
+
+describe('renderHtmlReport(report)', () => {
+  const html = renderHtmlReport(report);
+
+  it('is one self-contained page: no script, no external reference, a policy that forbids loading anything', () => {
+    expect(html.startsWith('<!doctype html>\n<html lang="en">')).toBe(true);
+    hasNot(html, /<script|<link|<iframe|<img|@import|url\(/i);
+    hasNot(html, /(?:src|href)="(?:https?:)?\/\//i);
+    // Attribute quotes are escaped; the browser reads &#39; as '.
+    has(html, '<meta http-equiv="Content-Security-Policy" content="default-src &#39;none&#39;; style-src &#39;unsafe-inline&#39;; img-src data:; base-uri &#39;none&#39;; form-action &#39;none&#39;">');
+  });
+
+  it('has one section per changed config with a spectrum, a memory and a similarity chart each', () => {
+    const sections = html.split('<section class="file"').slice(1);
+    expect(sections).toHaveLength(report.files.length);
+    for (const section of sections) {
+      expect(section.match(/<svg class="chart"/g)).toHaveLength(3);
+      for (const chart of ['spectrum', 'memory', 'similarity']) expect(section).toMatch(new RegExp(`data-chart="file-\\d+-${chart}"`));
+    }
+  });
+
+  it('shows the proven remedies with the values they produce', () => {
+    has(html, 'What would pass (proven):');
+    has(html, '<code>position.scaling.factor</code> 4 → <span class="after">8</span>');
+    has(html, '<code>serving.sequences</code> 8 → <span class="after">5</span>');
+  });
+
+  it('reads in light and dark colour schemes and prints', () => {
+    has(html, '@media (prefers-color-scheme: dark)');
+    has(html, '@media print');
+  });
+
+  it('stays small: under 400 KB for the demo', () => {
+    expect(Buffer.byteLength(html)).toBeLessThan(400_000);
+  });
+});
+
+describe('renderHtmlReport(report) with hostile paths, keys and messages', () => {
+  const html = renderHtmlReport(hostileReport(report));
+
+  it('lets no hostile string open an element or an attribute', () => {
+    for (const text of HOSTILE) {
+      expect(html.includes(text), text).toBe(false);
+      has(html, escapeHtml(text));
+    }
+    hasNot(html, /<(script|img|iframe|svg onload)\b/i);
+    // Inside a tag (every `<` of a hostile string is escaped, so a raw `<` starts one of ours).
+    hasNot(html, /<[^>]*\son(?:error|load)=/i);
+    hasNot(html, /href="javascript/i);
+  });
+});
+
+describe('h(tag, attrs, ...children)', () => {
+  it('escapes text and attribute values, and refuses names that are not plain', () => {
+    expect(h('p', { title: '"><x>' }, '<b>').html).toBe('<p title="&quot;&gt;&lt;x&gt;">&lt;b&gt;</p>');
+    expect(() => h('p', { 'on"x': 1 })).toThrow('attribute name "on\\"x" is not a plain name');
+    expect(() => h('p x', null)).toThrow('tag "p x" is not a plain name');
+  });
+});
