@@ -7,10 +7,16 @@
  *   baselines at W1: the straightforward TypeScript loops (bench/straightforward.ts), numpy
  *   (bench/numpy_baseline.py via python3; skipped with a line when missing), and a calibration
  *   loop of one multiply-add per (position, pair) element.
+ *   W3  `inspect --json` over 200 generated configs, through dist/cli.js and in process
+ *   W4  the bundled action (dist/index.js) on a pull request changing 200 configs, loopback API
+ *   start-up  dist/cli.js and dist/index.js to their first line of output, next to a bare node
+ *   (W3, W4 and start-up: bench/end-to-end.ts; they need `npm run build` first)
  *
- * All results must agree (counts identical, floats within 1e-9 relative) before any ratio is
- * printed; then bench/results.json is written. Run from the repository root. Flags:
- * `--runs=N` (default 5), `--baseline-runs=N` (default 3), `--strict` (exit 1 when a target is missed).
+ * All results must agree (counts identical, floats within 1e-9 relative; W3's two ways
+ * byte-identical; W4's runs the same decision) before any ratio is printed; then
+ * bench/results.json is written. Run from the repository root. Flags: `--runs=N` (default 7),
+ * `--baseline-runs=N` (default 3), `--process-runs=N` (W3 through the CLI and W4, default 3),
+ * `--startup-runs=N` (default 11), `--strict` (exit 1 when a target is missed).
  */
 import { spawnSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
@@ -20,13 +26,16 @@ import { computeMetrics, frequencyPlan } from '../src/core/metrics/compute.js';
 import type { Metrics } from '../src/core/metrics/types.js';
 import type { FloatFormat } from '../src/core/model.js';
 import { calibrationLoop } from './calibration.js';
+import { generatedConfigs } from './configs.js';
+import { CONFIG_COUNT, actionScenario, actionStartupMs, bareNodeStartupMs, cliStartupMs, inspectInProcess, inspectThroughCli } from './end-to-end.js';
+import type { ActionRun } from './end-to-end.js';
 import { straightforwardScan } from './straightforward.js';
 import type { ScanResult } from './straightforward.js';
 import { W1, W2 } from './workloads.js';
 import type { Workload } from './workloads.js';
 
 const FORMATS: FloatFormat[] = ['fp32', 'bf16', 'fp16'];
-const TARGETS = { w1MaxMs: 500, w1MaxCalibrationRatio: 4, w2MaxRssMiB: 200, w2MaxW1Ratio: 20 };
+const TARGETS = { w1MaxMs: 500, w1MaxCalibrationRatio: 4, w2MaxRssMiB: 200, w2MaxW1Ratio: 20, w3MaxMs: 3000, w4MaxMs: 5000, startupMaxMs: 200 };
 
 function flag(name: string, fallback: number): number {
   const hit = process.argv.find((a) => a.startsWith(`--${name}=`));
@@ -135,9 +144,12 @@ function runNumpy(theta: Float64Array, span: number, runs: number): NumpyReport 
   return JSON.parse(r.stdout) as NumpyReport;
 }
 
-function main(): void {
-  const runs = flag('runs', 5);
+async function main(): Promise<void> {
+  const runs = flag('runs', 7);
   const baselineRuns = flag('baseline-runs', 3);
+  const processRuns = flag('process-runs', 3);
+  const startupRuns = flag('startup-runs', 11);
+  const loadBefore = os.loadavg();
   const strict = process.argv.includes('--strict');
   const theta = frequencyPlan(W1.spec, W1.span, W1.span)!.scaled;
   const line = (s: string) => process.stdout.write(`${s}\n`);
@@ -167,11 +179,51 @@ function main(): void {
   line(`W1 engine (cold, child process): median ${w1ColdMs.toFixed(1)} ms`);
   line(`W2 engine (cold, child process): median ${w2Ms.toFixed(1)} ms, peak RSS ${w2RssMiB.toFixed(1)} MiB`);
 
+  // W3: the same 200 configs through the bundled CLI (one process per run) and in process (warm).
+  const configs = generatedConfigs(CONFIG_COUNT);
+  const w3Cli = Array.from({ length: processRuns }, () => inspectThroughCli(configs));
+  await inspectInProcess(configs); // warm-up
+  const w3Warm: Awaited<ReturnType<typeof inspectInProcess>>[] = [];
+  for (let r = 0; r < runs; r++) w3Warm.push(await inspectInProcess(configs));
+  const w3CliMs = median(w3Cli.map((c) => c.ms));
+  const w3CliCpuMs = medianOrNull(w3Cli.map((c) => c.cpuMs));
+  const w3WarmMs = median(w3Warm.map((c) => c.ms));
+  line(`W3 inspect --json of ${CONFIG_COUNT} configs: dist/cli.js median ${w3CliMs.toFixed(0)} ms (CPU ${fmtNull(w3CliCpuMs, 0)} ms) over ${processRuns} runs; in process (warm) median ${w3WarmMs.toFixed(0)} ms over ${runs} runs`);
+
+  // W4: the bundled action on a pull request changing 200 configs; the first run creates the comment, later runs update it.
+  const scenario = await actionScenario(CONFIG_COUNT);
+  const w4: ActionRun[] = [];
+  try {
+    for (let r = 0; r < processRuns; r++) w4.push(await scenario.run());
+  } finally {
+    await scenario.close();
+  }
+  const w4Ms = median(w4.map((a) => a.ms));
+  const w4CpuMs = medianOrNull(w4.map((a) => a.cpuMs));
+  line(`W4 action on a pull request changing ${CONFIG_COUNT} configs: median ${w4Ms.toFixed(0)} ms (CPU ${fmtNull(w4CpuMs, 0)} ms) over ${processRuns} runs; verdict ${w4[0]!.verdict}, ${w4[0]!.blocking} blocking, ${w4[0]!.files} files judged`);
+
+  // Start-up, interleaved so a burst of load touches all three alike.
+  const startup = { cli: [] as number[], action: [] as number[], node: [] as number[] };
+  for (let r = 0; r < startupRuns; r++) {
+    startup.node.push(await bareNodeStartupMs());
+    startup.cli.push(await cliStartupMs());
+    startup.action.push(await actionStartupMs());
+  }
+  const startupMs = { cli: median(startup.cli), action: median(startup.action), node: median(startup.node) };
+  line(`start-up to first output, median of ${startupRuns}: dist/cli.js ${startupMs.cli.toFixed(0)} ms, dist/index.js ${startupMs.action.toFixed(0)} ms, bare node ${startupMs.node.toFixed(0)} ms`);
+  const loadAfter = os.loadavg();
+  line(`load average (1, 5, 15 min) before ${loadBefore.map((x) => x.toFixed(2)).join(', ')}, after ${loadAfter.map((x) => x.toFixed(2)).join(', ')}`);
+
   const problems = [
     ...disagreements(fastResult, straight.result, 'engine vs straightforward'),
     ...w1Cold.flatMap((c) => disagreements(c.result, fastResult, 'cold child vs warm engine')),
     ...w2.slice(1).flatMap((c) => disagreements(c.result, w2[0].result, 'W2 run vs W2 run')),
   ];
+  const w3Json = w3Warm[0]!.json;
+  if (w3Cli.some((c) => c.json !== w3Json) || w3Warm.some((c) => c.json !== w3Json)) problems.push('W3 dist/cli.js output differs from the in-process output (or between runs)');
+  const decision = (a: ActionRun) => `${a.verdict} ${a.blocking} ${a.files}`;
+  if (w4.some((a) => decision(a) !== decision(w4[0]!)) || w4[0]!.files !== CONFIG_COUNT) problems.push(`W4 runs decided differently or judged the wrong number of files: ${w4.map(decision).join('; ')}`);
+  if (w4.some((a) => a.commentUrl === '')) problems.push('W4 wrote no report comment on some run');
   if (numpy.result) {
     const np = numpy.result;
     const shaped: ScanResult = { ...np, precision: { fp32: np.fp32, bf16: np.bf16, fp16: np.fp16 } };
@@ -198,6 +250,10 @@ function main(): void {
     w1WithinCalibrationRatio: ratios.w1OverCalibration <= TARGETS.w1MaxCalibrationRatio,
     w2WithinRss: w2RssMiB <= TARGETS.w2MaxRssMiB,
     w2WithinW1Ratio: ratios.w2OverW1Cold <= TARGETS.w2MaxW1Ratio,
+    w3WithinMs: w3CliMs <= TARGETS.w3MaxMs,
+    w4WithinMs: w4Ms <= TARGETS.w4MaxMs,
+    cliStartupWithinMs: startupMs.cli <= TARGETS.startupMaxMs,
+    actionStartupWithinMs: startupMs.action <= TARGETS.startupMaxMs,
   };
   line(`ratios: W1/calibration ${ratios.w1OverCalibration.toFixed(2)} (target <= ${TARGETS.w1MaxCalibrationRatio}), straightforward/W1 ${ratios.straightforwardOverW1.toFixed(1)}, numpy/W1 ${ratios.numpyOverW1 === null ? 'n/a' : ratios.numpyOverW1.toFixed(1)}, W2/W1 ${ratios.w2OverW1Cold.toFixed(2)} cold, ${ratios.w2OverW1Warm.toFixed(2)} against warm (target <= ${TARGETS.w2MaxW1Ratio})`);
   for (const [name, ok] of Object.entries(targets)) line(`${ok ? 'met   ' : 'MISSED'} ${name}`);
@@ -207,10 +263,18 @@ function main(): void {
     node: process.version,
     cpus: os.cpus().length,
     cpu: os.cpus()[0]?.model ?? null,
+    loadAverage: { before: loadBefore, after: loadAfter },
     pairs: theta.length,
     targets: TARGETS,
     w1: { span: W1.span, warmMs: fast.ms, warmMedianMs: w1Ms, coldMs: w1Cold.map((c) => c.ms), coldMedianMs: w1ColdMs },
     w2: { span: W2.span, coldMs: w2.map((c) => c.ms), coldMedianMs: w2Ms, peakRssMiB: w2RssMiB },
+    w3: {
+      configs: CONFIG_COUNT,
+      cli: { ms: w3Cli.map((c) => c.ms), medianMs: w3CliMs, cpuMs: w3Cli.map((c) => c.cpuMs), cpuMedianMs: w3CliCpuMs },
+      inProcess: { ms: w3Warm.map((c) => c.ms), medianMs: w3WarmMs },
+    },
+    w4: { configs: CONFIG_COUNT, ms: w4.map((a) => a.ms), medianMs: w4Ms, cpuMs: w4.map((a) => a.cpuMs), cpuMedianMs: w4CpuMs, verdict: w4[0]!.verdict, blocking: w4[0]!.blocking },
+    startup: { runs: startupRuns, cliMs: startup.cli, actionMs: startup.action, bareNodeMs: startup.node, medianMs: startupMs },
     calibration: { ms: calibration.ms, medianMs: median(calibration.ms) },
     straightforward: { ms: straight.ms, medianMs: median(straight.ms) },
     numpy: numpy.skipped ? { skipped: numpy.skipped } : { version: numpy.numpy, ms: numpy.ms, medianMs: numpy.medianMs },
@@ -224,6 +288,14 @@ function main(): void {
   if (strict && Object.values(targets).some((ok) => !ok)) process.exitCode = 1;
 }
 
+function medianOrNull(xs: (number | null)[]): number | null {
+  return xs.some((x) => x === null) ? null : median(xs as number[]);
+}
+
+function fmtNull(x: number | null, digits: number): string {
+  return x === null ? 'n/a' : x.toFixed(digits);
+}
+
 const childName = process.argv.find((a) => a.startsWith('--child='))?.split('=')[1];
 if (childName) child(childName);
-else main();
+else await main();

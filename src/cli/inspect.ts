@@ -13,6 +13,9 @@ export const INSPECT_USAGE = `usage: context-reach inspect FILE... [--json] [--a
        [--served-span N] [--trained-span N] [--sequences N] [--device-gib G]
        [--weight-dtype D] [--cache-dtype D] [--position-dtype D]`;
 
+/** Files read ahead of the one being measured (default: `8`). */
+const READ_AHEAD = 8;
+
 /** `inspect`: measure each file; exit status 2 when any file could not be read. */
 export async function runInspect(args: string[], files: FileSource, io: Console): Promise<number> {
   const { values, positionals } = parseArgs({
@@ -26,9 +29,18 @@ export async function runInspect(args: string[], files: FileSource, io: Console)
   const overrides = servingPatch(values);
   const reports: FileReport[] = [];
   const failures: FileFailure[] = [];
-  for (const path of positionals) {
+  // Reading runs ahead of measuring by a few files, so the disk waits overlap the computing.
+  const pending: (Promise<Uint8Array> | undefined)[] = [];
+  let started = 0;
+  for (const [i, path] of positionals.entries()) {
+    for (; started < Math.min(i + READ_AHEAD, positionals.length); started++) {
+      pending[started] = files.read(positionals[started]!);
+      pending[started]!.catch(() => {}); // handled when its turn comes
+    }
+    const reading = pending[i]!;
+    pending[i] = undefined; // the bytes are released once measured
     try {
-      const text = decodeText(await files.read(path), path);
+      const text = decodeText(await reading, path);
       // Blocking findings get their remedies, judged with the built-in rules.
       reports.push(remedyFileReport(inspectModel(text, path, { at: values.at, overrides })));
     } catch (error) {

@@ -54,7 +54,8 @@ function realLiteral(min: number, max: number, json: boolean): fc.Arbitrary<Lite
 /** A span: small enough to scan fast, or far past the scan bounds (refused cheaply). */
 function spanLiteral(json: boolean): fc.Arbitrary<Literal> {
   return fc.oneof(
-    { weight: 8, arbitrary: fc.integer({ min: 1, max: MAX_GENERATED_SPAN }).map(String) },
+    { weight: 6, arbitrary: fc.integer({ min: 1, max: 4096 }).map(String) },
+    { weight: 2, arbitrary: fc.integer({ min: 1, max: MAX_GENERATED_SPAN }).map(String) },
     { weight: 2, arbitrary: fc.constantFrom('0', '-0', '-4096', '0.5', '1e400', '9007199254740993', '1099511627776', '1e300') },
     { weight: 1, arbitrary: json ? fc.constantFrom(...JSON_SPECIALS) : fc.constantFrom('.nan', '0x10') },
     { weight: 1, arbitrary: otherKinds },

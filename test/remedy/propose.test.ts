@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { computeMetrics } from '../../src/core/metrics/compute.js';
 import { applyChange } from '../../src/core/remedy/apply-change.js';
+import { proposeRemedy } from '../../src/core/remedy/propose.js';
 import { contextOf, modelText, remedyFor } from './helpers.js';
 
 // Each kind of remedy on a small invented model (16 layers, width 2048, 16 heads, 4 key/value
@@ -148,6 +149,18 @@ describe('proposeRemedy(ctx, finding) for span-grew-code-unchanged', () => {
     const r = remedyFor(modelText({ position: 'code: learned', declared: 2048 }), 'span-grew-code-unchanged', { base: modelText({ position: 'code: learned', declared: 1024 }) });
     expect(r.remedy).toBeNull();
     expect(r.remedyWhyNot).toBe('No change found that passes: a learned position code has no scaling factor.');
+  });
+});
+
+describe('proposeRemedy(ctx, finding) within its work budget', () => {
+  it('runs no proof past what is left of the file\'s budget, and says so', () => {
+    const { ctx } = contextOf(modelText({ serving: 'span: 16384' }));
+    ctx.work.left = 1000;
+    const finding = ctx.head.findings.find((f) => f.rule === 'span-past-reach')!;
+    const r = proposeRemedy(ctx, finding);
+    expect(r.remedy).toBeNull();
+    // 64 pairs × 16,384 offsets for the factor; 64 × 4,096 for the shorter span.
+    expect(r.remedyWhyNot).toBe('No change found that passes: a linear factor of 4 or more was not proven: its proof would scan 1,048,576 pair·offsets, past what is left of the search\'s budget (2,147,483,648 per finding, 4,294,967,296 per file); serving at most 4,096 (4k) tokens was not proven: its proof would scan 262,144 pair·offsets, past what is left of the search\'s budget (2,147,483,648 per finding, 4,294,967,296 per file).');
   });
 });
 

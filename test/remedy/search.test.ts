@@ -93,7 +93,7 @@ describe('searchRotaryBase(from, direction, criterion)', () => {
 
   it('after the walk\'s budget, doubles and bisects, and still returns only a base that passed', () => {
     const seen: number[] = [];
-    const found = searchRotaryBase(10, 'up', (b) => { seen.push(b); return { passes: b >= 123456789, cost: 1 }; }, { walkCost: 5, totalCost: 1000, doublings: 30, bisections: 40, gridSteps: 30 });
+    const found = searchRotaryBase(10, 'up', (b) => { seen.push(b); return { passes: b >= 123456789, cost: 1 }; }, { walkCost: 5, totalCost: 1000, evaluations: 4000, doublings: 30, bisections: 40, gridSteps: 30 });
     expect(found.capped).toBe(true);
     expect(found.base).toBeGreaterThanOrEqual(123456789);
     expect(found.base).toBe(130000000);
@@ -101,15 +101,21 @@ describe('searchRotaryBase(from, direction, criterion)', () => {
   });
 
   it('is null when nothing passes within the caps, and for a base that is not a positive number', () => {
-    expect(searchRotaryBase(10000, 'up', () => ({ passes: false, cost: 1 }), { walkCost: 10, totalCost: 1000, doublings: 5, bisections: 5, gridSteps: 5 })).toMatchObject({ base: null, capped: true });
+    expect(searchRotaryBase(10000, 'up', () => ({ passes: false, cost: 1 }), { walkCost: 10, totalCost: 1000, evaluations: 4000, doublings: 5, bisections: 5, gridSteps: 5 })).toMatchObject({ base: null, capped: true });
     expect(searchRotaryBase(Number.NaN, 'up', () => ({ passes: true, cost: 1 })).base).toBeNull();
     expect(searchRotaryBase(0, 'up', () => ({ passes: true, cost: 1 })).base).toBeNull();
   });
 
   it('stops when the whole search\'s work is spent, returning the last base that passed', () => {
-    const found = searchRotaryBase(10, 'up', (b) => ({ passes: b >= 5000, cost: 1 }), { walkCost: 3, totalCost: 12, doublings: 30, bisections: 40, gridSteps: 30 });
+    const found = searchRotaryBase(10, 'up', (b) => ({ passes: b >= 5000, cost: 1 }), { walkCost: 3, totalCost: 12, evaluations: 4000, doublings: 30, bisections: 40, gridSteps: 30 });
     expect(found.capped).toBe(true);
     expect(found.base).toBeGreaterThanOrEqual(5000);
+  });
+
+  it('stops after its evaluation cap even when each evaluation costs nothing', () => {
+    const found = searchRotaryBase(10, 'up', () => ({ passes: false, cost: 0 }), { walkCost: 1e9, totalCost: 1e9, evaluations: 50, doublings: 30, bisections: 40, gridSteps: 30 });
+    expect(found).toMatchObject({ base: null, capped: true });
+    expect(found.evaluations).toBeLessThanOrEqual(51);
   });
 
   it('never walks down to a base of 1 or less', () => {

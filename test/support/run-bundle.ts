@@ -16,6 +16,17 @@ export interface BundleRun {
   /** Every file the run wrote into its temporary folder, for leak checks. */
   files: Record<string, string>;
   elapsedMs: number;
+  /** Peak resident set size of the child in MiB, when it ran with `measureMemory`. */
+  peakRssMiB: number | null;
+}
+
+/** Preload that prints the child's peak resident set size on exit. */
+export const PEAK_RSS_PRELOAD = resolve(import.meta.dirname, 'peak-rss.cjs');
+
+/** The peak RSS line `peak-rss.cjs` prints, in MiB, and stderr without it. */
+export function takePeakRss(stderr: string): { peakRssMiB: number | null; stderr: string } {
+  const match = /\n?@@peak-rss-kib (\d+)\n/.exec(stderr);
+  return match ? { peakRssMiB: Number(match[1]) / 1024, stderr: stderr.replace(match[0], '') } : { peakRssMiB: null, stderr };
 }
 
 /** Parses the `name<<delimiter` blocks the toolkit appends to GITHUB_OUTPUT. */
@@ -66,6 +77,8 @@ export async function runBundle(options: {
   timeoutMs?: number;
   /** The bundle to run (default: `ACTION_BUNDLE`); the benchmark, compiled elsewhere, names it. */
   bundle?: string;
+  /** Options for node before the bundle, e.g. the benchmark's `--require` of a CPU-time report (default: none). */
+  nodeArgs?: string[];
 }): Promise<BundleRun> {
   const temp = mkdtempSync(join(tmpdir(), 'context-reach-runner-'));
   const eventPath = join(temp, 'event.json');
@@ -90,7 +103,7 @@ export async function runBundle(options: {
   };
   for (const [name, value] of Object.entries(options.inputs)) env[`INPUT_${name.toUpperCase()}`] = value;
   const started = performance.now();
-  const child = spawn(process.execPath, [options.bundle ?? ACTION_BUNDLE], { cwd: options.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, [...(options.nodeArgs ?? []), options.bundle ?? ACTION_BUNDLE], { cwd: options.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
   let stdout = '';
   let stderr = '';
   child.stdout.on('data', (chunk) => { stdout += chunk; });
@@ -110,8 +123,9 @@ export async function runBundle(options: {
     }
   };
   walk(temp);
+  const measured = takePeakRss(stderr);
   return {
-    code, stdout, stderr, elapsedMs, files,
+    code, stdout, stderr: measured.stderr, elapsedMs, files, peakRssMiB: measured.peakRssMiB,
     outputs: parseOutputFile(readFileSync(outputPath, 'utf8')),
     summary: readFileSync(summaryPath, 'utf8'),
     annotations: parseAnnotations(stdout),

@@ -7,8 +7,8 @@ import { BUILT_IN_JUDGING } from '../compare/judging.js';
 import { isMetricPath, metricValue } from '../compare/metric-path.js';
 import type { FileReport } from '../inspect.js';
 import type { Finding } from '../model.js';
-import { changeEntries } from './apply-change.js';
-import { proposeRemedy } from './propose.js';
+import { applyChange, changeEntries } from './apply-change.js';
+import { proofCost, proposeRemedy } from './propose.js';
 import { prove, remedyContext, type RemedyContext } from './prove.js';
 import type { Change, CombinedRemedy, RemedyFields } from './types.js';
 
@@ -20,7 +20,8 @@ const UNREADABLE: RemedyFields = {
 
 /**
  * Every blocking finding's first remedy applied at once, proven the same way; null with fewer
- * than two remedies (one is already shown) or when two remedies set one field differently.
+ * than two remedies (one is already shown), when two remedies set one field differently, or when
+ * the file's proof budget is spent.
  */
 export function combineRemedies(ctx: RemedyContext, findings: readonly Partial<RemedyFields>[]): CombinedRemedy | null {
   const remedies = findings.map((f) => f.remedy).filter((r) => r !== null && r !== undefined);
@@ -32,6 +33,10 @@ export function combineRemedies(ctx: RemedyContext, findings: readonly Partial<R
       change[key] = value;
     }
   }
+  // Within the file's proof budget, like every other proof.
+  const cost = proofCost(applyChange(ctx.head.spec, change));
+  if (cost > ctx.work.left) return null;
+  ctx.work.left -= cost;
   const proof = prove(ctx, null, change);
   const metrics: Record<string, number | null> = {};
   for (const remedy of remedies) {

@@ -27,7 +27,7 @@ import { isRuleId, RULES } from '../rules/catalog.js';
 import { formatInteger, formatNumber, formatTokens } from '../units.js';
 import { applyChange } from './apply-change.js';
 import { lightMetric, rangeMetrics, budgetMetrics } from './light-metrics.js';
-import { prove, type FindingIdentity, type Proof, type RemedyContext } from './prove.js';
+import { MAX_FILE_PROOF_WORK, prove, type FindingIdentity, type Proof, type RemedyContext } from './prove.js';
 import { searchRotaryBase, type BaseDirection, type BaseTrial } from './rotary-base.js';
 import { coveringFactor } from './scaling-factor.js';
 import type { Change, Remedy, RemedyFields } from './types.js';
@@ -38,8 +38,8 @@ export const MAX_PROOFS_PER_KIND = 4;
 
 /**
  * pair·offsets: work all the proofs for one finding may do, a proof costing its pairs times its
- * span (the positional scans dominate); the first proof always runs (default: `2^31`, about 1.5 s
- * at the measured 0.75 ns per pair·offset of `computeMetrics`).
+ * span; a proof past it (or past the file's `MAX_FILE_PROOF_WORK`) is not run (default: `2^31`,
+ * about 1.6 s at the measured 0.75 ns per pair·offset of `computeMetrics`).
  */
 export const MAX_PROOF_WORK = 2 ** 31;
 
@@ -49,11 +49,11 @@ interface Target extends FindingIdentity {
   /** The base version's value of the limited metric (for `max-increase-pct`). */
   baseValue: number | null;
   /** Proof work left for this finding (see `MAX_PROOF_WORK`). */
-  work: { left: number; spent: boolean };
+  work: { left: number };
 }
 
 /** pair·offsets a proof of `spec` scans: its frequency pairs times its span (1 without either). */
-function proofCost(spec: ModelSpec): number {
+export function proofCost(spec: ModelSpec): number {
   const pairs = baseFrequencies(spec)?.length ?? 0;
   return Math.max(1, pairs) * Math.max(1, evaluationSpan(spec) ?? 1);
 }
@@ -132,11 +132,11 @@ function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], sh
   let proofs = 0;
   for (const change of candidates.slice(0, MAX_PROOFS_PER_KIND)) {
     const cost = proofCost(applyChange(ctx.head.spec, change));
-    if (target.work.spent && cost > target.work.left) {
-      return none(`${what} was not proven: this finding's proof budget (${formatInteger(MAX_PROOF_WORK)} pair·offsets) is spent`);
+    if (cost > target.work.left || cost > ctx.work.left) {
+      return none(`${what} was not proven: its proof would scan ${formatInteger(cost)} pair·offsets, past what is left of the search's budget (${formatInteger(MAX_PROOF_WORK)} per finding, ${formatInteger(MAX_FILE_PROOF_WORK)} per file)`);
     }
     target.work.left -= cost;
-    target.work.spent = true;
+    ctx.work.left -= cost;
     proofs += 1;
     const proof = prove(ctx, target, change);
     if (proof.passes) return { remedy: remedyOf(change, proof, shown, target), whyNot: null };
@@ -223,11 +223,19 @@ function cacheDtypeKind(ctx: RemedyContext, target: Target, resolves: Resolves):
     `a ${candidates[0]!['dtypes.cache']} cache`);
 }
 
-/** Divisors of `n` below `below`, largest first (grouped-query attention needs kvHeads to divide heads). */
+/**
+ * Divisors of `n` below `below`, largest first, at most 64 (grouped-query attention needs kvHeads
+ * to divide heads). Trial division up to sqrt(n), so a head count near 2^53 from a hostile file
+ * costs about 10^8 steps, not 10^16.
+ */
 function divisorsBelow(n: number, below: number): number[] {
-  const out: number[] = [];
-  for (let d = Math.min(n, below - 1); d >= 1 && out.length < 64; d--) if (n % d === 0) out.push(d);
-  return out;
+  const found: number[] = [];
+  for (let d = 1; d * d <= n; d++) {
+    if (n % d !== 0) continue;
+    if (d < below) found.push(d);
+    if (n / d !== d && n / d < below) found.push(n / d);
+  }
+  return found.sort((a, b) => b - a).slice(0, 64);
 }
 
 /** The most key/value heads, a divisor of the heads, that clear the finding. */
@@ -285,7 +293,7 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
   const onlyMin = metric === 'discriminationSpan' && direction === 'up' && limit.max === undefined && limit.maxIncreasePct === undefined;
   const criterion = (base: number): BaseTrial => {
     const theta = scaledAt(base);
-    if (theta === null) return { passes: false, cost: 0 };
+    if (theta === null) return { passes: false, cost: 1 };
     if (onlyMin) {
       const found = firstNegativeOffset(theta, 1, Math.min(T, Math.ceil(limit.min as number)));
       return { passes: found.offset === null, cost: found.elements };
@@ -355,7 +363,7 @@ export function proposeRemedy(ctx: RemedyContext, finding: Finding & { metric?: 
   const metric = finding.metric;
   const limit = finding.rule === 'limit-crossed' && metric ? ctx.judging.limits[metric] ?? null : null;
   const baseValue = metric && ctx.base && isMetricPath(metric) ? metricValue(ctx.base.metrics, metric) : null;
-  const target: Target = { rule: finding.rule, ...(metric ? { metric } : {}), limit, baseValue, work: { left: MAX_PROOF_WORK, spent: false } };
+  const target: Target = { rule: finding.rule, ...(metric ? { metric } : {}), limit, baseValue, work: { left: MAX_PROOF_WORK } };
   const kinds = kindsFor(ctx, target);
   if (typeof kinds === 'string') return { remedy: null, remedyWhyNot: kinds, remedyAlternatives: [] };
   const resolves = resolver(ctx, target);

@@ -29,19 +29,21 @@ export interface BaseTrial {
 }
 
 /**
- * Caps of each stage (defaults: a walk of 2^29 cost units, 2^31 in all; 30 doublings; 40
- * bisections; 30 grid steps).
+ * Caps of each stage (defaults: a walk of 2^29 cost units, 2^31 in all; 4000 evaluations in all;
+ * 30 doublings; 40 bisections; 30 grid steps).
  */
 export interface BaseSearchCaps {
   walkCost: number;
   /** Work of the whole search; past it the search returns the last base that passed, if any. */
   totalCost: number;
+  /** Criterion evaluations of the whole search, whatever they cost. */
+  evaluations: number;
   doublings: number;
   bisections: number;
   gridSteps: number;
 }
 
-export const DEFAULT_BASE_CAPS: BaseSearchCaps = { walkCost: 2 ** 29, totalCost: 2 ** 31, doublings: 30, bisections: 40, gridSteps: 30 };
+export const DEFAULT_BASE_CAPS: BaseSearchCaps = { walkCost: 2 ** 29, totalCost: 2 ** 31, evaluations: 4000, doublings: 30, bisections: 40, gridSteps: 30 };
 
 export interface BaseSearch {
   /** The base found; null when none passed within the caps. */
@@ -101,7 +103,9 @@ export function searchRotaryBase(
   const test = (b: number) => {
     evaluations += 1;
     const trial = criterion(b);
-    spent += trial.cost;
+    // Each evaluation counts at least 1, and reaching the evaluation cap counts as spending everything.
+    spent += Math.max(1, trial.cost);
+    if (evaluations >= caps.evaluations) spent = Math.max(spent, caps.totalCost);
     return trial.passes;
   };
   if (!(from > 0 && Number.isFinite(from))) return { base: null, evaluations, capped: false };

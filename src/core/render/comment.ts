@@ -69,7 +69,27 @@ function limitText(delta: MetricDelta): string {
   return parts.join(', ');
 }
 
+/**
+ * The two metric tables depend on the file alone, and `renderComment` builds every section again
+ * for each trimming attempt (up to five, for the comment and again for the summary): each table is
+ * built once per file. With 200 files that is most of the action's rendering time.
+ */
+const tableMemo = { delta: new WeakMap<FileDecision, string>(), full: new WeakMap<FileDecision, string>() };
+
+function memo(cache: WeakMap<FileDecision, string>, file: FileDecision, build: (file: FileDecision) => string): string {
+  let text = cache.get(file);
+  if (text === undefined) {
+    text = build(file);
+    cache.set(file, text);
+  }
+  return text;
+}
+
 function deltaTable(file: FileDecision): string {
+  return memo(tableMemo.delta, file, buildDeltaTable);
+}
+
+function buildDeltaTable(file: FileDecision): string {
   if (file.deltas.length === 0) return '_No metric changed and none is limited by the policy._';
   return markdownTable([
     ['metric', 'base', 'head', 'change', 'limit', 'state'],
@@ -89,6 +109,10 @@ function findingsTable(file: FileDecision, ctx: MarkdownContext): string {
 }
 
 function fullMetrics(file: FileDecision): string {
+  return memo(tableMemo.full, file, buildFullMetrics);
+}
+
+function buildFullMetrics(file: FileDecision): string {
   const rows = METRIC_PATHS.map((metric) => {
     const b = file.base ? formatMetric(metric, metricOf(file.base.metrics, metric)) : '—';
     const h = file.head ? formatMetric(metric, metricOf(file.head.metrics, metric)) : '—';

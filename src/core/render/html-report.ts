@@ -101,11 +101,16 @@ function fileSection(file: FileDecision, index: number): Markup {
   const variant = positionVariant(file);
   const variantSpectrum = variant ? spectrumOf(variant.report) : null;
   const variantCurve = variant ? similarityOf(variant.report) : null;
+  const headCurve = similarityOf(file.head);
   const charts = [
     spectrumChart(id, spectrumOf(file.base), spectrumOf(file.head), variant && variantSpectrum ? { spectrum: variantSpectrum, label: variant.label } : null),
     memorySpanChart(id, file.base, file.head, memoryVariant(file)),
-    similarityChart(id, similarityOf(file.base), similarityOf(file.head), variant && variantCurve ? { series: variantCurve, label: variant.label } : null),
+    similarityChart(id, similarityOf(file.base), headCurve, variant && variantCurve ? { series: variantCurve, label: variant.label } : null),
   ].filter((c): c is Markup => c !== null);
+  const span = file.head?.metrics.evaluationSpan ?? null;
+  const skipped = headCurve === null && file.head?.metrics.fastestWavelength != null && span !== null
+    ? h('p', { class: 'muted' }, `The similarity curve over ${formatInteger(span)} offsets is not drawn: visiting every offset would take too long for a report (discriminationSpan and separationFloor are in the table).`)
+    : null;
   return h('section', { class: 'file', id, 'data-file': index + 1 },
     h('header', null,
       h('span', { class: `chip ${file.verdict}` }, VERDICT_WORD[file.verdict]),
@@ -116,6 +121,7 @@ function fileSection(file: FileDecision, index: number): Markup {
     fixSummary(file),
     changeCards(file),
     charts.length > 0 ? h('div', { class: 'charts' }, charts) : null,
+    skipped,
     findingsSection(file),
     file.deltas.length > 0 ? h('h3', null, 'Metrics that changed or are limited') : null,
     deltaTable(file));

@@ -16,6 +16,12 @@ import { h, type Markup } from './markup.js';
 /** Buckets per curve: about one per pixel column of the wide chart. */
 const BUCKETS = 800;
 
+/**
+ * pair·offsets: longest curve drawn, every offset being visited (default: `2^31`, about two
+ * seconds); past it the page says so instead of drawing.
+ */
+export const MAX_CURVE_WORK = 2 ** 31;
+
 export interface SimilaritySeries {
   buckets: SimilarityBucket[];
   span: number;
@@ -29,6 +35,7 @@ export function similarityOf(report: FileReport | null): SimilaritySeries | null
   if (!report) return null;
   const span = report.metrics.evaluationSpan;
   const plan = frequencyPlan(report.spec, span, report.metrics.trainedSpan);
+  if (plan && span !== null && plan.scaled.length * span > MAX_CURVE_WORK) return null;
   const buckets = plan ? similarityCurve(plan.scaled, span, BUCKETS, 'log') : null;
   if (!buckets || span === null) return null;
   return { buckets, span, trained: report.metrics.trainedSpan, discrimination: report.metrics.discriminationSpan };
