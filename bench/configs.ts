@@ -134,9 +134,9 @@ export function generatedConfigs(count: number, seed = 4): ConfigFile[] {
 }
 
 /**
- * A pull request over `count` configs: base and head versions of each, the head doubling the
- * declared span (capped at `MAX_CONFIG_SPAN`) or, at the cap, changing the rotary base, so every
- * file differs and is judged at both commits.
+ * A pull request over `count` configs, as a large refactoring might be: every file differs, so
+ * each is judged at both commits; one in ten doubles its declared span (capped at
+ * `MAX_CONFIG_SPAN`; at the cap the rotary base doubles instead), the rest gain a layer.
  */
 export function pullRequestConfigs(count: number, seed = 4): { base: ConfigFile[]; head: ConfigFile[] } {
   const next = seeded(seed);
@@ -145,7 +145,8 @@ export function pullRequestConfigs(count: number, seed = 4): { base: ConfigFile[
   for (let i = 0; i < count; i++) {
     const shape = shapeOf(next);
     base.push(fileOf(shape, i));
-    const grown = shape.span < MAX_CONFIG_SPAN ? { ...shape, span: shape.span * 2 } : { ...shape, base: shape.base * 2, layers: shape.layers + 1 };
+    const grown = i % 10 !== 0 ? { ...shape, layers: shape.layers + 1 }
+      : shape.span < MAX_CONFIG_SPAN ? { ...shape, span: shape.span * 2 } : { ...shape, base: shape.base * 2 };
     head.push(fileOf(grown, i));
   }
   return { base, head };

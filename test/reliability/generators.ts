@@ -200,8 +200,36 @@ export interface GeneratedPair {
 const CHECKPOINT_PATH = 'models/generated/config.json';
 const OWN_PATH = 'models/generated/model.reach.yaml';
 
+/** A consistent checkpoint config (heads divide evenly, sizes in range): what most pull requests hold. */
+export const validCheckpointConfig: fc.Arbitrary<string> = fc.record({
+  heads: fc.constantFrom(1, 2, 4, 8, 16, 32),
+  headDim: fc.constantFrom(16, 32, 64, 128),
+  kvShare: fc.constantFrom(1, 2, 4, 8),
+  layers: fc.integer({ min: 1, max: 48 }),
+  span: fc.oneof({ weight: 4, arbitrary: fc.integer({ min: 128, max: 8192 }) }, { weight: 1, arbitrary: fc.integer({ min: 8192, max: MAX_GENERATED_SPAN }) }),
+  theta: fc.double({ min: 1e3, max: 1e6, noNaN: true }),
+  vocab: fc.integer({ min: 256, max: 160_000 }),
+  dtype: fc.constantFrom('bfloat16', 'float16', 'float32'),
+  scaling: fc.option(fc.record({ rope_type: fc.constantFrom('linear', 'dynamic', 'yarn'), factor: fc.constantFrom(2, 4, 8) }), { nil: null }),
+}).map((c) => `${JSON.stringify({
+  model_type: 'llama',
+  hidden_size: c.heads * c.headDim,
+  intermediate_size: 4 * c.heads * c.headDim,
+  num_hidden_layers: c.layers,
+  num_attention_heads: c.heads,
+  num_key_value_heads: Math.max(1, c.heads / Math.min(c.kvShare, c.heads)),
+  vocab_size: c.vocab,
+  max_position_embeddings: c.span,
+  rope_theta: c.theta,
+  torch_dtype: c.dtype,
+  rope_scaling: c.scaling === null ? null : { ...c.scaling, original_max_position_embeddings: Math.max(1, Math.floor(c.span / c.scaling.factor)) },
+}, null, 2)}\n`);
+
 /** One changed config: a base (or none) and a head, both generated in the same dialect. */
 export const generatedPair: fc.Arbitrary<GeneratedPair> = fc.oneof(
+  fc.tuple(fc.option(validCheckpointConfig, { nil: null }), validCheckpointConfig).map(([base, head]) => ({
+    path: CHECKPOINT_PATH, base: base === null ? null : new TextEncoder().encode(base), head: new TextEncoder().encode(head), damage: 'none' as const,
+  })),
   fc.tuple(fc.option(checkpointConfig, { nil: null }), checkpointConfig, damage).map(([base, head, hurt]) => ({
     path: CHECKPOINT_PATH, base: base === null ? null : new TextEncoder().encode(base), head: damaged(head, hurt), damage: hurt.kind,
   })),

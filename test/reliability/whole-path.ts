@@ -9,6 +9,7 @@
  * request exactly as it would alone.
  */
 import fc from 'fast-check';
+import { writeFileSync } from 'node:fs';
 import { afterAll, describe, expect, it } from 'vitest';
 import type { FileDecision, GateReport } from '../../src/core/compare/decide.js';
 import { runGate, type ContentSource } from '../../src/core/gate.js';
@@ -57,9 +58,13 @@ function gate(pair: GeneratedPair | null): Promise<GateReport> {
 /** The control file's decision with nothing else in the pull request. */
 const alone = gate(null).then((report) => report.files.find((f) => f.path === CONTROL)!);
 
-const stats = { runs: 0, readable: 0, unreadable: 0, damaged: 0, findings: 0, blocked: 0, totalMs: 0, maxMs: 0, slowest: '' };
+const stats = { runs: 0, clean: 0, readable: 0, unreadable: 0, damaged: 0, findings: 0, blocked: 0, totalMs: 0, maxMs: 0, slowest: '' };
+
+/** When set, each generated pull request is written here before it runs, so a hang names its input. */
+const DUMP = process.env.CONTEXT_REACH_DUMP_CASE;
 
 async function checkOne(pair: GeneratedPair, control: FileDecision): Promise<void> {
+  if (DUMP) writeFileSync(`${DUMP}.${process.pid}`, `${pair.path}\n---base\n${pair.base ? new TextDecoder().decode(pair.base) : 'null'}\n---head\n${new TextDecoder().decode(pair.head)}`);
   const started = performance.now();
   const report = await gate(pair);
   const body = renderComment(report, { blobUrl: 'https://github.example/o/r/blob/' + HEAD });
@@ -88,6 +93,7 @@ async function checkOne(pair: GeneratedPair, control: FileDecision): Promise<voi
   if (pair.damage !== 'none') stats.damaged += 1;
   stats.findings += file!.findings.length;
   if (file!.verdict === 'block') stats.blocked += 1;
+  else stats.clean += 1;
 }
 
 /** Defines part `part` of the property: `blocks` tests of `runsPerBlock` generated pull requests each. */
@@ -102,7 +108,7 @@ export function describeWholePath(part: number, blocks: number, runsPerBlock: nu
 
     afterAll(() => {
       // Figures for docs/reliability.md.
-      console.log(`whole-path property, part ${part}: ${stats.runs} runs, ${stats.readable} read as models, ${stats.unreadable} unreadable (finding with file and line), ${stats.damaged} with damaged bytes, ${stats.blocked} blocked, ${stats.findings} findings; mean ${(stats.totalMs / stats.runs).toFixed(2)} ms, max ${stats.maxMs.toFixed(0)} ms per pull request`);
+      console.log(`whole-path property, part ${part}: ${stats.runs} runs, ${stats.readable} read as models, ${stats.unreadable} unreadable (finding with file and line), ${stats.damaged} with damaged bytes, ${stats.blocked} blocked, ${stats.clean} passed or warned, ${stats.findings} findings; mean ${(stats.totalMs / stats.runs).toFixed(2)} ms, max ${stats.maxMs.toFixed(0)} ms per pull request`);
     });
   });
 }

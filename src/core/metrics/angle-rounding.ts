@@ -14,7 +14,7 @@
  * run can do better. Below `2^m` (fp32: the whole of `T <= 2^24`) the run ends coincide and a
  * tight descending loop with Math.fround checks the bound once per chunk of positions.
  * Blurred pairs: in a binade of the angle with spacing u, neighbouring angles `x`, `x + t`
- * cannot round together when `t > u`, and must when `t < u/2` and the angles cover `2u`
+ * cannot round together when `t >= u`, and must when `t < u/2` and the angles cover `2u`
  * (an open rounding interval of width u then holds two of them); only the remaining binades
  * are scanned, stopping at the first collision.
  */
@@ -180,7 +180,9 @@ function pairBlurred(format: FloatFormat, th: number, span: number): boolean {
   const eTop = binaryExponent(top * t);
   for (let e = binaryExponent(t); e <= eTop; e++) {
     const u = 2 ** (Math.max(e, emin) - m + 1);
-    if (t > u) continue;
+    // t = u too: the angles in this binade are then distinct multiples of u, each held exactly
+    // (a power-of-two frequency, e.g. base 2^40 over 200 channels, would otherwise walk the binade).
+    if (t >= u) continue;
     const floorEdge = 2 ** e;
     const ceilEdge = 2 ** (e + 1);
     let qLo = Math.max(2, Math.ceil(floorEdge / t));
