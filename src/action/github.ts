@@ -349,8 +349,8 @@ function outcomeUnknown(error: unknown): boolean {
   return error instanceof ApiError && (error.status === 0 || error.status >= 500);
 }
 
-/** Tries to create a comment at most this many times when the answers are lost. */
-const CREATE_ATTEMPTS = 3;
+/** Tries to create a comment at most this many times when the answers are lost, as the retry plugin would (1 + 3 retries). */
+const CREATE_ATTEMPTS = 4;
 
 /**
  * Keeps exactly one report comment: updates the one found by `marker`, creates one when there

@@ -3,6 +3,7 @@ import type { GateReport, Verdict } from '../core/compare/decide.js';
 import { runGate, type ContentSource } from '../core/gate.js';
 import { planAnnotations } from '../core/render/annotations.js';
 import { renderComment } from '../core/render/comment.js';
+import { renderFailure } from '../core/render/failure.js';
 import { renderGateJson } from '../core/render/gate-json.js';
 import { renderHtmlReport } from '../core/render/html-report.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
@@ -127,9 +128,17 @@ export async function runAction(deps: ActionDeps): Promise<void> {
       labels, notices: gathered.notices,
     });
   } catch (error) {
-    // A policy that cannot be read fails closed: the check fails and says where.
+    // A policy that cannot be read fails closed: the check fails and says where, and an earlier
+    // comment does not go on saying the pull request passes.
     const message = `context-reach could not judge this change: ${error instanceof Error ? error.message : String(error)}`;
-    setOutputs(out, { verdict: 'block', blocking: 1, warnings: 0 }, '', '');
+    const body = renderFailure(message);
+    let commentUrl = '';
+    if (settings.comment === 'update' && event.pullNumber !== null && api) {
+      commentUrl = await publishComment(api, { owner: event.owner, repo: event.repo, issueNumber: event.pullNumber, marker: COMMENT_MARKER, body })
+        .then((published) => published.comment.url, () => '');
+    }
+    await out.summary(body);
+    setOutputs(out, { verdict: 'block', blocking: 1, warnings: 0 }, '', commentUrl);
     out.fail(message);
     return;
   }

@@ -69,6 +69,18 @@ describe('renderComment(report)', () => {
   });
 });
 
+describe('renderComment(report) with hundreds of blocking files', () => {
+  it('lists the first 20 blockers, names the rest by count, and stays under the limit', () => {
+    const many = gateOver(Array.from({ length: 300 }, (_, i) => ({ path: `models/family-${i}/variant/config.json`, base: {}, head: { max_position_embeddings: 8192 } })));
+    const body = renderComment(many);
+    expect(body.length).toBeLessThanOrEqual(COMMENT_LIMIT);
+    expect(body.split('\n')[0]).toBe(COMMENT_MARKER);
+    expect(body).toContain('- … and 280 more blocking findings, listed under their files below.');
+    const html = marked.parse(body, { gfm: true, async: false }) as string;
+    expect((html.match(/<details/g) ?? []).length).toBe((html.match(/<\/details>/g) ?? []).length);
+  });
+});
+
 describe('planAnnotations(report)', () => {
   it('keeps at most 10 per level, errors first, and counts the rest', () => {
     // A longer span (block) and a narrower rotary width (warn) in each of 14 files.

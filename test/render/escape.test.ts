@@ -78,7 +78,15 @@ describe('codeSpan(text)', () => {
 
 describe('encodePath(path)', () => {
   it('percent-encodes each segment so a path cannot leave the link', () => {
-    expect(encodePath('models/a b/c)d.json')).toBe('models/a%20b/c)d.json');
+    expect(encodePath('models/a b/c)d.json')).toBe('models/a%20b/c%29d.json');
     expect(encodePath('x/../y?z#w')).toBe('x/../y%3Fz%23w');
+  });
+
+  it('encodes the parentheses that would end a markdown link target, and what markdown reads as emphasis', () => {
+    // RFC 3986 §2.3 leaves only ALPHA, DIGIT, "-", ".", "_", "~" unreserved; "~" is encoded too as GFM strikethrough.
+    expect(encodePath("a)www.evil.example **b** ~~c~~!'(")).toBe('a%29www.evil.example%20%2A%2Ab%2A%2A%20%7E%7Ec%7E%7E%21%27%28');
+    const html = render(`[line 1](https://github.example/o/r/blob/1/${encodePath('a)www.evil.example **b**/config.json')}#L3)`);
+    expect(html.match(/<a /g)).toHaveLength(1);
+    expect(html).not.toMatch(/<(strong|em|del)>/);
   });
 });

@@ -193,12 +193,52 @@ function pairBlurred(format: FloatFormat, th: number, span: number): boolean {
     while (qHi + 1 <= top && (qHi + 1) * t < ceilEdge) qHi++;
     if (qLo > qHi) continue;
     if (t < u / 2 && (qHi - qLo) * t >= 2 * u) return true;
-    let prev = roundToFormat((qLo - 1) * t, format);
-    for (let q = qLo; q <= qHi; q++) {
+    // Below: t < u/2 over a short stretch (a few steps each), or u/2 <= t < u (solved, not walked).
+    if (roundToFormat(qLo * t, format) === roundToFormat((qLo - 1) * t, format)) return true;
+    if (t >= u / 2) {
+      if (collidesWithinBinade(t / u, qLo + 1, qHi, (q) => roundToFormat(q * t, format))) return true;
+      continue;
+    }
+    let prev = roundToFormat(qLo * t, format);
+    for (let q = qLo + 1; q <= qHi; q++) {
       const cur = roundToFormat(q * t, format);
       if (cur === prev) return true;
       prev = cur;
     }
+  }
+  return false;
+}
+
+/**
+ * Whether some q in [a, b] has `fl(q t) = fl((q-1) t)`, for angles `q t` (and `(a-1) t`) in one
+ * binade of spacing u with `1/2 <= r = t/u < 1`, without visiting every q (up to 2^(p+1) of them).
+ * In units of u the angles are `q r` with `r = T/N`, T odd, `N = 2^c` (c <= p + 1, so every
+ * integer below stays exact in binary64). Round to nearest is `F(q) = floor(q r + 1/2)` except at
+ * ties (`q r + 1/2` whole, which for odd T is exactly `q ≡ N/2 mod N`), where ties to even may give
+ * one less. `F(q) = F(q-1)` exactly when `y(q-1) < D`, with `y(q) = (qT + N/2) mod N` and
+ * `D = N - T`; y falls by D a step without wrapping until it is below D, so the first such q from
+ * a is `a + floor(y(a-1)/D)`. Away from ties rounding is F, so an F-collision before the next tie
+ * is a collision; the two pairs at each tie are checked with `round(q)` itself.
+ */
+function collidesWithinBinade(r: number, a: number, b: number, round: (q: number) => number): boolean {
+  let N = 1;
+  let T = r;
+  while (!Number.isInteger(T)) {
+    T *= 2;
+    N *= 2;
+  }
+  const D = N - T;
+  const half = N / 2;
+  while (a <= b) {
+    const y = ((a - 1) * T + half) % N;
+    const collision = a + Math.floor(y / D);
+    // The first tie at or after a - 1.
+    const tie = a - 1 + ((((half - (a - 1)) % N) + N) % N);
+    if (collision < tie) return collision <= b;
+    if (tie > b) return false;
+    if (tie >= a && round(tie) === round(tie - 1)) return true;
+    if (tie + 1 <= b && round(tie + 1) === round(tie)) return true;
+    a = tie + 2;
   }
   return false;
 }

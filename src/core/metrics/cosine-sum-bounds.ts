@@ -4,9 +4,8 @@
  * interval unless the interval holds a multiple of 2π (then 1), and smallest at an end unless it
  * holds an odd multiple of π (then -1); an interval 2π or longer holds both. Summing the pairs'
  * bounds bounds the sum at every offset of the interval, so a scan may pass over an interval
- * whose bounds show no offset in it can matter (the idea of branch and bound; interval bounds of
- * a sum of cosines, e.g. Hansen & Walster 2004, "Global Optimization Using Interval Analysis",
- * ch. 5, from memory).
+ * whose bounds show no offset in it can matter (branch and bound with interval bounds, as in
+ * Hansen & Walster 2004, "Global Optimization Using Interval Analysis", from memory).
  *
  * Error bound. The returned bounds hold for the reference expression of `similarity-scan.ts`,
  * `cosineSum(θ, k)` (Math.cos of `fl(k θ_i)`, summed in pair order), not only for the exact sum.

@@ -210,7 +210,7 @@ export function jsonSyntaxErrorOffset(text: string): number {
           if (!/^[0-9a-fA-F]{4}$/.test(text.slice(j + 2, j + 6))) return -(j + 1);
           j += 5;
         } else if (e !== undefined && JSON_ESCAPES.has(e)) j += 1;
-        else return -(j + 1);
+        else return -(j + 2);
       }
     }
     return -(n + 1);

@@ -3,7 +3,7 @@
  * key and line of every problem. The gate fails closed on the error, so nothing here guesses.
  */
 import picomatch from 'picomatch';
-import { LineCounter, parseDocument } from 'yaml';
+import { LineCounter, isScalar, parseDocument, visit } from 'yaml';
 import type { Document } from 'yaml';
 import type { ErrorObject } from 'ajv';
 import type { ServingPatch, SourceLocation } from '../model.js';
@@ -22,6 +22,19 @@ const MAX_PROBLEMS = 20;
 
 /** Aliases one policy may expand; a real policy needs a handful, an expansion bomb needs thousands. */
 const MAX_ALIASES = 100;
+
+/** Offset of the document's first alias and the top-level key that holds it, or null without aliases. */
+function firstAlias(doc: Document): { offset: number; key: string | null } | null {
+  let found: { offset: number; key: string | null } | null = null;
+  visit(doc, {
+    Alias(_, node, path) {
+      const top = path.find((step) => step !== doc && (step as { key?: unknown }).key !== undefined) as { key?: unknown } | undefined;
+      found = { offset: node.range?.[0] ?? 0, key: isScalar(top?.key) ? String(top.key.value) : null };
+      return visit.BREAK;
+    },
+  });
+  return found;
+}
 
 function formatProblem(problem: PolicyProblem): string {
   const where = problem.line === null ? problem.file : `${problem.file}:${problem.line}`;
@@ -301,7 +314,12 @@ export function parsePolicy(text: string, path: string): Policy {
     if (error instanceof PolicyError) throw error;
     // toJS refuses alias bombs with a ReferenceError; absurd nesting overflows the stack.
     const reason = error instanceof RangeError ? 'nested too deeply' : (error as Error).message;
-    return fail([{ file: path, line: null, key: null, message: `cannot be read as YAML: ${reason}` }]);
+    // An alias bomb is named where its aliases start: the first alias and the key that holds it.
+    const alias = /alias/i.test(reason) ? firstAlias(doc!) : null;
+    return fail([{
+      file: path, line: alias ? lines.linePos(alias.offset).line : null, key: alias?.key ?? null,
+      message: `cannot be read as YAML: ${reason}${alias ? ` (expanding aliases from here; at most ${MAX_ALIASES} are followed)` : ''}`,
+    }]);
   }
   // An empty file (or one of comments only) is a policy that sets nothing.
   if (data === null || data === undefined) data = {};

@@ -23,9 +23,13 @@ function matcherFor(globs: readonly string[]): Matcher {
   return matcher;
 }
 
-/** Repository paths as globs see them: forward slashes, no leading `./`. */
+/**
+ * Repository paths as globs see them: forward slashes, no leading `./`, and line breaks (legal in
+ * git paths) as a character glob wildcards match, since picomatch's patterns stop at them and a
+ * model config with a line break in its name would otherwise never be judged.
+ */
 function normalise(path: string): string {
-  return path.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
+  return path.replace(/\\/g, '/').replace(/^(\.\/)+/, '').replace(/[\n\r\u2028\u2029]/g, '\u001f');
 }
 
 /** Whether the policy's `files` globs pick `path` and its `exclude` globs leave it in. */

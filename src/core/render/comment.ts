@@ -211,16 +211,36 @@ function headline(report: GateReport): string {
   return `## context-reach · ${VERDICT_LINE[report.verdict]} · ${counts}`;
 }
 
+/** Blocking findings listed at the top; the rest stay in their file sections (and the JSON report). */
+export const BLOCKERS_LISTED = 20;
+
 function blockers(report: GateReport, ctx: MarkdownContext): string[] {
-  const rows = report.files.flatMap((file) => file.findings.filter((f) => f.counts === 'block').map((f) => ({ file, f })));
-  if (rows.length === 0) return [];
+  const all = report.files.flatMap((file) => file.findings.filter((f) => f.counts === 'block').map((f) => ({ file, f })));
+  if (all.length === 0) return [];
+  const rows = all.slice(0, BLOCKERS_LISTED);
+  const more = all.length - rows.length;
   return ['**What blocks:**', '', ...rows.flatMap(({ file, f }) => {
     const first = firstRemedyLine(f, file.head?.spec ?? null);
     return [
       `- ${codeSpan(file.path)} ${where(file, f, ctx)}: \`${f.rule}\` ${escapeMarkdown(f.message)}`,
       ...(first ? [`  - ${first}`] : []),
     ];
-  }), ''];
+  }), ...(more > 0 ? [`- … and ${more} more blocking finding${more === 1 ? '' : 's'}, listed under their files below.`] : []), ''];
+}
+
+/**
+ * Last resort when even the shortest form is over the limit (thousands of files, or very long
+ * paths): cut at a line, close what the cut left open, and say so.
+ */
+function cutToLimit(body: string, limit: number): string {
+  if (body.length <= limit) return body;
+  const note = '\n\n_Cut at GitHub\'s comment limit; the job summary and the JSON report have everything._\n';
+  let kept = body.slice(0, Math.max(0, limit - note.length - 200));
+  kept = kept.slice(0, kept.lastIndexOf('\n') + 1);
+  const fences = (kept.match(/^```/gm) ?? []).length;
+  const open = (kept.match(/<details/g) ?? []).length - (kept.match(/<\/details>/g) ?? []).length;
+  const closing = `${fences % 2 === 1 ? '```\n' : ''}${'</details>\n'.repeat(Math.max(0, open))}`;
+  return `${kept}${closing}${note}`;
 }
 
 function preamble(report: GateReport, ctx: MarkdownContext): string[] {
@@ -303,5 +323,5 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
     used += line.length + 1;
   }
   const note = `\n_Trimmed to fit GitHub's comment limit: ${rest.length} of ${report.files.length} files are listed by name only; the job summary and the JSON report have everything._\n`;
-  return `${head}\n${note}\n${sections.join('\n')}\n${restLines.join('\n')}\n\n${tail}\n`;
+  return cutToLimit(`${head}\n${note}\n${sections.join('\n')}\n${restLines.join('\n')}\n\n${tail}\n`, limit);
 }

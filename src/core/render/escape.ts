@@ -47,7 +47,13 @@ export function codeSpan(text: string): string {
   return `<code>${escapeMarkdown(text)}</code>`;
 }
 
-/** A path segment for a link target, percent-encoded so a crafted path cannot leave the URL. */
+/**
+ * A path for a link target, each segment percent-encoded so a crafted path cannot leave the URL:
+ * past what encodeURIComponent encodes, `(` `)` too (a `)` would end a markdown link's target and
+ * let the rest be read as markdown, e.g. an autolinked `www.` host) and `!` `'` `*` `~`.
+ */
 export function encodePath(path: string): string {
-  return path.split('/').map((segment) => encodeURIComponent(segment)).join('/');
+  return path.split('/')
+    .map((segment) => encodeURIComponent(segment).replace(/[!'()*~]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`))
+    .join('/');
 }

@@ -63,7 +63,8 @@ const spec = record({
       fraction: numberOrNull,
       scaling: record({ kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high']) }, true),
     }, false, ['base', 'fraction', 'scaling']),
-    if: { properties: { kind: { const: 'rotary' } } },
+    // Every property listed: removeAdditional would strip the ones an `if` does not name.
+    if: { properties: { kind: { const: 'rotary' }, base: true, fraction: true, scaling: true } },
     then: { required: ['base', 'fraction', 'scaling'] },
   },
   dtypes: record({
@@ -120,7 +121,7 @@ let compiled: ValidateFunction | null = null;
 
 function validator(): ValidateFunction {
   // removeAdditional: fields the renderers do not know never travel on, whatever they hold.
-  compiled ??= new Ajv({ strict: true, allowUnionTypes: true, removeAdditional: 'all', allErrors: false }).compile(GATE_JSON_SCHEMA);
+  compiled ??= new Ajv({ strict: true, strictRequired: false, allowUnionTypes: true, removeAdditional: 'all', allErrors: false }).compile(GATE_JSON_SCHEMA);
   return compiled;
 }
 
@@ -129,7 +130,8 @@ function describe(error: ErrorObject, root: unknown): string {
   for (const part of error.instancePath.split('/').slice(1)) {
     value = value !== null && typeof value === 'object' ? (value as Record<string, unknown>)[part.replace(/~1/g, '/').replace(/~0/g, '~')] : undefined;
   }
-  const shown = JSON.stringify(value) ?? 'nothing';
+  // Collections are named, not printed: a tampered report may nest them without end.
+  const shown = Array.isArray(value) ? 'a list' : value !== null && typeof value === 'object' ? 'a mapping' : JSON.stringify(value) ?? 'nothing';
   const quoted = shown.length > 60 ? `${shown.slice(0, 57)}...` : shown;
   const where = error.instancePath === '' ? 'the top level' : error.instancePath;
   const expected = error.keyword === 'required' ? `a field ${JSON.stringify((error.params as { missingProperty: string }).missingProperty)}`
