@@ -107,7 +107,7 @@ export function hostileCases(): HostileCase[] {
     { name: '`constructor` and `prototype` keys (YAML)', path: 'models/ctor/model.reach.yaml', content: encode('format: context-reach-model/1\nconstructor:\n  prototype:\n    polluted: yes\n'), judged: false,
       finding: { rule: 'config-unreadable', message: /key "constructor" .* is refused/, line: 2 } },
     { name: 'bytes that are not UTF-8 (0xFF)', path: 'models/latin/config.json', content: notUtf8(), judged: false,
-      finding: { rule: 'config-unreadable', message: /is not UTF-8 text: bytes ff/, line: 2 } },
+      finding: { rule: 'config-unreadable', message: /is not UTF-8 text: bytes ff 6d 61 22 at byte offset 21/, line: 2 } },
     { name: 'UTF-8 byte-order mark (read as usual)', path: 'models/bom/config.json', content: withBom(checkpointConfig()), judged: true },
     { name: '`1e400` (overflows a double)', path: 'models/e400/config.json', content: encode(withKey('max_position_embeddings', '1e400')), judged: true,
       finding: { rule: 'value-invalid', message: /max_position_embeddings is 1e400, which overflows to Infinity/, line: 9 } },

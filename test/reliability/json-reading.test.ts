@@ -73,20 +73,6 @@ async function report(head: Record<string, unknown>, policy = ''): Promise<GateR
   });
 }
 
-/** The report as JSON carries it: without remedies, which publish mode does not read back. */
-function withoutRemedies(r: GateReport): GateReport {
-  return {
-    ...r,
-    files: r.files.map((file) => {
-      const { remedyTogether: _, ...rest } = file as typeof file & { remedyTogether?: unknown };
-      return { ...rest, findings: file.findings.map((f) => {
-        const { remedy: _r, remedyWhyNot: _w, remedyAlternatives: _a, ...kept } = f as typeof f & Record<string, unknown>;
-        return kept as typeof f;
-      }) };
-    }),
-  };
-}
-
 describe('readGateJson(renderGateJson(report), file)', () => {
   it('renders the same comment as the report it was written from (a change that passes, judged by limits)', async () => {
     const original = await report({ num_key_value_heads: 8 }, 'serving: { device-memory-gib: 80 }\nlimits:\n  memoryBytes: { max: 100000000000 }\n');
@@ -95,11 +81,12 @@ describe('readGateJson(renderGateJson(report), file)', () => {
     expect(renderComment(back, { blobUrl: 'https://github.example/o/r/blob/c' })).toBe(renderComment(original, { blobUrl: 'https://github.example/o/r/blob/c' }));
   });
 
-  it('renders the same comment, remedies aside, for a blocked change', async () => {
+  it('renders the same comment for a blocked change, its remedies included', async () => {
     const original = await report({ max_position_embeddings: 16384 });
     expect(original.verdict).toBe('block');
     const back = readGateJson(renderGateJson(original), 'report.json');
-    expect(renderComment(back)).toBe(renderComment(withoutRemedies(original)));
+    expect(renderComment(back)).toContain('**Remedies**');
+    expect(renderComment(back)).toBe(renderComment(original));
   });
 
   it('reads a spec value the JSON wrote as null (it was NaN) back as NaN, so sizes stay "not a number"', async () => {
@@ -108,7 +95,7 @@ describe('readGateJson(renderGateJson(report), file)', () => {
     const back = readGateJson(renderGateJson(original), 'report.json');
     expect(Number.isNaN(back.files[0]!.head!.spec.ffn)).toBe(true);
     expect(back.files[0]!.head!.spec.trainedSpan).toBe(original.files[0]!.head!.spec.trainedSpan);
-    expect(renderComment(back)).toBe(renderComment(withoutRemedies(original)));
+    expect(renderComment(back)).toBe(renderComment(original));
   });
 
   it('refuses a report whose counts do not follow from its findings, and text past its size bound', () => {

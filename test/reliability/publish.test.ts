@@ -134,6 +134,7 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
     for (const finding of original.files[0]!.findings) expect(body).toContain(`\`${finding.rule}\``);
     expect(body).toContain('| `declaredSpan`');
     expect(body).toContain('```mermaid');
+    expect(body).toContain('**Remedies**');
   });
 
   it('refuses a report for another commit than the run checked: no comment is touched', async () => {
@@ -192,6 +193,9 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
     ['an unknown metric', (r: Record<string, unknown> & { files: { deltas: { metric: string }[] }[] }) => { r.files[0]!.deltas[0]!.metric = '<b>x</b>'; }, /\/files\/0\/deltas\/0\/metric is "<b>x<\/b>"; expected one of "declaredSpan"/],
     ['a spec size that is text', (r: Record<string, unknown> & { files: { head: { spec: { layers: unknown } } }[] }) => { r.files[0]!.head.spec.layers = '<script>'; }, /\/files\/0\/head\/spec\/layers is "<script>"; expected must be number,null/],
     ['another version', (r: Record<string, unknown>) => { r.version = 2; }, /\/version is 2; expected must be equal to constant/],
+    ['a remedy changing a field named like markup', (r: Record<string, unknown> & { files: { findings: { remedy?: { change: Record<string, unknown> } | null }[] }[] }) => {
+      r.files[0]!.findings.find((f) => f.remedy)!.remedy!.change['<img src=x>'] = 1;
+    }, /\/files\/0\/findings\/0\/remedy\/change is a mapping; expected must match pattern/],
   ])('refuses a report with %s, naming the field', async (_, change, expected) => {
     const before = ours()[0]!.body;
     const { error, out } = await publish(tampered(change as never));

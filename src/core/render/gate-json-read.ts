@@ -4,7 +4,8 @@
  * a fork, the fork's own workflow wrote it. It is checked field by field against the report's
  * shape (every enum, every number, every line), fields the renderers do not know are dropped,
  * the verdict and the counts must follow from the findings, and the comment rendered from it
- * escapes every text again, as for any report.
+ * escapes every text again, as for any report. Remedies are read back too, their names checked
+ * (metric names of the contract, dotted field paths) and their texts escaped by the renderers.
  */
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
@@ -34,7 +35,14 @@ function record(properties: Record<string, Schema>, nullable = false, optional: 
     type: nullable ? ['object', 'null'] : 'object',
     properties,
     required: Object.keys(properties).filter((name) => !optional.includes(name)),
+    // With removeAdditional, fields the renderers do not know are dropped, whatever they hold.
+    additionalProperties: false,
   };
+}
+
+/** A mapping of dotted names (no prototype keys) to values of `value`. */
+function map(value: Schema, names: Schema = { pattern: '^[A-Za-z][A-Za-z0-9]*(\\.[A-Za-z0-9]+)*$', maxLength: 80 }): Schema {
+  return { type: 'object', propertyNames: { ...names, not: { enum: ['__proto__', 'constructor', 'prototype'] } }, additionalProperties: value };
 }
 
 const numbers = (names: readonly string[]): Record<string, Schema> => Object.fromEntries(names.map((name) => [name, numberOrNull]));
@@ -63,8 +71,7 @@ const spec = record({
       fraction: numberOrNull,
       scaling: record({ kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high']) }, true),
     }, false, ['base', 'fraction', 'scaling']),
-    // Every property listed: removeAdditional would strip the ones an `if` does not name.
-    if: { properties: { kind: { const: 'rotary' }, base: true, fraction: true, scaling: true } },
+    if: { properties: { kind: { const: 'rotary' } } },
     then: { required: ['base', 'fraction', 'scaling'] },
   },
   dtypes: record({
@@ -88,10 +95,21 @@ const delta = record({
   state: { enum: ['ok', 'crossed', 'unjudged'] },
 });
 
+/** A remedy (`src/core/remedy/types.ts`): the change, the metrics it gives, the findings it raises. */
+const remedy = record({
+  change: map({ type: ['number', 'string'] }),
+  metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
+  raises: { type: 'array', items: text },
+});
+
 const finding = record({
   rule: text, severity, message: text, key: textOrNull, line: lineOrNull,
   standing: { type: 'boolean' }, counts: { enum: [...SEVERITIES, null] }, waived: { type: 'boolean' }, file: text,
-});
+  metric: { enum: [...METRIC_PATHS] },
+  remedy: { ...remedy, type: ['object', 'null'] },
+  remedyWhyNot: textOrNull,
+  remedyAlternatives: { type: 'array', items: remedy },
+}, false, ['metric', 'remedy', 'remedyWhyNot', 'remedyAlternatives']);
 
 const verdict: Schema = { enum: ['ok', 'warn', 'block'] };
 const status: Schema = { enum: ['added', 'modified', 'renamed', 'deleted'] };
@@ -101,7 +119,13 @@ const file = record({
   deltas: { type: 'array', items: delta },
   findings: { type: 'array', items: finding },
   base: version, head: version, baseError: failure, headError: failure,
-});
+  remedyTogether: record({
+    change: map({ type: ['number', 'string'] }),
+    metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
+    passes: { type: 'boolean' },
+    stillBlocking: { type: 'array', items: text },
+  }, true),
+}, false, ['remedyTogether']);
 
 /** The JSON Schema of the report `renderGateJson` writes (version 1). */
 export const GATE_JSON_SCHEMA: Readonly<Schema> = {
@@ -120,8 +144,8 @@ export const GATE_JSON_SCHEMA: Readonly<Schema> = {
 let compiled: ValidateFunction | null = null;
 
 function validator(): ValidateFunction {
-  // removeAdditional: fields the renderers do not know never travel on, whatever they hold.
-  compiled ??= new Ajv({ strict: true, strictRequired: false, allowUnionTypes: true, removeAdditional: 'all', allErrors: false }).compile(GATE_JSON_SCHEMA);
+  // removeAdditional drops what `additionalProperties: false` does not admit instead of failing.
+  compiled ??= new Ajv({ strict: true, strictRequired: false, allowUnionTypes: true, removeAdditional: true, allErrors: false }).compile(GATE_JSON_SCHEMA);
   return compiled;
 }
 
