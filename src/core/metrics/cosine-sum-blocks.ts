@@ -50,14 +50,21 @@ export function cosineSumMargin(plan: CosinePlan, k0: number, n: number): number
   return 2.5 * EPS * (P * (4 * n * n + 80 * n + 2) + 2 * (k0 + n) * plan.sumTheta + 2 * P * P + 4 * P);
 }
 
-// 2π split for the Cody–Waite reduction; see similarity-scan.ts for why each part is exact.
+// 2π = A + B + C + D: A and B have 24 significant bits, so n·A and n·B are exact for n < 2^29;
+// A + B + C is exactly the binary64 value 2·Math.PI, and D = 2π - 2·Math.PI = 2(π - Math.PI)
+// (π - Math.PI = 1.2246467991473531772e-16) carries the rest, so the turn itself is off by
+// under 1e-31 per turn instead of 2.4e-16.
 const TURN_A = Math.fround(2 * Math.PI);
 const TURN_B = Math.fround(2 * Math.PI - TURN_A);
 const TURN_C = 2 * Math.PI - TURN_A - TURN_B;
 const TURN_D = 2.4492935982947064e-16;
 const MAX_TURNS = 2 ** 29;
 
-/** radians: `x - n·2π` for the nearest whole n, so seeds avoid Math.cos's slow large-argument path. */
+/**
+ * radians: `x - n·2π` for the nearest whole n (Cody–Waite reduction), so the seeds avoid the slow
+ * large-argument path of Math.cos. `x - n·A` is exact (Sterbenz), the three later steps add
+ * under 20ε for a result within π. Arguments past `2^29` turns are left to Math.cos.
+ */
 function reduceTurns(x: number): number {
   if (!(x > 1e5)) return x;
   const n = Math.round(x / (2 * Math.PI));
@@ -66,32 +73,49 @@ function reduceTurns(x: number): number {
 }
 
 /**
- * Fills `buf[j]` with an approximation of `Σ_i cos((k0 + j) θ_i)`, `j < n <= COSINE_BLOCK`.
- * Four pairs per pass: independent recurrences overlap in the CPU.
+ * Fills `buf[j]` with an approximation of `Σ_i cos((k0 + j) θ_i)`, `j < n <= COSINE_BLOCK`, within
+ * `cosineSumMargin / 2.5`. Eight, then four, then single pairs per pass: independent recurrences
+ * overlap in the CPU.
  */
 export function fillCosineSums(plan: CosinePlan, k0: number, n: number, buf: Float64Array): void {
-  const { theta, twoCos, cos, sin, seedNow, seedBefore } = plan;
+  const { theta, twoCos: a2, cos: cT, sin: sT, seedNow, seedBefore } = plan;
   const P = theta.length;
   for (let i = 0; i < P; i++) {
+    // cos(x0) and cos(x0 - θ) = cos(x0)cos(θ) + sin(x0)sin(θ), one argument x0 = fl(k0 θ)
     const x = reduceTurns(k0 * theta[i]);
     const c = Math.cos(x);
     seedNow[i] = c;
-    seedBefore[i] = c * cos[i] + Math.sin(x) * sin[i];
+    seedBefore[i] = c * cT[i] + Math.sin(x) * sT[i];
   }
   buf.fill(0, 0, n);
   let i = 0;
+  for (; i + 8 <= P; i += 8) {
+    const a0 = a2[i], a1 = a2[i + 1], a2_ = a2[i + 2], a3 = a2[i + 3];
+    const a4 = a2[i + 4], a5 = a2[i + 5], a6 = a2[i + 6], a7 = a2[i + 7];
+    let q0 = seedNow[i], q1 = seedNow[i + 1], q2 = seedNow[i + 2], q3 = seedNow[i + 3];
+    let q4 = seedNow[i + 4], q5 = seedNow[i + 5], q6 = seedNow[i + 6], q7 = seedNow[i + 7];
+    let p0 = seedBefore[i], p1 = seedBefore[i + 1], p2 = seedBefore[i + 2], p3 = seedBefore[i + 3];
+    let p4 = seedBefore[i + 4], p5 = seedBefore[i + 5], p6 = seedBefore[i + 6], p7 = seedBefore[i + 7];
+    for (let j = 0; j < n; j++) {
+      buf[j] += q0 + q1 + (q2 + q3) + (q4 + q5 + (q6 + q7));
+      const r0 = a0 * q0 - p0, r1 = a1 * q1 - p1, r2 = a2_ * q2 - p2, r3 = a3 * q3 - p3;
+      const r4 = a4 * q4 - p4, r5 = a5 * q5 - p5, r6 = a6 * q6 - p6, r7 = a7 * q7 - p7;
+      p0 = q0; q0 = r0; p1 = q1; q1 = r1; p2 = q2; q2 = r2; p3 = q3; q3 = r3;
+      p4 = q4; q4 = r4; p5 = q5; q5 = r5; p6 = q6; q6 = r6; p7 = q7; q7 = r7;
+    }
+  }
   for (; i + 4 <= P; i += 4) {
-    const a0 = twoCos[i], a1 = twoCos[i + 1], a2 = twoCos[i + 2], a3 = twoCos[i + 3];
+    const a0 = a2[i], a1 = a2[i + 1], a2_ = a2[i + 2], a3 = a2[i + 3];
     let q0 = seedNow[i], q1 = seedNow[i + 1], q2 = seedNow[i + 2], q3 = seedNow[i + 3];
     let p0 = seedBefore[i], p1 = seedBefore[i + 1], p2 = seedBefore[i + 2], p3 = seedBefore[i + 3];
     for (let j = 0; j < n; j++) {
       buf[j] += q0 + q1 + (q2 + q3);
-      const r0 = a0 * q0 - p0, r1 = a1 * q1 - p1, r2 = a2 * q2 - p2, r3 = a3 * q3 - p3;
+      const r0 = a0 * q0 - p0, r1 = a1 * q1 - p1, r2 = a2_ * q2 - p2, r3 = a3 * q3 - p3;
       p0 = q0; q0 = r0; p1 = q1; q1 = r1; p2 = q2; q2 = r2; p3 = q3; q3 = r3;
     }
   }
   for (; i < P; i++) {
-    const a = twoCos[i];
+    const a = a2[i];
     let q = seedNow[i];
     let p = seedBefore[i];
     for (let j = 0; j < n; j++) {

@@ -34,12 +34,12 @@
  * slow ones that keep the sum high near k = 1) nearly every block is passed over.
  */
 import { cosineSumBounds } from './cosine-sum-bounds.js';
+import { COSINE_BLOCK, cosineSumMargin, fillCosineSums, planCosineSums } from './cosine-sum-blocks.js';
 import { scanAllowed } from './scan-limits.js';
 
-const BLOCK = 512;
+const BLOCK = COSINE_BLOCK;
 /** Offsets per interval whose bounds are checked before its blocks'. */
 const SPAN_OF_BOUNDS = 8 * BLOCK;
-const EPS = 2 ** -53;
 
 /** sum: `Σ_i cos(k θ'_i)` in pair order, the reference expression. */
 export function cosineSum(theta: Float64Array, k: number): number {
@@ -73,19 +73,8 @@ export interface SimilarityResult {
 export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: number): SimilarityPartial | null {
   const P = theta.length;
   if (P === 0 || !(kEnd > kStart) || !(kStart >= 1)) return null;
-  const a2 = new Float64Array(P);
-  const cT = new Float64Array(P);
-  const sT = new Float64Array(P);
-  let sumTheta = 0;
-  for (let i = 0; i < P; i++) {
-    cT[i] = Math.cos(theta[i]);
-    sT[i] = Math.sin(theta[i]);
-    a2[i] = 2 * cT[i];
-    sumTheta += theta[i];
-  }
+  const plan = planCosineSums(theta);
   const buf = new Float64Array(BLOCK);
-  const seedNow = new Float64Array(P);
-  const seedBefore = new Float64Array(P);
   let bestApprox = -Infinity;
   let bestFloor = Infinity;
   let bestK = -1;
@@ -108,8 +97,8 @@ export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: n
       }
     }
     if (passes(k0, k0 + n - 1)) continue;
-    fillBlock(theta, a2, cT, sT, k0, n, buf, seedNow, seedBefore);
-    const margin = 2.5 * EPS * (P * (4 * n * n + 80 * n + 2) + 2 * (k0 + n) * sumTheta + 2 * P * P + 4 * P);
+    fillCosineSums(plan, k0, n, buf);
+    const margin = cosineSumMargin(plan, k0, n);
     let threshold = bestApprox - margin;
     for (let j = 0; j < n; j++) {
       const v = buf[j];
@@ -154,89 +143,4 @@ export function similarityScan(theta: Float64Array | null, span: number | null):
   const r = scanSimilarityRange(theta, 1, span);
   if (r === null) return none;
   return { separationFloor: r.floor, separationFloorOffset: r.offset, discriminationSpan: r.negative };
-}
-
-// 2π = A + B + C + D: A and B have 24 significant bits, so n·A and n·B are exact for n < 2^29;
-// A + B + C is exactly the binary64 value 2·Math.PI, and D = 2π - 2·Math.PI = 2(π - Math.PI)
-// (π - Math.PI = 1.2246467991473531772e-16) carries the rest, so the turn itself is off by
-// under 1e-31 per turn instead of 2.4e-16.
-const TURN_A = Math.fround(2 * Math.PI);
-const TURN_B = Math.fround(2 * Math.PI - TURN_A);
-const TURN_C = 2 * Math.PI - TURN_A - TURN_B;
-const TURN_D = 2.4492935982947064e-16;
-const MAX_TURNS = 2 ** 29;
-
-/**
- * radians: `x - n·2π` for the nearest whole n (Cody–Waite reduction), so the seeds avoid the slow
- * large-argument path of Math.cos. `x - n·A` is exact (Sterbenz), the three later steps add
- * under 20ε for a result within π. Arguments past `2^29` turns are left to Math.cos.
- */
-function reduceTurns(x: number): number {
-  if (!(x > 1e5)) return x;
-  const n = Math.round(x / (2 * Math.PI));
-  if (n >= MAX_TURNS) return x;
-  return x - n * TURN_A - n * TURN_B - n * TURN_C - n * TURN_D;
-}
-
-/**
- * Fills buf[j] with an approximation of Σ_i cos((k0 + j) θ_i), j < n (error bound above).
- * Eight, then four, then single pairs per pass: independent recurrences overlap in the CPU.
- */
-function fillBlock(
-  theta: Float64Array,
-  a2: Float64Array,
-  cT: Float64Array,
-  sT: Float64Array,
-  k0: number,
-  n: number,
-  buf: Float64Array,
-  seedNow: Float64Array,
-  seedBefore: Float64Array,
-): void {
-  const P = theta.length;
-  for (let i = 0; i < P; i++) {
-    // cos(x0) and cos(x0 - θ) = cos(x0)cos(θ) + sin(x0)sin(θ), one argument x0 = fl(k0 θ)
-    const x = reduceTurns(k0 * theta[i]);
-    const c = Math.cos(x);
-    seedNow[i] = c;
-    seedBefore[i] = c * cT[i] + Math.sin(x) * sT[i];
-  }
-  buf.fill(0, 0, n);
-  let i = 0;
-  for (; i + 8 <= P; i += 8) {
-    const a0 = a2[i], a1 = a2[i + 1], a2_ = a2[i + 2], a3 = a2[i + 3];
-    const a4 = a2[i + 4], a5 = a2[i + 5], a6 = a2[i + 6], a7 = a2[i + 7];
-    let q0 = seedNow[i], q1 = seedNow[i + 1], q2 = seedNow[i + 2], q3 = seedNow[i + 3];
-    let q4 = seedNow[i + 4], q5 = seedNow[i + 5], q6 = seedNow[i + 6], q7 = seedNow[i + 7];
-    let p0 = seedBefore[i], p1 = seedBefore[i + 1], p2 = seedBefore[i + 2], p3 = seedBefore[i + 3];
-    let p4 = seedBefore[i + 4], p5 = seedBefore[i + 5], p6 = seedBefore[i + 6], p7 = seedBefore[i + 7];
-    for (let j = 0; j < n; j++) {
-      buf[j] += q0 + q1 + (q2 + q3) + (q4 + q5 + (q6 + q7));
-      const r0 = a0 * q0 - p0, r1 = a1 * q1 - p1, r2 = a2_ * q2 - p2, r3 = a3 * q3 - p3;
-      const r4 = a4 * q4 - p4, r5 = a5 * q5 - p5, r6 = a6 * q6 - p6, r7 = a7 * q7 - p7;
-      p0 = q0; q0 = r0; p1 = q1; q1 = r1; p2 = q2; q2 = r2; p3 = q3; q3 = r3;
-      p4 = q4; q4 = r4; p5 = q5; q5 = r5; p6 = q6; q6 = r6; p7 = q7; q7 = r7;
-    }
-  }
-  for (; i + 4 <= P; i += 4) {
-    const a0 = a2[i], a1 = a2[i + 1], a2_ = a2[i + 2], a3 = a2[i + 3];
-    let q0 = seedNow[i], q1 = seedNow[i + 1], q2 = seedNow[i + 2], q3 = seedNow[i + 3];
-    let p0 = seedBefore[i], p1 = seedBefore[i + 1], p2 = seedBefore[i + 2], p3 = seedBefore[i + 3];
-    for (let j = 0; j < n; j++) {
-      buf[j] += q0 + q1 + (q2 + q3);
-      const r0 = a0 * q0 - p0, r1 = a1 * q1 - p1, r2 = a2_ * q2 - p2, r3 = a3 * q3 - p3;
-      p0 = q0; q0 = r0; p1 = q1; q1 = r1; p2 = q2; q2 = r2; p3 = q3; q3 = r3;
-    }
-  }
-  for (; i < P; i++) {
-    const a = a2[i];
-    let q = seedNow[i];
-    let p = seedBefore[i];
-    for (let j = 0; j < n; j++) {
-      buf[j] += q;
-      const r = a * q - p;
-      p = q;
-      q = r;
-    }
-  }
 }
