@@ -170,33 +170,15 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
 
   async function entry(commit: string, path: string): Promise<TreeEntry | null> {
     checkPath(path);
-    const slash = path.lastIndexOf('/');
-    const dir = slash < 0 ? '' : path.slice(0, slash);
-    const name = path.slice(slash + 1);
-    // List the parent tree and compare names exactly: ls-tree's own path arguments are patterns.
-    const tree = dir === '' ? `${checkRevision(commit)}^{tree}` : `${checkRevision(commit)}:${dir}`;
-    const args = ['ls-tree', '-z', tree];
-    const result = await run(args, maxList);
-    if (result.code !== 0) {
-      // The parent is missing or is not a directory (a file, or a symlink git does not follow).
-      if (/not a tree object|Not a valid object name|does not exist|bad revision/i.test(result.stderr)) return null;
-      throw failed(args, result);
-    }
-    for (const record of result.stdout.toString('utf8').split('\u0000')) {
-      const tab = record.indexOf('\t');
-      if (tab < 0 || record.slice(tab + 1) !== name) continue;
-      const [mode, type, oid] = record.slice(0, tab).split(' ');
-      const kind: TreeEntryKind = mode === '120000' ? 'symlink' : KINDS[type] ?? 'file';
-      return { kind, mode, oid };
-    }
-    return null;
+    const found = (await listEntries(checkRevision(commit), [path]))?.get(path);
+    return found ? { kind: found.kind, mode: found.mode, oid: found.oid } : null;
   }
 
   /**
    * Tree entries with their sizes for many paths of one commit, one `ls-tree` per chunk of paths.
    * `--literal-pathspecs` keeps `*`, `[` and `:` in names literal and `--full-tree` makes paths
    * repository-relative; a pathspec never descends through a symlink or a file, and names are
-   * compared exactly after listing, as `entry` does.
+   * compared exactly after listing.
    */
   async function listEntries(commit: string, paths: string[]): Promise<Map<string, SizedEntry> | null> {
     const listed = new Map<string, SizedEntry>();
