@@ -32,7 +32,7 @@
  *   `seq_length`, or the decoder's `max_target_positions`.
  */
 import type { StorageDType } from '../model.js';
-import type { FieldReader } from './fields.js';
+import { orderedRamp, type FieldReader } from './fields.js';
 import { quoteText } from './quote.js';
 import type { PathSegment } from './quote.js';
 import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
@@ -418,7 +418,7 @@ function readScaling(r: FieldReader, at: PathSegment[]): ScalingDraft | null {
   if (kind === 'yarn') {
     draft.alpha = r.real('position.scaling.alpha', [...at, 'beta_slow'], 'ramp start', { test: (n) => n >= 0, expected: 'a ramp start of at least 0' });
     draft.beta = r.real('position.scaling.beta', [...at, 'beta_fast'], 'ramp end', { test: (n) => n > 0, expected: 'a ramp end above 0' });
-    ordered(r, at, 'beta_slow', draft.alpha, DEFAULT_YARN_ALPHA, 'beta_fast', draft.beta, DEFAULT_YARN_BETA);
+    orderedRamp(r, at, 'beta_slow', draft.alpha, DEFAULT_YARN_ALPHA, 'beta_fast', draft.beta, DEFAULT_YARN_BETA);
     for (const key of ['attention_factor', 'mscale', 'mscale_all_dim']) {
       if (r.has([...at, key])) {
         r.report('key-ignored', [...at, key], `${r.key([...at, key])} is not modelled: attentionScale uses 0.1·ln(s) + 1 (YaRN, Peng et al. 2023, eq. 22), whatever this key sets`);
@@ -428,18 +428,9 @@ function readScaling(r: FieldReader, at: PathSegment[]): ScalingDraft | null {
   if (kind === 'banded') {
     draft.low = r.real('position.scaling.low', [...at, 'low_freq_factor'], 'low-frequency factor', { test: (n) => n > 0, expected: 'a factor above 0' });
     draft.high = r.real('position.scaling.high', [...at, 'high_freq_factor'], 'high-frequency factor', { test: (n) => n > 0, expected: 'a factor above 0' });
-    ordered(r, at, 'low_freq_factor', draft.low, DEFAULT_BANDED_LOW, 'high_freq_factor', draft.high, DEFAULT_BANDED_HIGH);
+    orderedRamp(r, at, 'low_freq_factor', draft.low, DEFAULT_BANDED_LOW, 'high_freq_factor', draft.high, DEFAULT_BANDED_HIGH);
   }
   return draft;
-}
-
-/** Ramp ends must be ordered (defaults standing in for an unstated end), or the ramp divides by zero or runs backwards. */
-function ordered(r: FieldReader, at: PathSegment[], lowKey: string, low: number | undefined, lowDefault: number, highKey: string, high: number | undefined, highDefault: number): void {
-  if (low === undefined && high === undefined) return;
-  low ??= lowDefault;
-  high ??= highDefault;
-  if (Number.isNaN(low) || Number.isNaN(high) || high > low) return;
-  r.report('value-invalid', r.has([...at, highKey]) ? [...at, highKey] : [...at, lowKey], `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards`);
 }
 
 function knownKinds(): string {

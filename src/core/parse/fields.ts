@@ -188,3 +188,16 @@ export class FieldReader {
     return v;
   }
 }
+
+/**
+ * Ramp ends must be ordered (defaults standing in for an unstated end), or the ramp divides by
+ * zero or runs backwards. Shared by both dialects' scaling readers.
+ */
+export function orderedRamp(r: FieldReader, at: PathSegment[], lowKey: string, low: number | undefined, lowDefault: number, highKey: string, high: number | undefined, highDefault: number): void {
+  if (low === undefined && high === undefined) return;
+  low ??= lowDefault;
+  high ??= highDefault;
+  if (Number.isNaN(low) || Number.isNaN(high) || high > low) return;
+  const path = r.has([...at, highKey]) ? [...at, highKey] : [...at, lowKey];
+  r.report('value-invalid', path, `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards; raise ${highKey} or lower ${lowKey}`);
+}

@@ -8,7 +8,7 @@ import type { ErrorObject, ValidateFunction } from 'ajv';
 import modelSchema from '../../../schema/model.schema.json' with { type: 'json' };
 import type { FloatFormat, PositionKind, ScalingKind, StorageDType } from '../model.js';
 import { FLOAT_FORMATS, POSITION_KINDS, SCALING_KINDS, STORAGE_DTYPES } from '../model.js';
-import type { FieldReader, NumberCheck } from './fields.js';
+import { orderedRamp, type FieldReader, type NumberCheck } from './fields.js';
 import { parsePointer } from './json-pointer.js';
 import { quoteValue } from './quote.js';
 import type { PathSegment } from './quote.js';
@@ -163,24 +163,14 @@ function readScaling(r: FieldReader, at: string[]): ScalingDraft | null {
     low: r.real('position.scaling.low', [...at, 'low'], 'low-frequency factor', above(0, 'a low-frequency factor')),
     high: r.real('position.scaling.high', [...at, 'high'], 'high-frequency factor', above(0, 'a high-frequency factor')),
   };
-  orderedPair(r, at, 'alpha', draft.alpha, DEFAULT_YARN_ALPHA, 'beta', draft.beta, DEFAULT_YARN_BETA);
-  orderedPair(r, at, 'low', draft.low, DEFAULT_BANDED_LOW, 'high', draft.high, DEFAULT_BANDED_HIGH);
+  orderedRamp(r, at, 'alpha', draft.alpha, DEFAULT_YARN_ALPHA, 'beta', draft.beta, DEFAULT_YARN_BETA);
+  orderedRamp(r, at, 'low', draft.low, DEFAULT_BANDED_LOW, 'high', draft.high, DEFAULT_BANDED_HIGH);
   for (const key of kind === 'yarn' ? ['low', 'high'] : kind === 'banded' ? ['alpha', 'beta'] : ['alpha', 'beta', 'low', 'high']) {
     if (r.has([...at, key])) {
       r.report('key-ignored', [...at, key], `${r.key([...at, key])} has no effect on ${kind} scaling (alpha and beta are yarn's, low and high are banded's); remove it`);
     }
   }
   return draft;
-}
-
-/** Ramp ends must be ordered (defaults standing in for an unstated end), or the ramp divides by zero or runs backwards. */
-function orderedPair(r: FieldReader, at: string[], lowKey: string, low: number | undefined, lowDefault: number, highKey: string, high: number | undefined, highDefault: number): void {
-  if (low === undefined && high === undefined) return;
-  low ??= lowDefault;
-  high ??= highDefault;
-  if (Number.isNaN(low) || Number.isNaN(high) || high > low) return;
-  const path = r.has([...at, highKey]) ? [...at, highKey] : [...at, lowKey];
-  r.report('value-invalid', path, `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards; raise ${highKey} or lower ${lowKey}`);
 }
 
 function schemaFinding(r: FieldReader, error: ErrorObject): void {
