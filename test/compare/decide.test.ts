@@ -41,6 +41,30 @@ describe('changeFindings(base, head)', () => {
 });
 
 describe('decideFile(config, waiver)', () => {
+  it('fails closed on a limit whose metric the scans left uncomputed (span past the scan bound)', () => {
+    const judging: Judging = { ...BUILT_IN_JUDGING, limits: { separationFloor: { min: 0.01, severity: 'block' }, params: { max: 1e12, severity: 'block' } } };
+    const head = report({ max_position_embeddings: 2 ** 40 });
+    expect(head.findings.map((f) => f.rule)).toContain('scan-incomplete');
+    const decision = decideFile(config(report(), head, judging), false);
+    const crossed = decision.findings.filter((f) => f.rule === 'limit-crossed');
+    expect(crossed.map((f) => f.metric)).toEqual(['separationFloor']);
+    expect(crossed[0]!.message).toContain('not computed');
+    const spanLine = checkpointConfig({ max_position_embeddings: 2 ** 40 }).split('\n').findIndex((l) => l.includes('max_position_embeddings')) + 1;
+    expect(crossed[0]!.line).toBe(spanLine);
+    expect(decision.deltas.find((d) => d.metric === 'separationFloor')?.state).toBe('crossed');
+    expect(decision.deltas.find((d) => d.metric === 'params')?.state).toBe('ok');
+    expect(decision.verdict).toBe('block');
+  });
+
+  it('leaves a limit on a metric that does not apply unjudged, not crossed (learned positions have no separation floor)', () => {
+    const judging: Judging = { ...BUILT_IN_JUDGING, limits: { separationFloor: { min: 0.01, severity: 'block' } } };
+    const learned = { model_type: 'gpt2', rope_theta: undefined, position_embedding_type: 'absolute' };
+    expect(report(learned).spec.position.kind).toBe('learned');
+    const decision = decideFile(config(report(learned), report(learned), judging), false);
+    expect(decision.findings.filter((f) => f.rule === 'limit-crossed')).toEqual([]);
+    expect(decision.deltas.find((d) => d.metric === 'separationFloor')?.state).toBe('unjudged');
+  });
+
   it('marks a finding the base already had as standing and lets it report, not block', () => {
     const broken = { num_key_value_heads: 5 };
     const decision = decideFile(config(report(broken), report({ ...broken, rope_theta: 20000 })), false);

@@ -71,3 +71,18 @@ export function referencePrecision(format: FloatFormat, theta: Float64Array, spa
     blurredPairs: blurred.filter(Boolean).length,
   };
 }
+
+/** `angleErrorMax` alone by visiting every (p, i), for the long spans where the full block is slow. */
+export function referenceAngleErrorMax(format: FloatFormat, theta: Float64Array, span: number): number {
+  const fl = format === 'fp32' ? Math.fround : (x: number) => roundToFormat(x, format);
+  const t = Array.from(theta, fl);
+  let errorMax = 0;
+  for (let p = 0; p < span; p++) {
+    const fp = fl(p);
+    for (let i = 0; i < theta.length; i++) {
+      const e = Math.abs(fl(fp * t[i]) - p * theta[i]);
+      if (e > errorMax) errorMax = e;
+    }
+  }
+  return errorMax;
+}

@@ -8,7 +8,8 @@ import fc from 'fast-check';
 import type { FloatFormat, ModelSpec, Scaling, ScalingKind } from '../../src/core/model.js';
 import { frequencyPlan } from '../../src/core/metrics/compute.js';
 import { numberFormatMetrics } from '../../src/core/metrics/number-format.js';
-import { mergeSimilarity, scanSimilarityRange, similarityScan } from '../../src/core/metrics/similarity-scan.js';
+import { scanSimilarityRange, similarityScan } from '../../src/core/metrics/similarity-scan.js';
+import { MAX_SCAN_WORK } from '../../src/core/metrics/scan-limits.js';
 import { referencePrecision, referenceSimilarity } from './reference.js';
 
 const FORMATS: FloatFormat[] = ['fp32', 'bf16', 'fp16'];
@@ -176,10 +177,40 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
     }
   }, 120000);
 
-  it('scanSimilarityRange over two halves merges to the whole-span result', () => {
-    const theta = Float64Array.from({ length: 16 }, (_, i) => Math.pow(500, -i / 16));
-    const whole = scanSimilarityRange(theta, 1, 20000)!;
-    const merged = mergeSimilarity(scanSimilarityRange(theta, 1, 7777)!, scanSimilarityRange(theta, 7777, 20000)!);
-    expect(merged).toEqual(whole);
+  it('equal the reference where the bounds are checked three levels deep (T up to 300,000, intervals of 512·8^j)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: Math.log(1e-5), max: Math.log(3), noNaN: true }), { minLength: 1, maxLength: 12 }),
+        fc.integer({ min: 33_000, max: 300_000 }),
+        (logs, span) => {
+          const theta = Float64Array.from(logs, Math.exp);
+          const fast = similarityScan(theta, span);
+          const ref = referenceSimilarity(theta, span);
+          expect(fast.complete).toBe(true);
+          expect(fast.separationFloorOffset).toBe(ref.separationFloorOffset);
+          expect(fast.discriminationSpan).toBe(ref.discriminationSpan);
+          expect(fast.separationFloor).toBe(ref.separationFloor);
+        },
+      ),
+      { numRuns: 25, seed: 90210 },
+    );
+  }, 120_000);
+
+  it('stops at the work limit, saying so, with the first negative sum still exact when it was reached', () => {
+    // One fast pair: no interval of 512 offsets can be passed over, so every block is filled.
+    const theta = Float64Array.of(1, 0.9);
+    const span = 200_000;
+    const ref = referenceSimilarity(theta, span);
+    const whole = scanSimilarityRange(theta, 1, span)!;
+    expect(whole.complete).toBe(true);
+    expect(whole.work).toBeLessThan(MAX_SCAN_WORK);
+    const cut = scanSimilarityRange(theta, 1, span, whole.work / 4)!;
+    expect(cut.complete).toBe(false);
+    expect(cut.work).toBeLessThan(whole.work / 2);
+    expect(cut.negative).toBe(ref.discriminationSpan);
+    // Nothing found before the stop: no value is claimed.
+    const early = scanSimilarityRange(Float64Array.of(1e-6), 1, span, 10)!;
+    expect(early.complete).toBe(false);
+    expect(early.negative).toBeNull();
   });
 });

@@ -23,10 +23,12 @@ export interface BundleRun {
 /** Preload that prints the child's peak resident set size on exit. */
 export const PEAK_RSS_PRELOAD = resolve(import.meta.dirname, 'peak-rss.cjs');
 
-/** The peak RSS line `peak-rss.cjs` prints, in MiB, and stderr without it. */
-export function takePeakRss(stderr: string): { peakRssMiB: number | null; stderr: string } {
-  const match = /\n?@@peak-rss-kib (\d+)\n/.exec(stderr);
-  return match ? { peakRssMiB: Number(match[1]) / 1024, stderr: stderr.replace(match[0], '') } : { peakRssMiB: null, stderr };
+/** The line `peak-rss.cjs` prints: peak RSS in MiB, CPU time in ms, and stderr without the line. */
+export function takePeakRss(stderr: string): { peakRssMiB: number | null; cpuMs: number | null; stderr: string } {
+  const match = /\n?@@peak-rss-kib (\d+) cpu-ms (\d+)\n/.exec(stderr);
+  return match
+    ? { peakRssMiB: Number(match[1]) / 1024, cpuMs: Number(match[2]), stderr: stderr.replace(match[0], '') }
+    : { peakRssMiB: null, cpuMs: null, stderr };
 }
 
 /** Parses the `name<<delimiter` blocks the toolkit appends to GITHUB_OUTPUT. */

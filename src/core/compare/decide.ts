@@ -4,6 +4,7 @@ import { sortFindings } from '../inspect.js';
 import type { Finding, LocationMap, ModelSpec, Severity } from '../model.js';
 import type { MetricPath } from '../metrics/types.js';
 import { RULES, isRuleId } from '../rules/catalog.js';
+import { uncomputedScanMetrics } from '../rules/metric-rules.js';
 import { SEVERITY_ORDER } from '../severity.js';
 import { formatInteger, formatNumber, percentChange } from '../units.js';
 import { formatMetric } from '../render/metric-format.js';
@@ -196,13 +197,23 @@ export function checkLimit(limit: Limit, base: number | null, head: number | nul
 function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judging: Judging): { deltas: MetricDelta[]; findings: (Finding & { metric?: MetricPath })[] } {
   const deltas: MetricDelta[] = [];
   const findings: (Finding & { metric?: MetricPath })[] = [];
+  const uncomputed = new Set(uncomputedScanMetrics(head.metrics));
   for (const metric of METRIC_PATHS) {
     const b = base ? metricValue(base.metrics, metric) : null;
     const h = metricValue(head.metrics, metric);
     const limit = judging.limits[metric] ?? null;
     const change = b !== null && h !== null ? h - b : null;
     let state: LimitState = 'unjudged';
-    if (limit) {
+    if (limit && h === null && uncomputed.has(metric)) {
+      // Fail closed: the scan stopped at its bound, so nothing shows the limit holds.
+      state = 'crossed';
+      findings.push({
+        rule: 'limit-crossed', severity: limit.severity,
+        message: `${metric} is not computed (the positional scans stopped at their bound, see scan-incomplete), so its limit cannot be shown to hold.`,
+        ...locate(head.locations, ['serving.span', 'declaredSpan']),
+        metric,
+      });
+    } else if (limit) {
       const { crossed, judged } = checkLimit(limit, b, h, metric);
       state = crossed.length > 0 ? 'crossed' : judged ? 'ok' : 'unjudged';
       if (crossed.length > 0) {

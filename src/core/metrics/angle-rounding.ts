@@ -11,8 +11,15 @@
  * visited from the top of the span down, and the scan stops once
  *   bound(v) = spacing_D(v t)/2 + v |t - θ| + (run half-width) θ   (+ binary64 slack)
  * falls below the best error found: every term is non-decreasing in the position, so no lower
- * run can do better. Below `2^m` (fp32: the whole of `T <= 2^24`) the run ends coincide and a
- * tight descending loop with Math.fround checks the bound once per chunk of positions.
+ * run can do better. Inside a binade `[2^e, 2^(e+1))` the runs have one shape (v = k s with
+ * s = 2^(e-m+1); even k holds [v - s/2, v + s/2], odd k the open interval), so they are walked
+ * with the spacing held fixed; the run cut by the span and the bottom run v = 2^e, whose lower
+ * half is narrower, are visited on their own. When t is a power of two every product `v t` is
+ * exact and the rounding term is 0; when moreover t = θ every error is exactly
+ * `|fl(p) - p| θ`, and the walk stops as soon as the best error reaches the half-width.
+ * Pairs are visited from the largest frequency down, whose errors are largest, so the first
+ * pair's maximum prunes the others early. Below `2^m` (fp32: the whole of `T <= 2^24`) the run
+ * ends coincide and a tight descending loop with Math.fround checks the bound once per chunk.
  * Blurred pairs: in a binade of the angle with spacing u, neighbouring angles `x`, `x + t`
  * cannot round together when `t >= u`, and must when `t < u/2` and the angles cover `2u`
  * (an open rounding interval of width u then holds two of them); only the remaining binades
@@ -85,8 +92,10 @@ function bitLength(n: number): number {
  * null. Pairs are independent, so a caller may split `theta` and take the larger result.
  */
 export function angleErrorMax(format: FloatFormat, theta: Float64Array, span: number): number {
+  // Largest frequencies first: their errors are the largest, so their maximum prunes the others early.
+  const order = Float64Array.from(theta).sort().reverse();
   let best = 0;
-  for (let i = 0; i < theta.length; i++) best = pairAngleError(format, theta[i], span, best);
+  for (let i = 0; i < order.length; i++) best = pairAngleError(format, order[i], span, best);
   return best;
 }
 
@@ -94,24 +103,27 @@ function pairAngleError(format: FloatFormat, th: number, span: number, best: num
   const m = significantBits(format);
   const exactLimit = 2 ** m;
   const t = roundToFormat(th, format);
+  // Every angle rounds to 0: the error p θ grows with p, so the last position holds the maximum.
+  if (t === 0) return Math.max(best, Math.abs(0 - (span - 1) * th));
   const d = Math.abs(t - th);
-  // Above 2^m: runs of positions sharing one rounded value v, visited downwards.
   let p = span - 1;
-  while (p >= exactLimit) {
-    const v = roundToFormat(p, format);
-    const above = spacingAt(v, format);
-    const below = v === 2 ** binaryExponent(v) ? above / 2 : above;
-    const even = (v / above) % 2 === 0;
-    const lo = below / 2 < 1 ? v : v - below / 2 + (even ? 0 : 1);
-    const hi = Math.min(p, above / 2 < 1 ? v : v + above / 2 - (even ? 0 : 1));
-    const bound = (spacingAt(v * t, format) / 2 + v * d + (above / 2) * th) * (1 + SLACK) + SLACK * (v + above) * th;
-    if (bound < best) return best;
-    const c = roundToFormat(v * t, format);
-    const e1 = Math.abs(c - lo * th);
-    const e2 = Math.abs(c - hi * th);
-    if (e1 > best) best = e1;
-    if (e2 > best) best = e2;
-    p = lo - 1;
+  if (p >= exactLimit) {
+    // The run holding the last position may be cut by the span or round up into the next binade.
+    const first = visitRun(format, t, th, d, p, best);
+    if (first < 0) return best;
+    best = first;
+    p = runStart(format, p) - 1;
+    for (let e = binaryExponent(Math.max(p, 1)); p >= exactLimit; e--) {
+      const runs = binadeRuns(format, t, th, d, e, p, best);
+      if (runs.done) return runs.best;
+      best = runs.best;
+      // The bottom run of the binade, v = 2^e (even), has the narrower spacing below it; its last
+      // position is 2^e + 2^(e-m), half a spacing up.
+      const bottom = visitRun(format, t, th, d, 2 ** e + 2 ** (e - m), best);
+      if (bottom < 0) return best;
+      best = bottom;
+      p = runStart(format, 2 ** e) - 1;
+    }
   }
   // Below 2^m every position is exact: fl_D(p) = p.
   const top = Math.min(p, span - 1);
@@ -141,6 +153,85 @@ function pairAngleError(format: FloatFormat, th: number, span: number, best: num
     p = lo - 1;
   }
   return best;
+}
+
+/**
+ * Whether `x` (positive, finite) is a power of two. For t = 2^j in D, `fl_D(v t) = v t` for every
+ * value v of D at or above 2^m: the product keeps v's significand (at most m bits) and its last
+ * bit weighs at least `2^(j+1)`, above the smallest subnormal `2^(emin - m + 1) <= t`, so it is
+ * held exactly; no overflow, the caller has checked `overflowPosition` (IEEE 754-2008 §3.3).
+ */
+function isPowerOfTwo(x: number): boolean {
+  return x === 2 ** binaryExponent(x);
+}
+
+/** position: first position of the run of positions `q` with `fl_D(q) = fl_D(p)` (p >= 2^m). */
+function runStart(format: FloatFormat, p: number): number {
+  const v = roundToFormat(p, format);
+  const above = spacingAt(v, format);
+  const below = v === 2 ** binaryExponent(v) ? above / 2 : above;
+  const even = (v / above) % 2 === 0;
+  return below / 2 < 1 ? v : v - below / 2 + (even ? 0 : 1);
+}
+
+/**
+ * The run holding position p (>= 2^m), cut at p from above: the larger of `best` and its error,
+ * or -1 when its bound shows that neither it nor any lower run can pass `best`.
+ */
+function visitRun(format: FloatFormat, t: number, th: number, d: number, p: number, best: number): number {
+  const v = roundToFormat(p, format);
+  const above = spacingAt(v, format);
+  const even = (v / above) % 2 === 0;
+  const lo = runStart(format, p);
+  const hi = Math.min(p, above / 2 < 1 ? v : v + above / 2 - (even ? 0 : 1));
+  const roundingTerm = isPowerOfTwo(t) ? 0 : spacingAt(v * t, format) / 2;
+  const bound = (roundingTerm + v * d + (above / 2) * th) * (1 + SLACK) + SLACK * (v + above) * th;
+  if (bound < best) return -1;
+  const c = roundToFormat(v * t, format);
+  return Math.max(best, Math.abs(c - lo * th), Math.abs(c - hi * th));
+}
+
+/**
+ * Runs of binade e (positions [2^e, 2^(e+1)), spacing s = 2^(e-m+1), half-width h = s/2) with
+ * values v = k s from `fl_D(p)` down to just above 2^e, each with the same closed shape: v even
+ * in D (k even) holds [v - h, v + h], odd holds [v - h + 1, v + h - 1]. Returns the larger of
+ * `best` and their errors, and `done` when a bound shows that no lower run can pass it.
+ * The spacing of `v t` takes at most two values over a binade (v t spans a factor of two).
+ * When t = θ is a power of two every product and difference is exact: the errors are exactly
+ * `(h - [k odd]) θ`, at most `h θ`, so once `best` reaches that the rest cannot pass it.
+ */
+function binadeRuns(format: FloatFormat, t: number, th: number, d: number, e: number, p: number, best: number): { best: number; done: boolean } {
+  const m = significantBits(format);
+  const floorValue = 2 ** e;
+  const s = 2 ** (e - m + 1);
+  const h = s / 2;
+  const kLow = floorValue / s;
+  let k = roundToFormat(p, format) / s;
+  if (k <= kLow) return { best, done: false };
+  const exactProducts = isPowerOfTwo(t);
+  const exact = exactProducts && t === th;
+  const topProduct = k * s * t;
+  const edge = 2 ** binaryExponent(topProduct);
+  const halfHigh = exactProducts ? 0 : spacingAt(topProduct, format) / 2;
+  const halfLow = exactProducts ? 0 : spacingAt(floorValue * t, format) / 2;
+  const spread = h * th;
+  for (; k > kLow; k--) {
+    const v = k * s;
+    const vt = v * t;
+    if (exact) {
+      if (spread <= best) return { best, done: true };
+    } else {
+      const bound = ((vt >= edge ? halfHigh : halfLow) + v * d + spread) * (1 + SLACK) + SLACK * (v + s) * th;
+      if (bound < best) return { best, done: true };
+    }
+    const c = roundToFormat(vt, format);
+    const odd = k % 2;
+    const e1 = Math.abs(c - (v - h + odd) * th);
+    const e2 = Math.abs(c - (v + h - odd) * th);
+    if (e1 > best) best = e1;
+    if (e2 > best) best = e2;
+  }
+  return { best, done: false };
 }
 
 /**

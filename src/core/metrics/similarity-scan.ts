@@ -29,17 +29,18 @@
  * `cosine-sum-bounds.ts` (which hold for the reference expression itself, rounding included) put
  * every sum of an interval below the best reference sum so far, no offset in it can lower the
  * floor or take its offset, and when the first negative sum is found or the lower bound is not
- * negative, none can be that either. The same results, with the bounds checked first on
- * intervals of 8B offsets and then on each block; for typical codes (fast pairs few next to the
- * slow ones that keep the sum high near k = 1) nearly every block is passed over.
+ * negative, none can be that either. The same results, with the bounds checked top down on
+ * intervals of B 8^j offsets (each split into eight only when its bounds fail, visited in order of
+ * k) down to single blocks; for typical codes (fast pairs few next to the slow ones that keep the
+ * sum high near k = 1) nearly every block is passed over, most of them inside a larger interval.
  */
 import { cosineSumBounds } from './cosine-sum-bounds.js';
 import { COSINE_BLOCK, cosineSumMargin, fillCosineSums, planCosineSums } from './cosine-sum-blocks.js';
-import { scanAllowed } from './scan-limits.js';
+import { MAX_SCAN_WORK, SCAN_WORK, scanAllowed } from './scan-limits.js';
 
 const BLOCK = COSINE_BLOCK;
-/** Offsets per interval whose bounds are checked before its blocks'. */
-const SPAN_OF_BOUNDS = 8 * BLOCK;
+/** Parts per interval: an interval of BLOCK FANOUT^j offsets splits into FANOUT equal parts. */
+const FANOUT = 8;
 
 /** sum: `Σ_i cos(k θ'_i)` in pair order, the reference expression. */
 export function cosineSum(theta: Float64Array, k: number): number {
@@ -58,19 +59,24 @@ export interface SimilarityPartial {
   floor: number;
   offset: number;
   negative: number | null;
+  /** Work spent, in the units of `SCAN_WORK` (scan-limits.ts). */
+  work: number;
+  /** False when the scan stopped at the work limit: `floor` and `offset` are then not the minimum. */
+  complete: boolean;
 }
 
 export interface SimilarityResult {
   separationFloor: number | null;
   separationFloorOffset: number | null;
   discriminationSpan: number | null;
+  /** False when the scan stopped at `MAX_SCAN_WORK` before the end of the span. */
+  complete: boolean;
 }
 
 /**
- * Scans offsets k in [kStart, kEnd) (so two workers can split a span and `mergeSimilarity` the
- * halves); null for an empty range or no pairs.
+ * Scans offsets k in [kStart, kEnd); null for an empty range or no pairs.
  */
-export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: number): SimilarityPartial | null {
+export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: number, workLimit = MAX_SCAN_WORK): SimilarityPartial | null {
   const P = theta.length;
   if (P === 0 || !(kEnd > kStart) || !(kStart >= 1)) return null;
   const plan = planCosineSums(theta);
@@ -80,23 +86,22 @@ export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: n
   let bestK = -1;
   let bestSum = -Infinity;
   let negative: number | null = null;
+  let work = 0;
+  let complete = true;
+  const exactSum = (k: number): number => {
+    work += SCAN_WORK.exactPair * P;
+    return cosineSum(theta, k);
+  };
   // Nothing in [from, to] can change the result: every reference sum is below the best one, and
   // none is negative or a negative one was found already.
   const passes = (from: number, to: number): boolean => {
     if (bestK < 0) return false;
+    work += SCAN_WORK.boundPair * P;
     const bounds = cosineSumBounds(theta, from, to);
     return bounds.upper < bestSum && (negative !== null || bounds.lower >= 0);
   };
-  for (let k0 = kStart; k0 < kEnd; k0 += BLOCK) {
-    const n = Math.min(BLOCK, kEnd - k0);
-    if ((k0 - kStart) % SPAN_OF_BOUNDS === 0) {
-      const to = Math.min(k0 + SPAN_OF_BOUNDS, kEnd) - 1;
-      if (to > k0 + n - 1 && passes(k0, to)) {
-        k0 = to + 1 - BLOCK;
-        continue;
-      }
-    }
-    if (passes(k0, k0 + n - 1)) continue;
+  const scanBlock = (k0: number, n: number): void => {
+    work += n * (P + SCAN_WORK.offset);
     fillCosineSums(plan, k0, n, buf);
     const margin = cosineSumMargin(plan, k0, n);
     let threshold = bestApprox - margin;
@@ -104,7 +109,7 @@ export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: n
       const v = buf[j];
       if (v >= threshold) {
         const k = k0 + j;
-        const exact = cosineSum(theta, k);
+        const exact = exactSum(k);
         const f = Math.sqrt(2 * (1 - exact / P));
         if (f < bestFloor) {
           bestFloor = f;
@@ -118,29 +123,46 @@ export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: n
         if (negative === null && exact < 0) negative = k;
       } else if (negative === null && v < margin) {
         const k = k0 + j;
-        if (v < -margin || cosineSum(theta, k) < 0) negative = k;
+        if (v < -margin || exactSum(k) < 0) negative = k;
       }
     }
-  }
-  return { floor: bestFloor, offset: bestK, negative };
-}
-
-/** Combines two scanned ranges: the lower floor (the smaller offset on a tie), the first negative. */
-export function mergeSimilarity(a: SimilarityPartial, b: SimilarityPartial): SimilarityPartial {
-  const takeA = a.floor < b.floor || (a.floor === b.floor && a.offset < b.offset);
-  const negative = a.negative === null ? b.negative : b.negative === null ? a.negative : Math.min(a.negative, b.negative);
-  return { floor: takeA ? a.floor : b.floor, offset: takeA ? a.offset : b.offset, negative };
+  };
+  // Intervals of BLOCK FANOUT^j offsets, visited in order of k so every decision sees what a
+  // plain scan would have seen; an interval's parts are looked at only when its bounds fail.
+  // Past the work limit nothing more is visited and the result says it is incomplete.
+  const visit = (from: number, size: number): void => {
+    if (!complete) return;
+    if (work > workLimit) {
+      complete = false;
+      return;
+    }
+    const to = Math.min(from + size, kEnd);
+    if (passes(from, to - 1)) return;
+    if (size === BLOCK) {
+      scanBlock(from, to - from);
+      return;
+    }
+    const part = size / FANOUT;
+    for (let k = from; k < to; k += part) visit(k, part);
+  };
+  let size = BLOCK;
+  while (size < kEnd - kStart) size *= FANOUT;
+  visit(kStart, size);
+  return { floor: bestFloor, offset: bestK, negative, work, complete };
 }
 
 /**
  * 0..2, tokens, tokens: `separationFloor`, `separationFloorOffset`, `discriminationSpan` over
  * k in [1, T) (METRICS.md); all null when `T < 2`, there are no pairs, or the scan is past
- * `MAX_SCAN_SPAN` / `MAX_SCAN_ELEMENTS`.
+ * `MAX_SCAN_SPAN` / `MAX_SCAN_ELEMENTS`. When the scan stops at `MAX_SCAN_WORK` the floor and
+ * its offset are null and `complete` is false; a first negative sum found before the stop is
+ * still exact (offsets are decided in order), otherwise it is null too.
  */
 export function similarityScan(theta: Float64Array | null, span: number | null): SimilarityResult {
-  const none: SimilarityResult = { separationFloor: null, separationFloorOffset: null, discriminationSpan: null };
+  const none: SimilarityResult = { separationFloor: null, separationFloorOffset: null, discriminationSpan: null, complete: true };
   if (theta === null || span === null || span < 2 || !scanAllowed(theta.length, span)) return none;
   const r = scanSimilarityRange(theta, 1, span);
   if (r === null) return none;
-  return { separationFloor: r.floor, separationFloorOffset: r.offset, discriminationSpan: r.negative };
+  if (!r.complete) return { ...none, discriminationSpan: r.negative, complete: false };
+  return { separationFloor: r.floor, separationFloorOffset: r.offset, discriminationSpan: r.negative, complete: true };
 }

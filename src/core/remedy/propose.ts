@@ -27,6 +27,7 @@ import { isRuleId, RULES } from '../rules/catalog.js';
 import { formatInteger, formatNumber, formatTokens } from '../units.js';
 import { applyChange } from './apply-change.js';
 import { lightMetric, rangeMetrics, budgetMetrics } from './light-metrics.js';
+import { uncomputedScanMetrics } from '../rules/metric-rules.js';
 import { MAX_FILE_PROOF_WORK, prove, type FindingIdentity, type Proof, type RemedyContext } from './prove.js';
 import { searchRotaryBase, type BaseDirection, type BaseTrial } from './rotary-base.js';
 import { coveringFactor } from './scaling-factor.js';
@@ -335,6 +336,9 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
       const metric = target.metric ?? '';
       const limit = target.limit;
       if (!limit) return `the policy has no limit on ${metric}`;
+      if (isMetricPath(metric) && metricValue(ctx.head.metrics, metric) === null && uncomputedScanMetrics(ctx.head.metrics).includes(metric)) {
+        return `no remedy is searched for ${metric}: the scans stopped at their bound at this span (scan-incomplete), so no change can be proven against it; serve a shorter span`;
+      }
       if (metric === 'discriminationSpan' || metric === 'separationFloor') return [(c, t) => baseKind(c, t)];
       if (metric === 'memoryBytes' || metric === 'cacheBytesAtSpan') return memory;
       if (metric === 'fitSequences') return [cacheDtypeKind, kvHeadsKind, spanKind];

@@ -83,6 +83,11 @@ export const RULES = {
     title: 'Some frequency pairs give neighbouring positions the same rounded angle',
     help: 'Compute angles in a wider format, or accept that those pairs cannot tell neighbours apart.',
   },
+  'scan-incomplete': {
+    severity: 'warn', scope: 'file',
+    title: 'A positional scan stopped at its documented bound, so some metrics are not computed',
+    help: 'The scans cover at most 2^31 tokens and a fixed amount of work; review the span by hand, or serve a shorter one. A policy limit on a metric left uncomputed counts as crossed.',
+  },
   'memory-over-budget': {
     severity: 'block', scope: 'file',
     title: 'Weights plus key/value cache at the span do not fit the device budget',

@@ -1,5 +1,6 @@
 import type { Finding, LocationMap, ModelSpec } from '../model.js';
-import type { Metrics } from '../metrics/types.js';
+import type { MetricPath, Metrics } from '../metrics/types.js';
+import { MAX_SCAN_ELEMENTS, MAX_SCAN_SPAN, MAX_SCAN_WORK } from '../metrics/scan-limits.js';
 import { usableDeviceBytes } from '../metrics/memory-curve.js';
 import { formatBytes, formatInteger, formatTokens } from '../units.js';
 import { RULES, type RuleId } from './catalog.js';
@@ -82,5 +83,33 @@ export function metricFindings(spec: ModelSpec, metrics: Metrics, locations: Loc
       `In ${format}, ${formatInteger(rounding.blurredPairs)} frequency pairs give two neighbouring positions within the ${label} ${formatTokens(T)} the same rounded angle, so those pairs cannot tell the neighbours apart; compute angles in a wider format if the model relies on them.`,
       formatWhere));
   }
+  const missing = uncomputedScanMetrics(metrics);
+  if (missing.length > 0 && T !== null) {
+    const found = metrics.discriminationSpan !== null ? ` (the first negative sum, discriminationSpan ${formatInteger(metrics.discriminationSpan)}, was found before the stop and is exact)` : '';
+    findings.push(finding('scan-incomplete',
+      `The positional scans over the ${label} ${formatTokens(T)} stopped at their bound (at most ${formatInteger(MAX_SCAN_SPAN)} tokens, ${formatInteger(MAX_SCAN_ELEMENTS)} pair-positions and ${formatInteger(MAX_SCAN_WORK)} units of similarity-scan work), so ${missing.join(', ')} ${missing.length === 1 ? 'is' : 'are'} not computed${found}; a limit on ${missing.length === 1 ? 'it' : 'them'} counts as crossed. Review this span by hand, or serve a shorter one.`,
+      where));
+  }
   return findings;
+}
+
+/**
+ * The scan metrics a rotary or sinusoidal code should have over its span but does not: the scans
+ * stopped at `MAX_SCAN_SPAN`, `MAX_SCAN_ELEMENTS` or `MAX_SCAN_WORK`. An angle error left null
+ * because something overflows is not missing: overflow is its answer.
+ */
+export function uncomputedScanMetrics(metrics: Metrics): MetricPath[] {
+  const T = metrics.evaluationSpan;
+  if (metrics.fastestWavelength === null || T === null || T < 2) return [];
+  const missing: MetricPath[] = [];
+  if (metrics.separationFloor === null) {
+    missing.push('separationFloor', 'separationFloorOffset');
+    if (metrics.discriminationSpan === null) missing.push('discriminationSpan');
+  }
+  for (const format of ['fp32', 'bf16', 'fp16'] as const) {
+    const p = metrics.precision[format];
+    if (p.angleErrorMax === null && p.overflowPosition === null) missing.push(`precision.${format}.angleErrorMax`);
+    if (p.blurredPairs === null) missing.push(`precision.${format}.blurredPairs`);
+  }
+  return missing;
 }
