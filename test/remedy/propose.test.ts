@@ -104,6 +104,13 @@ describe('proposeRemedy(ctx, finding) for a discrimination or separation limit',
     expect(r.remedy?.metrics.separationFloor).toBeGreaterThanOrEqual(0.3);
   });
 
+  it('searches nothing for a limit on a floor the scans left uncomputed (span past the scan bound), and says why', () => {
+    const r = remedyFor(modelText({ declared: 2 ** 40 }), 'limit-crossed', { metric: 'separationFloor', policy: 'limits:\n  separationFloor: { min: 0.3 }\n' });
+    expect(r.finding.metric).toBe('separationFloor');
+    expect(r.remedy).toBeNull();
+    expect(r.remedyWhyNot).toContain('scan-incomplete');
+  });
+
   it('has no base to change on a sinusoidal code', () => {
     const r = remedyFor(modelText({ position: 'code: sinusoidal', declared: 8192 }), 'limit-crossed', { metric: 'discriminationSpan', policy: limit(8192) });
     expect(r.remedy).toBeNull();
