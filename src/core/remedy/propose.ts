@@ -299,7 +299,10 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
       const found = firstNegativeOffset(theta, 1, Math.min(T, Math.ceil(limit.min as number)));
       return { passes: found.offset === null, cost: found.elements };
     }
-    const value = similarityScan(theta, T)[metric as 'discriminationSpan' | 'separationFloor'];
+    const scan = similarityScan(theta, T);
+    // A scan stopped at its work limit proves nothing: the base does not pass on it.
+    if (!scan.complete) return { passes: false, cost: theta.length * T };
+    const value = scan[metric as 'discriminationSpan' | 'separationFloor'];
     return { passes: checkLimit(limit, target.baseValue, value).crossed.length === 0, cost: theta.length * T };
   };
   const search = searchRotaryBase(code.base, direction, criterion);
