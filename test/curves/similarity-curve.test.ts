@@ -24,6 +24,20 @@ function reference(theta: Float64Array, span: number, buckets: number, spacing: 
 }
 
 describe('similarityCurve(theta, span, buckets, spacing)', () => {
+  it('is not drawn past the work limit: refused before starting when filling every offset would pass it, or once exact re-evaluations do', () => {
+    const theta = geometricFrequencies(10000, 2)!;
+    const started = performance.now();
+    // One pair over 2^31 - 1 offsets: (1 + 16) units per offset, far past MAX_SCAN_WORK (2^30).
+    expect(similarityCurve(theta, 2 ** 31 - 1)).toBeNull();
+    expect(performance.now() - started).toBeLessThan(50);
+    const span = 20000;
+    const drawn = similarityCurve(theta, span, 64, 'log');
+    expect(drawn).not.toBeNull();
+    // Just above the fill cost: the exact re-evaluations of the bucket extremes push it over.
+    expect(similarityCurve(theta, span, 64, 'log', span * 17 + 200 * 3)).toBeNull();
+    expect(similarityCurve(theta, span, 64, 'log', span * 17 + 200 * span)).toEqual(drawn);
+  });
+
   it('gives exactly the straightforward loop\'s min and max per bucket (bit for bit, ties to the earlier k)', () => {
     for (const [base, d, span, buckets, spacing] of [[10000, 128, 20000, 64, 'log'], [500, 64, 9000, 37, 'linear'], [1e6, 128, 3000, 400, 'log']] as const) {
       const theta = geometricFrequencies(base, d)!;

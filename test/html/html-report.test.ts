@@ -3,6 +3,7 @@ import { renderHtmlReport } from '../../src/core/render/html-report.js';
 import { escapeHtml } from '../../src/core/render/escape.js';
 import { h } from '../../src/core/render/html/markup.js';
 import { demoTrees, gateOver } from '../support/demo-gate.js';
+import { checkpointConfig } from '../support/scenario-repo.js';
 import { HOSTILE, hostileReport } from './hostile.js';
 
 const { base, head } = demoTrees();
@@ -68,4 +69,19 @@ describe('h(tag, attrs, ...children)', () => {
     expect(() => h('p', { 'on"x': 1 })).toThrow('attribute name "on\\"x" is not a plain name');
     expect(() => h('p x', null)).toThrow('tag "p x" is not a plain name');
   });
+});
+
+describe('renderHtmlReport on a span the curve cannot afford', () => {
+  it('says the similarity curve is not drawn, and the gate plus page for one pair over 2^31 − 1 tokens take under 2 s of CPU', async () => {
+    const policy = { '.github/context-reach.yml': 'files: ["models/**"]\n' };
+    const cpu = process.cpuUsage();
+    const { report: long } = await gateOver(
+      { ...policy, 'models/x/config.json': checkpointConfig({ head_dim: 2 }) },
+      { ...policy, 'models/x/config.json': checkpointConfig({ head_dim: 2, max_position_embeddings: 2 ** 31 - 1 }) },
+    );
+    const page = renderHtmlReport(long);
+    const used = process.cpuUsage(cpu);
+    has(page, 'is not drawn: visiting every offset would take too long for a report');
+    expect((used.user + used.system) / 1000).toBeLessThan(2000);
+  }, 30_000);
 });

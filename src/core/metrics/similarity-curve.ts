@@ -13,7 +13,7 @@
  * go to the earlier offset. Memory is O(P + buckets + block), never O(T).
  */
 import { COSINE_BLOCK, cosineSumMargin, fillCosineSums, planCosineSums } from './cosine-sum-blocks.js';
-import { scanAllowed } from './scan-limits.js';
+import { MAX_SCAN_WORK, SCAN_WORK, scanAllowed } from './scan-limits.js';
 import { cosineSum } from './similarity-scan.js';
 
 /** Buckets of a curve when the caller asks for none in particular (default: `480`, about one per pixel). */
@@ -54,7 +54,9 @@ export function bucketEdges(span: number, buckets: number, spacing: BucketSpacin
 
 /**
  * ratio per bucket: min and max of `S(k)` over each bucket of k in [1, T) (see the file doc);
- * null when `T < 2`, there are no pairs, or the scan is past the bounds of `scan-limits.ts`.
+ * null when `T < 2`, there are no pairs, or the scan is past the bounds of `scan-limits.ts`:
+ * the span and pair bounds, or `MAX_SCAN_WORK` counted as the similarity scan counts it (every
+ * offset filled, so known before starting, plus each exact re-evaluation).
  * (buckets default: `DEFAULT_CURVE_BUCKETS`; spacing default: `log`)
  */
 export function similarityCurve(
@@ -62,11 +64,15 @@ export function similarityCurve(
   span: number | null,
   buckets: number = DEFAULT_CURVE_BUCKETS,
   spacing: BucketSpacing = 'log',
+  workLimit: number = MAX_SCAN_WORK,
 ): SimilarityBucket[] | null {
   if (theta === null || theta.length === 0 || span === null || !scanAllowed(theta.length, span)) return null;
+  const P = theta.length;
+  // Every offset is filled: past the work limit before starting, the curve is not drawn at all.
+  let work = span * (P + SCAN_WORK.offset);
+  if (work > workLimit) return null;
   const edges = bucketEdges(span, buckets, spacing);
   if (edges === null) return null;
-  const P = theta.length;
   const plan = planCosineSums(theta);
   const buf = new Float64Array(COSINE_BLOCK);
   const out: SimilarityBucket[] = [];
@@ -98,6 +104,8 @@ export function similarityCurve(
       const nearMin = v <= approxMin + margin;
       const nearMax = v >= approxMax - margin;
       if (!nearMin && !nearMax) continue;
+      work += SCAN_WORK.exactPair * P;
+      if (work > workLimit) return null;
       const exact = cosineSum(theta, k);
       if (nearMin) {
         if (exact < minSum) { minSum = exact; minAt = k; }

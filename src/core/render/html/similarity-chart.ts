@@ -16,12 +16,6 @@ import { h, type Markup } from './markup.js';
 /** Buckets per curve: about one per pixel column of the wide chart. */
 const BUCKETS = 800;
 
-/**
- * pair·offsets: longest curve drawn, every offset being visited (default: `2^31`, about two
- * seconds); past it the page says so instead of drawing.
- */
-export const MAX_CURVE_WORK = 2 ** 31;
-
 export interface SimilaritySeries {
   buckets: SimilarityBucket[];
   span: number;
@@ -30,12 +24,15 @@ export interface SimilaritySeries {
   discrimination: number | null;
 }
 
-/** The curve of one version; null without frequencies, a span of at least 2, or past the scan bounds. */
+/**
+ * The curve of one version; null without frequencies, a span of at least 2, or past the scan
+ * bounds (the curve visits every offset: `MAX_SCAN_WORK` of `scan-limits.ts`, about a second, is
+ * 13 million tokens at 64 pairs); the page then says it is not drawn.
+ */
 export function similarityOf(report: FileReport | null): SimilaritySeries | null {
   if (!report) return null;
   const span = report.metrics.evaluationSpan;
   const plan = frequencyPlan(report.spec, span, report.metrics.trainedSpan);
-  if (plan && span !== null && plan.scaled.length * span > MAX_CURVE_WORK) return null;
   const buckets = plan ? similarityCurve(plan.scaled, span, BUCKETS, 'log') : null;
   if (!buckets || span === null) return null;
   return { buckets, span, trained: report.metrics.trainedSpan, discrimination: report.metrics.discriminationSpan };
