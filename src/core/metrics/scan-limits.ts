@@ -9,8 +9,10 @@
 export const MAX_SCAN_SPAN = 2 ** 31;
 
 /**
- * elements: most (position, pair) elements one scan touches (`2^37`: 64 pairs over `2^31`
- * positions, about three minutes on one core); past it the scan gives null.
+ * elements: most (position, pair) elements one scan may cover (`2^37`: 64 pairs over `2^31`
+ * positions); past it the scan gives null. The scans pass over most of what they cover (interval
+ * bounds, runs of shared positions); the similarity scan's actual spending is held by
+ * `MAX_SCAN_WORK` below, and the fp32 angle walk visits at most one binade of runs per pair.
  */
 export const MAX_SCAN_ELEMENTS = 2 ** 37;
 
