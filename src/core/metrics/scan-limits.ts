@@ -12,7 +12,9 @@ export const MAX_SCAN_SPAN = 2 ** 31;
  * elements: most (position, pair) elements one scan may cover (`2^37`: 64 pairs over `2^31`
  * positions); past it the scan gives null. The scans pass over most of what they cover (interval
  * bounds, runs of shared positions); the similarity scan's actual spending is held by
- * `MAX_SCAN_WORK` below, and the fp32 angle walk visits at most one binade of runs per pair.
+ * `MAX_SCAN_WORK` below; the angle walk stops where its bound falls below the best error
+ * (158 ms at most for 64 pairs at 2^31 - 1 over the frequency sets tried, near-power-of-two and
+ * exactly held ones among them).
  */
 export const MAX_SCAN_ELEMENTS = 2 ** 37;
 
