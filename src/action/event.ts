@@ -60,6 +60,22 @@ function text(payload: unknown, path: string, eventName: string): string {
   return value;
 }
 
+function positiveWhole(payload: unknown, path: string, eventName: string): number {
+  const value = field(payload, path, eventName);
+  if (!Number.isSafeInteger(value) || (value as number) < 1) {
+    throw new EventError(`The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a positive whole number.`);
+  }
+  return value as number;
+}
+
+function list(payload: unknown, path: string, eventName: string): unknown[] {
+  const value = field(payload, path, eventName);
+  if (!Array.isArray(value)) {
+    throw new EventError(`The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a list.`);
+  }
+  return value;
+}
+
 function repository(payload: unknown, eventName: string): { owner: string; repo: string } {
   return { owner: text(payload, 'repository.owner.login', eventName), repo: text(payload, 'repository.name', eventName) };
 }
@@ -76,21 +92,15 @@ export function parseEvent(eventName: string, payload: unknown, baseInput: strin
   switch (eventName) {
     case 'pull_request':
     case 'pull_request_target': {
-      const number = field(payload, 'pull_request.number', eventName);
-      if (!Number.isSafeInteger(number) || (number as number) < 1) {
-        throw new EventError(`The ${eventName} event payload has "pull_request.number" = ${JSON.stringify(number)}; expected a positive whole number.`);
-      }
-      const labels = field(payload, 'pull_request.labels', eventName);
-      if (!Array.isArray(labels)) {
-        throw new EventError(`The ${eventName} event payload has "pull_request.labels" = ${JSON.stringify(labels)}; expected a list.`);
-      }
+      const number = positiveWhole(payload, 'pull_request.number', eventName);
+      const labels = list(payload, 'pull_request.labels', eventName);
       const headRepo = field(payload, 'pull_request.head.repo', eventName) as Json | null;
       const baseRepo = text(payload, 'pull_request.base.repo.full_name', eventName);
       return {
         ...repository(payload, eventName),
         base: sha(payload, 'pull_request.base.sha', eventName),
         head: sha(payload, 'pull_request.head.sha', eventName),
-        pullNumber: number as number,
+        pullNumber: number,
         labels: labels.map((label) => (label as Json | null)?.name).filter((name): name is string => typeof name === 'string'),
         // A deleted fork leaves head.repo null: still a fork.
         isFork: headRepo === null || headRepo?.full_name !== baseRepo,
@@ -160,20 +170,14 @@ export function parseWorkflowRun(payload: unknown): WorkflowRunInfo {
   if (payload === null || typeof payload !== 'object') {
     throw new EventError(`The ${name} event payload is ${payload === null ? 'null' : typeof payload}; expected the JSON object at GITHUB_EVENT_PATH.`);
   }
-  const runId = field(payload, 'workflow_run.id', name);
-  if (!Number.isSafeInteger(runId) || (runId as number) < 1) {
-    throw new EventError(`The ${name} event payload has "workflow_run.id" = ${JSON.stringify(runId)}; expected a positive whole number.`);
-  }
-  const pulls = field(payload, 'workflow_run.pull_requests', name);
-  if (!Array.isArray(pulls)) {
-    throw new EventError(`The ${name} event payload has "workflow_run.pull_requests" = ${JSON.stringify(pulls)}; expected a list.`);
-  }
+  const runId = positiveWhole(payload, 'workflow_run.id', name);
+  const pulls = list(payload, 'workflow_run.pull_requests', name);
   const headRepo = field(payload, 'workflow_run.head_repository', name) as Json | null;
   const headOwner = (headRepo?.owner as Json | undefined)?.login;
   const headBranch = field(payload, 'workflow_run.head_branch', name);
   return {
     ...repository(payload, name),
-    runId: runId as number,
+    runId,
     event: text(payload, 'workflow_run.event', name),
     headSha: sha(payload, 'workflow_run.head_sha', name),
     headLabel: typeof headOwner === 'string' && typeof headBranch === 'string' && headOwner !== '' && headBranch !== '' ? `${headOwner}:${headBranch}` : null,

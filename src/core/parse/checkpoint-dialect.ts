@@ -37,7 +37,7 @@ import { quoteText } from './quote.js';
 import type { PathSegment } from './quote.js';
 import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
 import {
-  DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_ROTARY_BASE, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA, isCount,
+  DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_ROTARY_BASE, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA, defaultHeadDim, isCount,
 } from './spec-defaults.js';
 import type { SourceMapping, SourceValue } from './source.js';
 
@@ -148,7 +148,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     : null;
 
   const experts = readExperts(r, size);
-  const position = readPosition(r, modelType, gpt2Style, headDim ?? (isCount(hidden) && isCount(heads) ? hidden / heads : NaN));
+  const position = readPosition(r, modelType, gpt2Style, headDim ?? defaultHeadDim(hidden, heads));
   const window = readWindow(r, modelType, layers);
 
   return {

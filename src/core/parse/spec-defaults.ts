@@ -65,10 +65,15 @@ export function isCount(n: number | null | undefined): n is number {
 }
 
 /** The spec with every documented default applied; derived values are NaN when their inputs are unusable. */
+/** Width of one head when a config states none: `hidden / heads` (NaN when either is unusable). */
+export function defaultHeadDim(hidden: number, heads: number): number {
+  return isCount(hidden) && isCount(heads) ? hidden / heads : NaN;
+}
+
 export function completeSpec(draft: SpecDraft): ModelSpec {
   const { layers, hidden, heads } = draft;
   const kvHeads = draft.kvHeads ?? (isCount(heads) ? heads : NaN);
-  const headDim = draft.headDim ?? (isCount(hidden) && isCount(heads) ? hidden / heads : NaN);
+  const headDim = draft.headDim ?? defaultHeadDim(hidden, heads);
   const ffn = draft.ffn ?? (isCount(hidden) ? DEFAULT_FFN_RATIO * hidden : NaN);
   return {
     name: draft.name ?? null,
