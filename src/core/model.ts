@@ -59,6 +59,45 @@ export interface EncoderStack {
   ffn: number;
 }
 
+// --- Experts, latent attention, layers that differ, encoder-only (METRICS.md, "Mixtures of experts
+// and latent attention", "Layers that differ"). Optional fields: absent is the documented default.
+
+/** A mixture-of-experts feed-forward (METRICS.md, "Mixtures of experts and latent attention"). */
+export interface Experts {
+  /** Routed experts `E`. */
+  total: number;
+  /** Routed experts each token uses, `k`. */
+  active: number;
+  /** Width of one routed expert, `moeFfn` (default: `ffn`). */
+  width?: number | null;
+  /** Always-active shared experts (default: `0`). */
+  shared?: number | null;
+  /** Width of one shared expert (default: `width`). */
+  sharedWidth?: number | null;
+  /** A `hidden → 1` gate on the shared experts' output, as Qwen2-MoE-style blocks have (default: `false`). */
+  sharedGate?: boolean | null;
+  /** Decoder layers whose feed-forward is dense, of width `ffn` (default: `0`). */
+  denseLayers?: number | null;
+}
+
+/** Latent attention (Liu et al. 2024, DeepSeek-V2, section 2.1). */
+export interface LatentAttention {
+  /** `d_c`, the compressed key/value width (`kv_lora_rank`). */
+  kvRank: number;
+  /** `d_c'`, the compressed query width (`q_lora_rank`; default: `null`, a plain query projection). */
+  qRank: number | null;
+  /** `d_h^R`, the decoupled rotary width per head (`qk_rope_head_dim`). */
+  ropeDim: number;
+  /** Per-head query/key width without position code (`qk_nope_head_dim`). */
+  nopeDim: number;
+  /** Per-head value width (`v_head_dim`). */
+  valueDim: number;
+}
+
+/** Attention of one decoder layer: every earlier token, a sliding window, or a fixed chunk. */
+export type LayerAttention = 'full' | 'sliding' | 'chunked';
+export const LAYER_ATTENTIONS: readonly LayerAttention[] = ['full', 'sliding', 'chunked'];
+
 export interface Serving {
   /** Served span in tokens (default: `null`, the declared span is evaluated). */
   span: number | null;
@@ -95,7 +134,7 @@ export interface ModelSpec {
   /** Biases on linear layers and norms (default: `false`). */
   bias: boolean;
   /** Mixture of experts (default: `null`, dense). */
-  experts: { total: number; active: number } | null;
+  experts: Experts | null;
   /** Encoder stack of an encoder-decoder model (default: `null`). */
   encoder: EncoderStack | null;
   position: PositionCode;
@@ -107,6 +146,22 @@ export interface ModelSpec {
   slidingWindow: number | null;
   /** How many decoder layers use the sliding window (default: all layers). */
   windowLayers: number | null;
+  /** Latent attention (default: `null`, plain multi-head attention). */
+  latent?: LatentAttention | null;
+  /** Attention of each decoder layer in order (default: `null`: `slidingWindow` and `windowLayers` describe the layers). */
+  layerTypes?: LayerAttention[] | null;
+  /** 0-based decoder layers without any position code (default: none). */
+  positionFreeLayers?: number[] | null;
+  /** Tokens per chunk of chunked local attention (default: `null`). */
+  chunkSize?: number | null;
+  /** Rotary base of the local (sliding and chunked) layers, which then run unscaled (default: `null`, the model's code). */
+  localBase?: number | null;
+  /** Norm vectors of width `hidden` in each decoder layer (default: `2`). */
+  layerNorms?: number | null;
+  /** Per-head norms on queries and keys, `2·headDim` weights per layer (default: `false`). */
+  qkNorms?: boolean | null;
+  /** Encoder-only model (BERT style): no decoding key/value cache (default: `false`). */
+  encoderOnly?: boolean | null;
   dtypes: {
     /** Weight storage (default: `bf16`). */
     weights: StorageDType | null;

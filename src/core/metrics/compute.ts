@@ -4,19 +4,21 @@
  * applied here; degenerate sizes give null metrics, never NaN, Infinity or an exception.
  */
 import type { FloatFormat, ModelSpec } from '../model.js';
-import type { Metrics, PrecisionMetrics } from './types.js';
+import type { LayerKindMetrics, Metrics, PrecisionMetrics } from './types.js';
 import { alibiHorizon, alibiSlopes } from './alibi-slopes.js';
 import { scaleFrequencies, yarnAttentionScale } from './context-scaling.js';
 import { flopsPerToken } from './flops.js';
-import { baseFrequencies, rotaryWidth } from './frequencies.js';
+import { baseFrequencies, rotaryHeadDim, rotaryWidth } from './frequencies.js';
 import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from './kv-cache.js';
+import { layerGroups, visibleSpan } from './layer-kinds.js';
+import type { LayerGroup } from './layer-kinds.js';
 import { fitSequences, memoryBytes, weightBytes } from './memory-fit.js';
 import { numberFormatMetrics } from './number-format.js';
 import { parameterCounts } from './parameter-count.js';
 import { positionShare } from './position-share.js';
 import { extensionRatio, headroom, reach, scalingCover } from './reach.js';
 import { receptiveField } from './receptive-field.js';
-import { positiveCount } from './sizes.js';
+import { positiveFinite } from './sizes.js';
 import { similarityScan } from './similarity-scan.js';
 import { declaredSpan, evaluationSpan, servedSpan, trainedSpan } from './spans.js';
 import { tokenBudget } from './token-budget.js';
@@ -32,16 +34,23 @@ export interface FrequencyPlan {
   scaled: Float64Array;
 }
 
+/** A rotary setting other than the model's own: the local layers' base, which runs unscaled. */
+export interface RotarySetting {
+  base: number;
+  unscaled: boolean;
+}
+
 /**
- * per token: `θ_i` and `θ'_i` of the spec's code over span `T` and trained span `L0`; null for
- * learned, ALiBi and position-free codes and for degenerate input.
+ * per token: `θ_i` and `θ'_i` of the spec's code (or of `setting`) over span `T` and trained
+ * span `L0`; null for learned, ALiBi and position-free codes and for degenerate input.
  */
-export function frequencyPlan(spec: ModelSpec, span: number | null, trained: number | null): FrequencyPlan | null {
-  const theta = baseFrequencies(spec);
+export function frequencyPlan(spec: ModelSpec, span: number | null, trained: number | null, setting?: RotarySetting): FrequencyPlan | null {
+  const theta = baseFrequencies(spec, setting?.base);
   if (theta === null) return null;
   const code = spec.position;
   if (code.kind !== 'rotary') return { theta, scaled: theta };
-  const r = rotaryWidth(spec.headDim, code.fraction) as number;
+  if (setting?.unscaled) return { theta, scaled: theta };
+  const r = rotaryWidth(rotaryHeadDim(spec), code.fraction) as number;
   const scaled = scaleFrequencies(theta, code.base, r, code.scaling ?? null, span, trained);
   return scaled === null ? null : { theta, scaled };
 }
@@ -74,9 +83,6 @@ export function computeMetrics(spec: ModelSpec): Metrics {
   const counts = parameterCounts(spec);
   const weights = weightBytes(spec, counts ? counts.params : null);
   const cache = cacheBytesAtSpan(spec, span);
-  const heads = positiveCount(spec.heads);
-  const headDim = positiveCount(spec.headDim);
-
   return {
     declaredSpan: declared,
     trainedSpan: trained,
@@ -107,7 +113,72 @@ export function computeMetrics(spec: ModelSpec): Metrics {
     cacheBytesAtSpan: cache,
     memoryBytes: memoryBytes(weights, cache),
     fitSequences: fitSequences(spec, weights, cache, servedSequences(spec)),
-    flopsPerToken: flopsPerToken(counts ? counts.nonEmbeddingParams : null, positiveCount(spec.layers), span, heads, headDim),
+    flopsPerToken: flopsPerToken(spec, counts ? counts.nonEmbeddingParams : null, span),
     tokenBudget: tokenBudget(spec.serving, span),
+    layerKinds: layerKindMetrics(spec, span, trained, { plan, range, similarity, precision }),
   };
+}
+
+interface TopLevel {
+  plan: FrequencyPlan | null;
+  range: { fastest: number; slowest: number } | null;
+  similarity: ReturnType<typeof similarityScan>;
+  precision: Record<FloatFormat, PrecisionMetrics>;
+}
+
+/**
+ * The positional metrics of each kind of decoder layer (METRICS.md, "Layers that differ"); null
+ * when every layer is of one kind with the model's own code (the top-level values then describe
+ * it) or the layers are degenerate. Local (sliding, chunked) layers use `localBase` unscaled when
+ * the spec states one; settings equal to the top level's reuse its scans.
+ */
+export function layerKindMetrics(spec: ModelSpec, span: number | null, trained: number | null, top: TopLevel): LayerKindMetrics[] | null {
+  const groups = layerGroups(spec);
+  if (groups === null) return null;
+  const code = spec.position;
+  const local = (g: LayerGroup) => g.window !== null && code?.kind === 'rotary' && positiveFinite(spec.localBase) !== null;
+  if (groups.length === 1 && groups[0]!.positional && !local(groups[0]!)) return null;
+  const formats = ['fp32', 'bf16', 'fp16'] as const;
+  const precisionCache = new Map<string, Record<FloatFormat, PrecisionMetrics>>();
+  return groups.map((g): LayerKindMetrics => {
+    const visible = span === null ? null : visibleSpan(g, span);
+    const ownCode = g.positional ? code.kind : 'none';
+    const setting: RotarySetting | undefined = local(g) ? { base: spec.localBase as number, unscaled: true } : undefined;
+    const rotaryBase = ownCode === 'rotary' && code.kind === 'rotary' ? (setting ? setting.base : code.base) : null;
+    const plan = !g.positional ? null : setting ? frequencyPlan(spec, span, trained, setting) : top.plan;
+    const key = setting ? `${setting.base}` : 'top';
+    let precision = precisionCache.get(key);
+    if (precision === undefined) {
+      precision = {} as Record<FloatFormat, PrecisionMetrics>;
+      for (const format of formats) {
+        precision[format] = !setting && plan !== null ? top.precision[format] : numberFormatMetrics(format, plan ? plan.scaled : null, span);
+      }
+      precisionCache.set(key, precision);
+    }
+    const range = plan === null ? null : setting ? wavelengthRange(plan.scaled) : top.range;
+    const similarity = plan === null ? similarityScan(null, null) : !setting && visible === span ? top.similarity : similarityScan(plan.scaled, visible);
+    return {
+      attention: g.attention,
+      positionCode: ownCode,
+      layers: g.layers,
+      window: g.window,
+      rotaryBase,
+      scaled: ownCode === 'rotary' && !setting && code.kind === 'rotary' && code.scaling !== null && code.scaling !== undefined,
+      visibleSpan: visible,
+      fastestWavelength: range ? range.fastest : null,
+      slowestWavelength: range ? range.slowest : null,
+      unturnedPairs: plan && trained !== null ? unturnedPairs(plan.scaled, trained) : null,
+      exposedPairs: plan && trained !== null && visible !== null ? exposedPairs(plan.theta, plan.scaled, trained, visible) : null,
+      separationFloor: similarity.separationFloor,
+      separationFloorOffset: similarity.separationFloorOffset,
+      discriminationSpan: similarity.discriminationSpan,
+      precision: g.positional ? precision : nullPrecision(span),
+    };
+  });
+}
+
+function nullPrecision(span: number | null): Record<FloatFormat, PrecisionMetrics> {
+  const out = {} as Record<FloatFormat, PrecisionMetrics>;
+  for (const format of ['fp32', 'bf16', 'fp16'] as const) out[format] = numberFormatMetrics(format, null, span);
+  return out;
 }

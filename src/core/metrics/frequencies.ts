@@ -26,6 +26,15 @@ export function rotaryWidth(headDim: number, fraction: number): number | null {
 }
 
 /**
+ * dimensions: the per-head width the rotary code turns: the decoupled rotary width `d_h^R` for
+ * latent attention (Liu et al. 2024, DeepSeek-V2, §2.1.3: only that part carries positions),
+ * the head width otherwise.
+ */
+export function rotaryHeadDim(spec: ModelSpec): number {
+  return spec.latent ? spec.latent.ropeDim : spec.headDim;
+}
+
+/**
  * per token: `θ_i = base^(-2i/d)`, `i = 0..P-1`, `P = d/2` (Vaswani et al. 2017 §3.5 with
  * base 10000 and `d = d_model`; Su et al. 2021, RoFormer, eq. 15 with `d = r`).
  */
@@ -39,14 +48,15 @@ export function geometricFrequencies(base: number, d: number): Float64Array | nu
 
 /**
  * per token: the unscaled frequencies `θ_i` of the spec's code: sinusoidal over `hidden`
- * (odd widths are degenerate), rotary over `r`; null for learned, ALiBi and position-free codes.
+ * (odd widths are degenerate), rotary over `r` (at `base` when given, e.g. the local layers'
+ * own base); null for learned, ALiBi and position-free codes.
  */
-export function baseFrequencies(spec: ModelSpec): Float64Array | null {
+export function baseFrequencies(spec: ModelSpec, base?: number): Float64Array | null {
   const code = spec.position;
   if (code?.kind === 'sinusoidal') return geometricFrequencies(SINUSOIDAL_BASE, spec.hidden);
   if (code?.kind === 'rotary') {
-    const r = rotaryWidth(spec.headDim, code.fraction);
-    return r === null ? null : geometricFrequencies(code.base, r);
+    const r = rotaryWidth(rotaryHeadDim(spec), code.fraction);
+    return r === null ? null : geometricFrequencies(base ?? code.base, r);
   }
   return null;
 }

@@ -1,39 +1,49 @@
 /**
  * Key/value cache size (METRICS.md: `cachePerTokenBytes`, `cacheBytesAtSpan`; common practice,
- * SOURCES.md §11: 524,288 bytes per token for 32 layers, 32 kv heads, head 128, fp16).
+ * SOURCES.md §11: 524,288 bytes per token for 32 layers, 32 kv heads, head 128, fp16; latent
+ * attention: Liu et al. 2024, DeepSeek-V2, Table 1, `(d_c + d_h^R)` elements per token and layer).
  */
 import type { ModelSpec } from '../model.js';
-import { nonNegativeCount, positiveCount } from './sizes.js';
+import { layerGroups, visibleSpan } from './layer-kinds.js';
+import { positiveCount } from './sizes.js';
 import { bytesPerElement, cacheDType } from './storage-bytes.js';
+
+export { windowedLayers } from './layer-kinds.js';
 
 /** Concurrent sequences when the serving block states none (default: `1`). */
 export const DEFAULT_SEQUENCES = 1;
 
-/** bytes: one layer's keys and values for one token, `2·kvHeads·headDim·bytes`; null if degenerate. */
-function layerTokenBytes(spec: ModelSpec): number | null {
+/**
+ * elements: what one decoder layer caches per token: `2·kvHeads·headDim` (keys and values), or
+ * for latent attention the compressed latent and the shared rotary key, `d_c + d_h^R`
+ * (DeepSeek-V2, Table 1); null if degenerate.
+ */
+export function layerTokenElements(spec: ModelSpec): number | null {
+  if (spec.latent) {
+    const dc = positiveCount(spec.latent.kvRank);
+    const dr = positiveCount(spec.latent.ropeDim);
+    return dc === null || dr === null ? null : dc + dr;
+  }
   const kv = positiveCount(spec.kvHeads);
   const headDim = positiveCount(spec.headDim);
+  return kv === null || headDim === null ? null : 2 * kv * headDim;
+}
+
+/** bytes: one layer's cache for one token in the cache dtype; null if degenerate. */
+function layerTokenBytes(spec: ModelSpec): number | null {
+  const elements = layerTokenElements(spec);
   const bytes = bytesPerElement(cacheDType(spec));
-  return kv === null || headDim === null || bytes === null ? null : 2 * kv * headDim * bytes;
+  return elements === null || bytes === null ? null : elements * bytes;
 }
 
 /**
- * count: decoder layers with a sliding window, 0 without a window; null when the window or the
- * count is degenerate or the count exceeds the layers (default: every layer when a window is set).
+ * bytes: `cachePerTokenBytes = Σ_decoder layers 2·kvHeads·headDim·bytes(cache dtype)` (common
+ * practice; latent attention `(d_c + d_h^R)·bytes`). An encoder-only model keeps no decoding
+ * cache: 0.
  */
-export function windowedLayers(spec: ModelSpec): number | null {
-  const layers = positiveCount(spec.layers);
-  if (layers === null) return null;
-  if (spec.slidingWindow === null || spec.slidingWindow === undefined) return 0;
-  if (positiveCount(spec.slidingWindow) === null) return null;
-  if (spec.windowLayers === null || spec.windowLayers === undefined) return layers;
-  const n = nonNegativeCount(spec.windowLayers);
-  return n === null || n > layers ? null : n;
-}
-
-/** bytes: `cachePerTokenBytes = Σ_decoder layers 2·kvHeads·headDim·bytes(cache dtype)` (common practice). */
 export function cachePerTokenBytes(spec: ModelSpec): number | null {
   const layers = positiveCount(spec.layers);
+  if (layers !== null && spec.encoderOnly === true) return 0;
   const perLayer = layerTokenBytes(spec);
   return layers === null || perLayer === null ? null : finite(layers * perLayer);
 }
@@ -45,19 +55,21 @@ export function servedSequences(spec: ModelSpec): number | null {
 }
 
 /**
- * bytes: `cacheBytesAtSpan = sequences · Σ_layers 2·kvHeads·headDim·bytes·min(T, window of that
- * layer)` (METRICS.md); windowed layers hold `min(T, w)` tokens, the others T.
+ * bytes: `cacheBytesAtSpan = sequences · Σ_layers perLayerTokenBytes·min(T, window of that layer)`
+ * (METRICS.md): sliding layers hold `min(T, w)` tokens, chunked layers `min(T, chunk)`, full
+ * layers T. An encoder-only model: 0.
  */
 export function cacheBytesAtSpan(spec: ModelSpec, span: number | null): number | null {
-  const layers = positiveCount(spec.layers);
-  const perLayer = layerTokenBytes(spec);
-  const windowed = windowedLayers(spec);
+  const groups = layerGroups(spec);
   const sequences = servedSequences(spec);
-  if (span === null || layers === null || perLayer === null || windowed === null || sequences === null) return null;
-  const w = windowed > 0 ? Math.min(span, spec.slidingWindow as number) : span;
-  return finite(sequences * perLayer * ((layers - windowed) * span + windowed * w));
+  if (span === null || groups === null || sequences === null) return null;
+  if (spec.encoderOnly === true) return 0;
+  const perLayer = layerTokenBytes(spec);
+  if (perLayer === null) return null;
+  const tokens = groups.reduce((sum, g) => sum + g.layers * visibleSpan(g, span), 0);
+  return finite(sequences * perLayer * tokens);
 }
 
-function finite(x: number): number | null {
-  return Number.isFinite(x) ? x : null;
+function finite(x: number | null): number | null {
+  return x !== null && Number.isFinite(x) ? x : null;
 }

@@ -1,16 +1,20 @@
 /**
- * Receptive field of a stack of sliding-window layers (Beltagy et al. 2020, Longformer, §3.1:
+ * Receptive field of a stack of local-attention layers (Beltagy et al. 2020, Longformer, §3.1:
  * `ℓ × w` at the top layer ℓ).
  */
 import type { ModelSpec } from '../model.js';
-import { positiveCount } from './sizes.js';
-import { windowedLayers } from './kv-cache.js';
+import { layerGroups } from './layer-kinds.js';
 
-/** tokens: `receptiveField = layers · w` when every decoder layer has the window w; null otherwise. */
+/**
+ * tokens: `receptiveField = Σ_sliding layers w` when no decoder layer has full attention, plus one
+ * chunk when chunked layers are present (a chunk never reaches past its own start, so chunked
+ * layers add at most one chunk; an upper bound); null when any layer has full attention.
+ */
 export function receptiveField(spec: ModelSpec): number | null {
-  const layers = positiveCount(spec.layers);
-  const windowed = windowedLayers(spec);
-  if (layers === null || windowed === null || windowed !== layers) return null;
-  const r = layers * (spec.slidingWindow as number);
-  return Number.isFinite(r) ? r : null;
+  const groups = layerGroups(spec);
+  if (groups === null || groups.some((g) => g.window === null)) return null;
+  let r = 0;
+  for (const g of groups) if (g.attention === 'sliding') r += g.layers * (g.window as number);
+  if (groups.some((g) => g.attention === 'chunked')) r += spec.chunkSize as number;
+  return Number.isFinite(r) && r > 0 ? r : null;
 }

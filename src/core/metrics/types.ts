@@ -2,7 +2,7 @@
  * Every metric of the contract (shared METRICS.md), under exactly its name there. `null` where a
  * metric does not apply or its inputs are degenerate.
  */
-import type { FloatFormat } from '../model.js';
+import type { FloatFormat, LayerAttention, PositionKind } from '../model.js';
 
 export interface PrecisionMetrics {
   /** tokens: largest n with every integer in [0, n] exact in the format. */
@@ -15,6 +15,36 @@ export interface PrecisionMetrics {
   overflowPosition: number | null;
   /** count: pairs with two neighbouring positions at the same rounded angle. */
   blurredPairs: number | null;
+}
+
+/**
+ * The positional metrics of one kind of decoder layer (METRICS.md, "Layers that differ"): its
+ * attention, its position code and rotary setting. Scans over offsets (`exposedPairs`, the
+ * similarity scan) run over the tokens the layer sees, `min(T, window)`; number formats over the
+ * absolute positions `[0, T)`, which every layer's angles are computed at.
+ */
+export interface LayerKindMetrics {
+  attention: LayerAttention;
+  /** The layer's position code; `none` for layers without one. */
+  positionCode: PositionKind;
+  /** count: decoder layers of this kind. */
+  layers: number;
+  /** tokens: window or chunk; null for full attention. */
+  window: number | null;
+  /** Rotary base of these layers; null without a rotary code. */
+  rotaryBase: number | null;
+  /** Whether the model's context scaling applies to these layers. */
+  scaled: boolean;
+  /** tokens: `min(T, window)`, the offsets these layers see. */
+  visibleSpan: number | null;
+  fastestWavelength: number | null;
+  slowestWavelength: number | null;
+  unturnedPairs: number | null;
+  exposedPairs: number | null;
+  separationFloor: number | null;
+  separationFloorOffset: number | null;
+  discriminationSpan: number | null;
+  precision: Record<FloatFormat, PrecisionMetrics>;
 }
 
 export interface Metrics {
@@ -52,6 +82,8 @@ export interface Metrics {
   fitSequences: number | null;
   flopsPerToken: number | null;
   tokenBudget: number | null;
+  /** Per layer kind, when the decoder layers are not all alike (default: `null`, one kind: the top-level values). */
+  layerKinds?: LayerKindMetrics[] | null;
 }
 
 /** Scalar metric names (everything but `precision` and `alibiSlopes`), in report order. */

@@ -3,7 +3,7 @@
  * Values a reader found missing or unusable arrive as NaN (the reader has reported them);
  * values derived from them stay NaN, so one bad key gives one finding and metrics return null.
  */
-import type { EncoderStack, FloatFormat, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType } from '../model.js';
+import type { EncoderStack, Experts, FloatFormat, LatentAttention, LayerAttention, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType } from '../model.js';
 
 /** A scaling block as stated: missing values take the defaults below. */
 export interface ScalingDraft {
@@ -33,7 +33,7 @@ export interface SpecDraft {
   vocab: number;
   tied?: boolean;
   bias?: boolean;
-  experts?: { total: number; active: number } | null;
+  experts?: Experts | null;
   encoder?: { layers: number; heads: number; kvHeads?: number; headDim?: number; ffn?: number } | null;
   position: PositionDraft;
   declaredSpan: number;
@@ -41,6 +41,15 @@ export interface SpecDraft {
   slidingWindow?: number | null;
   windowLayers?: number | null;
   dtypes?: { weights?: StorageDType | null; cache?: StorageDType | null; positions?: FloatFormat | null };
+  // Experts, latent attention, layers that differ, encoder-only (see ModelSpec).
+  latent?: LatentAttention | null;
+  layerTypes?: LayerAttention[] | null;
+  positionFreeLayers?: number[] | null;
+  chunkSize?: number | null;
+  localBase?: number | null;
+  layerNorms?: number | null;
+  qkNorms?: boolean | null;
+  encoderOnly?: boolean | null;
   embeddingInitStd?: number | null;
   embeddingMultiplier?: number | null;
   serving?: Partial<Serving>;
@@ -101,6 +110,7 @@ export function completeSpec(draft: SpecDraft): ModelSpec {
     },
     embeddingInitStd: draft.embeddingInitStd ?? null,
     embeddingMultiplier: draft.embeddingMultiplier ?? null,
+    ...completeShapes(draft),
     serving: {
       span: draft.serving?.span ?? null,
       sequences: draft.serving?.sequences ?? null,
@@ -110,6 +120,20 @@ export function completeSpec(draft: SpecDraft): ModelSpec {
       promptTokens: draft.serving?.promptTokens ?? null,
     },
   };
+}
+
+/** Experts, latent attention, layer kinds, encoder-only: stated fields only, so plain models keep their shape. */
+function completeShapes(draft: SpecDraft): Partial<ModelSpec> {
+  const out: Partial<ModelSpec> = {};
+  if (draft.latent) out.latent = draft.latent;
+  if (draft.layerTypes) out.layerTypes = draft.layerTypes;
+  if (draft.positionFreeLayers && draft.positionFreeLayers.length > 0) out.positionFreeLayers = draft.positionFreeLayers;
+  if (draft.chunkSize !== undefined && draft.chunkSize !== null) out.chunkSize = draft.chunkSize;
+  if (draft.localBase !== undefined && draft.localBase !== null) out.localBase = draft.localBase;
+  if (draft.layerNorms !== undefined && draft.layerNorms !== null) out.layerNorms = draft.layerNorms;
+  if (draft.qkNorms) out.qkNorms = true;
+  if (draft.encoderOnly) out.encoderOnly = true;
+  return out;
 }
 
 function completeEncoder(e: NonNullable<SpecDraft['encoder']>, hidden: number): EncoderStack {
