@@ -331,7 +331,7 @@ describe('readModel(checkpoint) position codes by family and key', () => {
   });
 
   test('readModel warns that a window with no "sliding_attention" layer has no effect', () => {
-    const { spec, findings } = readConfig({ ...BASE, sliding_window: 512, layer_types: ['full_attention', 'full_attention'] });
+    const { spec, findings } = readConfig({ ...BASE, sliding_window: 512, layer_types: ['full_attention', 'full_attention', 'full_attention', 'full_attention'] });
     expect(spec.slidingWindow).toBeNull();
     expect(findings.map((f) => [f.rule, f.key])).toEqual([['key-ignored', 'sliding_window']]);
   });
@@ -368,13 +368,13 @@ describe('readModel(checkpoint) keys that do nothing', () => {
     expect(findings.map((f) => [f.rule, f.key])).toEqual([['key-ignored', 'rope_scaling.attention_factor']]);
   });
 
-  test('readModel reads the full_attention entry of per-layer-type rope_parameters and says the others are not read', () => {
+  test('readModel reads the full_attention entry of per-layer-type rope_parameters and says the local base has no effect without local layers', () => {
     const { spec, findings } = readConfig({
       ...BASE, rope_theta: undefined,
       rope_parameters: { full_attention: { rope_type: 'default', rope_theta: 1_000_000 }, sliding_attention: { rope_type: 'default', rope_theta: 10000 } },
     });
     expect(rotary(spec).base).toBe(1_000_000);
-    expect(findings.map((f) => [f.rule, f.key])).toEqual([['key-ignored', 'rope_parameters.sliding_attention']]);
+    expect(findings.map((f) => [f.rule, f.key])).toEqual([['key-ignored', 'rope_parameters.sliding_attention.rope_theta']]);
   });
 
   test('readModel warns when no position code is stated and the family is unknown, and reads none', () => {

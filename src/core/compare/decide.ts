@@ -8,6 +8,7 @@ import { uncomputedScanMetrics } from '../rules/metric-rules.js';
 import { SEVERITY_ORDER } from '../severity.js';
 import { formatInteger, formatNumber, percentChange } from '../units.js';
 import { formatMetric } from '../render/metric-format.js';
+import { rotaryHeadDim } from '../metrics/frequencies.js';
 import type { Judging, Limit } from './judging.js';
 import { METRIC_PATHS, METRIC_SOURCES, metricValue } from './metric-path.js';
 import type { CombinedRemedy, RemedyFields } from '../remedy/types.js';
@@ -127,7 +128,7 @@ function sameCode(a: ModelSpec, b: ModelSpec): boolean {
 /** Frequencies before scaling: they follow from the code kind, the rotary base and width, or d_model. */
 function frequencyKey(spec: ModelSpec): string {
   const code = spec.position;
-  if (code.kind === 'rotary') return `rotary:${code.base}:${2 * Math.floor((spec.headDim * code.fraction) / 2)}`;
+  if (code.kind === 'rotary') return `rotary:${code.base}:${2 * Math.floor((rotaryHeadDim(spec) * code.fraction) / 2)}:${spec.localBase ?? ''}`;
   if (code.kind === 'sinusoidal') return `sinusoidal:${spec.hidden}`;
   return code.kind;
 }
@@ -149,12 +150,12 @@ export function changeFindings(base: FileReport, head: FileReport): Finding[] {
   const after = frequencyKey(head.spec);
   if (before !== after) {
     const describe = (spec: ModelSpec) => spec.position.kind === 'rotary'
-      ? `rotary base ${formatNumber(spec.position.base, 6)} over ${2 * Math.floor((spec.headDim * spec.position.fraction) / 2)} channels`
+      ? `rotary base ${formatNumber(spec.position.base, 6)}${spec.localBase ? ` (local layers ${formatNumber(spec.localBase, 6)})` : ''} over ${2 * Math.floor((rotaryHeadDim(spec) * spec.position.fraction) / 2)} channels`
       : spec.position.kind === 'sinusoidal' ? `sinusoidal over ${spec.hidden} channels` : `${spec.position.kind} code`;
     findings.push({
       rule: 'frequencies-changed', severity: RULES['frequencies-changed'].severity,
       message: `The position frequencies changed from ${describe(base.spec)} to ${describe(head.spec)}: the checkpoint was trained with the old ones, so this needs retraining or tuning at the new frequencies.`,
-      ...at('position.base', 'position.fraction', 'headDim', 'position'),
+      ...at('position.base', 'localBase', 'position.fraction', 'headDim', 'latent.ropeDim', 'position'),
     });
   }
   if (b.cachePerTokenBytes !== null && h.cachePerTokenBytes !== null && b.cachePerTokenBytes !== h.cachePerTokenBytes) {
@@ -165,12 +166,14 @@ export function changeFindings(base: FileReport, head: FileReport): Finding[] {
       base.spec.headDim !== head.spec.headDim && `head size ${base.spec.headDim} → ${head.spec.headDim}`,
       cacheOf(base.spec) !== cacheOf(head.spec) && `cache dtype ${cacheOf(base.spec)} → ${cacheOf(head.spec)}`,
       base.spec.layers !== head.spec.layers && `layers ${base.spec.layers} → ${head.spec.layers}`,
-      JSON.stringify([base.spec.slidingWindow, base.spec.windowLayers]) !== JSON.stringify([head.spec.slidingWindow, head.spec.windowLayers]) && 'sliding window',
+      JSON.stringify([base.spec.slidingWindow, base.spec.windowLayers, base.spec.layerTypes ?? null, base.spec.chunkSize ?? null]) !== JSON.stringify([head.spec.slidingWindow, head.spec.windowLayers, head.spec.layerTypes ?? null, head.spec.chunkSize ?? null]) && 'layer pattern',
+      JSON.stringify(base.spec.latent ?? null) !== JSON.stringify(head.spec.latent ?? null) && 'latent attention',
+      Boolean(base.spec.encoderOnly) !== Boolean(head.spec.encoderOnly) && 'encoder-only',
     ].filter(Boolean).join(', ');
     findings.push({
       rule: 'cache-per-token-changed', severity: RULES['cache-per-token-changed'].severity,
       message: `Key/value cache per token changed from ${formatInteger(b.cachePerTokenBytes)} to ${formatInteger(h.cachePerTokenBytes)} bytes (${pct === null ? 'n/a' : `${pct > 0 ? '+' : '−'}${formatNumber(Math.abs(pct), 3)} %`})${causes ? `: ${causes}` : ''}.`,
-      ...at('kvHeads', 'dtypes.cache', 'headDim'),
+      ...at('kvHeads', 'latent.kvRank', 'dtypes.cache', 'headDim'),
     });
   }
   return findings;

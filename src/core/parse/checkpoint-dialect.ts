@@ -21,13 +21,14 @@
  * - Output matrix tied unless `tie_word_embeddings` is false (the checkpoint libraries' default).
  * - Biases: `attention_bias`, `mlp_bias`, `bias` or `use_bias` when stated; otherwise on for the
  *   families listed in BIAS_FAMILIES and for GPT-2 style configs, off for the rest.
- * - Sliding window: `sliding_window` unless `use_sliding_window` is false (Qwen families default it
- *   to false when absent); `layer_types` counts the windowed layers; `max_window_layers` marks
- *   the first windowed layer (layers at that index and above use the window, as the Qwen code does).
+ * - Layers that differ (sliding windows, layer patterns, chunked attention, layers without a
+ *   position code, the local layers' rotary base): see `checkpoint-layers.ts`.
+ * - Experts and latent attention: see `checkpoint-experts.ts`.
+ * - Encoder-only families (ENCODER_ONLY_FAMILIES, unless `is_decoder: true`) keep no decoding
+ *   cache; Gemma-2/3 families have four norms per layer; Qwen3 and Gemma-3 families per-head
+ *   query/key norms.
  * - Weight format: `dtype` or `torch_dtype` (float32 → fp32, bfloat16 → bf16, float16 → fp16).
  * - Embedding multiplier: `scale_embedding: true` → sqrt(hidden); Gemma families → sqrt(hidden).
- * - Experts: `num_local_experts`, `num_experts` or `n_routed_experts` with `num_experts_per_tok`;
- *   a stated 0 or 1 is a dense model.
  * - Declared span: `max_position_embeddings`, else `n_positions`, `n_ctx`, `max_seq_len`,
  *   `seq_length`, or the decoder's `max_target_positions`.
  */
@@ -40,6 +41,8 @@ import {
   DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_ROTARY_BASE, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA, defaultHeadDim, isCount,
 } from './spec-defaults.js';
 import type { SourceMapping, SourceValue } from './source.js';
+import { readExperts, readLatent } from './checkpoint-experts.js';
+import { readLayerPlan } from './checkpoint-layers.js';
 
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
 export const CHECKPOINT_MARKERS: readonly string[] = [
@@ -78,8 +81,14 @@ const GATED_FAMILIES = new Set([
   'llama', 'mistral', 'mixtral', 'qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe', 'gemma', 'gemma2', 'gemma3_text', 'phi3',
   'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2', 'deepseek_v3', 'granite',
 ]);
-/** Families whose config class turns the window off unless `use_sliding_window` is true. */
-const WINDOW_OFF_FAMILIES = new Set(['qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe']);
+/** Encoder-only families (no decoding cache) unless the file says `is_decoder: true`. */
+const ENCODER_ONLY_FAMILIES = new Set([
+  'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra', 'albert', 'deberta', 'deberta-v2', 'modernbert',
+]);
+/** Families with four norms per decoder layer (before and after attention and feed-forward; Gemma 2 report, §2). */
+const FOUR_NORM_FAMILIES = new Set(['gemma2', 'gemma3', 'gemma3_text']);
+/** Families with per-head RMS norms on queries and keys (`q_norm`, `k_norm` of the head width in the published code). */
+const QK_NORM_FAMILIES = new Set(['qwen3', 'qwen3_moe', 'gemma3', 'gemma3_text']);
 
 const POSITION_TYPES: Readonly<Record<string, PositionDraft['kind']>> = {
   absolute: 'learned', learned: 'learned', sinusoidal: 'sinusoidal', rotary: 'rotary', rope: 'rotary', alibi: 'alibi', none: 'none',
@@ -147,9 +156,11 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
       }
     : null;
 
-  const experts = readExperts(r, size);
-  const position = readPosition(r, modelType, gpt2Style, headDim ?? defaultHeadDim(hidden, heads));
-  const window = readWindow(r, modelType, layers);
+  const experts = readExperts(r, size, layers);
+  const latent = readLatent(r, size);
+  const position = readPosition(r, modelType, gpt2Style, latent ? latent.ropeDim : headDim ?? defaultHeadDim(hidden, heads));
+  const plan = readLayerPlan(r, modelType, layers);
+  const encoderOnly = !encoderDecoder && modelType !== null && ENCODER_ONLY_FAMILIES.has(modelType) && r.get(['is_decoder']) !== true;
 
   return {
     name: null,
@@ -168,29 +179,22 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     position,
     declaredSpan,
     trainedSpan: null,
-    slidingWindow: window.size,
-    windowLayers: window.layers,
+    slidingWindow: plan.slidingWindow,
+    windowLayers: plan.windowLayers,
+    latent,
+    layerTypes: plan.layerTypes,
+    positionFreeLayers: plan.positionFreeLayers,
+    chunkSize: plan.chunkSize,
+    localBase: plan.localBase,
+    layerNorms: modelType !== null && FOUR_NORM_FAMILIES.has(modelType) ? 4 : null,
+    qkNorms: modelType !== null && QK_NORM_FAMILIES.has(modelType),
+    encoderOnly,
     dtypes: { weights: readWeights(r), cache: null, positions: null },
     embeddingInitStd: r.real('embeddingInitStd', ['initializer_range'], 'standard deviation', {
       test: (n) => n > 0,
       expected: 'a standard deviation above 0',
     }) ?? null,
     embeddingMultiplier: readMultiplier(r, modelType, hidden),
-  };
-}
-
-type SizeReader = (field: string, candidates: string[], what: string, required: boolean) => number | undefined;
-
-function readExperts(r: FieldReader, size: SizeReader): SpecDraft['experts'] {
-  const totalKeys = ['num_local_experts', 'num_experts', 'n_routed_experts'];
-  const totalPath = r.first(totalKeys.map((k) => [k]));
-  if (totalPath === null) return null;
-  // Dense configs of mixture-capable families write 0 or 1 experts.
-  const stated = r.get(totalPath);
-  if (stated === 0 || stated === 1) return null;
-  return {
-    total: size('experts.total', totalKeys, 'the number of experts', true)!,
-    active: size('experts.active', ['num_experts_per_tok'], 'the number of experts each token uses', true)!,
   };
 }
 
@@ -253,40 +257,6 @@ function readMultiplier(r: FieldReader, modelType: string | null, hidden: number
     return root;
   }
   return null;
-}
-
-function readWindow(r: FieldReader, modelType: string | null, layers: number): { size: number | null; layers: number | null } {
-  if (!r.has(['sliding_window'])) return { size: null, layers: null };
-  const use = r.flag(null, ['use_sliding_window']);
-  if (use === false) return { size: null, layers: null };
-  if (use === undefined && !r.has(['use_sliding_window']) && modelType !== null && WINDOW_OFF_FAMILIES.has(modelType)) {
-    r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: use_sliding_window is not stated, and model_type "${modelType}" turns the window off unless it is true; add "use_sliding_window": true, or remove sliding_window`);
-    return { size: null, layers: null };
-  }
-  const size = r.count('slidingWindow', ['sliding_window'], 'tokens') ?? null;
-
-  const types = r.get(['layer_types']);
-  if (Array.isArray(types)) {
-    r.locate('windowLayers', ['layer_types']);
-    const windowed = types.filter((t) => t === 'sliding_attention').length;
-    if (windowed === 0) {
-      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: no entry of ${r.key(['layer_types'])} is "sliding_attention"`);
-      return { size: null, layers: null };
-    }
-    return { size, layers: windowed };
-  }
-  if (r.has(['max_window_layers'])) {
-    const first = r.count('windowLayers', ['max_window_layers'], 'layer index');
-    if (first === undefined || Number.isNaN(first) || !isCount(layers)) return { size, layers: first === undefined ? null : NaN };
-    const windowed = layers - Math.max(0, first);
-    if (windowed <= 0) {
-      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: layers from index ${r.key(['max_window_layers'])} (${first}) on use the window, and there are ${layers} layers; lower max_window_layers to below ${layers}, or remove sliding_window`);
-      delete r.locations.windowLayers;
-      return { size: null, layers: null };
-    }
-    return { size, layers: windowed };
-  }
-  return { size, layers: null };
 }
 
 function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boolean, headDim: number): PositionDraft {
@@ -359,7 +329,8 @@ function readRotary(r: FieldReader, headDim: number): PositionDraft {
     if (nested.length > 0 && !('rope_type' in rp) && !('rope_theta' in rp)) {
       const chosen = nested.includes('full_attention') ? 'full_attention' : nested[0];
       params = ['rope_parameters', chosen];
-      for (const other of nested.filter((k) => k !== chosen)) {
+      // The local layers' block is read by the layer reader (checkpoint-layers.ts).
+      for (const other of nested.filter((k) => k !== chosen && !(chosen === 'full_attention' && k === 'sliding_attention'))) {
         r.report('key-ignored', ['rope_parameters', other], `${r.key(['rope_parameters', other])} is not read: one rotary code describes the model, taken from ${r.key(params)}`);
       }
     } else params = ['rope_parameters'];

@@ -244,6 +244,8 @@ function kvHeadsKind(ctx: RemedyContext, target: Target, resolves: Resolves): Ki
   const spec = ctx.head.spec;
   const heads = positiveCount(spec.heads);
   const kv = positiveCount(spec.kvHeads);
+  if (spec.latent) return none('latent attention caches one shared latent per token and layer, whatever the key/value heads');
+  if (spec.encoderOnly) return none('an encoder-only model keeps no decoding cache');
   if (heads === null || kv === null) return none('heads or key/value heads are not whole numbers');
   if (kv <= 1) return none('the model already has one key/value head');
   const candidates = divisorsBelow(heads, kv).filter((d) => resolves(applyChange(spec, { kvHeads: d })))

@@ -39,6 +39,17 @@ const SIZE_FIELDS: readonly SizeField[] = [
   { field: 'encoder.kvHeads', get: (s) => s.encoder?.kvHeads, what: 'the number of encoder key/value heads' },
   { field: 'encoder.headDim', get: (s) => s.encoder?.headDim, what: 'the width of one encoder head' },
   { field: 'encoder.ffn', get: (s) => s.encoder?.ffn, what: 'the encoder feed-forward width' },
+  { field: 'experts.width', get: (s) => s.experts?.width, what: 'the width of one routed expert' },
+  { field: 'experts.shared', get: (s) => s.experts?.shared, what: 'the number of shared experts', min: 0 },
+  { field: 'experts.sharedWidth', get: (s) => s.experts?.sharedWidth, what: 'the width of one shared expert' },
+  { field: 'experts.denseLayers', get: (s) => s.experts?.denseLayers, what: 'the number of dense layers', min: 0 },
+  { field: 'latent.kvRank', get: (s) => s.latent?.kvRank, what: 'the compressed key/value width' },
+  { field: 'latent.qRank', get: (s) => s.latent?.qRank, what: 'the compressed query width' },
+  { field: 'latent.ropeDim', get: (s) => s.latent?.ropeDim, what: 'the decoupled rotary width per head' },
+  { field: 'latent.nopeDim', get: (s) => s.latent?.nopeDim, what: 'the query/key width without position code per head', min: 0 },
+  { field: 'latent.valueDim', get: (s) => s.latent?.valueDim, what: 'the value width per head' },
+  { field: 'chunkSize', get: (s) => s.chunkSize, what: 'the tokens per chunk' },
+  { field: 'layerNorms', get: (s) => s.layerNorms, what: 'the norms per layer', min: 0 },
   { field: 'slidingWindow', get: (s) => s.slidingWindow, what: 'the window in tokens' },
   { field: 'windowLayers', get: (s) => s.windowLayers, what: 'the number of windowed layers' },
   {
@@ -85,11 +96,23 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
     push('size-invalid', locations[size.field] ? size.field : derivedFrom(size.field, locations), message);
   }
 
-  headGrouping(spec.heads, spec.kvHeads, 'heads', 'kvHeads', name, push);
+  // Latent attention caches one shared latent, not grouped key/value heads.
+  if (!spec.latent) headGrouping(spec.heads, spec.kvHeads, 'heads', 'kvHeads', name, push);
   if (spec.encoder) headGrouping(spec.encoder.heads, spec.encoder.kvHeads, 'encoder.heads', 'encoder.kvHeads', name, push);
 
   if (spec.experts && isCount(spec.experts.total) && isCount(spec.experts.active) && spec.experts.active > spec.experts.total) {
     push('value-invalid', 'experts.active', `${name('experts.active')} is ${spec.experts.active}, more than ${name('experts.total')} ${spec.experts.total}; a token cannot use more experts than there are: set it to at most ${spec.experts.total}`);
+  }
+  const dense = spec.experts?.denseLayers;
+  if (isCount(dense) && isCount(spec.layers) && dense > spec.layers) {
+    push('value-invalid', 'experts.denseLayers', `${name('experts.denseLayers')} makes ${dense} dense layers, more than the ${spec.layers} layers (${name('layers')}); set it to at most ${spec.layers}`);
+  }
+  if (spec.layerTypes && isCount(spec.layers) && spec.layerTypes.length !== spec.layers) {
+    push('value-invalid', 'layerTypes', `${name('layerTypes')} has ${spec.layerTypes.length} entries, but there are ${spec.layers} layers (${name('layers')}); give one entry per layer`);
+  }
+  const outside = (spec.positionFreeLayers ?? []).filter((i) => !(Number.isSafeInteger(i) && i >= 0 && (!isCount(spec.layers) || i < spec.layers)));
+  if (outside.length > 0) {
+    push('value-invalid', 'positionFreeLayers', `${name('positionFreeLayers')} lists ${outside.join(', ')}, not a 0-based layer index below ${spec.layers}; list layers that exist`);
   }
   if (isCount(spec.windowLayers) && isCount(spec.layers) && spec.windowLayers > spec.layers) {
     push('value-invalid', 'windowLayers', `${name('windowLayers')} makes ${spec.windowLayers} windowed layers, more than the ${spec.layers} layers (${name('layers')}); set it to at most ${spec.layers}`);
@@ -189,7 +212,8 @@ function rotaryWidth(
 ): void {
   if (spec.position.kind !== 'rotary') return;
   const { fraction } = spec.position;
-  const headDim = spec.headDim;
+  // Latent attention turns only the decoupled rotary part (DeepSeek-V2, §2.1.3).
+  const headDim = spec.latent ? spec.latent.ropeDim : spec.headDim;
   if (!isCount(headDim) || !Number.isFinite(fraction) || fraction <= 0 || fraction > 1) return;
   const width = headDim * fraction;
   // A decimal fraction is inexact in binary; the product lands within a few ulps of the decimal one.
@@ -197,12 +221,12 @@ function rotaryWidth(
   const whole = Math.abs(width - nearest) <= 1e-9 * Math.max(1, width);
   if (whole && nearest % 2 === 0 && nearest >= 2) return;
 
-  const headName = locations.headDim ? `${name('headDim')} ${headDim}` : `the head width ${headDim} (${name('hidden')} / ${name('heads')})`;
+  const headName = spec.latent ? `${name('latent.ropeDim')} ${headDim}` : locations.headDim ? `${name('headDim')} ${headDim}` : `the head width ${headDim} (${name('hidden')} / ${name('heads')})`;
   const used = 2 * Math.floor((whole ? nearest : width) / 2);
   const metricsNote = `the metrics use ${used} channel${used === 1 ? '' : 's'}`;
   if (fraction === 1) {
     const evens = [headDim - 1, headDim + 1].filter((d) => d >= 2);
-    push('rotary-width-odd', locations.headDim ? 'headDim' : locations.heads ? 'heads' : null, `${headName} is odd, so the rotary width ${headDim} leaves one channel without a partner (${metricsNote}); use an even head width such as ${evens.join(' or ')}`);
+    push('rotary-width-odd', spec.latent ? 'latent.ropeDim' : locations.headDim ? 'headDim' : locations.heads ? 'heads' : null, `${headName} is odd, so the rotary width ${headDim} leaves one channel without a partner (${metricsNote}); use an even head width such as ${evens.join(' or ')}`);
     return;
   }
   const widthText = whole ? String(nearest) : formatNumber(Number(width.toPrecision(6)));

@@ -1,0 +1,110 @@
+/**
+ * Checkpoint-style configs: mixtures of experts and latent attention (METRICS.md, "Mixtures of
+ * experts and latent attention"), keyed as the published configs write them:
+ * - Experts: `num_local_experts`, `num_experts` or `n_routed_experts` (a stated 0 or 1 is a dense
+ *   model) with `num_experts_per_tok`; routed width `moe_intermediate_size` (default: the
+ *   feed-forward width); shared experts `n_shared_experts` of the routed width (DeepSeek style),
+ *   or one shared expert of `shared_expert_intermediate_size` with a `hidden → 1` gate on its
+ *   output (Qwen2-MoE style: the published block has `shared_expert_gate`); dense layers:
+ *   `first_k_dense_replace` with `moe_layer_freq` (DeepSeek style: layer i is a mixture when
+ *   `i >= k` and `i % freq == 0`), or `mlp_only_layers` with `decoder_sparse_step` (Qwen-MoE
+ *   style: layer i is a mixture when it is not listed and `(i + 1) % step == 0`).
+ * - Latent attention (Liu et al. 2024, DeepSeek-V2, §2.1): `kv_lora_rank` (d_c), `q_lora_rank`
+ *   (d_c', null for a plain query projection), `qk_rope_head_dim` (d_h^R), `qk_nope_head_dim`,
+ *   `v_head_dim`.
+ */
+import type { Experts, LatentAttention } from '../model.js';
+import type { FieldReader } from './fields.js';
+import { isCount } from './spec-defaults.js';
+
+type SizeReader = (field: string, candidates: string[], what: string, required: boolean) => number | undefined;
+
+/** Reads the experts block; null for a dense model. */
+export function readExperts(r: FieldReader, size: SizeReader, layers: number): Experts | null {
+  const totalKeys = ['num_local_experts', 'num_experts', 'n_routed_experts'];
+  const totalPath = r.first(totalKeys.map((k) => [k]));
+  if (totalPath === null) return null;
+  // Dense configs of mixture-capable families write 0 or 1 experts.
+  const stated = r.get(totalPath);
+  if (stated === 0 || stated === 1) return null;
+  const experts: Experts = {
+    total: size('experts.total', totalKeys, 'the number of experts', true)!,
+    active: size('experts.active', ['num_experts_per_tok'], 'the number of experts each token uses', true)!,
+  };
+  const width = size('experts.width', ['moe_intermediate_size'], 'the width of one routed expert', false);
+  if (width !== undefined) experts.width = width;
+
+  const sharedCount = size('experts.shared', ['n_shared_experts'], 'shared experts', false);
+  const sharedWidth = size('experts.sharedWidth', ['shared_expert_intermediate_size'], 'the width of the shared expert', false);
+  if (sharedCount !== undefined && sharedWidth !== undefined) {
+    r.report('key-ignored', ['shared_expert_intermediate_size'], `${r.key(['shared_expert_intermediate_size'])} is not read: n_shared_experts (${sharedCount}) already states the shared experts, each as wide as a routed expert; remove one of them`);
+  }
+  if (sharedCount !== undefined) experts.shared = sharedCount;
+  else if (sharedWidth !== undefined && sharedWidth !== 0) {
+    experts.shared = 1;
+    experts.sharedWidth = sharedWidth;
+    experts.sharedGate = true;
+  }
+
+  const dense = readDenseLayers(r, layers);
+  if (dense !== null) experts.denseLayers = dense;
+  return experts;
+}
+
+/** count: decoder layers with a dense feed-forward; null when none are stated (every layer is a mixture). */
+function readDenseLayers(r: FieldReader, layers: number): number | null {
+  const n = isCount(layers) && layers <= 1 << 16 ? layers : null;
+  if (r.has(['first_k_dense_replace']) || r.has(['moe_layer_freq'])) {
+    const k = r.has(['first_k_dense_replace']) ? r.count('experts.denseLayers', ['first_k_dense_replace'], 'leading dense layers') : 0;
+    const freq = r.has(['moe_layer_freq']) ? r.count('experts.denseLayers', ['moe_layer_freq'], 'every Nth layer is a mixture') : 1;
+    if (k === undefined || freq === undefined || Number.isNaN(k) || Number.isNaN(freq)) return NaN;
+    if (!isCount(freq)) {
+      r.report('value-invalid', ['moe_layer_freq'], `${r.key(['moe_layer_freq'])} is ${r.quote(['moe_layer_freq'])}; expected a whole number of at least 1`);
+      return NaN;
+    }
+    if (n === null) return null;
+    return n - countLayers(n, (i) => i >= k && i % freq === 0);
+  }
+  if (r.has(['mlp_only_layers']) || r.has(['decoder_sparse_step'])) {
+    const listPath = ['mlp_only_layers'];
+    const list = r.get(listPath) ?? [];
+    if (r.has(listPath)) r.locate('experts.denseLayers', listPath);
+    if (!Array.isArray(list) || list.some((x) => typeof x !== 'number' || !Number.isSafeInteger(x) || x < 0)) {
+      r.report('value-invalid', listPath, `${r.key(listPath)} ${r.is(listPath)}; expected a list of layer indices`);
+      return NaN;
+    }
+    const step = r.has(['decoder_sparse_step']) ? r.count('experts.denseLayers', ['decoder_sparse_step'], 'every Nth layer is a mixture') : 1;
+    if (step === undefined || Number.isNaN(step)) return NaN;
+    if (!isCount(step)) {
+      r.report('value-invalid', ['decoder_sparse_step'], `${r.key(['decoder_sparse_step'])} is ${r.quote(['decoder_sparse_step'])}; expected a whole number of at least 1`);
+      return NaN;
+    }
+    if (n === null) return null;
+    const denseListed = new Set(list as number[]);
+    return n - countLayers(n, (i) => !denseListed.has(i) && (i + 1) % step === 0);
+  }
+  return null;
+}
+
+function countLayers(n: number, test: (i: number) => boolean): number {
+  let c = 0;
+  for (let i = 0; i < n; i++) if (test(i)) c++;
+  return c;
+}
+
+/** Reads latent attention; null when `kv_lora_rank` is absent (plain attention). */
+export function readLatent(r: FieldReader, size: SizeReader): LatentAttention | null {
+  if (!r.has(['kv_lora_rank'])) {
+    for (const key of ['q_lora_rank', 'qk_rope_head_dim', 'qk_nope_head_dim', 'v_head_dim']) {
+      if (r.has([key])) r.report('key-ignored', [key], `${r.key([key])} has no effect: it belongs to latent attention, which kv_lora_rank turns on, and kv_lora_rank is not stated`);
+    }
+    return null;
+  }
+  return {
+    kvRank: size('latent.kvRank', ['kv_lora_rank'], 'the compressed key/value width d_c', true)!,
+    qRank: size('latent.qRank', ['q_lora_rank'], 'the compressed query width', false) ?? null,
+    ropeDim: size('latent.ropeDim', ['qk_rope_head_dim'], 'the decoupled rotary width per head', true)!,
+    nopeDim: size('latent.nopeDim', ['qk_nope_head_dim'], 'the query/key width without position code per head', true)!,
+    valueDim: size('latent.valueDim', ['v_head_dim'], 'the value width per head', true)!,
+  };
+}

@@ -1,0 +1,237 @@
+/**
+ * Checkpoint-style configs: which decoder layers attend how (METRICS.md, "Layers that differ"),
+ * keyed as the published configs write it:
+ * - `layer_types`: one entry per layer, `sliding_attention`, `full_attention` or
+ *   `chunked_attention`.
+ * - `sliding_window` (unless `use_sliding_window` is false; Qwen families turn it off unless it
+ *   is true), with, first match: `sliding_window_pattern` N (every Nth layer is global: layer i
+ *   slides when `(i + 1) % N != 0`, as the Gemma-3-style config classes expand it); the family
+ *   patterns FAMILY_PATTERNS (gemma2: local and global alternate, starting with a local layer;
+ *   gemma3 / gemma3_text: N = 6; cohere2: N = 4 — each class's default); `max_window_layers`
+ *   (layers from that index on slide, as the Qwen code does); otherwise every layer slides.
+ * - `attention_chunk_size` with `no_rope_layers` (one entry per layer, 1 = the layer has the
+ *   rotary code, 0 = none) or `no_rope_layer_interval` (every Nth layer has none; default 4 for
+ *   llama4 / llama4_text): as the Llama-4-style config class expands it, layers with the rotary
+ *   code use chunked attention and the others full attention.
+ * - `no_rope_layers` alone: the layers without a position code.
+ * - `rope_local_base_freq`, or `rope_parameters.sliding_attention.rope_theta`: the rotary base
+ *   of the local layers, which run without the model's context scaling (as the Gemma-3-style
+ *   code builds its local rotary embedding).
+ * A pattern the reader cannot resolve is reported (`key-ignored`), never silently defaulted.
+ */
+import type { LayerAttention } from '../model.js';
+import type { FieldReader } from './fields.js';
+import { isCount } from './spec-defaults.js';
+import type { SourceMapping, SourceValue } from './source.js';
+
+/** Window patterns a family's config class fills in when the file states none: every Nth layer is global. */
+export const FAMILY_PATTERNS: Readonly<Record<string, number>> = { gemma2: 2, gemma3: 6, gemma3_text: 6, cohere2: 4 };
+/** Families whose config class makes every Nth layer position-free when `no_rope_layers` is absent (default N: `4`). */
+export const NO_ROPE_INTERVAL_FAMILIES: Readonly<Record<string, number>> = { llama4: 4, llama4_text: 4 };
+/** Families whose config class turns the window off unless `use_sliding_window` is true. */
+const WINDOW_OFF_FAMILIES = new Set(['qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe']);
+
+const LAYER_TYPE_NAMES: Readonly<Record<string, LayerAttention>> = {
+  full_attention: 'full', sliding_attention: 'sliding', chunked_attention: 'chunked',
+};
+
+export interface LayerPlanDraft {
+  slidingWindow: number | null;
+  windowLayers: number | null;
+  layerTypes: LayerAttention[] | null;
+  positionFreeLayers: number[] | null;
+  chunkSize: number | null;
+  localBase: number | null;
+}
+
+function isMapping(v: SourceValue | undefined): v is SourceMapping {
+  return v !== null && v !== undefined && typeof v === 'object' && !Array.isArray(v);
+}
+
+/** Reads the per-layer attention pattern; every problem becomes a finding on `r`. */
+export function readLayerPlan(r: FieldReader, modelType: string | null, layers: number): LayerPlanDraft {
+  const plan: LayerPlanDraft = { slidingWindow: null, windowLayers: null, layerTypes: null, positionFreeLayers: null, chunkSize: null, localBase: null };
+  const n = isCount(layers) && layers <= 1 << 16 ? layers : null;
+
+  plan.positionFreeLayers = readPositionFree(r, modelType, n);
+  if (r.has(['attention_chunk_size'])) plan.chunkSize = r.count('chunkSize', ['attention_chunk_size'], 'tokens per chunk') ?? null;
+
+  const window = readWindowSize(r, modelType);
+  plan.slidingWindow = window;
+
+  const typesPath = ['layer_types'];
+  if (r.has(typesPath)) {
+    plan.layerTypes = readLayerTypes(r, n);
+    if (plan.layerTypes === null) return dropWindow(plan);
+  } else if (plan.chunkSize !== null && n !== null) {
+    // The Llama-4-style class: layers with the rotary code are chunked, the others full.
+    const free = new Set(plan.positionFreeLayers ?? []);
+    if (!r.has(['no_rope_layers']) && !(modelType !== null && NO_ROPE_INTERVAL_FAMILIES[modelType] !== undefined) && !r.has(['no_rope_layer_interval'])) {
+      r.report('key-ignored', ['attention_chunk_size'], `${r.key(['attention_chunk_size'])} states a chunk, but neither layer_types nor no_rope_layers says which layers are chunked; every layer is read as chunked — state layer_types`);
+    }
+    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention => (free.has(i) ? 'full' : 'chunked'));
+    r.locate('layerTypes', r.has(['no_rope_layers']) ? ['no_rope_layers'] : ['attention_chunk_size']);
+  }
+
+  if (plan.layerTypes !== null) {
+    const types = plan.layerTypes;
+    if (types.includes('sliding') && window === null) {
+      if (!r.reported(['sliding_window'])) r.missing(['sliding_window'], `the window in tokens: ${r.key(typesPath)} lists sliding_attention layers`);
+      plan.slidingWindow = NaN;
+    }
+    if (!types.includes('sliding') && window !== null) {
+      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: no entry of ${r.key(typesPath)} is "sliding_attention"`);
+      plan.slidingWindow = null;
+    }
+    if (types.includes('chunked') && plan.chunkSize === null) {
+      plan.chunkSize = r.missing(['attention_chunk_size'], `tokens per chunk: ${r.key(typesPath)} lists chunked_attention layers`);
+    }
+    if (!types.includes('chunked') && plan.chunkSize !== null) {
+      r.report('key-ignored', ['attention_chunk_size'], `${r.key(['attention_chunk_size'])} has no effect: no layer is chunked`);
+      plan.chunkSize = null;
+    }
+    plan.windowLayers = types.filter((t) => t === 'sliding').length || null;
+    if (plan.windowLayers !== null && r.locations.layerTypes) r.locations.windowLayers = r.locations.layerTypes;
+    readLocalBase(r, plan);
+    return plan;
+  }
+
+  if (window === null) {
+    readLocalBase(r, plan);
+    return plan;
+  }
+  const patternPath = ['sliding_window_pattern'];
+  const family = modelType !== null ? FAMILY_PATTERNS[modelType] : undefined;
+  if (r.has(patternPath) || family !== undefined) {
+    let every: number | undefined = family;
+    if (r.has(patternPath)) {
+      const stated = r.count('layerTypes', patternPath, 'every Nth layer is global');
+      if (stated === undefined || Number.isNaN(stated)) return dropWindow(plan);
+      if (!isCount(stated)) {
+        r.report('value-invalid', patternPath, `${r.key(patternPath)} is ${r.quote(patternPath)}; expected a whole number of at least 1 (every Nth layer is global)`);
+        return dropWindow(plan);
+      }
+      every = stated;
+    } else r.locate('layerTypes', ['model_type']);
+    if (n === null) return plan;
+    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention => ((i + 1) % (every as number) !== 0 ? 'sliding' : 'full'));
+    plan.windowLayers = plan.layerTypes.filter((t) => t === 'sliding').length || null;
+    if (plan.windowLayers === null) {
+      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: with every ${every === 1 ? '' : `${every}th `}layer global, no layer slides`);
+      plan.slidingWindow = null;
+      plan.layerTypes = null;
+    }
+    readLocalBase(r, plan);
+    return plan;
+  }
+  if (r.has(['max_window_layers'])) {
+    const first = r.count('windowLayers', ['max_window_layers'], 'layer index');
+    if (first === undefined || Number.isNaN(first) || !isCount(layers)) {
+      plan.windowLayers = first === undefined ? null : NaN;
+      return plan;
+    }
+    const windowed = layers - Math.max(0, first);
+    if (windowed <= 0) {
+      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: layers from index ${r.key(['max_window_layers'])} (${first}) on use the window, and there are ${layers} layers; lower max_window_layers to below ${layers}, or remove sliding_window`);
+      delete r.locations.windowLayers;
+      return dropWindow(plan);
+    }
+    plan.windowLayers = windowed;
+  }
+  readLocalBase(r, plan);
+  return plan;
+}
+
+function dropWindow(plan: LayerPlanDraft): LayerPlanDraft {
+  plan.slidingWindow = null;
+  plan.windowLayers = null;
+  plan.layerTypes = null;
+  return plan;
+}
+
+/** The window size, or null when there is none or it is turned off. */
+function readWindowSize(r: FieldReader, modelType: string | null): number | null {
+  if (!r.has(['sliding_window'])) return null;
+  const use = r.flag(null, ['use_sliding_window']);
+  if (use === false) return null;
+  if (use === undefined && !r.has(['use_sliding_window']) && modelType !== null && WINDOW_OFF_FAMILIES.has(modelType)) {
+    r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: use_sliding_window is not stated, and model_type "${modelType}" turns the window off unless it is true; add "use_sliding_window": true, or remove sliding_window`);
+    return null;
+  }
+  return r.count('slidingWindow', ['sliding_window'], 'tokens') ?? null;
+}
+
+/** `layer_types` as a list of kinds; null (reported) when it is not one entry per layer of known kinds. */
+function readLayerTypes(r: FieldReader, n: number | null): LayerAttention[] | null {
+  const path = ['layer_types'];
+  const value = r.get(path);
+  r.locate('layerTypes', path);
+  if (!Array.isArray(value)) {
+    r.report('value-invalid', path, `${r.key(path)} ${r.is(path)}; expected a list with one entry per layer (${Object.keys(LAYER_TYPE_NAMES).join(', ')})`);
+    return null;
+  }
+  if (n !== null && value.length !== n) {
+    r.report('value-invalid', path, `${r.key(path)} has ${value.length} entries, but there are ${n} layers; expected one entry per layer`);
+    return null;
+  }
+  const types: LayerAttention[] = [];
+  for (const [i, entry] of value.entries()) {
+    const kind = typeof entry === 'string' ? LAYER_TYPE_NAMES[entry] : undefined;
+    if (kind === undefined) {
+      r.report('key-ignored', [...path, i], `${r.key([...path, i])} is ${r.quote([...path, i])}, not a layer kind the reader models (${Object.keys(LAYER_TYPE_NAMES).join(', ')}); the layer pattern is not read, and every layer is taken as full attention, so the cache may be overstated — describe the model in the context-reach format`);
+      return null;
+    }
+    types.push(kind);
+  }
+  return types;
+}
+
+/** Layers without a position code, from `no_rope_layers` (1 = rotary, 0 = none) or the family interval. */
+function readPositionFree(r: FieldReader, modelType: string | null, n: number | null): number[] | null {
+  const listPath = ['no_rope_layers'];
+  if (r.has(listPath)) {
+    const list = r.get(listPath);
+    r.locate('positionFreeLayers', listPath);
+    if (!Array.isArray(list) || list.some((x) => x !== 0 && x !== 1) || (n !== null && list.length < n)) {
+      r.report('value-invalid', listPath, `${r.key(listPath)} ${Array.isArray(list) ? `has ${list.length} entries` : r.is(listPath)}; expected a list of 0 and 1 with one entry per layer${n !== null ? ` (${n})` : ''}, 1 where the layer has the rotary code`);
+      return null;
+    }
+    const free = (list as number[]).slice(0, n ?? list.length).flatMap((x, i) => (x === 0 ? [i] : []));
+    return free.length > 0 ? free : null;
+  }
+  const intervalPath = ['no_rope_layer_interval'];
+  const familyInterval = modelType !== null ? NO_ROPE_INTERVAL_FAMILIES[modelType] : undefined;
+  if (!r.has(intervalPath) && familyInterval === undefined) return null;
+  let every = familyInterval;
+  if (r.has(intervalPath)) {
+    const stated = r.count('positionFreeLayers', intervalPath, 'every Nth layer has no position code');
+    if (stated === undefined || !isCount(stated)) {
+      if (stated !== undefined && !Number.isNaN(stated)) r.report('value-invalid', intervalPath, `${r.key(intervalPath)} is ${r.quote(intervalPath)}; expected a whole number of at least 1`);
+      return null;
+    }
+    every = stated;
+  } else r.locate('positionFreeLayers', ['model_type']);
+  if (n === null || every === undefined) return null;
+  const free = Array.from({ length: n }, (_, i) => i).filter((i) => (i + 1) % (every as number) === 0);
+  return free.length > 0 ? free : null;
+}
+
+/** The local layers' rotary base; reported as having no effect when no layer is local. */
+function readLocalBase(r: FieldReader, plan: LayerPlanDraft): void {
+  const nested = r.get(['rope_parameters', 'sliding_attention']);
+  const path = r.has(['rope_local_base_freq']) ? ['rope_local_base_freq'] : isMapping(nested) && r.has(['rope_parameters', 'sliding_attention', 'rope_theta']) ? ['rope_parameters', 'sliding_attention', 'rope_theta'] : null;
+  if (path === null) return;
+  const base = r.real('localBase', path, 'rotary base', { test: (x) => x > 1, expected: 'a rotary base above 1 (commonly 10000)' });
+  const local = (plan.layerTypes ?? []).some((t) => t !== 'full') || (plan.layerTypes === null && plan.slidingWindow !== null);
+  if (!local) {
+    r.report('key-ignored', path, `${r.key(path)} has no effect: no layer is local (sliding or chunked), so every layer uses the model's rotary base`);
+    return;
+  }
+  if (isMapping(nested)) {
+    const type = nested['rope_type'];
+    if (typeof type === 'string' && type !== 'default') {
+      r.report('key-ignored', ['rope_parameters', 'sliding_attention', 'rope_type'], `${r.key(['rope_parameters', 'sliding_attention', 'rope_type'])} is "${type}": a scaled code on the local layers is not modelled; they are read unscaled at base ${base}`);
+    }
+  }
+  plan.localBase = base ?? null;
+}
