@@ -41,7 +41,7 @@ import {
   DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_ROTARY_BASE, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA, defaultHeadDim, isCount,
 } from './spec-defaults.js';
 import type { SourceMapping, SourceValue } from './source.js';
-import { readExperts, readLatent } from './checkpoint-experts.js';
+import { readLatent, readMixture } from './checkpoint-experts.js';
 import { readLayerPlan } from './checkpoint-layers.js';
 
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
@@ -56,7 +56,7 @@ export const GATED_ACTIVATIONS: readonly string[] = ['silu', 'swish', 'swiglu', 
 const ROTARY_FAMILIES = new Set([
   'llama', 'mistral', 'mixtral', 'qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe', 'gemma', 'gemma2', 'gemma3_text', 'phi',
   'phi3', 'gpt_neox', 'gptj', 'stablelm', 'starcoder2', 'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2',
-  'deepseek_v3', 'granite', 'falcon',
+  'deepseek_v3', 'granite', 'falcon', 'llama4', 'llama4_text', 'qwen3_next', 'cohere2',
 ]);
 const LEARNED_FAMILIES = new Set([
   'gpt2', 'gpt_bigcode', 'gpt_neo', 'opt', 'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra',
@@ -79,7 +79,7 @@ const GEMMA_FAMILIES = new Set(['gemma', 'gemma2', 'gemma3_text']);
 /** Families whose feed-forward block is always gated (three matrices), whatever activation the file names. */
 const GATED_FAMILIES = new Set([
   'llama', 'mistral', 'mixtral', 'qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe', 'gemma', 'gemma2', 'gemma3_text', 'phi3',
-  'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2', 'deepseek_v3', 'granite',
+  'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2', 'deepseek_v3', 'granite', 'llama4', 'llama4_text', 'cohere2',
 ]);
 /** Encoder-only families (no decoding cache) unless the file says `is_decoder: true`. */
 const ENCODER_ONLY_FAMILIES = new Set([
@@ -156,7 +156,8 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
       }
     : null;
 
-  const experts = readExperts(r, size, layers);
+  const mixture = readMixture(r, size, layers, modelType);
+  const experts = mixture.experts;
   const latent = readLatent(r, size);
   const position = readPosition(r, modelType, gpt2Style, latent ? latent.ropeDim : headDim ?? defaultHeadDim(hidden, heads));
   const plan = readLayerPlan(r, modelType, layers);
@@ -169,7 +170,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     heads,
     kvHeads,
     headDim,
-    ffn,
+    ffn: mixture.denseFfn ?? ffn,
     gated: readGated(r, modelType),
     vocab,
     tied: r.flag('tied', ['tie_word_embeddings']),

@@ -19,6 +19,46 @@ import { isCount } from './spec-defaults.js';
 
 type SizeReader = (field: string, candidates: string[], what: string, required: boolean) => number | undefined;
 
+/** Families whose mixture layers always add one shared expert as wide as a routed one (Llama-4 style). */
+const ONE_SHARED_FAMILIES = new Set(['llama4', 'llama4_text']);
+
+/**
+ * Reads the experts block; null for a dense model. Llama-4-style configs (ONE_SHARED_FAMILIES)
+ * write the expert width as `intermediate_size` and the dense layers' width as
+ * `intermediate_size_mlp`; their mixture layers are `moe_layers`, else every
+ * `interleave_moe_layer_step`th layer; `denseFfn` then replaces the feed-forward width.
+ */
+export function readMixture(r: FieldReader, size: SizeReader, layers: number, modelType: string | null): { experts: Experts | null; denseFfn?: number } {
+  const experts = readExperts(r, size, layers);
+  if (experts === null || modelType === null || !ONE_SHARED_FAMILIES.has(modelType)) {
+    for (const key of ['intermediate_size_mlp', 'moe_layers', 'interleave_moe_layer_step']) {
+      if (r.has([key])) r.report('key-ignored', [key], `${r.key([key])} is not read: it belongs to Llama-4-style mixtures (model_type llama4 or llama4_text)${experts === null ? ' and no experts are stated' : ''}`);
+    }
+    return { experts };
+  }
+  const width = size('experts.width', ['intermediate_size'], 'the width of one routed expert', false);
+  if (width !== undefined) experts.width = width;
+  experts.shared = 1;
+  r.locate('experts.shared', ['model_type']);
+  const n = isCount(layers) && layers <= 1 << 16 ? layers : null;
+  if (r.has(['moe_layers'])) {
+    const list = r.get(['moe_layers']);
+    r.locate('experts.denseLayers', ['moe_layers']);
+    if (!Array.isArray(list) || list.some((x) => typeof x !== 'number' || !Number.isSafeInteger(x) || x < 0)) {
+      r.report('value-invalid', ['moe_layers'], `${r.key(['moe_layers'])} ${r.is(['moe_layers'])}; expected a list of layer indices`);
+      experts.denseLayers = NaN;
+    } else if (n !== null) experts.denseLayers = n - new Set((list as number[]).filter((i) => i < n)).size;
+  } else if (r.has(['interleave_moe_layer_step'])) {
+    const step = r.count('experts.denseLayers', ['interleave_moe_layer_step'], 'every Nth layer is a mixture');
+    if (step === undefined || !isCount(step)) {
+      if (step !== undefined && !Number.isNaN(step)) r.report('value-invalid', ['interleave_moe_layer_step'], `${r.key(['interleave_moe_layer_step'])} is ${r.quote(['interleave_moe_layer_step'])}; expected a whole number of at least 1`);
+      experts.denseLayers = NaN;
+    } else if (n !== null) experts.denseLayers = n - countLayers(n, (i) => (i + 1) % step === 0);
+  }
+  const denseFfn = size('ffn', ['intermediate_size_mlp'], 'the dense layers\' feed-forward width', false);
+  return denseFfn === undefined ? { experts } : { experts, denseFfn };
+}
+
 /** Reads the experts block; null for a dense model. */
 export function readExperts(r: FieldReader, size: SizeReader, layers: number): Experts | null {
   const totalKeys = ['num_local_experts', 'num_experts', 'n_routed_experts'];
