@@ -6,8 +6,8 @@
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
 import modelSchema from '../../../schema/model.schema.json' with { type: 'json' };
-import type { FloatFormat, PositionKind, ScalingKind, StorageDType } from '../model.js';
-import { FLOAT_FORMATS, POSITION_KINDS, SCALING_KINDS, STORAGE_DTYPES } from '../model.js';
+import type { Experts, FloatFormat, LayerAttention, PositionKind, ScalingKind, StorageDType } from '../model.js';
+import { FLOAT_FORMATS, LAYER_ATTENTIONS, POSITION_KINDS, SCALING_KINDS, STORAGE_DTYPES } from '../model.js';
 import { orderedRamp, type FieldReader, type NumberCheck } from './fields.js';
 import { parsePointer } from './json-pointer.js';
 import { quoteValue } from './quote.js';
@@ -42,6 +42,10 @@ const RULE_CHECKED = new Set([
   '/model/vocab', '/model/experts/total', '/model/experts/active', '/model/encoder/layers', '/model/encoder/heads',
   '/model/encoder/kv-heads', '/model/encoder/head-dim', '/model/encoder/feed-forward/size', '/model/declared-span',
   '/model/trained-span', '/model/sliding-window/size', '/model/sliding-window/layers', '/model/position/scaling/factor',
+  '/model/experts/size', '/model/experts/shared', '/model/experts/shared-size', '/model/experts/dense-layers',
+  '/model/latent-attention/kv-rank', '/model/latent-attention/q-rank', '/model/latent-attention/rope-head-dim',
+  '/model/latent-attention/nope-head-dim', '/model/latent-attention/value-head-dim', '/model/chunked-attention/size',
+  '/model/norms-per-layer',
   '/model/position/scaling/original-span', '/serving/span', '/serving/sequences', '/serving/device-memory-gib',
   '/serving/output-tokens', '/serving/prompt-tokens',
 ]);
@@ -84,12 +88,7 @@ export function readOwnDialect(r: FieldReader): SpecDraft {
     vocab: need(r.count('vocab', m('vocab'), 'vocabulary size'), m('vocab'), 'the vocabulary size'),
     tied: r.flag('tied', m('tied-output')),
     bias: r.flag('bias', m('bias')),
-    experts: r.has(m('experts'))
-      ? {
-          total: need(r.count('experts.total', m('experts', 'total'), 'experts'), m('experts', 'total'), 'the number of experts'),
-          active: need(r.count('experts.active', m('experts', 'active'), 'active experts'), m('experts', 'active'), 'the number of experts each token uses'),
-        }
-      : null,
+    experts: r.has(m('experts')) ? readExperts(r, m('experts'), need) : null,
     encoder: r.has(m('encoder'))
       ? {
           layers: need(r.count('encoder.layers', m('encoder', 'layers'), 'encoder layers'), m('encoder', 'layers'), 'the number of encoder layers'),
@@ -106,6 +105,7 @@ export function readOwnDialect(r: FieldReader): SpecDraft {
       ? need(r.count('slidingWindow', m('sliding-window', 'size'), 'tokens'), m('sliding-window', 'size'), 'the window size in tokens')
       : null,
     windowLayers: r.count('windowLayers', m('sliding-window', 'layers'), 'layers') ?? null,
+    ...readShapes(r, m, need),
     dtypes: {
       weights: r.choice('dtypes.weights', m('dtypes', 'weights'), STORAGE, 'weight storage') ?? null,
       cache: r.choice('dtypes.cache', m('dtypes', 'cache'), STORAGE, 'key/value cache storage') ?? null,
@@ -128,11 +128,83 @@ export function readOwnDialect(r: FieldReader): SpecDraft {
   return draft;
 }
 
+type Need = (n: number | undefined, path: string[], what: string) => number;
+
+/** Experts with their widths, shared experts and dense layers (METRICS.md, "Mixtures of experts and latent attention"). */
+function readExperts(r: FieldReader, at: string[], need: Need): Experts {
+  const experts: Experts = {
+    total: need(r.count('experts.total', [...at, 'total'], 'experts'), [...at, 'total'], 'the number of experts'),
+    active: need(r.count('experts.active', [...at, 'active'], 'active experts'), [...at, 'active'], 'the number of experts each token uses'),
+  };
+  const width = r.count('experts.width', [...at, 'size'], 'routed expert width');
+  if (width !== undefined) experts.width = width;
+  const shared = r.count('experts.shared', [...at, 'shared'], 'shared experts');
+  if (shared !== undefined) experts.shared = shared;
+  const sharedWidth = r.count('experts.sharedWidth', [...at, 'shared-size'], 'shared expert width');
+  if (sharedWidth !== undefined) experts.sharedWidth = sharedWidth;
+  const gate = r.flag('experts.sharedGate', [...at, 'shared-gate']);
+  if (gate !== undefined) experts.sharedGate = gate;
+  const dense = r.count('experts.denseLayers', [...at, 'dense-layers'], 'dense layers');
+  if (dense !== undefined) experts.denseLayers = dense;
+  return experts;
+}
+
+/** Latent attention, the layer pattern, chunked attention, norms and encoder-only. */
+function readShapes(r: FieldReader, m: (...p: string[]) => string[], need: Need): Partial<SpecDraft> {
+  const out: Partial<SpecDraft> = {};
+  const la = m('latent-attention');
+  if (r.has(la)) {
+    out.latent = {
+      kvRank: need(r.count('latent.kvRank', [...la, 'kv-rank'], 'key/value latent width'), [...la, 'kv-rank'], 'the compressed key/value width'),
+      qRank: r.count('latent.qRank', [...la, 'q-rank'], 'query latent width') ?? null,
+      ropeDim: need(r.count('latent.ropeDim', [...la, 'rope-head-dim'], 'rotary width per head'), [...la, 'rope-head-dim'], 'the rotary width per head'),
+      nopeDim: need(r.count('latent.nopeDim', [...la, 'nope-head-dim'], 'query/key width without position'), [...la, 'nope-head-dim'], 'the query/key width without position code'),
+      valueDim: need(r.count('latent.valueDim', [...la, 'value-head-dim'], 'value width per head'), [...la, 'value-head-dim'], 'the value width per head'),
+    };
+  }
+  const lp = m('layer-pattern');
+  const kinds = r.get([...lp, 'kinds']);
+  const layers = r.get(m('layers'));
+  if (Array.isArray(kinds) && kinds.length > 0 && kinds.every((k) => typeof k === 'string' && (LAYER_ATTENTIONS as readonly string[]).includes(k))) {
+    r.locate('layerTypes', [...lp, 'kinds']);
+    if (typeof layers === 'number' && Number.isSafeInteger(layers) && layers >= 1 && layers <= 1 << 20) {
+      if (kinds.length > layers) {
+        r.report('value-invalid', [...lp, 'kinds'], `${r.key([...lp, 'kinds'])} has ${kinds.length} entries, more than the ${layers} layers; give one entry per layer or a shorter pattern that repeats`);
+      } else {
+        out.layerTypes = Array.from({ length: layers }, (_, i) => kinds[i % kinds.length] as LayerAttention);
+        const types = out.layerTypes;
+        if (types.includes('sliding') && !r.has(m('sliding-window'))) r.missing(m('sliding-window'), `the window: ${r.key([...lp, 'kinds'])} lists sliding layers`);
+        if (types.includes('chunked') && !r.has(m('chunked-attention'))) r.missing(m('chunked-attention'), `the chunk: ${r.key([...lp, 'kinds'])} lists chunked layers`);
+        if (r.has(m('sliding-window', 'layers'))) {
+          r.report('key-ignored', m('sliding-window', 'layers'), `${r.key(m('sliding-window', 'layers'))} has no effect: ${r.key([...lp, 'kinds'])} says which layers slide; remove it`);
+        }
+      }
+    }
+  }
+  const free = r.get([...lp, 'position-free']);
+  if (Array.isArray(free) && free.every((i) => typeof i === 'number')) {
+    r.locate('positionFreeLayers', [...lp, 'position-free']);
+    if (free.length > 0) out.positionFreeLayers = free as number[];
+  }
+  if (r.has(m('chunked-attention'))) {
+    out.chunkSize = need(r.count('chunkSize', m('chunked-attention', 'size'), 'tokens per chunk'), m('chunked-attention', 'size'), 'the tokens per chunk');
+  }
+  const norms = r.count('layerNorms', m('norms-per-layer'), 'norms per layer');
+  if (norms !== undefined) out.layerNorms = norms;
+  const qk = r.flag('qkNorms', m('qk-norms'));
+  if (qk !== undefined) out.qkNorms = qk;
+  const encoderOnly = r.flag('encoderOnly', m('encoder-only'));
+  if (encoderOnly !== undefined) out.encoderOnly = encoderOnly;
+  const localBase = r.real('localBase', m('position', 'local-base'), 'rotary base', above(1, 'a rotary base'));
+  if (localBase !== undefined) out.localBase = localBase;
+  return out;
+}
+
 function readPosition(r: FieldReader, at: string[]): PositionDraft {
   const code = r.choice('position', [...at, 'code'], CODES, 'the position code');
   if (code === undefined && !r.reported([...at, 'code'])) r.missing([...at, 'code'], `the position code: ${POSITION_KINDS.join(', ')}`);
   if (code !== 'rotary') {
-    for (const key of ['base', 'fraction', 'scaling']) {
+    for (const key of ['base', 'local-base', 'fraction', 'scaling']) {
       if (code && r.has([...at, key])) {
         r.report('key-ignored', [...at, key], `${r.key([...at, key])} has no effect: it applies to rotary codes, and ${r.key([...at, 'code'])} is ${code}; remove it or set the code to rotary`);
       }
