@@ -11,7 +11,7 @@ import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
 import type { GateReport, JudgedFinding, Verdict } from '../compare/decide.js';
 import { METRIC_PATHS } from '../compare/metric-path.js';
-import { FLOAT_FORMATS, POSITION_KINDS, SCALING_KINDS, SEVERITIES, STORAGE_DTYPES } from '../model.js';
+import { FLOAT_FORMATS, LAYER_ATTENTIONS, POSITION_KINDS, SCALING_KINDS, SEVERITIES, STORAGE_DTYPES } from '../model.js';
 import type { ModelSpec } from '../model.js';
 import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 import type { Metrics } from '../metrics/types.js';
@@ -49,11 +49,26 @@ const numbers = (names: readonly string[]): Record<string, Schema> => Object.fro
 
 const precision = record(numbers(PRECISION_METRICS));
 
+const precisionByFormat = record(Object.fromEntries(FLOAT_FORMATS.map((format) => [format, precision])));
+
+/** Per layer kind (`LayerKindMetrics`). */
+const layerKind = record({
+  attention: { enum: [...LAYER_ATTENTIONS] },
+  positionCode: { enum: [...POSITION_KINDS] },
+  scaled: { type: 'boolean' },
+  ...numbers(['layers', 'window', 'rotaryBase', 'visibleSpan', 'fastestWavelength', 'slowestWavelength', 'unturnedPairs',
+    'exposedPairs', 'separationFloor', 'separationFloorOffset', 'discriminationSpan']),
+  precision: precisionByFormat,
+});
+
 const metrics = record({
   ...numbers(SCALAR_METRICS),
   alibiSlopes: { type: ['array', 'null'], items: { type: 'number' } },
-  precision: record(Object.fromEntries(FLOAT_FORMATS.map((format) => [format, precision]))),
-});
+  precision: precisionByFormat,
+  layerKinds: { type: ['array', 'null'], items: layerKind },
+}, false, ['layerKinds']);
+
+const booleanOrNull: Schema = { type: ['boolean', 'null'] };
 
 const spec = record({
   name: textOrNull,
@@ -62,7 +77,14 @@ const spec = record({
   gated: { type: 'boolean' },
   tied: { type: 'boolean' },
   bias: { type: 'boolean' },
-  experts: record(numbers(['total', 'active']), true),
+  experts: record({ ...numbers(['total', 'active', 'width', 'shared', 'sharedWidth', 'denseLayers']), sharedGate: booleanOrNull }, true,
+    ['width', 'shared', 'sharedWidth', 'denseLayers', 'sharedGate']),
+  latent: record(numbers(['kvRank', 'qRank', 'ropeDim', 'nopeDim', 'valueDim']), true),
+  layerTypes: { type: ['array', 'null'], items: { enum: [...LAYER_ATTENTIONS] } },
+  positionFreeLayers: { type: ['array', 'null'], items: { type: 'number' } },
+  ...numbers(['chunkSize', 'localBase', 'layerNorms']),
+  qkNorms: booleanOrNull,
+  encoderOnly: booleanOrNull,
   encoder: record(numbers(['layers', 'heads', 'kvHeads', 'headDim', 'ffn']), true),
   position: {
     ...record({
@@ -80,7 +102,7 @@ const spec = record({
     positions: { enum: [...FLOAT_FORMATS, null] },
   }),
   serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens'])),
-});
+}, false, ['latent', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly']);
 
 const version = record({ spec, metrics }, true);
 
@@ -185,6 +207,8 @@ const NULLABLE_SPEC_FIELDS = new Set([
   'name', 'experts', 'encoder', 'scaling', 'originalSpan', 'trainedSpan', 'slidingWindow', 'windowLayers',
   'weights', 'cache', 'positions', 'embeddingInitStd', 'embeddingMultiplier',
   'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens',
+  'latent', 'qRank', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly',
+  'width', 'shared', 'sharedWidth', 'sharedGate', 'denseLayers',
 ]);
 
 /**

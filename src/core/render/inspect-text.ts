@@ -35,6 +35,41 @@ function positionLine(report: FileReport): string {
   return parts.join(', ');
 }
 
+/** Experts, latent attention, encoder-only: the shapes the budget follows from, or empty. */
+function shapeLine(report: FileReport): string {
+  const spec = report.spec;
+  const parts: string[] = [];
+  const x = spec.experts;
+  if (x) {
+    const shared = x.shared ? ` + ${x.shared} shared${x.sharedWidth ? ` × ${formatInteger(x.sharedWidth)}` : ''}${x.sharedGate ? ' (gated)' : ''}` : '';
+    parts.push(`${x.active} of ${x.total} experts${x.width ? ` × ${formatInteger(x.width)}` : ''}${shared}${x.denseLayers ? `, ${x.denseLayers} dense layer${x.denseLayers === 1 ? '' : 's'}` : ''}`);
+  }
+  if (spec.latent) parts.push(`latent attention, cache ${spec.latent.kvRank} + ${spec.latent.ropeDim} per token and layer`);
+  if (spec.encoderOnly) parts.push('encoder-only, no decoding cache');
+  return parts.join(' · ');
+}
+
+/** One row per kind of decoder layer (METRICS.md, "Layers that differ"). */
+function layerKindRows(m: Metrics): string[] {
+  const kinds = m.layerKinds;
+  if (!kinds || kinds.length === 0) return [];
+  const header = ['layers', 'attention', 'sees', 'code', 'slowest λ', 'exposed', 'separation floor', 'discrimination', 'bf16 blurred'];
+  const rows = kinds.map((k) => [
+    formatInteger(k.layers),
+    k.attention,
+    k.window === null ? 'all' : formatTokens(k.visibleSpan),
+    k.positionCode === 'rotary' ? `rotary ${formatNumber(k.rotaryBase)}${k.scaled ? ', scaled' : ''}` : k.positionCode,
+    k.slowestWavelength === null ? '—' : formatNumber(k.slowestWavelength),
+    formatInteger(k.exposedPairs),
+    k.separationFloor === null ? '—' : formatNumber(k.separationFloor),
+    k.discriminationSpan === null ? '—' : formatTokens(k.discriminationSpan),
+    formatInteger(k.precision.bf16.blurredPairs),
+  ]);
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
+  const line = (cells: string[]) => `    ${cells.map((c, i) => (i === 1 || i === 3 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ')}`;
+  return [line(header), ...rows.map(line)];
+}
+
 function rangeRows(m: Metrics): Row[] {
   return [
     ['declared span', formatTokens(m.declaredSpan)],
@@ -112,9 +147,16 @@ export function renderFileText(report: FileReport, style: TextStyle = PLAIN): st
   const lines = [
     style.bold(title),
     `  ${style.dim(`${report.dialect} format · ${positionLine(report)} · evaluated at ${formatTokens(m.evaluationSpan)} tokens`)}`,
+    ...(shapeLine(report) ? [`  ${style.dim(shapeLine(report))}`] : []),
     ...section(style, 'Range', rangeRows(m)),
     ...section(style, 'Spectrum', spectrumRows(m)),
   ];
+  const kinds = layerKindRows(m);
+  if (kinds.length > 0) {
+    const fullCoded = (m.layerKinds ?? []).some((k) => k.attention === 'full' && k.positionCode !== 'none');
+    const note = fullCoded ? 'top-level values are the full-attention layers\'' : 'top-level values are the model\'s own code over the whole span';
+    lines.push('', `  ${style.bold('Layer kinds')} ${style.dim(`(${note})`)}`, ...kinds);
+  }
   const precision = precisionRows(m);
   if (precision.length > 0) {
     const own = report.spec.dtypes.positions ?? 'fp32';
