@@ -21,6 +21,9 @@ function expectSane(m: Metrics, label: string): void {
           if (!(v === null || (typeof v === 'number' && Number.isFinite(v)))) throw new Error(`${label}: precision.${format}.${name} = ${v}`);
         }
       }
+    } else if (key === 'layerKinds') {
+      // Checked entry by entry in degenerate-shapes.test.ts.
+      if (!(value === null || Array.isArray(value))) throw new Error(`${label}: layerKinds`);
     } else if (key === 'alibiSlopes') {
       if (!(value === null || (Array.isArray(value) && value.every((x) => Number.isFinite(x))))) throw new Error(`${label}: alibiSlopes`);
     } else if (!(value === null || (typeof value === 'number' && Number.isFinite(value)))) {
