@@ -221,6 +221,13 @@ describe('layers that differ', () => {
     expect(m.receptiveField).toBeNull();
   });
 
+  it('an empty no_rope_layers list takes the Llama-4-style default of every 4th layer position-free, as the config class does', () => {
+    const cfg = { ...(JSON.parse(fixture('llama4-chunked-experts.json')) as Record<string, unknown>), no_rope_layers: [] };
+    const r = readModel(configText(cfg), 'c.json');
+    expect(r.findings).toEqual([]);
+    expect(r.spec.positionFreeLayers).toEqual(read('llama4-chunked-experts.json').spec.positionFreeLayers);
+  });
+
   it('an unknown layer_types entry is a finding, never a silent default', () => {
     const types = Array.from({ length: 26 }, (_, i) => (i % 2 ? 'linear_attention' : 'full_attention'));
     const cfg = { ...(JSON.parse(fixture('gemma3-local-global.json')) as Record<string, unknown>), layer_types: types };

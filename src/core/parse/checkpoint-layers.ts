@@ -66,11 +66,11 @@ export function readLayerPlan(r: FieldReader, modelType: string | null, layers: 
   } else if (plan.chunkSize !== null && n !== null) {
     // The Llama-4-style class: layers with the rotary code are chunked, the others full.
     const free = new Set(plan.positionFreeLayers ?? []);
-    if (!r.has(['no_rope_layers']) && !(modelType !== null && NO_ROPE_INTERVAL_FAMILIES[modelType] !== undefined) && !r.has(['no_rope_layer_interval'])) {
+    if (!hasList(r, ['no_rope_layers']) && !(modelType !== null && NO_ROPE_INTERVAL_FAMILIES[modelType] !== undefined) && !r.has(['no_rope_layer_interval'])) {
       r.report('key-ignored', ['attention_chunk_size'], `${r.key(['attention_chunk_size'])} states a chunk, but neither layer_types nor no_rope_layers says which layers are chunked; every layer is read as chunked — state layer_types`);
     }
     plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention => (free.has(i) ? 'full' : 'chunked'));
-    r.locate('layerTypes', r.has(['no_rope_layers']) ? ['no_rope_layers'] : ['attention_chunk_size']);
+    r.locate('layerTypes', hasList(r, ['no_rope_layers']) ? ['no_rope_layers'] : ['attention_chunk_size']);
   }
 
   if (plan.layerTypes !== null) {
@@ -142,6 +142,18 @@ export function readLayerPlan(r: FieldReader, modelType: string | null, layers: 
   return plan;
 }
 
+/** Whether `path` holds a list with at least one entry. */
+function hasList(r: FieldReader, path: string[]): boolean {
+  const v = r.get(path);
+  return Array.isArray(v) && v.length > 0;
+}
+
+/** Keys this reader consumes (for checks that every metric-changing key is read). */
+export const LAYER_KEYS: readonly string[] = [
+  'layer_types', 'sliding_window', 'use_sliding_window', 'sliding_window_pattern', 'max_window_layers', 'attention_chunk_size',
+  'no_rope_layers', 'no_rope_layer_interval', 'rope_local_base_freq',
+];
+
 function dropWindow(plan: LayerPlanDraft): LayerPlanDraft {
   plan.slidingWindow = null;
   plan.windowLayers = null;
@@ -189,7 +201,9 @@ function readLayerTypes(r: FieldReader, n: number | null): LayerAttention[] | nu
 /** Layers without a position code, from `no_rope_layers` (1 = rotary, 0 = none) or the family interval. */
 function readPositionFree(r: FieldReader, modelType: string | null, n: number | null): number[] | null {
   const listPath = ['no_rope_layers'];
-  if (r.has(listPath)) {
+  // An empty list is "not stated": the Llama-4-style class then fills in its interval default.
+  const stated = r.get(listPath);
+  if (r.has(listPath) && !(Array.isArray(stated) && stated.length === 0)) {
     const list = r.get(listPath);
     r.locate('positionFreeLayers', listPath);
     if (!Array.isArray(list) || list.some((x) => x !== 0 && x !== 1) || (n !== null && list.length < n)) {
