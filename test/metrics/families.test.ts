@@ -228,6 +228,15 @@ describe('layers that differ', () => {
     expect(r.spec.positionFreeLayers).toEqual(read('llama4-chunked-experts.json').spec.positionFreeLayers);
   });
 
+  it('a position-free first layer leaves the rotary layers their own number formats', () => {
+    const { spec } = read('llama4-chunked-experts.json');
+    const m = computeMetrics({ ...withSpan(spec, 16384), positionFreeLayers: [0] });
+    const rotaryFull = m.layerKinds!.find((k) => k.attention === 'chunked' && k.positionCode === 'rotary')!;
+    expect(m.layerKinds![0]!.positionCode).toBe('none');
+    expect(rotaryFull.precision.bf16.blurredPairs).toBe(m.precision.bf16.blurredPairs);
+    expect(rotaryFull.precision.bf16.blurredPairs).not.toBeNull();
+  });
+
   it('an unknown layer_types entry is a finding, never a silent default', () => {
     const types = Array.from({ length: 26 }, (_, i) => (i % 2 ? 'linear_attention' : 'full_attention'));
     const cfg = { ...(JSON.parse(fixture('gemma3-local-global.json')) as Record<string, unknown>), layer_types: types };

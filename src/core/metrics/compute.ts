@@ -139,21 +139,23 @@ export function layerKindMetrics(spec: ModelSpec, span: number | null, trained: 
   const local = (g: LayerGroup) => g.window !== null && code?.kind === 'rotary' && positiveFinite(spec.localBase) !== null;
   if (groups.length === 1 && groups[0]!.positional && !local(groups[0]!)) return null;
   const formats = ['fp32', 'bf16', 'fp16'] as const;
-  const precisionCache = new Map<string, Record<FloatFormat, PrecisionMetrics>>();
+  const precisionCache = new Map<number, Record<FloatFormat, PrecisionMetrics>>();
   return groups.map((g): LayerKindMetrics => {
     const visible = span === null ? null : visibleSpan(g, span);
     const ownCode = g.positional ? code.kind : 'none';
     const setting: RotarySetting | undefined = local(g) ? { base: spec.localBase as number, unscaled: true } : undefined;
     const rotaryBase = ownCode === 'rotary' && code.kind === 'rotary' ? (setting ? setting.base : code.base) : null;
     const plan = !g.positional ? null : setting ? frequencyPlan(spec, span, trained, setting) : top.plan;
-    const key = setting ? `${setting.base}` : 'top';
-    let precision = precisionCache.get(key);
-    if (precision === undefined) {
-      precision = {} as Record<FloatFormat, PrecisionMetrics>;
-      for (const format of formats) {
-        precision[format] = !setting && plan !== null ? top.precision[format] : numberFormatMetrics(format, plan ? plan.scaled : null, span);
+    let precision: Record<FloatFormat, PrecisionMetrics>;
+    if (!g.positional) precision = nullPrecision(span);
+    else if (!setting) precision = top.precision;
+    else {
+      const cached = precisionCache.get(setting.base);
+      precision = cached ?? ({} as Record<FloatFormat, PrecisionMetrics>);
+      if (cached === undefined) {
+        for (const format of formats) precision[format] = numberFormatMetrics(format, plan ? plan.scaled : null, span);
+        precisionCache.set(setting.base, precision);
       }
-      precisionCache.set(key, precision);
     }
     const range = plan === null ? null : setting ? wavelengthRange(plan.scaled) : top.range;
     const similarity = plan === null ? similarityScan(null, null) : !setting && visible === span ? top.similarity : similarityScan(plan.scaled, visible);
@@ -172,7 +174,7 @@ export function layerKindMetrics(spec: ModelSpec, span: number | null, trained: 
       separationFloor: similarity.separationFloor,
       separationFloorOffset: similarity.separationFloorOffset,
       discriminationSpan: similarity.discriminationSpan,
-      precision: g.positional ? precision : nullPrecision(span),
+      precision,
     };
   });
 }
