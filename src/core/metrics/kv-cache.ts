@@ -61,3 +61,30 @@ export function cacheBytesAtSpan(spec: ModelSpec, span: number | null): number |
 function finite(x: number): number | null {
   return Number.isFinite(x) ? x : null;
 }
+
+/** Decoder layers alike in their cache: how many, bytes per token each holds, and their window (null: full attention). */
+export interface CacheLayerGroup {
+  layers: number;
+  tokenBytes: number;
+  window: number | null;
+}
+
+/**
+ * bytes: the decoder layers' cache per token as one of `t` tensor ranks holds it, grouped by
+ * kind: each layer `2·ceil(kvHeads/t)·headDim·bytes` (a rank with `t > kvHeads` keeps a copy of
+ * one head: common practice), full-attention layers and windowed layers apart. With `t = 1` the
+ * groups sum to `cachePerTokenBytes`. Null when a size is degenerate.
+ */
+export function cacheLayerGroups(spec: ModelSpec, t: number): CacheLayerGroup[] | null {
+  const layers = positiveCount(spec.layers);
+  const kv = positiveCount(spec.kvHeads);
+  const degree = positiveCount(t);
+  const windowed = windowedLayers(spec);
+  if (layers === null || kv === null || degree === null || windowed === null) return null;
+  const perLayer = layerTokenBytes({ ...spec, kvHeads: Math.ceil(kv / degree) });
+  if (perLayer === null) return null;
+  const groups: CacheLayerGroup[] = [];
+  if (layers - windowed > 0) groups.push({ layers: layers - windowed, tokenBytes: perLayer, window: null });
+  if (windowed > 0) groups.push({ layers: windowed, tokenBytes: perLayer, window: spec.slidingWindow as number });
+  return groups;
+}

@@ -94,3 +94,45 @@ export function parameterCounts(spec: ModelSpec): ParameterCounts | null {
   if (!Number.isFinite(params) || !Number.isFinite(activeParams)) return null;
   return { params, activeParams, nonEmbeddingParams: stacksActive };
 }
+
+/** Where the parameters sit, for counting what a quantization stores at low width. */
+export interface ParameterBreakdown extends ParameterCounts {
+  /** count: token embedding table(s) plus a learned position table. */
+  embedding: number;
+  /** count: the untied output matrix, 0 when tied. */
+  output: number;
+  /** count: every linear weight matrix in the layers (attention, feed-forward, router): what a quantization stores at low width. */
+  matrices: number;
+  /** count: norms and biases. */
+  vectors: number;
+}
+
+/**
+ * count: `parameterCounts` split into `embedding` (vocab·hidden, plus declaredSpan·hidden for a
+ * learned table), `output` (vocab·hidden when untied), `vectors` (every norm's scale and shift,
+ * every bias) and `matrices` (the rest: the linear weights of the layers), so `params =
+ * embedding + output + matrices + vectors`. Null when `parameterCounts` is.
+ */
+export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
+  const counts = parameterCounts(spec);
+  if (counts === null) return null;
+  // parameterCounts checked every size below.
+  const { layers, hidden, heads, kvHeads, headDim, ffn, vocab } = spec;
+  const bias = spec.bias === true;
+  const gated = spec.gated === true;
+  const experts = spec.experts ? spec.experts.total : 1;
+  const output = spec.tied === false ? vocab * hidden : 0;
+  const embedding = vocab * hidden + (spec.position?.kind === 'learned' ? spec.declaredSpan * hidden : 0);
+  const attentionBias = (h: number, kv: number, d: number) => (bias ? h * d + 2 * kv * d + hidden : 0);
+  const ffBias = (width: number) => (bias ? (gated ? 2 : 1) * width + hidden : 0);
+  const encoderDecoder = spec.encoder !== null && spec.encoder !== undefined;
+  let vectors = layers * ((encoderDecoder ? 2 : 1) * attentionBias(heads, kvHeads, headDim) + experts * ffBias(ffn)
+    + (encoderDecoder ? 3 : 2) * normParams(hidden, bias)) + normParams(hidden, bias);
+  if (encoderDecoder) {
+    const e = spec.encoder!;
+    vectors += e.layers * (attentionBias(e.heads, e.kvHeads, e.headDim) + ffBias(e.ffn) + 2 * normParams(hidden, bias)) + normParams(hidden, bias);
+  }
+  const matrices = counts.params - embedding - output - vectors;
+  if (!Number.isFinite(matrices) || matrices < 0) return null;
+  return { ...counts, embedding, output, matrices, vectors };
+}

@@ -50,6 +50,12 @@ export interface Metrics {
   cacheBytesAtSpan: number | null;
   memoryBytes: number | null;
   fitSequences: number | null;
+  // Serving across devices
+  devices: number | null;
+  kvHeadsPerDevice: number | null;
+  weightBytesPerDevice: number | null;
+  cachePerTokenBytesPerDevice: number | null;
+  memoryBytesPerDevice: number | null;
   flopsPerToken: number | null;
   tokenBudget: number | null;
 }
@@ -62,6 +68,7 @@ export const SCALAR_METRICS = [
   'receptiveField', 'positionShare',
   'params', 'activeParams', 'nonEmbeddingParams', 'weightBytes', 'cachePerTokenBytes', 'cacheBytesAtSpan',
   'memoryBytes', 'fitSequences', 'flopsPerToken', 'tokenBudget',
+  'devices', 'kvHeadsPerDevice', 'weightBytesPerDevice', 'cachePerTokenBytesPerDevice', 'memoryBytesPerDevice',
 ] as const satisfies readonly (keyof Metrics)[];
 
 export type ScalarMetric = (typeof SCALAR_METRICS)[number];
