@@ -79,8 +79,12 @@ const spec = record({
     cache: { enum: [...STORAGE_DTYPES, null] },
     positions: { enum: [...FLOAT_FORMATS, null] },
   }),
-  serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens'])),
-});
+  serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens', 'tensorParallel',
+    'pipelineParallel', 'activationReserveGiB']), false, ['tensorParallel', 'pipelineParallel', 'activationReserveGiB']),
+  quantization: record({
+    method: text, ...numbers(['bits', 'groupSize', 'scaleBits']), zeroPoint: { type: 'boolean' }, output: { type: 'boolean' },
+  }, true),
+}, false, ['quantization']);
 
 const version = record({ spec, metrics }, true);
 
@@ -100,7 +104,8 @@ const remedy = record({
   change: map({ type: ['number', 'string'] }),
   metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
   raises: { type: 'array', items: text },
-});
+  cost: text,
+}, false, ['cost']);
 
 const finding = record({
   rule: text, severity, message: text, key: textOrNull, line: lineOrNull,
@@ -184,7 +189,8 @@ function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
 const NULLABLE_SPEC_FIELDS = new Set([
   'name', 'experts', 'encoder', 'scaling', 'originalSpan', 'trainedSpan', 'slidingWindow', 'windowLayers',
   'weights', 'cache', 'positions', 'embeddingInitStd', 'embeddingMultiplier',
-  'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens',
+  'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens', 'tensorParallel', 'pipelineParallel',
+  'activationReserveGiB', 'quantization', 'groupSize',
 ]);
 
 /**
