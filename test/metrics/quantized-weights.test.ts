@@ -97,6 +97,13 @@ describe('quantization_config of checkpoint configs', () => {
     expect(read.findings.map((f) => [f.rule, f.key])).toEqual([['key-ignored', 'quantization_config.modules_to_not_convert']]);
   });
 
+  it('drops the checkpoint\'s quantization when the command line names another weight format', () => {
+    const text = seventyB({ quantization_config: { quant_method: 'gptq', bits: 4, group_size: 128 } });
+    const report = inspectModel(text, 'config.json', { overrides: { weights: 'bf16' } });
+    expect(report.spec.quantization).toBeNull();
+    expect(report.metrics.weightBytes).toBe((MATRICES + REST) * 2);
+  });
+
   it('refuses a group size that is not a whole number of weights, naming the key', () => {
     const read = readModel(seventyB({ quantization_config: { quant_method: 'gptq', bits: 4, group_size: 0 } }), 'config.json');
     expect(read.findings.map((f) => [f.rule, f.key])).toEqual([['value-invalid', 'quantization_config.group_size']]);

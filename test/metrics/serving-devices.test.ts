@@ -6,6 +6,7 @@ import { shardingDegrees, shards } from '../../src/core/metrics/per-device.js';
 import { servedSequences } from '../../src/core/metrics/kv-cache.js';
 import { readModel } from '../../src/core/parse/read-model.js';
 import type { ModelSpec } from '../../src/core/model.js';
+import { specFindings } from '../../src/core/rules/spec-rules.js';
 
 // Serving across devices (METRICS.md, "Serving across devices"). Expected values are worked out by
 // hand beside each check from the contract's formulas; the shapes are published ones.
@@ -144,5 +145,25 @@ describe('sharding degrees', () => {
     const started = performance.now();
     expect(shardingDegrees(2 ** 32 - 1, 1).length).toBeGreaterThan(0);
     expect(performance.now() - started).toBeLessThan(1000);
+  });
+});
+
+describe('layout-unshardable (METRICS.md: heads % t != 0, or kvHeads and t with neither dividing the other)', () => {
+  const findings = (heads: number, kv: number, t: number) => {
+    const text = JSON.stringify({ model_type: 'llama', hidden_size: heads * 128, num_hidden_layers: 4, num_attention_heads: heads, num_key_value_heads: kv, vocab_size: 1000, max_position_embeddings: 4096, rope_theta: 10000 });
+    return specFindings(specWith(text, { tensorParallel: t }), { 'serving.tensorParallel': { key: 'serving.tensor-parallel', line: 3 } })
+      .filter((f) => f.rule === 'layout-unshardable');
+  };
+
+  it('blocks 12 key/value heads over 8 ranks though 8 divides the 48 heads, naming the degrees that work', () => {
+    const [f] = findings(48, 12, 8);
+    expect(f).toMatchObject({ severity: 'block', key: 'serving.tensor-parallel', line: 3 });
+    // Divisors of 48 that 12 divides or that divide 12... 1, 2, 3, 4, 6, 12, 24, 48; not 8 or 16.
+    expect(f!.message).toBe('The tensor-parallel degree 8 (serving.tensor-parallel) cannot shard the attention: 8 and the 12 key/value heads do not divide one another; use a tensor-parallel degree of 1, 2, 3, 4, 6, 12, 24 or 48.');
+  });
+
+  it('lets 16 ranks share 8 key/value heads (each keeps a copy) and 2 ranks split them', () => {
+    expect(findings(64, 8, 16)).toEqual([]);
+    expect(findings(64, 8, 2)).toEqual([]);
   });
 });
