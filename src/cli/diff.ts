@@ -14,7 +14,8 @@ import { terminalStyle } from './terminal.js';
 
 export const DIFF_USAGE = `usage: context-reach diff [--base REF] [--head REF] [--policy FILE]
        [--format text|markdown|json] [--fail-on block|warn|never] [--label NAME]... [--html FILE]
-       [--served-span N] [--sequences N] [--device-gib G] [--cache-dtype D] ...`;
+       [--served-span N] [--sequences N] [--device-gib G] [--cache-dtype D]
+       [--tensor-parallel N] [--pipeline-parallel N] ...`;
 
 const FORMATS = ['text', 'markdown', 'json'] as const;
 const FAIL_ON = ['block', 'warn', 'never'] as const;

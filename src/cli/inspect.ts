@@ -11,7 +11,8 @@ import type { Console } from './console.js';
 
 export const INSPECT_USAGE = `usage: context-reach inspect FILE... [--json] [--at POINTER]
        [--served-span N] [--trained-span N] [--sequences N] [--device-gib G]
-       [--weight-dtype D] [--cache-dtype D] [--position-dtype D]`;
+       [--weight-dtype D] [--weight-group-size N] [--cache-dtype D] [--position-dtype D]
+       [--tensor-parallel N] [--pipeline-parallel N] [--activation-reserve-gib G]`;
 
 /** Files read ahead of the one being measured (default: `8`). */
 const READ_AHEAD = 8;

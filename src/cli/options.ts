@@ -21,6 +21,14 @@ export function positiveNumber(flag: string, text: string): number {
   return value;
 }
 
+export function nonNegativeNumber(flag: string, text: string): number {
+  const value = Number(text);
+  if (text.trim() === '' || !Number.isFinite(value) || value < 0) {
+    throw new UsageError(`--${flag} takes a number of at least 0, got '${text}'`);
+  }
+  return value;
+}
+
 export function storageDType(flag: string, text: string): StorageDType {
   if ((STORAGE_DTYPES as readonly string[]).includes(text)) return text as StorageDType;
   throw new UsageError(`--${flag} takes one of ${STORAGE_DTYPES.join(', ')}, got '${text}'`);
@@ -40,6 +48,10 @@ export const SERVING_FLAGS = {
   'weight-dtype': { type: 'string' },
   'cache-dtype': { type: 'string' },
   'position-dtype': { type: 'string' },
+  'tensor-parallel': { type: 'string' },
+  'pipeline-parallel': { type: 'string' },
+  'activation-reserve-gib': { type: 'string' },
+  'weight-group-size': { type: 'string' },
 } as const;
 
 /** The serving patch the flags describe (only the flags given). */
@@ -54,5 +66,9 @@ export function servingPatch(values: Record<string, unknown>): ServingPatch {
   if ((v = text('weight-dtype')) !== undefined) patch.weights = storageDType('weight-dtype', v);
   if ((v = text('cache-dtype')) !== undefined) patch.cache = storageDType('cache-dtype', v);
   if ((v = text('position-dtype')) !== undefined) patch.positions = floatFormat('position-dtype', v);
+  if ((v = text('tensor-parallel')) !== undefined) patch.tensorParallel = positiveInteger('tensor-parallel', v);
+  if ((v = text('pipeline-parallel')) !== undefined) patch.pipelineParallel = positiveInteger('pipeline-parallel', v);
+  if ((v = text('activation-reserve-gib')) !== undefined) patch.activationReserveGiB = nonNegativeNumber('activation-reserve-gib', v);
+  if ((v = text('weight-group-size')) !== undefined) patch.weightGroupSize = positiveInteger('weight-group-size', v);
   return patch;
 }

@@ -111,6 +111,32 @@ export interface Serving {
   outputTokens: number | null;
   /** Tokens reserved for a fixed prompt (default: `null`). */
   promptTokens: number | null;
+  /** Tensor-parallel degree `t`: devices each layer is split over (default: `1`). */
+  tensorParallel?: number | null;
+  /** Pipeline-parallel degree `p`: stages the layers are split into (default: `1`). */
+  pipelineParallel?: number | null;
+  /** GiB kept on every device for activations and workspace, beside the reserve share (default: `null`, none). */
+  activationReserveGiB?: number | null;
+}
+
+/**
+ * A weight quantization (METRICS.md, "Quantized weights"): the linear weight matrices of the
+ * layers stored at `bits` per weight plus a scale per group (and a zero point where the method
+ * stores one); embeddings, norms and, unless `output` says so, the output matrix stay unquantized.
+ */
+export interface WeightQuantization {
+  /** The method as named where it was stated (`gptq`, `awq`, `fp8`, `bitsandbytes`, or the dtype `int4`/`int8`/`fp8`). */
+  method: string;
+  /** Stored bits per quantized weight. */
+  bits: number;
+  /** Weights sharing one scale; null for one scale per matrix (its share of the bytes is negligible and not counted). */
+  groupSize: number | null;
+  /** Bits of one scale (16 for group-quantized integer formats, 32 for block-scaled 8-bit floats). */
+  scaleBits: number;
+  /** A zero point of `bits` bits is stored per group. */
+  zeroPoint: boolean;
+  /** The output matrix is quantized too (default: `false`). */
+  output: boolean;
 }
 
 export interface ModelSpec {
@@ -175,6 +201,8 @@ export interface ModelSpec {
   /** Factor token embeddings are multiplied by, e.g. sqrt(hidden) (default: `1`). */
   embeddingMultiplier: number | null;
   serving: Serving;
+  /** Weight quantization (default: `null`, every weight in the weight dtype). */
+  quantization?: WeightQuantization | null;
 }
 
 /** Where a normalised field came from: the dialect key and its 1-based line. */
@@ -218,4 +246,9 @@ export interface ServingPatch {
   cache?: StorageDType;
   positions?: FloatFormat;
   trainedSpan?: number;
+  tensorParallel?: number;
+  pipelineParallel?: number;
+  activationReserveGiB?: number;
+  /** Weights sharing one scale when `weights` is a quantized format (int4, int8, fp8). */
+  weightGroupSize?: number;
 }

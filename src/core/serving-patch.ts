@@ -1,4 +1,6 @@
 import type { LocationMap, ModelSpec, ServingPatch, SourceLocation } from './model.js';
+import { dtypeQuantization } from './metrics/quantized-weights.js';
+import { weightDType } from './metrics/storage-bytes.js';
 
 /** How a patch meets the file's own values: policy defaults yield to them, CLI flags replace them. */
 export type PatchMode = 'default' | 'override';
@@ -17,13 +19,18 @@ const SPEC_PATH: Record<Field, string> = {
   cache: 'dtypes.cache',
   positions: 'dtypes.positions',
   trainedSpan: 'trainedSpan',
+  tensorParallel: 'serving.tensorParallel',
+  pipelineParallel: 'serving.pipelineParallel',
+  activationReserveGiB: 'serving.activationReserveGiB',
+  weightGroupSize: 'quantization',
 };
 
 function current(spec: ModelSpec, field: Field): unknown {
   switch (field) {
     case 'weights': case 'cache': case 'positions': return spec.dtypes[field];
     case 'trainedSpan': return spec.trainedSpan;
-    default: return spec.serving[field];
+    case 'weightGroupSize': return spec.quantization ?? null;
+    default: return spec.serving[field] ?? null;
   }
 }
 
@@ -40,17 +47,31 @@ export function applyServing(
 ): { spec: ModelSpec; locations: LocationMap } {
   const next: ModelSpec = { ...spec, dtypes: { ...spec.dtypes }, serving: { ...spec.serving } };
   const nextLocations: LocationMap = { ...locations };
+  const where = (field: Field) => (typeof origin === 'function' ? origin(field) : origin);
+  let weightsSet = false;
   for (const field of Object.keys(SPEC_PATH) as Field[]) {
     const value = patch[field];
-    if (value === undefined) continue;
+    if (value === undefined || field === 'weightGroupSize') continue;
     if (mode === 'default' && current(spec, field) !== null) continue;
     switch (field) {
-      case 'weights': case 'cache': next.dtypes[field] = value as never; break;
+      case 'weights': case 'cache': next.dtypes[field] = value as never; weightsSet ||= field === 'weights'; break;
       case 'positions': next.dtypes.positions = value as never; break;
       case 'trainedSpan': next.trainedSpan = value as number; break;
       default: next.serving[field] = value as number;
     }
-    nextLocations[SPEC_PATH[field]] = typeof origin === 'function' ? origin(field) : origin;
+    nextLocations[SPEC_PATH[field]] = where(field);
+  }
+  // A weight format given here replaces the file's own quantization; with a group size, a
+  // quantized format (int4, int8, fp8) counts its matrices at low width plus scales.
+  const group = patch.weightGroupSize;
+  const fileQuantized = spec.quantization !== null && spec.quantization !== undefined;
+  if (weightsSet && mode === 'override') next.quantization = null;
+  if (group !== undefined && !(mode === 'default' && fileQuantized)) {
+    const q = dtypeQuantization(weightDType(next), group);
+    if (q !== null) {
+      next.quantization = q;
+      nextLocations.quantization = where('weightGroupSize');
+    }
   }
   return { spec: next, locations: nextLocations };
 }

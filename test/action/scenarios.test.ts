@@ -185,4 +185,30 @@ describe('gate scenarios', () => {
     expect(result.out.outputs.verdict).toBe('block');
     expect(result.out.annotations[0]).toMatchObject({ level: 'error', file: 'web/config.json', line: 1 });
   });
+  it('judges memory per device under a tensor-parallel policy override, and offers a larger tensor degree', async () => {
+    // A 70B-class shape (80 layers, 64 heads, head 128; Touvron et al. 2023, Llama 2: 8 key/value heads) served
+    // over tensor-parallel 8 on 80 GiB devices: 17,244,162,048 weight bytes per device. With 8 kv heads one
+    // device holds 1 per layer: 64 sequences × 4,096 tokens × 40,960 bytes = 10 GiB of cache (fits 72 GiB usable).
+    // The pull request goes to 64 kv heads (full multi-head attention, 78,371,889,152 parameters, 18.2 GiB of fp16
+    // weights per device): 8 kv heads per device, 64 × 4,096 × 327,680 bytes = 80 GiB of cache per device: over.
+    const policy = 'serving:\n  device-memory-gib: 80\n  sequences: 64\n  span: 4096\noverrides:\n  - files: ["models/big/**"]\n    serving:\n      tensor-parallel: 8\n';
+    const big = (kv: number) => checkpointConfig({
+      hidden_size: 8192, intermediate_size: 28672, num_hidden_layers: 80, num_attention_heads: 64, num_key_value_heads: kv,
+      torch_dtype: 'float16',
+    });
+    result = await runScenario({
+      base: { '.github/context-reach.yml': policy, 'models/big/config.json': big(8) },
+      head: { '.github/context-reach.yml': policy, 'models/big/config.json': big(64) },
+    });
+    expect(result.error).toBeNull();
+    expect(result.out.outputs.verdict).toBe('block');
+    const body = comments(result)[0]!.body.replace(/\\/g, '');
+    expect(body).toContain('memory-over-budget');
+    expect(body).toContain('Head: per device, 8 devices (tensor-parallel 8 × pipeline-parallel 1): weights 18.2 GiB, cache 80 GiB at 4,096 tokens × 64 sequences');
+    expect(body).toMatch(/Per device \(8 devices: tensor-parallel 8 × pipeline-parallel 1\)/);
+    expect(body).toContain('reserve kept for activations, workspace and fragmentation');
+    // The remedy search finds the next tensor degree that shards 64 heads and 64 kv heads and fits: 16.
+    expect(body).toContain('<code>serving.tensorParallel</code> 8 → **16**');
+    expect(body).toContain('costs 16 devices per replica (tensor-parallel 16 × pipeline-parallel 1), was 8');
+  });
 });

@@ -84,4 +84,17 @@ describe('renderHtmlReport on a span the curve cannot afford', () => {
     has(page, 'is not drawn: visiting every offset would take too long for a report');
     expect((used.user + used.system) / 1000).toBeLessThan(2000);
   }, 30_000);
+  it('draws memory per device with the usable memory of one device, and says the fit per replica, when a replica spans 8 devices', async () => {
+    // 70B-class shape (80 layers, 64 heads, 8 key/value heads of 128; Touvron et al. 2023, Llama 2): 137,953,296,384 fp16
+    // weight bytes, 17,244,162,048 (16.1 GiB) per device over tensor-parallel 8.
+    const policy = { '.github/context-reach.yml': 'files: ["models/**"]\n' };
+    const big = (layers: number) => checkpointConfig({ hidden_size: 8192, intermediate_size: 28672, num_hidden_layers: layers, num_attention_heads: 64, num_key_value_heads: 8, torch_dtype: 'float16' });
+    const { report: tp } = await gateOver({ ...policy, 'models/x/config.json': big(80) }, { ...policy, 'models/x/config.json': big(80).replace('"max_position_embeddings": 4096', '"max_position_embeddings": 4095') },
+      { tensorParallel: 8, deviceGiB: 80, sequences: 64 });
+    const page = renderHtmlReport(tp);
+    has(page, 'Memory per device against span');
+    has(page, 'usable memory per device');
+    has(page, 'Head: per device, 8 devices (tensor-parallel 8 × pipeline-parallel 1): weights 16.1 GiB, cache 10 GiB at 4,095 tokens × 64 sequences');
+    has(page, 'after the 10 % reserve kept for activations, workspace and fragmentation');
+  }, 30_000);
 });

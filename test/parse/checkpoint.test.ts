@@ -236,7 +236,8 @@ describe('readModel(checkpoint) defaults', () => {
       declaredSpan: 2048, trainedSpan: null, slidingWindow: null, windowLayers: null,
       dtypes: { weights: null, cache: null, positions: null },
       embeddingInitStd: null, embeddingMultiplier: null,
-      serving: { span: null, sequences: null, deviceGiB: null, reserve: null, outputTokens: null, promptTokens: null },
+      serving: { span: null, sequences: null, deviceGiB: null, reserve: null, outputTokens: null, promptTokens: null, tensorParallel: null, pipelineParallel: null, activationReserveGiB: null },
+      quantization: null,
     });
   });
 

@@ -87,7 +87,11 @@ describe('readModel(own dialect)', () => {
       declaredSpan: 65536, trainedSpan: 8192, slidingWindow: 4096, windowLayers: 16,
       dtypes: { weights: 'bf16', cache: 'fp8', positions: 'fp32' },
       embeddingInitStd: 0.02, embeddingMultiplier: 1,
-      serving: { span: 32768, sequences: 8, deviceGiB: 80, reserve: 0.1, outputTokens: 2048, promptTokens: 512 },
+      serving: {
+        span: 32768, sequences: 8, deviceGiB: 80, reserve: 0.1, outputTokens: 2048, promptTokens: 512,
+        tensorParallel: 2, pipelineParallel: 1, activationReserveGiB: 2,
+      },
+      quantization: null,
     });
   });
 
@@ -106,6 +110,8 @@ describe('readModel(own dialect)', () => {
       'dtypes.cache': ['model.dtypes.cache', 'cache: fp8'],
       'serving.span': ['serving.span', 'span: 32768'],
       'serving.deviceGiB': ['serving.device-memory-gib', 'device-memory-gib:'],
+      'serving.tensorParallel': ['serving.tensor-parallel', 'tensor-parallel: 2'],
+      'serving.activationReserveGiB': ['serving.activation-reserve-gib', 'activation-reserve-gib:'],
     };
     for (const [field, [key, needle]] of Object.entries(expected)) {
       expect(locations[field], field).toEqual({ key, line: lineOf(text, needle) });
@@ -125,7 +131,7 @@ describe('readModel(own dialect)', () => {
     expect(findings).toEqual([]);
     expect([spec.kvHeads, spec.headDim, spec.ffn, spec.gated, spec.tied, spec.bias]).toEqual([16, 2048 / 16, 4 * 2048, false, true, false]);
     expect(spec.position).toEqual({ kind: 'rotary', base: 10000, fraction: 1, scaling: null });
-    expect(spec.serving).toEqual({ span: null, sequences: null, deviceGiB: null, reserve: null, outputTokens: null, promptTokens: null });
+    expect(spec.serving).toEqual({ span: null, sequences: null, deviceGiB: null, reserve: null, outputTokens: null, promptTokens: null, tensorParallel: null, pipelineParallel: null, activationReserveGiB: null });
     expect(spec.dtypes).toEqual({ weights: null, cache: null, positions: null });
     expect(locations.declaredSpan).toEqual({ key: 'model.declared-span', line: lineOf(text, '"declared-span"') });
   });

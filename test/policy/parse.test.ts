@@ -109,7 +109,7 @@ describe('parsePolicy(text, path)', () => {
     ['unknown rule id', 'rules:\n  span-past-reac: warn\n',
       `${FILE}:2: rules.span-past-reac: unknown rule id "span-past-reac": expected a rule id of context-reach; did you mean "span-past-reach"?`],
     ['unknown serving key', 'serving:\n  device-memory-gb: 80\n',
-      `${FILE}:2: serving.device-memory-gb: unknown key "device-memory-gb": expected one of span, sequences, device-memory-gib, reserve, weights, cache, positions, output-tokens, prompt-tokens, trained-span; did you mean "device-memory-gib"?`],
+      `${FILE}:2: serving.device-memory-gb: unknown key "device-memory-gb": expected one of span, sequences, device-memory-gib, reserve, activation-reserve-gib, tensor-parallel, pipeline-parallel, weights, weight-group-size, cache, positions, output-tokens, prompt-tokens, trained-span; did you mean "device-memory-gib"?`],
     ['unknown top-level key', 'limit:\n  reach: {min: 1}\n',
       `${FILE}:1: limit: unknown key "limit": expected one of files, exclude, serving, limits, rules, overrides, standing, waiver-label; did you mean "limits"?`],
     ['string for a span', 'serving:\n  span: lots\n', `${FILE}:2: serving.span: is "lots"; expected a whole number`],

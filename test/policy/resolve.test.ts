@@ -32,6 +32,32 @@ waiver-label: reach-waiver
 `, FILE);
 
 describe('resolvePolicy(policy, filePath)', () => {
+  test('gives tensor- and pipeline-parallel degrees, an activation reserve and a quantized weight format, overridden per glob, with their lines', () => {
+    const policy = parsePolicy(`serving:
+  device-memory-gib: 80
+  activation-reserve-gib: 2
+  tensor-parallel: 2
+  weights: int4
+  weight-group-size: 128
+limits:
+  memoryBytesPerDevice: {max: 70000000000}
+overrides:
+  - files: ["models/big/**"]
+    serving: {tensor-parallel: 8, pipeline-parallel: 2}
+`, FILE);
+    const small = resolvePolicy(policy, 'models/small/config.json');
+    expect(small.serving).toEqual({ deviceGiB: 80, activationReserveGiB: 2, tensorParallel: 2, weights: 'int4', weightGroupSize: 128 });
+    expect(small.limits.memoryBytesPerDevice).toEqual({ max: 7e10, severity: 'block' });
+    const big = resolvePolicy(policy, 'models/big/config.json');
+    expect(big.serving).toMatchObject({ tensorParallel: 8, pipelineParallel: 2, activationReserveGiB: 2 });
+    expect(big.origins['serving.tensorParallel']).toEqual({ key: 'overrides[0].serving.tensor-parallel', line: 11 });
+    expect(small.origins['serving.weightGroupSize']).toEqual({ key: 'serving.weight-group-size', line: 6 });
+  });
+
+  test('refuses a tensor-parallel degree of 0, naming the key and line', () => {
+    expect(() => parsePolicy('serving:\n  tensor-parallel: 0\n', FILE)).toThrow('.github/context-reach.yml:2: serving.tensor-parallel: is 0; expected a number at least 1');
+  });
+
   test('a file no override matches gets the top level', () => {
     const resolved = resolvePolicy(POLICY, 'models/prod/config.json');
     expect({ ...resolved.limits }).toEqual({

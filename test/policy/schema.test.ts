@@ -46,11 +46,12 @@ describe('schema/policy.schema.json', () => {
     }
   });
 
-  test('serving keys are the ten of the policy file, each mapped to a ServingPatch field', () => {
+  test('serving keys are the fourteen of the policy file, each mapped to a ServingPatch field', () => {
     const keys = Object.keys(definitions.serving.properties);
-    expect(keys).toEqual(['span', 'sequences', 'device-memory-gib', 'reserve', 'weights', 'cache', 'positions', 'output-tokens', 'prompt-tokens', 'trained-span']);
+    expect(keys).toEqual(['span', 'sequences', 'device-memory-gib', 'reserve', 'activation-reserve-gib', 'tensor-parallel',
+      'pipeline-parallel', 'weights', 'weight-group-size', 'cache', 'positions', 'output-tokens', 'prompt-tokens', 'trained-span']);
     const patch = servingPatchOf(Object.fromEntries(keys.map((key) => [key, 1])) as never);
-    expect(Object.keys(patch)).toHaveLength(10);
+    expect(Object.keys(patch)).toHaveLength(14);
     expect(definitions.serving.properties.weights.enum).toEqual([...STORAGE_DTYPES]);
     expect(definitions.serving.properties.cache.enum).toEqual([...STORAGE_DTYPES]);
     expect(definitions.serving.properties.positions.enum).toEqual([...FLOAT_FORMATS]);

@@ -24,6 +24,10 @@ const OWN_KEYS: Record<string, string[]> = {
   'dtypes.positions': ['model', 'dtypes', 'positions'],
   'serving.span': ['serving', 'span'],
   'serving.sequences': ['serving', 'sequences'],
+  'serving.tensorParallel': ['serving', 'tensor-parallel'],
+  'serving.pipelineParallel': ['serving', 'pipeline-parallel'],
+  'dtypes.weights': ['model', 'dtypes', 'weights'],
+  'quantization.groupSize': ['model', 'dtypes', 'weight-group-size'],
 };
 
 const CHECKPOINT_KEYS: Record<string, string[]> = {
@@ -34,7 +38,11 @@ const CHECKPOINT_KEYS: Record<string, string[]> = {
   kvHeads: ['num_key_value_heads'],
 };
 
-const FLAG_KEYS: Record<string, keyof ServingPatch> = { 'serving.span': 'span', 'serving.sequences': 'sequences', 'dtypes.cache': 'cache', 'dtypes.positions': 'positions' };
+const FLAG_KEYS: Record<string, keyof ServingPatch> = {
+  'serving.span': 'span', 'serving.sequences': 'sequences', 'dtypes.cache': 'cache', 'dtypes.positions': 'positions',
+  'serving.tensorParallel': 'tensorParallel', 'serving.pipelineParallel': 'pipelineParallel', 'dtypes.weights': 'weights',
+  'quantization.groupSize': 'weightGroupSize',
+};
 
 /** The file text with the change written in, and the flags for what a checkpoint config cannot state. */
 function edit(path: string, text: string, change: Change): { text: string; flags: ServingPatch } {

@@ -67,13 +67,22 @@ describe('proposeRemedy(ctx, finding) for memory-over-budget', () => {
     expect(changes[0]).toEqual({ 'dtypes.cache': 'int4' });
     expect(changes[1]).toEqual({ kvHeads: 1 });
     expect(Object.keys(changes[2]!)).toEqual(['serving.span']);
-    for (const alternative of r.remedyAlternatives) expect(alternative.metrics.memoryBytes).toBeLessThanOrEqual(24 * GIB * 0.9);
+    // Across devices (METRICS.md, serving across devices): tensor degree 2 keeps ceil(4/2) = 2 kv heads per device,
+    // 32 GiB of cache (no fit); 4 keeps 1, 16 GiB: fits. 3 pipeline stages hold ceil(16/3) = 6 layers, 24 GiB of
+    // cache (no fit); 4 stages hold 4 layers, 16 GiB: fits.
+    expect(changes[3]).toEqual({ 'serving.tensorParallel': 4 });
+    expect(changes[4]).toEqual({ 'serving.pipelineParallel': 4 });
+    expect(r.remedyAlternatives[3]!.cost).toBe('4 devices per replica (tensor-parallel 4 × pipeline-parallel 1), was 1');
+    expect(changes).toHaveLength(5);
+    for (const alternative of r.remedyAlternatives) {
+      expect(alternative.metrics.memoryBytesPerDevice ?? alternative.metrics.memoryBytes).toBeLessThanOrEqual(24 * GIB * 0.9);
+    }
   });
 
   it('finds none when the weights alone exceed the device, and says why for each kind', () => {
     const r = remedyFor(model(1), 'memory-over-budget');
     expect(r.remedy).toBeNull();
-    expect(r.remedyWhyNot).toMatch(/^No change found that passes: not even one sequence of 32,768 \(32k\) tokens clears it; even a int4 cache does not clear it; even one key\/value head does not clear it; no served span from 1 to 32,767 tokens clears it\.$/);
+    expect(r.remedyWhyNot).toMatch(/^No change found that passes: not even one sequence of 32,768 \(32k\) tokens clears it; even a int4 cache does not clear it; even one key\/value head does not clear it; no served span from 1 to 32,767 tokens clears it; even a tensor-parallel degree of 16 does not clear it; even 16 pipeline stages \(one per layer\) do not clear it; even int4 weights in groups of 128 do not clear it\.$/);
   });
 
   it('answers a fitSequences floor with a dtype, heads or span (holding fewer sequences does not change what fits)', () => {

@@ -12,7 +12,13 @@ import { baseFrequencies, rotaryHeadDim, rotaryWidth } from './frequencies.js';
 import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from './kv-cache.js';
 import { layerGroups, visibleSpan } from './layer-kinds.js';
 import type { LayerGroup } from './layer-kinds.js';
-import { fitSequences, memoryBytes, weightBytes } from './memory-fit.js';
+import { memoryBytes } from './memory-fit.js';
+import { usableDeviceBytes } from './memory-curve.js';
+import {
+  cachePerSequencePerDevice, cachePerTokenBytesPerDevice, deviceCount, fitSequencesPerDevice, kvHeadsPerDevice,
+  memoryBytesPerDevice, weightBytesPerDevice,
+} from './per-device.js';
+import { storedWeightBytes } from './quantized-weights.js';
 import { numberFormatMetrics } from './number-format.js';
 import { parameterCounts } from './parameter-count.js';
 import { positionShare } from './position-share.js';
@@ -81,8 +87,11 @@ export function computeMetrics(spec: ModelSpec): Metrics {
   const slopes = spec.position?.kind === 'alibi' ? alibiSlopes(spec.heads) : null;
 
   const counts = parameterCounts(spec);
-  const weights = weightBytes(spec, counts ? counts.params : null);
+  const weights = storedWeightBytes(spec);
   const cache = cacheBytesAtSpan(spec, span);
+  const deviceWeights = weightBytesPerDevice(spec, weights);
+  const perSequence = cachePerSequencePerDevice(spec, span);
+
   return {
     declaredSpan: declared,
     trainedSpan: trained,
@@ -112,9 +121,14 @@ export function computeMetrics(spec: ModelSpec): Metrics {
     cachePerTokenBytes: cachePerTokenBytes(spec),
     cacheBytesAtSpan: cache,
     memoryBytes: memoryBytes(weights, cache),
-    fitSequences: fitSequences(spec, weights, cache, servedSequences(spec)),
+    fitSequences: fitSequencesPerDevice(usableDeviceBytes(spec), deviceWeights, perSequence),
     flopsPerToken: flopsPerToken(spec, counts ? counts.nonEmbeddingParams : null, span),
     tokenBudget: tokenBudget(spec.serving, span),
+    devices: deviceCount(spec),
+    kvHeadsPerDevice: kvHeadsPerDevice(spec),
+    weightBytesPerDevice: deviceWeights,
+    cachePerTokenBytesPerDevice: cachePerTokenBytesPerDevice(spec),
+    memoryBytesPerDevice: memoryBytesPerDevice(deviceWeights, perSequence, servedSequences(spec)),
     layerKinds: layerKindMetrics(spec, span, trained, { plan, range, similarity, precision }),
   };
 }

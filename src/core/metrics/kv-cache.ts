@@ -73,3 +73,34 @@ export function cacheBytesAtSpan(spec: ModelSpec, span: number | null): number |
 function finite(x: number | null): number | null {
   return x !== null && Number.isFinite(x) ? x : null;
 }
+
+/** Decoder layers alike in their cache: how many, bytes per token each holds, and their window (null: full attention). */
+export interface CacheLayerGroup {
+  layers: number;
+  tokenBytes: number;
+  window: number | null;
+}
+
+/**
+ * bytes: the decoder layers' cache per token as one of `t` tensor ranks holds it, grouped by
+ * layer kind (`layerGroups`): each layer `2·ceil(kvHeads/t)·headDim·bytes` (a rank with
+ * `t > kvHeads` keeps a copy of one head: common practice); latent attention keeps its whole
+ * `(d_c + d_h^R)` latent on every rank (METRICS.md, "Serving across devices"). With `t = 1` the
+ * groups sum to `cachePerTokenBytes`. An encoder-only model holds none: no groups. Null when a
+ * size is degenerate.
+ */
+export function cacheLayerGroups(spec: ModelSpec, t: number): CacheLayerGroup[] | null {
+  const groups = layerGroups(spec);
+  const degree = positiveCount(t);
+  if (groups === null || degree === null) return null;
+  if (spec.encoderOnly === true) return [];
+  let perLayer: number | null;
+  if (spec.latent) perLayer = layerTokenBytes(spec);
+  else {
+    const kv = positiveCount(spec.kvHeads);
+    perLayer = kv === null ? null : layerTokenBytes({ ...spec, kvHeads: Math.ceil(kv / degree) });
+  }
+  if (perLayer === null) return null;
+  const tokenBytes = perLayer;
+  return groups.map((g) => ({ layers: g.layers, tokenBytes, window: g.window }));
+}

@@ -6,7 +6,13 @@ import type { ModelSpec } from '../model.js';
 import { positiveFinite } from './sizes.js';
 import { bytesPerElement, weightDType } from './storage-bytes.js';
 
-/** Fraction of device memory kept free when the serving block states none (default: `0.1`). */
+/**
+ * Fraction of device memory kept free when the serving block states none (default: `0.1`): what a
+ * serving runtime holds beside weights and cache (activations of the batch in flight, workspace and
+ * communication buffers, allocator fragmentation). Common practice: runtimes commonly hand about
+ * nine tenths of a device to weights and cache; a rule of thumb, not a measurement (README,
+ * "Serve a large model across devices").
+ */
 export const DEFAULT_RESERVE = 0.1;
 
 /** bytes: `weightBytes = params · bytes(weight dtype)` (weight dtype default: `bf16`). */

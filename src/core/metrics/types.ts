@@ -80,6 +80,12 @@ export interface Metrics {
   cacheBytesAtSpan: number | null;
   memoryBytes: number | null;
   fitSequences: number | null;
+  // Serving across devices
+  devices: number | null;
+  kvHeadsPerDevice: number | null;
+  weightBytesPerDevice: number | null;
+  cachePerTokenBytesPerDevice: number | null;
+  memoryBytesPerDevice: number | null;
   flopsPerToken: number | null;
   tokenBudget: number | null;
   /** Per layer kind, when the decoder layers are not all alike (default: `null`, one kind: the top-level values). */
@@ -94,6 +100,7 @@ export const SCALAR_METRICS = [
   'receptiveField', 'positionShare',
   'params', 'activeParams', 'nonEmbeddingParams', 'weightBytes', 'cachePerTokenBytes', 'cacheBytesAtSpan',
   'memoryBytes', 'fitSequences', 'flopsPerToken', 'tokenBudget',
+  'devices', 'kvHeadsPerDevice', 'weightBytesPerDevice', 'cachePerTokenBytesPerDevice', 'memoryBytesPerDevice',
 ] as const satisfies readonly (keyof Metrics)[];
 
 export type ScalarMetric = (typeof SCALAR_METRICS)[number];

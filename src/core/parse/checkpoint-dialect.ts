@@ -35,6 +35,7 @@
 import type { StorageDType } from '../model.js';
 import { orderedRamp, type FieldReader } from './fields.js';
 import { quoteText } from './quote.js';
+import { readQuantization } from './quantization.js';
 import type { PathSegment } from './quote.js';
 import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
 import {
@@ -196,6 +197,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
       expected: 'a standard deviation above 0',
     }) ?? null,
     embeddingMultiplier: readMultiplier(r, modelType, hidden),
+    quantization: readQuantization(r, hidden),
   };
 }
 

@@ -6,7 +6,8 @@
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
 import modelSchema from '../../../schema/model.schema.json' with { type: 'json' };
-import type { Experts, FloatFormat, LayerAttention, PositionKind, ScalingKind, StorageDType } from '../model.js';
+import type { Experts, FloatFormat, LayerAttention, PositionKind, ScalingKind, StorageDType, WeightQuantization } from '../model.js';
+import { dtypeQuantization } from '../metrics/quantized-weights.js';
 import { FLOAT_FORMATS, LAYER_ATTENTIONS, POSITION_KINDS, SCALING_KINDS, STORAGE_DTYPES } from '../model.js';
 import { orderedRamp, type FieldReader, type NumberCheck } from './fields.js';
 import { parsePointer } from './json-pointer.js';
@@ -47,7 +48,7 @@ const RULE_CHECKED = new Set([
   '/model/latent-attention/nope-head-dim', '/model/latent-attention/value-head-dim', '/model/chunked-attention/size',
   '/model/norms-per-layer',
   '/model/position/scaling/original-span', '/serving/span', '/serving/sequences', '/serving/device-memory-gib',
-  '/serving/output-tokens', '/serving/prompt-tokens',
+  '/serving/output-tokens', '/serving/prompt-tokens', '/serving/tensor-parallel', '/serving/pipeline-parallel',
 ]);
 const RANGE_KEYWORDS = new Set(['minimum', 'maximum', 'exclusiveMinimum', 'exclusiveMaximum', 'multipleOf']);
 
@@ -123,7 +124,14 @@ export function readOwnDialect(r: FieldReader): SpecDraft {
       }) ?? null,
       outputTokens: r.count('serving.outputTokens', ['serving', 'output-tokens'], 'tokens') ?? null,
       promptTokens: r.count('serving.promptTokens', ['serving', 'prompt-tokens'], 'tokens') ?? null,
+      tensorParallel: r.count('serving.tensorParallel', ['serving', 'tensor-parallel'], 'devices each layer is split over') ?? null,
+      pipelineParallel: r.count('serving.pipelineParallel', ['serving', 'pipeline-parallel'], 'pipeline stages') ?? null,
+      activationReserveGiB: r.real('serving.activationReserveGiB', ['serving', 'activation-reserve-gib'], 'GiB', {
+        test: (n) => n >= 0,
+        expected: 'GiB kept per device, at least 0',
+      }) ?? null,
     },
+    quantization: readWeightGroups(r, m('dtypes')),
   };
   return draft;
 }
@@ -198,6 +206,28 @@ function readShapes(r: FieldReader, m: (...p: string[]) => string[], need: Need)
   const localBase = r.real('localBase', m('position', 'local-base'), 'rotary base', above(1, 'a rotary base'));
   if (localBase !== undefined) out.localBase = localBase;
   return out;
+}
+
+/**
+ * `dtypes.weight-group-size` (and `weight-zero-point`): with weights int4, int8 or fp8, the
+ * layers' matrices are stored quantized with a scale per group (METRICS.md, "Quantized weights").
+ */
+function readWeightGroups(r: FieldReader, at: string[]): WeightQuantization | null {
+  const groupPath = [...at, 'weight-group-size'];
+  const zeroPath = [...at, 'weight-zero-point'];
+  const zeroPoint = r.flag(null, zeroPath);
+  if (!r.has(groupPath)) {
+    if (zeroPoint !== undefined) r.report('key-ignored', zeroPath, `${r.key(zeroPath)} has no effect without ${r.key(groupPath)}; state the weights sharing one scale, e.g. 128`);
+    return null;
+  }
+  const group = r.count('quantization', groupPath, 'weights per scale');
+  if (group === undefined || Number.isNaN(group) || !(Number.isSafeInteger(group) && group >= 1)) return null;
+  const weights = r.get([...at, 'weights']);
+  const q = typeof weights === 'string' && Object.hasOwn(STORAGE, weights) ? dtypeQuantization(STORAGE[weights]!, group, zeroPoint === true) : null;
+  if (q === null) {
+    r.report('key-ignored', groupPath, `${r.key(groupPath)} has no effect: ${r.key([...at, 'weights'])} is ${r.has([...at, 'weights']) ? r.quote([...at, 'weights']) : 'not stated (bf16)'}, not a quantized format; set it to int4, int8 or fp8, or remove the group size`);
+  }
+  return q;
 }
 
 function readPosition(r: FieldReader, at: string[]): PositionDraft {

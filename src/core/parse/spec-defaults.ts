@@ -3,7 +3,10 @@
  * Values a reader found missing or unusable arrive as NaN (the reader has reported them);
  * values derived from them stay NaN, so one bad key gives one finding and metrics return null.
  */
-import type { EncoderStack, Experts, FloatFormat, LatentAttention, LayerAttention, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType } from '../model.js';
+import type {
+  EncoderStack, Experts, FloatFormat, LatentAttention, LayerAttention, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType,
+  WeightQuantization,
+} from '../model.js';
 
 /** A scaling block as stated: missing values take the defaults below. */
 export interface ScalingDraft {
@@ -53,6 +56,7 @@ export interface SpecDraft {
   embeddingInitStd?: number | null;
   embeddingMultiplier?: number | null;
   serving?: Partial<Serving>;
+  quantization?: WeightQuantization | null;
 }
 
 /** Rotary base (default: `10000`; Su et al. 2021, RoFormer, eq. 15 with Vaswani et al.'s 10000). */
@@ -118,7 +122,11 @@ export function completeSpec(draft: SpecDraft): ModelSpec {
       reserve: draft.serving?.reserve ?? null,
       outputTokens: draft.serving?.outputTokens ?? null,
       promptTokens: draft.serving?.promptTokens ?? null,
+      tensorParallel: draft.serving?.tensorParallel ?? null,
+      pipelineParallel: draft.serving?.pipelineParallel ?? null,
+      activationReserveGiB: draft.serving?.activationReserveGiB ?? null,
     },
+    quantization: draft.quantization ?? null,
   };
 }
 

@@ -225,6 +225,10 @@ const SERVING_FIELDS: ReadonlyArray<[keyof PolicyServingBlock, keyof ServingPatc
   ['cache', 'cache'],
   ['positions', 'positions'],
   ['trained-span', 'trainedSpan'],
+  ['tensor-parallel', 'tensorParallel'],
+  ['pipeline-parallel', 'pipelineParallel'],
+  ['activation-reserve-gib', 'activationReserveGiB'],
+  ['weight-group-size', 'weightGroupSize'],
 ];
 
 /** The policy's `serving` block in spec terms (camelCase `ServingPatch`), keys it leaves out left out. */

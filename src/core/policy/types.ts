@@ -21,6 +21,10 @@ export interface PolicyServingBlock {
   'output-tokens'?: number;
   'prompt-tokens'?: number;
   'trained-span'?: number;
+  'tensor-parallel'?: number;
+  'pipeline-parallel'?: number;
+  'activation-reserve-gib'?: number;
+  'weight-group-size'?: number;
 }
 
 /**

@@ -4,6 +4,8 @@
  */
 import type { FloatFormat, ModelSpec, Scaling, ScalingKind, StorageDType } from '../model.js';
 import { FLOAT_FORMATS, SCALING_KINDS, STORAGE_DTYPES } from '../model.js';
+import { dtypeQuantization } from '../metrics/quantized-weights.js';
+import { weightDType } from '../metrics/storage-bytes.js';
 import { DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA } from '../parse/spec-defaults.js';
 import type { Change, ChangeValue } from './types.js';
 
@@ -11,6 +13,7 @@ import type { Change, ChangeValue } from './types.js';
 export const CHANGE_KEYS = [
   'position.base', 'position.scaling.kind', 'position.scaling.factor', 'position.scaling.originalSpan',
   'kvHeads', 'dtypes.cache', 'dtypes.positions', 'serving.span', 'serving.sequences',
+  'serving.tensorParallel', 'serving.pipelineParallel', 'dtypes.weights', 'quantization.groupSize',
 ] as const;
 
 export type ChangeKey = (typeof CHANGE_KEYS)[number];
@@ -73,7 +76,17 @@ export function applyChange(spec: ModelSpec, change: Change): ModelSpec {
       case 'dtypes.positions': next.dtypes.positions = nameOf<FloatFormat>(key, value, FLOAT_FORMATS); break;
       case 'serving.span': next.serving.span = numberOf(key, value); break;
       case 'serving.sequences': next.serving.sequences = numberOf(key, value); break;
+      case 'serving.tensorParallel': next.serving.tensorParallel = numberOf(key, value); break;
+      case 'serving.pipelineParallel': next.serving.pipelineParallel = numberOf(key, value); break;
+      // A new weight format replaces the quantization the description had.
+      case 'dtypes.weights': next.dtypes.weights = nameOf<StorageDType>(key, value, STORAGE_DTYPES); next.quantization = null; break;
+      case 'quantization.groupSize': numberOf(key, value); break;
     }
+  }
+  if (Object.hasOwn(change, 'quantization.groupSize')) {
+    const q = dtypeQuantization(weightDType(next), numberOf('quantization.groupSize', change['quantization.groupSize']!));
+    if (q === null) throw new ChangeError(`change quantization.groupSize: the weight format ${weightDType(next)} is not a quantized format (int4, int8, fp8)`);
+    next.quantization = q;
   }
   next.position = position;
   return next;
@@ -93,6 +106,10 @@ export function currentValue(spec: ModelSpec, key: string): ChangeValue | null {
     case 'dtypes.positions': return spec.dtypes.positions;
     case 'serving.span': return spec.serving.span;
     case 'serving.sequences': return spec.serving.sequences;
+    case 'serving.tensorParallel': return spec.serving.tensorParallel ?? null;
+    case 'serving.pipelineParallel': return spec.serving.pipelineParallel ?? null;
+    case 'dtypes.weights': return spec.quantization ? `${spec.quantization.method} (${spec.quantization.bits}-bit)` : spec.dtypes.weights;
+    case 'quantization.groupSize': return spec.quantization?.groupSize ?? null;
     default: return null;
   }
 }

@@ -5,8 +5,13 @@
  */
 import type { ModelSpec } from '../model.js';
 import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from '../metrics/kv-cache.js';
-import { fitSequences, memoryBytes, weightBytes } from '../metrics/memory-fit.js';
-import { parameterCounts } from '../metrics/parameter-count.js';
+import { memoryBytes } from '../metrics/memory-fit.js';
+import { usableDeviceBytes } from '../metrics/memory-curve.js';
+import {
+  cachePerSequencePerDevice, cachePerTokenBytesPerDevice, deviceCount, fitSequencesPerDevice, kvHeadsPerDevice,
+  memoryBytesPerDevice, weightBytesPerDevice,
+} from '../metrics/per-device.js';
+import { storedWeightBytes } from '../metrics/quantized-weights.js';
 import { frequencyPlan } from '../metrics/compute.js';
 import { collidingPositions } from '../metrics/position-rounding.js';
 import { extensionRatio, headroom, reach, scalingCover } from '../metrics/reach.js';
@@ -20,18 +25,30 @@ export interface BudgetMetrics {
   cacheBytesAtSpan: number | null;
   memoryBytes: number | null;
   fitSequences: number | null;
+  devices: number | null;
+  kvHeadsPerDevice: number | null;
+  weightBytesPerDevice: number | null;
+  cachePerTokenBytesPerDevice: number | null;
+  memoryBytesPerDevice: number | null;
 }
 
 export function budgetMetrics(spec: ModelSpec): BudgetMetrics {
-  const counts = parameterCounts(spec);
-  const weights = weightBytes(spec, counts ? counts.params : null);
-  const cache = cacheBytesAtSpan(spec, evaluationSpan(spec));
+  const span = evaluationSpan(spec);
+  const weights = storedWeightBytes(spec);
+  const cache = cacheBytesAtSpan(spec, span);
+  const deviceWeights = weightBytesPerDevice(spec, weights);
+  const perSequence = cachePerSequencePerDevice(spec, span);
   return {
     weightBytes: weights,
     cachePerTokenBytes: cachePerTokenBytes(spec),
     cacheBytesAtSpan: cache,
     memoryBytes: memoryBytes(weights, cache),
-    fitSequences: fitSequences(spec, weights, cache, servedSequences(spec)),
+    fitSequences: fitSequencesPerDevice(usableDeviceBytes(spec), deviceWeights, perSequence),
+    devices: deviceCount(spec),
+    kvHeadsPerDevice: kvHeadsPerDevice(spec),
+    weightBytesPerDevice: deviceWeights,
+    cachePerTokenBytesPerDevice: cachePerTokenBytesPerDevice(spec),
+    memoryBytesPerDevice: memoryBytesPerDevice(deviceWeights, perSequence, servedSequences(spec)),
   };
 }
 
@@ -74,5 +91,8 @@ export function lightMetric(spec: ModelSpec, metric: string): number | null | un
   return undefined;
 }
 
-const BUDGET_NAMES = { weightBytes: 1, cachePerTokenBytes: 1, cacheBytesAtSpan: 1, memoryBytes: 1, fitSequences: 1 };
+const BUDGET_NAMES = {
+  weightBytes: 1, cachePerTokenBytes: 1, cacheBytesAtSpan: 1, memoryBytes: 1, fitSequences: 1,
+  devices: 1, kvHeadsPerDevice: 1, weightBytesPerDevice: 1, cachePerTokenBytesPerDevice: 1, memoryBytesPerDevice: 1,
+};
 const RANGE_NAMES = { declaredSpan: 1, trainedSpan: 1, evaluationSpan: 1, reach: 1, scalingCover: 1, headroom: 1, extensionRatio: 1 };

@@ -20,8 +20,10 @@ import { baseFrequencies } from '../metrics/frequencies.js';
 import { similarityScan } from '../metrics/similarity-scan.js';
 import { positiveCount } from '../metrics/sizes.js';
 import { evaluationSpan, trainedSpan } from '../metrics/spans.js';
-import { bytesPerElement, cacheDType } from '../metrics/storage-bytes.js';
-import type { Finding, FloatFormat, ModelSpec } from '../model.js';
+import { bytesPerElement, cacheDType, weightDType } from '../metrics/storage-bytes.js';
+import { deviceCount, parallelDegrees, shardingDegrees, shards } from '../metrics/per-device.js';
+import { DEFAULT_GROUP_SIZE } from '../metrics/quantized-weights.js';
+import type { Finding, FloatFormat, ModelSpec, StorageDType } from '../model.js';
 import { FLOAT_FORMATS, STORAGE_DTYPES } from '../model.js';
 import { isRuleId, RULES } from '../rules/catalog.js';
 import { formatInteger, formatNumber, formatTokens } from '../units.js';
@@ -90,8 +92,14 @@ function resolver(ctx: RemedyContext, target: Target): Resolves | null {
     case 'memory-over-budget':
       return (spec) => {
         const usable = usableDeviceBytes(spec);
-        const memory = budgetMetrics(spec).memoryBytes;
+        const memory = budgetMetrics(spec).memoryBytesPerDevice;
         return usable === null || (memory !== null && memory <= usable);
+      };
+    case 'layout-unshardable':
+      return (spec) => {
+        const d = parallelDegrees(spec);
+        return d !== null && shards(spec.heads, spec.kvHeads, d.t) && d.p <= spec.layers
+          && (!spec.encoder || shards(spec.encoder.heads, spec.encoder.kvHeads, d.t));
       };
     case 'positions-collide':
       return (spec) => {
@@ -116,19 +124,19 @@ function describeBlockers(proof: Proof): string {
   return proof.blockers.map(blockerText).join(', ');
 }
 
-function remedyOf(change: Change, proof: Proof, shown: string[], target: Target): Remedy {
+function remedyOf(change: Change, proof: Proof, shown: string[], target: Target, cost?: (change: Change) => string): Remedy {
   const metrics: Record<string, number | null> = {};
   for (const name of [...(target.metric ? [target.metric] : []), ...shown]) {
     if (isMetricPath(name) && !(name in metrics)) metrics[name] = metricValue(proof.metrics, name);
   }
-  return { change, metrics, raises: proof.raises };
+  return { change, metrics, raises: proof.raises, ...(cost ? { cost: cost(change) } : {}) };
 }
 
 /**
  * Proves candidate changes in order (at most `MAX_PROOFS_PER_KIND`), returning the first that
  * passes; `what` names the kind in reasons.
  */
-function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], shown: string[], what: string): KindOutcome {
+function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], shown: string[], what: string, costOf?: (change: Change) => string): KindOutcome {
   let last: Proof | null = null;
   let proofs = 0;
   for (const change of candidates.slice(0, MAX_PROOFS_PER_KIND)) {
@@ -140,7 +148,7 @@ function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], sh
     ctx.work.left -= cost;
     proofs += 1;
     const proof = prove(ctx, target, change);
-    if (proof.passes) return { remedy: remedyOf(change, proof, shown, target), whyNot: null };
+    if (proof.passes) return { remedy: remedyOf(change, proof, shown, target, costOf), whyNot: null };
     last = proof;
   }
   if (last === null) return none(`no ${what} to try`);
@@ -316,6 +324,94 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
     `a rotary base of ${formatNumber(search.base, 6)} (a retraining-level change${capped})`);
 }
 
+/** Metrics a change of the serving layout or the weight format is shown with. */
+const DEVICE_SHOWN = ['devices', 'weightBytesPerDevice', 'memoryBytesPerDevice', 'fitSequences'];
+
+/** What a layout costs in devices: `8 devices per replica (tensor 8 × pipeline 1), was 1`. */
+function deviceCost(before: ModelSpec): (change: Change) => string {
+  const was = deviceCount(before);
+  return (change) => {
+    const after = applyChange(before, change);
+    const d = parallelDegrees(after);
+    return d === null ? 'more devices per replica'
+      : `${formatInteger(d.t * d.p)} devices per replica (tensor-parallel ${d.t} × pipeline-parallel ${d.p}), was ${formatInteger(was)}`;
+  };
+}
+
+/**
+ * The smallest tensor-parallel degree above the current one, among the degrees that shard the
+ * heads (`shardingDegrees`), that clears the finding; costs devices.
+ */
+function tensorKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const d = parallelDegrees(spec);
+  const heads = positiveCount(spec.heads);
+  const kv = positiveCount(spec.kvHeads);
+  if (d === null || heads === null || kv === null) return none('the parallel degrees or head counts are not whole numbers');
+  const higher = shardingDegrees(heads, kv, 64).filter((t) => t > d.t);
+  if (higher.length === 0) return none(`no tensor-parallel degree above ${d.t} shards ${heads} heads and ${kv} key/value heads`);
+  const candidates = higher.filter((t) => resolves(applyChange(spec, { 'serving.tensorParallel': t })))
+    .map((t): Change => ({ 'serving.tensorParallel': t }));
+  if (candidates.length === 0) return none(`even a tensor-parallel degree of ${higher[higher.length - 1]} does not clear it`);
+  return proveFirst(ctx, target, candidates, ['kvHeadsPerDevice', ...DEVICE_SHOWN],
+    `a tensor-parallel degree of ${candidates[0]!['serving.tensorParallel']}`, deviceCost(spec));
+}
+
+/** The fewest pipeline stages above the current count (at most the layers) that clear the finding; costs devices. */
+function pipelineKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const d = parallelDegrees(spec);
+  const layers = positiveCount(spec.layers);
+  if (d === null || layers === null) return none('the parallel degrees or the layers are not whole numbers');
+  if (d.p >= layers) return none(`the pipeline already has one stage per layer (${layers})`);
+  const at = (p: number) => resolves(applyChange(spec, { 'serving.pipelineParallel': p }));
+  if (!at(layers)) return none(`even ${layers} pipeline stages (one per layer) do not clear it`);
+  // Memory per device only falls as stages are added: the last failing count, plus one.
+  const failing = largestPassing(d.p, layers, (p) => !at(p));
+  const stages = failing.value === null ? d.p : failing.value + 1;
+  return proveFirst(ctx, target, [{ 'serving.pipelineParallel': stages }], ['cachePerTokenBytesPerDevice', ...DEVICE_SHOWN],
+    `${stages} pipeline stages`, deviceCost(spec));
+}
+
+/** Quantized formats a remedy proposes, widest first, with the group size of common practice. */
+const QUANTIZED_CHOICES: readonly { dtype: StorageDType; bits: number }[] = [{ dtype: 'int8', bits: 8 }, { dtype: 'int4', bits: 4 }];
+
+/** The widest quantized weight format (int8, then int4, groups of 128) that clears the finding; cautions on accuracy. */
+function quantizeKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const now = spec.quantization?.bits ?? (bytesPerElement(weightDType(spec)) ?? 2) * 8;
+  const narrower = QUANTIZED_CHOICES.filter((c) => c.bits < now);
+  if (narrower.length === 0) return none(`the weights are already stored at ${now} bits`);
+  const candidates = narrower
+    .map((c): Change => ({ 'dtypes.weights': c.dtype, 'quantization.groupSize': DEFAULT_GROUP_SIZE }))
+    .filter((change) => resolves(applyChange(spec, change)));
+  if (candidates.length === 0) return none('even int4 weights in groups of 128 do not clear it');
+  const cost = (change: Change) => `accuracy risk: ${String(change['dtypes.weights'])} weights change the model's outputs; evaluate the quantized checkpoint before serving it`;
+  return proveFirst(ctx, target, candidates, ['weightBytes', ...DEVICE_SHOWN],
+    `${String(candidates[0]!['dtypes.weights'])} weights in groups of ${DEFAULT_GROUP_SIZE}`, cost);
+}
+
+/** The sharding degree nearest the stated one (above first) and a pipeline within the layers, for `layout-unshardable`. */
+function layoutKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
+  const spec = ctx.head.spec;
+  const d = parallelDegrees(spec);
+  const heads = positiveCount(spec.heads);
+  const kv = positiveCount(spec.kvHeads);
+  const layers = positiveCount(spec.layers);
+  if (d === null || heads === null || kv === null || layers === null) return none('the parallel degrees or head counts are not whole numbers');
+  const degrees = shardingDegrees(heads, kv, 64);
+  const ordered = [...degrees.filter((t) => t >= d.t), ...degrees.filter((t) => t < d.t).reverse()];
+  const candidates = ordered.map((t): Change => {
+    const change: Change = {};
+    if (t !== d.t) change['serving.tensorParallel'] = t;
+    if (d.p > layers) change['serving.pipelineParallel'] = layers;
+    return change;
+  }).filter((change) => Object.keys(change).length > 0 && resolves(applyChange(spec, change)));
+  if (candidates.length === 0) return none('no tensor-parallel degree shards these heads');
+  return proveFirst(ctx, target, candidates, ['devices', 'kvHeadsPerDevice', 'memoryBytesPerDevice', 'fitSequences'],
+    'a degree that shards the heads', deviceCost(spec));
+}
+
 // ---- which kinds for which finding -----------------------------------------------------------
 
 type Kind = (ctx: RemedyContext, target: Target, resolves: Resolves) => KindOutcome;
@@ -324,7 +420,7 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
   const spec = ctx.head.spec;
   const range = rangeMetrics(spec);
   const T = range.evaluationSpan;
-  const memory = [sequencesKind, cacheDtypeKind, kvHeadsKind, spanKind];
+  const memory = [sequencesKind, cacheDtypeKind, kvHeadsKind, spanKind, tensorKind, pipelineKind, quantizeKind];
   switch (target.rule) {
     case 'span-past-reach':
       return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T), spanKind];
@@ -337,6 +433,8 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
       return memory;
     case 'positions-collide':
       return [formatKind, spanKind];
+    case 'layout-unshardable':
+      return [layoutKind];
     case 'limit-crossed': {
       const metric = target.metric ?? '';
       const limit = target.limit;
@@ -346,7 +444,10 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
       }
       if (metric === 'discriminationSpan' || metric === 'separationFloor') return [(c, t) => baseKind(c, t)];
       if (metric === 'memoryBytes' || metric === 'cacheBytesAtSpan') return memory;
-      if (metric === 'fitSequences') return [cacheDtypeKind, kvHeadsKind, spanKind];
+      if (metric === 'memoryBytesPerDevice') return memory;
+      if (metric === 'fitSequences') return [cacheDtypeKind, kvHeadsKind, spanKind, tensorKind, pipelineKind, quantizeKind];
+      if (metric === 'weightBytesPerDevice') return [tensorKind, pipelineKind, quantizeKind];
+      if (metric === 'weightBytes') return [quantizeKind];
       if (metric === 'cachePerTokenBytes') return [cacheDtypeKind, kvHeadsKind];
       if (metric === 'headroom' && limit.min !== undefined && T !== null) {
         return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T + Math.max(0, Math.ceil(limit.min as number))), spanKind];

@@ -11,7 +11,8 @@ export type ChangeValue = number | string;
  * Proposed values keyed by the model description's field paths, as the location map spells them:
  * `position.base`, `position.scaling.kind`, `position.scaling.factor`,
  * `position.scaling.originalSpan`, `kvHeads`, `dtypes.cache`, `dtypes.positions`,
- * `serving.span`, `serving.sequences`.
+ * `serving.span`, `serving.sequences`, `serving.tensorParallel`, `serving.pipelineParallel`,
+ * `dtypes.weights`, `quantization.groupSize`.
  */
 export type Change = Record<string, ChangeValue>;
 
@@ -22,6 +23,8 @@ export interface Remedy {
   metrics: Record<string, number | null>;
   /** Non-blocking findings the change raises that the head did not have, as rule ids (e.g. `frequencies-changed`). */
   raises: string[];
+  /** What the change costs beyond the numbers: devices, or the accuracy risk of quantized weights (default: none). */
+  cost?: string;
 }
 
 /** What a blocking finding carries in every report. */

@@ -5,6 +5,7 @@ import { formatInteger, formatNumber } from '../units.js';
 import { codeSpan, encodePath, escapeMarkdown } from './escape.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { memoryChart } from './memory-chart.js';
+import { fitText, perDeviceText } from './device-text.js';
 import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
 import type { Remedy } from '../remedy/types.js';
 import type { ModelSpec } from '../model.js';
@@ -145,6 +146,8 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
   }
   if (file.head) {
     lines.push(deltaTable(file), '');
+    const fit = [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics)].filter((t): t is string => t !== null);
+    if (fit.length > 0) lines.push(`Head: ${fit.map((t) => escapeMarkdown(t)).join('; ')}.`, '');
   }
   const findings = file.findings.slice(0, parts.maxFindings);
   lines.push(findingsTable({ ...file, findings }, ctx), '');
@@ -172,7 +175,8 @@ function metricsMarkdown(metrics: Remedy['metrics'], max = Infinity): string {
 
 function remedyMarkdown(remedy: Remedy, spec: ModelSpec | null, maxMetrics = Infinity): string {
   const raises = remedy.raises.length > 0 ? ` _(also raises ${remedy.raises.map((r) => escapeMarkdown(r)).join(', ')})_` : '';
-  return `${changeMarkdown(remedy.change, spec)} ⇒ ${metricsMarkdown(remedy.metrics, maxMetrics)}${raises}`;
+  const cost = remedy.cost ? `; costs ${escapeMarkdown(remedy.cost)}` : '';
+  return `${changeMarkdown(remedy.change, spec)} ⇒ ${metricsMarkdown(remedy.metrics, maxMetrics)}${raises}${cost}`;
 }
 
 /** The first line under a blocking finding: its remedy, or why there is none. */

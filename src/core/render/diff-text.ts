@@ -1,4 +1,5 @@
 import type { GateReport } from '../compare/decide.js';
+import { fitText, perDeviceText } from './device-text.js';
 import { formatInteger } from '../units.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { ESTIMATE_NOTICE } from './notice.js';
@@ -24,6 +25,11 @@ export function renderDiffText(report: GateReport, style: TextStyle = PLAIN): st
     for (const d of file.deltas) {
       const mark = d.state === 'crossed' ? style.severity(d.limit?.severity ?? 'block', ' ✗ limit') : d.state === 'ok' ? ' ✓' : '';
       lines.push(`  ${d.metric.padEnd(width)}  ${formatMetric(d.metric, d.base).padStart(18)} → ${formatMetric(d.metric, d.head).padEnd(18)} ${formatChange(d.metric, d.change, d.changePct)}${mark}`);
+    }
+    if (file.head) {
+      for (const text of [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics)]) {
+        if (text !== null) lines.push(style.dim(`  head: ${text}`));
+      }
     }
     for (const f of file.findings) {
       const tags = [f.standing ? 'standing' : 'new', f.waived ? 'waived' : null].filter(Boolean).join(', ');

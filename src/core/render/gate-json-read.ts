@@ -101,8 +101,12 @@ const spec = record({
     cache: { enum: [...STORAGE_DTYPES, null] },
     positions: { enum: [...FLOAT_FORMATS, null] },
   }),
-  serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens'])),
-}, false, ['latent', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly']);
+  serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens', 'tensorParallel',
+    'pipelineParallel', 'activationReserveGiB']), false, ['tensorParallel', 'pipelineParallel', 'activationReserveGiB']),
+  quantization: record({
+    method: text, ...numbers(['bits', 'groupSize', 'scaleBits']), zeroPoint: { type: 'boolean' }, output: { type: 'boolean' },
+  }, true),
+}, false, ['latent', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly', 'quantization']);
 
 const version = record({ spec, metrics }, true);
 
@@ -122,7 +126,8 @@ const remedy = record({
   change: map({ type: ['number', 'string'] }),
   metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
   raises: { type: 'array', items: text },
-});
+  cost: text,
+}, false, ['cost']);
 
 const finding = record({
   rule: text, severity, message: text, key: textOrNull, line: lineOrNull,
@@ -206,7 +211,8 @@ function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
 const NULLABLE_SPEC_FIELDS = new Set([
   'name', 'experts', 'encoder', 'scaling', 'originalSpan', 'trainedSpan', 'slidingWindow', 'windowLayers',
   'weights', 'cache', 'positions', 'embeddingInitStd', 'embeddingMultiplier',
-  'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens',
+  'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens', 'tensorParallel', 'pipelineParallel',
+  'activationReserveGiB', 'quantization', 'groupSize',
   'latent', 'qRank', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly',
   'width', 'shared', 'sharedWidth', 'sharedGate', 'denseLayers',
 ]);

@@ -17,6 +17,7 @@ import { changeCards } from './html/change-cards.js';
 import { findingsSection, fixSummary } from './html/findings-html.js';
 import { fragment, h, trusted, type Markup } from './html/markup.js';
 import { memorySpanChart, type MemoryVariant } from './html/memory-span-chart.js';
+import { fitText, perDeviceText } from './device-text.js';
 import { similarityChart, similarityOf } from './html/similarity-chart.js';
 import { spectrumChart, spectrumOf } from './html/spectrum-chart.js';
 import { REPORT_CSS } from './html/style.js';
@@ -35,7 +36,7 @@ const VERDICT_WORD: Record<Verdict, string> = { block: 'Blocked', warn: 'Passes 
 /** Nothing may load or run: styles inline, images only as data, no script, no frame, no form target. */
 const CSP = "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-uri 'none'; form-action 'none'";
 
-const MEMORY_KEYS = new Set(['serving.sequences', 'dtypes.cache', 'kvHeads']);
+const MEMORY_KEYS = new Set(['serving.sequences', 'dtypes.cache', 'kvHeads', 'serving.tensorParallel', 'serving.pipelineParallel', 'dtypes.weights', 'quantization.groupSize']);
 
 /** `factor 8, sequences 5`: a remedy short enough for a chart legend. */
 function shortChange(change: Change, spec: ModelSpec): string {
@@ -90,6 +91,13 @@ function deltaTable(file: FileDecision): Markup | null {
       h('td', null, d.state === 'crossed' ? `crossed (${d.limit?.severity ?? 'block'})` : d.state === 'ok' ? 'within' : '')))));
 }
 
+/** The memory fit in words: per device when a replica spans several, and what the reserve keeps. */
+function fitParagraph(file: FileDecision): Markup | null {
+  if (!file.head) return null;
+  const parts = [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics)].filter((t): t is string => t !== null);
+  return parts.length === 0 ? null : h('p', { class: 'muted' }, `Head: ${parts.join('; ')}.`);
+}
+
 function statusText(file: FileDecision): string {
   if (file.status === 'renamed' && file.previousPath) return `renamed from ${file.previousPath}`;
   if (file.status === 'added') return 'new file, judged on its own';
@@ -120,6 +128,7 @@ function fileSection(file: FileDecision, index: number): Markup {
     file.baseError ? h('p', { class: 'muted' }, `The base version could not be read (${file.baseError.message}); the head is judged on its own.`) : null,
     fixSummary(file),
     changeCards(file),
+    fitParagraph(file),
     charts.length > 0 ? h('div', { class: 'charts' }, charts) : null,
     skipped,
     findingsSection(file),

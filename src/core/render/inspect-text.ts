@@ -6,6 +6,7 @@ import { formatBytes, formatCount, formatInteger, formatNumber, formatTokens } f
 import { ESTIMATE_NOTICE } from './notice.js';
 import type { RemedyFields, CombinedRemedy } from '../remedy/types.js';
 import { remedyLines, togetherText } from './remedy-text.js';
+import { fitText, perDeviceText } from './device-text.js';
 
 /** Terminal styling; the CLI passes ANSI codes on a terminal and `PLAIN` elsewhere. */
 export interface TextStyle {
@@ -124,6 +125,19 @@ function budgetRows(m: Metrics): Row[] {
     ['sequences that fit', formatInteger(m.fitSequences)],
     ['FLOP per token', formatCount(m.flopsPerToken)],
     ['token budget', formatTokens(m.tokenBudget)],
+    ...deviceRows(m),
+  ];
+}
+
+/** Per-device rows, shown when a replica spans more than one device. */
+function deviceRows(m: Metrics): Row[] {
+  if (m.devices === null || m.devices <= 1) return [];
+  return [
+    ['devices per replica', formatInteger(m.devices)],
+    ['key/value heads per device', formatInteger(m.kvHeadsPerDevice)],
+    ['weights per device', formatBytes(m.weightBytesPerDevice)],
+    ['cache per token per device', formatBytes(m.cachePerTokenBytesPerDevice)],
+    ['memory per device', formatBytes(m.memoryBytesPerDevice)],
   ];
 }
 
@@ -163,6 +177,9 @@ export function renderFileText(report: FileReport, style: TextStyle = PLAIN): st
     lines.push('', `  ${style.bold('Number formats')} ${style.dim(`(positions computed in ${own})`)}`, ...precision);
   }
   lines.push(...section(style, 'Budget', budgetRows(m)));
+  for (const text of [perDeviceText(report.spec, m), fitText(report.spec, m)]) {
+    if (text !== null) lines.push(`    ${style.dim(text.charAt(0).toUpperCase() + text.slice(1))}`);
+  }
   lines.push(...findingLines(style, report));
   return lines.join('\n');
 }

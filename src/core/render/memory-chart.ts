@@ -1,5 +1,5 @@
 import type { FileDecision } from '../compare/decide.js';
-import { memoryAtSpan, usableDeviceBytes } from '../metrics/memory-curve.js';
+import { memoryAtSpan, reserveWords, usableDeviceBytes } from '../metrics/memory-curve.js';
 import { formatInteger, formatNumber } from '../units.js';
 
 const GIB = 1024 ** 3;
@@ -29,7 +29,8 @@ function spanLabel(span: number): string {
 
 /**
  * A Mermaid line chart (GitHub renders it in comments): weights plus key/value cache in GiB
- * against span, for base and head, with the usable device budget as a flat line. Only numbers
+ * against span (per device when a replica spans several), for base and head, with the usable
+ * memory of one device as a flat line. Only numbers
  * and our own labels go into it, never text from the pull request.
  */
 export function memoryChart(file: FileDecision): string | null {
@@ -45,14 +46,16 @@ export function memoryChart(file: FileDecision): string | null {
     if (values.every((v): v is number => v !== null)) series.push({ name, values: values.map((v) => v / GIB) });
   }
   if (series.length === 0) return null;
+  const several = (head.metrics.devices ?? 1) > 1 || (base !== null && (base.metrics.devices ?? 1) > 1);
+  const each = several ? ' per device' : '';
   const budget = usableDeviceBytes(head.spec);
-  if (budget !== null) series.push({ name: 'usable device memory', values: spans.map(() => budget / GIB) });
+  if (budget !== null) series.push({ name: `usable memory${each} (${reserveWords(head.spec)})`, values: spans.map(() => budget / GIB) });
   const top = Math.max(...series.flatMap((s) => s.values));
   const round = (v: number) => formatNumber(v, 4).replace(/,/g, '');
   const lines = [
     '```mermaid',
     'xychart-beta',
-    '    title "Weights + key/value cache (GiB) against span"',
+    `    title "Weights + key/value cache${each} (GiB) against span"`,
     `    x-axis "span (tokens)" [${spans.map((s) => `"${spanLabel(s)}"`).join(', ')}]`,
     `    y-axis "GiB" 0 --> ${round(top * 1.1)}`,
     ...series.map((s) => `    line [${s.values.map(round).join(', ')}]`),

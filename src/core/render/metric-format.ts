@@ -11,6 +11,8 @@ const KIND: Partial<Record<string, Kind>> = {
   receptiveField: 'tokens', positionShare: 'share', params: 'large', activeParams: 'large',
   nonEmbeddingParams: 'large', weightBytes: 'bytes', cachePerTokenBytes: 'bytes', cacheBytesAtSpan: 'bytes',
   memoryBytes: 'bytes', fitSequences: 'count', flopsPerToken: 'flop', tokenBudget: 'tokens',
+  devices: 'count', kvHeadsPerDevice: 'count', weightBytesPerDevice: 'bytes', cachePerTokenBytesPerDevice: 'bytes',
+  memoryBytesPerDevice: 'bytes',
   positionExactLimit: 'tokens', collidingPositions: 'count', angleErrorMax: 'radians', overflowPosition: 'tokens',
   blurredPairs: 'count',
 };

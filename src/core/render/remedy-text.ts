@@ -62,7 +62,8 @@ export function metricsText(metrics: Remedy['metrics']): string {
 /** `position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k), headroom 0 (also raises frequencies-changed)`. */
 export function remedyText(remedy: Remedy, spec: ModelSpec | null): string {
   const raises = remedy.raises.length > 0 ? ` (also raises ${remedy.raises.join(', ')})` : '';
-  return `${changeText(remedy.change, spec)} ⇒ ${metricsText(remedy.metrics)}${raises}`;
+  const cost = remedy.cost ? `; costs ${remedy.cost}` : '';
+  return `${changeText(remedy.change, spec)} ⇒ ${metricsText(remedy.metrics)}${raises}${cost}`;
 }
 
 /** Lines for one finding: the remedy, each alternative, or why there is none; empty for findings without remedy fields. */

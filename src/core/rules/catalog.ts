@@ -63,6 +63,16 @@ export const RULES = {
     title: 'A key is stated but has no effect on the model as read',
     help: 'Remove the key, or change the keys it depends on so that it takes effect.',
   },
+  'quantization-unknown': {
+    severity: 'warn', scope: 'file',
+    title: 'A weight quantization the reader does not count, so the weights are counted unquantized',
+    help: 'The weight bytes are an upper bound: describe the model in the context-reach format with weights int4, int8 or fp8 and a weight-group-size, or state the format in the policy.',
+  },
+  'layout-unshardable': {
+    severity: 'block', scope: 'file',
+    title: 'The tensor- or pipeline-parallel degree cannot split this model',
+    help: 'The tensor degree must divide the attention heads, and it and the key/value heads must divide one another; the pipeline degree must be at most the layers. Use one of the degrees the message names.',
+  },
   'span-past-reach': {
     severity: 'block', scope: 'file',
     title: 'The evaluated span goes past what the position code supports',
@@ -91,7 +101,7 @@ export const RULES = {
   'memory-over-budget': {
     severity: 'block', scope: 'file',
     title: 'Weights plus key/value cache at the span do not fit the device budget',
-    help: 'Hold fewer concurrent sequences, store the cache in a narrower dtype, use fewer key/value heads, or serve a shorter span.',
+    help: 'Hold fewer concurrent sequences, store the cache in a narrower dtype, use fewer key/value heads, serve a shorter span, spread the replica over more devices (tensor- or pipeline-parallel), or store the weights quantized.',
   },
   'span-grew-code-unchanged': {
     severity: 'block', scope: 'change',

@@ -1,8 +1,8 @@
 import type { Finding, LocationMap, ModelSpec } from '../model.js';
 import type { MetricPath, Metrics } from '../metrics/types.js';
 import { MAX_SCAN_ELEMENTS, MAX_SCAN_SPAN, MAX_SCAN_WORK } from '../metrics/scan-limits.js';
-import { usableDeviceBytes } from '../metrics/memory-curve.js';
-import { formatBytes, formatInteger, formatTokens } from '../units.js';
+import { reserveWords, usableDeviceBytes } from '../metrics/memory-curve.js';
+import { formatBytes, formatInteger, formatNumber, formatTokens } from '../units.js';
 import { RULES, type RuleId } from './catalog.js';
 
 function at(locations: LocationMap, ...paths: string[]): { key: string | null; line: number | null } {
@@ -59,14 +59,20 @@ export function metricFindings(spec: ModelSpec, metrics: Metrics, locations: Loc
   }
 
   const usable = usableDeviceBytes(spec);
-  if (usable !== null && metrics.memoryBytes !== null && metrics.memoryBytes > usable) {
+  const devices = metrics.devices ?? 1;
+  const perDevice = metrics.memoryBytesPerDevice;
+  if (usable !== null && perDevice !== null && perDevice > usable) {
     const sequences = spec.serving.sequences ?? 1;
     const fit = metrics.fitSequences !== null && metrics.fitSequences > 0
       ? `at most ${formatInteger(metrics.fitSequences)} sequence${metrics.fitSequences === 1 ? '' : 's'} of ${formatTokens(T)} fit`
       : 'not even one sequence at this span fits';
-    findings.push(finding('memory-over-budget',
-      `Weights (${formatBytes(metrics.weightBytes)}) plus the key/value cache for ${formatInteger(sequences)} sequence${sequences === 1 ? '' : 's'} of ${formatTokens(T)} tokens (${formatBytes(metrics.cacheBytesAtSpan)}) need ${formatBytes(metrics.memoryBytes)}, over the ${formatBytes(usable)} usable of ${formatInteger(spec.serving.deviceGiB)} GiB; ${fit}: hold fewer sequences, a narrower cache dtype or fewer key/value heads, or serve a shorter span.`,
-      at(locations, 'serving.sequences', 'serving.span', 'serving.deviceGiB', 'dtypes.cache')));
+    const held = `${formatInteger(sequences)} sequence${sequences === 1 ? '' : 's'} of ${formatTokens(T)} tokens`;
+    const budget = `${formatBytes(usable)} usable of ${formatNumber(spec.serving.deviceGiB)} GiB`;
+    const message = devices > 1
+      ? `Per device (${formatInteger(devices)} devices: tensor-parallel ${formatInteger(spec.serving.tensorParallel ?? 1)} × pipeline-parallel ${formatInteger(spec.serving.pipelineParallel ?? 1)}), weights (${formatBytes(metrics.weightBytesPerDevice)}) plus the key/value cache for ${held} need ${formatBytes(perDevice)}, over the ${budget} per device (${reserveWords(spec)}); ${fit} per replica: hold fewer sequences, a narrower cache dtype, more devices or quantized weights, or serve a shorter span.`
+      : `Weights (${formatBytes(metrics.weightBytes)}) plus the key/value cache for ${held} (${formatBytes(metrics.cacheBytesAtSpan)}) need ${formatBytes(metrics.memoryBytes)}, over the ${budget} (${reserveWords(spec)}); ${fit}: hold fewer sequences, a narrower cache dtype or fewer key/value heads, spread the replica over more devices, store the weights quantized, or serve a shorter span.`;
+    findings.push(finding('memory-over-budget', message,
+      at(locations, 'serving.sequences', 'serving.span', 'serving.deviceGiB', 'serving.tensorParallel', 'dtypes.cache')));
   }
 
   const format = spec.dtypes.positions ?? 'fp32';

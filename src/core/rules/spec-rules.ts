@@ -6,6 +6,7 @@
  */
 import type { Finding, LocationMap, ModelSpec } from '../model.js';
 import { formatNumber } from '../parse/quote.js';
+import { shardingDegrees, shards } from '../metrics/per-device.js';
 import { RULES } from './catalog.js';
 import type { RuleId } from './catalog.js';
 
@@ -62,6 +63,8 @@ const SIZE_FIELDS: readonly SizeField[] = [
   { field: 'serving.deviceGiB', get: (s) => s.serving.deviceGiB, what: 'the device memory in GiB', real: true },
   { field: 'serving.outputTokens', get: (s) => s.serving.outputTokens, what: 'the tokens kept for output', min: 0 },
   { field: 'serving.promptTokens', get: (s) => s.serving.promptTokens, what: 'the tokens taken by a fixed prompt', min: 0 },
+  { field: 'serving.tensorParallel', get: (s) => s.serving.tensorParallel, what: 'the devices each layer is split over' },
+  { field: 'serving.pipelineParallel', get: (s) => s.serving.pipelineParallel, what: 'the pipeline stages' },
 ];
 
 /** A whole number of at least 1 that a double holds exactly. */
@@ -100,6 +103,8 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
   if (!spec.latent) headGrouping(spec.heads, spec.kvHeads, 'heads', 'kvHeads', name, push);
   if (spec.encoder) headGrouping(spec.encoder.heads, spec.encoder.kvHeads, 'encoder.heads', 'encoder.kvHeads', name, push);
 
+  parallelLayout(spec, name, push);
+
   if (spec.experts && isCount(spec.experts.total) && isCount(spec.experts.active) && spec.experts.active > spec.experts.total) {
     push('value-invalid', 'experts.active', `${name('experts.active')} is ${spec.experts.active}, more than ${name('experts.total')} ${spec.experts.total}; a token cannot use more experts than there are: set it to at most ${spec.experts.total}`);
   }
@@ -133,6 +138,48 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
     }
   }
   return out;
+}
+
+/** `a, b or c`. */
+function orList(items: readonly (string | number)[]): string {
+  return items.length <= 1 ? items.join('') : `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
+}
+
+/**
+ * `layout-unshardable` (METRICS.md, "Serving across devices"): a tensor degree `t` with
+ * `heads % t != 0`, or with neither of `kvHeads` and `t` dividing the other, cannot split the
+ * attention (decoder, and encoder where there is one); a pipeline degree above the layers leaves a
+ * stage empty. The message names the degrees that work.
+ */
+function parallelLayout(
+  spec: ModelSpec,
+  name: (field: string) => string,
+  push: (rule: RuleId, field: string | null, message: string) => void,
+): void {
+  const t = spec.serving.tensorParallel;
+  if (isCount(t) && t > 1) {
+    const stacks: [string, number, number][] = [['', spec.heads, spec.kvHeads]];
+    if (spec.encoder) stacks.push(['encoder ', spec.encoder.heads, spec.encoder.kvHeads]);
+    const problems: string[] = [];
+    for (const [stack, heads, kv] of stacks) {
+      if (!isCount(heads) || !isCount(kv) || shards(heads, kv, t)) continue;
+      if (heads % t !== 0) problems.push(`${t} does not divide the ${heads} ${stack}attention heads`);
+      else problems.push(`${t} and the ${kv} ${stack}key/value heads do not divide one another`);
+    }
+    if (problems.length > 0) {
+      let working = isCount(spec.heads) && isCount(spec.kvHeads) ? shardingDegrees(spec.heads, spec.kvHeads, 64) : [];
+      if (spec.encoder && isCount(spec.encoder.heads) && isCount(spec.encoder.kvHeads)) {
+        const encoder = spec.encoder;
+        working = working.filter((d) => shards(encoder.heads, encoder.kvHeads, d));
+      }
+      const advice = working.length > 0 ? `use a tensor-parallel degree of ${orList(working)}` : 'no tensor-parallel degree splits these heads';
+      push('layout-unshardable', 'serving.tensorParallel', `The tensor-parallel degree ${t} (${name('serving.tensorParallel')}) cannot shard the attention: ${problems.join('; ')}; ${advice}.`);
+    }
+  }
+  const p = spec.serving.pipelineParallel;
+  if (isCount(p) && isCount(spec.layers) && p > spec.layers) {
+    push('layout-unshardable', 'serving.pipelineParallel', `The pipeline-parallel degree ${p} (${name('serving.pipelineParallel')}) is more than the ${spec.layers} layers, so a stage would hold none; use at most ${spec.layers} stages.`);
+  }
 }
 
 /** Why `v` is not a size: a phrase starting with ", " (or empty for a plain range miss), or null when it is fine. */

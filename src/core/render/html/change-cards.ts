@@ -27,6 +27,7 @@ const CARDS: CardSpec[] = [
   { metric: 'trainedSpan', label: 'Trained span', better: null },
   { metric: 'discriminationSpan', label: 'First offset with S(k) < 0', better: 'up' },
   { metric: 'exposedPairs', label: 'Exposed pairs', better: 'down' },
+  { metric: 'memoryBytesPerDevice', label: 'Memory per device at the span', better: 'down' },
   { metric: 'memoryBytes', label: 'Memory at the span', better: 'down' },
   { metric: 'fitSequences', label: 'Sequences that fit', better: 'up' },
   { metric: 'cachePerTokenBytes', label: 'Cache per token', better: 'down' },
@@ -37,7 +38,8 @@ const RULE_METRICS: Record<string, MetricPath[]> = {
   'span-past-reach': ['headroom', 'reach', 'evaluationSpan'],
   'span-beyond-scaling-cover': ['declaredSpan', 'reach'],
   'span-grew-code-unchanged': ['declaredSpan', 'trainedSpan'],
-  'memory-over-budget': ['memoryBytes', 'fitSequences'],
+  'memory-over-budget': ['memoryBytesPerDevice', 'memoryBytes', 'fitSequences'],
+  'layout-unshardable': ['devices', 'kvHeadsPerDevice'],
 };
 
 /** Most cards a file shows (default: `6`). */
@@ -64,7 +66,10 @@ export function changeCards(file: FileDecision): Markup | null {
   const blocking = new Set<string>(file.findings.filter((f) => f.severity === 'block')
     .flatMap((f) => (f.metric ? [f.metric] : ruleMetrics(f.rule))));
   const crossed = new Map(file.deltas.filter((d) => d.state === 'crossed').map((d) => [d.metric as string, d.limit?.severity ?? 'block']));
-  const specs = [...CARDS, { metric: colliding, label: `Colliding positions (${own})`, better: 'down' as const }];
+  // On one device the per-device memory is the memory itself: one card, not two.
+  const several = (head.metrics.devices ?? 1) > 1 || (base !== null && (base.metrics.devices ?? 1) > 1);
+  const specs = [...CARDS.filter((c) => several || c.metric !== 'memoryBytesPerDevice'),
+    { metric: colliding, label: `Colliding positions (${own})`, better: 'down' as const }];
 
   const rows = specs.map((spec) => {
     const b = base ? metricValue(base.metrics, spec.metric) : null;
@@ -84,7 +89,9 @@ export function changeCards(file: FileDecision): Markup | null {
   return h('ul', { class: 'cards' }, rows.slice(0, MAX_CARDS).map((r) => {
     let note: string | null = null;
     if (r.spec.metric === 'headroom' && r.v !== null && r.v < 0) note = `the span is ${formatInteger(-r.v)} tokens past the reach`;
-    else if (r.spec.metric === 'memoryBytes' && usable !== null) note = `usable on the device: ${formatMetric('memoryBytes', usable)}`;
+    else if (r.spec.metric === 'memoryBytesPerDevice' && usable !== null) note = `usable per device: ${formatMetric('memoryBytes', usable)}`;
+    else if (r.spec.metric === 'memoryBytes' && usable !== null && !several) note = `usable on the device: ${formatMetric('memoryBytes', usable)}`;
+    else if (r.spec.metric === 'memoryBytes' && several) note = `across ${formatInteger(head.metrics.devices)} devices`;
     else if (r.spec.metric === 'fitSequences' && head.spec.serving.sequences !== null) note = `the service holds ${formatInteger(head.spec.serving.sequences)}`;
     const limit = file.deltas.find((d) => d.metric === r.spec.metric)?.limit;
     if (limit && note === null) {

@@ -29,7 +29,8 @@ function remedyBox(remedy: Remedy, spec: ModelSpec | null, locations: LocationMa
     h('div', { class: 'title' }, title),
     changeMarkup(remedy.change, spec, locations),
     metricsMarkup(remedy.metrics),
-    remedy.raises.length > 0 ? h('div', { class: 'metrics' }, `also raises: ${remedy.raises.join(', ')}`) : null);
+    remedy.raises.length > 0 ? h('div', { class: 'metrics' }, `also raises: ${remedy.raises.join(', ')}`) : null,
+    remedy.cost ? h('div', { class: 'metrics' }, `costs: ${remedy.cost}`) : null);
 }
 
 function remedies(finding: JudgedFinding, spec: ModelSpec | null, locations: LocationMap | null): Markup | null {

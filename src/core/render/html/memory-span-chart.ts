@@ -1,14 +1,14 @@
 /**
  * Device memory against span, base and head: weights plus the key/value cache of the served
- * sequences (`memoryBytes` of METRICS.md at every span), the weights alone, the usable device
- * budget, each version's evaluation span marked with how many sequences fit there, and, when a
+ * sequences on one device (`memoryBytesPerDevice` of METRICS.md at every span, `memoryBytes` on
+ * one device), the weights alone, the usable memory per device, each version's evaluation span marked with how many sequences fit there, and, when a
  * remedy changes the memory, the head with that remedy applied.
  */
 import { scaleLinear, scaleLog } from 'd3-scale';
 import { line } from 'd3-shape';
 import type { FileReport } from '../../inspect.js';
 import { servedSequences } from '../../metrics/kv-cache.js';
-import { memoryAtSpan, usableDeviceBytes } from '../../metrics/memory-curve.js';
+import { memoryAtSpan, reserveWords, usableDeviceBytes } from '../../metrics/memory-curve.js';
 import type { ModelSpec } from '../../model.js';
 import { formatBytes, formatInteger } from '../../units.js';
 import { axisBottom, axisLeft, figure, frame, hRule, powerOfTwoTicks, tokenLabel, type LegendEntry } from './chart-frame.js';
@@ -37,8 +37,10 @@ function sequencesText(report: FileReport): string {
 
 /** The chart, or null when neither version has a memory figure. */
 export function memorySpanChart(id: string, base: FileReport | null, head: FileReport | null, variant: MemoryVariant | null): Markup | null {
-  const versions = ([['base', base], ['head', head]] as const).filter(([, r]) => r !== null && r.metrics.memoryBytes !== null && r.metrics.evaluationSpan !== null) as [string, FileReport][];
+  const versions = ([['base', base], ['head', head]] as const).filter(([, r]) => r !== null && r.metrics.memoryBytesPerDevice !== null && r.metrics.evaluationSpan !== null) as [string, FileReport][];
   if (versions.length === 0) return null;
+  const several = versions.some(([, r]) => (r.metrics.devices ?? 1) > 1);
+  const each = several ? ' per device' : '';
   const f = frame();
   const spansT = versions.map(([, r]) => r.metrics.evaluationSpan as number);
   const lo = Math.max(256, 2 ** Math.floor(Math.log2(Math.min(...spansT) / 64)));
@@ -57,32 +59,38 @@ export function memorySpanChart(id: string, base: FileReport | null, head: FileR
 
   const parts: (Markup | null)[] = [
     axisBottom(f, x, powerOfTwoTicks(lo, hi, 7), tokenLabel, 'span (tokens, log)'),
-    axisLeft(f, y, y.ticks(6), (t) => String(t), 'weights + key/value cache (GiB)'),
+    axisLeft(f, y, y.ticks(6), (t) => String(t), `weights + key/value cache${each} (GiB)`),
   ];
-  if (budget !== null) parts.push(hRule(f, y(budget / GIB), `usable ${formatBytes(budget)}`, 's-budget dash'));
-  const weights = head?.metrics.weightBytes ?? null;
+  if (budget !== null) parts.push(hRule(f, y(budget / GIB), `usable${each} ${formatBytes(budget)}`, 's-budget dash'));
+  const weights = head?.metrics.weightBytesPerDevice ?? null;
   if (weights !== null) parts.push(hRule(f, y(weights / GIB), `weights ${formatBytes(weights)}`, 's-head dash', y(weights / GIB) + 2));
   for (const s of series) parts.push(h('path', { class: `s-${s.name}`, d: path(s.points) ?? '', 'stroke-width': s.name === 'head' ? 2.4 : 1.8 }));
   if (variant && variantPoints.length > 0) parts.push(h('path', { class: 's-fix dash', d: path(variantPoints) ?? '', 'stroke-width': 2.2 }));
 
   const notes: string[] = [];
   // The higher point's label goes above it and the lower one's below, so two labels never overlap.
-  const highest = Math.max(...series.map((s) => s.report.metrics.memoryBytes as number));
+  const highest = Math.max(...series.map((s) => s.report.metrics.memoryBytesPerDevice as number));
   for (const s of series) {
     const T = s.report.metrics.evaluationSpan as number;
-    const m = s.report.metrics.memoryBytes as number;
+    const m = s.report.metrics.memoryBytesPerDevice as number;
+    const devices = s.report.metrics.devices ?? 1;
     const over = budget !== null && m > budget;
     parts.push(h('circle', { class: over ? 'f-block' : `f-${s.name}`, cx: x(T), cy: y(m / GIB), r: 5 }));
     const fit = s.report.metrics.fitSequences;
     const label = `${s.name}: ${formatBytes(m)} at ${tokenLabel(T)}${fit !== null ? `, ${formatInteger(fit)} fit` : ''}`;
     const above = series.length === 1 || m === highest;
     parts.push(h('text', { class: 'mark', x: x(T) - 8, y: y(m / GIB) + (above ? -9 : 17), 'text-anchor': 'end' }, label));
-    notes.push(`${s.name} holds ${sequencesText(s.report)} of ${formatInteger(T)} tokens: ${formatBytes(m)}${budget !== null ? ` of ${formatBytes(budget)} usable` : ''}${fit !== null ? `, ${formatInteger(fit)} sequence${fit === 1 ? '' : 's'} fit` : ''}`);
+    const spread = devices > 1 ? ` over ${formatInteger(devices)} devices` : '';
+    notes.push(`${s.name} holds ${sequencesText(s.report)} of ${formatInteger(T)} tokens${spread}: ${formatBytes(m)}${each}${budget !== null ? ` of ${formatBytes(budget)} usable` : ''}${fit !== null ? `, ${formatInteger(fit)} sequence${fit === 1 ? '' : 's'} fit` : ''}`);
   }
 
   const entries: LegendEntry[] = series.map((s) => [`sw-${s.name}`, `${s.name} (${sequencesText(s.report)})`] as LegendEntry);
   if (variant && variantPoints.length > 0) entries.push(['dash sw-fix', variant.label]);
-  if (budget !== null) entries.push(['dash sw-budget', 'usable device memory']);
-  return figure(`${id}-memory`, 'Memory against span', entries, f, parts, `${notes.join(' · ')}.`,
-    `Weights plus key/value cache against span. ${notes.join('. ')}.`);
+  if (budget !== null) {
+    entries.push(['dash sw-budget', `usable memory${each}`]);
+    const budgetSpec = head ? head.spec : base!.spec;
+    notes.push(`usable memory is ${reserveWords(budgetSpec)}`);
+  }
+  return figure(`${id}-memory`, several ? 'Memory per device against span' : 'Memory against span', entries, f, parts, `${notes.join(' · ')}.`,
+    `Weights plus key/value cache${each} against span. ${notes.join('. ')}.`);
 }
