@@ -19,12 +19,10 @@ export interface ScanMemo {
   readonly misses: number;
 }
 
-/** Hex digits of a typed array's bytes: exact, NaN payloads and the sign of zero included. */
+/** A typed array's bytes as 32-bit words: exact, NaN payloads and the sign of zero included. */
 function bytesKey(view: ArrayBufferView): string {
-  const bytes = new Uint8Array(view.buffer, view.byteOffset, view.byteLength);
-  let out = '';
-  for (let i = 0; i < bytes.length; i++) out += (bytes[i]! < 16 ? '0' : '') + bytes[i]!.toString(16);
-  return out;
+  if (view.byteLength % 4 === 0 && view.byteOffset % 4 === 0) return `w${new Uint32Array(view.buffer, view.byteOffset, view.byteLength / 4).join(',')}`;
+  return `b${new Uint8Array(view.buffer, view.byteOffset, view.byteLength).join(',')}`;
 }
 
 /**
