@@ -134,3 +134,88 @@ export async function actionScenario(repo: GateRepo, files: string[]) {
     },
   };
 }
+
+/** Goals of W6 (issue 16). */
+export const W6_TARGETS = { largeMaxMs: 10_000, largeMaxRssMiB: 256, smallMaxFloorRatio: 5 };
+
+/** Sizes of the W6 repository, in changed configs. */
+export const W6_SIZES = [50, 500, 3000] as const;
+
+export interface W6Row {
+  configs: number;
+  blockingChanges: number;
+  blockingFindings: number;
+  filesBlocked: number;
+  floor: Timed[];
+  diff: Timed[];
+  action: Timed[];
+  median: { floorMs: number; diffMs: number; actionMs: number; diffCpuMs: number | null; actionCpuMs: number | null; floorCpuMs: number | null; diffRssMiB: number | null; actionRssMiB: number | null };
+  ratio: { diff: number; action: number };
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+const medianOrNull = (xs: (number | null)[]) => (xs.some((x) => x === null) ? null : median(xs as number[]));
+const maxOrNull = (xs: (number | null)[]) => (xs.some((x) => x === null) ? null : Math.max(...(xs as number[])));
+
+/**
+ * W6 over every size: per round the floor, `diff` and the action one after the other, so a burst
+ * of load touches all three alike. Returns the rows and every disagreement found (reports that
+ * differ between runs or from the pre-issue-16 digest, a wrong number of files, no comment).
+ */
+export async function runW6(runs: number, sizes: readonly number[] = W6_SIZES, log: (line: string) => void = () => {}): Promise<{ rows: W6Row[]; problems: string[] }> {
+  const { writeGateRepository } = await import('./gate-repo.js');
+  const rows: W6Row[] = [];
+  const problems: string[] = [];
+  for (const count of sizes) {
+    const repo = writeGateRepository(count);
+    const files = (await import('./gate-repo.js')).gateRepository(count).head.map((f) => f.path);
+    const action = await actionScenario(repo, files);
+    const row: W6Row = { configs: count, blockingChanges: repo.blockingChanges, blockingFindings: 0, filesBlocked: 0, floor: [], diff: [], action: [], median: null!, ratio: null! };
+    let diffJson: string | null = null;
+    try {
+      for (let r = 0; r < runs; r++) {
+        const floor = await ioFloor(repo);
+        if (floor.blobs !== 2 * count) problems.push(`W6 ${count}: the floor read ${floor.blobs} blobs; expected ${2 * count}`);
+        const diff = await diffThroughCli(repo);
+        const acted = await action.run();
+        row.floor.push({ ms: floor.ms, cpuMs: floor.cpuMs, peakRssMiB: floor.peakRssMiB });
+        row.diff.push({ ms: diff.ms, cpuMs: diff.cpuMs, peakRssMiB: diff.peakRssMiB });
+        row.action.push({ ms: acted.ms, cpuMs: acted.cpuMs, peakRssMiB: acted.peakRssMiB });
+        log(`W6 ${count} run ${r + 1}: floor ${floor.ms.toFixed(0)} ms, diff ${diff.ms.toFixed(0)} ms (CPU ${diff.cpuMs?.toFixed(0) ?? 'n/a'}), action ${acted.ms.toFixed(0)} ms (CPU ${acted.cpuMs?.toFixed(0) ?? 'n/a'})`);
+        if (diffJson !== null && diff.json !== diffJson) problems.push(`W6 ${count}: diff reports differ between runs`);
+        diffJson ??= diff.json;
+        if (acted.json !== diff.json) problems.push(`W6 ${count}: the action's JSON report differs from diff's`);
+        if (!acted.commentWritten) problems.push(`W6 ${count}: the action wrote no comment`);
+      }
+    } finally {
+      await action.close();
+      repo.remove();
+    }
+    const report = JSON.parse(diffJson!) as { blocking: number; files: { verdict: string }[] };
+    row.blockingFindings = report.blocking;
+    row.filesBlocked = report.files.filter((f) => f.verdict === 'block').length;
+    if (report.files.length !== count) problems.push(`W6 ${count}: the report judged ${report.files.length} files; expected ${count}`);
+    if (count === 500 && reportDigest(diffJson!) !== GATE_REPORT_SHA256) {
+      problems.push(`W6 500: the JSON report (version line aside) has SHA-256 ${reportDigest(diffJson!)}; the code before issue 16 wrote ${GATE_REPORT_SHA256}`);
+    }
+    row.median = {
+      floorMs: median(row.floor.map((t) => t.ms)), diffMs: median(row.diff.map((t) => t.ms)), actionMs: median(row.action.map((t) => t.ms)),
+      floorCpuMs: medianOrNull(row.floor.map((t) => t.cpuMs)), diffCpuMs: medianOrNull(row.diff.map((t) => t.cpuMs)), actionCpuMs: medianOrNull(row.action.map((t) => t.cpuMs)),
+      diffRssMiB: maxOrNull(row.diff.map((t) => t.peakRssMiB)), actionRssMiB: maxOrNull(row.action.map((t) => t.peakRssMiB)),
+    };
+    row.ratio = { diff: row.median.diffMs / row.median.floorMs, action: row.median.actionMs / row.median.floorMs };
+    rows.push(row);
+  }
+  return { rows, problems };
+}
+
+/** Whether the W6 rows meet the goals (sizes not run count as met). */
+export function w6Targets(rows: W6Row[]): Record<string, boolean> {
+  const large = rows.find((r) => r.configs === 3000);
+  const small = rows.find((r) => r.configs === 50);
+  return {
+    w6LargeWithinMs: !large || (large.median.diffMs <= W6_TARGETS.largeMaxMs && large.median.actionMs <= W6_TARGETS.largeMaxMs),
+    w6LargeWithinRss: !large || ((large.median.diffRssMiB ?? 0) <= W6_TARGETS.largeMaxRssMiB && (large.median.actionRssMiB ?? 0) <= W6_TARGETS.largeMaxRssMiB),
+    w6SmallWithinFloorRatio: !small || (small.ratio.diff <= W6_TARGETS.smallMaxFloorRatio && small.ratio.action <= W6_TARGETS.smallMaxFloorRatio),
+  };
+}
