@@ -11,15 +11,21 @@
  *   W4  the bundled action (dist/index.js) on a pull request changing 200 configs, loopback API
  *   start-up  dist/cli.js and dist/index.js to their first line of output, next to a bare node
  *   (W3, W4 and start-up: bench/end-to-end.ts; they need `npm run build` first)
+ *   W6  the whole gate (`diff --format json` and the action) on a generated repository of 50, 500
+ *       and 3,000 changed configs with blocking findings, each paired with the I/O floor
+ *       (bench/gate-workload.ts, bench/gate-repo.ts; the 500-config report is held to the
+ *       digest of the report before issue 16)
  *
  * All results must agree (counts identical, floats within 1e-9 relative; W3's two ways
  * byte-identical; W4's runs the same decision) before any ratio is printed; then
  * bench/results.json is written. Run from the repository root. Flags: `--runs=N` (default 7),
  * `--baseline-runs=N` (default 3), `--process-runs=N` (W3 through the CLI and W4, default 5),
- * `--startup-runs=N` (default 11), `--strict` (exit 1 when a target is missed).
+ * `--startup-runs=N` (default 11), `--w6-runs=N` (default 3), `--w6-sizes=50,500,3000`,
+ * `--only=w6` (W6 alone, merged into the existing results.json), `--strict` (exit 1 when a
+ * target is missed).
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { computeMetrics, frequencyPlan } from '../src/core/metrics/compute.js';
@@ -32,6 +38,7 @@ import type { ActionRun } from './end-to-end.js';
 import { straightforwardScan } from './straightforward.js';
 import type { ScanResult } from './straightforward.js';
 import { W1, W2 } from './workloads.js';
+import { W6_SIZES, W6_TARGETS, runW6, w6Targets, type W6Row } from './gate-workload.js';
 import type { Workload } from './workloads.js';
 
 const FORMATS: FloatFormat[] = ['fp32', 'bf16', 'fp16'];
@@ -144,6 +151,51 @@ function runNumpy(theta: Float64Array, span: number, runs: number): NumpyReport 
   return JSON.parse(r.stdout) as NumpyReport;
 }
 
+/** `--w6-sizes=50,500`: the W6 sizes to run (default: all). */
+function w6Sizes(): number[] {
+  const hit = process.argv.find((a) => a.startsWith('--w6-sizes='));
+  if (!hit) return [...W6_SIZES];
+  return hit.split('=')[1]!.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0);
+}
+
+/** W6 lines: per size, the medians and the ratio to the floor. */
+function printW6(rows: W6Row[], line: (s: string) => void): void {
+  const cpu = (x: number | null) => (x === null ? 'n/a' : x.toFixed(0));
+  for (const r of rows) {
+    line(`W6 ${r.configs} configs (${r.blockingChanges} blocking changes; ${r.filesBlocked} files blocked, ${r.blockingFindings} blocking findings): `
+      + `floor ${r.median.floorMs.toFixed(0)} ms (CPU ${cpu(r.median.floorCpuMs)}), diff ${r.median.diffMs.toFixed(0)} ms (CPU ${cpu(r.median.diffCpuMs)}, peak RSS ${r.median.diffRssMiB?.toFixed(1) ?? 'n/a'} MiB) = ${r.ratio.diff.toFixed(2)}x floor, `
+      + `action ${r.median.actionMs.toFixed(0)} ms (CPU ${cpu(r.median.actionCpuMs)}, peak RSS ${r.median.actionRssMiB?.toFixed(1) ?? 'n/a'} MiB) = ${r.ratio.action.toFixed(2)}x floor; medians of ${r.diff.length}`);
+  }
+}
+
+/** `--only=w6`: W6 alone; its results replace `w6` in bench/results.json. */
+async function mainW6(): Promise<void> {
+  const line = (s: string) => process.stdout.write(`${s}\n`);
+  for (const bundle of [CLI_BUNDLE, ACTION_BUNDLE]) {
+    if (!existsSync(bundle)) throw new Error(`${path.relative(process.cwd(), bundle)} is missing; W6 runs the bundles: run 'npm run build' first`);
+  }
+  const loadBefore = os.loadavg();
+  const { rows, problems } = await runW6(flag('w6-runs', 3), w6Sizes(), line);
+  const loadAfter = os.loadavg();
+  printW6(rows, line);
+  line(`load average (1, 5, 15 min) before ${loadBefore.map((x) => x.toFixed(2)).join(', ')}, after ${loadAfter.map((x) => x.toFixed(2)).join(', ')}`);
+  if (problems.length > 0) {
+    for (const p of problems) line(`DISAGREEMENT ${p}`);
+    line('results disagree: results.json not written');
+    process.exitCode = 1;
+    return;
+  }
+  line('W6 reports agree between runs and with the action; the 500-config report matches the digest from before issue 16');
+  const targets = w6Targets(rows);
+  for (const [name, ok] of Object.entries(targets)) line(`${ok ? 'met   ' : 'MISSED'} ${name}`);
+  const file = path.join(process.cwd(), 'bench', 'results.json');
+  const previous = existsSync(file) ? JSON.parse(readFileSync(file, 'utf8')) as Record<string, unknown> : {};
+  const w6 = { date: new Date().toISOString(), node: process.version, cpus: os.cpus().length, loadAverage: { before: loadBefore, after: loadAfter }, targets: W6_TARGETS, rows, targetsMet: targets };
+  writeFileSync(file, `${JSON.stringify({ ...previous, w6 }, null, 2)}\n`);
+  line('wrote bench/results.json (w6)');
+  if (process.argv.includes('--strict') && Object.values(targets).some((ok) => !ok)) process.exitCode = 1;
+}
+
 async function main(): Promise<void> {
   const runs = flag('runs', 7);
   const baselineRuns = flag('baseline-runs', 3);
@@ -217,6 +269,9 @@ async function main(): Promise<void> {
   }
   const startupMs = { cli: median(startup.cli), action: median(startup.action), node: median(startup.node) };
   line(`start-up to first output, median of ${startupRuns}: dist/cli.js ${startupMs.cli.toFixed(0)} ms, dist/index.js ${startupMs.action.toFixed(0)} ms, bare node ${startupMs.node.toFixed(0)} ms`);
+  // W6: the whole gate at 50, 500 and 3,000 configs, each beside the I/O floor.
+  const w6 = await runW6(flag('w6-runs', 3), w6Sizes(), line);
+  printW6(w6.rows, line);
   const loadAfter = os.loadavg();
   line(`load average (1, 5, 15 min) before ${loadBefore.map((x) => x.toFixed(2)).join(', ')}, after ${loadAfter.map((x) => x.toFixed(2)).join(', ')}`);
 
@@ -224,6 +279,7 @@ async function main(): Promise<void> {
     ...disagreements(fastResult, straight.result, 'engine vs straightforward'),
     ...w1Cold.flatMap((c) => disagreements(c.result, fastResult, 'cold child vs warm engine')),
     ...w2.slice(1).flatMap((c) => disagreements(c.result, w2[0].result, 'W2 run vs W2 run')),
+    ...w6.problems,
   ];
   const w3Json = w3Warm[0]!.json;
   if (w3Cli.some((c) => c.json !== w3Json) || w3Warm.some((c) => c.json !== w3Json)) problems.push('W3 dist/cli.js output differs from the in-process output (or between runs)');
@@ -260,6 +316,7 @@ async function main(): Promise<void> {
     w4WithinMs: w4Ms <= TARGETS.w4MaxMs,
     cliStartupWithinMs: startupMs.cli <= TARGETS.startupMaxMs,
     actionStartupWithinMs: startupMs.action <= TARGETS.startupMaxMs,
+    ...w6Targets(w6.rows),
   };
   line(`ratios: W1/calibration ${ratios.w1OverCalibration.toFixed(2)} (target <= ${TARGETS.w1MaxCalibrationRatio}), straightforward/W1 ${ratios.straightforwardOverW1.toFixed(1)}, numpy/W1 ${ratios.numpyOverW1 === null ? 'n/a' : ratios.numpyOverW1.toFixed(1)}, W2/W1 ${ratios.w2OverW1Cold.toFixed(2)} both cold, ${ratios.w2OverW1Warm.toFixed(2)} both warm (target <= ${TARGETS.w2MaxW1Ratio}; T is 16 times larger)`);
   for (const [name, ok] of Object.entries(targets)) line(`${ok ? 'met   ' : 'MISSED'} ${name}`);
@@ -284,6 +341,7 @@ async function main(): Promise<void> {
     calibration: { ms: calibration.ms, medianMs: median(calibration.ms) },
     straightforward: { ms: straight.ms, medianMs: median(straight.ms) },
     numpy: numpy.skipped ? { skipped: numpy.skipped } : { version: numpy.numpy, ms: numpy.ms, medianMs: numpy.medianMs },
+    w6: { targets: W6_TARGETS, rows: w6.rows },
     ratios,
     targetsMet: targets,
     w1Result: fastResult,
@@ -304,4 +362,5 @@ function fmtNull(x: number | null, digits: number): string {
 
 const childName = process.argv.find((a) => a.startsWith('--child='))?.split('=')[1];
 if (childName) child(childName);
+else if (process.argv.includes('--only=w6')) await mainW6();
 else await main();

@@ -6,6 +6,7 @@
  */
 import { execFile } from 'node:child_process';
 import type { ChangedFile } from '../core/changes.js';
+import type { ContentSource } from '../core/gate.js';
 
 /** Largest model config read, in bytes; larger blobs are refused unread (default: `4 MiB`). */
 export const MAX_CONFIG_BYTES = 4 * 1024 * 1024;
@@ -158,6 +159,15 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
   const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
   const maxFile = options.maxFileBytes ?? MAX_CONFIG_BYTES;
   const run = runner(cwd, git, timeout);
+  /**
+   * Tree entries the diff already named, by commit id and path: only under full commit ids,
+   * which cannot move, so a later read of the same file needs no `ls-tree`.
+   */
+  const known = new Map<string, TreeEntry | null>();
+  const knownKey = (commit: string, path: string) => `${commit}\u0000${path}`;
+  const remember = (commit: string, path: string | null, entry: TreeEntry | null) => {
+    if (path !== null && FULL_ID.test(commit)) known.set(knownKey(commit, path), entry);
+  };
 
   async function resolveCommit(rev: string): Promise<string | null> {
     const args = ['rev-parse', '--verify', '--quiet', `${checkRevision(rev)}^{commit}`];
@@ -230,6 +240,25 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     return read;
   }
 
+  /**
+   * Sizes of blobs by object id from one `cat-file --batch-check` (null for an object that is
+   * missing or not a blob), so nothing over the size limit is ever read.
+   */
+  async function blobSizes(oids: string[]): Promise<Map<string, number | Error | null>> {
+    const sizes = new Map<string, number | Error | null>();
+    if (oids.length === 0) return sizes;
+    const args = ['cat-file', '--batch-check'];
+    const result = await run(args, oids.length * 128 + 4096, `${oids.join('\n')}\n`);
+    if (result.code !== 0) throw failed(args, result);
+    const lines = result.stdout.toString('utf8').split('\n');
+    oids.forEach((oid, i) => {
+      const [name, type, size] = (lines[i] ?? '').split(' ');
+      if (name !== oid) sizes.set(oid, new GitError(`git cat-file --batch-check answered ${JSON.stringify(lines[i] ?? '')} for ${oid}; expected its type and size`, args, null, ''));
+      else sizes.set(oid, type === 'blob' && size !== undefined ? Number(size) : null);
+    });
+    return sizes;
+  }
+
   async function showMany(requests: readonly BlobRequest[]): Promise<(Uint8Array | null | Error)[]> {
     const answers: (Uint8Array | null | Error)[] = requests.map(() => null);
     const byCommit = new Map<string, number[]>();
@@ -247,6 +276,41 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     });
     const wanted = new Map<number, string>();
     const blobs = new Map<string, number>();
+    // Entries the diff named need no listing, only their sizes: one `cat-file --batch-check`.
+    const fromDiff = new Map<number, TreeEntry | null>();
+    for (const [commit, indexes] of byCommit) {
+      const rest = indexes.filter((i) => {
+        const key = knownKey(commit, requests[i]!.path);
+        if (!known.has(key)) return true;
+        fromDiff.set(i, known.get(key)!);
+        return false;
+      });
+      if (rest.length === 0) byCommit.delete(commit);
+      else byCommit.set(commit, rest);
+    }
+    let sizes = new Map<string, number | Error | null>();
+    if (fromDiff.size > 0) {
+      const oids = [...new Set([...fromDiff.values()].filter((e) => e !== null && e.kind === 'file').map((e) => e!.oid))];
+      sizes = await blobSizes(oids).catch((error: unknown) => new Map(oids.map((oid) => [oid, error instanceof Error ? error : new Error(String(error))])));
+    }
+    for (const [i, found] of fromDiff) {
+      if (found === null || found.kind !== 'file') continue;
+      const size = sizes.get(found.oid);
+      if (size instanceof Error) {
+        answers[i] = size;
+        continue;
+      }
+      place(i, { ...found, size: size ?? null });
+    }
+    function place(i: number, found: SizedEntry): void {
+      const path = requests[i]!.path;
+      if (found.size === null || !Number.isSafeInteger(found.size) || found.size > maxFile) {
+        answers[i] = new ContentTooLargeError(path, found.size ?? Number.NaN, maxFile);
+        return;
+      }
+      wanted.set(i, found.oid);
+      blobs.set(found.oid, found.size);
+    }
     for (const [commit, indexes] of byCommit) {
       let listed: Map<string, SizedEntry> | null;
       try {
@@ -260,12 +324,7 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
         const found = listed?.get(path);
         // Absent, a symlink, a submodule or a directory: not a regular file, never followed.
         if (found === undefined || found.kind !== 'file') continue;
-        if (found.size === null || !Number.isSafeInteger(found.size) || found.size > maxFile) {
-          answers[i] = new ContentTooLargeError(path, found.size ?? Number.NaN, maxFile);
-          continue;
-        }
-        wanted.set(i, found.oid);
-        blobs.set(found.oid, found.size);
+        place(i, found);
       }
     }
     const read = await readBlobs(blobs);
@@ -279,10 +338,17 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     },
     resolveCommit,
     async changedFiles(base, head) {
-      const args = ['diff', '--name-status', '-M', '-z', '--no-ext-diff', '--no-textconv', '--no-color', checkRevision(base), checkRevision(head), '--'];
+      // `--raw` is `--name-status` with both sides' modes and blob ids: the blobs are then read
+      // without listing any tree again.
+      const args = ['diff', '--raw', '--no-abbrev', '-M', '-z', '--no-ext-diff', '--no-textconv', '--no-color', checkRevision(base), checkRevision(head), '--'];
       const result = await run(args, maxList);
       if (result.code !== 0) throw failed(args, result);
-      return parseNameStatus(result.stdout.toString('utf8'));
+      const records = parseRawDiff(result.stdout.toString('utf8'));
+      for (const record of records) {
+        remember(base, record.basePath, record.baseEntry);
+        remember(head, record.file.path, record.headEntry);
+      }
+      return records.map((record) => record.file);
     },
     entry,
     async show(commit, path) {
@@ -355,6 +421,18 @@ function parseBatch(output: Buffer, oids: string[], read: Map<string, Uint8Array
   }
 }
 
+/**
+ * The gate's content source over a git reader: single reads with `show`, and every version of a
+ * run in one `showMany` (for the files `changedFiles` named, one `cat-file --batch-check` and
+ * one `cat-file --batch`, however many files).
+ */
+export function gitContentSource(git: GitReader): ContentSource {
+  return {
+    read: (ref, path) => git.show(ref, path),
+    readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
+  };
+}
+
 /** A throwaway repository the demo and tests commit trees into. */
 export interface ScratchRepository {
   /** `git init` with `main` as the branch. */
@@ -385,6 +463,55 @@ export function createScratchRepository(cwd: string, options: Pick<GitReaderOpti
       return must(['rev-parse', 'HEAD']);
     },
   };
+}
+
+/** A full commit id (SHA-1 or SHA-256). */
+const FULL_ID = /^(?:[0-9a-f]{40}|[0-9a-f]{64})$/;
+
+/** One record of `git diff --raw -z`: the changed file, and its tree entry on each side (null where absent). */
+export interface RawDiffRecord {
+  file: ChangedFile;
+  /** Path at base (the old path of a rename); null for an added or copied file. */
+  basePath: string | null;
+  baseEntry: TreeEntry | null;
+  headEntry: TreeEntry | null;
+}
+
+function rawEntry(mode: string, oid: string): TreeEntry | null {
+  if (/^0+$/.test(mode)) return null;
+  const kind: TreeEntryKind = mode === '120000' ? 'symlink' : mode === '160000' ? 'submodule' : mode.startsWith('04') ? 'directory' : 'file';
+  return { kind, mode, oid };
+}
+
+/**
+ * Parses `git diff --raw --no-abbrev -z` output: `:<old mode> <new mode> <old id> <new id>
+ * <status>` NUL path NUL, or for renames and copies NUL old NUL new NUL. The files are what
+ * `parseNameStatus` gives for the same diff; the entries are each side's mode and blob id.
+ */
+export function parseRawDiff(output: string): RawDiffRecord[] {
+  const fields = output.split('\u0000');
+  if (fields[fields.length - 1] === '') fields.pop();
+  const records: RawDiffRecord[] = [];
+  for (let i = 0; i < fields.length;) {
+    const header = fields[i]!;
+    const [oldMode = '', newMode = '', oldId = '', newId = '', status = ''] = header.replace(/^:/, '').split(' ');
+    if (!header.startsWith(':') || status === '') throw new GitError(`git diff --raw record ${JSON.stringify(header)} is not "<modes> <ids> <status>"; expected a raw diff header`, [], null, '');
+    const letter = status.charAt(0);
+    const paths = letter === 'R' || letter === 'C' ? 2 : 1;
+    const names = fields.slice(i + 1, i + 1 + paths);
+    // The name-status parser decides statuses and reports a record cut short.
+    const [file] = parseNameStatus([status, ...names].join('\u0000') + '\u0000');
+    if (file === undefined) throw new GitError(`git diff output ends after status ${JSON.stringify(status)}; expected a path`, [], null, '');
+    const basePath = letter === 'A' || letter === 'C' ? null : names[0]!;
+    records.push({
+      file,
+      basePath,
+      baseEntry: basePath === null ? null : rawEntry(oldMode, oldId),
+      headEntry: letter === 'D' ? null : rawEntry(newMode, newId),
+    });
+    i += 1 + paths;
+  }
+  return records;
 }
 
 /**

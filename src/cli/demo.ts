@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parseArgs } from 'node:util';
-import { createGitReader, createScratchRepository } from '../action/git.js';
+import { createGitReader, createScratchRepository, gitContentSource } from '../action/git.js';
 import { runGate } from '../core/gate.js';
 import type { Console } from './console.js';
 import { renderReport, writeHtmlReport } from './diff.js';
@@ -41,7 +41,7 @@ export async function runDemo(args: string[], io: Console): Promise<number> {
     await replaceTree(repo, join(demo, 'head'));
     const head = await scratch.commitAll('Serve Quill Mini at 256k and give Quill 8B a longer context');
     const git = createGitReader(repo);
-    const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
+    const report = await runGate(gitContentSource(git), {
       base, head, changes: await git.changedFiles(base, head), policyPath: '.github/context-reach.yml',
     });
     io.out(renderReport(report, ['markdown', 'text', 'json'].includes(format) ? format : 'markdown', io));

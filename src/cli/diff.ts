@@ -7,7 +7,7 @@ import { renderDiffText } from '../core/render/diff-text.js';
 import { renderGateJson } from '../core/render/gate-json.js';
 import { renderHtmlReport } from '../core/render/html-report.js';
 import type { GateReport } from '../core/compare/decide.js';
-import { createGitReader, type GitReader } from '../action/git.js';
+import { createGitReader, gitContentSource, type GitReader } from '../action/git.js';
 import type { Console } from './console.js';
 import { SERVING_FLAGS, UsageError, servingPatch } from './options.js';
 import { terminalStyle } from './terminal.js';
@@ -82,7 +82,7 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
   // Changes since head left the base (as a pull request shows them); the policy from the base itself.
   const start = (await git.mergeBase(base, head)) ?? base;
   const changes = await git.changedFiles(start, head);
-  const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
+  const report = await runGate(gitContentSource(git), {
     base: start, policyRef: base, head, changes,
     policyPath: values.policy ?? '.github/context-reach.yml',
     labels: values.label ?? [],

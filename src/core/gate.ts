@@ -6,6 +6,7 @@ import type { ServingPatch } from './model.js';
 import { decodeText } from './parse/source.js';
 import { DEFAULT_POLICY, isModelConfig, parsePolicy, resolvePolicy, type Policy } from './policy/index.js';
 import { attachRemedies } from './remedy/attach.js';
+import { createScanMemo, type ScanMemo } from './metrics/scan-memo.js';
 
 /** Reads a file's bytes at a commit; null when the file does not exist there. */
 export interface ContentSource {
@@ -23,9 +24,6 @@ export interface ContentRequest {
   path: string;
 }
 
-/** Files whose versions are read together before they are measured: bounds the bytes held at once. */
-const READ_WINDOW = 32;
-
 export interface GateRequest {
   base: string;
   head: string;
@@ -42,6 +40,11 @@ export interface GateRequest {
   overrides?: ServingPatch;
   /** How many files are read at once from a source without `readMany` (default: 8). */
   concurrency?: number;
+  /**
+   * The run's memory of positional computations (default: a new one for this run): every file,
+   * version and remedy proof asking the same computation shares one answer.
+   */
+  memo?: ScanMemo;
 }
 
 /** Thrown when the policy file on the base commit cannot be read: the gate fails closed. */
@@ -49,13 +52,13 @@ export class PolicyUnreadableError extends Error {}
 
 /** The measured version of one file from its bytes (or the error reading them); null when absent. */
 function inspectVersion(bytes: Uint8Array | null | Error, path: string, serving: ServingPatch,
-  overrides: ServingPatch | undefined, policyPath: string): FileReport | FileFailure | null {
+  overrides: ServingPatch | undefined, policyPath: string, memo: ScanMemo): FileReport | FileFailure | null {
   if (bytes instanceof Error) return toFailure(path, bytes);
   if (bytes === null) return null;
   try {
     return inspectModel(decodeText(bytes, path), path, {
       defaults: serving, defaultsOrigin: { key: `${policyPath} serving`, line: null },
-      overrides, overridesOrigin: { key: 'command line', line: null },
+      overrides, overridesOrigin: { key: 'command line', line: null }, memo,
     });
   } catch (error) {
     return toFailure(path, error);
@@ -97,9 +100,17 @@ function sameBytes(a: Uint8Array | null, b: Uint8Array | null): boolean {
  * The whole gate over a pull request: the policy from the base commit, the changed model
  * configs read at both commits, and one decision. Nothing from the pull request is executed;
  * files are read as data.
+ *
+ * Reads: the policy (at `policyRef`, and at head when the pull request changes it), then every
+ * version of every changed config in ONE `readMany` call (a source that batches answers it
+ * with a fixed number of processes, whatever the number of files); remedies are proven on the
+ * descriptions read here, never read again. Compute: positional metrics go through one memo for
+ * the run (`scan-memo.ts`), so a code and span repeated across files and versions, or proofs,
+ * is scanned once.
  */
 export async function runGate(source: ContentSource, request: GateRequest): Promise<GateReport> {
   const { base, head, policyPath } = request;
+  const memo = request.memo ?? createScanMemo();
   const basePolicyBytes = await source.read(request.policyRef ?? base, policyPath);
   let policy: Policy = DEFAULT_POLICY;
   if (basePolicyBytes !== null) {
@@ -115,30 +126,29 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   const deleted = relevant.filter((c) => c.status === 'deleted');
   const judged = relevant.filter((c) => c.status !== 'deleted');
 
+  // Head of every file, then base of every file not added: one read for the whole run.
+  const requests: ContentRequest[] = [
+    ...judged.map((change) => ({ ref: head, path: change.path })),
+    ...judged.filter((change) => change.status !== 'added').map((change) => ({ ref: base, path: change.previousPath ?? change.path })),
+  ];
+  const answers: (Uint8Array | null | Error)[] = requests.length === 0 ? [] : await readAll(source, requests, request.concurrency ?? 8);
   const configs: ChangedConfig[] = [];
-  for (let start = 0; start < judged.length; start += READ_WINDOW) {
-    const window = judged.slice(start, start + READ_WINDOW);
-    // Head of every file, then base of every file not added.
-    const requests: ContentRequest[] = [
-      ...window.map((change) => ({ ref: head, path: change.path })),
-      ...window.filter((change) => change.status !== 'added').map((change) => ({ ref: base, path: change.previousPath ?? change.path })),
-    ];
-    const answers = await readAll(source, requests, request.concurrency ?? 8);
-    let nextBase = window.length;
-    for (const [i, change] of window.entries()) {
-      const filePolicy = resolvePolicy(policy, change.path);
-      const judging: Judging = { limits: filePolicy.limits, rules: filePolicy.rules, standing: filePolicy.standing };
-      const headVersion = inspectVersion(answers[i]!, change.path, filePolicy.serving, request.overrides, policyPath)
-        ?? { path: change.path, line: null, message: `${change.path} is not a regular file at head (a symlink, a submodule or too large to read), so it was not judged` };
-      let baseVersion: FileReport | FileFailure | null = null;
-      let status = change.status;
-      if (change.status !== 'added') {
-        baseVersion = inspectVersion(answers[nextBase++]!, change.previousPath ?? change.path, filePolicy.serving, request.overrides, policyPath);
-        // A base version that is not there (a 404, a shallow history) is an added file.
-        if (baseVersion === null) status = 'added';
-      }
-      configs.push({ change: { ...change, status }, base: baseVersion, head: headVersion, judging });
+  let nextBase = judged.length;
+  for (const [i, change] of judged.entries()) {
+    const filePolicy = resolvePolicy(policy, change.path);
+    const judging: Judging = { limits: filePolicy.limits, rules: filePolicy.rules, standing: filePolicy.standing };
+    const headVersion = inspectVersion(answers[i]!, change.path, filePolicy.serving, request.overrides, policyPath, memo)
+      ?? { path: change.path, line: null, message: `${change.path} is not a regular file at head (a symlink, a submodule or too large to read), so it was not judged` };
+    answers[i] = null; // the bytes are no longer needed
+    let baseVersion: FileReport | FileFailure | null = null;
+    let status = change.status;
+    if (change.status !== 'added') {
+      baseVersion = inspectVersion(answers[nextBase]!, change.previousPath ?? change.path, filePolicy.serving, request.overrides, policyPath, memo);
+      answers[nextBase++] = null;
+      // A base version that is not there (a 404, a shallow history) is an added file.
+      if (baseVersion === null) status = 'added';
     }
+    configs.push({ change: { ...change, status }, base: baseVersion, head: headVersion, judging });
   }
 
   // `config.json` is a common name for things that are not models: when only the default globs
@@ -162,5 +172,5 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     notices,
     base,
     head,
-  }), judgedConfigs);
+  }), judgedConfigs, memo);
 }

@@ -1,6 +1,7 @@
 import type { Dialect, Finding, LocationMap, ModelSpec, ServingPatch, SourceLocation } from './model.js';
 import type { Metrics } from './metrics/types.js';
 import { computeMetrics } from './metrics/compute.js';
+import type { ScanMemo } from './metrics/scan-memo.js';
 import { NotAModelError } from './parse/errors.js';
 import { readModel } from './parse/read-model.js';
 import { specFindings } from './rules/spec-rules.js';
@@ -47,6 +48,8 @@ export interface InspectOptions {
   /** Serving overrides (CLI flags): they replace the file's values. */
   overrides?: ServingPatch;
   overridesOrigin?: SourceLocation;
+  /** The run's memory of positional computations (default: none, everything computed). */
+  memo?: ScanMemo;
 }
 
 /** Read, measure and judge one model config. Throws `ReadError` when the text cannot be read. */
@@ -62,7 +65,7 @@ export function inspectModel(text: string, path: string, options: InspectOptions
     ({ spec, locations } = applyServing(spec, locations, options.overrides, 'override',
       options.overridesOrigin ?? { key: 'command line', line: null }));
   }
-  const metrics = computeMetrics(spec);
+  const metrics = computeMetrics(spec, options.memo);
   const findings = [...read.findings, ...specFindings(spec, locations), ...metricFindings(spec, metrics, locations)];
   return { path, dialect: read.dialect, spec, locations, metrics, findings: sortFindings(findings) };
 }

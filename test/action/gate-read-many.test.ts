@@ -5,11 +5,11 @@ import { runGate, type ContentRequest, type ContentSource } from '../../src/core
 import { renderGateJson } from '../../src/core/render/gate-json.js';
 import { checkpointConfig, scenarioRepo, type ScenarioRepo, type Tree } from '../support/scenario-repo.js';
 
-// The gate reads the versions of many files with one batched call per window when the source
+// The gate reads the versions of all files with one batched call per run when the source
 // offers readMany (the git adapter does), and must judge exactly as it does reading file by file.
 
 const POLICY = 'limits:\n  fitSequences: { min: 1 }\nserving:\n  device-memory-gib: 80\n  sequences: 4\n';
-/** More files than one read window (32), so the batching crosses a window edge. */
+/** More files than the read window (32) the gate once had, so nothing depends on such a window. */
 const FILES = 45;
 
 let repo: ScenarioRepo;
@@ -42,7 +42,7 @@ async function judge(source: ContentSource): Promise<GateReport> {
 }
 
 describe('runGate(source, request) with a source that offers readMany', () => {
-  it('gives the same report as reading file by file, with one readMany call per window of 32 files', async () => {
+  it('gives the same report as reading file by file, with one readMany call for every version of every file', async () => {
     const git = createGitReader(repo.dir);
     let reads = 0;
     const batches: number[] = [];
@@ -56,12 +56,13 @@ describe('runGate(source, request) with a source that offers readMany', () => {
     const single = await judge({ read: (ref, path) => git.show(ref, path) });
     expect(renderGateJson(batched)).toBe(renderGateJson(single));
     expect(batched.files.length).toBeGreaterThan(32);
-    expect(batches).toHaveLength(Math.ceil(batched.files.length / 32));
+    expect(batches).toHaveLength(1);
+    expect(batches[0]).toBe(batched.files.length + batched.files.filter((f) => f.status !== 'added').length);
     // Only the policy is read on its own (once at base; head's is the same file unchanged).
     expect(reads).toBe(1);
   });
 
-  it('turns a readMany that throws into a failure of every file of the window, as failing reads are', async () => {
+  it('turns a readMany that throws into a failure of every file, as failing reads are', async () => {
     const git = createGitReader(repo.dir);
     const report = await judge({
       read: (ref, path) => git.show(ref, path),

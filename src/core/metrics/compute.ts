@@ -29,6 +29,7 @@ import { similarityScan } from './similarity-scan.js';
 import { declaredSpan, evaluationSpan, servedSpan, trainedSpan } from './spans.js';
 import { tokenBudget } from './token-budget.js';
 import { exposedPairs, unturnedPairs, wavelengthRange } from './wavelengths.js';
+import { viaMemo, type ScanMemo } from './scan-memo.js';
 
 export { evaluationSpan, trainedSpan } from './spans.js';
 
@@ -68,8 +69,38 @@ export function attentionScale(spec: ModelSpec): number | null {
   return 1;
 }
 
-/** Every metric of METRICS.md for one spec; null where a metric does not apply or its inputs are degenerate. */
-export function computeMetrics(spec: ModelSpec): Metrics {
+/** The metrics that depend on the frequencies and the spans alone: the positional scans and what they give. */
+export interface PositionalMetrics {
+  range: ReturnType<typeof wavelengthRange> | null;
+  similarity: ReturnType<typeof similarityScan>;
+  precision: Record<FloatFormat, PrecisionMetrics>;
+  unturnedPairs: number | null;
+  exposedPairs: number | null;
+}
+
+/**
+ * The positional metrics of a frequency plan (null: no rotary frequencies) over evaluation span
+ * `span` and trained span `trained`, both in tokens: a pure function of exactly these inputs, so
+ * a run computes it once per distinct code and span (see `scan-memo.ts`).
+ */
+export function positionalMetrics(theta: Float64Array | null, scaled: Float64Array | null, span: number | null, trained: number | null): PositionalMetrics {
+  const precision = {} as Record<FloatFormat, PrecisionMetrics>;
+  for (const format of ['fp32', 'bf16', 'fp16'] as const) precision[format] = numberFormatMetrics(format, scaled, span);
+  return {
+    range: scaled ? wavelengthRange(scaled) : null,
+    similarity: similarityScan(scaled, span),
+    precision,
+    unturnedPairs: scaled && trained !== null ? unturnedPairs(scaled, trained) : null,
+    exposedPairs: theta && scaled && trained !== null && span !== null ? exposedPairs(theta, scaled, trained, span) : null,
+  };
+}
+
+/**
+ * Every metric of METRICS.md for one spec; null where a metric does not apply or its inputs are
+ * degenerate. With a `memo`, the positional metrics are computed once per distinct input within
+ * the memo's run.
+ */
+export function computeMetrics(spec: ModelSpec, memo?: ScanMemo): Metrics {
   const declared = declaredSpan(spec);
   const served = servedSpan(spec);
   const span = evaluationSpan(spec);
@@ -77,12 +108,11 @@ export function computeMetrics(spec: ModelSpec): Metrics {
   const reachTokens = reach(spec, trained, declared);
 
   const plan = frequencyPlan(spec, span, trained);
-  const range = plan ? wavelengthRange(plan.scaled) : null;
-  const similarity = similarityScan(plan ? plan.scaled : null, span);
+  const positional = viaMemo(memo, 'positionalMetrics', positionalMetrics, plan ? plan.theta : null, plan ? plan.scaled : null, span, trained);
+  const { range, similarity } = positional;
+  // A copy per report, so no two reports share (and could change) one object.
   const precision = {} as Record<FloatFormat, PrecisionMetrics>;
-  for (const format of ['fp32', 'bf16', 'fp16'] as const) {
-    precision[format] = numberFormatMetrics(format, plan ? plan.scaled : null, span);
-  }
+  for (const format of ['fp32', 'bf16', 'fp16'] as const) precision[format] = { ...positional.precision[format] };
 
   const slopes = spec.position?.kind === 'alibi' ? alibiSlopes(spec.heads) : null;
 
@@ -103,8 +133,8 @@ export function computeMetrics(spec: ModelSpec): Metrics {
     extensionRatio: extensionRatio(span, trained),
     fastestWavelength: range ? range.fastest : null,
     slowestWavelength: range ? range.slowest : null,
-    unturnedPairs: plan && trained !== null ? unturnedPairs(plan.scaled, trained) : null,
-    exposedPairs: plan && trained !== null && span !== null ? exposedPairs(plan.theta, plan.scaled, trained, span) : null,
+    unturnedPairs: positional.unturnedPairs,
+    exposedPairs: positional.exposedPairs,
     separationFloor: similarity.separationFloor,
     separationFloorOffset: similarity.separationFloorOffset,
     discriminationSpan: similarity.discriminationSpan,

@@ -7,6 +7,7 @@ import { BUILT_IN_JUDGING } from '../compare/judging.js';
 import { isMetricPath, metricValue } from '../compare/metric-path.js';
 import type { FileReport } from '../inspect.js';
 import type { Finding } from '../model.js';
+import type { ScanMemo } from '../metrics/scan-memo.js';
 import { applyChange, changeEntries } from './apply-change.js';
 import { proofCost, proposeRemedy } from './propose.js';
 import { prove, remedyContext, type RemedyContext } from './prove.js';
@@ -45,20 +46,23 @@ export function combineRemedies(ctx: RemedyContext, findings: readonly Partial<R
   return { change, metrics, passes: proof.passes, stillBlocking: proof.blockers };
 }
 
-function withRemedies(file: FileDecision, config: ChangedConfig | undefined): FileDecision {
+function withRemedies(file: FileDecision, config: ChangedConfig | undefined, memo: ScanMemo | undefined): FileDecision {
   if (!file.findings.some((f) => f.severity === 'block')) return file;
   if (!file.head || !config) {
     return { ...file, findings: file.findings.map((f) => (f.severity === 'block' ? { ...f, ...UNREADABLE } : f)) };
   }
-  const ctx = remedyContext(file.head, file.base, config.judging, config.change);
+  const ctx = remedyContext(file.head, file.base, config.judging, config.change, memo);
   const findings: JudgedFinding[] = file.findings.map((f) => (f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f));
   return { ...file, findings, remedyTogether: combineRemedies(ctx, findings) };
 }
 
-/** The gate's report with a remedy (or the reason there is none) on every blocking finding. */
-export function attachRemedies(report: GateReport, configs: readonly ChangedConfig[]): GateReport {
+/**
+ * The gate's report with a remedy (or the reason there is none) on every blocking finding; with
+ * a `memo`, proofs reuse the positional computations of the run.
+ */
+export function attachRemedies(report: GateReport, configs: readonly ChangedConfig[], memo?: ScanMemo): GateReport {
   const byPath = new Map(configs.map((c) => [c.change.path, c]));
-  return { ...report, files: report.files.map((file) => withRemedies(file, byPath.get(file.path))) };
+  return { ...report, files: report.files.map((file) => withRemedies(file, byPath.get(file.path), memo)) };
 }
 
 /** A finding of `inspect`, with its remedy when it blocks. */
@@ -68,9 +72,9 @@ export type RemediedFinding = Finding & Partial<RemedyFields>;
  * One inspected file with a remedy on every blocking finding, judged with the built-in rules and
  * no base version; `remedyTogether` when two or more remedies apply at once.
  */
-export function remedyFileReport(report: FileReport): FileReport & { findings: RemediedFinding[]; remedyTogether: CombinedRemedy | null } {
+export function remedyFileReport(report: FileReport, memo?: ScanMemo): FileReport & { findings: RemediedFinding[]; remedyTogether: CombinedRemedy | null } {
   if (!report.findings.some((f) => f.severity === 'block')) return { ...report, remedyTogether: null };
-  const ctx = remedyContext(report, null, BUILT_IN_JUDGING, { status: 'added', path: report.path, previousPath: null });
+  const ctx = remedyContext(report, null, BUILT_IN_JUDGING, { status: 'added', path: report.path, previousPath: null }, memo);
   const findings: RemediedFinding[] = report.findings.map((f) => (f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f));
   return { ...report, findings, remedyTogether: combineRemedies(ctx, findings) };
 }

@@ -18,6 +18,7 @@ import { usableDeviceBytes } from '../metrics/memory-curve.js';
 import { firstNegativeOffset } from '../metrics/first-negative.js';
 import { baseFrequencies } from '../metrics/frequencies.js';
 import { similarityScan } from '../metrics/similarity-scan.js';
+import { viaMemo, type ScanMemo } from '../metrics/scan-memo.js';
 import { positiveCount } from '../metrics/sizes.js';
 import { evaluationSpan, trainedSpan } from '../metrics/spans.js';
 import { bytesPerElement, cacheDType, weightDType } from '../metrics/storage-bytes.js';
@@ -72,10 +73,10 @@ type Resolves = (spec: ModelSpec) => boolean;
 const none = (whyNot: string): KindOutcome => ({ remedy: null, whyNot });
 
 /** The value of a metric for a changed spec: cheaply when it needs no scan, else measured in full. */
-function valueOf(spec: ModelSpec, metric: string): number | null {
+function valueOf(spec: ModelSpec, metric: string, memo: ScanMemo | undefined): number | null {
   const light = lightMetric(spec, metric);
   if (light !== undefined) return light;
-  return isMetricPath(metric) ? metricValue(computeMetrics(spec), metric) : null;
+  return isMetricPath(metric) ? metricValue(computeMetrics(spec, memo), metric) : null;
 }
 
 /** Whether a changed spec clears the target finding, judged on the metrics it depends on. */
@@ -109,7 +110,7 @@ function resolver(ctx: RemedyContext, target: Target): Resolves | null {
     case 'limit-crossed': {
       const { limit, metric } = target;
       if (!limit || !metric) return null;
-      return (spec) => checkLimit(limit, target.baseValue, valueOf(spec, metric)).crossed.length === 0;
+      return (spec) => checkLimit(limit, target.baseValue, valueOf(spec, metric, ctx.memo)).crossed.length === 0;
     }
     default:
       return null;
@@ -306,10 +307,10 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
     const theta = scaledAt(base);
     if (theta === null) return { passes: false, cost: 1 };
     if (onlyMin) {
-      const found = firstNegativeOffset(theta, 1, Math.min(T, Math.ceil(limit.min as number)));
+      const found = viaMemo(ctx.memo, 'firstNegativeOffset', firstNegativeOffset, theta, 1, Math.min(T, Math.ceil(limit.min as number)));
       return { passes: found.offset === null, cost: found.elements };
     }
-    const scan = similarityScan(theta, T);
+    const scan = viaMemo(ctx.memo, 'similarityScan', similarityScan, theta, T);
     // A scan stopped at its work limit proves nothing: the base does not pass on it.
     if (!scan.complete) return { passes: false, cost: theta.length * T };
     const value = scan[metric as 'discriminationSpan' | 'separationFloor'];

@@ -10,6 +10,7 @@ import type { Judging } from '../compare/judging.js';
 import { sortFindings, type FileReport } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
 import type { Metrics } from '../metrics/types.js';
+import type { ScanMemo } from '../metrics/scan-memo.js';
 import type { Finding, ModelSpec } from '../model.js';
 import { metricFindings } from '../rules/metric-rules.js';
 import { specFindings } from '../rules/spec-rules.js';
@@ -41,6 +42,8 @@ export interface RemedyContext {
   findingsBefore: Set<string>;
   /** pair·offsets the proofs of this file may still scan (see `MAX_FILE_PROOF_WORK`). */
   work: { left: number };
+  /** The run's memory of positional computations, shared with the gate (default: none). */
+  memo?: ScanMemo;
 }
 
 /**
@@ -77,7 +80,7 @@ function blockingCounts(decision: FileDecision): Map<string, number> {
 }
 
 /** The context of one file: judged once as it is, so proofs compare like with like. */
-export function remedyContext(head: FileReport, base: FileReport | null, judging: Judging, change: ChangedFile): RemedyContext {
+export function remedyContext(head: FileReport, base: FileReport | null, judging: Judging, change: ChangedFile, memo?: ScanMemo): RemedyContext {
   const decision = decideFile({ change, base, head, judging }, false);
   return {
     head, base, judging, change,
@@ -85,6 +88,7 @@ export function remedyContext(head: FileReport, base: FileReport | null, judging
     blockingBefore: blockingCounts(decision),
     findingsBefore: new Set(decision.findings.map(identityOf)),
     work: { left: MAX_FILE_PROOF_WORK },
+    ...(memo ? { memo } : {}),
   };
 }
 
@@ -103,7 +107,7 @@ export interface Proof {
 
 /** A spec measured and judged as the gate would judge the head (waivers do not apply: the proof is of the severity). */
 export function judgeSpec(ctx: RemedyContext, spec: ModelSpec): { metrics: Metrics; decision: FileDecision } {
-  const metrics = computeMetrics(spec);
+  const metrics = computeMetrics(spec, ctx.memo);
   const findings = sortFindings([
     ...ctx.readFindings, ...specFindings(spec, ctx.head.locations), ...metricFindings(spec, metrics, ctx.head.locations),
   ]);
