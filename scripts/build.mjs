@@ -4,18 +4,15 @@ import { createRequire } from 'node:module';
 import { existsSync } from 'node:fs';
 import { cp, mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
-import { dirname, join, resolve } from 'node:path';
+import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { renderActionTables } from './action-tables.mjs';
+import { buildInputs } from './build-inputs.mjs';
 
 const require = createRequire(import.meta.url);
 const ncc = require('@vercel/ncc');
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
-// `--out DIR` builds the bundles into DIR and leaves the checkout alone (the package test packs
-// from there); without it dist/, schema/report.schema.json and the README's tables are written.
-const outAt = process.argv.indexOf('--out');
-const dist = outAt > 0 ? resolve(process.argv[outAt + 1] ?? '') : join(root, 'dist');
-const inPlace = outAt < 0;
+const dist = join(root, 'dist');
 
 const bundles = [
   { entry: 'src/cli/main.ts', out: 'cli.js' },
@@ -56,17 +53,19 @@ for (const { entry, out } of bundles) {
     await writeFile(target, name.endsWith(`.${out}`) ? await minifyChunk(name, String(asset.source)) : asset.source);
   }
   const chunks = Object.keys(assets ?? {}).filter((name) => name !== 'package.json');
-  console.log(`built ${inPlace ? 'dist' : dist}/${out} (${Math.round(code.length / 1024)} KiB${chunks.length > 0 ? `; loaded when needed: ${chunks.sort().join(', ')}` : ''})`);
+  console.log(`built dist/${out} (${Math.round(code.length / 1024)} KiB${chunks.length > 0 ? `; loaded when needed: ${chunks.sort().join(', ')}` : ''})`);
 }
 await writeFile(join(dist, 'package.json'), `${JSON.stringify({ type: 'module' }, null, 2)}\n`);
 
 // `demo` runs from an installed package too: its invented pull request ships inside dist/, where
 // the CLI looks for `fixtures/demo` next to itself.
 await cp(join(root, 'fixtures', 'demo'), join(dist, 'fixtures', 'demo'), { recursive: true });
+// What dist/ was built from (scripts/build-inputs.mjs): the package test refuses an older dist/.
+await writeFile(join(dist, 'build-info.json'), `${JSON.stringify({ inputs: buildInputs(root) }, null, 2)}\n`);
 console.log('copied fixtures/demo to dist/fixtures/demo (the demo of an installed package)');
 
 // schema/report.schema.json is written from the code's own schema of the report, so the two never drift.
-if (inPlace) {
+{
   const dir = await mkdtemp(join(tmpdir(), 'context-reach-schema-'));
   try {
     const { code } = await ncc(join(root, 'src/core/render/report-schema.ts'), { minify: false, sourceMap: false, quiet: true, target: 'es2022' });
@@ -80,7 +79,7 @@ if (inPlace) {
   }
 }
 
-if (inPlace && existsSync(join(root, 'action.yml'))) {
+if (existsSync(join(root, 'action.yml'))) {
   const readmePath = join(root, 'README.md');
   const readme = await readFile(readmePath, 'utf8');
   const next = renderActionTables(readme, await readFile(join(root, 'action.yml'), 'utf8'));

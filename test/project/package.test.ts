@@ -1,5 +1,5 @@
 import { execFile } from 'node:child_process';
-import { chmodSync, cpSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { delimiter, dirname, join, resolve } from 'node:path';
@@ -7,10 +7,13 @@ import { Ajv } from 'ajv';
 import { parse as parseYaml } from 'yaml';
 import { afterAll, describe, expect, it } from 'vitest';
 import { checkpointConfig } from '../support/scenario-repo.js';
+// @ts-expect-error: a plain ES module script without types
+import { buildInputs } from '../../scripts/build-inputs.mjs';
 
-// The package as a user gets it: built from the sources into a staging folder (never an old
-// dist/), packed with `npm pack`, installed from the tarball into an empty folder, run with npx.
-// Dependencies come from the registry or npm's cache (`--prefer-offline`); the bundles need none.
+// The package as a user gets it: packed with `npm pack` (after checking dist/ was built from
+// these sources, so an old dist/ is never tested), installed from the tarball into an empty
+// folder, run with npx. Dependencies come from the registry or npm's cache (`--prefer-offline`);
+// the bundles need none of them at run time.
 const ROOT = resolve(import.meta.dirname, '../..');
 const PACKAGE = JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { name: string; version: string; bin: Record<string, string> };
 const { validateWorkflow } = createRequire(import.meta.url)('@action-validator/core') as { validateWorkflow(src: string): { errors: unknown[] } };
@@ -51,15 +54,13 @@ afterAll(() => rmSync(work, { recursive: true, force: true }));
 
 describe('the packed package, installed from its tarball', () => {
   it('packs, installs, and then init in a fresh repository writes a valid policy and diff judges a changed config', async () => {
-    // Build into a staging folder with the files the package lists, and pack from there.
-    const stage = join(work, 'stage');
-    mkdirSync(stage);
-    await must(process.execPath, [join(ROOT, 'scripts/build.mjs'), '--out', join(stage, 'dist')], ROOT);
-    for (const file of ['package.json', 'README.md', 'LICENSE', 'schema']) cpSync(join(ROOT, file), join(stage, file), { recursive: true });
-    const packed = JSON.parse(await must('npm', ['pack', '--json', '--pack-destination', work], stage)) as { filename: string; files: { path: string }[] }[];
+    // The committed or freshly built dist/, never an older one: its fingerprint must be the sources'.
+    const built = JSON.parse(readFileSync(join(ROOT, 'dist/build-info.json'), 'utf8')) as { inputs: string };
+    expect(built.inputs, 'dist/ was built from other sources: run npm run build').toBe(buildInputs(ROOT));
+    const packed = JSON.parse(await must('npm', ['pack', '--json', '--pack-destination', work], ROOT)) as { filename: string; files: { path: string }[] }[];
     const shipped = packed[0]!.files.map((f) => f.path);
     expect(shipped.every((path) => /^(dist\/|schema\/|README\.md$|LICENSE$|package\.json$)/.test(path)), shipped.join(', ')).toBe(true);
-    expect(shipped).toEqual(expect.arrayContaining(['dist/cli.js', 'dist/index.js', 'dist/fixtures/demo/head/models/quill-8b/config.json',
+    expect(shipped).toEqual(expect.arrayContaining(['dist/cli.js', 'dist/index.js', 'dist/build-info.json', 'dist/fixtures/demo/head/models/quill-8b/config.json',
       'schema/policy.schema.json', 'schema/report.schema.json', 'LICENSE', 'README.md']));
 
     mkdirSync(installed);
