@@ -142,20 +142,21 @@ describe('the packed package, installed from its tarball', () => {
     const remote = join(work, 'remote.git');
     await git(work, 'init', '--quiet', '--bare', '--initial-branch=main', remote);
     await git(repo, 'checkout', '--quiet', '--', '.');
-    await git(repo, 'push', '--quiet', '-u', remote, 'main');
+    await git(repo, 'remote', 'add', 'origin', remote);
+    await git(repo, 'push', '--quiet', '-u', 'origin', 'main');
     write(repo, '.git/hooks/pre-push', block![1]!);
     chmodSync(join(repo, '.git/hooks/pre-push'), 0o755);
 
     write(repo, 'models/quill-b/config.json', checkpointConfig({ max_position_embeddings: 65536, num_key_value_heads: 8 }));
     await git(repo, 'commit', '--quiet', '-am', 'serve quill-b at 64k');
-    const refused = await sh('git', ['push', remote, 'main'], repo);
+    const refused = await sh('git', ['push', 'origin', 'main'], repo);
     expect(refused.code).not.toBe(0);
     expect(refused.stdout + refused.stderr).toMatch(/BLOCK/);
     expect(await git(repo, 'rev-parse', 'origin/main')).not.toBe(await git(repo, 'rev-parse', 'HEAD'));
 
     write(repo, 'models/quill-b/config.json', checkpointConfig({ max_position_embeddings: 8192, num_key_value_heads: 8 }));
     await git(repo, 'commit', '--quiet', '-am', 'back to 8k');
-    const pushed = await sh('git', ['push', remote, 'main'], repo);
+    const pushed = await sh('git', ['push', 'origin', 'main'], repo);
     expect(pushed.code, pushed.stderr).toBe(0);
   }, 300_000);
 
