@@ -2,11 +2,12 @@
 // README's action input/output tables from action.yml. CI rebuilds and fails when dist/ differs.
 import { createRequire } from 'node:module';
 import { existsSync } from 'node:fs';
-import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { cp, mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 import { renderActionTables } from './action-tables.mjs';
+import { buildInputs } from './build-inputs.mjs';
 
 const require = createRequire(import.meta.url);
 const ncc = require('@vercel/ncc');
@@ -55,6 +56,28 @@ for (const { entry, out } of bundles) {
   console.log(`built dist/${out} (${Math.round(code.length / 1024)} KiB${chunks.length > 0 ? `; loaded when needed: ${chunks.sort().join(', ')}` : ''})`);
 }
 await writeFile(join(dist, 'package.json'), `${JSON.stringify({ type: 'module' }, null, 2)}\n`);
+
+// `demo` runs from an installed package too: its invented pull request ships inside dist/, where
+// the CLI looks for `fixtures/demo` next to itself.
+await cp(join(root, 'fixtures', 'demo'), join(dist, 'fixtures', 'demo'), { recursive: true });
+// What dist/ was built from (scripts/build-inputs.mjs): the package test refuses an older dist/.
+await writeFile(join(dist, 'build-info.json'), `${JSON.stringify({ inputs: buildInputs(root) }, null, 2)}\n`);
+console.log('copied fixtures/demo to dist/fixtures/demo (the demo of an installed package)');
+
+// schema/report.schema.json is written from the code's own schema of the report, so the two never drift.
+{
+  const dir = await mkdtemp(join(tmpdir(), 'context-reach-schema-'));
+  try {
+    const { code } = await ncc(join(root, 'src/core/render/report-schema.ts'), { minify: false, sourceMap: false, quiet: true, target: 'es2022' });
+    const file = join(dir, 'report-schema.mjs');
+    await writeFile(file, code);
+    const { publishedReportSchema } = await import(pathToFileURL(file).href);
+    await writeFile(join(root, 'schema', 'report.schema.json'), `${JSON.stringify(publishedReportSchema(), null, 2)}\n`);
+    console.log('wrote schema/report.schema.json');
+  } finally {
+    await rm(dir, { recursive: true, force: true });
+  }
+}
 
 if (existsSync(join(root, 'action.yml'))) {
   const readmePath = join(root, 'README.md');

@@ -543,3 +543,51 @@ export function parseNameStatus(output: string): ChangedFile[] {
   }
   return files;
 }
+
+/** Git calls about the working tree, for the CLI's local runs (`diff` before a push). */
+export interface WorktreeGit {
+  /** Absolute path of the repository's top folder (`git rev-parse --show-toplevel`). */
+  topLevel(): Promise<string>;
+  /** Commit of the current branch's upstream (`@{upstream}`); null without one or on a detached HEAD. */
+  upstream(): Promise<string | null>;
+  /**
+   * Tracked files that differ between `base` and the working tree, staged and unstaged alike
+   * (`git diff --name-status -M -z BASE`); untracked files are not part of it until added.
+   */
+  changedSince(base: string): Promise<ChangedFile[]>;
+  /** Files git knows in the working tree: tracked, plus untracked ones not ignored (`ls-files -co --exclude-standard`). */
+  listFiles(): Promise<string[]>;
+}
+
+export function createWorktreeGit(cwd: string, options: Pick<GitReaderOptions, 'git' | 'timeoutMs' | 'maxListBytes'> = {}): WorktreeGit {
+  const run = runner(cwd, options.git ?? 'git', options.timeoutMs ?? 30_000);
+  const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
+  return {
+    async topLevel() {
+      const args = ['rev-parse', '--show-toplevel'];
+      const result = await run(args, 64 * 1024);
+      if (result.code !== 0) throw failed(args, result);
+      return result.stdout.toString('utf8').trim();
+    },
+    async upstream() {
+      const args = ['rev-parse', '--verify', '--quiet', '@{upstream}^{commit}'];
+      const result = await run(args, 4096);
+      if (result.code === 0) return result.stdout.toString('utf8').trim();
+      // No upstream configured, a detached HEAD, or an upstream whose ref is gone.
+      if (result.code === 1 || /upstream|does not point to a branch|no such branch/i.test(result.stderr)) return null;
+      throw failed(args, result);
+    },
+    async changedSince(base) {
+      const args = ['diff', '--name-status', '-M', '-z', '--no-ext-diff', '--no-textconv', '--no-color', checkRevision(base), '--'];
+      const result = await run(args, maxList);
+      if (result.code !== 0) throw failed(args, result);
+      return parseNameStatus(result.stdout.toString('utf8'));
+    },
+    async listFiles() {
+      const args = ['ls-files', '-z', '--cached', '--others', '--exclude-standard', '--full-name'];
+      const result = await run(args, maxList);
+      if (result.code !== 0) throw failed(args, result);
+      return [...new Set(result.stdout.toString('utf8').split('\u0000').filter((path) => path !== ''))];
+    },
+  };
+}

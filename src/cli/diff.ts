@@ -10,6 +10,7 @@ import type { GateReport } from '../core/compare/decide.js';
 import { createGitReader, gitContentSource, type GitReader } from '../action/git.js';
 import type { Console } from './console.js';
 import { SERVING_FLAGS, UsageError, servingPatch } from './options.js';
+import { diffWorktree } from './diff-worktree.js';
 import { terminalStyle } from './terminal.js';
 
 export const DIFF_USAGE = `usage: context-reach diff [--base REF] [--head REF] [--policy FILE]
@@ -39,7 +40,7 @@ export function renderReport(report: GateReport, format: (typeof FORMATS)[number
   return renderDiffText(report, terminalStyle(io.stdout, io.env));
 }
 
-async function commitOf(git: GitReader, rev: string, flag: string): Promise<string> {
+export async function commitOf(git: GitReader, rev: string, flag: string): Promise<string> {
   const sha = await git.resolveCommit(rev);
   if (sha === null) throw new UsageError(`${flag} ${rev} names no commit in this repository`);
   return sha;
@@ -49,7 +50,7 @@ async function commitOf(git: GitReader, rev: string, flag: string): Promise<stri
  * Without `--base`: where the branch left the main line (the first of origin/HEAD, origin/main,
  * origin/master, main, master that exists), or the parent commit when already on it.
  */
-async function defaultBase(git: GitReader, head: string): Promise<string> {
+export async function defaultBase(git: GitReader, head: string): Promise<string> {
   for (const candidate of ['origin/HEAD', 'origin/main', 'origin/master', 'main', 'master']) {
     const tip = await git.resolveCommit(candidate);
     if (tip === null) continue;
@@ -61,7 +62,10 @@ async function defaultBase(git: GitReader, head: string): Promise<string> {
   return parent;
 }
 
-/** `diff`: the gate's decision between two commits of the git checkout in the working folder. */
+/**
+ * `diff`: the gate's decision between two commits of the git checkout in the working folder, or
+ * without `--head` between the base and the working tree (staged and unstaged changes).
+ */
 export async function runDiff(args: string[], io: Console): Promise<number> {
   const { values } = parseArgs({
     args, allowPositionals: false, strict: true,
@@ -77,7 +81,8 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
   if (!FAIL_ON.includes(failOn)) throw new UsageError(`--fail-on takes one of ${FAIL_ON.join(', ')}, got '${values['fail-on']}'`);
 
   const git = createGitReader(io.cwd);
-  const head = await commitOf(git, values.head ?? 'HEAD', '--head');
+  if (values.head === undefined) return diffWorktree(git, values, format, failOn, io);
+  const head = await commitOf(git, values.head, '--head');
   const base = values.base !== undefined ? await commitOf(git, values.base, '--base') : await defaultBase(git, head);
   // Changes since head left the base (as a pull request shows them); the policy from the base itself.
   const start = (await git.mergeBase(base, head)) ?? base;

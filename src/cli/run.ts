@@ -24,6 +24,10 @@ const COMMANDS: Record<string, () => Promise<Command>> = {
     const { DIFF_USAGE, runDiff } = await import('./diff.js');
     return { usage: DIFF_USAGE, run: (args, deps) => runDiff(args, deps.io) };
   },
+  init: async () => {
+    const { INIT_USAGE, runInit } = await import('./init.js');
+    return { usage: INIT_USAGE, run: (args, deps) => runInit(args, deps.io) };
+  },
   demo: async () => {
     const { runDemo } = await import('./demo.js');
     return { usage: DEMO_USAGE, run: (args, deps) => runDemo(args, deps.io) };
@@ -32,11 +36,14 @@ const COMMANDS: Record<string, () => Promise<Command>> = {
 
 async function usage(): Promise<string> {
   const { DIFF_USAGE } = await import('./diff.js');
+  const { INIT_USAGE } = await import('./init.js');
   return `context-reach: positional-range and context-budget review of transformer model configs
 
 ${INSPECT_USAGE}
 
 ${DIFF_USAGE}
+
+${INIT_USAGE}
 
 ${DEMO_USAGE}
 

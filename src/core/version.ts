@@ -1,2 +1,2 @@
 /** The tool's version, reported in JSON and SARIF (kept equal to package.json by a test). */
-export const VERSION = '0.1.0';
+export const VERSION = '1.0.0';

@@ -1,11 +1,13 @@
 import type { GateReport } from '../compare/decide.js';
 import { ESTIMATE_NOTICE } from './notice.js';
+import { VERSION } from '../version.js';
 
 /**
  * The versioned JSON report of the gate: the decision, and per file both versions' spec, metrics
  * and findings. Locations are left out (the findings carry key and line). Every blocking finding
  * carries `remedy` (`{change, metrics, raises}`, or null), `remedyWhyNot` and
- * `remedyAlternatives`; a file with two or more remedies carries `remedyTogether`.
+ * `remedyAlternatives`; a file with two or more remedies carries `remedyTogether`. `toolVersion` is
+ * the context-reach release that wrote it. Published as `schema/report.schema.json`.
  */
 export function renderGateJson(report: GateReport): string {
   const files = report.files.map((file) => ({
@@ -24,6 +26,7 @@ export function renderGateJson(report: GateReport): string {
   }));
   return `${JSON.stringify({
     version: report.version,
+    toolVersion: VERSION,
     notice: ESTIMATE_NOTICE,
     verdict: report.verdict,
     blocking: report.blocking,

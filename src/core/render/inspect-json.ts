@@ -1,5 +1,6 @@
 import type { FileFailure, FileReport } from '../inspect.js';
 import { ESTIMATE_NOTICE } from './notice.js';
+import { VERSION } from '../version.js';
 
 /** Version of the JSON documents context-reach writes; bumped on any incompatible change. */
 export const REPORT_VERSION = 1;
@@ -21,5 +22,5 @@ export function renderInspectJson(reports: FileReport[], failures: FileFailure[]
       error: { message: f.message, line: f.line },
     })),
   ];
-  return `${JSON.stringify({ version: REPORT_VERSION, notice: ESTIMATE_NOTICE, files }, null, 2)}\n`;
+  return `${JSON.stringify({ version: REPORT_VERSION, toolVersion: VERSION, notice: ESTIMATE_NOTICE, files }, null, 2)}\n`;
 }
