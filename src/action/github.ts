@@ -47,6 +47,8 @@ export interface PullRequestInfo {
   isFork: boolean;
   /** Files GitHub counts as changed (may exceed what the file list returns). */
   changedFiles: number;
+  /** `open`, or `closed` (merged pull requests too). */
+  state: 'open' | 'closed';
 }
 
 /** A pull request as GitHub's list gives it. */
@@ -331,6 +333,7 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
           labels: data.labels.map((label) => label.name),
           isFork: data.head.repo === null || data.head.repo.full_name !== data.base.repo.full_name,
           changedFiles: data.changed_files,
+          state: data.state === 'open' ? 'open' : 'closed',
         };
       });
     },

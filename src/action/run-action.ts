@@ -14,7 +14,7 @@ import type { GitReader } from './git.js';
 import { isPermissionError, publishComment, type GitHubClient, type GitHubClientOptions } from './github.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { runPublish } from './publish.js';
-import { SUMMARY_LIMIT, type RunnerOutput } from './runner-output.js';
+import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
 export interface ActionDeps {
@@ -173,7 +173,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   }
   for (const notice of gathered.notices) out.warning(notice);
   const summaryReport = runNotices.length > 0 ? { ...report, notices: [...report.notices, ...runNotices] } : report;
-  await out.summary(renderComment(summaryReport, { blobUrl, unannotated: omitted, limit: SUMMARY_LIMIT - 1024, ...html }));
+  await out.summary(fitSummary((limit) => renderComment(summaryReport, { blobUrl, unannotated: omitted, limit, ...html })));
   setOutputs(out, report, settings.reportJson, commentUrl);
   out.info(`context-reach verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings)`);
   if (failsCheck(report.verdict, settings.failOn)) {
