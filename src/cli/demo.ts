@@ -41,7 +41,7 @@ export async function runDemo(args: string[], io: Console): Promise<number> {
     await replaceTree(repo, join(demo, 'head'));
     const head = await scratch.commitAll('Serve Quill Mini at 256k and give Quill 8B a longer context');
     const git = createGitReader(repo);
-    const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
+    const report = await runGate({ read: (ref, path) => git.show(ref, path), exists: async (ref, path) => (await git.entry(ref, path)) !== null }, {
       base, head, changes: await git.changedFiles(base, head), policyPath: '.github/context-reach.yml',
     });
     io.out(renderReport(report, ['markdown', 'text', 'json'].includes(format) ? format : 'markdown', io));

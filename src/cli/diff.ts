@@ -81,7 +81,7 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
   // Changes since head left the base (as a pull request shows them); the policy from the base itself.
   const start = (await git.mergeBase(base, head)) ?? base;
   const changes = await git.changedFiles(start, head);
-  const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
+  const report = await runGate({ read: (ref, path) => git.show(ref, path), exists: async (ref, path) => (await git.entry(ref, path)) !== null }, {
     base: start, policyRef: base, head, changes,
     policyPath: values.policy ?? '.github/context-reach.yml',
     labels: values.label ?? [],

@@ -15,6 +15,11 @@ export interface ContentSource {
    * batches (git: a few processes for all files) offers it, others are read file by file.
    */
   readMany?(requests: readonly ContentRequest[]): Promise<(Uint8Array | null | Error)[]>;
+  /**
+   * Whether anything (a file, a symlink, a directory, a submodule) is at `path`: where `read` gives
+   * null for a path that does exist, the policy there fails closed instead of counting as absent.
+   */
+  exists?(ref: string, path: string): Promise<boolean>;
 }
 
 /** One file at one commit. */
@@ -46,6 +51,13 @@ export interface GateRequest {
 
 /** Thrown when the policy file on the base commit cannot be read: the gate fails closed. */
 export class PolicyUnreadableError extends Error {}
+
+/**
+ * Thrown when a file's base version exists but could not be read (the API kept failing, git
+ * failed, it is too large): judging the head alone would drop every base-against-head rule, so
+ * the gate fails closed and names the file and the reason.
+ */
+export class BaseUnreadableError extends Error {}
 
 /** The measured version of one file from its bytes (or the error reading them); null when absent. */
 function inspectVersion(bytes: Uint8Array | null | Error, path: string, serving: ServingPatch,
@@ -104,6 +116,9 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   let policy: Policy = DEFAULT_POLICY;
   if (basePolicyBytes !== null) {
     policy = parsePolicy(decodeText(basePolicyBytes, policyPath), policyPath);
+  } else if (source.exists && await source.exists(request.policyRef ?? base, policyPath)) {
+    // A symlink, a directory or a submodule where the policy belongs is not "no policy".
+    throw new PolicyUnreadableError(`${policyPath} exists on the base commit but is not a regular file (a symbolic link, a directory or a submodule); expected the policy as a regular file, or nothing at that path`);
   }
   const headPolicyBytes = request.changes.some((c) => c.path === policyPath || c.previousPath === policyPath)
     ? await source.read(head, policyPath)
@@ -133,7 +148,12 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
       let baseVersion: FileReport | FileFailure | null = null;
       let status = change.status;
       if (change.status !== 'added') {
-        baseVersion = inspectVersion(answers[nextBase++]!, change.previousPath ?? change.path, filePolicy.serving, request.overrides, policyPath);
+        const baseAnswer = answers[nextBase++]!;
+        const basePath = change.previousPath ?? change.path;
+        if (baseAnswer instanceof Error) {
+          throw new BaseUnreadableError(`${basePath} could not be read at base ${base}: ${baseAnswer.message}. Its head cannot be judged against it, so the check fails until it can be read (re-run the job)`);
+        }
+        baseVersion = inspectVersion(baseAnswer, basePath, filePolicy.serving, request.overrides, policyPath);
         // A base version that is not there (a 404, a shallow history) is an added file.
         if (baseVersion === null) status = 'added';
       }
