@@ -6,6 +6,7 @@ import type { ServingPatch } from './model.js';
 import { decodeText } from './parse/source.js';
 import { DEFAULT_POLICY, isModelConfig, parsePolicy, resolvePolicy, type Policy } from './policy/index.js';
 import { attachRemedies } from './remedy/attach.js';
+import { pairMoves } from './pair-moves.js';
 
 /** Reads a file's bytes at a commit; null when the file does not exist there. */
 export interface ContentSource {
@@ -127,7 +128,7 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
 
   const relevant = request.changes.filter((c) =>
     isModelConfig(policy, c.path) || (c.previousPath !== null && isModelConfig(policy, c.previousPath)));
-  const deleted = relevant.filter((c) => c.status === 'deleted');
+  let deleted = relevant.filter((c) => c.status === 'deleted');
   const judged = relevant.filter((c) => c.status !== 'deleted');
 
   const configs: ChangedConfig[] = [];
@@ -159,6 +160,33 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
       }
       configs.push({ change: { ...change, status }, base: baseVersion, head: headVersion, judging });
     }
+  }
+
+  // A config moved and rewritten shows as deleted plus added: pair them by the model they
+  // describe and judge the pair as a change (`src/core/pair-moves.ts`).
+  const arrived = configs.filter((c) => c.change.status === 'added' && c.head !== null && 'spec' in c.head);
+  if (arrived.length > 0 && deleted.length > 0) {
+    const answers = await readAll(source, deleted.map((change) => ({ ref: base, path: change.path })), request.concurrency ?? 8);
+    const gone = new Map<string, FileReport>();
+    deleted.forEach((change, i) => {
+      const answer = answers[i]!;
+      if (answer instanceof Error) {
+        throw new BaseUnreadableError(`${change.path} (deleted) could not be read at base ${base}: ${answer.message}. It may have moved to an added file, which cannot be judged against it, so the check fails until it can be read (re-run the job)`);
+      }
+      const version = inspectVersion(answer, change.path, resolvePolicy(policy, change.path).serving, request.overrides, policyPath);
+      if (version !== null && 'spec' in version) gone.set(change.path, version);
+    });
+    const moves = pairMoves(
+      [...gone.values()].map((version) => ({ path: version.path, spec: version.spec })),
+      arrived.map((config) => ({ path: config.change.path, spec: (config.head as FileReport).spec })),
+    );
+    for (const move of moves) {
+      const config = arrived.find((c) => c.change.path === move.to)!;
+      config.change = { ...config.change, status: 'renamed', previousPath: move.from };
+      config.base = gone.get(move.from)!;
+    }
+    const moved = new Set(moves.map((move) => move.from));
+    deleted = deleted.filter((change) => !moved.has(change.path));
   }
 
   // `config.json` is a common name for things that are not models: when only the default globs
