@@ -60,6 +60,12 @@ export interface GitReader {
   showMany(requests: readonly BlobRequest[]): Promise<(Uint8Array | null | Error)[]>;
   /** Best common ancestor of two commits, or null when they share none. */
   mergeBase(a: string, b: string): Promise<string | null>;
+  /**
+   * Fetches these commits (full ids) from the `origin` remote with `--depth=1`: one request for
+   * every file of both sides, where the checkout is a repository whose remote answers (the
+   * credentials `actions/checkout` leaves). Resolves false, never throws, when it cannot.
+   */
+  fetchCommits(commits: readonly string[], timeoutMs?: number): Promise<boolean>;
 }
 
 /** One file to read at one commit. */
@@ -357,6 +363,18 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
       return answer ?? null;
     },
     showMany,
+    async fetchCommits(commits, timeoutMs = 120_000) {
+      if (commits.length === 0 || commits.some((commit) => !/^([0-9a-f]{40}|[0-9a-f]{64})$/.test(commit))) return false;
+      try {
+        const remote = await run(['remote', 'get-url', 'origin'], 64 * 1024);
+        if (remote.code !== 0) return false;
+        const fetchRun = runner(cwd, git, timeoutMs);
+        const result = await fetchRun(['-c', 'protocol.version=2', 'fetch', '--quiet', '--no-tags', '--no-recurse-submodules', '--no-write-fetch-head', '--depth=1', 'origin', ...new Set(commits)], 1024 * 1024);
+        return result.code === 0;
+      } catch {
+        return false;
+      }
+    },
     async mergeBase(a, b) {
       const args = ['merge-base', checkRevision(a), checkRevision(b)];
       const result = await run(args, 4096);
@@ -430,6 +448,7 @@ export function gitContentSource(git: GitReader): ContentSource {
   return {
     read: (ref, path) => git.show(ref, path),
     readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
+    exists: async (ref, path) => (await git.entry(ref, path)) !== null,
   };
 }
 

@@ -47,6 +47,8 @@ export interface PullRequestInfo {
   isFork: boolean;
   /** Files GitHub counts as changed (may exceed what the file list returns). */
   changedFiles: number;
+  /** `open`, or `closed` (merged pull requests too). */
+  state: 'open' | 'closed';
 }
 
 /** A pull request as GitHub's list gives it. */
@@ -71,8 +73,28 @@ export interface GitHubClient {
    * Throws `ContentTooLargeError` past `MAX_CONFIG_BYTES` without downloading the file.
    */
   getFileContent(owner: string, repo: string, path: string, ref: string): Promise<Uint8Array | null>;
-  /** The oldest comment whose body starts with `marker`, written by the action's identity. */
+  /** Whether anything (a file, a symlink, a directory, a submodule) is at `path` in `ref`: false only on a 404. */
+  pathExists(owner: string, repo: string, path: string, ref: string): Promise<boolean>;
+  /** The oldest comment whose body starts with `marker`, written by the token's own identity; null when that identity is not known. */
   findComment(owner: string, repo: string, issueNumber: number, marker: string): Promise<Comment | null>;
+  /** Every comment whose body starts with `marker` written by `login`, oldest first. */
+  listMarkedComments(owner: string, repo: string, issueNumber: number, marker: string, login: string): Promise<Comment[]>;
+  /** Deletes a comment; a comment already gone counts as deleted. */
+  deleteComment(owner: string, repo: string, commentId: number): Promise<void>;
+  /**
+   * The login the token acts as, asked once: `GET /user` for a user's token, and for an app's
+   * installation token (which `GET /user` refuses with 403) GraphQL's `viewer`, which gives the
+   * app's bot account (`<app>[bot]`). Null when neither answers.
+   */
+  identity(): Promise<string | null>;
+  /** The merge base of `base` and `head` (the compare API's `merge_base_commit`). */
+  mergeBase(owner: string, repo: string, base: string, head: string): Promise<string>;
+  /**
+   * Every path that differs between two commits, from their recursive git trees (two requests,
+   * whatever the number of files; no rename detection). Throws `ApiError` when GitHub cuts a tree
+   * short (`truncated`), so a partial list is never taken for the whole.
+   */
+  listChangesBetween(owner: string, repo: string, base: string, head: string): Promise<ChangedFile[]>;
   /** A comment by id, null when it was deleted. */
   getComment(owner: string, repo: string, commentId: number): Promise<Comment | null>;
   /**
@@ -98,8 +120,8 @@ export interface GitHubClientOptions {
   baseUrl?: string;
   log: ClientLog;
   /**
-   * Login whose comments `findComment` may take over (default: `null`, any bot account:
-   * the workflow token comments as `github-actions[bot]`, an app token as `<app>[bot]`).
+   * Login whose comments `findComment` may take over (default: `null`, the identity the token
+   * authenticates as, see `identity`); never any other account, bot or not.
    */
   commentAuthor?: string | null;
   /** Milliseconds per second of every wait GitHub asks for; tests shrink it (default: `1000`). */
@@ -237,10 +259,61 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     }
   }
 
-  const isOurs = (comment: { body?: string | null; user?: { login: string; type?: string } | null }, marker: string): boolean => {
-    if (!(comment.body ?? '').startsWith(marker) || !comment.user) return false;
-    return commentAuthor !== null ? comment.user.login === commentAuthor : comment.user.type === 'Bot';
-  };
+  let identityAsked: Promise<string | null> | null = null;
+  const identity = (): Promise<string | null> => identityAsked ??= (async () => {
+    if (commentAuthor !== null) return commentAuthor;
+    try {
+      return await call('read the authenticated user', async () => (await octokit.rest.users.getAuthenticated()).data.login);
+    } catch (error) {
+      // An installation token (the workflow's own, or an app's) may not read /user: 403.
+      if (!(error instanceof ApiError) || (error.status !== 403 && error.status !== 401 && error.status !== 404)) throw error;
+    }
+    try {
+      return await call('read the authenticated identity (GraphQL viewer)', async () => {
+        const answer = await octokit.graphql<{ viewer?: { login?: unknown } }>('query { viewer { login } }');
+        return typeof answer.viewer?.login === 'string' && answer.viewer.login !== '' ? answer.viewer.login : null;
+      });
+    } catch (error) {
+      log.warn(`Could not tell which account the token acts as (${error instanceof Error ? error.message : String(error)}); the report comment is recognised by the author of the comment this run writes.`);
+      return null;
+    }
+  })();
+
+  const isOurs = (comment: { body?: string | null; user?: { login: string } | null }, marker: string, login: string): boolean =>
+    (comment.body ?? '').startsWith(marker) && comment.user?.login === login;
+
+  const markedComments = (owner: string, repo: string, issueNumber: number, marker: string, login: string, firstOnly: boolean) =>
+    call(`list comments of #${issueNumber}`, async () => {
+      const found: Comment[] = [];
+      let pages = 0;
+      for await (const page of octokit.paginate.iterator(octokit.rest.issues.listComments, { owner, repo, issue_number: issueNumber, per_page: 100 })) {
+        for (const comment of page.data) {
+          if (!isOurs(comment, marker, login)) continue;
+          found.push(toComment(comment));
+          if (firstOnly) return found;
+        }
+        pages += 1;
+        if (pages >= MAX_COMMENT_PAGES) {
+          log.warn(`Stopped looking for the report comment after ${pages * 100} comments on #${issueNumber}.`);
+          break;
+        }
+      }
+      return found.sort((a, b) => a.id - b.id);
+    });
+
+  type TreeItem = { path?: string; mode?: string; type?: string; sha?: string };
+  const treeOf = (owner: string, repo: string, commit: string) => call(`read the tree of ${commit}`, async () => {
+    const { data } = await octokit.rest.git.getTree({ owner, repo, tree_sha: commit, recursive: 'true' });
+    if (data.truncated) {
+      throw new ApiError(0, `GitHub cut the file tree of ${commit} short (over its 100,000 entries or 7 MB), so the changed files cannot all be listed; check out with fetch-depth: 0 so the action reads the whole change from git`, 'read a tree');
+    }
+    const entries = new Map<string, string>();
+    for (const item of data.tree as TreeItem[]) {
+      if (item.type === 'tree' || typeof item.path !== 'string') continue;
+      entries.set(item.path, `${item.mode ?? ''} ${item.sha ?? ''}`);
+    }
+    return entries;
+  });
 
   return {
     listPullRequestFiles(owner, repo, number) {
@@ -279,20 +352,57 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
       });
     },
 
-    findComment(owner, repo, issueNumber, marker) {
-      return call(`list comments of #${issueNumber}`, async () => {
-        let pages = 0;
-        for await (const page of octokit.paginate.iterator(octokit.rest.issues.listComments, { owner, repo, issue_number: issueNumber, per_page: 100 })) {
-          const found = page.data.find((comment) => isOurs(comment, marker));
-          if (found) return toComment(found);
-          pages += 1;
-          if (pages >= MAX_COMMENT_PAGES) {
-            log.warn(`Stopped looking for the report comment after ${pages * 100} comments on #${issueNumber}.`);
-            break;
-          }
+    pathExists(owner, repo, path, ref) {
+      return call(`look for ${path} at ${ref}`, async () => {
+        try {
+          await octokit.rest.repos.getContent({ owner, repo, path, ref });
+          return true;
+        } catch (error) {
+          if ((error as { status?: number }).status === 404) return false;
+          throw error;
         }
-        return null;
       });
+    },
+
+    async findComment(owner, repo, issueNumber, marker) {
+      const login = await identity();
+      if (login === null) return null;
+      return (await markedComments(owner, repo, issueNumber, marker, login, true))[0] ?? null;
+    },
+
+    listMarkedComments(owner, repo, issueNumber, marker, login) {
+      return markedComments(owner, repo, issueNumber, marker, login, false);
+    },
+
+    deleteComment(owner, repo, commentId) {
+      return call(`delete comment ${commentId}`, async () => {
+        try {
+          await octokit.rest.issues.deleteComment({ owner, repo, comment_id: commentId });
+        } catch (error) {
+          if ((error as { status?: number }).status !== 404) throw error;
+        }
+      });
+    },
+
+    identity,
+
+    mergeBase(owner, repo, base, head) {
+      return call(`compare ${base}...${head}`, async () => {
+        const { data } = await octokit.rest.repos.compareCommitsWithBasehead({ owner, repo, basehead: `${base}...${head}`, per_page: 1 });
+        return data.merge_base_commit.sha;
+      });
+    },
+
+    async listChangesBetween(owner, repo, base, head) {
+      const [before, after] = [await treeOf(owner, repo, base), await treeOf(owner, repo, head)];
+      const changes: ChangedFile[] = [];
+      for (const [path, entry] of after) {
+        const old = before.get(path);
+        if (old === undefined) changes.push({ status: 'added', path, previousPath: null });
+        else if (old !== entry) changes.push({ status: 'modified', path, previousPath: null });
+      }
+      for (const path of before.keys()) if (!after.has(path)) changes.push({ status: 'deleted', path, previousPath: null });
+      return changes;
     },
 
     getComment(owner, repo, commentId) {
@@ -331,6 +441,7 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
           labels: data.labels.map((label) => label.name),
           isFork: data.head.repo === null || data.head.repo.full_name !== data.base.repo.full_name,
           changedFiles: data.changed_files,
+          state: data.state === 'open' ? 'open' : 'closed',
         };
       });
     },
@@ -352,11 +463,41 @@ function outcomeUnknown(error: unknown): boolean {
 /** Tries to create a comment at most this many times when the answers are lost, as the retry plugin would (1 + 3 retries). */
 const CREATE_ATTEMPTS = 4;
 
+/** What a duplicate report comment becomes when it cannot be deleted: no marker, so no run takes it for the report. */
+export function supersededBody(url: string): string {
+  return `_This report was replaced by [the current context-reach report](${url}); runs at the same time wrote two._`;
+}
+
 /**
  * Keeps exactly one report comment: updates the one found by `marker`, creates one when there
- * is none or the found one is gone (404, or 422 when a fresh read confirms it is gone).
+ * is none or the found one is gone (404, or 422 when a fresh read confirms it is gone). Then it
+ * converges: two runs at once may each have created one, so every marked comment of the same
+ * author is listed, the oldest is kept with this run's body and the others are deleted (or,
+ * when deleting is refused, lose the marker and point to the one kept).
  */
 export async function publishComment(
+  client: GitHubClient,
+  target: { owner: string; repo: string; issueNumber: number; marker: string; body: string },
+): Promise<{ comment: Comment; action: 'created' | 'updated' }> {
+  const written = await writeComment(client, target);
+  const { owner, repo, issueNumber, marker, body } = target;
+  const login = (await client.identity()) ?? written.comment.author;
+  if (login === null) return written;
+  const all = await client.listMarkedComments(owner, repo, issueNumber, marker, login);
+  if (all.length <= 1) return written;
+  const [oldest, ...others] = all as [Comment, ...Comment[]];
+  const kept = oldest.id === written.comment.id ? written.comment : await client.updateComment(owner, repo, oldest.id, body);
+  for (const other of others) {
+    try {
+      await client.deleteComment(owner, repo, other.id);
+    } catch {
+      await client.updateComment(owner, repo, other.id, supersededBody(kept.url)).catch(() => undefined);
+    }
+  }
+  return { comment: kept, action: written.action };
+}
+
+async function writeComment(
   client: GitHubClient,
   target: { owner: string; repo: string; issueNumber: number; marker: string; body: string },
 ): Promise<{ comment: Comment; action: 'created' | 'updated' }> {

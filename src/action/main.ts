@@ -1,9 +1,9 @@
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
-import { dirname } from 'node:path';
+import { readFile } from 'node:fs/promises';
 import { createFileSource } from '../cli/files.js';
 import { createGitReader } from './git.js';
 import { createGitHubClient } from './github.js';
 import { runAction } from './run-action.js';
+import { writeReportFile } from './write-report.js';
 import { createRunnerOutput } from './runner-output.js';
 import { readInput } from './workflow-commands.js';
 
@@ -15,10 +15,8 @@ runAction({
   out,
   readJson: async (path) => JSON.parse(await readFile(path, 'utf8')) as unknown,
   readFile: (path, maxBytes) => createFileSource(maxBytes).read(path),
-  writeFile: async (path, text) => {
-    await mkdir(dirname(path), { recursive: true });
-    await writeFile(path, text);
-  },
+  // Never through a symbolic link the pull request put in the checkout.
+  writeFile: (path, text) => writeReportFile(path, text, process.env.GITHUB_WORKSPACE ?? process.cwd()),
   createGit: (cwd) => createGitReader(cwd),
   createGitHub: (token, options) => createGitHubClient(token, options),
 }).catch((error: unknown) => {

@@ -14,7 +14,7 @@ import { COMMENT_MARKER } from '../core/render/notice.js';
 import { parseWorkflowRun, type WorkflowRunInfo } from './event.js';
 import { publishComment, type GitHubClient } from './github.js';
 import type { Settings } from './inputs.js';
-import { SUMMARY_LIMIT, type RunnerOutput } from './runner-output.js';
+import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Largest report file read, in bytes (default: `64 MiB`); a report that large is thousands of files. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
@@ -39,7 +39,7 @@ export class PublishError extends Error {
   }
 }
 
-/** The pull requests whose head is the run's head commit right now, as GitHub answers. */
+/** The open pull requests whose head is the run's head commit right now, as GitHub answers. */
 async function pullRequestsOfHead(api: GitHubClient, run: WorkflowRunInfo): Promise<number[]> {
   const candidates = new Set(run.pullNumbers);
   if (run.headLabel !== null) {
@@ -50,7 +50,8 @@ async function pullRequestsOfHead(api: GitHubClient, run: WorkflowRunInfo): Prom
   const confirmed: number[] = [];
   for (const number of [...candidates].sort((a, b) => a - b)) {
     const pull = await api.getPullRequest(run.owner, run.repo, number).catch(() => null);
-    if (pull !== null && pull.headSha === run.headSha) confirmed.push(number);
+    // A closed (or merged) pull request gets no new comment, whatever number the payload names.
+    if (pull !== null && pull.headSha === run.headSha && pull.state === 'open') confirmed.push(number);
   }
   return confirmed;
 }
@@ -108,7 +109,7 @@ export async function runPublish(deps: PublishDeps, settings: Settings & { publi
   } else {
     out.warning(`Pull requests ${pulls.map((n) => `#${n}`).join(', ')} all have head ${run.headSha}: the report was not published, as it cannot say which one it judged.`);
   }
-  await out.summary(renderComment(report, { blobUrl, limit: SUMMARY_LIMIT - 1024 }));
+  await out.summary(fitSummary((limit) => renderComment(report, { blobUrl, limit })));
   out.output('verdict', report.verdict);
   out.output('blocking', String(report.blocking));
   out.output('warnings', String(report.warnings));

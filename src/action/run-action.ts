@@ -14,7 +14,7 @@ import type { GitReader } from './git.js';
 import { isPermissionError, publishComment, type GitHubClient, type GitHubClientOptions } from './github.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { runPublish } from './publish.js';
-import { SUMMARY_LIMIT, type RunnerOutput } from './runner-output.js';
+import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
 export interface ActionDeps {
@@ -44,37 +44,61 @@ interface Changes {
   notices: string[];
 }
 
-/** Base and head, the changed files and a way to read them: local git when it has both commits, else the REST API. */
+/** Changes read from the local repository: the whole diff, every file through a few git processes. */
+async function localChanges(git: GitReader, baseSha: string, headSha: string, start: string | null): Promise<Changes> {
+  // Like the pull request's own diff: changes since head left the base branch, not the base
+  // branch's later commits. The policy still comes from the base branch's commit.
+  const from = start ?? (await git.mergeBase(baseSha, headSha).catch(() => null)) ?? baseSha;
+  return {
+    base: from, policyRef: baseSha, head: headSha, changes: await git.changedFiles(from, headSha),
+    source: {
+      read: (ref, path) => git.show(ref, path),
+      readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
+      exists: async (ref, path) => (await git.entry(ref, path)) !== null,
+    },
+    notices: [],
+  };
+}
+
+/**
+ * Base and head, the changed files and a way to read them: local git when it has both commits;
+ * else a shallow fetch of the merge base, base and head into the checkout (one request for every
+ * file); else the REST API, where a file list GitHub cuts short is completed from the two
+ * commits' trees, or the run fails closed.
+ */
 async function gatherChanges(event: EventInfo, base: string, git: GitReader, api: GitHubClient | null): Promise<Changes> {
   // A checkout without the history (or without git at all) falls back to the API.
   const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
   const [baseSha, headSha] = await Promise.all([local(base), local(event.head)]);
-  if (baseSha !== null && headSha !== null) {
-    // Like the pull request's own diff: changes since head left the base branch, not the base
-    // branch's later commits. The policy still comes from the base branch's commit.
-    const start = (await git.mergeBase(baseSha, headSha).catch(() => null)) ?? baseSha;
-    return {
-      base: start, policyRef: baseSha, head: headSha, changes: await git.changedFiles(start, headSha),
-      source: {
-        read: (ref, path) => git.show(ref, path),
-        readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
-      },
-      notices: [],
-    };
-  }
+  if (baseSha !== null && headSha !== null) return localChanges(git, baseSha, headSha, null);
   if (api === null || event.pullNumber === null) {
     throw new Error(`The checkout lacks commit ${baseSha === null ? base : event.head} and there is ${api === null ? 'no token' : 'no pull request'} to ask the API instead; check out with fetch-depth: 0, or give a base input that exists.`);
   }
+  const mergeBase = await api.mergeBase(event.owner, event.repo, base, event.head).catch(() => null);
+  if (mergeBase !== null && await git.fetchCommits([mergeBase, base, event.head])) {
+    const [fetchedBase, fetchedHead, fetchedStart] = await Promise.all([local(base), local(event.head), local(mergeBase)]);
+    if (fetchedBase !== null && fetchedHead !== null && fetchedStart !== null) return localChanges(git, fetchedBase, fetchedHead, fetchedStart);
+  }
   const listed = await api.listPullRequestFiles(event.owner, event.repo, event.pullNumber);
-  const notices: string[] = [];
+  let changes = listed.files;
+  let start = base;
   if (listed.truncated) {
-    const total = await api.getPullRequest(event.owner, event.repo, event.pullNumber).then((pr) => pr.changedFiles, () => null);
-    const unlisted = total !== null && total > listed.files.length ? `${(total - listed.files.length).toLocaleString('en-US')} of its ${total.toLocaleString('en-US')} changed files` : 'the files past that';
-    notices.push(`GitHub lists only the first ${listed.files.length.toLocaleString('en-US')} files of a pull request and this one has more: ${unlisted} were not judged. Check out with fetch-depth: 0 so the action reads the whole change from git.`);
+    // GitHub lists at most 3,000 files of a pull request (and compares at most 300): the two
+    // commits' trees list every path. When even they are cut short, the run fails closed.
+    const from = mergeBase ?? await api.mergeBase(event.owner, event.repo, base, event.head);
+    try {
+      changes = await api.listChangesBetween(event.owner, event.repo, from, event.head);
+    } catch (error) {
+      throw new Error(`GitHub lists only the first ${listed.files.length.toLocaleString('en-US')} files of this pull request, and the full list could not be read (${error instanceof Error ? error.message : String(error)}); files past that would go unjudged, so nothing is judged. Check out with fetch-depth: 0 so the action reads the whole change from git.`);
+    }
+    start = from;
   }
   return {
-    base, policyRef: base, head: event.head, changes: listed.files,
-    source: { read: (ref, path) => api.getFileContent(event.owner, event.repo, path, ref) }, notices,
+    base: start, policyRef: base, head: event.head, changes,
+    source: {
+      read: (ref, path) => api.getFileContent(event.owner, event.repo, path, ref),
+      exists: (ref, path) => api.pathExists(event.owner, event.repo, path, ref),
+    }, notices: [],
   };
 }
 
@@ -173,7 +197,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   }
   for (const notice of gathered.notices) out.warning(notice);
   const summaryReport = runNotices.length > 0 ? { ...report, notices: [...report.notices, ...runNotices] } : report;
-  await out.summary(renderComment(summaryReport, { blobUrl, unannotated: omitted, limit: SUMMARY_LIMIT - 1024, ...html }));
+  await out.summary(fitSummary((limit) => renderComment(summaryReport, { blobUrl, unannotated: omitted, limit, ...html })));
   setOutputs(out, report, settings.reportJson, commentUrl);
   out.info(`context-reach verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings)`);
   if (failsCheck(report.verdict, settings.failOn)) {

@@ -7,6 +7,7 @@ import { decodeText } from './parse/source.js';
 import { DEFAULT_POLICY, isModelConfig, parsePolicy, resolvePolicy, type Policy } from './policy/index.js';
 import { attachRemedies } from './remedy/attach.js';
 import { createScanMemo, type ScanMemo } from './metrics/scan-memo.js';
+import { pairMoves } from './pair-moves.js';
 
 /** Reads a file's bytes at a commit; null when the file does not exist there. */
 export interface ContentSource {
@@ -16,6 +17,11 @@ export interface ContentSource {
    * batches (git: a few processes for all files) offers it, others are read file by file.
    */
   readMany?(requests: readonly ContentRequest[]): Promise<(Uint8Array | null | Error)[]>;
+  /**
+   * Whether anything (a file, a symlink, a directory, a submodule) is at `path`: where `read` gives
+   * null for a path that does exist, the policy there fails closed instead of counting as absent.
+   */
+  exists?(ref: string, path: string): Promise<boolean>;
 }
 
 /** One file at one commit. */
@@ -49,6 +55,13 @@ export interface GateRequest {
 
 /** Thrown when the policy file on the base commit cannot be read: the gate fails closed. */
 export class PolicyUnreadableError extends Error {}
+
+/**
+ * Thrown when a file's base version exists but could not be read (the API kept failing, git
+ * failed, it is too large): judging the head alone would drop every base-against-head rule, so
+ * the gate fails closed and names the file and the reason.
+ */
+export class BaseUnreadableError extends Error {}
 
 /** The measured version of one file from its bytes (or the error reading them); null when absent. */
 function inspectVersion(bytes: Uint8Array | null | Error, path: string, serving: ServingPatch,
@@ -115,6 +128,9 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   let policy: Policy = DEFAULT_POLICY;
   if (basePolicyBytes !== null) {
     policy = parsePolicy(decodeText(basePolicyBytes, policyPath), policyPath);
+  } else if (source.exists && await source.exists(request.policyRef ?? base, policyPath)) {
+    // A symlink, a directory or a submodule where the policy belongs is not "no policy".
+    throw new PolicyUnreadableError(`${policyPath} exists on the base commit but is not a regular file (a symbolic link, a directory or a submodule); expected the policy as a regular file, or nothing at that path`);
   }
   const headPolicyBytes = request.changes.some((c) => c.path === policyPath || c.previousPath === policyPath)
     ? await source.read(head, policyPath)
@@ -123,7 +139,7 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
 
   const relevant = request.changes.filter((c) =>
     isModelConfig(policy, c.path) || (c.previousPath !== null && isModelConfig(policy, c.previousPath)));
-  const deleted = relevant.filter((c) => c.status === 'deleted');
+  let deleted = relevant.filter((c) => c.status === 'deleted');
   const judged = relevant.filter((c) => c.status !== 'deleted');
 
   // Head of every file, then base of every file not added: one read for the whole run.
@@ -143,12 +159,44 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     let baseVersion: FileReport | FileFailure | null = null;
     let status = change.status;
     if (change.status !== 'added') {
-      baseVersion = inspectVersion(answers[nextBase]!, change.previousPath ?? change.path, filePolicy.serving, request.overrides, policyPath, memo);
+      const baseAnswer = answers[nextBase]!;
       answers[nextBase++] = null;
+      const basePath = change.previousPath ?? change.path;
+      if (baseAnswer instanceof Error) {
+        throw new BaseUnreadableError(`${basePath} could not be read at base ${base}: ${baseAnswer.message}. Its head cannot be judged against it, so the check fails until it can be read (re-run the job)`);
+      }
+      baseVersion = inspectVersion(baseAnswer, basePath, filePolicy.serving, request.overrides, policyPath, memo);
       // A base version that is not there (a 404, a shallow history) is an added file.
       if (baseVersion === null) status = 'added';
     }
     configs.push({ change: { ...change, status }, base: baseVersion, head: headVersion, judging });
+  }
+
+  // A config moved and rewritten shows as deleted plus added: pair them by the model they
+  // describe and judge the pair as a change (`src/core/pair-moves.ts`).
+  const arrived = configs.filter((c) => c.change.status === 'added' && c.head !== null && 'spec' in c.head);
+  if (arrived.length > 0 && deleted.length > 0) {
+    const answers = await readAll(source, deleted.map((change) => ({ ref: base, path: change.path })), request.concurrency ?? 8);
+    const gone = new Map<string, FileReport>();
+    deleted.forEach((change, i) => {
+      const answer = answers[i]!;
+      if (answer instanceof Error) {
+        throw new BaseUnreadableError(`${change.path} (deleted) could not be read at base ${base}: ${answer.message}. It may have moved to an added file, which cannot be judged against it, so the check fails until it can be read (re-run the job)`);
+      }
+      const version = inspectVersion(answer, change.path, resolvePolicy(policy, change.path).serving, request.overrides, policyPath, memo);
+      if (version !== null && 'spec' in version) gone.set(change.path, version);
+    });
+    const moves = pairMoves(
+      [...gone.values()].map((version) => ({ path: version.path, spec: version.spec })),
+      arrived.map((config) => ({ path: config.change.path, spec: (config.head as FileReport).spec })),
+    );
+    for (const move of moves) {
+      const config = arrived.find((c) => c.change.path === move.to)!;
+      config.change = { ...config.change, status: 'renamed', previousPath: move.from };
+      config.base = gone.get(move.from)!;
+    }
+    const moved = new Set(moves.map((move) => move.from));
+    deleted = deleted.filter((change) => !moved.has(change.path));
   }
 
   // `config.json` is a common name for things that are not models: when only the default globs

@@ -330,7 +330,7 @@ describe('getPullRequest(owner, repo, number)', () => {
     addPull(7, [{ filename: 'a.json', status: 'added' }], { labels: ['context-waiver', 'infra'] });
     addPull(8, [], { headRepo: 'stranger/model-zoo' });
     expect(await client().getPullRequest(OWNER, REPO, 7)).toEqual({
-      number: 7, baseSha: BASE, headSha: HEAD, labels: ['context-waiver', 'infra'], isFork: false, changedFiles: 1,
+      number: 7, baseSha: BASE, headSha: HEAD, labels: ['context-waiver', 'infra'], isFork: false, changedFiles: 1, state: 'open',
     });
     expect((await client().getPullRequest(OWNER, REPO, 8)).isFork).toBe(true);
   });

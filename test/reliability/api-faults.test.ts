@@ -201,15 +201,14 @@ describe('pull requests with more files than the API lists (over 3,000)', () => 
     expect(report.notices).toEqual([]);
   }, 60_000);
 
-  it('without the history, says how many files were not judged, in the report and as a warning; never a silent pass', async () => {
+  it('without the history, completes the cut list from the two commits\' trees: every file judged, no notice', async () => {
     const result = await scenario({ ...manyFiles(), noHistory: true });
     expect(result.error).toBeNull();
     const report = JSON.parse(Object.values(result.written)[0]!);
-    expect(report.files.map((f: { path: string }) => f.path)).toEqual(['m0010/config.json']);
-    const notice = 'GitHub lists only the first 3,000 files of a pull request and this one has more: 500 of its 3,500 changed files were not judged. Check out with fetch-depth: 0 so the action reads the whole change from git.';
-    expect(report.notices).toEqual([notice]);
-    expect(result.out.log).toContainEqual({ level: 'warning', message: notice });
-    expect(reports(result)[0]!.body).toContain('500 of its 3,500 changed files were not judged');
+    expect(report.files.map((f: { path: string }) => f.path).sort()).toEqual(['m0010/config.json', 'm3200/config.json']);
+    expect(report.notices).toEqual([]);
+    expect(result.fake.calls('git/get-tree')).toHaveLength(2);
+    expect(result.out.outputs.verdict).toBe('block');
   }, 60_000);
 });
 

@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -23,6 +24,11 @@ export interface ScenarioOptions {
   inputs?: Record<string, string>;
   /** The checkout lacks the commits: the action must use the REST API (default: `false`). */
   noHistory?: boolean;
+  /**
+   * The checkout is a repository without the commits whose `origin` has them (what a depth-1
+   * checkout of another commit leaves): the action may fetch them (default: `false`).
+   */
+  emptyClone?: boolean;
   /** Comments already on the pull request (re-runs). */
   fake?: FakeGitHub;
   /** Prepare the fake API before the run (faults, extra state). */
@@ -36,6 +42,14 @@ export interface ScenarioResult {
   error: unknown;
   base: string;
   head: string;
+}
+
+/** A repository with no commits whose `origin` is `source`. */
+function emptyClone(source: string): string {
+  const dir = mkdtempSync(join(tmpdir(), 'context-reach-clone-'));
+  execFileSync('git', ['init', '-q'], { cwd: dir });
+  execFileSync('git', ['remote', 'add', 'origin', source], { cwd: dir });
+  return dir;
 }
 
 function pullFiles(base: Tree, head: Tree): FakePullFile[] {
@@ -76,7 +90,7 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
       env: {
         GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: 'event.json', GITHUB_API_URL: fake.url,
         GITHUB_SERVER_URL: 'https://github.example', RUNNER_TEMP: temp,
-        GITHUB_WORKSPACE: options.noHistory ? mkdtempSync(join(tmpdir(), 'context-reach-empty-')) : repo.dir,
+        GITHUB_WORKSPACE: options.emptyClone ? emptyClone(repo.dir) : options.noHistory ? mkdtempSync(join(tmpdir(), 'context-reach-empty-')) : repo.dir,
       },
       getInput: (name) => inputs[name] ?? '',
       out,

@@ -67,6 +67,12 @@ export interface FakeState {
   trees: Map<string, Map<string, FakeEntry>>;
   comments: FakeComment[];
   nextCommentId: number;
+  /** `ref:path` reads of contents that always answer 502, past every retry (default: none). */
+  failingReads?: Set<string>;
+  /** Commits whose recursive tree GitHub answers as `truncated` (default: none). */
+  truncatedTrees?: Set<string>;
+  /** `base...head` → merge base, where it is not `base` (default: none). */
+  mergeBases?: Map<string, string>;
 }
 
 /** An answer with this status instead of the real one; `effect` changes the state first (e.g. a deletion racing the request). */
@@ -364,6 +370,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       }
       case 'repos/get-content': {
         const ref = query.get('ref') ?? 'main';
+        if (state.failingReads?.has(`${ref}:${params.path}`)) return { status: 502, json: { message: 'Server Error' } };
         const found = lookup(ref, params.path);
         if (!found) return notFound('https://docs.github.com/rest/repos/contents#get-repository-content');
         if (/application\/vnd\.github(\.v3)?\.raw/.test(accept) && found.entry !== 'dir' && found.entry.type === 'file') {
@@ -381,6 +388,34 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
           return { status: 200, json: [...children].map(([path, entry]) => entryObject(path, entry, false)) };
         }
         return { status: 200, json: entryObject(found.path, found.entry, true) };
+      }
+      case 'users/get-authenticated': {
+        // An installation token (the workflow's, an app's) may not read /user (REST documentation, "Get the authenticated user").
+        if (state.tokenUser.type === 'Bot') return forbidden();
+        return { status: 200, json: deepMerge(sampleOf('public-user'), { ...(userObject(state.tokenUser) as object), user_view_type: 'public' }) };
+      }
+      case 'repos/compare-commits-with-basehead': {
+        const [base, head] = params.basehead.split('...');
+        if (!base || !head || !state.trees.has(base) || !state.trees.has(head)) return notFound();
+        // The fake keeps no commit graph: its pull requests' bases are their heads' ancestors.
+        const commit = (sha: string) => deepMerge(sampleOf('commit'), { sha, node_id: `C_${sha}` });
+        return {
+          status: 200,
+          json: deepMerge(sampleOf('commit-comparison'), {
+            base_commit: commit(base), merge_base_commit: commit(state.mergeBases?.get(`${base}...${head}`) ?? base),
+            status: 'ahead', ahead_by: 1, behind_by: 0, total_commits: 1, commits: [commit(head)], files: [],
+          }),
+        };
+      }
+      case 'git/get-tree': {
+        const tree = state.trees.get(params.tree_sha);
+        if (!tree) return notFound();
+        const entries = [...tree].map(([path, entry]) => {
+          if (entry.type === 'symlink') return { path, mode: '120000', type: 'blob', sha: blobSha(new TextEncoder().encode(entry.target)), size: entry.target.length };
+          if (entry.type === 'submodule') return { path, mode: '160000', type: 'commit', sha: '0'.repeat(40) };
+          return { path, mode: '100644', type: 'blob', sha: blobSha(entry.bytes), size: entry.bytes.byteLength };
+        });
+        return { status: 200, json: { sha: blobSha(new TextEncoder().encode(params.tree_sha)), url: `${url}/repos/${state.owner}/${state.repo}/git/trees/${params.tree_sha}`, truncated: state.truncatedTrees?.has(params.tree_sha) ?? false, tree: entries } };
       }
       case 'issues/list-comments': {
         const number = Number(params.issue_number);
@@ -443,6 +478,20 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     const body = Buffer.concat(chunks).toString('utf8');
     const method = req.method ?? 'GET';
     const parsed = new URL(req.url ?? '/', 'http://fake.invalid');
+    if (method === 'POST' && parsed.pathname === '/graphql') {
+      // GraphQL is not in the REST description; the one query the action sends is answered here.
+      const authorized = req.headers.authorization === `token ${state.token}` || req.headers.authorization === `Bearer ${state.token}`;
+      requests.push({ method, path: '/graphql', query: '', operationId: 'graphql', status: authorized ? 200 : 401, authorized, fault: false });
+      const queued = faults.get('graphql')?.shift();
+      const query = (JSON.parse(body || '{}') as { query?: string }).query ?? '';
+      if (!/^query \{ viewer \{ login \} \}$/.test(query)) mismatches.push({ method, url: '/graphql', operationId: 'graphql', problem: `unexpected GraphQL query ${JSON.stringify(query)}` });
+      if (queued && queued.kind === 'status') {
+        send(res, { status: queued.status, json: queued.body });
+        return;
+      }
+      send(res, authorized ? { status: 200, json: { data: { viewer: { login: state.tokenUser.login } } } } : { status: 401, json: { message: 'Bad credentials' } });
+      return;
+    }
     const check = checkRequest(method, parsed.pathname, parsed.searchParams, req.headers['content-type'], body);
     for (const problem of check.problems) mismatches.push({ method, url: req.url ?? '', operationId: check.operation?.operationId ?? null, problem });
     const authorized = req.headers.authorization === `token ${state.token}` || req.headers.authorization === `Bearer ${state.token}`;

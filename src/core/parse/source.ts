@@ -4,7 +4,7 @@
  * and the source text of every scalar, and it is built for untrusted text from forks: bounded
  * size, nesting and alias expansion, no prototype-altering keys, no binary text.
  */
-import { Composer, LineCounter, Parser, isAlias, isMap, isScalar, isSeq } from 'yaml';
+import { Composer, Lexer, LineCounter, Parser, isAlias, isMap, isScalar, isSeq } from 'yaml';
 import type { CST, Document, Node as YamlNode, YAMLError } from 'yaml';
 import { ReadError } from './errors.js';
 import { dottedKey, quoteText, quoteValue, truncate } from './quote.js';
@@ -37,6 +37,18 @@ export const MAX_ALIASES = 100;
 export const MAX_ALIAS_VALUES = 100_000;
 /** Longest text accepted, in UTF-16 code units (default: `8388608`, 8 Mi). */
 export const MAX_TEXT_LENGTH = 8 * 1024 * 1024;
+/**
+ * Mapping entries and list items a file may hold in all, counted on the syntax tree before any
+ * value is built (default: `50000`). The largest published configs hold two label maps of about
+ * 22,000 entries each (from memory: image classifiers over the 21,843 ImageNet-22k classes).
+ */
+export const MAX_ENTRIES = 50_000;
+/**
+ * Lexical tokens (keys, values, indicators, line breaks) read before the syntax tree is built
+ * (default: `8 × MAX_ENTRIES`): a key-value line is about seven, and the count stops the read
+ * of a file of tiny entries long before the parser would build them all.
+ */
+export const MAX_TOKENS = 8 * MAX_ENTRIES;
 
 /** Keys refused anywhere: tools that merge parsed objects would turn them into prototype changes. */
 export const FORBIDDEN_KEYS: readonly string[] = ['__proto__', 'constructor', 'prototype'];
@@ -79,19 +91,42 @@ export function parseSource(text: string, file: string): SourceDocument {
   const json = /\.json$/i.test(file);
   if (json) checkJson(text, file);
 
+  // A first, cheap pass: the lexer alone, stopped at MAX_TOKENS, bounds what the parser builds.
+  let lexemes = 0;
+  for (const lexeme of new Lexer().lex(text)) {
+    void lexeme;
+    if (++lexemes > MAX_TOKENS) {
+      throw new ReadError(file, null, `holds more than ${MAX_TOKENS} syntax tokens (keys, values and punctuation); a model file holds a few thousand, label maps a few hundred thousand at most`);
+    }
+  }
+
   const lineCounter = new LineCounter();
-  const tokens = Array.from(new Parser(lineCounter.addNewLine).parse(text));
   const lineAt = (offset: number): number => lineCounter.linePos(offset).line;
+  // Tokens are taken one top-level item at a time, and a second document stops the reading: a
+  // million empty documents cost one, not a million composed documents.
+  const tokens: CST.Token[] = [];
+  let documents = 0;
+  for (const token of new Parser(lineCounter.addNewLine).parse(text)) {
+    if (token.type === 'document' && ++documents > 1) {
+      throw new ReadError(file, lineAt(token.offset), 'holds more than one YAML document; a model file holds one');
+    }
+    tokens.push(token);
+  }
   // The composer recurses once per level; refusing deep input before it runs keeps the stack safe.
-  const deep = firstTooDeep(tokens);
-  if (deep !== null) {
-    throw new ReadError(file, lineAt(deep), `nesting is deeper than ${MAX_NESTING} levels of mappings and lists; a model file needs a handful`);
+  const shape = measureTree(tokens);
+  if (shape.tooDeep !== null) {
+    throw new ReadError(file, lineAt(shape.tooDeep), `nesting is deeper than ${MAX_NESTING} levels of mappings and lists; a model file needs a handful`);
+  }
+  if (shape.tooMany !== null) {
+    throw new ReadError(file, lineAt(shape.tooMany), `holds more than ${MAX_ENTRIES} keys and list items; a model file holds a few hundred (label maps a few ten thousand)`);
   }
 
   const composer = new Composer({
     version: '1.2',
     schema: 'core',
-    uniqueKeys: true,
+    // Duplicate keys are found by the builder, one set lookup per key: the composer's own check
+    // compares every key with every other (60,000 keys took 20–33 s).
+    uniqueKeys: false,
     strict: true,
     prettyErrors: false,
   });
@@ -260,21 +295,27 @@ export function jsonSyntaxErrorOffset(text: string): number {
   }
 }
 
-/** Offset of the first collection nested deeper than `MAX_NESTING`, or null; walks the syntax tree without recursion. */
-function firstTooDeep(tokens: readonly CST.Token[]): number | null {
+/**
+ * Offsets of the first collection nested deeper than `MAX_NESTING` and of the entry past
+ * `MAX_ENTRIES`, or null; walks the syntax tree without recursion, before anything is composed.
+ */
+function measureTree(tokens: readonly CST.Token[]): { tooDeep: number | null; tooMany: number | null } {
   const stack: Array<[CST.Token, number]> = [];
   for (const token of tokens) if (token.type === 'document' && token.value) stack.push([token.value, 0]);
+  let entries = 0;
   while (stack.length > 0) {
     const [token, depth] = stack.pop()!;
     if (token.type !== 'block-map' && token.type !== 'block-seq' && token.type !== 'flow-collection') continue;
     const level = depth + 1;
-    if (level > MAX_NESTING) return token.offset;
+    if (level > MAX_NESTING) return { tooDeep: token.offset, tooMany: null };
+    entries += token.items.length;
+    if (entries > MAX_ENTRIES) return { tooDeep: null, tooMany: token.offset };
     for (const item of token.items as CST.CollectionItem[]) {
       if (item.key) stack.push([item.key, level]);
       if (item.value) stack.push([item.value, level]);
     }
   }
-  return null;
+  return { tooDeep: null, tooMany: null };
 }
 
 function syntaxError(problem: YAMLError, text: string, file: string, lineAt: (offset: number) => number): ReadError {

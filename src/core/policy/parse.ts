@@ -8,6 +8,7 @@ import type { Document } from 'yaml';
 import type { ErrorObject } from 'ajv';
 import type { ServingPatch, SourceLocation } from '../model.js';
 import { DEFAULT_EXCLUDE, DEFAULT_FILES, MAX_POLICY_CHARS } from './defaults.js';
+import { GLOB_OPTIONS, MAX_GLOB_LENGTH, MAX_GLOB_STARS } from './resolve.js';
 import { formatKeyPath, lineOf, nodeAt } from './locate.js';
 import type { KeyPath } from './locate.js';
 import { nearestName } from './nearest.js';
@@ -192,8 +193,12 @@ function semanticProblems(data: Record<string, unknown>, file: string, doc: Docu
       if (typeof glob !== 'string') return;
       let reason: string | null = null;
       try {
+        const crowded = glob.split('/').find((segment) => segment !== '**' && (segment.match(/\*/g) ?? []).length > MAX_GLOB_STARS);
+        if (glob.length > MAX_GLOB_LENGTH) reason = `it is ${glob.length} characters long; at most ${MAX_GLOB_LENGTH}`;
+        // Stars in one segment backtrack against each other: k of them cost up to n^k steps on a name of n characters.
+        else if (crowded !== undefined) reason = `its segment ${quote(crowded)} has more stars than matching can afford; at most ${MAX_GLOB_STARS} stars per segment`;
         // picomatch turns a pattern it cannot read ("[z-a]", "{a,b") into one that matches nothing.
-        if (picomatch.makeRe(glob, { dot: true }).source === '$^') reason = 'it can match no path';
+        else if (picomatch.makeRe(glob, GLOB_OPTIONS).source === '$^') reason = 'it can match no path';
       } catch (error) {
         reason = (error as Error).message;
       }

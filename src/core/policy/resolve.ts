@@ -10,7 +10,22 @@ import type { FilePolicy, LimitSetting, Policy, PolicyOverride, RuleLevel } from
 
 type Matcher = (path: string) => boolean;
 
-const GLOB_OPTIONS = { dot: true } as const;
+/**
+ * Options of every glob: dotfiles match, and no extglobs (`+(a|b)` nests quantifiers, which
+ * backtrack without bound in a regular expression); `!` at the start still negates.
+ */
+export const GLOB_OPTIONS = { dot: true, noextglob: true } as const;
+/** Stars in one segment of a policy glob (default: `3`): k stars cost up to n^k steps on a name of n characters. */
+export const MAX_GLOB_STARS = 3;
+/** Longest policy glob, in characters (default: `1024`). */
+export const MAX_GLOB_LENGTH = 1024;
+/** Longest path matched (default: `4096`, Linux's PATH_MAX); a longer one fails the run closed. */
+export const MAX_MATCH_PATH = 4096;
+/**
+ * Longest path segment matched (default: `255`, the longest file name ext4, APFS and NTFS hold):
+ * with at most 3 stars a segment costs at most about 255^3 / 6 steps. A longer one fails closed.
+ */
+export const MAX_MATCH_SEGMENT = 255;
 const matchers = new WeakMap<readonly string[], Matcher>();
 
 /** One compiled matcher per glob list; policies are parsed once and asked about many paths. */
@@ -29,6 +44,13 @@ function matcherFor(globs: readonly string[]): Matcher {
  * model config with a line break in its name would otherwise never be judged.
  */
 function normalise(path: string): string {
+  if (path.length > MAX_MATCH_PATH) {
+    throw new Error(`${path.slice(0, 80)}… is ${path.length} characters long, longer than ${MAX_MATCH_PATH} characters; the policy's globs are not matched against it, so the change cannot be judged`);
+  }
+  const long = path.split('/').find((segment) => segment.length > MAX_MATCH_SEGMENT);
+  if (long !== undefined) {
+    throw new Error(`${path.slice(0, 80)}… has a name of ${long.length} characters, longer than ${MAX_MATCH_SEGMENT}; the policy's globs are not matched against it, so the change cannot be judged`);
+  }
   return path.replace(/\\/g, '/').replace(/^(\.\/)+/, '').replace(/[\n\r\u2028\u2029]/g, '\u001f');
 }
 

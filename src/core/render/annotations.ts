@@ -1,6 +1,7 @@
 import type { GateReport } from '../compare/decide.js';
 import type { Severity } from '../model.js';
 import { SEVERITY_ORDER } from '../severity.js';
+import { showBidiControls } from './escape.js';
 
 /** GitHub shows at most this many annotations of each level per step. */
 export const ANNOTATIONS_PER_LEVEL = 10;
@@ -38,7 +39,8 @@ export function planAnnotations(report: GateReport): { annotations: Annotation[]
     annotations.push({
       level,
       title: `context-reach ${f.rule}${flags ? ` (${flags})` : ''}`,
-      message: f.message,
+      // The file stays the real path (GitHub places the annotation by it); what is read is shown as it is ordered.
+      message: showBidiControls(f.message),
       file: file.path,
       line: f.line,
     });

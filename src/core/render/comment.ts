@@ -2,7 +2,7 @@ import { markdownTable } from 'markdown-table';
 import type { FileDecision, GateReport, JudgedFinding, MetricDelta, Verdict } from '../compare/decide.js';
 import type { Severity } from '../model.js';
 import { formatInteger, formatNumber } from '../units.js';
-import { codeSpan, encodePath, escapeMarkdown } from './escape.js';
+import { codeId, codeSpan, encodePath, escapeMarkdown, linkablePath } from './escape.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { memoryChart } from './memory-chart.js';
 import { fitText, perDeviceText } from './device-text.js';
@@ -41,7 +41,8 @@ const SEVERITY_ICON: Record<Severity, string> = { block: '🔴 block', warn: '�
 function where(file: FileDecision, finding: JudgedFinding, ctx: MarkdownContext): string {
   const label = finding.line !== null ? `line ${finding.line}` : 'file';
   const key = finding.key ? ` ${codeSpan(finding.key)}` : '';
-  if (!ctx.blobUrl) return `${label}${key}`;
+  // A path git would never list (a `..` segment in a tampered report) is named, never linked.
+  if (!ctx.blobUrl || !linkablePath(file.path)) return `${label}${key}`;
   const anchor = finding.line !== null ? `#L${finding.line}` : '';
   return `[${label}](${ctx.blobUrl}/${encodePath(file.path)}${anchor})${key}`;
 }
@@ -95,7 +96,7 @@ function buildDeltaTable(file: FileDecision): string {
   return markdownTable([
     ['metric', 'base', 'head', 'change', 'limit', 'state'],
     ...file.deltas.map((d) => [
-      `\`${d.metric}\``, formatMetric(d.metric, d.base), formatMetric(d.metric, d.head),
+      codeId(d.metric), formatMetric(d.metric, d.base), formatMetric(d.metric, d.head),
       formatChange(d.metric, d.change, d.changePct), limitText(d), deltaState(d),
     ]),
   ], { align: ['l', 'r', 'r', 'r', 'l', 'l'] });
@@ -105,7 +106,7 @@ function findingsTable(file: FileDecision, ctx: MarkdownContext): string {
   if (file.findings.length === 0) return '_No findings._';
   return markdownTable([
     ['', 'rule', 'finding', 'where'],
-    ...file.findings.map((f) => [state(f), `\`${f.rule}\``, escapeMarkdown(f.message), where(file, f, ctx)]),
+    ...file.findings.map((f) => [state(f), codeId(f.rule), escapeMarkdown(f.message), where(file, f, ctx)]),
   ]);
 }
 
@@ -117,7 +118,7 @@ function buildFullMetrics(file: FileDecision): string {
   const rows = METRIC_PATHS.map((metric) => {
     const b = file.base ? formatMetric(metric, metricOf(file.base.metrics, metric)) : '—';
     const h = file.head ? formatMetric(metric, metricOf(file.head.metrics, metric)) : '—';
-    return [`\`${metric}\``, b, h];
+    return [codeId(metric), b, h];
   }).filter(([, b, h]) => b !== '—' || h !== '—');
   return `<details><summary>All metrics</summary>\n\n${markdownTable([['metric', 'base', 'head'], ...rows], { align: ['l', 'r', 'r'] })}\n\n</details>`;
 }
@@ -193,7 +194,7 @@ function remedySection(file: FileDecision): string[] {
   const spec = file.head?.spec ?? null;
   const lines = [`**Remedies** <sub>${escapeMarkdown(REMEDY_NOTE)}</sub>`, ''];
   for (const finding of blocking) {
-    lines.push(`- \`${finding.rule}\`${finding.metric ? ` (${codeSpan(finding.metric)})` : ''}`);
+    lines.push(`- ${codeId(finding.rule)}${finding.metric ? ` (${codeSpan(finding.metric)})` : ''}`);
     if (!finding.remedy) {
       lines.push(`  - ⛔ no remedy: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`);
       continue;
@@ -226,7 +227,7 @@ function blockers(report: GateReport, ctx: MarkdownContext): string[] {
   return ['**What blocks:**', '', ...rows.flatMap(({ file, f }) => {
     const first = firstRemedyLine(f, file.head?.spec ?? null);
     return [
-      `- ${codeSpan(file.path)} ${where(file, f, ctx)}: \`${f.rule}\` ${escapeMarkdown(f.message)}`,
+      `- ${codeSpan(file.path)} ${where(file, f, ctx)}: ${codeId(f.rule)} ${escapeMarkdown(f.message)}`,
       ...(first ? [`  - ${first}`] : []),
     ];
   }), ...(more > 0 ? [`- … and ${more} more blocking finding${more === 1 ? '' : 's'}, listed under their files below.`] : []), ''];
@@ -250,7 +251,7 @@ function cutToLimit(body: string, limit: number): string {
 function preamble(report: GateReport, ctx: MarkdownContext): string[] {
   const lines: string[] = [];
   const judged = report.files.length;
-  lines.push(`Judged ${judged} changed model config${judged === 1 ? '' : 's'} between \`${report.base.slice(0, 12)}\` (base) and \`${report.head.slice(0, 12)}\` (head).`, '');
+  lines.push(`Judged ${judged} changed model config${judged === 1 ? '' : 's'} between ${codeId(report.base.slice(0, 12))} (base) and ${codeId(report.head.slice(0, 12))} (head).`, '');
   if (report.policy.source === 'built-in') {
     lines.push(`> [!NOTE]\n> No policy file at ${codeSpan(report.policy.path)} on the base commit: built-in rules only, no numeric limits.`, '');
   }

@@ -11,9 +11,22 @@ const HTML_ENTITIES: Record<string, string> = {
   '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;',
 };
 
+/**
+ * Unicode's bidirectional formatting characters (Unicode Standard Annex #9: the embeddings,
+ * overrides and isolates U+202A–U+202E, U+2066–U+2069, the marks U+200E, U+200F, U+061C). In a
+ * file name they reorder what a reader sees, so `abc\u202Egpj.json` shows as `abcnosj.jpg`; they
+ * are replaced with a visible `<U+202E>` everywhere a name is shown.
+ */
+const BIDI_CONTROLS = /[\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
+
+/** `text` with every bidirectional control shown as `<U+XXXX>`, so the order a reader sees is the order of the characters. */
+export function showBidiControls(text: string): string {
+  return text.replace(BIDI_CONTROLS, (c) => `<U+${c.charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}>`);
+}
+
 /** Text for HTML element content or a quoted attribute value. */
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => HTML_ENTITIES[c]!);
+  return showBidiControls(text).replace(/[&<>"']/g, (c) => HTML_ENTITIES[c]!);
 }
 
 /**
@@ -22,7 +35,7 @@ export function escapeHtml(text: string): string {
  * One pass over the characters, so no entity is escaped twice.
  */
 export function escapeMarkdown(text: string): string {
-  return text
+  return showBidiControls(text)
     .replace(/\r\n|[\r\n\u2028\u2029]|[\u0000-\u0008\u000b-\u001f\u007f]/g, ' ')
     .replace(/[&<>"|#\\`*_{}[\]()!~+=-]/g, (c) => MARKDOWN_ESCAPES[c] ?? `\\${c}`)
     // Mentions, team mentions and issue references are linked from text nodes, after entities
@@ -45,6 +58,24 @@ const MARKDOWN_ESCAPES: Record<string, string> = {
 /** Untrusted text shown as code: `<code>` with escaped content (backticks cannot be nested safely). */
 export function codeSpan(text: string): string {
   return `<code>${escapeMarkdown(text)}</code>`;
+}
+
+/**
+ * An identifier the report itself defines (a rule id, a metric name, a commit id) as inline code:
+ * backticks when it is plain `[A-Za-z0-9._:-]` text, else the escaped `<code>` of `codeSpan`, so a
+ * tampered report's "rule" cannot open markdown with a backtick.
+ */
+export function codeId(text: string): string {
+  return /^[A-Za-z0-9._:-]{1,200}$/.test(text) ? `\`${text}\`` : codeSpan(text);
+}
+
+/**
+ * Whether a repository path can be linked: git never lists a path with an empty, `.` or `..`
+ * segment or a leading `/`, and a link made of one could reach another page of the same host
+ * (browsers resolve `..`, also written `%2e%2e`, before requesting).
+ */
+export function linkablePath(path: string): boolean {
+  return path !== '' && !path.startsWith('/') && !path.split('/').some((segment) => segment === '' || segment === '.' || segment === '..');
 }
 
 /**

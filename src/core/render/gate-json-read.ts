@@ -16,6 +16,7 @@ import type { ModelSpec } from '../model.js';
 import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 import type { Metrics } from '../metrics/types.js';
 import { ReadError } from '../parse/errors.js';
+import { RULES } from '../rules/catalog.js';
 
 /** Longest report read back, in UTF-16 code units (default: `67108864`, 64 Mi). */
 export const MAX_REPORT_CHARS = 64 * 1024 * 1024;
@@ -28,6 +29,27 @@ const text: Schema = { type: 'string' };
 const textOrNull: Schema = { type: ['string', 'null'] };
 const lineOrNull: Schema = { type: ['integer', 'null'], minimum: 1 };
 const severity: Schema = { enum: [...SEVERITIES] };
+
+/** Rule ids of the catalogue: a report names no other rule. */
+const ruleId: Schema = { enum: Object.keys(RULES) };
+
+const escapeRe = (text: string): string => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+
+/** A finding's identity as remedies name it: a rule id, with the metric after a colon for limits. */
+const identity: Schema = {
+  type: 'string',
+  pattern: `^(${Object.keys(RULES).map(escapeRe).join('|')})(:(${METRIC_PATHS.map(escapeRe).join('|')}))?$`,
+};
+
+/** A commit id as git writes it: 40 hexadecimal digits (64 in a SHA-256 repository). */
+const commitId: Schema = { type: 'string', pattern: '^([0-9a-f]{40}|[0-9a-f]{64})$' };
+
+/**
+ * A repository path as git lists it: no `.` or `..` segment, no leading `/`, no NUL (a link built
+ * from `a/../../x` would leave the blob page for another page of the same host).
+ */
+const repoPath: Schema = { type: 'string', minLength: 1, maxLength: 4096, pattern: '^(?!/)(?![\\s\\S]*(^|/)\\.{1,2}(/|$))[^\\u0000]+$' };
+const repoPathOrNull: Schema = { anyOf: [repoPath, { type: 'null' }] };
 
 /** An object whose listed properties are all required (mapped from name to schema). */
 function record(properties: Record<string, Schema>, nullable = false, optional: string[] = []): Schema {
@@ -125,13 +147,13 @@ const delta = record({
 const remedy = record({
   change: map({ type: ['number', 'string'] }),
   metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
-  raises: { type: 'array', items: text },
+  raises: { type: 'array', items: identity },
   cost: text,
 }, false, ['cost']);
 
 const finding = record({
-  rule: text, severity, message: text, key: textOrNull, line: lineOrNull,
-  standing: { type: 'boolean' }, counts: { enum: [...SEVERITIES, null] }, waived: { type: 'boolean' }, file: text,
+  rule: ruleId, severity, message: text, key: textOrNull, line: lineOrNull,
+  standing: { type: 'boolean' }, counts: { enum: [...SEVERITIES, null] }, waived: { type: 'boolean' }, file: repoPath,
   metric: { enum: [...METRIC_PATHS] },
   remedy: { ...remedy, type: ['object', 'null'] },
   remedyWhyNot: textOrNull,
@@ -142,7 +164,7 @@ const verdict: Schema = { enum: ['ok', 'warn', 'block'] };
 const status: Schema = { enum: ['added', 'modified', 'renamed', 'deleted'] };
 
 const file = record({
-  path: text, previousPath: textOrNull, status, dialect: { enum: ['context-reach', 'checkpoint', null] }, verdict,
+  path: repoPath, previousPath: repoPathOrNull, status, dialect: { enum: ['context-reach', 'checkpoint', null] }, verdict,
   deltas: { type: 'array', items: delta },
   findings: { type: 'array', items: finding },
   base: version, head: version, baseError: failure, headError: failure,
@@ -150,7 +172,7 @@ const file = record({
     change: map({ type: ['number', 'string'] }),
     metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
     passes: { type: 'boolean' },
-    stillBlocking: { type: 'array', items: text },
+    stillBlocking: { type: 'array', items: identity },
   }, true),
 }, false, ['remedyTogether']);
 
@@ -159,11 +181,11 @@ export const GATE_JSON_SCHEMA: Readonly<Schema> = {
   ...record({
     version: { const: 1 },
     verdict, blocking: count, warnings: count,
-    base: text, head: text,
+    base: commitId, head: commitId,
     policy: record({ source: { enum: ['file', 'built-in'] }, path: text, changedInHead: { type: 'boolean' } }),
     waiver: record({ label: textOrNull, applied: { type: 'boolean' }, waivedBlocks: count }),
     notices: { type: 'array', items: text },
-    deleted: { type: 'array', items: record({ status, path: text, previousPath: textOrNull }) },
+    deleted: { type: 'array', items: record({ status, path: repoPath, previousPath: repoPathOrNull }) },
     files: { type: 'array', items: file },
   }),
 };

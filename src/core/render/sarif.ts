@@ -1,6 +1,7 @@
 import type { GateReport } from '../compare/decide.js';
 import type { Severity } from '../model.js';
 import { RULES, type RuleId } from '../rules/catalog.js';
+import { encodePath, showBidiControls } from './escape.js';
 
 const SARIF_LEVEL: Record<Severity, 'error' | 'warning' | 'note'> = { block: 'error', warn: 'warning', info: 'note' };
 
@@ -14,14 +15,16 @@ export function renderSarif(report: GateReport, toolVersion: string): string {
     ruleId: f.rule,
     ruleIndex: ruleIds.indexOf(f.rule as RuleId),
     level: SARIF_LEVEL[f.counts!],
-    message: { text: f.message },
+    message: { text: showBidiControls(f.message) },
     locations: [{
       physicalLocation: {
-        artifactLocation: { uri: file.path, uriBaseId: '%SRCROOT%' },
+        // A URI reference (RFC 3986, as SARIF 2.1.0 §3.10.2 asks): each segment percent-encoded,
+        // so `#`, `?` and `%2f` in a name stay part of the name.
+        artifactLocation: { uri: encodePath(file.path), uriBaseId: '%SRCROOT%' },
         ...(f.line !== null ? { region: { startLine: f.line } } : {}),
       },
     }],
-    properties: { standing: f.standing, waived: f.waived, key: f.key },
+    properties: { standing: f.standing, waived: f.waived, key: f.key === null ? null : showBidiControls(f.key) },
   })));
   const sarif = {
     $schema: 'https://json.schemastore.org/sarif-2.1.0.json',

@@ -1,0 +1,45 @@
+import { mkdirSync, mkdtempSync, readFileSync, symlinkSync, writeFileSync, lstatSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { writeReportFile } from '../../src/action/write-report.js';
+
+// Round two (issue 13, point 11): the report files are never written through a symbolic link a
+// pull request put in the checkout (a file named like the report, or a folder on its way).
+
+function setup() {
+  const root = mkdtempSync(join(tmpdir(), 'context-reach-write-'));
+  const workspace = join(root, 'checkout');
+  const outside = join(root, 'outside');
+  mkdirSync(workspace);
+  mkdirSync(outside);
+  const canary = join(outside, 'hook.sh');
+  writeFileSync(canary, '#!/bin/sh\necho canary\n');
+  return { workspace, outside, canary };
+}
+
+describe('report files and symbolic links in the checkout', () => {
+  it('a symlink named like the report: refused, the file it points to untouched', async () => {
+    const { workspace, canary } = setup();
+    mkdirSync(join(workspace, 'context-reach'));
+    symlinkSync(canary, join(workspace, 'context-reach', 'report.json'));
+    await expect(writeReportFile('context-reach/report.json', '{"x":1}', workspace, workspace)).rejects.toThrow(/report\.json is a symbolic link; the report is not written through it/);
+    expect(readFileSync(canary, 'utf8')).toContain('canary');
+  });
+
+  it('a symlinked folder on the way: refused, nothing written outside the checkout', async () => {
+    const { workspace, outside } = setup();
+    symlinkSync(outside, join(workspace, 'reports'));
+    await expect(writeReportFile(join(workspace, 'reports', 'out', 'report.sarif'), '{}', workspace)).rejects.toThrow(/reports in the checkout is a symbolic link/);
+    expect(() => lstatSync(join(outside, 'out'))).toThrow();
+  });
+
+  it('a regular path in the checkout is written, folders made; a path outside it (RUNNER_TEMP) too', async () => {
+    const { workspace, outside } = setup();
+    await writeReportFile('a/b/report.json', 'one', workspace, workspace);
+    await writeReportFile('a/b/report.json', 'two', workspace, workspace);
+    expect(readFileSync(join(workspace, 'a', 'b', 'report.json'), 'utf8')).toBe('two');
+    await writeReportFile(join(outside, 'temp', 'context-reach', 'report.json'), 'three', workspace);
+    expect(readFileSync(join(outside, 'temp', 'context-reach', 'report.json'), 'utf8')).toBe('three');
+  });
+});
