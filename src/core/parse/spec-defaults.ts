@@ -3,7 +3,7 @@
  * Values a reader found missing or unusable arrive as NaN (the reader has reported them);
  * values derived from them stay NaN, so one bad key gives one finding and metrics return null.
  */
-import type { EncoderStack, FloatFormat, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType } from '../model.js';
+import type { EncoderStack, FloatFormat, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType, VisionTower } from '../model.js';
 
 /** A scaling block as stated: missing values take the defaults below. */
 export interface ScalingDraft {
@@ -14,10 +14,14 @@ export interface ScalingDraft {
   beta?: number;
   low?: number;
   high?: number;
+  shortFactors?: number[] | null;
+  longFactors?: number[] | null;
+  attentionFactor?: number | null;
 }
 
 export type PositionDraft =
   | { kind: 'sinusoidal' | 'learned' | 'alibi' | 'none' }
+  | { kind: 'relative'; buckets?: number; maxDistance?: number }
   | { kind: 'rotary'; base?: number; fraction?: number; scaling?: ScalingDraft | null };
 
 /** Everything a dialect can state; `undefined` is "not stated". */
@@ -38,6 +42,7 @@ export interface SpecDraft {
   position: PositionDraft;
   declaredSpan: number;
   trainedSpan?: number | null;
+  vision?: VisionTower | null;
   slidingWindow?: number | null;
   windowLayers?: number | null;
   dtypes?: { weights?: StorageDType | null; cache?: StorageDType | null; positions?: FloatFormat | null };
@@ -56,6 +61,9 @@ export const DEFAULT_YARN_BETA = 32;
 /** banded low and high frequency factors (default: `1` and `4`; common practice). */
 export const DEFAULT_BANDED_LOW = 1;
 export const DEFAULT_BANDED_HIGH = 4;
+/** Relative position buckets and their largest distance (default: `32` and `128`; Raffel et al. 2020, T5, section 2.1). */
+export const DEFAULT_RELATIVE_BUCKETS = 32;
+export const DEFAULT_RELATIVE_MAX_DISTANCE = 128;
 /** Feed-forward width over model width (default: `4`; Vaswani et al. 2017, Table 3: 2048 = 4 × 512). */
 export const DEFAULT_FFN_RATIO = 4;
 
@@ -92,6 +100,7 @@ export function completeSpec(draft: SpecDraft): ModelSpec {
     position: completePosition(draft.position),
     declaredSpan: draft.declaredSpan,
     trainedSpan: draft.trainedSpan ?? null,
+    ...(draft.vision ? { vision: draft.vision } : {}),
     slidingWindow: draft.slidingWindow ?? null,
     windowLayers: draft.windowLayers ?? null,
     dtypes: {
@@ -123,6 +132,9 @@ function completeEncoder(e: NonNullable<SpecDraft['encoder']>, hidden: number): 
 }
 
 function completePosition(p: PositionDraft): PositionCode {
+  if (p.kind === 'relative') {
+    return { kind: 'relative', buckets: p.buckets ?? DEFAULT_RELATIVE_BUCKETS, maxDistance: p.maxDistance ?? DEFAULT_RELATIVE_MAX_DISTANCE };
+  }
   if (p.kind !== 'rotary') return { kind: p.kind };
   return {
     kind: 'rotary',
@@ -141,5 +153,8 @@ function completeScaling(s: ScalingDraft): Scaling {
     beta: s.beta ?? DEFAULT_YARN_BETA,
     low: s.low ?? DEFAULT_BANDED_LOW,
     high: s.high ?? DEFAULT_BANDED_HIGH,
+    ...(s.kind === 'pairwise'
+      ? { shortFactors: s.shortFactors ?? null, longFactors: s.longFactors ?? null, attentionFactor: s.attentionFactor ?? null }
+      : {}),
   };
 }
