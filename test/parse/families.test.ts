@@ -177,3 +177,46 @@ describe('keys the reader does not honour', () => {
     ]);
   });
 });
+
+describe('the own model description states the same', () => {
+  const OWN = `format: context-reach-model/1
+model:
+  layers: 32
+  hidden: 4096
+  heads: 32
+  vocab: 32000
+  position:
+    code: rotary
+  declared-span: 131072
+`;
+
+  test('relative buckets with buckets and max-distance: no reach, bucketHorizon from max-distance (Raffel et al. 2020, section 2.1)', () => {
+    const text = OWN.replace('code: rotary', 'code: relative\n    buckets: 32\n    max-distance: 128');
+    const r = inspectModel(text, 'm.reach.yaml');
+    expect(r.spec.position).toEqual({ kind: 'relative', buckets: 32, maxDistance: 128 });
+    expect([r.metrics.reach, r.metrics.bucketHorizon]).toEqual([null, 128]);
+    expect(r.findings).toEqual([]);
+  });
+
+  test('pairwise scaling with short-factors and long-factors, and trained-span as the tuned span of a scaled code', () => {
+    const ones = `[${Array(64).fill(1).join(', ')}]`;
+    const twos = `[${Array(64).fill(2).join(', ')}]`;
+    const text = OWN.replace('code: rotary', `code: rotary\n    scaling: {kind: pairwise, factor: 32, original-span: 4096, short-factors: ${ones}, long-factors: ${twos}}`)
+      .replace('declared-span: 131072', 'declared-span: 131072\n  trained-span: 131072');
+    const r = inspectModel(text, 'm.reach.yaml');
+    expect(rotary(r.spec).scaling).toMatchObject({ kind: 'pairwise', shortFactors: Array(64).fill(1), longFactors: Array(64).fill(2) });
+    expect([r.metrics.trainedSpan, r.metrics.tunedSpan, r.metrics.reach]).toEqual([4096, 131072, 131072]);
+    // Past the original span every pair is divided by its long factor, 2: the fastest wavelength is 2π · 2.
+    expect(r.metrics.fastestWavelength).toBeCloseTo(4 * Math.PI, 9);
+    expect(r.findings.filter((f) => f.severity === 'block')).toEqual([]);
+  });
+
+  test('pairwise factor lists of the wrong length are reported against the pairs (64 for head 128)', () => {
+    const text = OWN.replace('code: rotary', 'code: rotary\n    scaling: {kind: pairwise, factor: 32, original-span: 4096, short-factors: [1, 1], long-factors: [2, 2]}');
+    const r = inspectModel(text, 'm.reach.yaml');
+    expect(r.findings.filter((f) => f.rule === 'value-invalid').map((f) => f.message)).toEqual([
+      expect.stringContaining('number 2, but the rotary code has 64 pairs'),
+      expect.stringContaining('number 2, but the rotary code has 64 pairs'),
+    ]);
+  });
+});

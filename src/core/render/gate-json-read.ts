@@ -64,13 +64,20 @@ const spec = record({
   bias: { type: 'boolean' },
   experts: record(numbers(['total', 'active']), true),
   encoder: record(numbers(['layers', 'heads', 'kvHeads', 'headDim', 'ffn']), true),
+  vision: record(numbers(['layers', 'hidden', 'ffn', 'patch', 'image', 'channels']), true),
   position: {
     ...record({
       kind: { enum: [...POSITION_KINDS] },
       base: numberOrNull,
       fraction: numberOrNull,
-      scaling: record({ kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high']) }, true),
-    }, false, ['base', 'fraction', 'scaling']),
+      scaling: record({
+        kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high', 'attentionFactor']),
+        shortFactors: { type: ['array', 'null'], items: { type: 'number' } },
+        longFactors: { type: ['array', 'null'], items: { type: 'number' } },
+      }, true, ['shortFactors', 'longFactors', 'attentionFactor']),
+      buckets: numberOrNull,
+      maxDistance: numberOrNull,
+    }, false, ['base', 'fraction', 'scaling', 'buckets', 'maxDistance']),
     if: { properties: { kind: { const: 'rotary' } } },
     then: { required: ['base', 'fraction', 'scaling'] },
   },
@@ -80,7 +87,7 @@ const spec = record({
     positions: { enum: [...FLOAT_FORMATS, null] },
   }),
   serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens'])),
-});
+}, false, ['vision']);
 
 const version = record({ spec, metrics }, true);
 
@@ -182,7 +189,7 @@ function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
 
 /** Spec fields that are null by design ("not stated"); every other null was a NaN. */
 const NULLABLE_SPEC_FIELDS = new Set([
-  'name', 'experts', 'encoder', 'scaling', 'originalSpan', 'trainedSpan', 'slidingWindow', 'windowLayers',
+  'name', 'experts', 'encoder', 'vision', 'scaling', 'originalSpan', 'shortFactors', 'longFactors', 'attentionFactor', 'trainedSpan', 'slidingWindow', 'windowLayers',
   'weights', 'cache', 'positions', 'embeddingInitStd', 'embeddingMultiplier',
   'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens',
 ]);
