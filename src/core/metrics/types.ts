@@ -47,7 +47,10 @@ export interface Metrics {
   precision: Record<FloatFormat, PrecisionMetrics>;
   // Context budget
   params: number | null;
-  /** count: a multimodal config's vision tower, counted apart from `params`; null without one. */
+  /**
+   * count: a multimodal config's vision tower, counted apart from `params`; null without one.
+   * Reported beside the contract's metrics (not in `SCALAR_METRICS`, so no policy limit names it).
+   */
   visionParams: number | null;
   activeParams: number | null;
   nonEmbeddingParams: number | null;
@@ -66,7 +69,7 @@ export const SCALAR_METRICS = [
   'extensionRatio', 'fastestWavelength', 'slowestWavelength', 'unturnedPairs', 'exposedPairs',
   'separationFloor', 'separationFloorOffset', 'discriminationSpan', 'attentionScale', 'alibiHorizon',
   'receptiveField', 'positionShare',
-  'params', 'visionParams', 'activeParams', 'nonEmbeddingParams', 'weightBytes', 'cachePerTokenBytes', 'cacheBytesAtSpan',
+  'params', 'activeParams', 'nonEmbeddingParams', 'weightBytes', 'cachePerTokenBytes', 'cacheBytesAtSpan',
   'memoryBytes', 'fitSequences', 'flopsPerToken', 'tokenBudget',
 ] as const satisfies readonly (keyof Metrics)[];
 

@@ -52,8 +52,9 @@ const precision = record(numbers(PRECISION_METRICS));
 const metrics = record({
   ...numbers(SCALAR_METRICS),
   alibiSlopes: { type: ['array', 'null'], items: { type: 'number' } },
+  visionParams: numberOrNull,
   precision: record(Object.fromEntries(FLOAT_FORMATS.map((format) => [format, precision]))),
-});
+}, false, ['visionParams']);
 
 const spec = record({
   name: textOrNull,
