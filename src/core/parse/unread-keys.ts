@@ -35,8 +35,9 @@ const NO_METRIC_KEYS = new Set([
   'logit_scale', 'final_logit_softcapping', 'attn_logit_softcapping', 'query_pre_attn_scalar', 'softmax_scale',
   'scale_attn_weights', 'scale_attn_by_inverse_layer_idx', 'reorder_and_upcast_attn', 'embedding_fraction',
   'apply_residual_connection_post_layernorm', 'normalize_before', 'clip_qkv', 'prefix_lm', 'attn_uses_sequence_id',
-  // Norm implementation variants (MPT's low_precision_layernorm is a LayerNorm computed in low precision).
-  'norm_type',
+  // Norm implementation variants (MPT's low_precision_layernorm is a LayerNorm computed in low precision;
+  // Falcon's new_decoder_architecture and num_ln_in_parallel_attn lay out its norms, key/value heads come from num_kv_heads).
+  'norm_type', 'new_decoder_architecture', 'num_ln_in_parallel_attn',
   // Mixture-of-experts training losses.
   'output_router_logits', 'router_aux_loss_coef', 'router_z_loss_coef', 'router_jitter_noise',
   // Multimodal rotary: text positions share one id (the spectrum is the plain rotary one).
