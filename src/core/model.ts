@@ -13,9 +13,13 @@ export const FLOAT_FORMATS: readonly FloatFormat[] = ['fp32', 'bf16', 'fp16'];
 export type StorageDType = 'fp32' | 'bf16' | 'fp16' | 'fp8' | 'int8' | 'int4';
 export const STORAGE_DTYPES: readonly StorageDType[] = ['fp32', 'bf16', 'fp16', 'fp8', 'int8', 'int4'];
 
-/** Context-extension schemes for rotary codes (METRICS.md, symbol θ'_i). */
-export type ScalingKind = 'linear' | 'ntk' | 'dynamic' | 'yarn' | 'banded';
-export const SCALING_KINDS: readonly ScalingKind[] = ['linear', 'ntk', 'dynamic', 'yarn', 'banded'];
+/**
+ * Context-extension schemes for rotary codes (METRICS.md, symbol θ'_i). `pairwise`: one factor
+ * per frequency pair, `θ'_i = θ_i / factor_i` (LongRoPE, Ding et al. 2024; the checkpoint key
+ * `longrope`, formerly `su`).
+ */
+export type ScalingKind = 'linear' | 'ntk' | 'dynamic' | 'yarn' | 'banded' | 'pairwise';
+export const SCALING_KINDS: readonly ScalingKind[] = ['linear', 'ntk', 'dynamic', 'yarn', 'banded', 'pairwise'];
 
 export interface Scaling {
   kind: ScalingKind;
@@ -31,6 +35,13 @@ export interface Scaling {
   low: number;
   /** banded high-frequency factor (default: `4`). */
   high: number;
+  // Position-related additions (issue 10): per-pair factors of `pairwise` scaling.
+  /** pairwise: factors used while the span is at most the original span, one per pair (default: none). */
+  shortFactors?: number[] | null;
+  /** pairwise: factors used once the span exceeds the original span, one per pair (default: none). */
+  longFactors?: number[] | null;
+  /** pairwise: attention factor as stated (default: `null`, the published default applies). */
+  attentionFactor?: number | null;
 }
 
 export type PositionCode =
@@ -45,10 +56,31 @@ export type PositionCode =
       scaling: Scaling | null;
     }
   | { kind: 'alibi' }
+  | {
+      /** Relative position buckets (T5 style, Raffel et al. 2020, section 2.1): no hard reach. */
+      kind: 'relative';
+      /** Number of buckets (default: `32`). */
+      buckets: number;
+      /** Distance past which every offset shares the last bucket (default: `128`). */
+      maxDistance: number;
+    }
   | { kind: 'none' };
 
 export type PositionKind = PositionCode['kind'];
-export const POSITION_KINDS: readonly PositionKind[] = ['sinusoidal', 'learned', 'rotary', 'alibi', 'none'];
+export const POSITION_KINDS: readonly PositionKind[] = ['sinusoidal', 'learned', 'rotary', 'alibi', 'relative', 'none'];
+
+/**
+ * A vision tower beside the language model (multimodal configs), ViT style: patch embedding,
+ * a position table over the patches (plus one class token), pre-norm encoder layers.
+ */
+export interface VisionTower {
+  layers: number;
+  hidden: number;
+  ffn: number;
+  patch: number;
+  image: number;
+  channels: number;
+}
 
 /** The encoder of an encoder-decoder model; the top-level fields describe the decoder. */
 export interface EncoderStack {
@@ -166,8 +198,13 @@ export interface ModelSpec {
   position: PositionCode;
   /** The config's maximum positions. */
   declaredSpan: number;
-  /** Explicitly stated trained span (default: `null`). */
+  /**
+   * Explicitly stated trained span (default: `null`). With a scaling block it is the span the
+   * scaled model was trained or tuned at (`tunedSpan`), never multiplied by the factor again.
+   */
   trainedSpan: number | null;
+  /** Vision tower of a multimodal config, counted apart from the language model (default: none). */
+  vision?: VisionTower | null;
   /** Sliding attention window (default: `null`, full attention). */
   slidingWindow: number | null;
   /** How many decoder layers use the sliding window (default: all layers). */

@@ -22,9 +22,11 @@ describe('spans', () => {
     expect(evaluationSpan(makeSpec({ serving: { span: 10.5 } }))).toBeNull();
   });
 
-  it('trainedSpan(spec) prefers the explicit span, then the scaling block\'s original span, then the declared span', () => {
+  it('trainedSpan(spec) prefers the scaling block\'s original span, then the explicit span, then the declared span (METRICS.md, L0)', () => {
     const rotary = (s: Scaling | null) => ({ kind: 'rotary' as const, base: 10000, fraction: 1, scaling: s });
-    expect(trainedSpan(makeSpec({ trainedSpan: 1024, position: rotary(scaling({ originalSpan: 2048 })) }))).toBe(1024);
+    // With a scaling block, an explicit span is the tuned span, not L0.
+    expect(trainedSpan(makeSpec({ trainedSpan: 1024, position: rotary(scaling({ originalSpan: 2048 })) }))).toBe(2048);
+    expect(trainedSpan(makeSpec({ trainedSpan: 1024, position: rotary(scaling({ originalSpan: null })) }))).toBe(1024);
     expect(trainedSpan(makeSpec({ position: rotary(scaling({ originalSpan: 2048 })), declaredSpan: 8192 }))).toBe(2048);
     expect(trainedSpan(makeSpec({ declaredSpan: 8192 }))).toBe(8192);
   });
@@ -40,8 +42,24 @@ describe('reach, headroom, extensionRatio, scalingCover', () => {
     // L0 = 1024 from the scaling block, factor 4 → 4096; declared 8192 is larger and not overruled
     expect(computeMetrics(makeSpec({ position, declaredSpan: 8192 })).reach).toBe(8192);
     expect(computeMetrics(makeSpec({ position, declaredSpan: 2048 })).reach).toBe(4096);
-    // explicit trained span: the product alone
+    // explicit trained span with a scaling block: the tuned span; reach max(L0·factor, tuned), no declared floor
     expect(computeMetrics(makeSpec({ position, declaredSpan: 8192, trainedSpan: 1024 })).reach).toBe(4096);
+  });
+
+  it('reach(spec) never multiplies a tuned span by the factor again: Llama-3.1-style banded ×8 from 8,192 tuned at 131,072 reaches 131,072 (Llama 3.1 figures from memory)', () => {
+    const position = { kind: 'rotary' as const, base: 500000, fraction: 1, scaling: scaling({ kind: 'banded', factor: 8, originalSpan: 8192 }) };
+    const m = computeMetrics(makeSpec({ position, declaredSpan: 131072, trainedSpan: 131072, serving: { span: 4096 } }));
+    expect([m.trainedSpan, m.tunedSpan, m.scalingCover, m.reach]).toEqual([8192, 131072, 65536, 131072]);
+    expect(m.reach).not.toBe(131072 * 8);
+    // Without a scaling block an explicit span is L0 itself, and no tuned span.
+    const plain = computeMetrics(makeSpec({ declaredSpan: 8192, trainedSpan: 4096 }));
+    expect([plain.trainedSpan, plain.tunedSpan, plain.reach]).toEqual([4096, null, 4096]);
+  });
+
+  it('reach(spec) is null for relative buckets (no hard limit), and bucketHorizon is the max distance (Raffel et al. 2020, section 2.1: 32 buckets, 128)', () => {
+    const m = computeMetrics(makeSpec({ position: { kind: 'relative', buckets: 32, maxDistance: 128 }, declaredSpan: 512, serving: { span: 4096 } }));
+    expect([m.reach, m.headroom, m.bucketHorizon]).toEqual([null, null, 128]);
+    expect(computeMetrics(makeSpec({})).bucketHorizon).toBeNull();
   });
 
   it('headroom(spec) is reach - T, negative when the served span goes past the reach', () => {
@@ -182,7 +200,7 @@ describe('context budget', () => {
 
   it('computeMetrics(spec) fills every scalar metric of the contract for a complete rotary spec', () => {
     const m = computeMetrics(makeSpec({ serving: { deviceGiB: 80, outputTokens: 10 }, slidingWindow: 512 }));
-    const nullable = new Set(['servedSpan', 'scalingCover', 'alibiHorizon', 'positionShare']);
+    const nullable = new Set(['servedSpan', 'scalingCover', 'alibiHorizon', 'positionShare', 'tunedSpan', 'bucketHorizon', 'visionParams']);
     for (const key of SCALAR_METRICS) if (!nullable.has(key)) expect(m[key], key).not.toBeNull();
   });
 });

@@ -15,7 +15,7 @@ function rotary(spec: ModelSpec) {
 
 /** The smallest checkpoint config that reads cleanly; tests change one key at a time. */
 const BASE = {
-  model_type: 'llama',
+  model_type: 'olmo',
   hidden_size: 1024,
   num_hidden_layers: 4,
   num_attention_heads: 16,
@@ -51,7 +51,7 @@ describe('readModel(checkpoint text) against published shapes', () => {
     expect(spec.bias).toBe(true);
   });
 
-  test('readModel(llama2-7b-shape.json) reads LLaMA 6.7B (Touvron et al. 2023, Table 2) with the rotary base default and says it assumed it', () => {
+  test('readModel(llama2-7b-shape.json) reads LLaMA 6.7B (Touvron et al. 2023, Table 2) with the rotary base of LlamaConfig\'s published defaults, and says it took it', () => {
     const { spec, findings } = read('llama2-7b-shape.json');
     // LLaMA Table 2: dim 4096, 32 heads, 32 layers; llama/model.py: hidden 11008; Llama 2 Table 1: 4k context.
     expect([spec.hidden, spec.heads, spec.layers, spec.ffn, spec.declaredSpan]).toEqual([4096, 32, 32, 11008, 4096]);
@@ -61,7 +61,10 @@ describe('readModel(checkpoint text) against published shapes', () => {
     // SwiGLU (LLaMA section 2.2) is a gated block; llama/model.py's default theta is 10000.
     expect(spec.gated).toBe(true);
     expect(rotary(spec)).toEqual({ kind: 'rotary', base: 10000, fraction: 1, scaling: null });
-    expect(findings.map((f) => [f.rule, f.severity, f.key])).toEqual([['position-code-assumed', 'warn', 'model_type']]);
+    // LlamaConfig's published default rope_theta is 10000 (the published config class): taken, and said so.
+    expect(findings.map((f) => [f.rule, f.severity, f.key])).toEqual([['family-default-taken', 'info', 'model_type']]);
+    expect(findings[0].message).toContain('rope_theta 10000');
+    expect(findings[0].message).toContain('LlamaConfig');
   });
 
   test('readModel(llama-rotary-llama3.json) reads llama3 scaling as banded, with its factors and every line', () => {
@@ -112,15 +115,16 @@ describe('readModel(checkpoint text) against published shapes', () => {
     expect(spec.embeddingMultiplier).toBe(1);
   });
 
-  test('readModel(t5-encoder-decoder.json) reads T5 keys, gated-gelu as gated, and warns that relative biases are not modelled', () => {
+  test('readModel(t5-encoder-decoder.json) reads T5 keys, gated-gelu as gated, and relative buckets as their own code (Raffel et al. 2020, section 2.1: 32 buckets, max distance 128)', () => {
     const { spec, findings } = read('t5-encoder-decoder.json');
     expect([spec.layers, spec.hidden, spec.heads, spec.headDim, spec.ffn]).toEqual([12, 768, 12, 64, 2048]);
     expect(spec.encoder).toEqual({ layers: 12, heads: 12, kvHeads: 12, headDim: 64, ffn: 2048 });
     expect(spec.gated).toBe(true);
     expect(spec.tied).toBe(false);
-    expect(spec.position).toEqual({ kind: 'none' });
-    expect(findings.map((f) => [f.rule, f.key])).toEqual([['position-code-assumed', 'model_type']]);
-    expect(findings[0].message).toContain('relative position biases');
+    expect(spec.position).toEqual({ kind: 'relative', buckets: 32, maxDistance: 128 });
+    // The file states the buckets; the max distance is T5's default, taken and said so.
+    expect(findings.map((f) => [f.rule, f.severity, f.key])).toEqual([['family-default-taken', 'info', 'model_type']]);
+    expect(findings[0].message).toContain('relative_attention_max_distance');
   });
 
   test('readModel(mixtral-moe.json) reads 8 experts with 2 active', () => {
@@ -155,15 +159,15 @@ describe('readModel(checkpoint text) against published shapes', () => {
     expect([spec.kvHeads, spec.headDim]).toEqual([1, 256]);
   });
 
-  test('readModel(longrope-unknown.json) blocks on an unknown scaling kind, names the known ones and keeps scaling null', () => {
+  test('readModel(longrope-unknown.json) reads longrope as pairwise, and blocks on factor lists of 4 where the code has 48 pairs (head 3072/32 = 96, 96/2)', () => {
     const text = fixture('longrope-unknown.json');
     const { spec, findings } = readModel(text, 'phi3.json');
-    expect(rotary(spec).scaling).toBeNull();
-    expect(findings).toHaveLength(1);
-    const [f] = findings;
-    expect([f.rule, f.severity, f.key, f.line]).toEqual(['scaling-kind-unknown', 'block', 'rope_scaling.type', lineOf(text, '"type": "longrope"')]);
-    expect(f.message).toContain('"longrope"');
-    for (const kind of ['linear', 'dynamic', 'yarn', 'llama3']) expect(f.message).toContain(kind);
+    expect(rotary(spec).scaling).toMatchObject({ kind: 'pairwise', originalSpan: 4096, shortFactors: null, longFactors: null });
+    expect(findings.map((f) => [f.rule, f.severity, f.key, f.line])).toEqual([
+      ['value-invalid', 'block', 'rope_scaling.short_factor', lineOf(text, '"short_factor"')],
+      ['value-invalid', 'block', 'rope_scaling.long_factor', lineOf(text, '"long_factor"')],
+    ]);
+    expect(findings[0].message).toContain('has 4 factors, but the rotary code has 48 pairs');
   });
 
   test('readModel(rope-parameters.json) reads the rope_parameters block newer checkpoint libraries write', () => {
@@ -187,11 +191,16 @@ describe('readModel(checkpoint text) against published shapes', () => {
 });
 
 describe('readModel(text, path, options) errors', () => {
-  test('readModel(multimodal-nested.json) without --at says where the model is and how to read it', () => {
-    const error = readError(() => read('multimodal-nested.json'));
-    expect(error.reason).toContain('not a model config');
-    expect(error.reason).toContain('read it with --at /text_config');
-    expect(error.line).toBe(lineOf(fixture('multimodal-nested.json'), '"architectures"'));
+  test('readModel(multimodal-nested.json) without --at reads the language model under text_config, never vision_config', () => {
+    const text = fixture('multimodal-nested.json');
+    const { spec, locations, findings } = readModel(text, 'llava.json');
+    expect([spec.layers, spec.hidden, spec.vocab]).toEqual([32, 4096, 32064]);
+    expect(locations.hidden).toEqual({ key: 'text_config.hidden_size', line: lineOf(text, '"hidden_size"') });
+    // The vision tower states only image_size and patch_size: not counted, and said so.
+    expect(spec.vision ?? null).toBeNull();
+    const tower = findings.find((f) => f.rule === 'vision-not-counted');
+    expect(tower).toMatchObject({ severity: 'info', key: 'vision_config', line: lineOf(text, '"vision_config"') });
+    expect(tower!.message).toContain('hidden_size, num_hidden_layers, intermediate_size');
   });
 
   test('readModel of a mapping with no model keys throws "not a model config" with a line', () => {
@@ -302,7 +311,7 @@ describe('readModel(checkpoint) position codes by family and key', () => {
     const { spec, locations, findings } = readConfig({ ...BASE, model_type: modelType, rope_theta: undefined });
     expect(spec.position).toEqual({ kind });
     expect(locations.position.key).toBe('model_type');
-    expect(findings).toEqual([]);
+    expect(findings.filter((f) => f.rule !== 'family-default-taken')).toEqual([]);
   });
 
   test('readModel reads GPT-2 compact keys without a model_type as a learned table with biases', () => {
@@ -347,7 +356,7 @@ describe('readModel(checkpoint) keys that do nothing', () => {
   test('readModel warns that a Qwen window without use_sliding_window has no effect', () => {
     const { spec, findings } = readConfig({ ...BASE, model_type: 'qwen2', sliding_window: 4096 });
     expect(spec.slidingWindow).toBeNull();
-    expect(findings.map((f) => [f.rule, f.key])).toEqual([['key-ignored', 'sliding_window']]);
+    expect(findings.filter((f) => f.severity !== 'info').map((f) => [f.rule, f.key])).toEqual([['key-ignored', 'sliding_window']]);
   });
 
   test('readModel warns that max_window_layers at or past the layer count leaves no windowed layer', () => {

@@ -181,7 +181,7 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
     ['layers:', 'model.layers', 'model.layers is empty; expected a whole number'],
     ['layers: 1e400', 'model.layers', 'model.layers is 1e400, which overflows to Infinity in a double'],
     ['layers: 1152921504606846976', 'model.layers', 'model.layers is 1152921504606846976, beyond 2^53 − 1'],
-    ['code: relative', 'model.position.code', 'model.position.code is "relative"; expected one of sinusoidal, learned, rotary, alibi, none'],
+    ['code: relative-key', 'model.position.code', 'model.position.code is "relative-key"; expected one of sinusoidal, learned, rotary, alibi, relative, none'],
     ['code: [rotary]', 'model.position.code', 'model.position.code is a list of 1 item; expected one of sinusoidal'],
   ])('%s is reported as value-invalid on %s with its line', (replacement, key, message) => {
     const original = replacement.startsWith('code') ? 'code: rotary' : 'layers: 32';

@@ -6,7 +6,7 @@
 import type { FloatFormat, ModelSpec } from '../model.js';
 import type { LayerKindMetrics, Metrics, PrecisionMetrics } from './types.js';
 import { alibiHorizon, alibiSlopes } from './alibi-slopes.js';
-import { scaleFrequencies, yarnAttentionScale } from './context-scaling.js';
+import { pairwiseAttentionFactor, scaleFrequencies, yarnAttentionScale } from './context-scaling.js';
 import { flopsPerToken } from './flops.js';
 import { baseFrequencies, rotaryHeadDim, rotaryWidth } from './frequencies.js';
 import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from './kv-cache.js';
@@ -26,12 +26,13 @@ import { extensionRatio, headroom, reach, scalingCover } from './reach.js';
 import { receptiveField } from './receptive-field.js';
 import { positiveFinite } from './sizes.js';
 import { similarityScan } from './similarity-scan.js';
-import { declaredSpan, evaluationSpan, servedSpan, trainedSpan } from './spans.js';
+import { bucketHorizon, declaredSpan, evaluationSpan, servedSpan, trainedSpan, tunedSpan } from './spans.js';
+import { visionParams } from './vision-params.js';
 import { tokenBudget } from './token-budget.js';
 import { exposedPairs, unturnedPairs, wavelengthRange } from './wavelengths.js';
 import { viaMemo, type ScanMemo } from './scan-memo.js';
 
-export { evaluationSpan, trainedSpan } from './spans.js';
+export { evaluationSpan, trainedSpan, tunedSpan } from './spans.js';
 
 /** The frequencies every positional scan runs on. */
 export interface FrequencyPlan {
@@ -62,10 +63,14 @@ export function frequencyPlan(spec: ModelSpec, span: number | null, trained: num
   return scaled === null ? null : { theta, scaled };
 }
 
-/** ratio: `attentionScale`: `0.1 ln(s) + 1` for yarn (Peng et al. 2023, Eq. 22), 1 otherwise. */
+/**
+ * ratio: `attentionScale`: `0.1 ln(s) + 1` for yarn (Peng et al. 2023, Eq. 22); for pairwise
+ * (LongRoPE) scaling its own attention factor, stated or `sqrt(1 + ln(s)/ln(L0))`; 1 otherwise.
+ */
 export function attentionScale(spec: ModelSpec): number | null {
   const code = spec.position;
   if (code?.kind === 'rotary' && code.scaling?.kind === 'yarn') return yarnAttentionScale(code.scaling.factor);
+  if (code?.kind === 'rotary' && code.scaling?.kind === 'pairwise') return pairwiseAttentionFactor(code.scaling, trainedSpan(spec));
   return 1;
 }
 
@@ -128,6 +133,8 @@ export function computeMetrics(spec: ModelSpec, memo?: ScanMemo): Metrics {
     servedSpan: served,
     evaluationSpan: span,
     reach: reachTokens,
+    tunedSpan: tunedSpan(spec),
+    bucketHorizon: bucketHorizon(spec),
     scalingCover: scalingCover(spec, trained),
     headroom: headroom(reachTokens, span),
     extensionRatio: extensionRatio(span, trained),
@@ -145,6 +152,7 @@ export function computeMetrics(spec: ModelSpec, memo?: ScanMemo): Metrics {
     positionShare: positionShare(spec),
     precision,
     params: counts ? counts.params : null,
+    visionParams: visionParams(spec.vision ?? null),
     activeParams: counts ? counts.activeParams : null,
     nonEmbeddingParams: counts ? counts.nonEmbeddingParams : null,
     weightBytes: weights,

@@ -42,6 +42,7 @@ export function yarnAttentionScale(factor: number): number | null {
  * scaling (Peng et al. 2023, YaRN, §3.3).
  */
 export function effectiveFactor(scaling: Scaling, span: number | null, trained: number | null): number | null {
+  if (scaling.kind === 'pairwise') return 1;
   if (scaling.kind === 'dynamic') {
     if (span === null || trained === null) return null;
     return Math.max(1, span / trained);
@@ -50,9 +51,36 @@ export function effectiveFactor(scaling: Scaling, span: number | null, trained: 
 }
 
 /**
+ * factors: the per-pair factors pairwise (LongRoPE) scaling applies over span `T` with original
+ * span `L0`: the long factors once `T > L0`, the short ones otherwise, as the published
+ * implementation chooses them (LongRoPE, Ding et al. 2024; Phi-3's `longrope` rotary code). Null
+ * when the chosen list is missing or `T`/`L0` is unknown.
+ */
+export function pairwiseFactors(scaling: Scaling, span: number | null, trained: number | null): number[] | null {
+  if (span === null || trained === null) return null;
+  const factors = span > trained ? scaling.longFactors : scaling.shortFactors;
+  if (!factors || !factors.every((f) => Number.isFinite(f) && f > 0)) return null;
+  return factors;
+}
+
+/**
+ * ratio: the attention factor of pairwise (LongRoPE) scaling: the stated one, else
+ * `sqrt(1 + ln(s)/ln(L0))` for `s > 1` and 1 otherwise, with `s` the scaling factor (declared
+ * over original span) — the published implementation's default, after the LongRoPE paper
+ * (Ding et al. 2024). Null when `s` or `L0` is unusable.
+ */
+export function pairwiseAttentionFactor(scaling: Scaling, trained: number | null): number | null {
+  if (scaling.attentionFactor !== null && scaling.attentionFactor !== undefined) return positiveFinite(scaling.attentionFactor);
+  const s = positiveFinite(scaling.factor);
+  if (s === null || trained === null || !(trained > 1)) return null;
+  return s <= 1 ? 1 : Math.sqrt(1 + Math.log(s) / Math.log(trained));
+}
+
+/**
  * per token: scaled frequencies `θ'_i` (METRICS.md): linear `θ/s` (Chen et al. 2023, eq. 4);
  * ntk and dynamic `b'^(-2i/r)` (Peng et al. 2023, Eq. 16 and §3.3); yarn `(1-γ)θ/s + γθ`
- * (Peng et al. 2023, Eqs. 17–20); banded: common practice. No scaling: `θ` itself.
+ * (Peng et al. 2023, Eqs. 17–20); banded: common practice; pairwise `θ_i / factor_i` with the
+ * factors `pairwiseFactors` chooses (LongRoPE, Ding et al. 2024). No scaling: `θ` itself.
  * `span` is `T`, `trained` is `L0`; null for degenerate input.
  */
 export function scaleFrequencies(
@@ -100,6 +128,12 @@ export function scaleFrequencies(
           out[i] = ((1 - g) * theta[i]) / s + g * theta[i];
         }
       }
+      break;
+    }
+    case 'pairwise': {
+      const factors = pairwiseFactors(scaling, span, trained);
+      if (factors === null || factors.length !== theta.length) return null;
+      for (let i = 0; i < theta.length; i++) out[i] = theta[i] / factors[i];
       break;
     }
     default:

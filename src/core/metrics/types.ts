@@ -55,6 +55,10 @@ export interface Metrics {
   /** `T`, the span every scan runs over (not in the contract; shown so reviewers see it). */
   evaluationSpan: number | null;
   reach: number | null;
+  /** tokens: the span a scaled code was trained or tuned at, when stated; null otherwise. */
+  tunedSpan: number | null;
+  /** tokens: relative-bucket codes: the distance past which offsets share the last bucket. */
+  bucketHorizon: number | null;
   scalingCover: number | null;
   headroom: number | null;
   extensionRatio: number | null;
@@ -73,6 +77,11 @@ export interface Metrics {
   precision: Record<FloatFormat, PrecisionMetrics>;
   // Context budget
   params: number | null;
+  /**
+   * count: a multimodal config's vision tower, counted apart from `params`; null without one.
+   * Reported beside the contract's metrics (not in `SCALAR_METRICS`, so no policy limit names it).
+   */
+  visionParams: number | null;
   activeParams: number | null;
   nonEmbeddingParams: number | null;
   weightBytes: number | null;
@@ -94,7 +103,7 @@ export interface Metrics {
 
 /** Scalar metric names (everything but `precision` and `alibiSlopes`), in report order. */
 export const SCALAR_METRICS = [
-  'declaredSpan', 'trainedSpan', 'servedSpan', 'evaluationSpan', 'reach', 'scalingCover', 'headroom',
+  'declaredSpan', 'trainedSpan', 'servedSpan', 'evaluationSpan', 'reach', 'tunedSpan', 'bucketHorizon', 'scalingCover', 'headroom',
   'extensionRatio', 'fastestWavelength', 'slowestWavelength', 'unturnedPairs', 'exposedPairs',
   'separationFloor', 'separationFloorOffset', 'discriminationSpan', 'attentionScale', 'alibiHorizon',
   'receptiveField', 'positionShare',

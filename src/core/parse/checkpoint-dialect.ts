@@ -44,6 +44,9 @@ import {
 import type { SourceMapping, SourceValue } from './source.js';
 import { readLatent, readMixture } from './checkpoint-experts.js';
 import { readLayerPlan } from './checkpoint-layers.js';
+import { FAMILY_DEFAULTS } from './checkpoint-families.js';
+import { checkSections, readPairwise, rotaryPairs, type RotaryContext } from './checkpoint-scaling.js';
+import { readMptAttention } from './checkpoint-mpt.js';
 
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
 export const CHECKPOINT_MARKERS: readonly string[] = [
@@ -67,6 +70,9 @@ const SINUSOIDAL_FAMILIES = new Set(['marian', 'fsmt', 'pegasus', 'm2m_100', 'xg
 const ALIBI_FAMILIES = new Set(['bloom', 'mpt']);
 /** Families with relative position biases, which no modelled code describes. */
 const RELATIVE_FAMILIES = new Set(['t5', 'mt5', 'umt5', 'longt5', 'switch_transformers', 'deberta', 'deberta-v2']);
+/** Relative-bucket families (T5 style, Raffel et al. 2020, section 2.1): a code of their own. */
+const BUCKET_FAMILIES = new Set(['t5', 'mt5', 'umt5', 'longt5', 'switch_transformers']);
+const BUCKET_KEYS = ['relative_attention_num_buckets', 'relative_attention_max_distance'];
 const BIAS_FAMILIES = new Set([
   'gpt2', 'gpt_bigcode', 'gpt_neo', 'opt', 'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra',
   'bart', 'mbart', 'biogpt', 'blenderbot', 'whisper', 'marian', 'fsmt', 'pegasus', 'm2m_100', 'xglm', 'bloom',
@@ -98,7 +104,9 @@ const RELATIVE_POSITION_TYPES = new Set(['relative_key', 'relative_key_query']);
 
 /** `rope_type` / `type` of a scaling block to our kind; `default` is no scaling. */
 const SCALING_TYPES: Readonly<Record<string, ScalingDraft['kind'] | 'default'>> = {
-  default: 'default', linear: 'linear', dynamic: 'dynamic', yarn: 'yarn', llama3: 'banded',
+  default: 'default', linear: 'linear', dynamic: 'dynamic', yarn: 'yarn', llama3: 'banded', longrope: 'pairwise', su: 'pairwise',
+  // Multimodal rotary sections (Qwen2-VL): text positions see the plain rotary spectrum.
+  mrope: 'default',
 };
 
 const DTYPES: Readonly<Record<string, StorageDType>> = { float32: 'fp32', bfloat16: 'bf16', float16: 'fp16' };
@@ -117,6 +125,8 @@ export function isCheckpointConfig(value: SourceMapping): boolean {
 /** Reads a checkpoint-style config from `r.root` into a draft; every problem becomes a finding on `r`. */
 export function readCheckpoint(r: FieldReader): SpecDraft {
   const modelType = typeof r.get(['model_type']) === 'string' ? String(r.get(['model_type'])).toLowerCase() : null;
+  const family = modelType !== null ? FAMILY_DEFAULTS[modelType] : undefined;
+  if (family !== undefined) r.useDefaults(family.values);
   const gpt2Style = r.has(['n_embd']) || r.has(['n_layer']);
   const encoderDecoder = r.get(['is_encoder_decoder']) === true || r.has(['encoder_layers']) || r.has(['num_decoder_layers'])
     || (modelType !== null && ENCODER_DECODER_FAMILIES.has(modelType));
@@ -132,21 +142,26 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   const hidden = size('hidden', ['hidden_size', 'n_embd', 'd_model'], 'the model width', true)!;
   const layers = size('layers', encoderDecoder
     ? ['decoder_layers', 'num_decoder_layers', 'num_layers', 'num_hidden_layers', 'n_layer']
-    : ['num_hidden_layers', 'n_layer', 'num_layers'], encoderDecoder ? 'the number of decoder layers' : 'the number of layers', true)!;
+    : ['num_hidden_layers', 'n_layer', 'num_layers', 'n_layers'], encoderDecoder ? 'the number of decoder layers' : 'the number of layers', true)!;
   const heads = size('heads', encoderDecoder
     ? ['decoder_attention_heads', 'num_heads', 'num_attention_heads', 'n_head']
-    : ['num_attention_heads', 'n_head', 'num_heads'], 'the number of attention heads', true)!;
+    : ['num_attention_heads', 'n_head', 'num_heads', 'n_heads'], 'the number of attention heads', true)!;
   let kvHeads = size('kvHeads', ['num_key_value_heads', 'num_kv_heads', 'n_head_kv'], 'key/value heads', false);
   if (kvHeads === undefined && r.get(['multi_query']) === true) {
     r.locate('kvHeads', ['multi_query']);
     kvHeads = 1;
   }
+  const mpt = readMptAttention(r);
+  if (kvHeads === undefined && mpt.kvHeads !== undefined) kvHeads = mpt.kvHeads;
   const headDim = size('headDim', ['head_dim', 'd_kv'], 'the width of one head', false);
   const ffn = size('ffn', encoderDecoder
     ? ['decoder_ffn_dim', 'd_ff', 'intermediate_size', 'ffn_dim']
-    : ['intermediate_size', 'n_inner', 'ffn_dim', 'd_ff'], 'the feed-forward width', false);
+    : ['intermediate_size', 'n_inner', 'ffn_dim', 'd_ff', 'ffn_hidden_size'], 'the feed-forward width', false)
+    ?? mpt.ffn(hidden);
   const vocab = size('vocab', ['vocab_size'], 'the vocabulary size', true)!;
-  const declaredSpan = size('declaredSpan', ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length', 'max_target_positions'], 'the maximum positions', true)!;
+  const spanKeys = ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length', 'max_target_positions'];
+  const declaredSpan = size('declaredSpan', spanKeys, 'the maximum positions', !alibiWithoutSpan(r, modelType, spanKeys))
+    ?? spanNotStated(r, spanKeys);
 
   const encoder = encoderDecoder
     ? {
@@ -160,7 +175,10 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   const mixture = readMixture(r, size, layers, modelType);
   const experts = mixture.experts;
   const latent = readLatent(r, size);
-  const position = readPosition(r, modelType, gpt2Style, latent ? latent.ropeDim : headDim ?? defaultHeadDim(hidden, heads));
+  const position = readPosition(r, modelType, gpt2Style, latent ? latent.ropeDim : headDim ?? defaultHeadDim(hidden, heads), declaredSpan);
+  // Consulted even when the window is off: then they have no effect.
+  r.get(['max_window_layers']);
+  r.get(['use_sliding_window']);
   const plan = readLayerPlan(r, modelType, layers);
   const encoderOnly = !encoderDecoder && modelType !== null && ENCODER_ONLY_FAMILIES.has(modelType) && r.get(['is_decoder']) !== true;
 
@@ -172,7 +190,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     kvHeads,
     headDim,
     ffn: mixture.denseFfn ?? ffn,
-    gated: readGated(r, modelType),
+    gated: readGated(r, modelType) ?? mpt.gated,
     vocab,
     tied: r.flag('tied', ['tie_word_embeddings']),
     bias: readBias(r, modelType, gpt2Style),
@@ -201,6 +219,18 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   };
 }
 
+/** ALiBi configs (BLOOM) may state no maximum positions: ALiBi has no hard limit. */
+function alibiWithoutSpan(r: FieldReader, modelType: string | null, spanKeys: string[]): boolean {
+  if (r.first(spanKeys.map((k) => [k])) !== null) return false;
+  return r.get(['alibi']) === true || r.get(['attn_config', 'alibi']) === true || modelType === 'bloom';
+}
+
+/** The declared span of an ALiBi config that states none: not stated (NaN), reported as info. */
+function spanNotStated(r: FieldReader, spanKeys: string[]): number {
+  r.report('span-not-stated', r.has(['model_type']) ? ['model_type'] : null, `no maximum-positions key (${spanKeys.join(', ')}) is stated; the ALiBi code has no hard limit, so nothing blocks, and the positional and cache metrics are computed only at a served span (--served-span or the policy's serving block)`);
+  return NaN;
+}
+
 function readGated(r: FieldReader, modelType: string | null): boolean | undefined {
   const proj = r.text(null, ['feed_forward_proj'], 'the feed-forward kind, e.g. "gated-gelu"');
   if (proj !== undefined) {
@@ -219,6 +249,8 @@ function readGated(r: FieldReader, modelType: string | null): boolean | undefine
 }
 
 function readBias(r: FieldReader, modelType: string | null, gpt2Style: boolean): boolean | undefined {
+  const noBias = r.flag('bias', ['no_bias']);
+  if (noBias !== undefined) return !noBias;
   const stated = [['attention_bias'], ['mlp_bias'], ['bias'], ['use_bias']].filter((p) => r.has(p));
   if (stated.length > 0) {
     const values = stated.map((p) => ({ p, v: r.flag('bias', p) }));
@@ -262,10 +294,16 @@ function readMultiplier(r: FieldReader, modelType: string | null, hidden: number
   return null;
 }
 
-function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boolean, headDim: number): PositionDraft {
+function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boolean, headDim: number, declaredSpan: number): PositionDraft {
   const typePath = ['position_embedding_type'];
   const alibiPath = r.get(['alibi']) === true ? ['alibi'] : r.get(['attn_config', 'alibi']) === true ? ['attn_config', 'alibi'] : null;
-  const rotaryKeys = ROTARY_KEYS.filter((k) => r.has([k]));
+  const bucketKeys = BUCKET_KEYS.filter((k) => r.has([k]));
+  if (!r.has(typePath) && alibiPath === null && (bucketKeys.length > 0 || (modelType !== null && BUCKET_FAMILIES.has(modelType)))) {
+    return readBuckets(r, modelType, bucketKeys);
+  }
+  const mptRotary = r.get(['attn_config', 'rope']) === true && alibiPath === null;
+  // Family defaults stand in for rotary keys only when the file states no other code.
+  const rotaryKeys = ROTARY_KEYS.filter((k) => (alibiPath === null && !r.stated(typePath) ? r.has([k]) : r.stated([k])));
   let kind: PositionDraft['kind'];
   let assumed: string | null = null;
 
@@ -285,12 +323,18 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
   } else if (alibiPath !== null) {
     r.locate('position', alibiPath);
     kind = 'alibi';
+    // MPT's learned_pos_emb has no effect beside ALiBi (the MPT code adds the table only without it).
+    r.get(['learned_pos_emb']);
   } else if (r.get(['sinusoidal_pos_embds']) === true) {
     r.locate('position', ['sinusoidal_pos_embds']);
     kind = 'sinusoidal';
-  } else if (rotaryKeys.length > 0) {
-    r.locate('position', [rotaryKeys[0]]);
+  } else if (rotaryKeys.length > 0 || mptRotary) {
+    r.locate('position', rotaryKeys.length > 0 ? [rotaryKeys[0]] : ['attn_config', 'rope']);
     kind = 'rotary';
+  } else if (modelType === 'mpt' && r.get(['attn_config', 'alibi']) === false && r.get(['learned_pos_emb']) !== false) {
+    // MPT without ALiBi or rotary keys: its learned table (learned_pos_emb, default true in MptConfig).
+    r.locate('position', r.has(['learned_pos_emb']) ? ['learned_pos_emb'] : ['attn_config', 'alibi']);
+    kind = 'learned';
   } else if (modelType !== null && (ROTARY_FAMILIES.has(modelType) || LEARNED_FAMILIES.has(modelType) || SINUSOIDAL_FAMILIES.has(modelType) || ALIBI_FAMILIES.has(modelType) || RELATIVE_FAMILIES.has(modelType))) {
     r.locate('position', ['model_type']);
     if (ROTARY_FAMILIES.has(modelType)) {
@@ -320,10 +364,22 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
     }
     return { kind };
   }
-  return readRotary(r, headDim);
+  return readRotary(r, headDim, declaredSpan);
 }
 
-function readRotary(r: FieldReader, headDim: number): PositionDraft {
+/** T5-style relative position buckets: `relative_attention_num_buckets` and `relative_attention_max_distance`. */
+function readBuckets(r: FieldReader, modelType: string | null, stated: string[]): PositionDraft {
+  r.locate('position', stated.length > 0 ? [stated[0]] : ['model_type']);
+  const buckets = r.count('position.buckets', ['relative_attention_num_buckets'], 'buckets');
+  const maxDistance = r.count('position.maxDistance', ['relative_attention_max_distance'], 'tokens');
+  const unstated = BUCKET_KEYS.filter((k) => !stated.includes(k));
+  if (unstated.length > 0) {
+    r.report('family-default-taken', r.has(['model_type']) ? ['model_type'] : null, `${unstated.join(' and ')} ${unstated.length === 1 ? 'is' : 'are'} not stated; the T5 defaults apply (32 buckets, max distance 128; Raffel et al. 2020, section 2.1)${modelType === null ? '' : ` for model_type "${modelType}"`}`);
+  }
+  return { kind: 'relative', buckets, maxDistance };
+}
+
+function readRotary(r: FieldReader, headDim: number, declaredSpan: number): PositionDraft {
   // Newer checkpoint libraries put every rotary value in rope_parameters, per layer type where types differ.
   let params: PathSegment[] | null = null;
   const rp = r.get(['rope_parameters']);
@@ -341,7 +397,7 @@ function readRotary(r: FieldReader, headDim: number): PositionDraft {
     r.report('value-invalid', ['rope_parameters'], `${r.key(['rope_parameters'])} ${r.is(['rope_parameters'])}; expected a mapping with rope_type and rope_theta`);
   }
 
-  const basePath = r.first([...(params ? [[...params, 'rope_theta']] : []), ['rope_theta'], ['rotary_emb_base']]);
+  const basePath = r.first([...(params ? [[...params, 'rope_theta']] : []), ['rope_theta'], ['rotary_emb_base'], ['attn_config', 'rope_theta']]);
   const base = basePath === null ? undefined : r.real('position.base', basePath, 'rotary base', {
     test: (n) => n > 1,
     expected: 'a rotary base above 1 (commonly 10000 or more)',
@@ -356,13 +412,17 @@ function readRotary(r: FieldReader, headDim: number): PositionDraft {
     if (dim !== undefined && !Number.isNaN(dim)) fraction = isCount(headDim) ? dim / headDim : NaN;
   }
 
+  const ctx: RotaryContext = { pairs: rotaryPairs(headDim, fraction), declaredSpan };
+  for (const block of [params, ['rope_scaling']]) {
+    if (block !== null) checkSections(r, [...block, 'mrope_section'], ctx);
+  }
   let scalingPath: PathSegment[] | null = null;
   if (params !== null && typeof r.get([...params, 'rope_type']) === 'string' && r.get([...params, 'rope_type']) !== 'default') scalingPath = params;
   else if (r.has(['rope_scaling'])) scalingPath = ['rope_scaling'];
-  return { kind: 'rotary', base, fraction, scaling: scalingPath === null ? null : readScaling(r, scalingPath) };
+  return { kind: 'rotary', base, fraction, scaling: scalingPath === null ? null : readScaling(r, scalingPath, ctx) };
 }
 
-function readScaling(r: FieldReader, at: PathSegment[]): ScalingDraft | null {
+function readScaling(r: FieldReader, at: PathSegment[], ctx: RotaryContext): ScalingDraft | null {
   const block = r.get(at);
   if (!isMapping(block)) {
     r.report('value-invalid', at, `${r.key(at)} ${r.is(at)}; expected a mapping with rope_type and factor`);
@@ -381,6 +441,11 @@ function readScaling(r: FieldReader, at: PathSegment[]): ScalingDraft | null {
     return null;
   }
   if (kind === 'default') return null;
+  if (kind === 'pairwise') {
+    const originalPath = r.first([[...at, 'original_max_position_embeddings'], ['original_max_position_embeddings']]);
+    const originalSpan = originalPath === null ? null : r.count('position.scaling.originalSpan', originalPath, 'tokens');
+    return { ...readPairwise(r, at, ctx, originalSpan), originalSpan };
+  }
 
   const factor = r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor') ?? r.missing([...at, 'factor'], 'the scaling factor (extended span over original span)');
   const originalPath = r.first([[...at, 'original_max_position_embeddings'], ['original_max_position_embeddings']]);
@@ -408,5 +473,5 @@ function readScaling(r: FieldReader, at: PathSegment[]): ScalingDraft | null {
 }
 
 function knownKinds(): string {
-  return 'linear, dynamic, yarn, llama3 (read as banded), default (no scaling)';
+  return 'linear, dynamic, yarn, llama3 (read as banded), longrope or su (read as pairwise), mrope (sections, no scaling), default (no scaling)';
 }

@@ -21,6 +21,15 @@ export interface NumberCheck {
 export class FieldReader {
   readonly findings: Finding[] = [];
   readonly locations: LocationMap = {};
+  /**
+   * Every path the reader looked up (present or not), so keys nobody consulted can be reported
+   * (`unreadKeyFindings`): a new read counts without editing any list.
+   */
+  readonly consulted = new Set<string>();
+  /** Top-level keys a family default stood in for, in the order first used. */
+  readonly defaultsUsed: string[] = [];
+  /** Values that stand in for absent top-level keys (a family's published defaults). */
+  private defaults: Readonly<Record<string, SourceValue>> = {};
 
   /**
    * @param doc the parsed file
@@ -35,8 +44,27 @@ export class FieldReader {
     private readonly nullIsAbsent: boolean,
   ) {}
 
+  /**
+   * Lets `values` stand in for top-level keys the file leaves out entirely (a key written as
+   * null stays "not set"); each one used is recorded in `defaultsUsed`.
+   */
+  useDefaults(values: Readonly<Record<string, SourceValue>>): void {
+    this.defaults = values;
+  }
+
+  /** Path as a set member for `consulted`. */
+  static pathId(path: readonly PathSegment[]): string {
+    return JSON.stringify(path);
+  }
+
   /** The value at `path` under the root; undefined when absent (or null, where null means absent). */
   get(path: readonly PathSegment[]): SourceValue | undefined {
+    this.consulted.add(FieldReader.pathId(path));
+    if (path.length === 1 && typeof path[0] === 'string' && !Object.prototype.hasOwnProperty.call(this.root, path[0])
+      && Object.prototype.hasOwnProperty.call(this.defaults, path[0])) {
+      if (!this.defaultsUsed.includes(path[0])) this.defaultsUsed.push(path[0]);
+      return this.defaults[path[0]];
+    }
     let current: SourceValue | undefined = this.root;
     for (const segment of path) {
       if (Array.isArray(current) && typeof segment === 'number') current = current[segment];
@@ -52,9 +80,22 @@ export class FieldReader {
     return this.get(path) !== undefined;
   }
 
-  /** The first of `candidates` that is present, or null. */
+  /** The first of `candidates` that is present, or null. Every candidate counts as consulted (they are aliases). */
   first(candidates: readonly (readonly PathSegment[])[]): readonly PathSegment[] | null {
-    return candidates.find((p) => this.has(p)) ?? null;
+    const present = candidates.filter((p) => this.has(p));
+    // A key the file states wins over an alias a family default stands in for.
+    return present.find((p) => this.stated(p)) ?? present[0] ?? null;
+  }
+
+  /** Whether `path` is stated in the file itself (not stood in for by a default). */
+  stated(path: readonly PathSegment[]): boolean {
+    let current: SourceValue | undefined = this.root;
+    for (const segment of path) {
+      if (current === null || typeof current !== 'object' || Array.isArray(current) || typeof segment !== 'string') return false;
+      if (!Object.prototype.hasOwnProperty.call(current, segment)) return false;
+      current = current[segment];
+    }
+    return true;
   }
 
   /** The key as written: dotted, from the top of the file. */

@@ -233,6 +233,13 @@ function readWeightGroups(r: FieldReader, at: string[]): WeightQuantization | nu
 function readPosition(r: FieldReader, at: string[]): PositionDraft {
   const code = r.choice('position', [...at, 'code'], CODES, 'the position code');
   if (code === undefined && !r.reported([...at, 'code'])) r.missing([...at, 'code'], `the position code: ${POSITION_KINDS.join(', ')}`);
+  if (code === 'relative') {
+    return {
+      kind: 'relative',
+      buckets: r.count('position.buckets', [...at, 'buckets'], 'buckets'),
+      maxDistance: r.count('position.maxDistance', [...at, 'max-distance'], 'tokens'),
+    };
+  }
   if (code !== 'rotary') {
     for (const key of ['base', 'local-base', 'fraction', 'scaling']) {
       if (code && r.has([...at, key])) {
@@ -265,6 +272,18 @@ function readScaling(r: FieldReader, at: string[]): ScalingDraft | null {
     low: r.real('position.scaling.low', [...at, 'low'], 'low-frequency factor', above(0, 'a low-frequency factor')),
     high: r.real('position.scaling.high', [...at, 'high'], 'high-frequency factor', above(0, 'a high-frequency factor')),
   };
+  if (kind === 'pairwise') {
+    const list = (key: string): number[] | null => {
+      const v = r.get([...at, key]);
+      return Array.isArray(v) && v.every((x) => typeof x === 'number') ? (v as number[]) : null;
+    };
+    draft.shortFactors = list('short-factors');
+    draft.longFactors = list('long-factors');
+    draft.attentionFactor = r.real('position.scaling.attentionFactor', [...at, 'attention-factor'], 'attention factor', above(0, 'an attention factor')) ?? null;
+    for (const key of ['short-factors', 'long-factors']) {
+      if (!r.has([...at, key])) r.missing([...at, key], 'a list of factors, one per rotary pair');
+    }
+  }
   orderedRamp(r, at, 'alpha', draft.alpha, DEFAULT_YARN_ALPHA, 'beta', draft.beta, DEFAULT_YARN_BETA);
   orderedRamp(r, at, 'low', draft.low, DEFAULT_BANDED_LOW, 'high', draft.high, DEFAULT_BANDED_HIGH);
   for (const key of kind === 'yarn' ? ['low', 'high'] : kind === 'banded' ? ['alpha', 'beta'] : ['alpha', 'beta', 'low', 'high']) {

@@ -12,6 +12,10 @@ import { MODEL_FORMAT, MODEL_FORMAT_FAMILY, readOwnDialect } from './own-dialect
 import { kindOf, quoteValue, truncate } from './quote.js';
 import type { PathSegment } from './quote.js';
 import { completeSpec } from './spec-defaults.js';
+import { FAMILY_DEFAULTS } from './checkpoint-families.js';
+import { TOWER_KEY, isLanguageModelBlock, nestedModelKey, readVisionTower } from './nested-model.js';
+import { reportUnreadKeys } from './unread-keys.js';
+import { RULES } from '../rules/catalog.js';
 import { parseSource } from './source.js';
 import type { SourceDocument, SourceMapping, SourceValue } from './source.js';
 
@@ -47,19 +51,60 @@ export function detectDialect(value: SourceMapping): Dialect | null {
  */
 export function readModel(text: string, path: string, options: ReadModelOptions = {}): ModelRead {
   const doc = parseSource(text, path);
-  const { root, prefix } = selectBlock(doc, path, options.at);
+  let { root, prefix } = selectBlock(doc, path, options.at);
 
   const format = root.format;
   if (typeof format === 'string' && format.startsWith(MODEL_FORMAT_FAMILY) && format !== MODEL_FORMAT) {
     const formatPath = [...prefix, 'format'];
     throw new ReadError(path, doc.lineOf(formatPath), `format ${quoteValue(format)} is not supported; this version reads ${MODEL_FORMAT}`, 'format');
   }
-  const dialect = detectDialect(root);
+  let dialect = detectDialect(root);
+  // A multimodal file: the language model is nested (text_config, language_config, …), never the vision tower.
+  let parent: { value: SourceMapping; prefix: PathSegment[] } = { value: root, prefix };
+  if (dialect === null) {
+    const nested = nestedModelKey(root);
+    if (nested !== null) {
+      parent = { value: root, prefix };
+      root = root[nested] as SourceMapping;
+      prefix = [...prefix, nested];
+      dialect = 'checkpoint';
+    }
+  } else if (dialect === 'checkpoint' && prefix.length > 0) {
+    // Read with --at: the block's parent holds the vision tower.
+    const up = prefix.slice(0, -1);
+    const holder = up.reduce<SourceValue | undefined>((v, k) => (isMapping(v ?? null) ? (v as SourceMapping)[k as string] : undefined), doc.value);
+    if (isMapping(holder) && !isMapping(root.vision_config)) parent = { value: holder, prefix: up };
+  }
   if (dialect === null) throw notAModel(doc, root, prefix, path);
 
   const reader = new FieldReader(doc, root, prefix, dialect === 'checkpoint');
   const draft = dialect === 'context-reach' ? readOwnDialect(reader) : readCheckpoint(reader);
-  return { dialect, spec: completeSpec(draft), locations: reader.locations, findings: reader.findings };
+  const findings = reader.findings;
+  if (dialect === 'checkpoint') {
+    reportUnreadKeys(reader);
+    defaultsTaken(reader);
+    const vision = readVisionTower(doc, parent.value, parent.prefix);
+    findings.push(...vision.findings);
+    if (vision.tower !== null) draft.vision = vision.tower;
+  }
+  return { dialect, spec: completeSpec(draft), locations: reader.locations, findings };
+}
+
+/** One `family-default-taken` finding listing every default a sparse config relied on. */
+function defaultsTaken(r: FieldReader): void {
+  if (r.defaultsUsed.length === 0) return;
+  const type = String(r.get(['model_type'])).toLowerCase();
+  const family = FAMILY_DEFAULTS[type];
+  if (family === undefined) return;
+  const values = r.defaultsUsed.map((k) => `${k} ${JSON.stringify(family.values[k])}`).join(', ');
+  const at = ['model_type'];
+  r.findings.push({
+    rule: 'family-default-taken',
+    severity: RULES['family-default-taken'].severity,
+    message: `${r.key(at)} "${type}": ${r.defaultsUsed.length === 1 ? 'a key is' : `${r.defaultsUsed.length} keys are`} not stated, so the family's published defaults are taken (${family.source}): ${values}; state ${r.defaultsUsed.length === 1 ? 'it' : 'them'} if the model differs`,
+    key: r.key(at),
+    line: r.line(at),
+  });
 }
 
 function selectBlock(doc: SourceDocument, file: string, at: string | undefined): { root: SourceMapping; prefix: PathSegment[] } {
@@ -82,7 +127,7 @@ function notAModel(doc: SourceDocument, root: SourceMapping, prefix: PathSegment
   const where = prefix.length === 0 ? 'at the top level' : `under ${JSON.stringify(formatPointer(prefix.map(String)))}`;
   const line = prefix.length === 0 ? (Object.keys(root).length > 0 ? doc.lineOf([Object.keys(root)[0]]) : null) : doc.lineOf(prefix);
   // A model nested one level down (multimodal configs keep it under text_config) is worth naming.
-  const nested = Object.keys(root).find((k) => isMapping(root[k]) && detectDialect(root[k] as SourceMapping) !== null);
+  const nested = Object.keys(root).find((k) => !TOWER_KEY.test(k) && isMapping(root[k]) && (detectDialect(root[k] as SourceMapping) !== null || isLanguageModelBlock(root[k] as SourceMapping)));
   const hint = nested === undefined
     ? ''
     : `; ${truncate(nested)} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;

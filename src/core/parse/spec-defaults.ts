@@ -5,7 +5,7 @@
  */
 import type {
   EncoderStack, Experts, FloatFormat, LatentAttention, LayerAttention, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType,
-  WeightQuantization,
+  VisionTower, WeightQuantization,
 } from '../model.js';
 
 /** A scaling block as stated: missing values take the defaults below. */
@@ -17,10 +17,14 @@ export interface ScalingDraft {
   beta?: number;
   low?: number;
   high?: number;
+  shortFactors?: number[] | null;
+  longFactors?: number[] | null;
+  attentionFactor?: number | null;
 }
 
 export type PositionDraft =
   | { kind: 'sinusoidal' | 'learned' | 'alibi' | 'none' }
+  | { kind: 'relative'; buckets?: number; maxDistance?: number }
   | { kind: 'rotary'; base?: number; fraction?: number; scaling?: ScalingDraft | null };
 
 /** Everything a dialect can state; `undefined` is "not stated". */
@@ -41,6 +45,7 @@ export interface SpecDraft {
   position: PositionDraft;
   declaredSpan: number;
   trainedSpan?: number | null;
+  vision?: VisionTower | null;
   slidingWindow?: number | null;
   windowLayers?: number | null;
   dtypes?: { weights?: StorageDType | null; cache?: StorageDType | null; positions?: FloatFormat | null };
@@ -69,6 +74,9 @@ export const DEFAULT_YARN_BETA = 32;
 /** banded low and high frequency factors (default: `1` and `4`; common practice). */
 export const DEFAULT_BANDED_LOW = 1;
 export const DEFAULT_BANDED_HIGH = 4;
+/** Relative position buckets and their largest distance (default: `32` and `128`; Raffel et al. 2020, T5, section 2.1). */
+export const DEFAULT_RELATIVE_BUCKETS = 32;
+export const DEFAULT_RELATIVE_MAX_DISTANCE = 128;
 /** Feed-forward width over model width (default: `4`; Vaswani et al. 2017, Table 3: 2048 = 4 × 512). */
 export const DEFAULT_FFN_RATIO = 4;
 
@@ -105,6 +113,7 @@ export function completeSpec(draft: SpecDraft): ModelSpec {
     position: completePosition(draft.position),
     declaredSpan: draft.declaredSpan,
     trainedSpan: draft.trainedSpan ?? null,
+    ...(draft.vision ? { vision: draft.vision } : {}),
     slidingWindow: draft.slidingWindow ?? null,
     windowLayers: draft.windowLayers ?? null,
     dtypes: {
@@ -155,6 +164,9 @@ function completeEncoder(e: NonNullable<SpecDraft['encoder']>, hidden: number): 
 }
 
 function completePosition(p: PositionDraft): PositionCode {
+  if (p.kind === 'relative') {
+    return { kind: 'relative', buckets: p.buckets ?? DEFAULT_RELATIVE_BUCKETS, maxDistance: p.maxDistance ?? DEFAULT_RELATIVE_MAX_DISTANCE };
+  }
   if (p.kind !== 'rotary') return { kind: p.kind };
   return {
     kind: 'rotary',
@@ -173,5 +185,8 @@ function completeScaling(s: ScalingDraft): Scaling {
     beta: s.beta ?? DEFAULT_YARN_BETA,
     low: s.low ?? DEFAULT_BANDED_LOW,
     high: s.high ?? DEFAULT_BANDED_HIGH,
+    ...(s.kind === 'pairwise'
+      ? { shortFactors: s.shortFactors ?? null, longFactors: s.longFactors ?? null, attentionFactor: s.attentionFactor ?? null }
+      : {}),
   };
 }

@@ -86,9 +86,10 @@ const layerKind = record({
 const metrics = record({
   ...numbers(SCALAR_METRICS),
   alibiSlopes: { type: ['array', 'null'], items: { type: 'number' } },
+  visionParams: numberOrNull,
   precision: precisionByFormat,
   layerKinds: { type: ['array', 'null'], items: layerKind },
-}, false, ['layerKinds']);
+}, false, ['layerKinds', 'visionParams']);
 
 const booleanOrNull: Schema = { type: ['boolean', 'null'] };
 
@@ -108,13 +109,20 @@ const spec = record({
   qkNorms: booleanOrNull,
   encoderOnly: booleanOrNull,
   encoder: record(numbers(['layers', 'heads', 'kvHeads', 'headDim', 'ffn']), true),
+  vision: record(numbers(['layers', 'hidden', 'ffn', 'patch', 'image', 'channels']), true),
   position: {
     ...record({
       kind: { enum: [...POSITION_KINDS] },
       base: numberOrNull,
       fraction: numberOrNull,
-      scaling: record({ kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high']) }, true),
-    }, false, ['base', 'fraction', 'scaling']),
+      scaling: record({
+        kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high', 'attentionFactor']),
+        shortFactors: { type: ['array', 'null'], items: { type: 'number' } },
+        longFactors: { type: ['array', 'null'], items: { type: 'number' } },
+      }, true, ['shortFactors', 'longFactors', 'attentionFactor']),
+      buckets: numberOrNull,
+      maxDistance: numberOrNull,
+    }, false, ['base', 'fraction', 'scaling', 'buckets', 'maxDistance']),
     if: { properties: { kind: { const: 'rotary' } } },
     then: { required: ['base', 'fraction', 'scaling'] },
   },
@@ -128,7 +136,7 @@ const spec = record({
   quantization: record({
     method: text, ...numbers(['bits', 'groupSize', 'scaleBits']), zeroPoint: { type: 'boolean' }, output: { type: 'boolean' },
   }, true),
-}, false, ['latent', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly', 'quantization']);
+}, false, ['latent', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly', 'quantization', 'vision']);
 
 const version = record({ spec, metrics }, true);
 
@@ -231,7 +239,7 @@ function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
 
 /** Spec fields that are null by design ("not stated"); every other null was a NaN. */
 const NULLABLE_SPEC_FIELDS = new Set([
-  'name', 'experts', 'encoder', 'scaling', 'originalSpan', 'trainedSpan', 'slidingWindow', 'windowLayers',
+  'name', 'experts', 'encoder', 'vision', 'scaling', 'originalSpan', 'shortFactors', 'longFactors', 'attentionFactor', 'trainedSpan', 'slidingWindow', 'windowLayers',
   'weights', 'cache', 'positions', 'embeddingInitStd', 'embeddingMultiplier',
   'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens', 'tensorParallel', 'pipelineParallel',
   'activationReserveGiB', 'quantization', 'groupSize',

@@ -4,6 +4,7 @@ import type { FileFailure, FileReport } from '../inspect.js';
 import type { Metrics } from '../metrics/types.js';
 import { formatBytes, formatCount, formatInteger, formatNumber, formatTokens } from '../units.js';
 import { ESTIMATE_NOTICE } from './notice.js';
+import { reachAssumed } from '../metrics/reach.js';
 import type { RemedyFields, CombinedRemedy } from '../remedy/types.js';
 import { remedyLines, togetherText } from './remedy-text.js';
 import { fitText, perDeviceText } from './device-text.js';
@@ -71,12 +72,15 @@ function layerKindRows(m: Metrics): string[] {
   return [line(header), ...rows.map(line)];
 }
 
-function rangeRows(m: Metrics): Row[] {
+function rangeRows(m: Metrics, report: FileReport): Row[] {
+  const assumed = reachAssumed(report.spec, m.trainedSpan, m.declaredSpan) ? ' (assumed: the declared span)' : '';
   return [
     ['declared span', formatTokens(m.declaredSpan)],
     ['trained span', formatTokens(m.trainedSpan)],
     ['served span', formatTokens(m.servedSpan)],
-    ['reach', formatTokens(m.reach)],
+    ['reach', m.reach === null && m.bucketHorizon !== null ? 'no hard limit (relative buckets)' : `${formatTokens(m.reach)}${assumed}`],
+    ...(m.tunedSpan !== null ? [['tuned span', formatTokens(m.tunedSpan)] as Row] : []),
+    ...(m.bucketHorizon !== null ? [['bucket horizon', formatTokens(m.bucketHorizon)] as Row] : []),
     ['scaling cover', formatTokens(m.scalingCover)],
     ['headroom', formatInteger(m.headroom)],
     ['extension ratio', m.extensionRatio === null ? '—' : `${formatNumber(m.extensionRatio)}×`],
@@ -118,6 +122,7 @@ function budgetRows(m: Metrics): Row[] {
     ['parameters', m.params === null ? '—' : `${formatCount(m.params)} (${formatInteger(m.params)})`],
     ['active parameters', m.activeParams === m.params ? '—' : formatCount(m.activeParams)],
     ['non-embedding parameters', formatCount(m.nonEmbeddingParams)],
+    ...(m.visionParams !== null ? [['vision tower (apart)', `${formatCount(m.visionParams)} (${formatInteger(m.visionParams)})`] as Row] : []),
     ['weights', formatBytes(m.weightBytes)],
     ['cache per token', formatBytes(m.cachePerTokenBytes)],
     ['cache at span', formatBytes(m.cacheBytesAtSpan)],
@@ -162,7 +167,7 @@ export function renderFileText(report: FileReport, style: TextStyle = PLAIN): st
     style.bold(title),
     `  ${style.dim(`${report.dialect} format · ${positionLine(report)} · evaluated at ${formatTokens(m.evaluationSpan)} tokens`)}`,
     ...(shapeLine(report) ? [`  ${style.dim(shapeLine(report))}`] : []),
-    ...section(style, 'Range', rangeRows(m)),
+    ...section(style, 'Range', rangeRows(m, report)),
     ...section(style, 'Spectrum', spectrumRows(m)),
   ];
   const kinds = layerKindRows(m);

@@ -4,11 +4,11 @@ import { formatBytes, formatCount, formatInteger, formatNumber, formatTokens } f
 type Kind = 'tokens' | 'bytes' | 'count' | 'large' | 'ratio' | 'radians' | 'share' | 'flop';
 
 const KIND: Partial<Record<string, Kind>> = {
-  declaredSpan: 'tokens', trainedSpan: 'tokens', servedSpan: 'tokens', evaluationSpan: 'tokens', reach: 'tokens',
+  declaredSpan: 'tokens', trainedSpan: 'tokens', servedSpan: 'tokens', evaluationSpan: 'tokens', reach: 'tokens', tunedSpan: 'tokens', bucketHorizon: 'tokens',
   scalingCover: 'tokens', headroom: 'tokens', extensionRatio: 'ratio', fastestWavelength: 'ratio',
   slowestWavelength: 'ratio', unturnedPairs: 'count', exposedPairs: 'count', separationFloor: 'ratio',
   separationFloorOffset: 'tokens', discriminationSpan: 'tokens', attentionScale: 'ratio', alibiHorizon: 'tokens',
-  receptiveField: 'tokens', positionShare: 'share', params: 'large', activeParams: 'large',
+  receptiveField: 'tokens', positionShare: 'share', params: 'large', visionParams: 'large', activeParams: 'large',
   nonEmbeddingParams: 'large', weightBytes: 'bytes', cachePerTokenBytes: 'bytes', cacheBytesAtSpan: 'bytes',
   memoryBytes: 'bytes', fitSequences: 'count', flopsPerToken: 'flop', tokenBudget: 'tokens',
   devices: 'count', kvHeadsPerDevice: 'count', weightBytesPerDevice: 'bytes', cachePerTokenBytesPerDevice: 'bytes',

@@ -73,15 +73,35 @@ export const RULES = {
     title: 'The tensor- or pipeline-parallel degree cannot split this model',
     help: 'The tensor degree must divide the attention heads, and it and the key/value heads must divide one another; the pipeline degree must be at most the layers. Use one of the degrees the message names.',
   },
+  'key-unread': {
+    severity: 'info', scope: 'file',
+    title: 'A key of the model block is not read, and is not on the list of keys that change no metric',
+    help: 'If the key changes the model\'s shape, position code or memory, describe the model in the context-reach model format; otherwise ignore it (or turn the rule off in the policy).',
+  },
+  'family-default-taken': {
+    severity: 'info', scope: 'file',
+    title: 'A value the config leaves out was taken from its family\'s published defaults',
+    help: 'State the value in the config if it differs from the family default.',
+  },
+  'span-not-stated': {
+    severity: 'info', scope: 'file',
+    title: 'An ALiBi config states no maximum positions: no hard limit, metrics at a served span only',
+    help: 'Give a served span (--served-span, or the policy\'s serving block) to compute the positional and cache metrics.',
+  },
+  'vision-not-counted': {
+    severity: 'info', scope: 'file',
+    title: 'The vision tower of a multimodal config is not counted',
+    help: 'Its config does not give the ViT-style sizes (hidden_size, num_hidden_layers, intermediate_size, patch_size, image_size) the count needs; parameters and memory cover the language model only.',
+  },
   'span-past-reach': {
     severity: 'block', scope: 'file',
     title: 'The evaluated span goes past what the position code supports',
     help: 'Raise the scaling factor, use a learned table as large as the span, or serve a shorter span.',
   },
   'span-beyond-scaling-cover': {
-    severity: 'warn', scope: 'file',
-    title: 'The declared span goes beyond what the scaling accounts for, and no trained span is stated',
-    help: 'State the trained span explicitly, or raise the scaling factor so original span times factor covers the declared span.',
+    severity: 'info', scope: 'file',
+    title: 'The reach is taken from the declared span on assumption: the scaling alone accounts for less, and no tuned span is stated',
+    help: 'If the scaled model was trained or tuned at the declared span (as long-context checkpoints commonly are), state it as the trained span (it is then the tuned span, never multiplied again); otherwise raise the scaling factor.',
   },
   'positions-collide': {
     severity: 'block', scope: 'file',

@@ -54,7 +54,7 @@ export function metricFindings(spec: ModelSpec, metrics: Metrics, locations: Loc
     && metrics.scalingCover !== null && metrics.declaredSpan !== null && metrics.declaredSpan > metrics.scalingCover) {
     const scaling = spec.position.scaling;
     findings.push(finding('span-beyond-scaling-cover',
-      `The declared span ${formatTokens(metrics.declaredSpan)} goes beyond the ${formatTokens(metrics.scalingCover)} that ${scaling.kind} scaling accounts for (original span ${formatTokens(metrics.trainedSpan)} × factor ${scaling.factor}), and no trained span is stated; state the trained span if the model was tuned longer, or raise the factor to ${formatInteger(Math.ceil(metrics.declaredSpan / (metrics.trainedSpan ?? 1)))}.`,
+      `The reach ${formatTokens(metrics.reach)} is the declared span, taken on assumption: ${scaling.kind} scaling alone accounts for ${formatTokens(metrics.scalingCover)} (original span ${formatTokens(metrics.trainedSpan)} × factor ${scaling.factor}), and no tuned span is stated. If the scaled model was trained or tuned at ${formatTokens(metrics.declaredSpan)}, state it as the trained span (--trained-span ${metrics.declaredSpan}, or the policy's serving block); it is then the tuned span and is not multiplied by the factor again. Otherwise raise the factor to ${formatInteger(Math.ceil(metrics.declaredSpan / (metrics.trainedSpan ?? 1)))}.`,
       at(locations, 'declaredSpan')));
   }
 

@@ -132,6 +132,15 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
         : '';
       push('scaling-factor-below-one', 'position.scaling.factor', `${name('position.scaling.factor')} is ${formatNumber(scaling.factor)}; a scaling factor below 1 shrinks the trained span instead of extending it: set it to the extended span over the original span, at least 1${hint}, or remove the scaling block`);
     }
+    if (scaling && scaling.kind === 'pairwise' && isCount(spec.headDim)) {
+      const f = spec.position.fraction;
+      const pairs = Number.isFinite(f) && f > 0 && f <= 1 ? Math.floor((spec.headDim * f + 1e-9) / 2) : NaN;
+      for (const [list, which] of [[scaling.shortFactors, 'short'], [scaling.longFactors, 'long']] as const) {
+        if (list && !Number.isNaN(pairs) && list.length !== pairs) {
+          push('value-invalid', 'position.scaling', `the ${which} factors of ${name('position.scaling')} number ${list.length}, but the rotary code has ${pairs} pairs (head width × rotary share / 2); give one factor per pair`);
+        }
+      }
+    }
     if (scaling && isCount(scaling.originalSpan) && isCount(spec.declaredSpan) && scaling.originalSpan > spec.declaredSpan) {
       const extended = Number.isFinite(scaling.factor) && scaling.factor >= 1 ? ` (${scaling.originalSpan} × ${formatNumber(scaling.factor)} = ${formatNumber(scaling.originalSpan * scaling.factor)})` : '';
       push('original-span-above-declared', 'position.scaling.originalSpan', `${name('position.scaling.originalSpan')} is ${scaling.originalSpan}, above ${name('declaredSpan')} ${spec.declaredSpan}; the original span is the span trained before scaling and cannot exceed the declared span: set ${name('declaredSpan')} to the extended span${extended}, or ${name('position.scaling.originalSpan')} to the span the model was trained at`);
