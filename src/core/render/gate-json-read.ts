@@ -93,7 +93,8 @@ const delta = record({
   base: numberOrNull, head: numberOrNull, change: numberOrNull, changePct: numberOrNull,
   limit,
   state: { enum: ['ok', 'crossed', 'unjudged'] },
-});
+  note: text,
+}, false, ['note']);
 
 /** A remedy (`src/core/remedy/types.ts`): the change, the metrics it gives, the findings it raises. */
 const remedy = record({
@@ -125,7 +126,8 @@ const file = record({
     passes: { type: 'boolean' },
     stillBlocking: { type: 'array', items: text },
   }, true),
-}, false, ['remedyTogether']);
+  assumed: record({ metrics: { type: 'array', items: { enum: [...METRIC_PATHS] } }, reason: text }, true),
+}, false, ['remedyTogether', 'assumed']);
 
 /** The JSON Schema of the report `renderGateJson` writes (version 1). */
 export const GATE_JSON_SCHEMA: Readonly<Schema> = {
@@ -133,7 +135,7 @@ export const GATE_JSON_SCHEMA: Readonly<Schema> = {
     version: { const: 1 },
     verdict, blocking: count, warnings: count,
     base: text, head: text,
-    policy: record({ source: { enum: ['file', 'built-in'] }, path: text, changedInHead: { type: 'boolean' } }),
+    policy: record({ source: { enum: ['file', 'built-in'] }, path: text, changedInHead: { type: 'boolean' }, limitChanges: { type: 'array', items: text } }, false, ['limitChanges']),
     waiver: record({ label: textOrNull, applied: { type: 'boolean' }, waivedBlocks: count }),
     notices: { type: 'array', items: text },
     deleted: { type: 'array', items: record({ status, path: text, previousPath: textOrNull }) },

@@ -9,6 +9,9 @@ import type { ChangeValue, CombinedRemedy, Remedy, RemedyFields } from '../remed
 import { formatInteger, formatNumber, formatTokens } from '../units.js';
 import { formatMetric } from './metric-format.js';
 
+export { remedyNeeds, needsText } from '../remedy/needs.js';
+export { filePatches, type FilePatch } from '../remedy/file-patch.js';
+
 const TOKEN_KEYS = new Set(['serving.span', 'position.scaling.originalSpan']);
 
 /** A change value in the unit people read it in. */
@@ -83,3 +86,11 @@ export function togetherText(together: CombinedRemedy, spec: ModelSpec | null): 
 
 /** Said once wherever remedies are shown. */
 export const REMEDY_NOTE = 'Each remedy was applied to the description, measured and judged again by the same rules and limits before it is shown.';
+
+/** Said once wherever remedies are shown: what "passes" means and what it does not. */
+export const PASSES_NOTE = 'A fix "passes these rules" when the changed file, measured and judged again by the same rules and limits, no longer blocks; it does not show the model keeps its quality.';
+
+/** Every remedy of a finding: the first, then the alternatives. */
+export function allRemedies(fields: Partial<RemedyFields>): Remedy[] {
+  return fields.remedy ? [fields.remedy, ...(fields.remedyAlternatives ?? [])] : [];
+}
