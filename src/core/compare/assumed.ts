@@ -15,6 +15,9 @@ import { specFindings } from '../rules/spec-rules.js';
 import { formatTokens } from '../units.js';
 import { METRIC_PATHS, metricValue } from './metric-path.js';
 
+/** Rules about the span against the reach, which a grown span with an unchanged code raises anyway. */
+const SPAN_RULES = new Set(['span-past-reach', 'span-beyond-scaling-cover']);
+
 /** What the gate took on assumption for one file's head. */
 export interface Assumption {
   /** Metrics of the head whose value rests on the assumption (they differ from the face-value reading). */
@@ -57,9 +60,12 @@ export function inheritTrainedSpan(base: FileReport, head: FileReport): { head: 
   const assumedSpec: ModelSpec = { ...head.spec, trainedSpan: inherited };
   const metrics = computeMetrics(assumedSpec);
   const moved = METRIC_PATHS.filter((m) => metricValue(metrics, m) !== metricValue(head.metrics, m));
-  const findings = sortFindings([
-    ...readerFindings(head), ...specFindings(head.spec, head.locations), ...metricFindings(assumedSpec, metrics, head.locations),
-  ]);
+  // A span past the assumed reach is the grown span itself, which `span-grew-code-unchanged`
+  // already says: only findings the head had on its own face stay about spans.
+  const had = new Set(head.findings.map((f) => f.rule));
+  const derived = metricFindings(assumedSpec, metrics, head.locations)
+    .filter((f) => !SPAN_RULES.has(f.rule) || had.has(f.rule));
+  const findings = sortFindings([...readerFindings(head), ...specFindings(head.spec, head.locations), ...derived]);
   return {
     head: { ...head, metrics, findings },
     assumption: {

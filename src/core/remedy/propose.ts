@@ -149,6 +149,11 @@ function withOwnLimits(ctx: RemedyContext, resolves: Resolves, shown: readonly s
   });
 }
 
+/** ` within the limits` when a policy limit bears on a shown metric, for the reasons a kind gives. */
+function withinWords(ctx: RemedyContext, shown: readonly string[]): string {
+  return shown.some((m) => ctx.judging.limits[m] !== undefined) ? ' within the limits' : '';
+}
+
 function remedyOf(change: Change, proof: Proof, shown: string[], target: Target): Remedy {
   const metrics: Record<string, number | null> = {};
   for (const name of [...(target.metric ? [target.metric] : []), ...shown]) {
@@ -235,7 +240,7 @@ function spanKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindO
   // the served span within reach, so the remedy never trades one blocking finding for another.
   const within = (spec2: ModelSpec) => { const h = rangeMetrics(spec2).headroom; return h === null || h >= 0; };
   const found = largestPassing(1, T - 1, (t) => { const next = applyChange(spec, { 'serving.span': t }); return ok(next) && within(next); });
-  if (found.value === null) return none(`no served span from 1 to ${formatInteger(T - 1)} tokens clears it within the limits`);
+  if (found.value === null) return none(`no served span from 1 to ${formatInteger(T - 1)} tokens clears it${withinWords(ctx, shown)}`);
   return proveFirst(ctx, target, [{ 'serving.span': found.value }], shown,
     `serving at most ${formatTokens(found.value)} tokens`);
 }
@@ -249,7 +254,7 @@ function sequencesKind(ctx: RemedyContext, target: Target, resolves: Resolves): 
   const shown = ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'];
   const ok = withOwnLimits(ctx, resolves, shown);
   const found = largestPassing(1, current - 1, (n) => ok(applyChange(spec, { 'serving.sequences': n })));
-  if (found.value === null) return none(`not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it within the limits`);
+  if (found.value === null) return none(`not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it${withinWords(ctx, shown)}`);
   return proveFirst(ctx, target, [{ 'serving.sequences': found.value }], shown,
     `${found.value} sequence${found.value === 1 ? '' : 's'}`);
 }
@@ -266,7 +271,7 @@ function cacheDtypeKind(ctx: RemedyContext, target: Target, resolves: Resolves):
   const ok = withOwnLimits(ctx, resolves, shown);
   const candidates = narrower.filter((d) => ok(applyChange(spec, { 'dtypes.cache': d })))
     .map((d): Change => ({ 'dtypes.cache': d }));
-  if (candidates.length === 0) return none(`even a ${narrower[narrower.length - 1]} cache does not clear it within the limits`);
+  if (candidates.length === 0) return none(`even a ${narrower[narrower.length - 1]} cache does not clear it${withinWords(ctx, shown)}`);
   return proveFirst(ctx, target, candidates, shown,
     `a ${candidates[0]!['dtypes.cache']} cache`);
 }
@@ -299,7 +304,7 @@ function kvHeadsKind(ctx: RemedyContext, target: Target, resolves: Resolves): Ki
   const ok = withOwnLimits(ctx, resolves, shown);
   const candidates = divisorsBelow(heads, kv).filter((d) => ok(applyChange(spec, { kvHeads: d })))
     .map((d): Change => ({ kvHeads: d }));
-  if (candidates.length === 0) return none('even one key/value head does not clear it within the limits');
+  if (candidates.length === 0) return none(`even one key/value head does not clear it${withinWords(ctx, shown)}`);
   return proveFirst(ctx, target, candidates, shown,
     `${candidates[0]!.kvHeads} key/value heads (a retraining-level change)`);
 }

@@ -256,12 +256,19 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
   }
   if (listed.length < others.length) lines.push(`- … ${others.length - listed.length} more findings are in the job summary and the JSON report.`);
   if (listed.length > 0) lines.push('');
-  const alternatives = file.findings.filter((f) => f.counts === 'block' && (f.remedyAlternatives ?? []).length > 0);
-  if (alternatives.length > 0) {
-    lines.push('Other fixes that pass these rules:');
-    for (const f of alternatives) {
-      for (const remedy of f.remedyAlternatives ?? []) lines.push(`- for \`${f.rule}\`: ${alternativeLine(file, remedy)}`);
+  // One line per distinct change, naming every finding it fixes: the same fix is never listed twice.
+  const alternatives = new Map<string, { rules: string[]; remedy: Remedy }>();
+  for (const f of file.findings.filter((x) => x.counts === 'block')) {
+    for (const remedy of f.remedyAlternatives ?? []) {
+      const key = JSON.stringify(Object.entries(remedy.change).sort());
+      const entry = alternatives.get(key) ?? { rules: [], remedy };
+      entry.rules.push(`\`${f.rule}\``);
+      alternatives.set(key, entry);
     }
+  }
+  if (alternatives.size > 0) {
+    lines.push('Other fixes that pass these rules:');
+    for (const { rules, remedy } of alternatives.values()) lines.push(`- for ${rules.join(', ')}: ${alternativeLine(file, remedy)}`);
     lines.push('');
   }
   if (parts.chart && file.head) {
