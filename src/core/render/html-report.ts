@@ -9,7 +9,8 @@
 import type { FileDecision, GateReport, MetricDelta } from '../compare/decide.js';
 import type { FileReport } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
-import type { ModelSpec } from '../model.js';
+import type { LocationMap, ModelSpec } from '../model.js';
+import { filePatches } from '../remedy/file-patch.js';
 import { applyChange, changeEntries } from '../remedy/apply-change.js';
 import type { Change } from '../remedy/types.js';
 import { VERSION } from '../version.js';
@@ -37,8 +38,13 @@ const CSP = "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-
 
 const MEMORY_KEYS = new Set(['serving.sequences', 'dtypes.cache', 'kvHeads']);
 
-/** `factor 8, sequences 5`: a remedy short enough for a chart legend. */
-function shortChange(change: Change, spec: ModelSpec): string {
+/** `factor 8, sequences 5`: a remedy short enough for a chart legend, in the file's own key names. */
+function shortChange(change: Change, spec: ModelSpec, file?: FileDecision): string {
+  if (file) {
+    const locations = (file.head as { locations?: LocationMap } | null)?.locations ?? {};
+    const edits = filePatches(change, file.dialect ?? 'checkpoint', spec, locations, file.path).flatMap((p) => p.edits);
+    if (edits.length > 0) return edits.map((e) => `${e.key.split('.').pop()} ${e.value}`).join(', ');
+  }
   return changeParts(change, spec).map((p) => `${p.key.split('.').pop()} ${p.after}`).join(', ');
 }
 
@@ -50,7 +56,7 @@ function positionVariant(file: FileDecision): { report: FileReport; label: strin
     const change = finding.remedy?.change;
     if (!change || !changeEntries(change).every(([key]) => key.startsWith('position.'))) continue;
     const spec = applyChange(head.spec, change);
-    return { report: { ...head, spec, metrics: computeMetrics(spec) }, label: `with the remedy (${shortChange(change, head.spec)})` };
+    return { report: { ...head, spec, metrics: computeMetrics(spec) }, label: `with the fix (${shortChange(change, head.spec, file)})` };
   }
   return null;
 }
@@ -62,7 +68,7 @@ function memoryVariant(file: FileDecision): MemoryVariant | null {
   for (const finding of file.findings) {
     const change: Change | undefined = finding.remedy?.change;
     if (!change || !changeEntries(change).every(([key]) => MEMORY_KEYS.has(key))) continue;
-    return { spec: applyChange(spec, change), label: `head with the remedy (${shortChange(change, spec)})` };
+    return { spec: applyChange(spec, change), label: `head with the fix (${shortChange(change, spec, file)})` };
   }
   return null;
 }

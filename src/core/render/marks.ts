@@ -35,3 +35,6 @@ export const MEMORY_CAUTION = 'weights and key/value cache only, plus the reserv
 
 /** Memory figures the caution goes beside. */
 export const MEMORY_METRICS: ReadonlySet<string> = new Set(['memoryBytes', 'fitSequences', 'cacheBytesAtSpan']);
+
+/** The same caution, short enough for a card or a chart label. */
+export const MEMORY_CAUTION_SHORT = 'weights and cache only, plus the reserve';

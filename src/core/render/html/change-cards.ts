@@ -9,7 +9,7 @@ import { usableDeviceBytes } from '../../metrics/memory-curve.js';
 import type { MetricPath } from '../../metrics/types.js';
 import { formatInteger } from '../../units.js';
 import { formatMetric } from '../metric-format.js';
-import { MEMORY_CAUTION } from '../marks.js';
+import { MEMORY_CAUTION_SHORT as MEMORY_CAUTION } from '../marks.js';
 import { tokenLabel } from './chart-frame.js';
 import { h, type Markup } from './markup.js';
 
@@ -93,7 +93,7 @@ export function changeCards(file: FileDecision): Markup | null {
     if (r.spec.metric === 'headroom' && r.v !== null && r.v < 0) note = `the span is ${formatInteger(-r.v)} tokens past the reach`;
     else if (r.spec.metric === 'memoryBytes' && usable !== null) note = `usable on the device: ${formatMetric('memoryBytes', usable)}; ${MEMORY_CAUTION}`;
     else if (r.spec.metric === 'fitSequences' && head.spec.serving.sequences !== null) note = `the service holds ${formatInteger(head.spec.serving.sequences)}; ${MEMORY_CAUTION}`;
-    if (reshaped && SHAPED.has(r.spec.metric)) note = `${note ? `${note}; ` : ''}for a reshaped network that needs new weights (checkpoint-shape-changed)`;
+    if (reshaped && SHAPED.has(r.spec.metric)) note = `${note ? `${note}; ` : ''}a reshaped network: needs new weights`;
     const limit = file.deltas.find((d) => d.metric === r.spec.metric)?.limit;
     if (limit && note === null) {
       note = `limit ${[limit.min !== undefined ? `≥ ${formatMetric(r.spec.metric, limit.min)}` : '', limit.max !== undefined ? `≤ ${formatMetric(r.spec.metric, limit.max)}` : '',

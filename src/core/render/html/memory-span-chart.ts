@@ -81,8 +81,8 @@ export function memorySpanChart(id: string, base: FileReport | null, head: FileR
   if (headT !== null) parts.push(vRule(f, x(headT), `served ${tokenLabel(headT)}`, 's-span dot', x(headT) > f.width - f.right - 60 ? 'end' : 'start'));
 
   const notes: string[] = [];
-  // Memory grows with the span, so each curve runs below-left and above-right of its point:
-  // the higher point's label goes above-left and the lower one's below-right, clear of the line.
+  // Memory grows with the span, so each curve runs below-left and above-right of its point: the
+  // higher point's label goes above-left, clear of the line.
   const highest = Math.max(...series.map((s) => s.report.metrics.memoryBytes as number));
   for (const s of series) {
     const T = s.report.metrics.evaluationSpan as number;
@@ -92,9 +92,12 @@ export function memorySpanChart(id: string, base: FileReport | null, head: FileR
     const fit = s.report.metrics.fitSequences;
     const label = `${s.name}: ${formatBytes(m)} at ${tokenLabel(T)}${fit !== null ? `, ${formatInteger(fit)} fit` : ''}`;
     const above = series.length === 1 || m === highest;
+    // Every curve lies at or above the weights, so the band between the weights and the axis is
+    // free of lines: the lower point's label goes there, left of its span.
+    const floorY = weights !== null ? (y(weights / GIB) + (f.height - f.bottom)) / 2 + 4 : y(m / GIB) + 17;
     parts.push(h('text', above
       ? { class: 'mark', x: x(T) - 8, y: y(m / GIB) - 9, 'text-anchor': 'end' }
-      : { class: 'mark', x: x(T) + 8, y: y(m / GIB) + 17, 'text-anchor': 'start' }, label));
+      : { class: 'mark', x: x(T) - 6, y: floorY, 'text-anchor': 'end' }, label));
     notes.push(`${s.name} holds ${sequencesText(s.report)} of ${formatInteger(T)} tokens: ${formatBytes(m)}${budget !== null ? ` of ${formatBytes(budget)} usable` : ''}${fit !== null ? `, ${formatInteger(fit)} sequence${fit === 1 ? '' : 's'} fit` : ''}`);
   }
 
