@@ -26,7 +26,7 @@ describe('context-reach diff --html FILE', () => {
       const html = readFileSync(file, 'utf8');
       expect(html.startsWith('<!doctype html>')).toBe(true);
       expect(html.match(/<section class="file"/g)).toHaveLength(2);
-      expect(out.join('')).toContain('remedy: position.scaling.factor 4 → 8');
+      expect(out.join('')).toContain('fix: model.position.scaling.factor 4 → 8');
     } finally {
       repo.remove();
     }

@@ -67,9 +67,10 @@ describe('renderComment(report) with remedies', () => {
 describe('renderDiffText(report) with remedies', () => {
   it('prints remedy, alternatives and the together line under the findings', () => {
     const text = renderDiffText(report);
-    expect(text).toContain('        remedy: position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
+    expect(text).toContain('        fix: model.position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
+    expect(text).toContain('; still needs fine-tuning at the longer span with the larger yarn factor 8');
     expect(text).toContain('        or: serving.span 262,144 (256k) → 111,763 ⇒ evaluationSpan 111,763, headroom 19,309');
-    expect(text).toContain('  together: All first remedies together (position.scaling.factor 4 → 8, serving.sequences 8 → 3) pass: nothing blocks');
+    expect(text).toContain('  together: All first fixes together (model.position.scaling.factor 4 → 8, serving.sequences 8 → 3) pass these rules: nothing blocks');
   });
 });
 
@@ -78,8 +79,9 @@ describe('inspect output with remedies (built-in rules, one file)', () => {
 
   it('shows each blocking finding\'s remedy in the text report', () => {
     const text = renderInspectText([file], []);
-    expect(text).toContain('          remedy: position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
-    expect(text).toContain('          remedy: serving.sequences 8 → 5 ⇒ memoryBytes 20.4 GiB');
+    // Built-in rules, no policy limits: five sequences fit the device.
+    expect(text).toContain('          fix: model.position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
+    expect(text).toContain('          fix: serving.sequences 8 → 5 ⇒ memoryBytes 20.4 GiB');
   });
 
   it('carries the remedy fields and remedyTogether in the JSON document', () => {

@@ -7,7 +7,7 @@ import { filePatches, type FilePatch } from '../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
 import type { Remedy } from '../remedy/types.js';
 import { formatInteger, formatNumber } from '../units.js';
-import { codeSpan, encodePath, escapeMarkdown } from './escape.js';
+import { codeBlock, codeSpan, encodePath, escapeMarkdown } from './escape.js';
 import { limitStateMark, limitStateWord, MEMORY_CAUTION, MEMORY_METRICS, SEVERITY_MARK, SEVERITY_WORD, VERDICT_MARK, VERDICT_WORD } from './marks.js';
 import { memoryChart } from './memory-chart.js';
 import { formatDeltaChange, formatMetric } from './metric-format.js';
@@ -148,10 +148,7 @@ function patchLead(patch: FilePatch, finding: JudgedFinding): string {
 }
 
 function patchBlock(patch: FilePatch): string {
-  // A fence longer than any backtick run inside keeps the snippet one block, whatever it holds.
-  const longest = Math.max(2, ...(patch.snippet.match(/`+/g) ?? []).map((run) => run.length));
-  const fence = '`'.repeat(longest + 1);
-  return `${fence}${patch.format}\n${patch.snippet}\n${fence}`;
+  return codeBlock(patch.snippet, patch.format);
 }
 
 function locationsOf(file: FileDecision): LocationMap {

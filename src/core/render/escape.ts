@@ -57,3 +57,14 @@ export function encodePath(path: string): string {
     .map((segment) => encodeURIComponent(segment).replace(/[!'()*~]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`))
     .join('/');
 }
+
+/**
+ * Untrusted text shown verbatim in a fenced code block (`lang` is ours: `json`, `yaml`,
+ * `suggestion`): the fence is one backtick longer than the longest run inside, so no line of the
+ * text can close it, and everything inside is literal (no element, link or mention).
+ */
+export function codeBlock(text: string, lang: string): string {
+  const longest = Math.max(2, ...(text.match(/`+/g) ?? []).map((run) => run.length));
+  const fence = '`'.repeat(longest + 1);
+  return `${fence}${lang}\n${text.replace(/\r\n?/g, '\n')}\n${fence}`;
+}

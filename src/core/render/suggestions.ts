@@ -10,7 +10,7 @@ import type { FileDecision, GateReport, JudgedFinding } from '../compare/decide.
 import { lineEdit } from '../remedy/suggestion-edit.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
 import { remedyPatches } from './comment.js';
-import { escapeMarkdown } from './escape.js';
+import { codeBlock, escapeMarkdown } from './escape.js';
 import { metricParts, allRemedies } from './remedy-text.js';
 
 /** Start of every suggestion body; the finding's id and ` -->` follow. */
@@ -51,11 +51,6 @@ export function suggestionIdOf(body: string): string | null {
   return match ? match[1]! : null;
 }
 
-function fence(text: string): string {
-  const longest = Math.max(2, ...(text.match(/`+/g) ?? []).map((run) => run.length));
-  return '`'.repeat(longest + 1);
-}
-
 /**
  * The suggestions to keep on the pull request: per blocking finding, the first of its fixes that
  * is a whole-line edit of lines in the diff. `texts` holds each model file at head; `diffLines`
@@ -79,16 +74,13 @@ export function planSuggestions(report: GateReport, texts: ReadonlyMap<string, s
         if (!inDiff) continue;
         const values = metricParts(remedy.metrics).slice(0, 3).map((m) => `${m.metric} ${m.value}`).join(', ');
         const needs = needsText(remedyNeeds(remedy.change, file.head.spec));
-        const marks = fence(edit.replacement);
         planned.push({
           id: suggestionId(file, finding), path: file.path, startLine: edit.startLine, line: edit.endLine,
           body: [
             `${SUGGESTION_MARKER}${suggestionId(file, finding)} -->`,
             `**context-reach** · \`${finding.rule}\`${finding.metric ? ` (\`${finding.metric}\`)` : ''}: this fix passes these rules (${escapeMarkdown(values)}); it still needs ${escapeMarkdown(needs)}.`,
             '',
-            `${marks}suggestion`,
-            edit.replacement,
-            marks,
+            codeBlock(edit.replacement, 'suggestion'),
           ].join('\n'),
         });
         break;
