@@ -7,7 +7,7 @@ import { filePatches, type FilePatch } from '../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
 import type { Remedy } from '../remedy/types.js';
 import { formatInteger, formatNumber } from '../units.js';
-import { codeBlock, codeSpan, encodePath, escapeMarkdown } from './escape.js';
+import { codeBlock, codeSpan, encodePath, escapeMarkdown, htmlCode } from './escape.js';
 import { limitStateMark, limitStateWord, MEMORY_CAUTION, MEMORY_METRICS, SEVERITY_MARK, SEVERITY_WORD, VERDICT_MARK, VERDICT_WORD } from './marks.js';
 import { memoryChart } from './memory-chart.js';
 import { formatDeltaChange, formatMetric } from './metric-format.js';
@@ -227,9 +227,10 @@ function fileSummary(file: FileDecision): string {
     count('warn') && `${count('warn')} warning${count('warn') === 1 ? '' : 's'}`,
     count('info') && `${count('info')} note${count('info') === 1 ? '' : 's'}`,
   ].filter(Boolean);
-  const status = file.status === 'renamed' && file.previousPath ? `, renamed from ${codeSpan(file.previousPath)}`
+  // A <summary> line is an HTML block: no markdown escapes there, HTML entities only.
+  const status = file.status === 'renamed' && file.previousPath ? `, renamed from ${htmlCode(file.previousPath)}`
     : file.status === 'added' ? ', new file, judged on its own' : '';
-  return `${VERDICT_MARK[file.verdict]} ${codeSpan(file.path)}${status}: ${parts.length > 0 ? parts.join(', ') : 'no findings'}`;
+  return `${VERDICT_MARK[file.verdict]} ${htmlCode(file.path)}${status}: ${parts.length > 0 ? parts.join(', ') : 'no findings'}`;
 }
 
 export interface FileSectionParts {

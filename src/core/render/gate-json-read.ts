@@ -82,7 +82,10 @@ const spec = record({
   serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens'])),
 });
 
+const location = record({ key: text, line: lineOrNull });
 const version = record({ spec, metrics }, true);
+/** The head also carries where each field was stated (optional: reports written before it lack it). */
+const headVersion = record({ spec, metrics, locations: map(location) }, true, ['locations']);
 
 const failure = record({ path: text, line: lineOrNull, message: text, notAModel: { type: 'boolean' } }, true, ['notAModel']);
 
@@ -119,7 +122,7 @@ const file = record({
   path: text, previousPath: textOrNull, status, dialect: { enum: ['context-reach', 'checkpoint', null] }, verdict,
   deltas: { type: 'array', items: delta },
   findings: { type: 'array', items: finding },
-  base: version, head: version, baseError: failure, headError: failure,
+  base: version, head: headVersion, baseError: failure, headError: failure,
   remedyTogether: record({
     change: map({ type: ['number', 'string'] }),
     metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
