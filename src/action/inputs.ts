@@ -9,6 +9,7 @@ import { DEFAULT_POLICY_PATH } from '../core/policy/defaults.js';
 
 export type FailOn = 'block' | 'warn' | 'never';
 export type CommentMode = 'update' | 'off';
+export type SuggestionsMode = 'on' | 'off';
 
 export interface Settings {
   /** Token for REST calls; empty when the workflow gives none (default: `${{ github.token }}`). */
@@ -19,6 +20,8 @@ export interface Settings {
   failOn: FailOn;
   /** Keep one living pull-request comment, or write none (default: `update`). */
   comment: CommentMode;
+  /** Post each blocking finding's fix as a review suggestion on its line when that line is in the diff (default: `on`). */
+  suggestions: SuggestionsMode;
   /** Where the JSON report is written (default: `${RUNNER_TEMP}/context-reach/report.json`). */
   reportJson: string;
   /** Where a SARIF 2.1.0 file is written, null for none (default: `null`). */
@@ -118,6 +121,7 @@ export function readSettings(getInput: GetInput, env: Readonly<Record<string, st
     policyPath: policyRaw === '' ? DEFAULT_POLICY_PATH : repositoryPath('policy', policyRaw),
     failOn: oneOf('fail-on', read('fail-on'), ['block', 'warn', 'never'] as const, 'block'),
     comment: oneOf('comment', read('comment'), ['update', 'off'] as const, 'update'),
+    suggestions: oneOf('suggestions', read('suggestions'), ['on', 'off'] as const, 'on'),
     reportJson: reportRaw === '' ? join(temp, 'context-reach', 'report.json') : outputPath('report-json', reportRaw),
     sarif: sarifRaw === '' ? null : outputPath('sarif', sarifRaw),
     base: baseRaw === '' ? null : baseRaw,

@@ -14,6 +14,7 @@ import type { GitReader } from './git.js';
 import { isPermissionError, publishComment, type GitHubClient, type GitHubClientOptions } from './github.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { runPublish } from './publish.js';
+import { createReviewApi, publishSuggestions, type ReviewApi } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
@@ -27,6 +28,8 @@ export interface ActionDeps {
   writeFile(path: string, text: string): Promise<void>;
   createGit(cwd: string): GitReader;
   createGitHub(token: string, options: GitHubClientOptions): GitHubClient;
+  /** Review-comment calls for suggestions (default: the REST adapter of `review-suggestions.ts`). */
+  createReviews?(token: string, options: { baseUrl?: string }): ReviewApi;
 }
 
 export const FORK_NOTICE = 'The token cannot comment on this pull request (a read-only token, as pull requests from forks get). The report is in the job summary and the annotations, and the verdict still decides the check. To get the comment on fork pull requests, use the two-workflow recipe in the README ("Pull requests from forks").';
@@ -194,6 +197,14 @@ export async function runAction(deps: ActionDeps): Promise<void> {
       else out.warning(notice);
       runNotices.push(notice);
     }
+  }
+  if (settings.suggestions === 'on' && event.pullNumber !== null && api) {
+    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, { baseUrl: env.GITHUB_API_URL });
+    const target = { owner: event.owner, repo: event.repo, pull: event.pullNumber, headSha: gathered.head, isFork: event.isFork };
+    await publishSuggestions(reviews, target, report, (path) => gathered.source.read(gathered.head, path)).then(({ outcome, notice }) => {
+      if (notice) { out.notice(notice); runNotices.push(notice); }
+      if (outcome) out.info(`Review suggestions: ${outcome.created} created, ${outcome.updated} updated, ${outcome.kept} kept, ${outcome.removed} removed.`);
+    }, (error: unknown) => out.warning(`Review suggestions could not be written (${error instanceof Error ? error.message : String(error)}); the fixes are in the report.`));
   }
   for (const notice of gathered.notices) out.warning(notice);
   const summaryReport = runNotices.length > 0 ? { ...report, notices: [...report.notices, ...runNotices] } : report;

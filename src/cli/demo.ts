@@ -47,7 +47,7 @@ export async function runDemo(args: string[], io: Console): Promise<number> {
     io.out(renderReport(report, ['markdown', 'text', 'json'].includes(format) ? format : 'markdown', io));
     if (values.html !== undefined) {
       await writeHtmlReport(values.html, report);
-      if (format !== 'json') io.out(`\nThe HTML report (charts, findings, proven remedies) is at ${values.html}; open it in a browser.\n`);
+      if (format !== 'json') io.out(`\nThe HTML report (charts, findings, fixes that pass these rules) is at ${values.html}; open it in a browser.\n`);
     }
     if (format !== 'json') {
       io.out(`\nverdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings). In a workflow the check would ${report.verdict === 'block' ? 'fail' : 'pass'}; the demo exits 0.\n`);

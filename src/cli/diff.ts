@@ -9,14 +9,24 @@ import { renderHtmlReport } from '../core/render/html-report.js';
 import type { GateReport } from '../core/compare/decide.js';
 import { createGitReader, gitContentSource, type GitReader } from '../action/git.js';
 import type { Console } from './console.js';
-import { SERVING_FLAGS, UsageError, servingPatch } from './options.js';
+import { optionLines, SERVING_FLAGS, SERVING_HELP, UsageError, servingPatch } from './options.js';
 import { diffWorktree } from './diff-worktree.js';
 import { terminalStyle } from './terminal.js';
 
 export const DIFF_USAGE = `usage: context-reach diff [--base REF] [--head REF] [--policy FILE]
        [--format text|markdown|json] [--fail-on block|warn|never] [--label NAME]... [--html FILE]
        [--served-span N] [--sequences N] [--device-gib G] [--cache-dtype D]
-       [--tensor-parallel N] [--pipeline-parallel N] ...`;
+       [--tensor-parallel N] [--pipeline-parallel N] ...
+${optionLines([
+    ['--base REF', 'branch, tag or commit to compare against (default: where HEAD left its upstream, else origin/HEAD, origin/main, origin/master, main or master, else the parent of HEAD)'],
+    ['--head REF', 'branch, tag or commit to judge (default: the working tree, staged and unstaged changes of tracked files)'],
+    ['--policy FILE', 'repository-relative path of the policy, read at the base (default: .github/context-reach.yml)'],
+    ['--format F', 'one of text, markdown, json (default: text)'],
+    ['--fail-on V', 'lowest verdict that exits 1: one of block, warn, never (default: block)'],
+    ['--label NAME', 'a pull-request label, e.g. the policy\'s waiver label; repeat for more (default: none)'],
+    ['--html FILE', 'also write the standalone HTML report to FILE (default: none)'],
+    ...SERVING_HELP,
+  ])}`;
 
 const FORMATS = ['text', 'markdown', 'json'] as const;
 const FAIL_ON = ['block', 'warn', 'never'] as const;

@@ -5,14 +5,20 @@ import { decodeText } from '../core/parse/source.js';
 import { renderInspectJson } from '../core/render/inspect-json.js';
 import { renderInspectText } from '../core/render/inspect-text.js';
 import type { FileSource } from './files.js';
-import { SERVING_FLAGS, servingPatch } from './options.js';
+import { optionLines, SERVING_FLAGS, SERVING_HELP, servingPatch } from './options.js';
 import { terminalStyle } from './terminal.js';
 import type { Console } from './console.js';
 
 export const INSPECT_USAGE = `usage: context-reach inspect FILE... [--json] [--at POINTER]
        [--served-span N] [--trained-span N] [--sequences N] [--device-gib G]
        [--weight-dtype D] [--weight-group-size N] [--cache-dtype D] [--position-dtype D]
-       [--tensor-parallel N] [--pipeline-parallel N] [--activation-reserve-gib G]`;
+       [--tensor-parallel N] [--pipeline-parallel N] [--activation-reserve-gib G]
+${optionLines([
+    ['FILE...', 'model configs: checkpoint config.json files or context-reach model files (YAML or JSON)'],
+    ['--json', 'print the JSON report instead of text (default: text)'],
+    ['--at POINTER', 'JSON pointer to the model block inside a larger document, e.g. /text_config (default: the whole document)'],
+    ...SERVING_HELP,
+  ])}`;
 
 /** Files read ahead of the one being measured (default: `8`). */
 const READ_AHEAD = 8;

@@ -72,3 +72,27 @@ export function servingPatch(values: Record<string, unknown>): ServingPatch {
   if ((v = text('weight-group-size')) !== undefined) patch.weightGroupSize = positiveInteger('weight-group-size', v);
   return patch;
 }
+
+/** One option of a command's help: the flag with its argument, and what it takes (unit, allowed values, default). */
+export type OptionHelp = readonly [flag: string, text: string];
+
+/** The serving flags' help, shared by `inspect` and `diff`. */
+export const SERVING_HELP: readonly OptionHelp[] = [
+  ['--served-span N', 'tokens served per sequence: a positive whole number (default: the file\'s serving span, else the policy\'s, else the declared span)'],
+  ['--trained-span N', 'tokens the model was trained at: a positive whole number (default: as stated, else the scaling block\'s original span, else the declared span)'],
+  ['--sequences N', 'sequences held at once: a positive whole number (default: the file\'s, else the policy\'s, else 1)'],
+  ['--device-gib G', 'device memory in GiB (2^30 bytes): a positive number (default: the file\'s or the policy\'s, else no memory budget)'],
+  ['--weight-dtype D', `weight storage: one of ${STORAGE_DTYPES.join(', ')} (default: the file's, else bf16)`],
+  ['--cache-dtype D', `key/value cache storage: one of ${STORAGE_DTYPES.join(', ')} (default: the weight dtype)`],
+  ['--position-dtype D', `format positions and angles are computed in: one of ${FLOAT_FORMATS.join(', ')} (default: fp32)`],
+  ['--weight-group-size N', 'weights sharing one scale when --weight-dtype is int4, int8 or fp8: a positive whole number (default: the file\'s quantization, else none)'],
+  ['--tensor-parallel N', 'tensor-parallel degree, devices one layer is split over: a positive whole number (default: the file\'s or the policy\'s, else 1)'],
+  ['--pipeline-parallel N', 'pipeline-parallel degree, stages the layers are split into: a positive whole number (default: the file\'s or the policy\'s, else 1)'],
+  ['--activation-reserve-gib G', 'GiB per device kept for activations and workspace beside the reserve fraction: a number of at least 0 (default: 0)'],
+];
+
+/** `options:` and one aligned line per option, for a command's usage text. */
+export function optionLines(rows: readonly OptionHelp[]): string {
+  const width = Math.max(...rows.map(([flag]) => flag.length));
+  return `options:\n${rows.map(([flag, text]) => `  ${flag.padEnd(width)}  ${text}`).join('\n')}`;
+}

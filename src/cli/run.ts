@@ -1,7 +1,7 @@
 import { INSPECT_USAGE, runInspect } from './inspect.js';
 import type { Console } from './console.js';
 import type { FileSource } from './files.js';
-import { UsageError } from './options.js';
+import { optionLines, UsageError } from './options.js';
 import { VERSION } from '../core/version.js';
 
 export interface CliDeps {
@@ -9,7 +9,12 @@ export interface CliDeps {
   io: Console;
 }
 
-const DEMO_USAGE = 'usage: context-reach demo [--format markdown|text|json] [--keep] [--html FILE]';
+export const DEMO_USAGE = `usage: context-reach demo [--format markdown|text|json] [--keep] [--html FILE]
+${optionLines([
+  ['--format F', 'one of markdown, text, json (default: markdown, the pull-request comment)'],
+  ['--keep', 'keep the scratch git repository the demo builds, and print where (default: removed)'],
+  ['--html FILE', 'also write the standalone HTML report to FILE (default: none)'],
+])}`;
 
 interface Command {
   usage: string;

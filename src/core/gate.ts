@@ -8,6 +8,7 @@ import { DEFAULT_POLICY, isModelConfig, parsePolicy, resolvePolicy, type Policy 
 import { attachRemedies } from './remedy/attach.js';
 import { createScanMemo, type ScanMemo } from './metrics/scan-memo.js';
 import { pairMoves } from './pair-moves.js';
+import { policyChanges } from './policy/diff.js';
 
 /** Reads a file's bytes at a commit; null when the file does not exist there. */
 export interface ContentSource {
@@ -109,6 +110,16 @@ function sameBytes(a: Uint8Array | null, b: Uint8Array | null): boolean {
   return a.length === b.length && a.every((byte, i) => byte === b[i]);
 }
 
+/** What the head's policy would change (old → new), or why it cannot be said; never throws. */
+function headPolicyChanges(base: Policy, bytes: Uint8Array | null, path: string): string[] {
+  if (bytes === null) return ['the policy file is deleted: built-in rules only after merge'];
+  try {
+    return policyChanges(base, parsePolicy(decodeText(bytes, path), path));
+  } catch (error) {
+    return [`the head's policy does not read: ${error instanceof Error ? error.message : String(error)}`];
+  }
+}
+
 /**
  * The whole gate over a pull request: the policy from the base commit, the changed model
  * configs read at both commits, and one decision. Nothing from the pull request is executed;
@@ -136,6 +147,7 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     ? await source.read(head, policyPath)
     : basePolicyBytes;
   const policyChanged = !sameBytes(basePolicyBytes, headPolicyBytes);
+  const limitChanges = policyChanged ? headPolicyChanges(policy, headPolicyBytes, policyPath) : [];
 
   const relevant = request.changes.filter((c) =>
     isModelConfig(policy, c.path) || (c.previousPath !== null && isModelConfig(policy, c.previousPath)));
@@ -215,7 +227,7 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   return attachRemedies(decide({
     configs: judgedConfigs,
     deleted,
-    policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged },
+    policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged, ...(limitChanges.length > 0 ? { limitChanges } : {}) },
     waiver: { label: waiverLabel, applied: waiverLabel !== null && labels.includes(waiverLabel) },
     notices,
     base,

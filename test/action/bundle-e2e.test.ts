@@ -1,3 +1,6 @@
+import { execFileSync } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
@@ -16,11 +19,26 @@ let repo: ScenarioRepo;
 let fake: FakeGitHub;
 let first: BundleRun;
 let second: BundleRun;
+let third: BundleRun;
+/** Review comments after the first and the second run, and the suggestion applied as GitHub would apply it. */
+let afterFirst: { id: number; body: string; line: number }[] = [];
+let afterSecond: { id: number; body: string; line: number }[] = [];
+let fixedText = '';
 
-async function run(): Promise<BundleRun> {
+function git(...args: string[]): string {
+  return execFileSync('git', ['-c', 'user.name=test', '-c', 'user.email=test@example.invalid', '-c', 'commit.gpgsign=false', ...args], { cwd: repo.dir, encoding: 'utf8' }).trim();
+}
+
+/** The file's unified diff between two commits, from its first hunk on, as the pull request's file list carries it. */
+function patchOf(from: string, to: string, path: string): string {
+  const diff = git('diff', '-U3', from, to, '--', path);
+  return diff.slice(diff.indexOf('@@'));
+}
+
+async function run(head = repo.head): Promise<BundleRun> {
   return runBundle({
     eventName: 'pull_request',
-    event: pullRequestEvent({ owner: OWNER, repo: REPO, number: 7, base: repo.base, head: repo.head }),
+    event: pullRequestEvent({ owner: OWNER, repo: REPO, number: 7, base: repo.base, head }),
     workspace: repo.dir,
     apiUrl: fake.url,
     repository: `${OWNER}/${REPO}`,
@@ -37,11 +55,29 @@ beforeAll(async () => {
   fake = await startFakeGitHub({ owner: OWNER, repo: REPO });
   fake.state.pulls.set(7, {
     number: 7, baseSha: repo.base, headSha: repo.head, baseRef: 'main', headRef: 'feature', labels: [],
-    headRepo: `${OWNER}/${REPO}`, files: [{ filename: 'models/tiny/config.json', status: 'modified' }],
+    headRepo: `${OWNER}/${REPO}`, files: [{ filename: 'models/tiny/config.json', status: 'modified', patch: patchOf(repo.base, repo.head, 'models/tiny/config.json') }],
   });
+  const snapshot = () => fake.state.reviewComments.map((c) => ({ id: c.id, body: c.body, line: c.line }));
   first = await run();
+  afterFirst = snapshot();
   second = await run();
-}, 60_000);
+  afterSecond = snapshot();
+  // Apply the suggestion as GitHub's "Commit suggestion" button does: its lines replace the commented line.
+  const suggestion = afterSecond[0];
+  if (suggestion) {
+    const replacement = /```suggestion\n([\s\S]*?)\n```/.exec(suggestion.body)?.[1] ?? '';
+    const lines = git('show', `${repo.head}:models/tiny/config.json`).split('\n');
+    lines.splice(suggestion.line - 1, 1, ...replacement.split('\n'));
+    fixedText = `${lines.join('\n')}\n`;
+    writeFileSync(join(repo.dir, 'models/tiny/config.json'), fixedText);
+    git('commit', '--quiet', '-am', 'apply the suggestion');
+    const fixed = git('rev-parse', 'HEAD');
+    const pull = fake.state.pulls.get(7)!;
+    pull.headSha = fixed;
+    pull.files = [{ filename: 'models/tiny/config.json', status: 'modified', patch: patchOf(repo.base, fixed, 'models/tiny/config.json') }];
+    third = await run(fixed);
+  }
+}, 90_000);
 
 afterAll(async () => {
   await fake?.close();
@@ -63,14 +99,13 @@ describe('the bundled action on a pull request', () => {
     expect(first.outputs['comment-url']).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/example-org\/model-zoo\/pull\/7#issuecomment-\d+$/);
   });
 
-  it('creates the comment on the first run and updates the same one on the second', () => {
+  it('creates the comment on the first run and updates the same one on the later runs', () => {
     const mine = fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
     expect(mine).toHaveLength(1);
     expect(fake.calls('issues/create-comment')).toHaveLength(1);
-    expect(fake.calls('issues/update-comment')).toHaveLength(1);
+    expect(fake.calls('issues/update-comment')).toHaveLength(2);
     expect(second.outputs['comment-url']).toBe(first.outputs['comment-url']);
-    expect(mine[0]!.body).toContain('span-grew-code-unchanged');
-    expect(mine[0]!.body).toContain('```mermaid');
+    expect(second.outputs['comment-url']).toBe(first.outputs['comment-url']);
   });
 
   it('writes the same report to the job summary', () => {
@@ -92,9 +127,35 @@ describe('the bundled action on a pull request', () => {
     expect(report.files[0].path).toBe('models/tiny/config.json');
   });
 
+  it('posts the fix as one review suggestion on the offending line, in the file\'s own JSON keys', () => {
+    expect(afterFirst).toHaveLength(1);
+    expect(fake.calls('pulls/create-review-comment')).toHaveLength(1);
+    const [suggestion] = afterFirst;
+    expect(suggestion!.line).toBe(10);
+    expect(suggestion!.body).toMatch(/^<!-- context-reach:suggestion [0-9a-f]{16} -->/);
+    expect(suggestion!.body).toContain('```suggestion\n  "max_position_embeddings": 16384,\n  "rope_scaling": {"rope_type": "linear", "factor": 4.0, "original_max_position_embeddings": 4096},\n```');
+    expect(suggestion!.body).toContain('still needs fine\\-tuning');
+  });
+
+  it('keeps the one suggestion on a re-run: no duplicate, no rewrite', () => {
+    expect(afterSecond).toEqual(afterFirst);
+    expect(fake.calls('pulls/update-review-comment')).toHaveLength(0);
+  });
+
+  it('applying the suggestion gives valid JSON that clears the finding, and the re-run removes the suggestion', () => {
+    expect(() => JSON.parse(fixedText)).not.toThrow();
+    expect(JSON.parse(fixedText).rope_scaling).toEqual({ rope_type: 'linear', factor: 4, original_max_position_embeddings: 4096 });
+    expect(third.outputs.verdict).not.toBe('block');
+    expect(fake.calls('pulls/delete-review-comment')).toHaveLength(1);
+    expect(fake.state.reviewComments).toEqual([]);
+    expect(fake.calls('pulls/create-review-comment')).toHaveLength(1);
+  });
+
   it('makes only requests that GitHub\'s REST description allows, method, path and body', () => {
     expect(fake.requests.length).toBeGreaterThan(0);
     expect(fake.mismatches).toEqual([]);
+    expect(fake.responseMismatches).toEqual([]);
+    expect(fake.unhandled).toEqual([]);
   });
 
   it('registers the token as a secret and prints it nowhere else', () => {

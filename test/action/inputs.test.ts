@@ -32,6 +32,7 @@ describe('readSettings(getInput, env)', () => {
       policyPath: '.github/context-reach.yml',
       failOn: 'block',
       comment: 'update',
+      suggestions: 'on',
       reportJson: join('/runner/_temp', 'context-reach', 'report.json'),
       sarif: null,
       base: null,
@@ -47,6 +48,7 @@ describe('readSettings(getInput, env)', () => {
       policyPath: '.github/context-reach.yml',
       failOn: 'block',
       comment: 'update',
+      suggestions: 'on',
       reportJson: join(tmpdir(), 'context-reach', 'report.json'),
       sarif: null,
       base: null,
@@ -60,9 +62,9 @@ describe('readSettings(getInput, env)', () => {
     expect(readSettings(inputs({
       policy: ' config/reach-policy.yaml ', 'fail-on': 'warn', comment: 'off', 'report-json': 'out/r.json',
       sarif: 'out/r.sarif', base: 'release/2.0', 'html-report': 'out/r.html', 'publish-report': ' artifact/report.json ',
-      'html-report-url': ' https://example.org/reports/7.html ',
+      'html-report-url': ' https://example.org/reports/7.html ', suggestions: ' off ',
     }), { RUNNER_TEMP: '/t' })).toEqual({
-      token: 'ghs_exampleToken123', policyPath: 'config/reach-policy.yaml', failOn: 'warn', comment: 'off',
+      token: 'ghs_exampleToken123', policyPath: 'config/reach-policy.yaml', failOn: 'warn', comment: 'off', suggestions: 'off',
       reportJson: 'out/r.json', sarif: 'out/r.sarif', base: 'release/2.0', htmlReport: 'out/r.html', publishReport: 'artifact/report.json',
       htmlReportUrl: 'https://example.org/reports/7.html',
     });
@@ -73,6 +75,7 @@ describe('readSettings(getInput, env)', () => {
     ['fail-on', 'sometimes', 'Input "fail-on" is "sometimes"; expected one of block, warn, never (action.yml, input fail-on).'],
     ['fail-on', 'Block', 'Input "fail-on" is "Block"; expected one of block, warn, never (action.yml, input fail-on).'],
     ['comment', 'create', 'Input "comment" is "create"; expected one of update, off (action.yml, input comment).'],
+    ['suggestions', 'yes', 'Input "suggestions" is "yes"; expected one of on, off (action.yml, input suggestions).'],
     ['policy', '../outside.yml', 'Input "policy" is "../outside.yml"; expected a path inside the repository such as ".github/context-reach.yml" (relative, "/" separators, no "." or ".." parts) (action.yml, input policy).'],
     ['policy', '/etc/policy.yml', 'Input "policy" is "/etc/policy.yml"; expected a path inside the repository such as ".github/context-reach.yml" (relative, "/" separators, no "." or ".." parts) (action.yml, input policy).'],
     ['policy', 'C:/policy.yml', 'Input "policy" is "C:/policy.yml"; expected a path inside the repository such as ".github/context-reach.yml" (relative, "/" separators, no "." or ".." parts) (action.yml, input policy).'],
@@ -100,7 +103,7 @@ describe('readSettings(getInput, env)', () => {
 describe('action.yml', () => {
   test('runs the bundle on node24 and declares the inputs and outputs of the gate', () => {
     expect(action.runs).toEqual({ using: 'node24', main: 'dist/index.js' });
-    expect(Object.keys(action.inputs)).toEqual(['github-token', 'policy', 'fail-on', 'comment', 'report-json', 'sarif', 'base', 'html-report', 'html-report-url', 'publish-report']);
+    expect(Object.keys(action.inputs)).toEqual(['github-token', 'policy', 'fail-on', 'comment', 'suggestions', 'report-json', 'sarif', 'base', 'html-report', 'html-report-url', 'publish-report']);
     expect(Object.keys(action.outputs)).toEqual(['verdict', 'blocking', 'warnings', 'report-json', 'comment-url']);
     expect(action.branding.icon).not.toBe('');
   });
@@ -113,6 +116,7 @@ describe('action.yml', () => {
     expect(action.inputs['github-token'].default).toBe('${{ github.token }}');
     expect(action.inputs['fail-on'].default).toBe('block');
     expect(action.inputs.comment.default).toBe('update');
+    expect(action.inputs.suggestions.default).toBe('on');
     expect(action.inputs.policy.default).toBe('.github/context-reach.yml');
   });
 
@@ -126,6 +130,7 @@ describe('action.yml', () => {
     expect(source).toContain('(default: `.github/context-reach.yml`)');
     expect(source).toContain('(default: `block`)');
     expect(source).toContain('(default: `update`)');
+    expect(source).toContain('(default: `on`)');
     expect(source).toContain('(default: `${RUNNER_TEMP}/context-reach/report.json`)');
   });
 });

@@ -109,7 +109,7 @@ describe('gate scenarios', () => {
     expect(result.out.outputs.verdict).toBe('block');
     const body = comments(result)[0]!.body;
     expect(body).toContain('limit-crossed');
-    expect(body).toContain('It was judged by the base commit\'s policy; the change applies after merge.');
+    expect(body).toContain('this run judged by the base commit\'s policy. After merge: <code>limits.');
   });
 
   it('still decides with a read-only fork token: no comment, report in the summary, a notice', async () => {

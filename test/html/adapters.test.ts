@@ -26,7 +26,7 @@ describe('context-reach diff --html FILE', () => {
       const html = readFileSync(file, 'utf8');
       expect(html.startsWith('<!doctype html>')).toBe(true);
       expect(html.match(/<section class="file"/g)).toHaveLength(2);
-      expect(out.join('')).toContain('remedy: position.scaling.factor 4 → 8');
+      expect(out.join('')).toContain('fix: model.position.scaling.factor 4 → 8');
     } finally {
       repo.remove();
     }
@@ -50,7 +50,7 @@ describe('the action\'s html-report input', () => {
     const html = result.written['/runner/out/context-reach.html'];
     expect(html?.startsWith('<!doctype html>')).toBe(true);
     const comment = result.fake.state.comments.find((c) => c.body.startsWith(COMMENT_MARKER))!.body;
-    expect(comment).toContain('📊 Charts, findings and proven remedies: [the HTML report](https://reports.example/pr-7.html).');
+    expect(comment).toContain('Charts, findings and fixes: [the HTML report](https://reports.example/pr-7.html).');
     expect(result.out.summaries[0]).toContain('(https://reports.example/pr-7.html)');
   });
 

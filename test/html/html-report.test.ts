@@ -32,10 +32,25 @@ describe('renderHtmlReport(report)', () => {
     }
   });
 
-  it('shows the proven remedies with the values they produce', () => {
-    has(html, 'What would pass (proven):');
-    has(html, '<code>position.scaling.factor</code> 4 → <span class="after">8</span>');
-    has(html, '<code>serving.sequences</code> 8 → <span class="after">5</span>');
+  it('shows the fixes in the file\'s own keys, with what they still need, never claiming more than these rules', () => {
+    has(html, 'What passes these rules:');
+    has(html, '<code>model.position.scaling.factor</code> 4 → <span class="after">8</span>');
+    has(html, '<code>serving.sequences</code> 8 → <span class="after">3</span>');
+    has(html, '<pre><code>&quot;rope_scaling&quot;: {&quot;rope_type&quot;: &quot;linear&quot;, &quot;factor&quot;: 4.0, &quot;original_max_position_embeddings&quot;: 8192}</code></pre>');
+    has(html, '<div class="caution"><b>Still needs: </b>fine-tuning at the longer span with the new linear factor 4.</div>');
+    hasNot(html, /proven/i);
+  });
+
+  it('marks the assumed trained span, and puts the memory caution beside the memory figures', () => {
+    has(html, '<p class="caution"><b>Assumed: </b>The position code did not change');
+    has(html, `† Memory figures: weights and key/value cache only, plus the reserve`);
+    hasNot(html, /text-transform:\s*uppercase/);
+  });
+
+  it('has a palette of its own, not the code host\'s, and shapes for severity', () => {
+    for (const hostHex of ['#0969da', '#cf222e', '#1a7f37', '#9a6700', '#0d1117', '#1f2328']) hasNot(html, new RegExp(hostHex, 'i'));
+    has(html, '.chip.block::before { content: "■"; }');
+    has(html, '.verdict.warn::before, .chip.warn::before { content: "▲"; }');
   });
 
   it('reads in light and dark colour schemes and prints', () => {

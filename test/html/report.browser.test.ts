@@ -14,6 +14,7 @@ import { HOSTILE, hostileReport } from './hostile.js';
 
 const CHROMIUM = '/usr/bin/chromium';
 const ARTIFACTS = resolve(import.meta.dirname, '../../test-artifacts/html-report');
+const DOCS = resolve(import.meta.dirname, '../../docs');
 const FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
   '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 
@@ -88,10 +89,14 @@ describe('the HTML report in headless Chromium', async () => {
     const { page } = await open('demo', renderHtmlReport(report));
     const background = () => page.evaluate(() => getComputedStyle(document.body).backgroundColor);
     await page.emulateMedia({ colorScheme: 'light' });
-    expect(await background()).toBe('rgb(255, 255, 255)');
+    expect(await background()).toBe('rgb(251, 250, 246)');
     await page.emulateMedia({ colorScheme: 'dark' });
-    expect(await background()).toBe('rgb(13, 17, 23)');
+    expect(await background()).toBe('rgb(23, 22, 20)');
     await page.screenshot({ path: join(ARTIFACTS, 'demo-dark.png'), fullPage: true });
+    // Kept in the repository so the look can be reviewed: the first screen of each scheme.
+    await page.screenshot({ path: join(DOCS, 'report-dark.png') });
+    await page.emulateMedia({ colorScheme: 'light' });
+    await page.screenshot({ path: join(DOCS, 'report-light.png') });
     await page.emulateMedia({ colorScheme: 'dark', media: 'print' });
     expect(await background()).toBe('rgb(255, 255, 255)');
     await page.screenshot({ path: join(ARTIFACTS, 'demo-print.png'), fullPage: true });

@@ -85,7 +85,7 @@ describe('readGateJson(renderGateJson(report), file)', () => {
     const original = await report({ max_position_embeddings: 16384 });
     expect(original.verdict).toBe('block');
     const back = readGateJson(renderGateJson(original), 'report.json');
-    expect(renderComment(back)).toContain('**Remedies**');
+    expect(renderComment(back)).toContain('✓ **Fix**');
     expect(renderComment(back)).toBe(renderComment(original));
   });
 

@@ -114,7 +114,7 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
     expect(ours()).toHaveLength(1);
     expect(ours()[0]!.issueNumber).toBe(7);
     expect(ours()[0]!.body).toContain('span-grew-code-unchanged');
-    expect(ours()[0]!.body).toContain('🔴 **Blocked**');
+    expect(ours()[0]!.body).toContain('■ **Blocked**');
     expect(out.outputs).toMatchObject({ verdict: 'block', blocking: '1', 'comment-url': expect.stringContaining('/pull/7#issuecomment-') });
     expect(out.failed).toBeNull();
     expect(fake.calls('pulls/list').map((c) => c.query)).toContain('?state=open&head=someone-else%3Afeature&per_page=100');
@@ -132,9 +132,9 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
     const original = JSON.parse(reportText) as GateReport;
     const body = ours()[0]!.body;
     for (const finding of original.files[0]!.findings) expect(body).toContain(`\`${finding.rule}\``);
-    expect(body).toContain('| `declaredSpan`');
+    expect(body).toContain('|`declaredSpan`');
     expect(body).toContain('```mermaid');
-    expect(body).toContain('**Remedies**');
+    expect(body).toContain('✓ **Fix**');
   });
 
   it('refuses a report for another commit than the run checked: no comment is touched', async () => {

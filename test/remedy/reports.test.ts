@@ -32,7 +32,8 @@ describe('renderGateJson(report) with remedies', () => {
       metrics: expect.objectContaining({ reach: 262144, headroom: 0 }),
       raises: [],
     });
-    expect(mini.remedyTogether).toMatchObject({ change: { 'position.scaling.factor': 8, 'serving.sequences': 5 }, passes: true, stillBlocking: [] });
+    // Three sequences, not five: five would fit the device but cross the policy's memoryBytes limit (+50 % over base).
+    expect(mini.remedyTogether).toMatchObject({ change: { 'position.scaling.factor': 8, 'serving.sequences': 3 }, passes: true, stillBlocking: [] });
   });
 
   it('leaves warnings and notes without remedy fields', () => {
@@ -46,29 +47,30 @@ describe('renderGateJson(report) with remedies', () => {
 describe('renderComment(report) with remedies', () => {
   const comment = renderComment(report);
 
-  it('puts the first remedy under each blocker at the top, with its values', () => {
-    const top = comment.slice(0, comment.indexOf('### '));
-    expect(top).toContain('  - ✅ **remedy**: <code>position.scaling.factor</code> 4 → **8** ⇒ reach 262,144 \\(256k\\), scalingCover 262,144 \\(256k\\), headroom 0');
-    expect(top).toContain('  - ✅ **remedy**: <code>serving.sequences</code> 8 → **5** ⇒ memoryBytes 20.4 GiB, cacheBytesAtSpan 17.5 GiB, fitSequences 5');
+  it('puts the first fix under each blocker at the top, with its values and the YAML keys to set', () => {
+    const top = comment.slice(0, comment.indexOf('<details'));
+    expect(top).toContain('✓ **Fix**, passes these rules (reach 262,144 \\(256k\\), scalingCover 262,144 \\(256k\\), headroom 0); still needs fine\\-tuning at the longer span with the larger yarn factor 8.\nSet on line 20:\n```yaml\nfactor: 8\n```');
+    expect(top).toContain('✓ **Fix**, passes these rules (memoryBytes 13.4 GiB, cacheBytesAtSpan 10.5 GiB, fitSequences 5); still needs nothing else \\(a serving setting\\).\nSet on line 29:\n```yaml\nsequences: 3\n```');
   });
 
-  it('lists every proven alternative and the remedies together in the file section', () => {
-    expect(comment).toContain('  - or: <code>dtypes.cache</code> fp8 → **int4** ⇒ cachePerTokenBytes 7 KiB, memoryBytes 16.9 GiB, fitSequences 10');
-    expect(comment).toContain('- ✅ All first remedies together (<code>position.scaling.factor</code> 4 → **8**, <code>serving.sequences</code> 8 → **5**) pass: nothing blocks.');
+  it('lists each other fix once, naming every finding it fixes, and the fixes together', () => {
+    expect(comment).toContain('- for `span-past-reach`, `memory-over-budget`: <code>span: 111763</code> (line 28) ⇒ evaluationSpan 111,763, headroom 19,309, memoryBytes 14.8 GiB; still needs nothing else \\(a serving setting\\)');
+    expect(comment).toContain('All first fixes of <code>models/quill\\-mini/model.reach.yaml</code> applied together pass these rules: nothing blocks.');
   });
 
   it('links the HTML report and says where it is', () => {
     const linked = renderComment(report, { htmlReportUrl: 'https://github.example/o/r/actions/runs/9', htmlReportWhere: 'in the artifacts of this workflow run' });
-    expect(linked).toContain('📊 Charts, findings and proven remedies: [the HTML report](https://github.example/o/r/actions/runs/9) in the artifacts of this workflow run.');
+    expect(linked).toContain('Charts, findings and fixes: [the HTML report](https://github.example/o/r/actions/runs/9) in the artifacts of this workflow run.');
   });
 });
 
 describe('renderDiffText(report) with remedies', () => {
   it('prints remedy, alternatives and the together line under the findings', () => {
     const text = renderDiffText(report);
-    expect(text).toContain('        remedy: position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
-    expect(text).toContain('        or: serving.span 262,144 (256k) → 131,072 (128k) ⇒ evaluationSpan 131,072 (128k), headroom 0');
-    expect(text).toContain('  together: All first remedies together (position.scaling.factor 4 → 8, serving.sequences 8 → 5) pass: nothing blocks');
+    expect(text).toContain('        fix: model.position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
+    expect(text).toContain('; still needs fine-tuning at the longer span with the larger yarn factor 8');
+    expect(text).toContain('        or: serving.span 262,144 (256k) → 111,763 ⇒ evaluationSpan 111,763, headroom 19,309');
+    expect(text).toContain('  together: All first fixes together (model.position.scaling.factor 4 → 8, serving.sequences 8 → 3) pass these rules: nothing blocks');
   });
 });
 
@@ -77,8 +79,9 @@ describe('inspect output with remedies (built-in rules, one file)', () => {
 
   it('shows each blocking finding\'s remedy in the text report', () => {
     const text = renderInspectText([file], []);
-    expect(text).toContain('          remedy: position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
-    expect(text).toContain('          remedy: serving.sequences 8 → 5 ⇒ memoryBytes 20.4 GiB');
+    // Built-in rules, no policy limits: five sequences fit the device.
+    expect(text).toContain('          fix: model.position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k)');
+    expect(text).toContain('          fix: serving.sequences 8 → 5 ⇒ memoryBytes 20.4 GiB');
   });
 
   it('carries the remedy fields and remedyTogether in the JSON document', () => {

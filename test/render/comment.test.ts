@@ -29,24 +29,25 @@ describe('renderComment(report)', () => {
 
   it('starts with the hidden marker, then the verdict and the counts', () => {
     expect(lines[0]).toBe(COMMENT_MARKER);
-    expect(lines[1]).toBe('## context-reach · 🔴 **Blocked** · 1 blocking, 0 warnings');
+    expect(lines[1]).toBe('## context-reach · ■ **Blocked** · 1 blocking, 0 warnings');
   });
 
-  it('lists what blocks with a link to the line at the head commit', () => {
-    const blocker = lines.find((l) => l.startsWith('- <code>models/a/config.json</code>'));
-    expect(blocker).toBe('- <code>models/a/config.json</code> [line 10](https://github.example/o/r/blob/222/models/a/config.json#L10) <code>max\\_position\\_embeddings</code>: `span-grew-code-unchanged` The declared span grew from 4,096 to 8,192 tokens while the position code \\(rotary, base 10,000, no scaling\\) stayed the same; add or raise context scaling so the code reaches 8,192, or state the trained span if the model was trained that long.');
+  it('lists what blocks with a link to the line at the head commit, then the message', () => {
+    const at = lines.findIndex((l) => l.startsWith('**1.** <code>models/a/config.json</code>'));
+    expect(lines[at]).toBe('**1.** <code>models/a/config.json</code> [line 10](https://github.example/o/r/blob/222/models/a/config.json#L10) <code>max\\_position\\_embeddings</code> · `span-grew-code-unchanged`  ');
+    expect(lines[at + 1]).toBe('The declared span grew from 4,096 to 8,192 tokens while the position code \\(rotary, base 10,000, no scaling\\) stayed the same; add or raise context scaling so the code reaches 8,192, or state the trained span if the model was trained that long.');
   });
 
-  it('has a table row per changed metric with base, head and change', () => {
-    // Whole rows, compared cell by cell: markdown-table pads cells to the widest in the column.
-    const rows = lines.filter((l) => l.startsWith('| `')).map((l) => l.split('|').slice(1, -1).map((c) => c.trim()));
+  it('has a table row per changed metric with base, head and change; the inherited trained span is marked assumed', () => {
+    const rows = lines.filter((l) => l.startsWith('|`')).map((l) => l.split('|').slice(1, -1));
     expect(rows).toContainEqual(['`declaredSpan`', '4,096 (4k)', '8,192 (8k)', '+4,096 (+100 %)', '', '']);
-    expect(rows).toContainEqual(['`trainedSpan`', '4,096 (4k)', '8,192 (8k)', '+4,096 (+100 %)', '', '']);
+    expect(rows).toContainEqual(['`trainedSpan`', '4,096 (4k)', '4,096 (4k) *assumed*']);
   });
 
-  it('draws memory against span as a Mermaid chart and keeps the full metrics collapsed', () => {
+  it('draws memory against span as a Mermaid chart and keeps the file sections and other metrics collapsed', () => {
     expect(body).toContain('```mermaid\nxychart-beta');
-    expect(body).toContain('<details><summary>All metrics</summary>');
+    expect(body).toContain('<details><summary>Other metrics</summary>');
+    expect(body).toContain('<details><summary>■ <code>models/a/config.json</code>: 1 blocking</summary>');
   });
 
   it('says the metrics are estimates, not a guarantee', () => {
@@ -75,7 +76,7 @@ describe('renderComment(report) with hundreds of blocking files', () => {
     const body = renderComment(many);
     expect(body.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(body.split('\n')[0]).toBe(COMMENT_MARKER);
-    expect(body).toContain('- … and 280 more blocking findings, listed under their files below.');
+    expect(body).toContain('… and 280 more blocking findings, listed under their files below.');
     const html = marked.parse(body, { gfm: true, async: false }) as string;
     expect((html.match(/<details/g) ?? []).length).toBe((html.match(/<\/details>/g) ?? []).length);
   });

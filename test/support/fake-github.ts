@@ -28,6 +28,20 @@ export interface FakePullFile {
   filename: string;
   status: 'added' | 'removed' | 'modified' | 'renamed' | 'copied' | 'changed' | 'unchanged';
   previous_filename?: string;
+  /** The file's unified diff, as the file list carries it (default: none). */
+  patch?: string;
+}
+
+/** A review comment on a pull request's diff. */
+export interface FakeReviewComment {
+  id: number;
+  pullNumber: number;
+  path: string;
+  commitId: string;
+  line: number;
+  startLine: number | null;
+  body: string;
+  user: FakeUser;
 }
 
 export interface FakePull {
@@ -73,6 +87,8 @@ export interface FakeState {
   truncatedTrees?: Set<string>;
   /** `base...head` → merge base, where it is not `base` (default: none). */
   mergeBases?: Map<string, string>;
+  /** Review comments on pull requests' diffs (suggestions among them). */
+  reviewComments: FakeReviewComment[];
 }
 
 /** An answer with this status instead of the real one; `effect` changes the state first (e.g. a deletion racing the request). */
@@ -176,6 +192,21 @@ export function hang(): Fault {
   return { kind: 'hang' };
 }
 
+/** Head-side lines of a unified diff a review comment may go on (added and context lines). */
+function rightLines(patch: string): Set<number> {
+  const out = new Set<number>();
+  let right = 0;
+  let inHunk = false;
+  for (const row of patch.split('\n')) {
+    const hunk = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,\d+)? @@/.exec(row);
+    if (hunk) { right = Number(hunk[1]); inHunk = true; continue; }
+    if (!inHunk || row.startsWith('-') || row.startsWith('\\')) continue;
+    out.add(right);
+    right += 1;
+  }
+  return out;
+}
+
 /** Git's blob id of some bytes (SHA-1 over `blob <size>\0<bytes>`), so `sha` fields look real. */
 function blobSha(bytes: Uint8Array): string {
   return createHash('sha1').update(`blob ${bytes.byteLength}\u0000`).update(bytes).digest('hex');
@@ -216,6 +247,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     trees: new Map(),
     comments: [],
     nextCommentId: 1000,
+    reviewComments: [],
     ...initial,
   };
   const requests: LoggedRequest[] = [];
@@ -241,6 +273,22 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     created_at: comment.createdAt,
     updated_at: comment.updatedAt,
     author_association: 'NONE',
+  });
+
+  const reviewCommentObject = (comment: FakeReviewComment): unknown => deepMerge(sampleOf('pull-request-review-comment'), {
+    id: comment.id, node_id: `PRRC_${comment.id}`, pull_request_review_id: comment.id + 1,
+    url: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}`,
+    html_url: `${url}/${state.owner}/${state.repo}/pull/${comment.pullNumber}#discussion_r${comment.id}`,
+    pull_request_url: `${url}/repos/${state.owner}/${state.repo}/pulls/${comment.pullNumber}`,
+    diff_hunk: '@@ -1 +1 @@', path: comment.path, commit_id: comment.commitId, original_commit_id: comment.commitId,
+    user: userObject(comment.user), body: comment.body, created_at: '2024-01-01T00:00:00Z', updated_at: '2024-01-01T00:00:00Z',
+    author_association: 'NONE', line: comment.line, original_line: comment.line, side: 'RIGHT',
+    start_line: comment.startLine, original_start_line: comment.startLine, start_side: comment.startLine === null ? null : 'RIGHT',
+    _links: {
+      self: { href: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}` },
+      html: { href: `${url}/${state.owner}/${state.repo}/pull/${comment.pullNumber}#discussion_r${comment.id}` },
+      pull_request: { href: `${url}/repos/${state.owner}/${state.repo}/pulls/${comment.pullNumber}` },
+    },
   });
 
   const repoObject = (fullName: string): unknown => {
@@ -444,6 +492,43 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         comment.body = text;
         comment.updatedAt = '2024-01-02T00:00:00Z';
         return { status: 200, json: commentObject(comment) };
+      }
+      case 'pulls/list-review-comments': {
+        const number = Number(params.pull_number);
+        const comments = state.reviewComments.filter((c) => c.pullNumber === number).sort((a, b) => a.id - b.id);
+        const { slice, headers } = page(comments.map(reviewCommentObject), query, pathname);
+        return { status: 200, headers, json: slice };
+      }
+      case 'pulls/create-review-comment': {
+        const pull = state.pulls.get(Number(params.pull_number));
+        if (!pull) return notFound();
+        const request = JSON.parse(body) as { body: string; commit_id: string; path: string; line?: number; start_line?: number; side?: string };
+        // GitHub takes a review comment only on a line of the file's diff (right side here).
+        const file = pull.files.find((f) => f.filename === request.path);
+        const lines = file?.patch ? rightLines(file.patch) : new Set<number>();
+        const wanted = [request.start_line ?? request.line ?? 0, request.line ?? 0];
+        if (request.line === undefined || !lines.has(wanted[0]!) || !lines.has(wanted[1]!)) {
+          return { status: 422, json: { message: 'Validation Failed', errors: [{ resource: 'PullRequestReviewComment', code: 'custom', field: 'pull_request_review_thread.line', message: 'could not be resolved' }], documentation_url: 'https://docs.github.com/rest', status: '422' } };
+        }
+        const comment: FakeReviewComment = {
+          id: state.nextCommentId, pullNumber: pull.number, path: request.path, commitId: request.commit_id,
+          line: request.line, startLine: request.start_line ?? null, body: request.body, user: state.tokenUser,
+        };
+        state.nextCommentId += 1;
+        state.reviewComments.push(comment);
+        return { status: 201, headers: { location: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}` }, json: reviewCommentObject(comment) };
+      }
+      case 'pulls/update-review-comment': {
+        const comment = state.reviewComments.find((c) => c.id === Number(params.comment_id));
+        if (!comment) return notFound();
+        comment.body = (JSON.parse(body) as { body: string }).body;
+        return { status: 200, json: reviewCommentObject(comment) };
+      }
+      case 'pulls/delete-review-comment': {
+        const index = state.reviewComments.findIndex((c) => c.id === Number(params.comment_id));
+        if (index < 0) return notFound();
+        state.reviewComments.splice(index, 1);
+        return { status: 204 };
       }
       case 'issues/delete-comment': {
         const index = state.comments.findIndex((candidate) => candidate.id === Number(params.comment_id));

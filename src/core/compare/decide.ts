@@ -12,6 +12,8 @@ import { rotaryHeadDim } from '../metrics/frequencies.js';
 import type { Judging, Limit } from './judging.js';
 import { METRIC_PATHS, METRIC_SOURCES, metricValue } from './metric-path.js';
 import type { CombinedRemedy, RemedyFields } from '../remedy/types.js';
+import { inheritTrainedSpan, type Assumption } from './assumed.js';
+import { shapeChangeFinding } from './shape-change.js';
 
 export type Verdict = 'ok' | 'warn' | 'block';
 
@@ -50,6 +52,8 @@ export interface MetricDelta {
   changePct: number | null;
   limit: Limit | null;
   state: LimitState;
+  /** Why a limited row was not judged, e.g. the span is shorter than the limit (default: absent). */
+  note?: string;
 }
 
 export interface FileDecision {
@@ -68,6 +72,8 @@ export interface FileDecision {
   headError: FileFailure | null;
   /** Every blocking finding's first remedy applied at once, and whether that passes (default: absent). */
   remedyTogether?: CombinedRemedy | null;
+  /** What the head's values take on assumption (the base's trained span), null when nothing (default: absent). */
+  assumed?: Assumption | null;
 }
 
 export interface PolicyInfo {
@@ -76,6 +82,8 @@ export interface PolicyInfo {
   path: string;
   /** The pull request changes the policy file: the change applies after merge. */
   changedInHead: boolean;
+  /** What the head's policy would change, `key old → new` (default: absent, none or unchanged). */
+  limitChanges?: string[];
 }
 
 export interface GateInput {
@@ -121,7 +129,7 @@ function locate(locations: LocationMap, paths: string[] | undefined): { key: str
   return { key: null, line: null };
 }
 
-function sameCode(a: ModelSpec, b: ModelSpec): boolean {
+export function sameCode(a: ModelSpec, b: ModelSpec): boolean {
   return JSON.stringify(a.position) === JSON.stringify(b.position) && a.trainedSpan === b.trainedSpan;
 }
 
@@ -176,6 +184,8 @@ export function changeFindings(base: FileReport, head: FileReport): Finding[] {
       ...at('kvHeads', 'latent.kvRank', 'dtypes.cache', 'headDim'),
     });
   }
+  const shape = shapeChangeFinding(base, head);
+  if (shape) findings.push(shape);
   return findings;
 }
 
@@ -207,6 +217,7 @@ function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judgi
     const limit = judging.limits[metric] ?? null;
     const change = b !== null && h !== null ? h - b : null;
     let state: LimitState = 'unjudged';
+    let note: string | undefined;
     if (limit && h === null && uncomputed.has(metric)) {
       // Fail closed: the scan stopped at its bound, so nothing shows the limit holds.
       state = 'crossed';
@@ -216,9 +227,16 @@ function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judgi
         ...locate(head.locations, ['serving.span', 'declaredSpan']),
         metric,
       });
+    } else if (limit && metric === 'discriminationSpan' && h === null) {
+      // No negative sum within the span: the span itself is the least the metric can be.
+      const T = head.metrics.evaluationSpan;
+      const bound = limit.min ?? null;
+      if (T !== null && head.metrics.fastestWavelength !== null && (bound === null || T >= bound)) state = 'ok';
+      else note = T !== null && bound !== null ? `not judged: the span ${formatInteger(T)} is shorter than the limit` : 'not judged: no value';
     } else if (limit) {
       const { crossed, judged } = checkLimit(limit, b, h, metric);
       state = crossed.length > 0 ? 'crossed' : judged ? 'ok' : 'unjudged';
+      if (!judged) note = 'not judged: no value';
       if (crossed.length > 0) {
         findings.push({
           rule: 'limit-crossed', severity: limit.severity,
@@ -230,7 +248,7 @@ function deltasAndLimitFindings(base: FileReport | null, head: FileReport, judgi
     }
     const changed = base !== null && b !== h;
     if (changed || limit) {
-      deltas.push({ metric, base: b, head: h, change, changePct: percentChange(b, h), limit, state });
+      deltas.push({ metric, base: b, head: h, change, changePct: percentChange(b, h), limit, state, ...(note ? { note } : {}) });
     }
   }
   return { deltas, findings };
@@ -242,7 +260,10 @@ const findingKey = (f: Finding) => `${f.rule}\u0000${f.key ?? ''}`;
 export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileDecision {
   const { change, judging } = config;
   const base = isReport(config.base) ? config.base : null;
-  const head = isReport(config.head) ? config.head : null;
+  const readHead = isReport(config.head) ? config.head : null;
+  // A head that keeps the base's code and states no trained span inherits the base's (assumed).
+  const inherited = base && readHead ? inheritTrainedSpan(base, readHead) : null;
+  const head = inherited?.head ?? readHead;
   const headError = isFailure(config.head) ? config.head : null;
   let raw: (Finding & { metric?: MetricPath })[] = [];
   let deltas: MetricDelta[] = [];
@@ -279,6 +300,7 @@ export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileD
     head,
     baseError: isFailure(config.base) ? config.base : null,
     headError,
+    assumed: inherited?.assumption ?? null,
   };
 }
 

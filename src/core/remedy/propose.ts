@@ -125,6 +125,44 @@ function describeBlockers(proof: Proof): string {
   return proof.blockers.map(blockerText).join(', ');
 }
 
+/** Metrics each blocking rule is about: a remedy showing one of them must not leave that rule standing. */
+const RULE_METRICS: Record<string, string[]> = {
+  'span-past-reach': ['headroom', 'reach', 'scalingCover'],
+  'memory-over-budget': ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'],
+  'positions-collide': ['precision.fp32.collidingPositions', 'precision.bf16.collidingPositions', 'precision.fp16.collidingPositions'],
+};
+
+/**
+ * What the changed description still breaks among the metrics the remedy shows: a blocking
+ * rule about them, or any limit on them (whatever its severity). A remedy that breaks one is
+ * never shown: its own figures would contradict a finding.
+ */
+export function ownBreaks(proof: Proof, shown: readonly string[]): string[] {
+  const out = new Set<string>();
+  for (const finding of proof.decision.findings) {
+    if (finding.rule === 'limit-crossed' && finding.metric && shown.includes(finding.metric)) out.add(`the ${finding.metric} limit`);
+    if (finding.severity === 'block' && (RULE_METRICS[finding.rule] ?? []).some((m) => shown.includes(m))) out.add(finding.rule);
+  }
+  return [...out];
+}
+
+/** `resolves`, and every policy limit on a shown metric that needs no scan holds as well. */
+function withOwnLimits(ctx: RemedyContext, resolves: Resolves, shown: readonly string[]): Resolves {
+  const limited = shown.filter((m) => ctx.judging.limits[m] !== undefined && isMetricPath(m));
+  if (limited.length === 0) return resolves;
+  return (spec) => resolves(spec) && limited.every((m) => {
+    const value = lightMetric(spec, m);
+    if (value === undefined) return true; // scanned metrics are judged by the proof
+    const base = ctx.base && isMetricPath(m) ? metricValue(ctx.base.metrics, m) : null;
+    return checkLimit(ctx.judging.limits[m]!, base, value).crossed.length === 0;
+  });
+}
+
+/** ` within the limits` when a policy limit bears on a shown metric, for the reasons a kind gives. */
+function withinWords(ctx: RemedyContext, shown: readonly string[]): string {
+  return shown.some((m) => ctx.judging.limits[m] !== undefined) ? ' within the limits' : '';
+}
+
 function remedyOf(change: Change, proof: Proof, shown: string[], target: Target, cost?: (change: Change) => string): Remedy {
   const metrics: Record<string, number | null> = {};
   for (const name of [...(target.metric ? [target.metric] : []), ...shown]) {
@@ -139,6 +177,7 @@ function remedyOf(change: Change, proof: Proof, shown: string[], target: Target,
  */
 function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], shown: string[], what: string, costOf?: (change: Change) => string): KindOutcome {
   let last: Proof | null = null;
+  let lastBreaks: string[] = [];
   let proofs = 0;
   for (const change of candidates.slice(0, MAX_PROOFS_PER_KIND)) {
     const cost = proofCost(applyChange(ctx.head.spec, change));
@@ -149,10 +188,13 @@ function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], sh
     ctx.work.left -= cost;
     proofs += 1;
     const proof = prove(ctx, target, change);
-    if (proof.passes) return { remedy: remedyOf(change, proof, shown, target, costOf), whyNot: null };
+    const breaks = proof.passes ? ownBreaks(proof, shown) : [];
+    if (proof.passes && breaks.length === 0) return { remedy: remedyOf(change, proof, shown, target, costOf), whyNot: null };
+    if (breaks.length > 0) lastBreaks = breaks;
     last = proof;
   }
   if (last === null) return none(`no ${what} to try`);
+  if (lastBreaks.length > 0 && last.passes) return none(`${what} clears it but still breaks ${lastBreaks.join(', ')}`);
   const capped = candidates.length > proofs ? ` (stopped after ${proofs} proofs)` : '';
   return none(`${what} ${proofs === 1 ? 'clears it but still blocks' : 'cleared it but each still blocked'} on ${describeBlockers(last)}${capped}`);
 }
@@ -184,13 +226,14 @@ function factorKind(ctx: RemedyContext, target: Target, resolves: Resolves, trai
   if (f0 <= current) {
     return none(`the ${code.scaling ? `${code.scaling.kind} factor ${formatNumber(current)}` : 'code'} already covers ${formatTokens(need)}; state the trained span if the model was tuned at it`);
   }
+  const shown = ['reach', 'scalingCover', 'headroom', 'trainedSpan', 'discriminationSpan', 'exposedPairs',
+    ...(code.scaling?.kind === 'yarn' ? ['attentionScale'] : [])];
+  const ok = withOwnLimits(ctx, resolves, shown);
   const candidates: Change[] = [];
   for (let f = f0; f < f0 + MAX_PROOFS_PER_KIND; f++) {
     const change = factorChange(spec, f, trained);
-    if (resolves(applyChange(spec, change))) candidates.push(change);
+    if (ok(applyChange(spec, change))) candidates.push(change);
   }
-  const shown = ['reach', 'scalingCover', 'headroom', 'trainedSpan', 'discriminationSpan', 'exposedPairs',
-    ...(code.scaling?.kind === 'yarn' ? ['attentionScale'] : [])];
   const kind = code.scaling ? code.scaling.kind : 'linear';
   return proveFirst(ctx, target, candidates, shown, `a ${kind} factor of ${f0}${candidates.length > 1 ? ' or more' : ''}`);
 }
@@ -200,9 +243,14 @@ function spanKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindO
   const spec = ctx.head.spec;
   const T = evaluationSpan(spec);
   if (T === null || T < 2) return none('the span is not a whole number above 1');
-  const found = largestPassing(1, T - 1, (t) => resolves(applyChange(spec, { 'serving.span': t })));
-  if (found.value === null) return none(`no served span from 1 to ${formatInteger(T - 1)} tokens clears it`);
-  return proveFirst(ctx, target, [{ 'serving.span': found.value }], ['evaluationSpan', 'headroom', 'memoryBytes', 'fitSequences'],
+  const shown = ['evaluationSpan', 'headroom', 'memoryBytes', 'fitSequences'];
+  const ok = withOwnLimits(ctx, resolves, shown);
+  // Headroom is monotone in the span too: the longest span that clears the finding and keeps
+  // the served span within reach, so the remedy never trades one blocking finding for another.
+  const within = (spec2: ModelSpec) => { const h = rangeMetrics(spec2).headroom; return h === null || h >= 0; };
+  const found = largestPassing(1, T - 1, (t) => { const next = applyChange(spec, { 'serving.span': t }); return ok(next) && within(next); });
+  if (found.value === null) return none(`no served span from 1 to ${formatInteger(T - 1)} tokens clears it${withinWords(ctx, shown)}`);
+  return proveFirst(ctx, target, [{ 'serving.span': found.value }], shown,
     `serving at most ${formatTokens(found.value)} tokens`);
 }
 
@@ -212,9 +260,11 @@ function sequencesKind(ctx: RemedyContext, target: Target, resolves: Resolves): 
   const current = servedSequences(spec);
   if (current === null) return none('the sequence count is not a whole number');
   if (current <= 1) return none('the service already holds one sequence');
-  const found = largestPassing(1, current - 1, (n) => resolves(applyChange(spec, { 'serving.sequences': n })));
-  if (found.value === null) return none(`not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it`);
-  return proveFirst(ctx, target, [{ 'serving.sequences': found.value }], ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'],
+  const shown = ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'];
+  const ok = withOwnLimits(ctx, resolves, shown);
+  const found = largestPassing(1, current - 1, (n) => ok(applyChange(spec, { 'serving.sequences': n })));
+  if (found.value === null) return none(`not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it${withinWords(ctx, shown)}`);
+  return proveFirst(ctx, target, [{ 'serving.sequences': found.value }], shown,
     `${found.value} sequence${found.value === 1 ? '' : 's'}`);
 }
 
@@ -226,10 +276,12 @@ function cacheDtypeKind(ctx: RemedyContext, target: Target, resolves: Resolves):
   if (bytes === null) return none(`the cache dtype ${current} is unknown`);
   const narrower = STORAGE_DTYPES.filter((d) => (bytesPerElement(d) ?? Infinity) < bytes);
   if (narrower.length === 0) return none(`the cache is already in ${current}, the narrowest dtype`);
-  const candidates = narrower.filter((d) => resolves(applyChange(spec, { 'dtypes.cache': d })))
+  const shown = ['cachePerTokenBytes', 'memoryBytes', 'fitSequences'];
+  const ok = withOwnLimits(ctx, resolves, shown);
+  const candidates = narrower.filter((d) => ok(applyChange(spec, { 'dtypes.cache': d })))
     .map((d): Change => ({ 'dtypes.cache': d }));
-  if (candidates.length === 0) return none(`even a ${narrower[narrower.length - 1]} cache does not clear it`);
-  return proveFirst(ctx, target, candidates, ['cachePerTokenBytes', 'memoryBytes', 'fitSequences'],
+  if (candidates.length === 0) return none(`even a ${narrower[narrower.length - 1]} cache does not clear it${withinWords(ctx, shown)}`);
+  return proveFirst(ctx, target, candidates, shown,
     `a ${candidates[0]!['dtypes.cache']} cache`);
 }
 
@@ -251,16 +303,20 @@ function divisorsBelow(n: number, below: number): number[] {
 /** The most key/value heads, a divisor of the heads, that clear the finding. */
 function kvHeadsKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
   const spec = ctx.head.spec;
+  // The stored weights of a checkpoint fix its shapes: no remedy reshapes its network.
+  if (ctx.head.dialect === 'checkpoint') return none('the key/value heads of a checkpoint are fixed by its stored weights, so no remedy changes them');
   const heads = positiveCount(spec.heads);
   const kv = positiveCount(spec.kvHeads);
   if (spec.latent) return none('latent attention caches one shared latent per token and layer, whatever the key/value heads');
   if (spec.encoderOnly) return none('an encoder-only model keeps no decoding cache');
   if (heads === null || kv === null) return none('heads or key/value heads are not whole numbers');
   if (kv <= 1) return none('the model already has one key/value head');
-  const candidates = divisorsBelow(heads, kv).filter((d) => resolves(applyChange(spec, { kvHeads: d })))
+  const shown = ['cachePerTokenBytes', 'weightBytes', 'memoryBytes', 'fitSequences'];
+  const ok = withOwnLimits(ctx, resolves, shown);
+  const candidates = divisorsBelow(heads, kv).filter((d) => ok(applyChange(spec, { kvHeads: d })))
     .map((d): Change => ({ kvHeads: d }));
-  if (candidates.length === 0) return none('even one key/value head does not clear it');
-  return proveFirst(ctx, target, candidates, ['cachePerTokenBytes', 'weightBytes', 'memoryBytes', 'fitSequences'],
+  if (candidates.length === 0) return none(`even one key/value head does not clear it${withinWords(ctx, shown)}`);
+  return proveFirst(ctx, target, candidates, shown,
     `${candidates[0]!.kvHeads} key/value heads (a retraining-level change)`);
 }
 

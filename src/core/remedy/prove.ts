@@ -7,6 +7,7 @@
 import type { ChangedFile } from '../changes.js';
 import { decideFile, type FileDecision } from '../compare/decide.js';
 import type { Judging } from '../compare/judging.js';
+import { readerFindings } from '../compare/assumed.js';
 import { sortFindings, type FileReport } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
 import type { Metrics } from '../metrics/types.js';
@@ -52,22 +53,6 @@ export interface RemedyContext {
  * pair·offset), so remedies add at most a few seconds to any file (default: `2^32`).
  */
 export const MAX_FILE_PROOF_WORK = 2 ** 32;
-
-function sameFinding(a: Finding, b: Finding): boolean {
-  return a.rule === b.rule && a.message === b.message && a.key === b.key && a.line === b.line;
-}
-
-/** The head's findings less the ones its spec and metrics give again: those came from reading the text. */
-function readerFindings(head: FileReport): Finding[] {
-  const derived = [...specFindings(head.spec, head.locations), ...metricFindings(head.spec, head.metrics, head.locations)];
-  const out: Finding[] = [];
-  for (const finding of head.findings) {
-    const at = derived.findIndex((d) => sameFinding(d, finding));
-    if (at >= 0) derived.splice(at, 1);
-    else out.push(finding);
-  }
-  return out;
-}
 
 function blockingCounts(decision: FileDecision): Map<string, number> {
   const counts = new Map<string, number>();

@@ -1,16 +1,19 @@
 import { markdownTable } from 'markdown-table';
-import type { FileDecision, GateReport, JudgedFinding, MetricDelta, Verdict } from '../compare/decide.js';
-import type { Severity } from '../model.js';
-import { formatInteger, formatNumber } from '../units.js';
-import { codeId, codeSpan, encodePath, escapeMarkdown, linkablePath } from './escape.js';
-import { formatChange, formatMetric } from './metric-format.js';
-import { memoryChart } from './memory-chart.js';
-import { fitText, perDeviceText } from './device-text.js';
-import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
-import type { Remedy } from '../remedy/types.js';
-import type { ModelSpec } from '../model.js';
-import { changeParts, metricParts, REMEDY_NOTE } from './remedy-text.js';
+import type { FileDecision, GateReport, JudgedFinding, MetricDelta } from '../compare/decide.js';
 import { METRIC_PATHS, metricValue as metricOf } from '../compare/metric-path.js';
+import type { MetricPath } from '../metrics/types.js';
+import type { LocationMap, ModelSpec } from '../model.js';
+import { filePatches, type FilePatch } from '../remedy/file-patch.js';
+import { needsText, remedyNeeds } from '../remedy/needs.js';
+import type { Remedy } from '../remedy/types.js';
+import { formatInteger, formatNumber } from '../units.js';
+import { codeBlock, codeId, codeSpan, encodePath, escapeMarkdown, htmlCode, linkablePath } from './escape.js';
+import { fitText, perDeviceText } from './device-text.js';
+import { limitStateMark, limitStateWord, MEMORY_CAUTION, MEMORY_METRICS, SEVERITY_MARK, SEVERITY_WORD, VERDICT_MARK, VERDICT_WORD } from './marks.js';
+import { memoryChart } from './memory-chart.js';
+import { formatDeltaChange, formatMetric } from './metric-format.js';
+import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
+import { metricParts, PASSES_NOTE } from './remedy-text.js';
 
 export { COMMENT_MARKER };
 
@@ -30,15 +33,10 @@ export interface MarkdownContext {
   limit?: number;
 }
 
-const VERDICT_LINE: Record<Verdict, string> = {
-  block: '🔴 **Blocked**',
-  warn: '🟡 **Passes with warnings**',
-  ok: '🟢 **Passes**',
-};
+/** Compact tables: GitHub renders them the same without the padding, and the comment stays short. */
+const TABLE = { padding: false, alignDelimiters: false } as const;
 
-const SEVERITY_ICON: Record<Severity, string> = { block: '🔴 block', warn: '🟡 warn', info: '🔵 info' };
-
-function where(file: FileDecision, finding: JudgedFinding, ctx: MarkdownContext): string {
+function where(file: FileDecision, finding: Pick<JudgedFinding, 'line' | 'key'>, ctx: MarkdownContext): string {
   const label = finding.line !== null ? `line ${finding.line}` : 'file';
   const key = finding.key ? ` ${codeSpan(finding.key)}` : '';
   // A path git would never list (a `..` segment in a tampered report) is named, never linked.
@@ -47,18 +45,11 @@ function where(file: FileDecision, finding: JudgedFinding, ctx: MarkdownContext)
   return `[${label}](${ctx.blobUrl}/${encodePath(file.path)}${anchor})${key}`;
 }
 
-function state(finding: JudgedFinding): string {
-  const parts = [SEVERITY_ICON[finding.severity]];
+function severityTag(finding: JudgedFinding): string {
+  const parts = [`${SEVERITY_MARK[finding.severity]} ${SEVERITY_WORD[finding.severity]}`];
   if (finding.standing) parts.push('standing');
-  else parts.push('new');
   if (finding.waived) parts.push('waived');
   return parts.join(' · ');
-}
-
-function deltaState(delta: MetricDelta): string {
-  if (delta.state === 'crossed') return `❌ ${delta.limit?.severity ?? 'block'}`;
-  if (delta.state === 'ok') return '✅ within';
-  return '';
 }
 
 function limitText(delta: MetricDelta): string {
@@ -71,10 +62,30 @@ function limitText(delta: MetricDelta): string {
   return parts.join(', ');
 }
 
+/** The number format the file computes positions in: its number-format rows are the ones that matter. */
+function usedFormat(file: FileDecision): string {
+  return file.head?.spec.dtypes.positions ?? file.base?.spec.dtypes.positions ?? 'fp32';
+}
+
+/** Rows of the change table: number-format rows only for the format in use (or under a limit); the rest go to the details. */
+function shownDeltas(file: FileDecision): MetricDelta[] {
+  const format = usedFormat(file);
+  return file.deltas.filter((d) => d.limit !== null || !d.metric.startsWith('precision.') || d.metric.startsWith(`precision.${format}.`));
+}
+
+/** A value cell, with the assumption mark when the value rests on one and the memory mark beside memory figures. */
+function valueCell(file: FileDecision, metric: MetricPath, value: number | null, side: 'base' | 'head'): string {
+  const text = metric === 'discriminationSpan' && value === null && (side === 'head' ? file.head : file.base)?.metrics.fastestWavelength != null
+    ? `none within ${formatInteger((side === 'head' ? file.head : file.base)?.metrics.evaluationSpan ?? null)}`
+    : formatMetric(metric, value);
+  const assumed = side === 'head' && file.assumed?.metrics.includes(metric) ? ' *assumed*' : '';
+  const memory = MEMORY_METRICS.has(metric) && value !== null ? ' †' : '';
+  return `${text}${memory}${assumed}`;
+}
+
 /**
  * The two metric tables depend on the file alone, and `renderComment` builds every section again
- * for each trimming attempt (up to five, for the comment and again for the summary): each table is
- * built once per file. With 200 files that is most of the action's rendering time.
+ * for each trimming attempt: each table is built once per file.
  */
 const tableMemo = { delta: new WeakMap<FileDecision, string>(), full: new WeakMap<FileDecision, string>() };
 
@@ -92,128 +103,98 @@ function deltaTable(file: FileDecision): string {
 }
 
 function buildDeltaTable(file: FileDecision): string {
-  if (file.deltas.length === 0) return '_No metric changed and none is limited by the policy._';
+  const rows = shownDeltas(file);
+  if (rows.length === 0) return '_No metric changed and none is limited by the policy._';
   return markdownTable([
     ['metric', 'base', 'head', 'change', 'limit', 'state'],
-    ...file.deltas.map((d) => [
-      codeId(d.metric), formatMetric(d.metric, d.base), formatMetric(d.metric, d.head),
-      formatChange(d.metric, d.change, d.changePct), limitText(d), deltaState(d),
+    ...rows.map((d) => [
+      codeId(d.metric), valueCell(file, d.metric, d.base, 'base'), valueCell(file, d.metric, d.head, 'head'),
+      formatDeltaChange(d), limitText(d), `${limitStateMark(d)} ${escapeMarkdown(limitStateWord(d))}`.trim(),
     ]),
-  ], { align: ['l', 'r', 'r', 'r', 'l', 'l'] });
+  ], { ...TABLE, align: ['l', 'r', 'r', 'r', 'l', 'l'] });
 }
 
-function findingsTable(file: FileDecision, ctx: MarkdownContext): string {
-  if (file.findings.length === 0) return '_No findings._';
-  return markdownTable([
-    ['', 'rule', 'finding', 'where'],
-    ...file.findings.map((f) => [state(f), codeId(f.rule), escapeMarkdown(f.message), where(file, f, ctx)]),
-  ]);
+function otherMetrics(file: FileDecision): string {
+  return memo(tableMemo.full, file, buildOtherMetrics);
 }
 
-function fullMetrics(file: FileDecision): string {
-  return memo(tableMemo.full, file, buildFullMetrics);
+/** Every metric not in the change table, base and head side by side, collapsed. */
+function buildOtherMetrics(file: FileDecision): string {
+  const shown = new Set(shownDeltas(file).map((d) => d.metric));
+  const rows = METRIC_PATHS.filter((metric) => !shown.has(metric)).map((metric) => {
+    const b = file.base ? metricOf(file.base.metrics, metric) : null;
+    const h = file.head ? metricOf(file.head.metrics, metric) : null;
+    return { metric, b, h };
+  }).filter((r) => r.b !== null || r.h !== null)
+    .map((r) => [codeId(r.metric), file.base ? valueCell(file, r.metric, r.b, 'base') : '—', valueCell(file, r.metric, r.h, 'head')]);
+  if (rows.length === 0) return '';
+  return `<details><summary>Other metrics</summary>\n\n${markdownTable([['metric', 'base', 'head'], ...rows], { ...TABLE, align: ['l', 'r', 'r'] })}\n\n</details>`;
 }
 
-function buildFullMetrics(file: FileDecision): string {
-  const rows = METRIC_PATHS.map((metric) => {
-    const b = file.base ? formatMetric(metric, metricOf(file.base.metrics, metric)) : '—';
-    const h = file.head ? formatMetric(metric, metricOf(file.head.metrics, metric)) : '—';
-    return [codeId(metric), b, h];
-  }).filter(([, b, h]) => b !== '—' || h !== '—');
-  return `<details><summary>All metrics</summary>\n\n${markdownTable([['metric', 'base', 'head'], ...rows], { align: ['l', 'r', 'r'] })}\n\n</details>`;
+// ---- remedies in the file's own keys ----------------------------------------------------------
+
+function lineWords(lines: number[]): string {
+  return lines.length === 1 ? `line ${lines[0]}` : `lines ${lines.join(', ')}`;
 }
 
-
-function title(file: FileDecision): string {
-  const status = file.status === 'renamed' && file.previousPath
-    ? ` (renamed from ${codeSpan(file.previousPath)})`
-    : file.status === 'added' ? ' (new file, judged on its own)' : '';
-  return `### ${VERDICT_LINE[file.verdict].split(' ')[0]} ${codeSpan(file.path)}${status}`;
+/** Where a patch goes, in words: `Set on line 20 of the file:`, `Add to the policy's serving block for this file (…):`. */
+function patchLead(patch: FilePatch, finding: JudgedFinding): string {
+  if (patch.target === 'policy') return `In the serving block of ${codeSpan(patch.where)} that applies to this file:`;
+  const existing = patch.edits.filter((e) => e.line !== null).map((e) => e.line as number);
+  const added = patch.edits.some((e) => e.line === null);
+  const parts: string[] = [];
+  if (existing.length > 0) parts.push(`set on ${lineWords([...new Set(existing)])}`);
+  if (added) parts.push(finding.line !== null ? `add after line ${finding.line}` : 'add');
+  const text = parts.join(', ');
+  return `${text.charAt(0).toUpperCase()}${text.slice(1)}:`;
 }
 
-export interface FileSectionParts {
-  chart: boolean;
-  details: boolean;
-  maxFindings: number;
+function patchBlock(patch: FilePatch): string {
+  return codeBlock(patch.snippet, patch.format);
 }
 
-function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectionParts): string {
-  const lines = [title(file), ''];
-  if (file.headError) {
-    lines.push(`Could not be read at head: ${escapeMarkdown(file.headError.message)}`, '');
-  }
-  if (file.baseError) {
-    lines.push(`_The base version could not be read (${escapeMarkdown(file.baseError.message)}); the head is judged on its own._`, '');
-  }
-  if (file.head) {
-    lines.push(deltaTable(file), '');
-    const fit = [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics)].filter((t): t is string => t !== null);
-    if (fit.length > 0) lines.push(`Head: ${fit.map((t) => escapeMarkdown(t)).join('; ')}.`, '');
-  }
-  const findings = file.findings.slice(0, parts.maxFindings);
-  lines.push(findingsTable({ ...file, findings }, ctx), '');
-  if (findings.length < file.findings.length) {
-    lines.push(`_${file.findings.length - findings.length} more findings are in the job summary and the JSON report._`, '');
-  }
-  lines.push(...remedySection(file));
-  if (parts.chart && file.head) {
-    const chart = memoryChart(file);
-    if (chart) lines.push(chart, '');
-  }
-  if (parts.details && file.head) lines.push(fullMetrics(file), '');
-  return lines.join('\n');
+function locationsOf(file: FileDecision): LocationMap {
+  return (file.head as { locations?: LocationMap } | null)?.locations ?? {};
 }
 
-/** `` `key` before → **after**, … ⇒ metric value, … `` with every part escaped. */
-function changeMarkdown(change: Remedy['change'], spec: ModelSpec | null): string {
-  return changeParts(change, spec)
-    .map((p) => `${codeSpan(p.key)} ${p.before === null ? '' : `${escapeMarkdown(p.before)} → `}**${escapeMarkdown(p.after)}**`).join(', ');
+/** The patches of a remedy for this file (a report read back from JSON has no locations: default keys then). */
+export function remedyPatches(file: FileDecision, remedy: Remedy): FilePatch[] {
+  if (!file.head) return [];
+  return filePatches(remedy.change, file.dialect ?? 'checkpoint', file.head.spec, locationsOf(file), file.path);
 }
 
-function metricsMarkdown(metrics: Remedy['metrics'], max = Infinity): string {
-  return metricParts(metrics).slice(0, max).map((m) => `${escapeMarkdown(m.metric)} ${escapeMarkdown(m.value)}`).join(', ');
+function metricsShort(remedy: Remedy, max: number): string {
+  return metricParts(remedy.metrics).slice(0, max).map((m) => `${escapeMarkdown(m.metric)} ${escapeMarkdown(m.value)}`).join(', ');
 }
 
-function remedyMarkdown(remedy: Remedy, spec: ModelSpec | null, maxMetrics = Infinity): string {
-  const raises = remedy.raises.length > 0 ? ` _(also raises ${remedy.raises.map((r) => escapeMarkdown(r)).join(', ')})_` : '';
+/** The fix under a blocking finding: what it gives, what it still needs, and the change ready to paste. */
+function fixLines(file: FileDecision, finding: JudgedFinding): string[] {
+  if (finding.remedy === undefined) return [];
+  if (finding.remedy === null) return [`⛔ No fix found that passes these rules: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`];
+  const spec = file.head?.spec as ModelSpec;
+  const remedy = finding.remedy;
   const cost = remedy.cost ? `; costs ${escapeMarkdown(remedy.cost)}` : '';
-  return `${changeMarkdown(remedy.change, spec)} ⇒ ${metricsMarkdown(remedy.metrics, maxMetrics)}${raises}${cost}`;
-}
-
-/** The first line under a blocking finding: its remedy, or why there is none. */
-function firstRemedyLine(finding: JudgedFinding, spec: ModelSpec | null): string | null {
-  if (finding.remedy === undefined) return null;
-  if (finding.remedy === null) return `⛔ no remedy: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`;
-  return `✅ **remedy**: ${remedyMarkdown(finding.remedy, spec, 3)}`;
-}
-
-/** The remedies of a file's blocking findings: the proven change, its alternatives, or why there is none. */
-function remedySection(file: FileDecision): string[] {
-  const blocking = file.findings.filter((f) => f.severity === 'block' && f.remedy !== undefined);
-  if (blocking.length === 0) return [];
-  const spec = file.head?.spec ?? null;
-  const lines = [`**Remedies** <sub>${escapeMarkdown(REMEDY_NOTE)}</sub>`, ''];
-  for (const finding of blocking) {
-    lines.push(`- ${codeId(finding.rule)}${finding.metric ? ` (${codeSpan(finding.metric)})` : ''}`);
-    if (!finding.remedy) {
-      lines.push(`  - ⛔ no remedy: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`);
-      continue;
-    }
-    lines.push(`  - ✅ **remedy**: ${remedyMarkdown(finding.remedy, spec)}`);
-    for (const alternative of finding.remedyAlternatives ?? []) lines.push(`  - or: ${remedyMarkdown(alternative, spec)}`);
-  }
-  const together = file.remedyTogether;
-  if (together) {
-    const verdict = together.passes ? 'pass: nothing blocks' : `still block on ${together.stillBlocking.map((b) => escapeMarkdown(b)).join(', ')}`;
-    lines.push(`- ${together.passes ? '✅' : '⚠️'} All first remedies together (${changeMarkdown(together.change, spec)}) ${verdict}.`);
-  }
-  lines.push('');
+  const lines = [`✓ **Fix**, passes these rules (${metricsShort(remedy, 3)})${cost}; still needs ${escapeMarkdown(needsText(remedyNeeds(remedy.change, spec)))}.`];
+  for (const patch of remedyPatches(file, remedy)) lines.push(patchLead(patch, finding), patchBlock(patch));
   return lines;
 }
 
+/** One-line alternatives, in the file's own keys. */
+function alternativeLine(file: FileDecision, remedy: Remedy): string {
+  const spec = file.head?.spec as ModelSpec;
+  const keys = remedyPatches(file, remedy).map((patch) => patch.edits.map((e) => {
+    const at = patch.target === 'policy' ? ` (policy ${codeSpan(patch.where)} serving)` : e.line !== null ? ` (line ${e.line})` : '';
+    return `${codeSpan(`${e.key.split('.').pop()}: ${typeof e.value === 'string' ? e.value : String(e.value)}`)}${at}`;
+  }).join(', ')).join(', ');
+  const cost = remedy.cost ? `; costs ${escapeMarkdown(remedy.cost)}` : '';
+  return `${keys} ⇒ ${metricsShort(remedy, 3)}${cost}; still needs ${escapeMarkdown(needsText(remedyNeeds(remedy.change, spec)))}`;
+}
+
+// ---- sections -------------------------------------------------------------------------------
+
 function headline(report: GateReport): string {
   const counts = `${formatInteger(report.blocking)} blocking, ${formatInteger(report.warnings)} warning${report.warnings === 1 ? '' : 's'}`;
-  return `## context-reach · ${VERDICT_LINE[report.verdict]} · ${counts}`;
+  return `## context-reach · ${VERDICT_MARK[report.verdict]} **${VERDICT_WORD[report.verdict]}** · ${counts}`;
 }
 
 /** Blocking findings listed at the top; the rest stay in their file sections (and the JSON report). */
@@ -224,13 +205,88 @@ function blockers(report: GateReport, ctx: MarkdownContext): string[] {
   if (all.length === 0) return [];
   const rows = all.slice(0, BLOCKERS_LISTED);
   const more = all.length - rows.length;
-  return ['**What blocks:**', '', ...rows.flatMap(({ file, f }) => {
-    const first = firstRemedyLine(f, file.head?.spec ?? null);
-    return [
-      `- ${codeSpan(file.path)} ${where(file, f, ctx)}: ${codeId(f.rule)} ${escapeMarkdown(f.message)}`,
-      ...(first ? [`  - ${first}`] : []),
-    ];
-  }), ...(more > 0 ? [`- … and ${more} more blocking finding${more === 1 ? '' : 's'}, listed under their files below.`] : []), ''];
+  const out = ['### What blocks, and the fix', ''];
+  for (const [i, { file, f }] of rows.entries()) {
+    const metric = f.metric ? ` (${codeSpan(f.metric)})` : '';
+    out.push(`**${i + 1}.** ${codeSpan(file.path)} ${where(file, f, ctx)} · ${codeId(f.rule)}${metric}  `, escapeMarkdown(f.message), '');
+    const fix = fixLines(file, f);
+    if (fix.length > 0) out.push(...fix, '');
+  }
+  for (const file of report.files) {
+    const together = file.remedyTogether;
+    if (!together) continue;
+    out.push(together.passes
+      ? `All first fixes of ${codeSpan(file.path)} applied together pass these rules: nothing blocks.`
+      : `All first fixes of ${codeSpan(file.path)} applied together still block on ${together.stillBlocking.map((b) => escapeMarkdown(b)).join(', ')}.`, '');
+  }
+  if (more > 0) out.push(`… and ${more} more blocking finding${more === 1 ? '' : 's'}, listed under their files below.`, '');
+  if (rows.some(({ f }) => f.remedy)) out.push(`<sub>${escapeMarkdown(PASSES_NOTE)}</sub>`, '');
+  return out;
+}
+
+function fileSummary(file: FileDecision): string {
+  const count = (s: 'block' | 'warn' | 'info') => file.findings.filter((f) => f.severity === s).length;
+  const parts = [
+    count('block') && `${count('block')} blocking`,
+    count('warn') && `${count('warn')} warning${count('warn') === 1 ? '' : 's'}`,
+    count('info') && `${count('info')} note${count('info') === 1 ? '' : 's'}`,
+  ].filter(Boolean);
+  // A <summary> line is an HTML block: no markdown escapes there, HTML entities only.
+  const status = file.status === 'renamed' && file.previousPath ? `, renamed from ${htmlCode(file.previousPath)}`
+    : file.status === 'added' ? ', new file, judged on its own' : '';
+  return `${VERDICT_MARK[file.verdict]} ${htmlCode(file.path)}${status}: ${parts.length > 0 ? parts.join(', ') : 'no findings'}`;
+}
+
+export interface FileSectionParts {
+  chart: boolean;
+  details: boolean;
+  maxFindings: number;
+}
+
+function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectionParts): string {
+  const lines = [`<details${file.verdict === 'ok' ? '' : ''}><summary>${fileSummary(file)}</summary>`, ''];
+  if (file.headError) lines.push(`Could not be read at head: ${escapeMarkdown(file.headError.message)}`, '');
+  if (file.baseError) lines.push(`_The base version could not be read (${escapeMarkdown(file.baseError.message)}); the head is judged on its own._`, '');
+  if (file.assumed) lines.push(`*Assumed:* ${escapeMarkdown(file.assumed.reason)} Values marked *assumed* rest on it.`, '');
+  if (file.head) {
+    lines.push(deltaTable(file), '');
+    const fit = [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics)].filter((t): t is string => t !== null);
+    if (fit.length > 0) lines.push(`Head: ${fit.map((t) => escapeMarkdown(t)).join('; ')}.`, '');
+  }
+  // Blocking findings are at the top with their fixes; the others are listed here once.
+  const others = file.findings.filter((f) => f.counts !== 'block');
+  const listed = others.slice(0, parts.maxFindings);
+  for (const f of listed) {
+    const metric = f.metric ? ` (${codeSpan(f.metric)})` : '';
+    lines.push(`- ${severityTag(f)} ${codeId(f.rule)}${metric} ${where(file, f, ctx)}: ${escapeMarkdown(f.message)}`);
+  }
+  if (listed.length < others.length) lines.push(`- … ${others.length - listed.length} more findings are in the job summary and the JSON report.`);
+  if (listed.length > 0) lines.push('');
+  // One line per distinct change, naming every finding it fixes: the same fix is never listed twice.
+  const alternatives = new Map<string, { rules: string[]; remedy: Remedy }>();
+  for (const f of file.findings.filter((x) => x.counts === 'block')) {
+    for (const remedy of f.remedyAlternatives ?? []) {
+      const key = JSON.stringify(Object.entries(remedy.change).sort());
+      const entry = alternatives.get(key) ?? { rules: [], remedy };
+      entry.rules.push(codeId(f.rule));
+      alternatives.set(key, entry);
+    }
+  }
+  if (alternatives.size > 0) {
+    lines.push('Other fixes that pass these rules:');
+    for (const { rules, remedy } of alternatives.values()) lines.push(`- for ${rules.join(', ')}: ${alternativeLine(file, remedy)}`);
+    lines.push('');
+  }
+  if (parts.chart && file.head) {
+    const chart = memoryChart(file);
+    if (chart) lines.push(chart, '');
+  }
+  if (parts.details && file.head) {
+    const other = otherMetrics(file);
+    if (other) lines.push(other, '');
+  }
+  lines.push('</details>', '');
+  return lines.join('\n');
 }
 
 /**
@@ -251,20 +307,28 @@ function cutToLimit(body: string, limit: number): string {
 function preamble(report: GateReport, ctx: MarkdownContext): string[] {
   const lines: string[] = [];
   const judged = report.files.length;
-  lines.push(`Judged ${judged} changed model config${judged === 1 ? '' : 's'} between ${codeId(report.base.slice(0, 12))} (base) and ${codeId(report.head.slice(0, 12))} (head).`, '');
+  lines.push(`Judged ${judged} changed model config${judged === 1 ? '' : 's'} between \`${report.base.slice(0, 12)}\` (base) and \`${report.head.slice(0, 12)}\` (head).`, '');
   if (report.policy.source === 'built-in') {
     lines.push(`> [!NOTE]\n> No policy file at ${codeSpan(report.policy.path)} on the base commit: built-in rules only, no numeric limits.`, '');
-  }
-  if (report.policy.changedInHead) {
-    lines.push(`> [!NOTE]\n> This pull request changes the policy ${codeSpan(report.policy.path)}. It was judged by the base commit's policy; the change applies after merge.`, '');
   }
   if (report.waiver.applied && report.waiver.label) {
     lines.push(`> [!WARNING]\n> The waiver label ${codeSpan(report.waiver.label)} is on this pull request: ${report.waiver.waivedBlocks} blocking finding${report.waiver.waivedBlocks === 1 ? '' : 's'} counted as warnings.`, '');
   }
-  for (const notice of report.notices) lines.push(`> [!NOTE]\n> ${escapeMarkdown(notice)}`, '');
   if (ctx.unannotated && ctx.unannotated > 0) {
     lines.push(`_${ctx.unannotated} findings were not shown as line annotations (GitHub shows at most 10 errors and 10 warnings per step); all are listed below._`, '');
   }
+  return lines;
+}
+
+/** Notes that come after the first screen: the policy change (old → new) and the run's notices. */
+function notes(report: GateReport): string[] {
+  const lines: string[] = [];
+  if (report.policy.changedInHead) {
+    const changes = report.policy.limitChanges ?? [];
+    const what = changes.length > 0 ? ` After merge: ${changes.map((c) => codeSpan(c)).join(', ')}.` : ' It judges alike after merge.';
+    lines.push(`> [!NOTE]\n> This pull request changes the policy ${codeSpan(report.policy.path)}; this run judged by the base commit's policy.${what}`, '');
+  }
+  for (const notice of report.notices) lines.push(`> [!NOTE]\n> ${escapeMarkdown(notice)}`, '');
   return lines;
 }
 
@@ -274,18 +338,20 @@ function footer(report: GateReport, ctx: MarkdownContext): string[] {
     lines.push(`Deleted, not judged: ${report.deleted.map((d) => codeSpan(d.path)).join(', ')}.`, '');
   }
   if (ctx.htmlReportUrl) {
-    const where = ctx.htmlReportWhere ? ` ${escapeMarkdown(ctx.htmlReportWhere)}` : '';
-    lines.push(`📊 Charts, findings and proven remedies: [the HTML report](${encodeURI(ctx.htmlReportUrl).replace(/[()]/g, (c) => (c === '(' ? '%28' : '%29'))})${where}.`, '');
+    const at = ctx.htmlReportWhere ? ` ${escapeMarkdown(ctx.htmlReportWhere)}` : '';
+    lines.push(`Charts, findings and fixes: [the HTML report](${encodeURI(ctx.htmlReportUrl).replace(/[()]/g, (c) => (c === '(' ? '%28' : '%29'))})${at}.`, '');
   }
-  lines.push(`<sub>${escapeMarkdown(ESTIMATE_NOTICE)}</sub>`);
+  const memory = report.files.some((f) => f.head && (f.head.metrics.memoryBytes !== null || f.head.metrics.fitSequences !== null));
+  lines.push(`<sub>${memory ? `† Memory: ${escapeMarkdown(MEMORY_CAUTION)}. ` : ''}${escapeMarkdown(ESTIMATE_NOTICE)}</sub>`);
   return lines;
 }
 
 /**
- * The pull-request comment (and job summary): verdict and blockers first, then a section per
- * file. When the whole report is over the limit, the least important parts go first: full
- * metric tables, then charts, then findings beyond the first few, then whole file sections;
- * the comment says what was left out.
+ * The pull-request comment (and job summary). The first screen holds the verdict, what blocks and
+ * the fix for each, in the file's own keys; everything else (notes, each file's metrics, other
+ * findings and fixes, charts) follows in collapsed sections, each said once. When the whole
+ * report is over the limit, the least important parts go first: other metrics, then charts,
+ * then findings beyond the first few, then whole file sections; the comment says what was left out.
  */
 export function renderComment(report: GateReport, ctx: MarkdownContext = {}): string {
   const limit = ctx.limit ?? COMMENT_LIMIT;
@@ -295,11 +361,11 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
     { chart: false, details: false, maxFindings: Infinity },
     { chart: false, details: false, maxFindings: 5 },
   ];
-  const head = [COMMENT_MARKER, headline(report), '', ...preamble(report, ctx), ...blockers(report, ctx)].join('\n');
+  const head = [COMMENT_MARKER, headline(report), '', ...preamble(report, ctx), ...blockers(report, ctx), ...notes(report)].join('\n');
   const tail = footer(report, ctx).join('\n');
   for (const [index, parts] of attempts.entries()) {
     const trimNote = index === 0 ? '' : `\n_Trimmed to fit GitHub's comment limit: ${[
-      !parts.details && 'full metric tables', !parts.chart && 'charts', parts.maxFindings !== Infinity && `findings past the first ${parts.maxFindings} per file`,
+      !parts.details && 'other metrics', !parts.chart && 'charts', parts.maxFindings !== Infinity && `findings past the first ${parts.maxFindings} per file`,
     ].filter(Boolean).join(', ')} are left out here; the job summary and the JSON report have everything._\n`;
     const body = `${head}\n${trimNote}\n${report.files.map((f) => fileSection(f, ctx, parts)).join('\n')}\n${tail}\n`;
     if (body.length <= limit) return body;
@@ -319,7 +385,7 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
   const rest = report.files.slice(shown);
   const restLines: string[] = [];
   for (const f of rest) {
-    const line = `- ${VERDICT_LINE[f.verdict].split(' ')[0]} ${codeSpan(f.path)}: ${f.findings.length} findings`;
+    const line = `- ${fileSummary(f)}`;
     if (used + line.length + 200 > limit) {
       restLines.push(`- … and ${rest.length - restLines.length} more files`);
       break;

@@ -4,7 +4,15 @@ import { formatInteger } from '../units.js';
 import { formatChange, formatMetric } from './metric-format.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { PLAIN, type TextStyle } from './inspect-text.js';
-import { remedyLines, togetherText } from './remedy-text.js';
+import { remedyLines, togetherText, type RemedyNaming } from './remedy-text.js';
+import type { FileDecision } from '../compare/decide.js';
+import type { LocationMap } from '../model.js';
+
+/** The file's own key names for its fixes (a report read back from JSON has no locations: default keys then). */
+function naming(file: FileDecision): RemedyNaming | null {
+  if (!file.head) return null;
+  return { dialect: file.dialect ?? 'checkpoint', locations: (file.head as { locations?: LocationMap }).locations ?? {}, path: file.path };
+}
 
 /** The gate's decision as terminal text, for `context-reach diff --format text`. */
 export function renderDiffText(report: GateReport, style: TextStyle = PLAIN): string {
@@ -35,9 +43,9 @@ export function renderDiffText(report: GateReport, style: TextStyle = PLAIN): st
       const tags = [f.standing ? 'standing' : 'new', f.waived ? 'waived' : null].filter(Boolean).join(', ');
       const at = f.line !== null ? `${file.path}:${f.line}` : file.path;
       lines.push(`  ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule} (${tags})  ${style.dim(at)}`, `        ${f.message}`);
-      for (const r of remedyLines(f, file.head?.spec ?? null)) lines.push(`        ${style.bold(`${r.label}:`)} ${r.text}`);
+      for (const r of remedyLines(f, file.head?.spec ?? null, naming(file))) lines.push(`        ${style.bold(`${r.label}:`)} ${r.text}`);
     }
-    if (file.remedyTogether) lines.push(`  ${file.remedyTogether.passes ? style.bold('together:') : style.severity('warn', 'together:')} ${togetherText(file.remedyTogether, file.head?.spec ?? null)}`);
+    if (file.remedyTogether) lines.push(`  ${file.remedyTogether.passes ? style.bold('together:') : style.severity('warn', 'together:')} ${togetherText(file.remedyTogether, file.head?.spec ?? null, naming(file))}`);
   }
   if (report.deleted.length > 0) lines.push('', `deleted, not judged: ${report.deleted.map((d) => d.path).join(', ')}`);
   lines.push('', style.dim(ESTIMATE_NOTICE));

@@ -88,3 +88,27 @@ export function encodePath(path: string): string {
     .map((segment) => encodeURIComponent(segment).replace(/[!'()*~]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`))
     .join('/');
 }
+
+/**
+ * Untrusted text shown verbatim in a fenced code block (`lang` is ours: `json`, `yaml`,
+ * `suggestion`): the fence is one backtick longer than the longest run inside, so no line of the
+ * text can close it, and everything inside is literal (no element, link or mention).
+ */
+export function codeBlock(text: string, lang: string): string {
+  const longest = Math.max(2, ...(text.match(/`+/g) ?? []).map((run) => run.length));
+  const fence = '`'.repeat(longest + 1);
+  return `${fence}${lang}\n${text.replace(/\r\n?/g, '\n')}\n${fence}`;
+}
+
+/**
+ * Untrusted text as code inside an HTML block of a comment (a `<summary>` line), where markdown
+ * backslash escapes are not read: HTML entities only, with mentions, references and URLs broken
+ * as `escapeMarkdown` breaks them.
+ */
+export function htmlCode(text: string): string {
+  const escaped = escapeHtml(text.replace(/[\u0000-\u001f\u007f\u2028\u2029]/g, ' '))
+    .replace(/([@#])(?=[\p{L}\p{N}_])/gu, `$1${ZERO_WIDTH_SPACE}`)
+    .replace(/:\/\//g, `:${ZERO_WIDTH_SPACE}//`)
+    .replace(/\b(www)\./gi, `$1${ZERO_WIDTH_SPACE}.`);
+  return `<code>${escaped}</code>`;
+}

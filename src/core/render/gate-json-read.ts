@@ -138,7 +138,10 @@ const spec = record({
   }, true),
 }, false, ['latent', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly', 'quantization', 'vision']);
 
+const location = record({ key: text, line: lineOrNull });
 const version = record({ spec, metrics }, true);
+/** The head also carries where each field was stated (optional: reports written before it lack it). */
+const headVersion = record({ spec, metrics, locations: map(location) }, true, ['locations']);
 
 const failure = record({ path: text, line: lineOrNull, message: text, notAModel: { type: 'boolean' } }, true, ['notAModel']);
 
@@ -149,7 +152,8 @@ const delta = record({
   base: numberOrNull, head: numberOrNull, change: numberOrNull, changePct: numberOrNull,
   limit,
   state: { enum: ['ok', 'crossed', 'unjudged'] },
-});
+  note: text,
+}, false, ['note']);
 
 /** A remedy (`src/core/remedy/types.ts`): the change, the metrics it gives, the findings it raises. */
 const remedy = record({
@@ -175,14 +179,15 @@ const file = record({
   path: repoPath, previousPath: repoPathOrNull, status, dialect: { enum: ['context-reach', 'checkpoint', null] }, verdict,
   deltas: { type: 'array', items: delta },
   findings: { type: 'array', items: finding },
-  base: version, head: version, baseError: failure, headError: failure,
+  base: version, head: headVersion, baseError: failure, headError: failure,
   remedyTogether: record({
     change: map({ type: ['number', 'string'] }),
     metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
     passes: { type: 'boolean' },
     stillBlocking: { type: 'array', items: identity },
   }, true),
-}, false, ['remedyTogether']);
+  assumed: record({ metrics: { type: 'array', items: { enum: [...METRIC_PATHS] } }, reason: text }, true),
+}, false, ['remedyTogether', 'assumed']);
 
 /** The JSON Schema of the report `renderGateJson` writes (version 1). */
 export const GATE_JSON_SCHEMA: Readonly<Schema> = {
@@ -190,7 +195,7 @@ export const GATE_JSON_SCHEMA: Readonly<Schema> = {
     version: { const: 1 },
     verdict, blocking: count, warnings: count,
     base: commitId, head: commitId,
-    policy: record({ source: { enum: ['file', 'built-in'] }, path: text, changedInHead: { type: 'boolean' } }),
+    policy: record({ source: { enum: ['file', 'built-in'] }, path: text, changedInHead: { type: 'boolean' }, limitChanges: { type: 'array', items: text } }, false, ['limitChanges']),
     waiver: record({ label: textOrNull, applied: { type: 'boolean' }, waivedBlocks: count }),
     notices: { type: 'array', items: text },
     deleted: { type: 'array', items: record({ status, path: repoPath, previousPath: repoPathOrNull }) },

@@ -19,10 +19,12 @@ export function renderGateJson(report: GateReport): string {
     deltas: file.deltas,
     findings: file.findings,
     base: file.base ? { spec: file.base.spec, metrics: file.base.metrics } : null,
-    head: file.head ? { spec: file.head.spec, metrics: file.head.metrics } : null,
+    // Where each field was stated: the fixes are shown in the file's own keys from it.
+    head: file.head ? { spec: file.head.spec, metrics: file.head.metrics, locations: file.head.locations } : null,
     baseError: file.baseError,
     headError: file.headError,
     ...(file.remedyTogether ? { remedyTogether: file.remedyTogether } : {}),
+    ...(file.assumed ? { assumed: file.assumed } : {}),
   }));
   return `${JSON.stringify({
     version: report.version,

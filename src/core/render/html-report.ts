@@ -6,10 +6,11 @@
  * with their proven remedies and the table of changed metrics. Every path, key, value and
  * message from the pull request is escaped (`html/markup.ts` escapes by default).
  */
-import type { FileDecision, GateReport, MetricDelta, Verdict } from '../compare/decide.js';
+import type { FileDecision, GateReport, MetricDelta } from '../compare/decide.js';
 import type { FileReport } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
-import type { ModelSpec } from '../model.js';
+import type { LocationMap, ModelSpec } from '../model.js';
+import { filePatches } from '../remedy/file-patch.js';
 import { applyChange, changeEntries } from '../remedy/apply-change.js';
 import type { Change } from '../remedy/types.js';
 import { VERSION } from '../version.js';
@@ -21,7 +22,8 @@ import { fitText, perDeviceText } from './device-text.js';
 import { similarityChart, similarityOf } from './html/similarity-chart.js';
 import { spectrumChart, spectrumOf } from './html/spectrum-chart.js';
 import { REPORT_CSS } from './html/style.js';
-import { formatChange, formatMetric } from './metric-format.js';
+import { formatDeltaChange, formatMetric } from './metric-format.js';
+import { limitStateWord, MEMORY_CAUTION, MEMORY_METRICS, VERDICT_WORD } from './marks.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { changeParts } from './remedy-text.js';
 import { formatInteger, formatNumber } from '../units.js';
@@ -31,15 +33,19 @@ export interface HtmlReportOptions {
   title?: string;
 }
 
-const VERDICT_WORD: Record<Verdict, string> = { block: 'Blocked', warn: 'Passes with warnings', ok: 'Passes' };
 
 /** Nothing may load or run: styles inline, images only as data, no script, no frame, no form target. */
 const CSP = "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-uri 'none'; form-action 'none'";
 
 const MEMORY_KEYS = new Set(['serving.sequences', 'dtypes.cache', 'kvHeads', 'serving.tensorParallel', 'serving.pipelineParallel', 'dtypes.weights', 'quantization.groupSize']);
 
-/** `factor 8, sequences 5`: a remedy short enough for a chart legend. */
-function shortChange(change: Change, spec: ModelSpec): string {
+/** `factor 8, sequences 5`: a remedy short enough for a chart legend, in the file's own key names. */
+function shortChange(change: Change, spec: ModelSpec, file?: FileDecision): string {
+  if (file) {
+    const locations = (file.head as { locations?: LocationMap } | null)?.locations ?? {};
+    const edits = filePatches(change, file.dialect ?? 'checkpoint', spec, locations, file.path).flatMap((p) => p.edits);
+    if (edits.length > 0) return edits.map((e) => `${e.key.split('.').pop()} ${e.value}`).join(', ');
+  }
   return changeParts(change, spec).map((p) => `${p.key.split('.').pop()} ${p.after}`).join(', ');
 }
 
@@ -51,7 +57,7 @@ function positionVariant(file: FileDecision): { report: FileReport; label: strin
     const change = finding.remedy?.change;
     if (!change || !changeEntries(change).every(([key]) => key.startsWith('position.'))) continue;
     const spec = applyChange(head.spec, change);
-    return { report: { ...head, spec, metrics: computeMetrics(spec) }, label: `with the remedy (${shortChange(change, head.spec)})` };
+    return { report: { ...head, spec, metrics: computeMetrics(spec) }, label: `with the fix (${shortChange(change, head.spec, file)})` };
   }
   return null;
 }
@@ -63,7 +69,7 @@ function memoryVariant(file: FileDecision): MemoryVariant | null {
   for (const finding of file.findings) {
     const change: Change | undefined = finding.remedy?.change;
     if (!change || !changeEntries(change).every(([key]) => MEMORY_KEYS.has(key))) continue;
-    return { spec: applyChange(spec, change), label: `head with the remedy (${shortChange(change, spec)})` };
+    return { spec: applyChange(spec, change), label: `head with the fix (${shortChange(change, spec, file)})` };
   }
   return null;
 }
@@ -78,17 +84,42 @@ function limitText(delta: MetricDelta): string {
   ].filter(Boolean).join(', ');
 }
 
+/** Number-format rows for the format the file computes positions in (or under a limit); the others are noise here. */
+function shownDeltas(file: FileDecision): MetricDelta[] {
+  const format = file.head?.spec.dtypes.positions ?? 'fp32';
+  return file.deltas.filter((d) => d.limit !== null || !d.metric.startsWith('precision.') || d.metric.startsWith(`precision.${format}.`));
+}
+
+function valueMarkup(file: FileDecision, d: MetricDelta, side: 'base' | 'head'): Markup | string {
+  const report = side === 'head' ? file.head : file.base;
+  const value = side === 'head' ? d.head : d.base;
+  const text = d.metric === 'discriminationSpan' && value === null && report?.metrics.fastestWavelength != null
+    ? `none within ${formatInteger(report.metrics.evaluationSpan)}` : formatMetric(d.metric, value);
+  const memory = MEMORY_METRICS.has(d.metric) && value !== null ? ' †' : '';
+  if (side === 'head' && file.assumed?.metrics.includes(d.metric)) return h('span', { class: 'assumed' }, `${text}${memory}`);
+  return `${text}${memory}`;
+}
+
 function deltaTable(file: FileDecision): Markup | null {
-  if (file.deltas.length === 0) return null;
-  return h('table', { class: 'deltas' },
-    h('thead', null, h('tr', null, ['metric', 'base', 'head', 'change', 'limit', 'state'].map((c) => h('th', null, c)))),
-    h('tbody', null, file.deltas.map((d) => h('tr', { class: d.state === 'crossed' ? 'crossed' : null },
+  const rows = shownDeltas(file);
+  if (rows.length === 0) return null;
+  const memory = rows.some((d) => MEMORY_METRICS.has(d.metric));
+  return h('div', null, h('table', { class: 'deltas' },
+    h('thead', null, h('tr', null, ['metric', 'base', 'head', 'change', 'limit'].map((c) => h('th', null, c)), h('th', { class: 'state' }, 'state'))),
+    h('tbody', null, rows.map((d) => h('tr', { class: d.state === 'crossed' ? `crossed ${d.limit?.severity ?? 'block'}` : null },
       h('td', null, h('code', null, d.metric)),
-      h('td', null, formatMetric(d.metric, d.base)),
-      h('td', null, formatMetric(d.metric, d.head)),
-      h('td', null, formatChange(d.metric, d.change, d.changePct)),
+      h('td', null, valueMarkup(file, d, 'base')),
+      h('td', null, valueMarkup(file, d, 'head')),
+      h('td', null, formatDeltaChange(d)),
       h('td', null, limitText(d)),
-      h('td', null, d.state === 'crossed' ? `crossed (${d.limit?.severity ?? 'block'})` : d.state === 'ok' ? 'within' : '')))));
+      h('td', { class: 'state' }, d.state === 'crossed' ? h('span', { class: `chip ${d.limit?.severity ?? 'block'}` }, limitStateWord(d))
+        : d.state === 'ok' ? h('span', { class: 'chip ok' }, 'within') : limitStateWord(d)))))),
+  memory ? h('p', { class: 'caution' }, `† Memory figures: ${MEMORY_CAUTION}.`) : null);
+}
+
+function assumedNote(file: FileDecision): Markup | null {
+  if (!file.assumed) return null;
+  return h('p', { class: 'caution' }, h('b', null, 'Assumed: '), file.assumed.reason, ' Values resting on it are marked (assumed).');
 }
 
 /** The memory fit in words: per device when a replica spans several, and what the reserve keeps. */
@@ -127,6 +158,7 @@ function fileSection(file: FileDecision, index: number): Markup {
     file.headError ? h('p', null, `Could not be read at head: ${file.headError.message}`) : null,
     file.baseError ? h('p', { class: 'muted' }, `The base version could not be read (${file.baseError.message}); the head is judged on its own.`) : null,
     fixSummary(file),
+    assumedNote(file),
     changeCards(file),
     fitParagraph(file),
     charts.length > 0 ? h('div', { class: 'charts' }, charts) : null,
@@ -142,13 +174,16 @@ function banner(report: GateReport): Markup {
   return h('div', { class: `banner ${report.verdict}` },
     h('span', { class: `verdict ${report.verdict}` }, VERDICT_WORD[report.verdict]),
     h('span', null, `${formatInteger(report.blocking)} blocking · ${formatInteger(report.warnings)} warning${report.warnings === 1 ? '' : 's'} · ${report.files.length} changed model config${report.files.length === 1 ? '' : 's'}`),
-    blocking > 0 ? h('span', null, `${remedies} of ${blocking} blocking finding${blocking === 1 ? '' : 's'} with a proven remedy`) : null);
+    blocking > 0 ? h('span', null, `${remedies} of ${blocking} blocking finding${blocking === 1 ? '' : 's'} with a fix that passes these rules`) : null);
 }
 
 function notes(report: GateReport): Markup | null {
   const items: string[] = [];
   if (report.policy.source === 'built-in') items.push(`No policy file at ${report.policy.path} on the base commit: built-in rules only, no numeric limits.`);
-  if (report.policy.changedInHead) items.push(`This pull request changes the policy ${report.policy.path}; it was judged by the base commit's policy, and the change applies after merge.`);
+  if (report.policy.changedInHead) {
+    const changes = report.policy.limitChanges ?? [];
+    items.push(`This pull request changes the policy ${report.policy.path}; it was judged by the base commit's policy. After merge: ${changes.length > 0 ? changes.join('; ') : 'it judges alike'}.`);
+  }
   if (report.waiver.applied && report.waiver.label) items.push(`The waiver label ${report.waiver.label} is on this pull request: ${report.waiver.waivedBlocks} blocking finding${report.waiver.waivedBlocks === 1 ? '' : 's'} counted as warnings.`);
   items.push(...report.notices);
   if (report.deleted.length > 0) items.push(`Deleted, not judged: ${report.deleted.map((d) => d.path).join(', ')}.`);

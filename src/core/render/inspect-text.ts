@@ -152,10 +152,10 @@ function findingLines(style: TextStyle, report: FileReport & { remedyTogether?: 
   const lines = ['', `  ${style.bold('Findings')}`, ...findings.map((f) => {
     const where = f.line !== null ? `${path}:${f.line}` : path;
     const key = f.key ? ` ${f.key}` : '';
-    const remedies = remedyLines(f, report.spec).map((r) => `\n          ${style.bold(`${r.label}:`)} ${r.text}`).join('');
+    const remedies = remedyLines(f, report.spec, { dialect: report.dialect, locations: report.locations, path: report.path }).map((r) => `\n          ${style.bold(`${r.label}:`)} ${r.text}`).join('');
     return `    ${style.severity(f.severity, f.severity.padEnd(5))} ${f.rule}  ${style.dim(`${where}${key}`)}\n          ${f.message}${remedies}`;
   })];
-  if (report.remedyTogether) lines.push(`    ${style.bold('together:')} ${togetherText(report.remedyTogether, report.spec)}`);
+  if (report.remedyTogether) lines.push(`    ${style.bold('together:')} ${togetherText(report.remedyTogether, report.spec, { dialect: report.dialect, locations: report.locations, path: report.path })}`);
   return lines;
 }
 

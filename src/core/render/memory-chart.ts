@@ -1,6 +1,7 @@
 import type { FileDecision } from '../compare/decide.js';
 import { memoryAtSpan, reserveWords, usableDeviceBytes } from '../metrics/memory-curve.js';
 import { formatInteger, formatNumber } from '../units.js';
+import { sameCurveWords } from './html/memory-span-chart.js';
 
 const GIB = 1024 ** 3;
 
@@ -62,5 +63,8 @@ export function memoryChart(file: FileDecision): string | null {
     '```',
   ];
   const legend = series.map((s, i) => `${i + 1}. ${s.name}`).join(' · ');
-  return `<details open><summary>Memory against span</summary>\n\n${lines.join('\n')}\n\nLines, in order: ${legend}. Sequences held: base ${base ? formatInteger(base.spec.serving.sequences ?? 1) : '—'}, head ${formatInteger(head.spec.serving.sequences ?? 1)}.\n\n</details>`;
+  const same = base && series.length >= 3 && series[0]!.values.every((v, i) => Math.abs(v - series[1]!.values[i]!) <= 1e-9 * v);
+  const words = same ? ` Base and head draw the same line: ${sameCurveWords(base.spec, head.spec)}.` : '';
+  const served = `The head serves ${formatInteger(head.metrics.evaluationSpan)} tokens; usable memory ${budget !== null ? `${formatNumber(budget / GIB, 3)} GiB` : 'is not given'}.`;
+  return `<details><summary>Memory against span</summary>\n\n${lines.join('\n')}\n\nLines, in order: ${legend}.${words} ${served}\n\n</details>`;
 }

@@ -3,11 +3,16 @@
  * metric values the change would produce. Plain text; the markdown and HTML renderers escape it.
  */
 import type { MetricPath } from '../metrics/types.js';
-import type { LocationMap, ModelSpec } from '../model.js';
+import type { Dialect, LocationMap, ModelSpec } from '../model.js';
+import { filePatches as patchesOf } from '../remedy/file-patch.js';
+import { needsText as needsOf, remedyNeeds as needsFor } from '../remedy/needs.js';
 import { changeEntries, currentValue } from '../remedy/apply-change.js';
 import type { ChangeValue, CombinedRemedy, Remedy, RemedyFields } from '../remedy/types.js';
 import { formatInteger, formatNumber, formatTokens } from '../units.js';
 import { formatMetric } from './metric-format.js';
+
+export { remedyNeeds, needsText } from '../remedy/needs.js';
+export { filePatches, type FilePatch } from '../remedy/file-patch.js';
 
 const TOKEN_KEYS = new Set(['serving.span', 'position.scaling.originalSpan']);
 
@@ -39,9 +44,30 @@ export function changeParts(change: Remedy['change'], spec: ModelSpec | null, lo
   });
 }
 
-/** `position.scaling.factor 4 → 8, serving.sequences 8 → 5`. */
-export function changeText(change: Remedy['change'], spec: ModelSpec | null): string {
-  return changeParts(change, spec).map((p) => (p.before === null ? `${p.key} = ${p.after}` : `${p.key} ${p.before} → ${p.after}`)).join(', ');
+/** The file a remedy is written for, so its fields are named by the file's own keys. */
+export interface RemedyNaming {
+  dialect: Dialect;
+  locations: LocationMap;
+  path: string;
+}
+
+/** Field path → the file's own key (`rope_scaling.factor`, `model.position.scaling.factor`, `<policy> serving.span`). */
+function fileKeys(change: Remedy['change'], spec: ModelSpec | null, naming: RemedyNaming | null): Map<string, string> {
+  const keys = new Map<string, string>();
+  if (!spec || !naming) return keys;
+  for (const patch of patchesOf(change, naming.dialect, spec, naming.locations, naming.path)) {
+    for (const edit of patch.edits) keys.set(edit.field, patch.target === 'policy' ? `${patch.where} serving.${edit.key.split('.').pop()}` : edit.key);
+  }
+  return keys;
+}
+
+/** `rope_scaling.factor 4 → 8, serving.sequences 8 → 5`, in the file's own keys when `naming` is given. */
+export function changeText(change: Remedy['change'], spec: ModelSpec | null, naming: RemedyNaming | null = null): string {
+  const keys = fileKeys(change, spec, naming);
+  return changeParts(change, spec).map((p) => {
+    const key = keys.get(p.key) ?? p.key;
+    return p.before === null ? `${key} = ${p.after}` : `${key} ${p.before} → ${p.after}`;
+  }).join(', ');
 }
 
 /** One metric after a change. */
@@ -59,28 +85,37 @@ export function metricsText(metrics: Remedy['metrics']): string {
   return metricParts(metrics).map((p) => `${p.metric} ${p.value}`).join(', ');
 }
 
-/** `position.scaling.factor 4 → 8 ⇒ reach 262,144 (256k), headroom 0 (also raises frequencies-changed)`. */
-export function remedyText(remedy: Remedy, spec: ModelSpec | null): string {
+/** `rope_scaling.factor 4 → 8 ⇒ reach 262,144 (256k), headroom 0; still needs …`. */
+export function remedyText(remedy: Remedy, spec: ModelSpec | null, naming: RemedyNaming | null = null): string {
   const raises = remedy.raises.length > 0 ? ` (also raises ${remedy.raises.join(', ')})` : '';
   const cost = remedy.cost ? `; costs ${remedy.cost}` : '';
-  return `${changeText(remedy.change, spec)} ⇒ ${metricsText(remedy.metrics)}${raises}${cost}`;
+  const needs = spec && naming ? `; still needs ${needsOf(needsFor(remedy.change, spec))}` : '';
+  return `${changeText(remedy.change, spec, naming)} ⇒ ${metricsText(remedy.metrics)}${raises}${cost}${needs}`;
 }
 
-/** Lines for one finding: the remedy, each alternative, or why there is none; empty for findings without remedy fields. */
-export function remedyLines(fields: Partial<RemedyFields>, spec: ModelSpec | null): { label: 'remedy' | 'or' | 'no remedy'; text: string }[] {
+/** Lines for one finding: the fix, each alternative, or why there is none; empty for findings without remedy fields. */
+export function remedyLines(fields: Partial<RemedyFields>, spec: ModelSpec | null, naming: RemedyNaming | null = null): { label: 'fix' | 'or' | 'no fix'; text: string }[] {
   if (fields.remedy === undefined) return [];
-  if (fields.remedy === null) return [{ label: 'no remedy', text: fields.remedyWhyNot ?? 'none found' }];
+  if (fields.remedy === null) return [{ label: 'no fix', text: fields.remedyWhyNot ?? 'none found' }];
   return [
-    { label: 'remedy', text: remedyText(fields.remedy, spec) },
-    ...(fields.remedyAlternatives ?? []).map((r) => ({ label: 'or' as const, text: remedyText(r, spec) })),
+    { label: 'fix', text: remedyText(fields.remedy, spec, naming) },
+    ...(fields.remedyAlternatives ?? []).map((r) => ({ label: 'or' as const, text: remedyText(r, spec, naming) })),
   ];
 }
 
-/** `All remedies together (a, b) pass` or what still blocks. */
-export function togetherText(together: CombinedRemedy, spec: ModelSpec | null): string {
-  const verdict = together.passes ? 'pass: nothing blocks' : `still block on ${together.stillBlocking.join(', ')}`;
-  return `All first remedies together (${changeText(together.change, spec)}) ${verdict} ⇒ ${metricsText(together.metrics)}`;
+/** `All first fixes together (a, b) pass these rules` or what still blocks. */
+export function togetherText(together: CombinedRemedy, spec: ModelSpec | null, naming: RemedyNaming | null = null): string {
+  const verdict = together.passes ? 'pass these rules: nothing blocks' : `still block on ${together.stillBlocking.join(', ')}`;
+  return `All first fixes together (${changeText(together.change, spec, naming)}) ${verdict} ⇒ ${metricsText(together.metrics)}`;
 }
 
 /** Said once wherever remedies are shown. */
 export const REMEDY_NOTE = 'Each remedy was applied to the description, measured and judged again by the same rules and limits before it is shown.';
+
+/** Said once wherever remedies are shown: what "passes" means and what it does not. */
+export const PASSES_NOTE = 'A fix "passes these rules" when the changed file, measured and judged again by the same rules and limits, no longer blocks; it does not show the model keeps its quality.';
+
+/** Every remedy of a finding: the first, then the alternatives. */
+export function allRemedies(fields: Partial<RemedyFields>): Remedy[] {
+  return fields.remedy ? [fields.remedy, ...(fields.remedyAlternatives ?? [])] : [];
+}

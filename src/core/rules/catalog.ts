@@ -133,6 +133,11 @@ export const RULES = {
     title: 'The rotary base or the position frequencies changed',
     help: 'Changing the frequencies after training is a retraining-level change: make sure the checkpoint was trained or tuned for them.',
   },
+  'checkpoint-shape-changed': {
+    severity: 'warn', scope: 'change',
+    title: 'A checkpoint config changed the shape of its network',
+    help: 'Layers, width, heads, key/value heads, head size, feed-forward size, vocabulary and experts fix the shapes of the stored weights: changing them needs new weights (retraining, or converting and tuning the checkpoint). Describe a planned design in the context-reach model format instead.',
+  },
   'cache-per-token-changed': {
     severity: 'info', scope: 'change',
     title: 'Key/value cache per token changed',

@@ -9,6 +9,7 @@ import { usableDeviceBytes } from '../../metrics/memory-curve.js';
 import type { MetricPath } from '../../metrics/types.js';
 import { formatInteger } from '../../units.js';
 import { formatMetric } from '../metric-format.js';
+import { MEMORY_CAUTION_SHORT as MEMORY_CAUTION } from '../marks.js';
 import { tokenLabel } from './chart-frame.js';
 import { h, type Markup } from './markup.js';
 
@@ -68,6 +69,10 @@ export function changeCards(file: FileDecision): Markup | null {
   const crossed = new Map(file.deltas.filter((d) => d.state === 'crossed').map((d) => [d.metric as string, d.limit?.severity ?? 'block']));
   // On one device the per-device memory is the memory itself: one card, not two.
   const several = (head.metrics.devices ?? 1) > 1 || (base !== null && (base.metrics.devices ?? 1) > 1);
+  // A reshaped checkpoint's budget figures describe weights it does not have: never a gain.
+  const reshaped = file.findings.some((f) => f.rule === 'checkpoint-shape-changed');
+  const SHAPED = new Set(['memoryBytes', 'memoryBytesPerDevice', 'fitSequences', 'cachePerTokenBytes']);
+  const assumed = new Set<string>(file.assumed?.metrics ?? []);
   const specs = [...CARDS.filter((c) => several || c.metric !== 'memoryBytesPerDevice'),
     { metric: colliding, label: `Colliding positions (${own})`, better: 'down' as const }];
 
@@ -79,7 +84,9 @@ export function changeCards(file: FileDecision): Markup | null {
     let tone: Tone = '';
     if (rank === 0 || crossed.get(spec.metric) === 'block') tone = 'bad';
     else if (crossed.get(spec.metric) === 'warn') tone = 'warn';
-    else if (changed && spec.better && b !== null && v !== null) tone = (spec.better === 'up') === (v > b) ? 'good' : '';
+    else if (changed && spec.better && b !== null && v !== null && !(reshaped && SHAPED.has(spec.metric)) && !assumed.has(spec.metric)) {
+      tone = (spec.better === 'up') === (v > b) ? 'good' : '';
+    }
     return { spec, b, v, changed, rank, tone };
   }).filter((r) => r.rank < 3 && !(r.v === null && r.b === null));
   rows.sort((a, b) => a.rank - b.rank);
@@ -89,10 +96,11 @@ export function changeCards(file: FileDecision): Markup | null {
   return h('ul', { class: 'cards' }, rows.slice(0, MAX_CARDS).map((r) => {
     let note: string | null = null;
     if (r.spec.metric === 'headroom' && r.v !== null && r.v < 0) note = `the span is ${formatInteger(-r.v)} tokens past the reach`;
-    else if (r.spec.metric === 'memoryBytesPerDevice' && usable !== null) note = `usable per device: ${formatMetric('memoryBytes', usable)}`;
-    else if (r.spec.metric === 'memoryBytes' && usable !== null && !several) note = `usable on the device: ${formatMetric('memoryBytes', usable)}`;
+    else if (r.spec.metric === 'memoryBytesPerDevice' && usable !== null) note = `usable per device: ${formatMetric('memoryBytes', usable)}; ${MEMORY_CAUTION}`;
+    else if (r.spec.metric === 'memoryBytes' && usable !== null && !several) note = `usable on the device: ${formatMetric('memoryBytes', usable)}; ${MEMORY_CAUTION}`;
     else if (r.spec.metric === 'memoryBytes' && several) note = `across ${formatInteger(head.metrics.devices)} devices`;
-    else if (r.spec.metric === 'fitSequences' && head.spec.serving.sequences !== null) note = `the service holds ${formatInteger(head.spec.serving.sequences)}`;
+    else if (r.spec.metric === 'fitSequences' && head.spec.serving.sequences !== null) note = `the service holds ${formatInteger(head.spec.serving.sequences)}; ${MEMORY_CAUTION}`;
+    if (reshaped && SHAPED.has(r.spec.metric)) note = `${note ? `${note}; ` : ''}a reshaped network: needs new weights`;
     const limit = file.deltas.find((d) => d.metric === r.spec.metric)?.limit;
     if (limit && note === null) {
       note = `limit ${[limit.min !== undefined ? `≥ ${formatMetric(r.spec.metric, limit.min)}` : '', limit.max !== undefined ? `≤ ${formatMetric(r.spec.metric, limit.max)}` : '',
@@ -100,7 +108,8 @@ export function changeCards(file: FileDecision): Markup | null {
     }
     return h('li', { class: `card ${r.tone}`.trim() },
       h('div', { class: 'label' }, r.spec.label),
-      h('div', { class: 'value' }, r.changed ? [h('span', { class: 'from' }, valueText(r.spec.metric, r.b)), ' → '] : null, valueText(r.spec.metric, r.v)),
+      h('div', { class: 'value' }, r.changed ? [h('span', { class: 'from' }, valueText(r.spec.metric, r.b)), ' → '] : null,
+        assumed.has(r.spec.metric) ? h('span', { class: 'assumed' }, valueText(r.spec.metric, r.v)) : valueText(r.spec.metric, r.v)),
       note ? h('div', { class: 'note' }, note) : null);
   }));
 }

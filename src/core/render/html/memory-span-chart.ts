@@ -11,7 +11,8 @@ import { servedSequences } from '../../metrics/kv-cache.js';
 import { memoryAtSpan, reserveWords, usableDeviceBytes } from '../../metrics/memory-curve.js';
 import type { ModelSpec } from '../../model.js';
 import { formatBytes, formatInteger } from '../../units.js';
-import { axisBottom, axisLeft, figure, frame, hRule, powerOfTwoTicks, tokenLabel, type LegendEntry } from './chart-frame.js';
+import { cacheDType } from '../../metrics/storage-bytes.js';
+import { axisBottom, axisLeft, figure, frame, hRule, powerOfTwoTicks, tokenLabel, vRule, type LegendEntry } from './chart-frame.js';
 import { h, type Markup } from './markup.js';
 
 const GIB = 2 ** 30;
@@ -33,6 +34,16 @@ function curve(spec: ModelSpec, spans: number[]): Point[] {
 function sequencesText(report: FileReport): string {
   const n = servedSequences(report.spec);
   return n === null ? '' : `${formatInteger(n)} sequence${n === 1 ? '' : 's'}`;
+}
+
+/** `4 sequences with a bf16 cache hold as much as 8 with an fp8 cache`: why two curves coincide. */
+export function sameCurveWords(base: ModelSpec, head: ModelSpec): string {
+  const nb = servedSequences(base);
+  const nh = servedSequences(head);
+  const cb = cacheDType(base);
+  const ch = cacheDType(head);
+  if (nb !== nh || cb !== ch) return `${formatInteger(nb)} sequence${nb === 1 ? '' : 's'} with a ${cb} cache take as much as ${formatInteger(nh)} with a ${ch} cache`;
+  return 'the change does not move memory';
 }
 
 /** The chart, or null when neither version has a memory figure. */
@@ -67,8 +78,13 @@ export function memorySpanChart(id: string, base: FileReport | null, head: FileR
   for (const s of series) parts.push(h('path', { class: `s-${s.name}`, d: path(s.points) ?? '', 'stroke-width': s.name === 'head' ? 2.4 : 1.8 }));
   if (variant && variantPoints.length > 0) parts.push(h('path', { class: 's-fix dash', d: path(variantPoints) ?? '', 'stroke-width': 2.2 }));
 
+  // The served (evaluated) span of the head, labelled above the plot where no curve runs.
+  const headT = head?.metrics.evaluationSpan ?? null;
+  if (headT !== null) parts.push(vRule(f, x(headT), `served ${tokenLabel(headT)}`, 's-span dot', x(headT) > f.width - f.right - 60 ? 'end' : 'start'));
+
   const notes: string[] = [];
-  // The higher point's label goes above it and the lower one's below, so two labels never overlap.
+  // Memory grows with the span, so each curve runs below-left and above-right of its point: the
+  // higher point's label goes above-left, clear of the line.
   const highest = Math.max(...series.map((s) => s.report.metrics.memoryBytesPerDevice as number));
   for (const s of series) {
     const T = s.report.metrics.evaluationSpan as number;
@@ -79,12 +95,23 @@ export function memorySpanChart(id: string, base: FileReport | null, head: FileR
     const fit = s.report.metrics.fitSequences;
     const label = `${s.name}: ${formatBytes(m)} at ${tokenLabel(T)}${fit !== null ? `, ${formatInteger(fit)} fit` : ''}`;
     const above = series.length === 1 || m === highest;
-    parts.push(h('text', { class: 'mark', x: x(T) - 8, y: y(m / GIB) + (above ? -9 : 17), 'text-anchor': 'end' }, label));
+    // Every curve lies at or above the weights, so the band between the weights and the axis is
+    // free of lines: the lower point's label goes there, left of its span.
+    const floorY = weights !== null ? (y(weights / GIB) + (f.height - f.bottom)) / 2 + 4 : y(m / GIB) + 17;
+    parts.push(h('text', above
+      ? { class: 'mark', x: x(T) - 8, y: y(m / GIB) - 9, 'text-anchor': 'end' }
+      : { class: 'mark', x: x(T) - 6, y: floorY, 'text-anchor': 'end' }, label));
     const spread = devices > 1 ? ` over ${formatInteger(devices)} devices` : '';
     notes.push(`${s.name} holds ${sequencesText(s.report)} of ${formatInteger(T)} tokens${spread}: ${formatBytes(m)}${each}${budget !== null ? ` of ${formatBytes(budget)} usable` : ''}${fit !== null ? `, ${formatInteger(fit)} sequence${fit === 1 ? '' : 's'} fit` : ''}`);
   }
 
-  const entries: LegendEntry[] = series.map((s) => [`sw-${s.name}`, `${s.name} (${sequencesText(s.report)})`] as LegendEntry);
+  // Base and head on one curve: one line hides the other, so it is said in words.
+  const same = series.length === 2 && series[0]!.points.length === series[1]!.points.length
+    && series[0]!.points.every((p, i) => Math.abs(p[1] - series[1]!.points[i]![1]) <= 1e-9 * p[1]);
+  if (same) notes.unshift(`base and head draw the same curve: ${sameCurveWords(series[0]!.report.spec, series[1]!.report.spec)}`);
+  const entries: LegendEntry[] = same
+    ? [['sw-head', `base and head, one curve (${sequencesText(series[0]!.report)} / ${sequencesText(series[1]!.report)})`] as LegendEntry]
+    : series.map((s) => [`sw-${s.name}`, `${s.name} (${sequencesText(s.report)})`] as LegendEntry);
   if (variant && variantPoints.length > 0) entries.push(['dash sw-fix', variant.label]);
   if (budget !== null) {
     entries.push(['dash sw-budget', `usable memory${each}`]);

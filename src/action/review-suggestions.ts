@@ -1,0 +1,182 @@
+/**
+ * The adapter for review suggestions (GitHub REST: "List review comments on a pull request",
+ * "Create a review comment for a pull request", "Update a review comment for a pull request",
+ * "Delete a review comment for a pull request", and the pull request's file list for the diff).
+ * It keeps exactly the planned suggestions on the pull request: creates the missing ones, updates
+ * or moves changed ones, leaves equal ones alone, and deletes ours whose finding is gone. Only
+ * review comments written by a bot account and starting with our marker are ever touched.
+ */
+import type { getOctokit } from '@actions/github';
+import type { PlannedSuggestion } from '../core/render/suggestions.js';
+import { suggestionIdOf } from '../core/render/suggestions.js';
+
+/** One review comment as the adapter needs it. */
+export interface ReviewComment {
+  id: number;
+  path: string;
+  /** Line it is on now at head; null once the line is outdated. */
+  line: number | null;
+  startLine: number | null;
+  body: string;
+  /** The author is a bot account (the workflow token writes as `github-actions[bot]`). */
+  byBot: boolean;
+}
+
+export interface ReviewTarget {
+  owner: string;
+  repo: string;
+  pull: number;
+  /** The head commit the suggestions are written against. */
+  headSha: string;
+}
+
+export interface ReviewApi {
+  /** Every review comment of the pull request, paginated. */
+  listReviewComments(target: ReviewTarget): Promise<ReviewComment[]>;
+  createReviewComment(target: ReviewTarget, suggestion: PlannedSuggestion): Promise<void>;
+  updateReviewComment(target: ReviewTarget, id: number, body: string): Promise<void>;
+  deleteReviewComment(target: ReviewTarget, id: number): Promise<void>;
+  /** Each changed file's unified diff (`patch`), absent for binary or very large files. */
+  listPatches(target: ReviewTarget): Promise<Map<string, string>>;
+}
+
+/** Lines of the head version a unified diff shows (added or context lines): where review comments may go. */
+export function diffRightLines(patch: string): Set<number> {
+  const lines = new Set<number>();
+  let right = 0;
+  let inHunk = false;
+  for (const row of patch.split('\n')) {
+    const hunk = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,\d+)? @@/.exec(row);
+    if (hunk) { right = Number(hunk[1]); inHunk = true; continue; }
+    if (!inHunk || row.startsWith('\\')) continue;
+    if (row.startsWith('-')) continue;
+    if (row.startsWith('+') || row.startsWith(' ') || row === '') { lines.add(right); right += 1; }
+  }
+  return lines;
+}
+
+/** What a run did with the suggestions. */
+export interface SuggestionOutcome {
+  created: number;
+  updated: number;
+  kept: number;
+  removed: number;
+}
+
+/**
+ * Makes the pull request carry exactly `planned` among our suggestions. A suggestion whose line
+ * moved is deleted and written again (a review comment cannot move); one whose body changed is
+ * updated in place; ours that no plan names (the finding is fixed or gone) are deleted.
+ */
+export async function syncSuggestions(api: ReviewApi, target: ReviewTarget, planned: readonly PlannedSuggestion[]): Promise<SuggestionOutcome> {
+  const outcome: SuggestionOutcome = { created: 0, updated: 0, kept: 0, removed: 0 };
+  const ours = (await api.listReviewComments(target)).filter((c) => c.byBot && suggestionIdOf(c.body) !== null);
+  const byId = new Map<string, ReviewComment[]>();
+  for (const comment of ours) {
+    const id = suggestionIdOf(comment.body)!;
+    byId.set(id, [...(byId.get(id) ?? []), comment]);
+  }
+  const wanted = new Set(planned.map((p) => p.id));
+  for (const suggestion of planned) {
+    const [first, ...extra] = byId.get(suggestion.id) ?? [];
+    // Duplicates left by an interrupted run go; one stays.
+    for (const comment of extra) { await api.deleteReviewComment(target, comment.id); outcome.removed += 1; }
+    const samePlace = first && first.path === suggestion.path && first.line === suggestion.line
+      && (first.startLine ?? first.line) === suggestion.startLine;
+    if (first && samePlace) {
+      if (first.body === suggestion.body) outcome.kept += 1;
+      else { await api.updateReviewComment(target, first.id, suggestion.body); outcome.updated += 1; }
+      continue;
+    }
+    if (first) { await api.deleteReviewComment(target, first.id); outcome.removed += 1; }
+    await api.createReviewComment(target, suggestion);
+    outcome.created += 1;
+  }
+  for (const [id, comments] of byId) {
+    if (wanted.has(id)) continue;
+    for (const comment of comments) { await api.deleteReviewComment(target, comment.id); outcome.removed += 1; }
+  }
+  return outcome;
+}
+
+type Octokit = ReturnType<typeof getOctokit>;
+
+/** The REST calls, with the runner's request defaults and the retry plugin; the Octokit stack loads on first use. */
+export function createReviewApi(token: string, options: { baseUrl?: string }): ReviewApi {
+  let octokit: Octokit | null = null;
+  const client = async (): Promise<Octokit> => {
+    if (octokit) return octokit;
+    const { getOctokit, actionsDefaults, retry } = await import('./octokit.js');
+    octokit = getOctokit(token, { baseUrl: options.baseUrl ?? 'https://api.github.com', request: { ...actionsDefaults.request }, retry: { retries: 2 } }, retry);
+    return octokit;
+  };
+  return {
+    async listReviewComments({ owner, repo, pull }) {
+      const kit = await client();
+      const entries = await kit.paginate(kit.rest.pulls.listReviewComments, { owner, repo, pull_number: pull, per_page: 100 });
+      return entries.map((c) => ({
+        id: c.id, path: c.path, line: c.line ?? null, startLine: c.start_line ?? null, body: c.body,
+        byBot: c.user?.type === 'Bot',
+      }));
+    },
+    async createReviewComment({ owner, repo, pull, headSha }, s) {
+      const kit = await client();
+      await kit.rest.pulls.createReviewComment({
+        owner, repo, pull_number: pull, commit_id: headSha, path: s.path, body: s.body, line: s.line, side: 'RIGHT',
+        ...(s.startLine < s.line ? { start_line: s.startLine, start_side: 'RIGHT' as const } : {}),
+        request: { retries: 0 },
+      });
+    },
+    async updateReviewComment({ owner, repo }, id, body) {
+      const kit = await client();
+      await kit.rest.pulls.updateReviewComment({ owner, repo, comment_id: id, body });
+    },
+    async deleteReviewComment({ owner, repo }, id) {
+      const kit = await client();
+      await kit.rest.pulls.deleteReviewComment({ owner, repo, comment_id: id });
+    },
+    async listPatches({ owner, repo, pull }) {
+      const kit = await client();
+      const entries = await kit.paginate(kit.rest.pulls.listFiles, { owner, repo, pull_number: pull, per_page: 100 });
+      return new Map(entries.filter((e) => typeof e.patch === 'string').map((e) => [e.filename, e.patch as string]));
+    },
+  };
+}
+
+/** Whether an error from the API is a refusal to write (a read-only token, as forks get). */
+export function isWriteRefused(error: unknown): boolean {
+  const status = (error as { status?: unknown } | null)?.status;
+  return status === 403 || status === 404 && /not accessible/i.test(String((error as Error).message));
+}
+
+/** Said when suggestions are skipped because the token may not write them. */
+export const SUGGESTIONS_SKIPPED = 'Review suggestions were skipped: the token cannot write review comments on this pull request (a read-only token, as pull requests from forks get). The fixes are in the report comment and the job summary.';
+
+/**
+ * Plans and syncs the suggestions of one report: the head text of each file with a blocking
+ * finding, the diff's lines, then `syncSuggestions`. Returns a notice when the run skipped them
+ * (a fork, a read-only token); throws for other failures, which the caller reports as a warning.
+ */
+export async function publishSuggestions(
+  api: ReviewApi,
+  target: ReviewTarget & { isFork: boolean },
+  report: import('../core/compare/decide.js').GateReport,
+  readHead: (path: string) => Promise<Uint8Array | null>,
+): Promise<{ outcome: SuggestionOutcome | null; notice: string | null }> {
+  if (target.isFork) return { outcome: null, notice: SUGGESTIONS_SKIPPED };
+  const { planSuggestions } = await import('../core/render/suggestions.js');
+  const blocking = report.files.filter((f) => f.findings.some((x) => x.counts === 'block' && x.remedy));
+  const texts = new Map<string, string>();
+  for (const file of blocking) {
+    const bytes = await readHead(file.path).catch(() => null);
+    if (bytes) texts.set(file.path, new TextDecoder('utf-8', { fatal: false }).decode(bytes).replace(/^\uFEFF/, ''));
+  }
+  try {
+    const patches = blocking.length > 0 ? await api.listPatches(target) : new Map<string, string>();
+    const lines = new Map([...patches].map(([path, patch]) => [path, diffRightLines(patch)]));
+    return { outcome: await syncSuggestions(api, target, planSuggestions(report, texts, lines)), notice: null };
+  } catch (error) {
+    if (isWriteRefused(error)) return { outcome: null, notice: SUGGESTIONS_SKIPPED };
+    throw error;
+  }
+}
