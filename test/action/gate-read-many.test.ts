@@ -62,13 +62,11 @@ describe('runGate(source, request) with a source that offers readMany', () => {
     expect(reads).toBe(1);
   });
 
-  it('turns a readMany that throws into a failure of every file, as failing reads are', async () => {
+  it('fails closed when a readMany throws: a base version that cannot be read stops the gate, naming the file and why', async () => {
     const git = createGitReader(repo.dir);
-    const report = await judge({
+    await expect(judge({
       read: (ref, path) => git.show(ref, path),
       readMany: async () => { throw new Error('the batch broke'); },
-    });
-    const failures = report.files.filter((file) => JSON.stringify(file).includes('the batch broke'));
-    expect(failures.length).toBe(report.files.length);
+    })).rejects.toThrow(/could not be read at base [0-9a-f]{40}: the batch broke/);
   });
 });

@@ -99,7 +99,7 @@ describe('readGateJson(renderGateJson(report), file)', () => {
   });
 
   it('refuses a report whose counts do not follow from its findings, and text past its size bound', () => {
-    const text = renderGateJson({ version: 1, verdict: 'ok', blocking: 2, warnings: 0, files: [], deleted: [], notices: [], base: 'b', head: 'h', policy: { source: 'built-in', path: 'p', changedInHead: false }, waiver: { label: null, applied: false, waivedBlocks: 0 } });
+    const text = renderGateJson({ version: 1, verdict: 'ok', blocking: 2, warnings: 0, files: [], deleted: [], notices: [], base: 'b'.repeat(40), head: 'e'.repeat(40), policy: { source: 'built-in', path: 'p', changedInHead: false }, waiver: { label: null, applied: false, waivedBlocks: 0 } });
     expect(() => readGateJson(text, 'r.json')).toThrow('r.json: /blocking is 2 but the findings make it 0; the report was altered');
     expect(() => readGateJson(' '.repeat(64 * 1024 * 1024 + 1), 'r.json')).toThrow(/characters long; a report is read up to 67108864/);
   });
