@@ -24,7 +24,8 @@ const MODELS = ['models/**', '.github/context-reach.yml'];
 
 /** The README's fenced yaml blocks whose first line names `path`. */
 function readmeBlocks(path: string): string[] {
-  return [...read('README.md').matchAll(/```yaml\n([\s\S]*?)```/g)].map((m) => m[1]!).filter((block) => block.startsWith(`# ${path}\n`));
+  return [...read('README.md').matchAll(/```yaml\n([\s\S]*?)```/g)].map((m) => m[1]!)
+    .filter((block) => block.startsWith(`# ${path}\n`)).map((block) => block.slice(`# ${path}\n`.length));
 }
 
 /** The starter policy with its commented `limits:` block (from `# limits:` to the blank line) uncommented. */

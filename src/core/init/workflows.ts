@@ -16,13 +16,12 @@ function trigger(paths: readonly string[] | null): string[] {
 /**
  * The workflow of the README's "Usage in a workflow": the gate on every pull request that
  * touches `paths`, commenting itself, with the HTML report uploaded. A test keeps the README's
- * snippet equal to this text for `models/**`.
+ * snippet (under a `# <path>` line) equal to this text for `models/**`.
  */
 export function simpleWorkflow(paths: readonly string[] | null): WorkflowFile {
   return {
     path: '.github/workflows/context-reach.yml',
     text: `${[
-      '# .github/workflows/context-reach.yml',
       'name: context-reach',
       ...trigger(paths),
       'permissions:',
@@ -55,7 +54,6 @@ export function simpleWorkflow(paths: readonly string[] | null): WorkflowFile {
  */
 export function forkWorkflows(paths: readonly string[] | null): WorkflowFile[] {
   const gate = [
-    '# .github/workflows/context-reach.yml',
     '# The gate on every pull request, forks included: it judges with the read-only token GitHub gives',
     '# a `pull_request` run and uploads its JSON report; context-reach-publish.yml posts the comment.',
     '# Nothing from the pull request is executed: the configs are read as data.',
@@ -83,7 +81,6 @@ export function forkWorkflows(paths: readonly string[] | null): WorkflowFile[] {
     '          path: context-reach/report.json',
   ];
   const publish = [
-    '# .github/workflows/context-reach-publish.yml',
     '# Posts the report of context-reach.yml as the one pull-request comment, forks included. It runs',
     '# in the base repository with a token that may comment, so it checks out nothing and runs nothing',
     '# from the pull request: the report is untrusted data, checked and escaped again by the action,',
