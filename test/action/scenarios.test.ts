@@ -208,7 +208,11 @@ describe('gate scenarios', () => {
     expect(body).toMatch(/Per device \(8 devices: tensor-parallel 8 × pipeline-parallel 1\)/);
     expect(body).toContain('reserve kept for activations, workspace and fragmentation');
     // The remedy search finds the next tensor degree that shards 64 heads and 64 kv heads and fits: 16.
-    expect(body).toContain('<code>serving.tensorParallel</code> 8 → **16**');
-    expect(body).toContain('costs 16 devices per replica (tensor-parallel 16 × pipeline-parallel 1), was 8');
+    // The comment lists two other fixes at most; the JSON report carries every one.
+    const report = JSON.parse(Object.values(result.written)[0]!);
+    const finding = report.files[0].findings.find((f: { rule: string }) => f.rule === 'memory-over-budget');
+    const tensor = [finding.remedy, ...(finding.remedyAlternatives ?? [])].find((r: { change: Record<string, unknown> }) => 'serving.tensorParallel' in r.change);
+    expect(tensor.change['serving.tensorParallel']).toBe(16);
+    expect(tensor.cost).toBe('16 devices per replica (tensor-parallel 16 × pipeline-parallel 1), was 8');
   });
 });

@@ -41,7 +41,7 @@ describe('inspect --tensor-parallel and --pipeline-parallel', () => {
   it('blocks the same config on one 80 GiB device, with a tensor degree as a remedy', async () => {
     const { out } = await inspect(['--device-gib', '80']);
     expect(out).toContain('block memory-over-budget');
-    expect(out).toMatch(/serving\.tensorParallel not set → 2 ⇒/);
+    expect(out).toMatch(/fix: the policy serving\.tensor-parallel not set → 2 ⇒/);
   });
 
   it('blocks --tensor-parallel 3 and names the degrees that shard 64 heads and 8 key/value heads', async () => {
@@ -49,7 +49,7 @@ describe('inspect --tensor-parallel and --pipeline-parallel', () => {
     expect(code).toBe(0);
     expect(out).toContain('block layout-unshardable');
     expect(out).toContain('The tensor-parallel degree 3 (command line) cannot shard the attention: 3 does not divide the 64 attention heads; use a tensor-parallel degree of 1, 2, 4, 8, 16, 32 or 64.');
-    expect(out).toMatch(/remedy: serving\.tensorParallel 3 → 4 ⇒/);
+    expect(out).toMatch(/fix: command line serving\.tensor-parallel 3 → 4 ⇒/);
   });
 
   it('blocks more pipeline stages than layers', async () => {

@@ -72,7 +72,8 @@ describe('rate limits and resets', () => {
   });
 
   it('a connection reset while reading files (no history: the API path) is retried', async () => {
-    const result = await scenario({ noHistory: true, prepare: (f) => { f.fail('repos/get-content', connectionReset()); f.fail('pulls/list-files', connectionReset()); } });
+    // Review suggestions list the diff on their own to place a suggestion on a changed line: off here, where the gate's reads are counted.
+    const result = await scenario({ noHistory: true, inputs: { suggestions: 'off' }, prepare: (f) => { f.fail('repos/get-content', connectionReset()); f.fail('pulls/list-files', connectionReset()); } });
     expect(result.error).toBeNull();
     expect(result.out.outputs.verdict).toBe('block');
     expect(result.fake.calls('pulls/list-files').map((c) => c.status)).toEqual(['reset', 200]);
@@ -193,7 +194,8 @@ describe('pull requests with more files than the API lists (over 3,000)', () => 
   }
 
   it('with the history checked out, reads the change from git: every file judged, no file list asked for', async () => {
-    const result = await scenario(manyFiles());
+    // Review suggestions list the diff on their own to place a suggestion on a changed line: off here, where the gate's reads are counted.
+    const result = await scenario({ ...manyFiles(), inputs: { suggestions: 'off' } });
     expect(result.error).toBeNull();
     const report = JSON.parse(Object.values(result.written)[0]!);
     expect(report.files.map((f: { path: string }) => f.path).sort()).toEqual(['m0010/config.json', 'm3200/config.json']);

@@ -77,7 +77,8 @@ describe('runs at the same time converge on one comment (point 7)', () => {
     const result = await scenario({ fake });
     expect(result.error).toBeNull();
     expect(marked(fake).map((c) => c.id)).toEqual([10]);
-    expect(marked(fake)[0]!.body).toContain('🔴 **Blocked**');
+    expect(marked(fake)[0]!.body).toContain('**Blocked**');
+    expect(marked(fake)[0]!.body).not.toContain('**Passes**');
     expect(fake.calls('issues/delete-comment')).toHaveLength(1);
   });
 

@@ -88,7 +88,8 @@ describe('more changed files than the API lists (point 3)', () => {
 
 describe('reading contents in few requests (the read cost)', () => {
   it('a checkout without the commits but with their remote: one shallow fetch, then no content or file-list request at all', async () => {
-    const result = await scenario({ emptyClone: true });
+    // Review suggestions list the diff on their own to place a suggestion on a changed line: off here, where the gate's reads are counted.
+    const result = await scenario({ emptyClone: true, inputs: { suggestions: 'off' } });
     expect(result.error).toBeNull();
     expect(result.out.outputs.verdict).toBe('block');
     expect(result.fake.calls('repos/get-content')).toHaveLength(0);

@@ -44,8 +44,8 @@ describe('renderComment(report)', () => {
     expect(rows).toContainEqual(['`trainedSpan`', '4,096 (4k)', '4,096 (4k) *assumed*']);
   });
 
-  it('draws memory against span as a Mermaid chart and keeps the file sections and other metrics collapsed', () => {
-    expect(body).toContain('```mermaid\nxychart-beta');
+  it('draws no memory chart where memory is not at issue, and keeps the file sections and other metrics collapsed', () => {
+    expect(body).not.toContain('```mermaid');
     expect(body).toContain('<details><summary>Other metrics</summary>');
     expect(body).toContain('<details><summary>■ <code>models/a/config.json</code>: 1 blocking</summary>');
   });

@@ -21,6 +21,12 @@ function sentences(markdown: string): string[] {
 }
 
 describe('the demo comment', () => {
+  it('draws the memory chart for the file whose memory is at issue only (quill-mini blocks on memory)', () => {
+    expect(body.match(/```mermaid\nxychart-beta/g)).toHaveLength(1);
+    const chart = body.indexOf('```mermaid');
+    expect(body.lastIndexOf('quill-mini', chart)).toBeGreaterThan(body.lastIndexOf('quill-8b/config.json</code>:', chart));
+  });
+
   it('is at most 10,000 characters', () => {
     expect(body.length).toBeLessThanOrEqual(10_000);
   });

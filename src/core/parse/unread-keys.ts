@@ -27,6 +27,11 @@ const NO_METRIC_KEYS = new Set([
   'encoder_no_repeat_ngram_size', 'num_return_sequences', 'bad_words_ids', 'suppress_tokens', 'begin_suppress_tokens',
   'forced_decoder_ids', 'remove_invalid_values', 'exponential_decay_length_penalty', 'return_dict_in_generate',
   'output_scores', 'output_past', 'tf_legacy_loss', 'sep_token', 'gradient_checkpointing',
+  // quantization_config switches that change how the weights were found or run, not what is stored
+  // (GPTQ keeps zero points whether or not `sym` is set; the stored width is `bits`).
+  'desc_act', 'sym', 'true_sequential', 'damp_percent', 'damp_auto_increment', 'static_groups', 'checkpoint_format',
+  'model_name_or_path', 'model_file_base_name', 'quantizer', 'version', 'backend', 'use_exllama', 'exllama_config',
+  'use_cuda_fp16', 'activation_scheme', 'bnb_4bit_compute_dtype', 'llm_int8_threshold', 'llm_int8_has_fp16_weight',
   // Runtime and implementation switches: the same weights and cache whatever they say.
   'pretraining_tp', 'slow_but_exact', 'masked_softmax_fusion', 'bias_dropout_fusion', '_attn_implementation',
   'attn_implementation', 'use_flash_attn', 'use_flash_attention_2', '_flash_attn_2_enabled', 'cache_implementation',

@@ -410,7 +410,7 @@ function tensorKind(ctx: RemedyContext, target: Target, resolves: Resolves): Kin
   const candidates = higher.filter((t) => resolves(applyChange(spec, { 'serving.tensorParallel': t })))
     .map((t): Change => ({ 'serving.tensorParallel': t }));
   if (candidates.length === 0) return none(`even a tensor-parallel degree of ${higher[higher.length - 1]} does not clear it`);
-  return proveFirst(ctx, target, candidates, ['kvHeadsPerDevice', ...DEVICE_SHOWN],
+  return proveFirst(ctx, target, candidates, [...DEVICE_SHOWN, 'kvHeadsPerDevice'],
     `a tensor-parallel degree of ${candidates[0]!['serving.tensorParallel']}`, deviceCost(spec));
 }
 
@@ -465,7 +465,7 @@ function layoutKind(ctx: RemedyContext, target: Target, resolves: Resolves): Kin
     return change;
   }).filter((change) => Object.keys(change).length > 0 && resolves(applyChange(spec, change)));
   if (candidates.length === 0) return none('no tensor-parallel degree shards these heads');
-  return proveFirst(ctx, target, candidates, ['devices', 'kvHeadsPerDevice', 'memoryBytesPerDevice', 'fitSequences'],
+  return proveFirst(ctx, target, candidates, ['devices', 'memoryBytesPerDevice', 'fitSequences', 'kvHeadsPerDevice'],
     'a degree that shards the heads', deviceCost(spec));
 }
 

@@ -70,7 +70,20 @@ function usedFormat(file: FileDecision): string {
 /** Rows of the change table: number-format rows only for the format in use (or under a limit); the rest go to the details. */
 function shownDeltas(file: FileDecision): MetricDelta[] {
   const format = usedFormat(file);
-  return file.deltas.filter((d) => d.limit !== null || !d.metric.startsWith('precision.') || d.metric.startsWith(`precision.${format}.`));
+  const one = oneDevice(file);
+  return file.deltas.filter((d) => d.limit !== null || ((!d.metric.startsWith('precision.') || d.metric.startsWith(`precision.${format}.`))
+    && !(one && PER_DEVICE.has(d.metric))));
+}
+
+/** Fixes besides the first listed per file in the comment. */
+const MAX_ALTERNATIVES = 2;
+
+/** Per-device metrics: on one device each equals its single-device figure, so they are not shown twice. */
+const PER_DEVICE = new Set<string>(['devices', 'kvHeadsPerDevice', 'weightBytesPerDevice', 'cachePerTokenBytesPerDevice', 'memoryBytesPerDevice']);
+
+/** Whether base and head each run on one device (a missing version counts as one). */
+function oneDevice(file: FileDecision): boolean {
+  return (file.base?.metrics.devices ?? 1) === 1 && (file.head?.metrics.devices ?? 1) === 1;
 }
 
 /** A value cell, with the assumption mark when the value rests on one and the memory mark beside memory figures. */
@@ -121,12 +134,18 @@ function otherMetrics(file: FileDecision): string {
 /** Every metric not in the change table, base and head side by side, collapsed. */
 function buildOtherMetrics(file: FileDecision): string {
   const shown = new Set(shownDeltas(file).map((d) => d.metric));
-  const rows = METRIC_PATHS.filter((metric) => !shown.has(metric)).map((metric) => {
+  const one = oneDevice(file);
+  const rows = METRIC_PATHS.filter((metric) => !shown.has(metric) && !(one && PER_DEVICE.has(metric))).map((metric) => {
     const b = file.base ? metricOf(file.base.metrics, metric) : null;
     const h = file.head ? metricOf(file.head.metrics, metric) : null;
     return { metric, b, h };
   }).filter((r) => r.b !== null || r.h !== null)
-    .map((r) => [codeId(r.metric), file.base ? valueCell(file, r.metric, r.b, 'base') : '—', valueCell(file, r.metric, r.h, 'head')]);
+    .map((r) => {
+      const head = valueCell(file, r.metric, r.h, 'head');
+      const base = file.base ? valueCell(file, r.metric, r.b, 'base') : '—';
+      // An unchanged value is written once: `=` under head means "as base".
+      return [codeId(r.metric), base, file.base && base === head ? '=' : head];
+    });
   if (rows.length === 0) return '';
   return `<details><summary>Other metrics</summary>\n\n${markdownTable([['metric', 'base', 'head'], ...rows], { ...TABLE, align: ['l', 'r', 'r'] })}\n\n</details>`;
 }
@@ -187,7 +206,9 @@ function alternativeLine(file: FileDecision, remedy: Remedy): string {
     return `${codeSpan(`${e.key.split('.').pop()}: ${typeof e.value === 'string' ? e.value : String(e.value)}`)}${at}`;
   }).join(', ')).join(', ');
   const cost = remedy.cost ? `; costs ${escapeMarkdown(remedy.cost)}` : '';
-  return `${keys} ⇒ ${metricsShort(remedy, 3)}${cost}; still needs ${escapeMarkdown(needsText(remedyNeeds(remedy.change, spec)))}`;
+  const needs = remedyNeeds(remedy.change, spec);
+  // A serving setting needs nothing else: said once, under the first fix, not again for each alternative.
+  return `${keys} ⇒ ${metricsShort(remedy, 3)}${cost}${needs.length > 0 ? `; still needs ${escapeMarkdown(needsText(needs))}` : ''}`;
 }
 
 // ---- sections -------------------------------------------------------------------------------
@@ -250,8 +271,9 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
   if (file.assumed) lines.push(`*Assumed:* ${escapeMarkdown(file.assumed.reason)} Values marked *assumed* rest on it.`, '');
   if (file.head) {
     lines.push(deltaTable(file), '');
-    const fit = [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics)].filter((t): t is string => t !== null);
-    if (fit.length > 0) lines.push(`Head: ${fit.map((t) => escapeMarkdown(t)).join('; ')}.`, '');
+    // The reserve is said once, in the memory footnote (†) the fit points to.
+    const fit = [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics, false)].filter((t): t is string => t !== null);
+    if (fit.length > 0) lines.push(`Head: ${fit.map((t) => escapeMarkdown(t)).join('; ')} †.`, '');
   }
   // Blocking findings are at the top with their fixes; the others are listed here once.
   const others = file.findings.filter((f) => f.counts !== 'block');
@@ -274,10 +296,15 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
   }
   if (alternatives.size > 0) {
     lines.push('Other fixes that pass these rules:');
-    for (const { rules, remedy } of alternatives.values()) lines.push(`- for ${rules.join(', ')}: ${alternativeLine(file, remedy)}`);
+    // Two at most here: the HTML and JSON reports list every one.
+    const listed = [...alternatives.values()];
+    for (const { rules, remedy } of listed.slice(0, MAX_ALTERNATIVES)) lines.push(`- for ${rules.join(', ')}: ${alternativeLine(file, remedy)}`);
+    if (listed.length > MAX_ALTERNATIVES) lines.push(`- ${listed.length - MAX_ALTERNATIVES} more in the HTML and JSON reports.`);
     lines.push('');
   }
-  if (parts.chart && file.head) {
+  // The chart where memory is at issue (a memory finding or a memory limit crossed); the HTML report draws every file's.
+  const memoryAtIssue = file.findings.some((f) => f.rule === 'memory-over-budget' || (f.metric !== undefined && f.metric !== null && MEMORY_METRICS.has(f.metric)));
+  if (parts.chart && file.head && memoryAtIssue) {
     const chart = memoryChart(file);
     if (chart) lines.push(chart, '');
   }

@@ -24,12 +24,13 @@ export function perDeviceText(spec: ModelSpec, metrics: Metrics): string | null 
  * `358 sequences fit per replica in 72 GiB usable of 80 GiB per device (after the 10 % reserve
  * kept for activations, workspace and fragmentation)`; null without a device budget.
  */
-export function fitText(spec: ModelSpec, metrics: Metrics): string | null {
+export function fitText(spec: ModelSpec, metrics: Metrics, withReserve = true): string | null {
   const usable = usableDeviceBytes(spec);
   if (usable === null || metrics.fitSequences === null) return null;
   const devices = metrics.devices ?? 1;
   const n = metrics.fitSequences;
   const fit = n > 0 ? `${formatInteger(n)} sequence${n === 1 ? '' : 's'} of ${formatInteger(metrics.evaluationSpan)} tokens fit${devices > 1 ? ' per replica' : ''}`
     : `no sequence of ${formatInteger(metrics.evaluationSpan)} tokens fits${devices > 1 ? ' a replica' : ''}`;
-  return `${fit} in ${formatBytes(usable)} usable of ${formatNumber(spec.serving.deviceGiB ?? null)} GiB${devices > 1 ? ' per device' : ''} (${reserveWords(spec)})`;
+  const reserve = withReserve ? ` (${reserveWords(spec)})` : '';
+  return `${fit} in ${formatBytes(usable)} usable of ${formatNumber(spec.serving.deviceGiB ?? null)} GiB${devices > 1 ? ' per device' : ''}${reserve}`;
 }

@@ -31,7 +31,7 @@ export function limitStateMark(delta: Pick<MetricDelta, 'state' | 'limit'>): str
 }
 
 /** Said beside every memory figure: what it counts. */
-export const MEMORY_CAUTION = 'weights and key/value cache only, plus the reserve; activations and runtime buffers are not counted';
+export const MEMORY_CAUTION = 'weights and key/value cache only; the usable memory leaves out the reserve (10 % unless the policy says otherwise) kept for activations, workspace and fragmentation';
 
 /** Memory figures the caution goes beside. */
 export const MEMORY_METRICS: ReadonlySet<string> = new Set(['memoryBytes', 'fitSequences', 'cacheBytesAtSpan']);

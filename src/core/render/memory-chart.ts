@@ -1,5 +1,5 @@
 import type { FileDecision } from '../compare/decide.js';
-import { memoryAtSpan, reserveWords, usableDeviceBytes } from '../metrics/memory-curve.js';
+import { memoryAtSpan, usableDeviceBytes } from '../metrics/memory-curve.js';
 import { formatInteger, formatNumber } from '../units.js';
 import { sameCurveWords } from './html/memory-span-chart.js';
 
@@ -50,7 +50,7 @@ export function memoryChart(file: FileDecision): string | null {
   const several = (head.metrics.devices ?? 1) > 1 || (base !== null && (base.metrics.devices ?? 1) > 1);
   const each = several ? ' per device' : '';
   const budget = usableDeviceBytes(head.spec);
-  if (budget !== null) series.push({ name: `usable memory${each} (${reserveWords(head.spec)})`, values: spans.map(() => budget / GIB) });
+  if (budget !== null) series.push({ name: `usable memory${each}`, values: spans.map(() => budget / GIB) });
   const top = Math.max(...series.flatMap((s) => s.values));
   const round = (v: number) => formatNumber(v, 4).replace(/,/g, '');
   const lines = [
