@@ -43,7 +43,7 @@ describe('renderHtmlReport(report)', () => {
 
   it('marks the assumed trained span, and puts the memory caution beside the memory figures', () => {
     has(html, '<p class="caution"><b>Assumed: </b>The position code did not change');
-    has(html, `† Memory figures: weights and key/value cache only, plus the reserve`);
+    has(html, `† Memory figures: weights and key/value cache only; the usable memory leaves out the reserve`);
     hasNot(html, /text-transform:\s*uppercase/);
   });
 

@@ -54,7 +54,8 @@ describe('renderComment(report) with remedies', () => {
   });
 
   it('lists each other fix once, naming every finding it fixes, and the fixes together', () => {
-    expect(comment).toContain('- for `span-past-reach`, `memory-over-budget`: <code>span: 111763</code> (line 28) ⇒ evaluationSpan 111,763, headroom 19,309, memoryBytes 14.8 GiB; still needs nothing else \\(a serving setting\\)');
+    // A serving setting needs nothing else: said under the first fix, not again for each other fix.
+    expect(comment).toContain('- for `span-past-reach`, `memory-over-budget`: <code>span: 111763</code> (line 28) ⇒ evaluationSpan 111,763, headroom 19,309, memoryBytes 14.8 GiB\n');
     expect(comment).toContain('All first fixes of <code>models/quill\\-mini/model.reach.yaml</code> applied together pass these rules: nothing blocks.');
   });
 
