@@ -45,7 +45,16 @@ interface Shape {
 function shapeOf(next: () => number): Shape {
   const pick = <T>(xs: readonly T[]): T => xs[Math.floor(next() * xs.length)]!;
   const roll = next();
-  const code: Code = roll < 0.6 ? 'rotary' : roll < 0.7 ? 'partial-rotary' : roll < 0.8 ? 'alibi' : roll < 0.9 ? 'learned' : 'sinusoidal';
+  const code: Code =
+    roll < 0.6
+      ? 'rotary'
+      : roll < 0.7
+        ? 'partial-rotary'
+        : roll < 0.8
+          ? 'alibi'
+          : roll < 0.9
+            ? 'learned'
+            : 'sinusoidal';
   const heads = pick([16, 32]);
   const headDim = pick([64, 128]);
   return {
@@ -64,11 +73,22 @@ function shapeOf(next: () => number): Shape {
 function scalingJson(shape: Shape): Record<string, unknown> | null {
   const original = Math.max(1024, shape.span / 4);
   switch (shape.scaling) {
-    case 'none': return null;
-    case 'linear': return { rope_type: 'linear', factor: 4 };
-    case 'dynamic': return { rope_type: 'dynamic', factor: 4, original_max_position_embeddings: original };
-    case 'yarn': return { rope_type: 'yarn', factor: 4, original_max_position_embeddings: original };
-    case 'banded': return { rope_type: 'llama3', factor: 4, low_freq_factor: 1, high_freq_factor: 4, original_max_position_embeddings: original };
+    case 'none':
+      return null;
+    case 'linear':
+      return { rope_type: 'linear', factor: 4 };
+    case 'dynamic':
+      return { rope_type: 'dynamic', factor: 4, original_max_position_embeddings: original };
+    case 'yarn':
+      return { rope_type: 'yarn', factor: 4, original_max_position_embeddings: original };
+    case 'banded':
+      return {
+        rope_type: 'llama3',
+        factor: 4,
+        low_freq_factor: 1,
+        high_freq_factor: 4,
+        original_max_position_embeddings: original,
+      };
   }
 }
 
@@ -103,20 +123,47 @@ function checkpointText(shape: Shape, name: string): string {
 
 function ownText(shape: Shape, name: string): string {
   const original = Math.max(1024, shape.span / 4);
-  const position = shape.code === 'rotary' || shape.code === 'partial-rotary'
-    ? [
-      '  position:', '    code: rotary', `    base: ${shape.base}`, `    fraction: ${shape.code === 'partial-rotary' ? 0.5 : 1}`,
-      ...(shape.scaling === 'none' ? [] : [
-        '    scaling:', `      kind: ${shape.scaling}`, '      factor: 4', `      original-span: ${original}`,
-        ...(shape.scaling === 'banded' ? ['      low: 1', '      high: 4'] : []),
-      ]),
-    ]
-    : [`  position: {code: ${shape.code}}`];
+  const position =
+    shape.code === 'rotary' || shape.code === 'partial-rotary'
+      ? [
+          '  position:',
+          '    code: rotary',
+          `    base: ${shape.base}`,
+          `    fraction: ${shape.code === 'partial-rotary' ? 0.5 : 1}`,
+          ...(shape.scaling === 'none'
+            ? []
+            : [
+                '    scaling:',
+                `      kind: ${shape.scaling}`,
+                '      factor: 4',
+                `      original-span: ${original}`,
+                ...(shape.scaling === 'banded' ? ['      low: 1', '      high: 4'] : []),
+              ]),
+        ]
+      : [`  position: {code: ${shape.code}}`];
   return [
-    'format: context-reach-model/1', 'model:', `  name: ${name}`, `  layers: ${shape.layers}`, `  hidden: ${shape.hidden}`,
-    `  heads: ${shape.heads}`, `  kv-heads: ${shape.kvHeads}`, `  head-dim: ${shape.hidden / shape.heads}`,
-    '  feed-forward:', `    size: ${shape.hidden * 4}`, '    gated: true', '  vocab: 32000', '  tied-output: false',
-    ...position, `  declared-span: ${shape.span}`, '  dtypes:', '    weights: bf16', '    cache: bf16', 'serving:', '  sequences: 4', '  device-memory-gib: 80', '',
+    'format: context-reach-model/1',
+    'model:',
+    `  name: ${name}`,
+    `  layers: ${shape.layers}`,
+    `  hidden: ${shape.hidden}`,
+    `  heads: ${shape.heads}`,
+    `  kv-heads: ${shape.kvHeads}`,
+    `  head-dim: ${shape.hidden / shape.heads}`,
+    '  feed-forward:',
+    `    size: ${shape.hidden * 4}`,
+    '    gated: true',
+    '  vocab: 32000',
+    '  tied-output: false',
+    ...position,
+    `  declared-span: ${shape.span}`,
+    '  dtypes:',
+    '    weights: bf16',
+    '    cache: bf16',
+    'serving:',
+    '  sequences: 4',
+    '  device-memory-gib: 80',
+    '',
   ].join('\n');
 }
 
@@ -138,15 +185,22 @@ export function generatedConfigs(count: number, seed = 4): ConfigFile[] {
  * each is judged at both commits; one in ten doubles its declared span (capped at
  * `MAX_CONFIG_SPAN`; at the cap the rotary base doubles instead), the rest gain a layer.
  */
-export function pullRequestConfigs(count: number, seed = 4): { base: ConfigFile[]; head: ConfigFile[] } {
+export function pullRequestConfigs(
+  count: number,
+  seed = 4,
+): { base: ConfigFile[]; head: ConfigFile[] } {
   const next = seeded(seed);
   const base: ConfigFile[] = [];
   const head: ConfigFile[] = [];
   for (let i = 0; i < count; i++) {
     const shape = shapeOf(next);
     base.push(fileOf(shape, i));
-    const grown = i % 10 !== 0 ? { ...shape, layers: shape.layers + 1 }
-      : shape.span < MAX_CONFIG_SPAN ? { ...shape, span: shape.span * 2 } : { ...shape, base: shape.base * 2 };
+    const grown =
+      i % 10 !== 0
+        ? { ...shape, layers: shape.layers + 1 }
+        : shape.span < MAX_CONFIG_SPAN
+          ? { ...shape, span: shape.span * 2 }
+          : { ...shape, base: shape.base * 2 };
     head.push(fileOf(grown, i));
   }
   return { base, head };

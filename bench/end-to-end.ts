@@ -53,9 +53,14 @@ export function inspectThroughCli(files: ConfigFile[]): ProcessTime & { json: st
       writeFileSync(path.join(dir, f.path), f.text);
     }
     const start = performance.now();
-    const r = spawnSync(process.execPath, [...CPU_REPORT, CLI_BUNDLE, 'inspect', '--json', ...files.map((f) => f.path)], { cwd: dir, encoding: 'utf8', maxBuffer: 1 << 28 });
+    const r = spawnSync(
+      process.execPath,
+      [...CPU_REPORT, CLI_BUNDLE, 'inspect', '--json', ...files.map((f) => f.path)],
+      { cwd: dir, encoding: 'utf8', maxBuffer: 1 << 28 },
+    );
     const ms = performance.now() - start;
-    if (r.status !== 0) throw new Error(`dist/cli.js inspect exited with ${r.status}: ${r.stderr.slice(0, 2000)}`);
+    if (r.status !== 0)
+      throw new Error(`dist/cli.js inspect exited with ${r.status}: ${r.stderr.slice(0, 2000)}`);
     return { ms, cpuMs: reportedCpuMs(r.stderr), json: r.stdout };
   } finally {
     rmSync(dir, { recursive: true, force: true });
@@ -68,7 +73,17 @@ export async function inspectInProcess(files: ConfigFile[]): Promise<{ ms: numbe
   const source: FileSource = { read: async (p) => bytes.get(p)! };
   let json = '';
   let errors = '';
-  const io: Console = { out: (t) => { json += t; }, error: (t) => { errors += t; }, stdout: {}, env: {}, cwd: '.' };
+  const io: Console = {
+    out: (t) => {
+      json += t;
+    },
+    error: (t) => {
+      errors += t;
+    },
+    stdout: {},
+    env: {},
+    cwd: '.',
+  };
   const start = performance.now();
   const code = await runInspect(['--json', ...files.map((f) => f.path)], source, io);
   const ms = performance.now() - start;
@@ -79,7 +94,8 @@ export async function inspectInProcess(files: ConfigFile[]): Promise<{ ms: numbe
 const OWNER = 'example-org';
 const REPO = 'model-zoo';
 /** A policy with a limit some generated configs cross, so findings, annotations, remedies and a long comment are all exercised. */
-const POLICY = 'limits:\n  fitSequences: { min: 1 }\nserving:\n  device-memory-gib: 80\n  sequences: 4\n';
+const POLICY =
+  'limits:\n  fitSequences: { min: 1 }\nserving:\n  device-memory-gib: 80\n  sequences: 4\n';
 
 /** One W4 run: time, and what it decided (the same on every run, or the bench stops). */
 export interface ActionRun extends ProcessTime {
@@ -92,33 +108,66 @@ export interface ActionRun extends ProcessTime {
 /** The W4 pull request: base and head commits in a temporary repository, and the loopback API. */
 export async function actionScenario(count = CONFIG_COUNT) {
   const { base, head } = pullRequestConfigs(count);
-  const tree = (files: ConfigFile[]): Tree => Object.fromEntries([['.github/context-reach.yml', POLICY], ...files.map((f) => [f.path, f.text])]);
+  const tree = (files: ConfigFile[]): Tree =>
+    Object.fromEntries([
+      ['.github/context-reach.yml', POLICY],
+      ...files.map((f) => [f.path, f.text]),
+    ]);
   const repo = scenarioRepo(tree(base), tree(head));
   const fake = await startFakeGitHub({ owner: OWNER, repo: REPO });
   fake.state.pulls.set(7, {
-    number: 7, baseSha: repo.base, headSha: repo.head, baseRef: 'main', headRef: 'feature', labels: [],
-    headRepo: `${OWNER}/${REPO}`, files: head.map((f) => ({ filename: f.path, status: 'modified' as const })),
+    number: 7,
+    baseSha: repo.base,
+    headSha: repo.head,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: [],
+    headRepo: `${OWNER}/${REPO}`,
+    files: head.map((f) => ({ filename: f.path, status: 'modified' as const })),
   });
   // The stand-in reads GitHub's REST description on its first request; that is the harness's
   // cost, not the action's, so it is paid here, before any run is timed.
-  await fetch(`${fake.url}/repos/${OWNER}/${REPO}/pulls/7`, { headers: { authorization: `token ${fake.state.token}` } }).then((r) => r.arrayBuffer());
+  await fetch(`${fake.url}/repos/${OWNER}/${REPO}/pulls/7`, {
+    headers: { authorization: `token ${fake.state.token}` },
+  }).then((r) => r.arrayBuffer());
   return {
     async run(): Promise<ActionRun> {
       const r = await runBundle({
         eventName: 'pull_request',
-        event: pullRequestEvent({ owner: OWNER, repo: REPO, number: 7, base: repo.base, head: repo.head }),
-        workspace: repo.dir, apiUrl: fake.url, repository: `${OWNER}/${REPO}`, bundle: ACTION_BUNDLE, nodeArgs: CPU_REPORT,
+        event: pullRequestEvent({
+          owner: OWNER,
+          repo: REPO,
+          number: 7,
+          base: repo.base,
+          head: repo.head,
+        }),
+        workspace: repo.dir,
+        apiUrl: fake.url,
+        repository: `${OWNER}/${REPO}`,
+        bundle: ACTION_BUNDLE,
+        nodeArgs: CPU_REPORT,
         inputs: { 'github-token': fake.state.token, 'fail-on': 'block', comment: 'update' },
         timeoutMs: 120_000,
       });
-      if (r.code !== 0 && r.code !== 1) throw new Error(`dist/index.js exited with ${r.code}: ${r.stderr.slice(0, 2000)}`);
+      if (r.code !== 0 && r.code !== 1)
+        throw new Error(`dist/index.js exited with ${r.code}: ${r.stderr.slice(0, 2000)}`);
       const reportPath = r.outputs['report-json'];
-      if (!reportPath || !(reportPath in r.files)) throw new Error(`dist/index.js wrote no JSON report (exit ${r.code}): ${r.stderr.slice(0, 2000)}`);
+      if (!reportPath || !(reportPath in r.files))
+        throw new Error(
+          `dist/index.js wrote no JSON report (exit ${r.code}): ${r.stderr.slice(0, 2000)}`,
+        );
       const report = JSON.parse(r.files[reportPath]!) as { files: unknown[] };
-      if (fake.mismatches.length > 0) throw new Error(`the action made requests GitHub's REST description does not allow: ${JSON.stringify(fake.mismatches.slice(0, 3))}`);
+      if (fake.mismatches.length > 0)
+        throw new Error(
+          `the action made requests GitHub's REST description does not allow: ${JSON.stringify(fake.mismatches.slice(0, 3))}`,
+        );
       return {
-        ms: r.elapsedMs, cpuMs: reportedCpuMs(r.stderr), verdict: r.outputs.verdict ?? '', blocking: Number(r.outputs.blocking),
-        files: report.files.length, commentUrl: r.outputs['comment-url'] ?? '',
+        ms: r.elapsedMs,
+        cpuMs: reportedCpuMs(r.stderr),
+        verdict: r.outputs.verdict ?? '',
+        blocking: Number(r.outputs.blocking),
+        files: report.files.length,
+        commentUrl: r.outputs['comment-url'] ?? '',
       };
     },
     async close() {
@@ -129,10 +178,18 @@ export async function actionScenario(count = CONFIG_COUNT) {
 }
 
 /** Milliseconds from spawning `node args…` to its first byte on standard output; the process is then left to finish. */
-export function firstOutputMs(args: string[], env: Record<string, string> = {}, cwd = process.cwd()): Promise<number> {
+export function firstOutputMs(
+  args: string[],
+  env: Record<string, string> = {},
+  cwd = process.cwd(),
+): Promise<number> {
   return new Promise((resolve, reject) => {
     const start = performance.now();
-    const child = spawn(process.execPath, args, { cwd, env: { PATH: process.env.PATH ?? '', HOME: process.env.HOME ?? tmpdir(), ...env }, stdio: ['ignore', 'pipe', 'ignore'] });
+    const child = spawn(process.execPath, args, {
+      cwd,
+      env: { PATH: process.env.PATH ?? '', HOME: process.env.HOME ?? tmpdir(), ...env },
+      stdio: ['ignore', 'pipe', 'ignore'],
+    });
     let seen = false;
     child.stdout.once('data', () => {
       seen = true;
@@ -155,10 +212,19 @@ export async function actionStartupMs(): Promise<number> {
   try {
     // With a token the first line is `::add-mask::`, printed once the inputs are read; the run
     // then stops (a workflow_dispatch without a base), so nothing after start-up is timed.
-    return await firstOutputMs([ACTION_BUNDLE], {
-      GITHUB_ACTIONS: 'true', GITHUB_EVENT_NAME: 'workflow_dispatch', GITHUB_STEP_SUMMARY: summary, GITHUB_OUTPUT: output,
-      RUNNER_TEMP: temp, 'INPUT_GITHUB-TOKEN': 'bench-token-not-a-secret', GITHUB_REPOSITORY: `${OWNER}/${REPO}`,
-    }, temp);
+    return await firstOutputMs(
+      [ACTION_BUNDLE],
+      {
+        GITHUB_ACTIONS: 'true',
+        GITHUB_EVENT_NAME: 'workflow_dispatch',
+        GITHUB_STEP_SUMMARY: summary,
+        GITHUB_OUTPUT: output,
+        RUNNER_TEMP: temp,
+        'INPUT_GITHUB-TOKEN': 'bench-token-not-a-secret',
+        GITHUB_REPOSITORY: `${OWNER}/${REPO}`,
+      },
+      temp,
+    );
   } finally {
     rmSync(temp, { recursive: true, force: true });
   }

@@ -104,14 +104,32 @@ function shapeOf(next: () => number): Shape {
   const roll = next();
   const folder: Folder = roll < 0.5 ? 'short' : roll < 0.8 ? 'mid' : 'long';
   const codeRoll = next();
-  const code: Code = codeRoll < 0.4 ? 'rotary' : codeRoll < 0.5 ? 'partial' : codeRoll < 0.6 ? 'linear'
-    : codeRoll < 0.75 ? 'yarn' : codeRoll < 0.9 ? 'banded' : codeRoll < 0.95 ? 'alibi' : 'learned';
+  const code: Code =
+    codeRoll < 0.4
+      ? 'rotary'
+      : codeRoll < 0.5
+        ? 'partial'
+        : codeRoll < 0.6
+          ? 'linear'
+          : codeRoll < 0.75
+            ? 'yarn'
+            : codeRoll < 0.9
+              ? 'banded'
+              : codeRoll < 0.95
+                ? 'alibi'
+                : 'learned';
   const family = pick(FAMILIES);
   // Long-span folders use the slow bases real long-context models use; short ones any.
   const base = folder === 'long' ? pick([500_000, 1_000_000]) : pick(BASES);
   return {
-    folder, code, base,
-    layers: family.layers, hidden: family.hidden, heads: family.heads, kvHeads: family.kvHeads, headDim: family.headDim,
+    folder,
+    code,
+    base,
+    layers: family.layers,
+    hidden: family.hidden,
+    heads: family.heads,
+    kvHeads: family.kvHeads,
+    headDim: family.headDim,
     experts: next() < 0.15 && family.hidden <= 3072 ? 8 : 0,
     declared: SERVED[folder] * (next() < 0.3 ? 2 : 1),
     yaml: next() < 0.2,
@@ -130,7 +148,7 @@ function checkpointText(shape: Shape, name: string): string {
     model_type: shape.code === 'alibi' ? 'bloom' : shape.experts > 0 ? 'mixtral' : 'llama',
     _name_or_path: name,
     hidden_size: shape.hidden,
-    intermediate_size: Math.round(shape.hidden * 3.5 / 256) * 256,
+    intermediate_size: Math.round((shape.hidden * 3.5) / 256) * 256,
     num_hidden_layers: shape.layers,
     num_attention_heads: shape.heads,
     num_key_value_heads: shape.kvHeads,
@@ -146,36 +164,93 @@ function checkpointText(shape: Shape, name: string): string {
     config.num_experts_per_tok = 2;
   }
   switch (shape.code) {
-    case 'rotary': config.rope_theta = shape.base; break;
-    case 'partial': config.rope_theta = shape.base; config.partial_rotary_factor = 0.5; break;
-    case 'linear': config.rope_theta = shape.base; config.rope_scaling = { rope_type: 'linear', factor: 4 }; break;
-    case 'yarn': config.rope_theta = shape.base; config.rope_scaling = { rope_type: 'yarn', factor: 4, original_max_position_embeddings: originalSpan(shape) }; break;
+    case 'rotary':
+      config.rope_theta = shape.base;
+      break;
+    case 'partial':
+      config.rope_theta = shape.base;
+      config.partial_rotary_factor = 0.5;
+      break;
+    case 'linear':
+      config.rope_theta = shape.base;
+      config.rope_scaling = { rope_type: 'linear', factor: 4 };
+      break;
+    case 'yarn':
+      config.rope_theta = shape.base;
+      config.rope_scaling = {
+        rope_type: 'yarn',
+        factor: 4,
+        original_max_position_embeddings: originalSpan(shape),
+      };
+      break;
     case 'banded':
       config.rope_theta = shape.base;
-      config.rope_scaling = { rope_type: 'llama3', factor: 4, low_freq_factor: 1, high_freq_factor: 4, original_max_position_embeddings: originalSpan(shape) };
+      config.rope_scaling = {
+        rope_type: 'llama3',
+        factor: 4,
+        low_freq_factor: 1,
+        high_freq_factor: 4,
+        original_max_position_embeddings: originalSpan(shape),
+      };
       break;
-    case 'alibi': config.alibi = true; break;
-    case 'learned': config.position_embedding_type = 'absolute'; break;
+    case 'alibi':
+      config.alibi = true;
+      break;
+    case 'learned':
+      config.position_embedding_type = 'absolute';
+      break;
   }
   return `${JSON.stringify(config, null, 2)}\n`;
 }
 
 function ownText(shape: Shape, name: string): string {
-  const rotary = (fraction: number, scaling: string[]) => ['  position:', '    code: rotary', `    base: ${shape.base}`, `    fraction: ${fraction}`, ...scaling];
-  const scaled = (kind: string, extra: string[] = []) => ['    scaling:', `      kind: ${kind}`, '      factor: 4', `      original-span: ${originalSpan(shape)}`, ...extra];
-  const position = shape.code === 'rotary' ? rotary(1, [])
-    : shape.code === 'partial' ? rotary(0.5, [])
-      : shape.code === 'linear' ? rotary(1, ['    scaling:', '      kind: linear', '      factor: 4'])
-        : shape.code === 'yarn' ? rotary(1, scaled('yarn'))
-          : shape.code === 'banded' ? rotary(1, scaled('banded', ['      low: 1', '      high: 4']))
-            : [`  position: {code: ${shape.code}}`];
+  const rotary = (fraction: number, scaling: string[]) => [
+    '  position:',
+    '    code: rotary',
+    `    base: ${shape.base}`,
+    `    fraction: ${fraction}`,
+    ...scaling,
+  ];
+  const scaled = (kind: string, extra: string[] = []) => [
+    '    scaling:',
+    `      kind: ${kind}`,
+    '      factor: 4',
+    `      original-span: ${originalSpan(shape)}`,
+    ...extra,
+  ];
+  const position =
+    shape.code === 'rotary'
+      ? rotary(1, [])
+      : shape.code === 'partial'
+        ? rotary(0.5, [])
+        : shape.code === 'linear'
+          ? rotary(1, ['    scaling:', '      kind: linear', '      factor: 4'])
+          : shape.code === 'yarn'
+            ? rotary(1, scaled('yarn'))
+            : shape.code === 'banded'
+              ? rotary(1, scaled('banded', ['      low: 1', '      high: 4']))
+              : [`  position: {code: ${shape.code}}`];
   return [
-    'format: context-reach-model/1', 'model:', `  name: ${name}`, `  layers: ${shape.layers}`, `  hidden: ${shape.hidden}`,
-    `  heads: ${shape.heads}`, `  kv-heads: ${shape.kvHeads}`, `  head-dim: ${shape.headDim}`,
-    '  feed-forward:', `    size: ${Math.round(shape.hidden * 3.5 / 256) * 256}`, '    gated: true',
+    'format: context-reach-model/1',
+    'model:',
+    `  name: ${name}`,
+    `  layers: ${shape.layers}`,
+    `  hidden: ${shape.hidden}`,
+    `  heads: ${shape.heads}`,
+    `  kv-heads: ${shape.kvHeads}`,
+    `  head-dim: ${shape.headDim}`,
+    '  feed-forward:',
+    `    size: ${Math.round((shape.hidden * 3.5) / 256) * 256}`,
+    '    gated: true',
     ...(shape.experts > 0 ? ['  experts:', `    total: ${shape.experts}`, '    active: 2'] : []),
-    '  vocab: 128256', '  tied-output: false',
-    ...position, `  declared-span: ${shape.declared}`, '  dtypes:', '    weights: bf16', `    cache: ${shape.cache}`, '',
+    '  vocab: 128256',
+    '  tied-output: false',
+    ...position,
+    `  declared-span: ${shape.declared}`,
+    '  dtypes:',
+    '    weights: bf16',
+    `    cache: ${shape.cache}`,
+    '',
   ].join('\n');
 }
 
@@ -196,15 +271,30 @@ function blockerOf(i: number): Blocker {
 function headShape(shape: Shape, blocker: Blocker): Shape {
   const grown = { ...shape, layers: shape.layers + 1 };
   switch (blocker) {
-    case 'none': return grown;
+    case 'none':
+      return grown;
     // The declared span drops below the policy's served span: the code does not reach it.
-    case 'served-past-reach': return { ...grown, code: shape.code === 'alibi' || shape.code === 'learned' ? 'rotary' : shape.code, declared: SERVED[shape.folder] / 2 };
+    case 'served-past-reach':
+      return {
+        ...grown,
+        code: shape.code === 'alibi' || shape.code === 'learned' ? 'rotary' : shape.code,
+        declared: SERVED[shape.folder] / 2,
+      };
     // The declared span doubles, the code stays.
-    case 'span-grew': return { ...grown, declared: shape.declared * 2 };
+    case 'span-grew':
+      return { ...grown, declared: shape.declared * 2 };
     // Twice the layers, every head its own key/value head, twice the head size: the cache outgrows the device.
-    case 'memory': return { ...grown, layers: shape.layers * 2, kvHeads: shape.heads, headDim: shape.headDim * 2, cache: 'bf16' };
+    case 'memory':
+      return {
+        ...grown,
+        layers: shape.layers * 2,
+        kvHeads: shape.heads,
+        headDim: shape.headDim * 2,
+        cache: 'bf16',
+      };
     // A fast rotary base in a long-span folder: offsets past a few thousand tokens no longer discriminate.
-    case 'base-low': return { ...grown, folder: shape.folder, code: 'rotary', base: 10_000 };
+    case 'base-low':
+      return { ...grown, folder: shape.folder, code: 'rotary', base: 10_000 };
   }
 }
 
@@ -212,7 +302,10 @@ function headShape(shape: Shape, blocker: Blocker): Shape {
  * The base and head trees of the W6 pull request over `count` configs (policy included), and
  * how many head files carry a blocking change.
  */
-export function gateRepository(count: number, seed = 16): { base: RepoFile[]; head: RepoFile[]; blockingChanges: number } {
+export function gateRepository(
+  count: number,
+  seed = 16,
+): { base: RepoFile[]; head: RepoFile[]; blockingChanges: number } {
   const next = seeded(seed);
   const base: RepoFile[] = [{ path: '.github/context-reach.yml', text: GATE_POLICY }];
   const head: RepoFile[] = [{ path: '.github/context-reach.yml', text: GATE_POLICY }];
@@ -242,19 +335,28 @@ export interface GateRepo {
 
 /** Fixed identity and dates, so the commits (and every report naming them) are the same on every run. */
 const FIXED_COMMIT_ENV = {
-  GIT_AUTHOR_NAME: 'context-reach bench', GIT_AUTHOR_EMAIL: 'bench@example.invalid', GIT_AUTHOR_DATE: '2026-01-01T00:00:00Z',
-  GIT_COMMITTER_NAME: 'context-reach bench', GIT_COMMITTER_EMAIL: 'bench@example.invalid', GIT_COMMITTER_DATE: '2026-01-01T00:00:00Z',
+  GIT_AUTHOR_NAME: 'context-reach bench',
+  GIT_AUTHOR_EMAIL: 'bench@example.invalid',
+  GIT_AUTHOR_DATE: '2026-01-01T00:00:00Z',
+  GIT_COMMITTER_NAME: 'context-reach bench',
+  GIT_COMMITTER_EMAIL: 'bench@example.invalid',
+  GIT_COMMITTER_DATE: '2026-01-01T00:00:00Z',
 };
 
 /** Writes the W6 repository of `count` configs to a temporary folder and commits base and head. */
 export function writeGateRepository(count: number, seed = 16): GateRepo {
   const { base, head, blockingChanges } = gateRepository(count, seed);
   const dir = mkdtempSync(path.join(tmpdir(), 'context-reach-w6-'));
-  const git = (...args: string[]) => execFileSync('git', ['-c', 'commit.gpgsign=false', '-c', 'core.autocrlf=false', ...args], {
-    cwd: dir, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, ...FIXED_COMMIT_ENV },
-  }).trim();
+  const git = (...args: string[]) =>
+    execFileSync('git', ['-c', 'commit.gpgsign=false', '-c', 'core.autocrlf=false', ...args], {
+      cwd: dir,
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'pipe'],
+      env: { ...process.env, ...FIXED_COMMIT_ENV },
+    }).trim();
   const commit = (files: RepoFile[], message: string) => {
-    for (const entry of readdirSync(dir)) if (entry !== '.git') rmSync(path.join(dir, entry), { recursive: true, force: true });
+    for (const entry of readdirSync(dir))
+      if (entry !== '.git') rmSync(path.join(dir, entry), { recursive: true, force: true });
     for (const file of files) {
       mkdirSync(path.dirname(path.join(dir, file.path)), { recursive: true });
       writeFileSync(path.join(dir, file.path), file.text);
@@ -267,5 +369,12 @@ export function writeGateRepository(count: number, seed = 16): GateRepo {
   git('symbolic-ref', 'HEAD', 'refs/heads/main');
   const baseSha = commit(base, 'base');
   const headSha = commit(head, 'head');
-  return { dir, base: baseSha, head: headSha, count, blockingChanges, remove: () => rmSync(dir, { recursive: true, force: true }) };
+  return {
+    dir,
+    base: baseSha,
+    head: headSha,
+    count,
+    blockingChanges,
+    remove: () => rmSync(dir, { recursive: true, force: true }),
+  };
 }

@@ -8,7 +8,11 @@ import { execFileSync } from 'node:child_process';
 
 const [base, head] = process.argv.slice(2);
 if (!base || !head) throw new Error('usage: node io-floor.js BASE HEAD');
-const fields = execFileSync('git', ['diff', '--name-status', '-M', '-z', base, head, '--'], { maxBuffer: 1 << 30 }).toString('utf8').split('\u0000');
+const fields = execFileSync('git', ['diff', '--name-status', '-M', '-z', base, head, '--'], {
+  maxBuffer: 1 << 30,
+})
+  .toString('utf8')
+  .split('\u0000');
 const names: string[] = [];
 for (let i = 0; i + 1 < fields.length;) {
   const letter = fields[i]!.charAt(0);
@@ -21,7 +25,10 @@ for (let i = 0; i + 1 < fields.length;) {
     i += 2;
   }
 }
-const out = execFileSync('git', ['cat-file', '--batch'], { input: `${names.join('\n')}\n`, maxBuffer: 1 << 30 });
+const out = execFileSync('git', ['cat-file', '--batch'], {
+  input: `${names.join('\n')}\n`,
+  maxBuffer: 1 << 30,
+});
 let at = 0;
 let blobs = 0;
 const decoder = new TextDecoder();

@@ -13,12 +13,35 @@ export interface Workload {
 
 function rotary64(span: number): ModelSpec {
   return {
-    name: 'bench-rotary-64', layers: 32, hidden: 4096, heads: 32, kvHeads: 8, headDim: 128, ffn: 11008, gated: true,
-    vocab: 32000, tied: false, bias: false, experts: null, encoder: null,
+    name: 'bench-rotary-64',
+    layers: 32,
+    hidden: 4096,
+    heads: 32,
+    kvHeads: 8,
+    headDim: 128,
+    ffn: 11008,
+    gated: true,
+    vocab: 32000,
+    tied: false,
+    bias: false,
+    experts: null,
+    encoder: null,
     position: { kind: 'rotary', base: 10000, fraction: 1, scaling: null },
-    declaredSpan: span, trainedSpan: null, slidingWindow: null, windowLayers: null,
-    dtypes: { weights: null, cache: null, positions: null }, embeddingInitStd: null, embeddingMultiplier: null,
-    serving: { span: null, sequences: null, deviceGiB: null, reserve: null, outputTokens: null, promptTokens: null },
+    declaredSpan: span,
+    trainedSpan: null,
+    slidingWindow: null,
+    windowLayers: null,
+    dtypes: { weights: null, cache: null, positions: null },
+    embeddingInitStd: null,
+    embeddingMultiplier: null,
+    serving: {
+      span: null,
+      sequences: null,
+      deviceGiB: null,
+      reserve: null,
+      outputTokens: null,
+      promptTokens: null,
+    },
   };
 }
 

@@ -2,19 +2,28 @@
 import { parse } from 'yaml';
 import { markdownTable } from 'markdown-table';
 
-const cell = (text) => String(text ?? '').replace(/\|/g, '\\|').replace(/\s*\n\s*/g, ' ').trim();
+const cell = (text) =>
+  String(text ?? '')
+    .replace(/\|/g, '\\|')
+    .replace(/\s*\n\s*/g, ' ')
+    .trim();
 
 export function renderActionTables(readme, actionYaml) {
   const action = parse(actionYaml);
   const inputs = markdownTable([
     ['input', 'description', 'default'],
     ...Object.entries(action.inputs ?? {}).map(([name, spec]) => [
-      `\`${name}\``, cell(spec.description), spec.default === undefined || spec.default === '' ? '' : `\`${cell(spec.default)}\``,
+      `\`${name}\``,
+      cell(spec.description),
+      spec.default === undefined || spec.default === '' ? '' : `\`${cell(spec.default)}\``,
     ]),
   ]);
   const outputs = markdownTable([
     ['output', 'description'],
-    ...Object.entries(action.outputs ?? {}).map(([name, spec]) => [`\`${name}\``, cell(spec.description)]),
+    ...Object.entries(action.outputs ?? {}).map(([name, spec]) => [
+      `\`${name}\``,
+      cell(spec.description),
+    ]),
   ]);
   return replaceBetween(replaceBetween(readme, 'inputs', inputs), 'outputs', outputs);
 }

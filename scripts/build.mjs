@@ -26,12 +26,19 @@ const bundles = [
  */
 async function minifyChunk(name, source) {
   const header = source.slice(0, Math.max(0, source.indexOf('export const modules')));
-  if (/^\s*import\s/m.test(header) || !header.includes('export const ids')) throw new Error(`chunk ${name} imports other modules; expected a self-contained webpack chunk`);
+  if (/^\s*import\s/m.test(header) || !header.includes('export const ids'))
+    throw new Error(`chunk ${name} imports other modules; expected a self-contained webpack chunk`);
   const dir = await mkdtemp(join(tmpdir(), 'context-reach-chunk-'));
   try {
     const file = join(dir, name.replace(/\.js$/, '.mjs'));
     await writeFile(file, source);
-    const { code } = await ncc(file, { minify: true, sourceMap: false, quiet: true, target: 'es2022', esm: true });
+    const { code } = await ncc(file, {
+      minify: true,
+      sourceMap: false,
+      quiet: true,
+      target: 'es2022',
+      esm: true,
+    });
     return code;
   } finally {
     await rm(dir, { recursive: true, force: true });
@@ -44,16 +51,27 @@ for (const { entry, out } of bundles) {
   if (!existsSync(join(root, entry))) continue;
   // Minified: start-up is dominated by compiling the bundle, and half the text compiles in half the time.
   // `filename` names the chunks of dynamic imports `<id>.<out>`, so the two bundles' chunks never collide.
-  const { code, assets } = await ncc(join(root, entry), { minify: true, sourceMap: false, quiet: true, target: 'es2022', filename: out });
+  const { code, assets } = await ncc(join(root, entry), {
+    minify: true,
+    sourceMap: false,
+    quiet: true,
+    target: 'es2022',
+    filename: out,
+  });
   await writeFile(join(dist, out), code);
   for (const [name, asset] of Object.entries(assets ?? {})) {
     if (name === 'package.json') continue;
     const target = join(dist, name);
     await mkdir(dirname(target), { recursive: true });
-    await writeFile(target, name.endsWith(`.${out}`) ? await minifyChunk(name, String(asset.source)) : asset.source);
+    await writeFile(
+      target,
+      name.endsWith(`.${out}`) ? await minifyChunk(name, String(asset.source)) : asset.source,
+    );
   }
   const chunks = Object.keys(assets ?? {}).filter((name) => name !== 'package.json');
-  console.log(`built dist/${out} (${Math.round(code.length / 1024)} KiB${chunks.length > 0 ? `; loaded when needed: ${chunks.sort().join(', ')}` : ''})`);
+  console.log(
+    `built dist/${out} (${Math.round(code.length / 1024)} KiB${chunks.length > 0 ? `; loaded when needed: ${chunks.sort().join(', ')}` : ''})`,
+  );
 }
 await writeFile(join(dist, 'package.json'), `${JSON.stringify({ type: 'module' }, null, 2)}\n`);
 
@@ -61,18 +79,29 @@ await writeFile(join(dist, 'package.json'), `${JSON.stringify({ type: 'module' }
 // the CLI looks for `fixtures/demo` next to itself.
 await cp(join(root, 'fixtures', 'demo'), join(dist, 'fixtures', 'demo'), { recursive: true });
 // What dist/ was built from (scripts/build-inputs.mjs): the package test refuses an older dist/.
-await writeFile(join(dist, 'build-info.json'), `${JSON.stringify({ inputs: buildInputs(root) }, null, 2)}\n`);
+await writeFile(
+  join(dist, 'build-info.json'),
+  `${JSON.stringify({ inputs: buildInputs(root) }, null, 2)}\n`,
+);
 console.log('copied fixtures/demo to dist/fixtures/demo (the demo of an installed package)');
 
 // schema/report.schema.json is written from the code's own schema of the report, so the two never drift.
 {
   const dir = await mkdtemp(join(tmpdir(), 'context-reach-schema-'));
   try {
-    const { code } = await ncc(join(root, 'src/core/render/report-schema.ts'), { minify: false, sourceMap: false, quiet: true, target: 'es2022' });
+    const { code } = await ncc(join(root, 'src/core/render/report-schema.ts'), {
+      minify: false,
+      sourceMap: false,
+      quiet: true,
+      target: 'es2022',
+    });
     const file = join(dir, 'report-schema.mjs');
     await writeFile(file, code);
     const { publishedReportSchema } = await import(pathToFileURL(file).href);
-    await writeFile(join(root, 'schema', 'report.schema.json'), `${JSON.stringify(publishedReportSchema(), null, 2)}\n`);
+    await writeFile(
+      join(root, 'schema', 'report.schema.json'),
+      `${JSON.stringify(publishedReportSchema(), null, 2)}\n`,
+    );
     console.log('wrote schema/report.schema.json');
   } finally {
     await rm(dir, { recursive: true, force: true });
@@ -85,6 +114,6 @@ if (existsSync(join(root, 'action.yml'))) {
   const next = renderActionTables(readme, await readFile(join(root, 'action.yml'), 'utf8'));
   if (next !== readme) {
     await writeFile(readmePath, next);
-    console.log('updated the README\'s inputs and outputs tables from action.yml');
+    console.log("updated the README's inputs and outputs tables from action.yml");
   }
 }

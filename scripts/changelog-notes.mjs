@@ -21,12 +21,16 @@ export function releaseNotes(changelog, version) {
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
   const [version, file = 'CHANGELOG.md'] = process.argv.slice(2);
-  const notes = version ? releaseNotes(readFileSync(file, 'utf8'), version.replace(/^v/, '')) : null;
+  const notes = version
+    ? releaseNotes(readFileSync(file, 'utf8'), version.replace(/^v/, ''))
+    : null;
   if (!version) {
     console.error('usage: node scripts/changelog-notes.mjs VERSION [CHANGELOG.md]');
     process.exitCode = 2;
   } else if (notes === null) {
-    console.error(`${file} has no section "## [${version.replace(/^v/, '')}]" with notes; add it before tagging`);
+    console.error(
+      `${file} has no section "## [${version.replace(/^v/, '')}]" with notes; add it before tagging`,
+    );
     process.exitCode = 1;
   } else {
     process.stdout.write(notes);

@@ -7,13 +7,21 @@ const root = new URL('..', import.meta.url);
 const source = readFileSync(new URL('src/core/rules/catalog.ts', root), 'utf8');
 const body = source.slice(source.indexOf('export const RULES'));
 const entry = /\n {2}'([a-z0-9-]+)': \{[\s\S]*?title: (['"])((?:\\.|(?!\2).)*)\2/g;
-const rules = Object.fromEntries([...body.matchAll(entry)].map((match) => [match[1], match[3].replace(/\\(['"])/g, '$1')]));
-if (Object.keys(rules).length === 0) throw new Error('No rules found in src/core/rules/catalog.ts; expected entries like `  \'rule-id\': { ... title: \'...\' }`.');
+const rules = Object.fromEntries(
+  [...body.matchAll(entry)].map((match) => [match[1], match[3].replace(/\\(['"])/g, '$1')]),
+);
+if (Object.keys(rules).length === 0)
+  throw new Error(
+    "No rules found in src/core/rules/catalog.ts; expected entries like `  'rule-id': { ... title: '...' }`.",
+  );
 
 const schemaUrl = new URL('schema/policy.schema.json', root);
 const schema = JSON.parse(readFileSync(schemaUrl, 'utf8'));
 schema.definitions.rules.properties = Object.fromEntries(
-  Object.entries(rules).map(([id, title]) => [id, { $ref: '#/definitions/ruleLevel', description: `${title}.` }]),
+  Object.entries(rules).map(([id, title]) => [
+    id,
+    { $ref: '#/definitions/ruleLevel', description: `${title}.` },
+  ]),
 );
 writeFileSync(schemaUrl, `${JSON.stringify(schema, null, 2)}\n`);
 console.log(`schema/policy.schema.json: ${Object.keys(rules).length} rule ids`);

@@ -19,8 +19,14 @@ const root = new URL('..', import.meta.url).pathname;
 
 /** True when `error` is the node24 enum complaint and nothing else. */
 function onlyNode24Lag(error, action) {
-  if (parse(action)?.runs?.using !== 'node24' || error.path !== '/runs' || error.code !== 'one_of') return false;
-  return (error.states ?? []).some((state) => state.errors.length === 1 && state.errors[0].code === 'enum' && state.errors[0].path === '/runs/using');
+  if (parse(action)?.runs?.using !== 'node24' || error.path !== '/runs' || error.code !== 'one_of')
+    return false;
+  return (error.states ?? []).some(
+    (state) =>
+      state.errors.length === 1 &&
+      state.errors[0].code === 'enum' &&
+      state.errors[0].path === '/runs/using',
+  );
 }
 
 let failed = 0;
@@ -36,12 +42,23 @@ function report(name, errors) {
 const action = readFileSync(join(root, 'action.yml'), 'utf8');
 const actionErrors = validateAction(action).errors;
 const lag = actionErrors.filter((error) => onlyNode24Lag(error, action));
-report('action.yml', actionErrors.filter((error) => !lag.includes(error)));
-if (lag.length > 0) console.log('        (runs.using: node24 accepted: the validator\'s schema lists node12/16/20 only)');
+report(
+  'action.yml',
+  actionErrors.filter((error) => !lag.includes(error)),
+);
+if (lag.length > 0)
+  console.log(
+    "        (runs.using: node24 accepted: the validator's schema lists node12/16/20 only)",
+  );
 
 const workflows = join(root, '.github', 'workflows');
-for (const name of readdirSync(workflows).filter((n) => /\.ya?ml$/.test(n)).sort()) {
-  report(`.github/workflows/${name}`, validateWorkflow(readFileSync(join(workflows, name), 'utf8')).errors);
+for (const name of readdirSync(workflows)
+  .filter((n) => /\.ya?ml$/.test(n))
+  .sort()) {
+  report(
+    `.github/workflows/${name}`,
+    validateWorkflow(readFileSync(join(workflows, name), 'utf8')).errors,
+  );
 }
 
 for (const flags of [[], ['--forks']]) {
@@ -49,11 +66,28 @@ for (const flags of [[], ['--forks']]) {
   try {
     execFileSync('git', ['init', '-q'], { cwd: repo });
     mkdirSync(join(repo, 'models', 'm'), { recursive: true });
-    writeFileSync(join(repo, 'models', 'm', 'config.json'), JSON.stringify({ model_type: 'llama', hidden_size: 512, intermediate_size: 1024, num_hidden_layers: 2, num_attention_heads: 8, vocab_size: 1000, max_position_embeddings: 2048 }));
-    execFileSync(process.execPath, [join(root, 'dist', 'cli.js'), 'init', ...flags], { cwd: repo, stdio: 'ignore' });
+    writeFileSync(
+      join(repo, 'models', 'm', 'config.json'),
+      JSON.stringify({
+        model_type: 'llama',
+        hidden_size: 512,
+        intermediate_size: 1024,
+        num_hidden_layers: 2,
+        num_attention_heads: 8,
+        vocab_size: 1000,
+        max_position_embeddings: 2048,
+      }),
+    );
+    execFileSync(process.execPath, [join(root, 'dist', 'cli.js'), 'init', ...flags], {
+      cwd: repo,
+      stdio: 'ignore',
+    });
     const written = join(repo, '.github', 'workflows');
     for (const name of readdirSync(written).sort()) {
-      report(`init ${flags.join(' ')} → .github/workflows/${name}`.replace('init  ', 'init '), validateWorkflow(readFileSync(join(written, name), 'utf8')).errors);
+      report(
+        `init ${flags.join(' ')} → .github/workflows/${name}`.replace('init  ', 'init '),
+        validateWorkflow(readFileSync(join(written, name), 'utf8')).errors,
+      );
     }
   } finally {
     rmSync(repo, { recursive: true, force: true });

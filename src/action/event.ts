@@ -18,7 +18,13 @@ export interface EventInfo {
   isFork: boolean;
 }
 
-export const SUPPORTED_EVENTS = ['pull_request', 'pull_request_target', 'merge_group', 'push', 'workflow_dispatch'] as const;
+export const SUPPORTED_EVENTS = [
+  'pull_request',
+  'pull_request_target',
+  'merge_group',
+  'push',
+  'workflow_dispatch',
+] as const;
 
 export class EventError extends Error {
   constructor(message: string) {
@@ -36,8 +42,14 @@ type Json = Record<string, unknown>;
 function field(payload: unknown, path: string, eventName: string): unknown {
   let cursor: unknown = payload;
   for (const part of path.split('.')) {
-    if (cursor === null || typeof cursor !== 'object' || !Object.prototype.hasOwnProperty.call(cursor, part)) {
-      throw new EventError(`The ${eventName} event payload has no "${path}"; expected it in the file at GITHUB_EVENT_PATH.`);
+    if (
+      cursor === null ||
+      typeof cursor !== 'object' ||
+      !Object.prototype.hasOwnProperty.call(cursor, part)
+    ) {
+      throw new EventError(
+        `The ${eventName} event payload has no "${path}"; expected it in the file at GITHUB_EVENT_PATH.`,
+      );
     }
     cursor = (cursor as Json)[part];
   }
@@ -47,7 +59,9 @@ function field(payload: unknown, path: string, eventName: string): unknown {
 function sha(payload: unknown, path: string, eventName: string): string {
   const value = field(payload, path, eventName);
   if (typeof value !== 'string' || !SHA.test(value)) {
-    throw new EventError(`The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a 40-character hexadecimal commit id.`);
+    throw new EventError(
+      `The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a 40-character hexadecimal commit id.`,
+    );
   }
   return value;
 }
@@ -55,7 +69,9 @@ function sha(payload: unknown, path: string, eventName: string): string {
 function text(payload: unknown, path: string, eventName: string): string {
   const value = field(payload, path, eventName);
   if (typeof value !== 'string' || value === '') {
-    throw new EventError(`The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a non-empty string.`);
+    throw new EventError(
+      `The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a non-empty string.`,
+    );
   }
   return value;
 }
@@ -63,7 +79,9 @@ function text(payload: unknown, path: string, eventName: string): string {
 function positiveWhole(payload: unknown, path: string, eventName: string): number {
   const value = field(payload, path, eventName);
   if (!Number.isSafeInteger(value) || (value as number) < 1) {
-    throw new EventError(`The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a positive whole number.`);
+    throw new EventError(
+      `The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a positive whole number.`,
+    );
   }
   return value as number;
 }
@@ -71,13 +89,18 @@ function positiveWhole(payload: unknown, path: string, eventName: string): numbe
 function list(payload: unknown, path: string, eventName: string): unknown[] {
   const value = field(payload, path, eventName);
   if (!Array.isArray(value)) {
-    throw new EventError(`The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a list.`);
+    throw new EventError(
+      `The ${eventName} event payload has "${path}" = ${JSON.stringify(value)}; expected a list.`,
+    );
   }
   return value;
 }
 
 function repository(payload: unknown, eventName: string): { owner: string; repo: string } {
-  return { owner: text(payload, 'repository.owner.login', eventName), repo: text(payload, 'repository.name', eventName) };
+  return {
+    owner: text(payload, 'repository.owner.login', eventName),
+    repo: text(payload, 'repository.name', eventName),
+  };
 }
 
 /**
@@ -85,9 +108,16 @@ function repository(payload: unknown, eventName: string): { owner: string; repo:
  * has no base, and required for workflow_dispatch); `fallbackSha` is `GITHUB_SHA`, the head of
  * a workflow_dispatch run.
  */
-export function parseEvent(eventName: string, payload: unknown, baseInput: string | null, fallbackSha?: string): EventInfo {
+export function parseEvent(
+  eventName: string,
+  payload: unknown,
+  baseInput: string | null,
+  fallbackSha?: string,
+): EventInfo {
   if (payload === null || typeof payload !== 'object') {
-    throw new EventError(`The ${eventName} event payload is ${payload === null ? 'null' : typeof payload}; expected the JSON object at GITHUB_EVENT_PATH.`);
+    throw new EventError(
+      `The ${eventName} event payload is ${payload === null ? 'null' : typeof payload}; expected the JSON object at GITHUB_EVENT_PATH.`,
+    );
   }
   switch (eventName) {
     case 'pull_request':
@@ -101,7 +131,9 @@ export function parseEvent(eventName: string, payload: unknown, baseInput: strin
         base: sha(payload, 'pull_request.base.sha', eventName),
         head: sha(payload, 'pull_request.head.sha', eventName),
         pullNumber: number,
-        labels: labels.map((label) => (label as Json | null)?.name).filter((name): name is string => typeof name === 'string'),
+        labels: labels
+          .map((label) => (label as Json | null)?.name)
+          .filter((name): name is string => typeof name === 'string'),
         // A deleted fork leaves head.repo null: still a fork.
         isFork: headRepo === null || headRepo?.full_name !== baseRepo,
       };
@@ -119,7 +151,9 @@ export function parseEvent(eventName: string, payload: unknown, baseInput: strin
       const before = text(payload, 'before', eventName);
       const head = sha(payload, 'after', eventName);
       if (ZERO_SHA.test(head)) {
-        throw new EventError('The push event deletes its branch ("after" is all zeros); expected a push with a head commit.');
+        throw new EventError(
+          'The push event deletes its branch ("after" is all zeros); expected a push with a head commit.',
+        );
       }
       const created = ZERO_SHA.test(before);
       return {
@@ -133,15 +167,28 @@ export function parseEvent(eventName: string, payload: unknown, baseInput: strin
     }
     case 'workflow_dispatch': {
       if (baseInput === null || baseInput === '') {
-        throw new EventError('A workflow_dispatch run has no base commit; expected the "base" input (a branch, tag or commit id to compare against).');
+        throw new EventError(
+          'A workflow_dispatch run has no base commit; expected the "base" input (a branch, tag or commit id to compare against).',
+        );
       }
       if (fallbackSha === undefined || !SHA.test(fallbackSha)) {
-        throw new EventError(`A workflow_dispatch run needs GITHUB_SHA as its head; got ${JSON.stringify(fallbackSha ?? null)}, expected a 40-character hexadecimal commit id.`);
+        throw new EventError(
+          `A workflow_dispatch run needs GITHUB_SHA as its head; got ${JSON.stringify(fallbackSha ?? null)}, expected a 40-character hexadecimal commit id.`,
+        );
       }
-      return { ...repository(payload, eventName), base: baseInput, head: fallbackSha, pullNumber: null, labels: [], isFork: false };
+      return {
+        ...repository(payload, eventName),
+        base: baseInput,
+        head: fallbackSha,
+        pullNumber: null,
+        labels: [],
+        isFork: false,
+      };
     }
     default:
-      throw new EventError(`The event ${JSON.stringify(eventName)} is not supported; expected one of ${SUPPORTED_EVENTS.join(', ')}.`);
+      throw new EventError(
+        `The event ${JSON.stringify(eventName)} is not supported; expected one of ${SUPPORTED_EVENTS.join(', ')}.`,
+      );
   }
 }
 
@@ -168,7 +215,9 @@ export interface WorkflowRunInfo {
 export function parseWorkflowRun(payload: unknown): WorkflowRunInfo {
   const name = 'workflow_run';
   if (payload === null || typeof payload !== 'object') {
-    throw new EventError(`The ${name} event payload is ${payload === null ? 'null' : typeof payload}; expected the JSON object at GITHUB_EVENT_PATH.`);
+    throw new EventError(
+      `The ${name} event payload is ${payload === null ? 'null' : typeof payload}; expected the JSON object at GITHUB_EVENT_PATH.`,
+    );
   }
   const runId = positiveWhole(payload, 'workflow_run.id', name);
   const pulls = list(payload, 'workflow_run.pull_requests', name);
@@ -180,7 +229,13 @@ export function parseWorkflowRun(payload: unknown): WorkflowRunInfo {
     runId,
     event: text(payload, 'workflow_run.event', name),
     headSha: sha(payload, 'workflow_run.head_sha', name),
-    headLabel: typeof headOwner === 'string' && typeof headBranch === 'string' && headOwner !== '' && headBranch !== '' ? `${headOwner}:${headBranch}` : null,
+    headLabel:
+      typeof headOwner === 'string' &&
+      typeof headBranch === 'string' &&
+      headOwner !== '' &&
+      headBranch !== ''
+        ? `${headOwner}:${headBranch}`
+        : null,
     pullNumbers: pulls
       .map((pull) => (pull as Json | null)?.number)
       .filter((number): number is number => Number.isSafeInteger(number) && (number as number) > 0),

@@ -13,15 +13,26 @@ export const MAX_CONFIG_BYTES = 4 * 1024 * 1024;
 
 /** A file refused because it is larger than `limit` bytes. */
 export class ContentTooLargeError extends Error {
-  constructor(readonly path: string, readonly size: number, readonly limit: number) {
-    super(`${path} is ${size} bytes; expected at most ${limit} bytes for a model config (the file was not read)`);
+  constructor(
+    readonly path: string,
+    readonly size: number,
+    readonly limit: number,
+  ) {
+    super(
+      `${path} is ${size} bytes; expected at most ${limit} bytes for a model config (the file was not read)`,
+    );
     this.name = 'ContentTooLargeError';
   }
 }
 
 /** A git call that failed: exit status, signal, or output past its bound. */
 export class GitError extends Error {
-  constructor(message: string, readonly args: readonly string[], readonly exitCode: number | null, readonly stderr: string) {
+  constructor(
+    message: string,
+    readonly args: readonly string[],
+    readonly exitCode: number | null,
+    readonly stderr: string,
+  ) {
     super(message);
     this.name = 'GitError';
   }
@@ -93,20 +104,46 @@ interface RunResult {
 
 /** A revision from an event or an input: no option lookalikes, no control characters, sane length. */
 function checkRevision(rev: string): string {
-  if (typeof rev !== 'string' || rev === '' || rev.length > 256 || rev.startsWith('-') || /[\u0000-\u0020\u007f]/.test(rev)) {
-    throw new GitError(`revision ${JSON.stringify(rev)} is not usable; expected a commit id or ref name without spaces or a leading "-"`, [], null, '');
+  if (
+    typeof rev !== 'string' ||
+    rev === '' ||
+    rev.length > 256 ||
+    rev.startsWith('-') ||
+    /[\u0000-\u0020\u007f]/.test(rev)
+  ) {
+    throw new GitError(
+      `revision ${JSON.stringify(rev)} is not usable; expected a commit id or ref name without spaces or a leading "-"`,
+      [],
+      null,
+      '',
+    );
   }
   return rev;
 }
 
 function checkPath(path: string): string {
-  if (typeof path !== 'string' || path === '' || path.includes('\u0000') || path.startsWith('/') || path.split('/').some((part) => part === '' || part === '.' || part === '..')) {
-    throw new GitError(`path ${JSON.stringify(path)} is not usable; expected a repository-relative path without empty, "." or ".." parts`, [], null, '');
+  if (
+    typeof path !== 'string' ||
+    path === '' ||
+    path.includes('\u0000') ||
+    path.startsWith('/') ||
+    path.split('/').some((part) => part === '' || part === '.' || part === '..')
+  ) {
+    throw new GitError(
+      `path ${JSON.stringify(path)} is not usable; expected a repository-relative path without empty, "." or ".." parts`,
+      [],
+      null,
+      '',
+    );
   }
   return path;
 }
 
-const KINDS: Record<string, TreeEntryKind> = { blob: 'file', tree: 'directory', commit: 'submodule' };
+const KINDS: Record<string, TreeEntryKind> = {
+  blob: 'file',
+  tree: 'directory',
+  commit: 'submodule',
+};
 
 type Run = (args: string[], maxBuffer: number, input?: string) => Promise<RunResult>;
 
@@ -121,30 +158,60 @@ function runner(cwd: string, git: string, timeout: number): Run {
     // The checkout's own settings stay, but nothing may prompt or run a file-system monitor.
     const full = ['-c', 'core.fsmonitor=false', '-c', 'core.quotePath=false', ...args];
     return new Promise((resolve, reject) => {
-      const child = execFile(git, full, {
-        cwd,
-        encoding: 'buffer',
-        maxBuffer,
-        timeout,
-        windowsHide: true,
-        env: { ...process.env, GIT_TERMINAL_PROMPT: '0', GIT_OPTIONAL_LOCKS: '0', LC_ALL: 'C' },
-      }, (error, stdout, stderr) => {
-        const errText = stderr.toString('utf8').slice(0, 2000).trim();
-        if (!error) {
-          resolve({ code: 0, stdout, stderr: errText });
-          return;
-        }
-        const failure = error as NodeJS.ErrnoException & { code?: string | number; killed?: boolean; signal?: string | null };
-        if (failure.code === 'ERR_CHILD_PROCESS_STDIO_MAXBUFFER') {
-          reject(new GitError(`git ${verb(args)} wrote more than ${maxBuffer} bytes; expected less (output refused)`, args, null, errText));
-        } else if (failure.killed || failure.signal) {
-          reject(new GitError(`git ${verb(args)} did not finish within ${timeout} ms (stopped with ${failure.signal ?? 'a signal'})`, args, null, errText));
-        } else if (typeof failure.code === 'number') {
-          resolve({ code: failure.code, stdout, stderr: errText });
-        } else {
-          reject(new GitError(`git could not be started (${failure.code ?? failure.message}); expected a git executable at ${JSON.stringify(git)}`, args, null, errText));
-        }
-      });
+      const child = execFile(
+        git,
+        full,
+        {
+          cwd,
+          encoding: 'buffer',
+          maxBuffer,
+          timeout,
+          windowsHide: true,
+          env: { ...process.env, GIT_TERMINAL_PROMPT: '0', GIT_OPTIONAL_LOCKS: '0', LC_ALL: 'C' },
+        },
+        (error, stdout, stderr) => {
+          const errText = stderr.toString('utf8').slice(0, 2000).trim();
+          if (!error) {
+            resolve({ code: 0, stdout, stderr: errText });
+            return;
+          }
+          const failure = error as NodeJS.ErrnoException & {
+            code?: string | number;
+            killed?: boolean;
+            signal?: string | null;
+          };
+          if (failure.code === 'ERR_CHILD_PROCESS_STDIO_MAXBUFFER') {
+            reject(
+              new GitError(
+                `git ${verb(args)} wrote more than ${maxBuffer} bytes; expected less (output refused)`,
+                args,
+                null,
+                errText,
+              ),
+            );
+          } else if (failure.killed || failure.signal) {
+            reject(
+              new GitError(
+                `git ${verb(args)} did not finish within ${timeout} ms (stopped with ${failure.signal ?? 'a signal'})`,
+                args,
+                null,
+                errText,
+              ),
+            );
+          } else if (typeof failure.code === 'number') {
+            resolve({ code: failure.code, stdout, stderr: errText });
+          } else {
+            reject(
+              new GitError(
+                `git could not be started (${failure.code ?? failure.message}); expected a git executable at ${JSON.stringify(git)}`,
+                args,
+                null,
+                errText,
+              ),
+            );
+          }
+        },
+      );
       if (input !== undefined) {
         // A git that exits before reading all of it closes the pipe; its exit status says why.
         child.stdin?.on('error', () => {});
@@ -156,7 +223,12 @@ function runner(cwd: string, git: string, timeout: number): Run {
 
 function failed(args: string[], result: RunResult): GitError {
   const reason = result.stderr.split('\n')[0] || 'no message';
-  return new GitError(`git ${args.join(' ')} failed with exit status ${result.code}: ${reason}`, args, result.code, result.stderr);
+  return new GitError(
+    `git ${args.join(' ')} failed with exit status ${result.code}: ${reason}`,
+    args,
+    result.code,
+    result.stderr,
+  );
 }
 
 export function createGitReader(cwd: string, options: GitReaderOptions = {}): GitReader {
@@ -196,21 +268,43 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
    * repository-relative; a pathspec never descends through a symlink or a file, and names are
    * compared exactly after listing.
    */
-  async function listEntries(commit: string, paths: string[]): Promise<Map<string, SizedEntry> | null> {
+  async function listEntries(
+    commit: string,
+    paths: string[],
+  ): Promise<Map<string, SizedEntry> | null> {
     const listed = new Map<string, SizedEntry>();
     for (const chunk of pathChunks(paths)) {
-      const args = ['--literal-pathspecs', 'ls-tree', '-z', '-l', '--full-tree', commit, '--', ...chunk];
+      const args = [
+        '--literal-pathspecs',
+        'ls-tree',
+        '-z',
+        '-l',
+        '--full-tree',
+        commit,
+        '--',
+        ...chunk,
+      ];
       const result = await run(args, maxList);
       if (result.code !== 0) {
-        if (/not a tree object|Not a valid object name|does not exist|bad revision/i.test(result.stderr)) return null;
+        if (
+          /not a tree object|Not a valid object name|does not exist|bad revision/i.test(
+            result.stderr,
+          )
+        )
+          return null;
         throw failed(args, result);
       }
       for (const record of result.stdout.toString('utf8').split('\u0000')) {
         const tab = record.indexOf('\t');
         if (tab < 0) continue;
         const [mode = '', type = '', oid = '', size = ''] = record.slice(0, tab).split(/ +/);
-        const kind: TreeEntryKind = mode === '120000' ? 'symlink' : KINDS[type] ?? 'file';
-        listed.set(record.slice(tab + 1), { kind, mode, oid, size: size === '-' ? null : Number(size) });
+        const kind: TreeEntryKind = mode === '120000' ? 'symlink' : (KINDS[type] ?? 'file');
+        listed.set(record.slice(tab + 1), {
+          kind,
+          mode,
+          oid,
+          size: size === '-' ? null : Number(size),
+        });
       }
     }
     return listed;
@@ -234,7 +328,9 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
         if (result.code !== 0) throw failed(args, result);
         parseBatch(result.stdout, oids, read, maxFile);
       } catch (error) {
-        for (const oid of oids) if (!read.has(oid)) read.set(oid, error instanceof Error ? error : new Error(String(error)));
+        for (const oid of oids)
+          if (!read.has(oid))
+            read.set(oid, error instanceof Error ? error : new Error(String(error)));
       }
     };
     for (const [oid, size] of blobs) {
@@ -259,13 +355,24 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     const lines = result.stdout.toString('utf8').split('\n');
     oids.forEach((oid, i) => {
       const [name, type, size] = (lines[i] ?? '').split(' ');
-      if (name !== oid) sizes.set(oid, new GitError(`git cat-file --batch-check answered ${JSON.stringify(lines[i] ?? '')} for ${oid}; expected its type and size`, args, null, ''));
+      if (name !== oid)
+        sizes.set(
+          oid,
+          new GitError(
+            `git cat-file --batch-check answered ${JSON.stringify(lines[i] ?? '')} for ${oid}; expected its type and size`,
+            args,
+            null,
+            '',
+          ),
+        );
       else sizes.set(oid, type === 'blob' && size !== undefined ? Number(size) : null);
     });
     return sizes;
   }
 
-  async function showMany(requests: readonly BlobRequest[]): Promise<(Uint8Array | null | Error)[]> {
+  async function showMany(
+    requests: readonly BlobRequest[],
+  ): Promise<(Uint8Array | null | Error)[]> {
     const answers: (Uint8Array | null | Error)[] = requests.map(() => null);
     const byCommit = new Map<string, number[]>();
     requests.forEach((request, i) => {
@@ -296,8 +403,17 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     }
     let sizes = new Map<string, number | Error | null>();
     if (fromDiff.size > 0) {
-      const oids = [...new Set([...fromDiff.values()].filter((e) => e !== null && e.kind === 'file').map((e) => e!.oid))];
-      sizes = await blobSizes(oids).catch((error: unknown) => new Map(oids.map((oid) => [oid, error instanceof Error ? error : new Error(String(error))])));
+      const oids = [
+        ...new Set(
+          [...fromDiff.values()].filter((e) => e !== null && e.kind === 'file').map((e) => e!.oid),
+        ),
+      ];
+      sizes = await blobSizes(oids).catch(
+        (error: unknown) =>
+          new Map(
+            oids.map((oid) => [oid, error instanceof Error ? error : new Error(String(error))]),
+          ),
+      );
     }
     for (const [i, found] of fromDiff) {
       if (found === null || found.kind !== 'file') continue;
@@ -334,7 +450,15 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
       }
     }
     const read = await readBlobs(blobs);
-    for (const [i, oid] of wanted) answers[i] = read.get(oid) ?? new GitError(`git cat-file --batch gave nothing for ${oid}; expected the blob of ${requests[i]!.path}`, ['cat-file', '--batch'], null, '');
+    for (const [i, oid] of wanted)
+      answers[i] =
+        read.get(oid) ??
+        new GitError(
+          `git cat-file --batch gave nothing for ${oid}; expected the blob of ${requests[i]!.path}`,
+          ['cat-file', '--batch'],
+          null,
+          '',
+        );
     return answers;
   }
 
@@ -346,7 +470,19 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     async changedFiles(base, head) {
       // `--raw` is `--name-status` with both sides' modes and blob ids: the blobs are then read
       // without listing any tree again.
-      const args = ['diff', '--raw', '--no-abbrev', '-M', '-z', '--no-ext-diff', '--no-textconv', '--no-color', checkRevision(base), checkRevision(head), '--'];
+      const args = [
+        'diff',
+        '--raw',
+        '--no-abbrev',
+        '-M',
+        '-z',
+        '--no-ext-diff',
+        '--no-textconv',
+        '--no-color',
+        checkRevision(base),
+        checkRevision(head),
+        '--',
+      ];
       const result = await run(args, maxList);
       if (result.code !== 0) throw failed(args, result);
       const records = parseRawDiff(result.stdout.toString('utf8'));
@@ -364,12 +500,30 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     },
     showMany,
     async fetchCommits(commits, timeoutMs = 120_000) {
-      if (commits.length === 0 || commits.some((commit) => !/^([0-9a-f]{40}|[0-9a-f]{64})$/.test(commit))) return false;
+      if (
+        commits.length === 0 ||
+        commits.some((commit) => !/^([0-9a-f]{40}|[0-9a-f]{64})$/.test(commit))
+      )
+        return false;
       try {
         const remote = await run(['remote', 'get-url', 'origin'], 64 * 1024);
         if (remote.code !== 0) return false;
         const fetchRun = runner(cwd, git, timeoutMs);
-        const result = await fetchRun(['-c', 'protocol.version=2', 'fetch', '--quiet', '--no-tags', '--no-recurse-submodules', '--no-write-fetch-head', '--depth=1', 'origin', ...new Set(commits)], 1024 * 1024);
+        const result = await fetchRun(
+          [
+            '-c',
+            'protocol.version=2',
+            'fetch',
+            '--quiet',
+            '--no-tags',
+            '--no-recurse-submodules',
+            '--no-write-fetch-head',
+            '--depth=1',
+            'origin',
+            ...new Set(commits),
+          ],
+          1024 * 1024,
+        );
         return result.code === 0;
       } catch {
         return false;
@@ -402,7 +556,10 @@ function pathChunks(paths: string[]): string[][] {
   let chunk: string[] = [];
   let chars = 0;
   for (const path of paths) {
-    if (chunk.length > 0 && (chunk.length >= PATHS_PER_LISTING || chars + path.length > CHARS_PER_LISTING)) {
+    if (
+      chunk.length > 0 &&
+      (chunk.length >= PATHS_PER_LISTING || chars + path.length > CHARS_PER_LISTING)
+    ) {
       chunks.push(chunk);
       chunk = [];
       chars = 0;
@@ -418,21 +575,45 @@ function pathChunks(paths: string[]): string[][] {
  * Splits `cat-file --batch` output for `oids`, in order, into `read`: `<oid> <type> <size>\n`, the
  * bytes, `\n`; `<oid> missing\n` for an absent object. Anything else is an error for that object.
  */
-function parseBatch(output: Buffer, oids: string[], read: Map<string, Uint8Array | Error>, maxFile: number): void {
+function parseBatch(
+  output: Buffer,
+  oids: string[],
+  read: Map<string, Uint8Array | Error>,
+  maxFile: number,
+): void {
   let at = 0;
   for (const oid of oids) {
     const end = output.indexOf(0x0a, at);
-    if (end < 0) throw new GitError(`git cat-file --batch output ends before ${oid}; expected one answer per object`, ['cat-file', '--batch'], null, '');
+    if (end < 0)
+      throw new GitError(
+        `git cat-file --batch output ends before ${oid}; expected one answer per object`,
+        ['cat-file', '--batch'],
+        null,
+        '',
+      );
     const [name, type, sizeText] = output.toString('utf8', at, end).split(' ');
     at = end + 1;
     if (name !== oid || type !== 'blob') {
-      read.set(oid, new GitError(`git cat-file --batch answered ${JSON.stringify(`${name} ${type}`)} for ${oid}; expected a blob`, ['cat-file', '--batch'], null, ''));
+      read.set(
+        oid,
+        new GitError(
+          `git cat-file --batch answered ${JSON.stringify(`${name} ${type}`)} for ${oid}; expected a blob`,
+          ['cat-file', '--batch'],
+          null,
+          '',
+        ),
+      );
       if (type !== 'missing' && sizeText !== undefined) at += Number(sizeText) + 1;
       continue;
     }
     const size = Number(sizeText);
     if (!Number.isSafeInteger(size) || size > maxFile || at + size > output.length) {
-      throw new GitError(`git cat-file --batch gave ${sizeText} bytes for ${oid}; expected at most ${maxFile} within its output`, ['cat-file', '--batch'], null, '');
+      throw new GitError(
+        `git cat-file --batch gave ${sizeText} bytes for ${oid}; expected at most ${maxFile} within its output`,
+        ['cat-file', '--batch'],
+        null,
+        '',
+      );
     }
     read.set(oid, new Uint8Array(output.buffer, output.byteOffset + at, size));
     at += size + 1;
@@ -461,9 +642,19 @@ export interface ScratchRepository {
 }
 
 /** Identity of scratch commits: invented, so no one's global git settings are needed or used. */
-const SCRATCH_IDENTITY = ['-c', 'user.name=context-reach demo', '-c', 'user.email=demo@example.invalid', '-c', 'commit.gpgsign=false'];
+const SCRATCH_IDENTITY = [
+  '-c',
+  'user.name=context-reach demo',
+  '-c',
+  'user.email=demo@example.invalid',
+  '-c',
+  'commit.gpgsign=false',
+];
 
-export function createScratchRepository(cwd: string, options: Pick<GitReaderOptions, 'git' | 'timeoutMs'> = {}): ScratchRepository {
+export function createScratchRepository(
+  cwd: string,
+  options: Pick<GitReaderOptions, 'git' | 'timeoutMs'> = {},
+): ScratchRepository {
   const run = runner(cwd, options.git ?? 'git', options.timeoutMs ?? 30_000);
   const must = async (args: string[]): Promise<string> => {
     const result = await run(args, 1024 * 1024);
@@ -478,7 +669,15 @@ export function createScratchRepository(cwd: string, options: Pick<GitReaderOpti
     },
     async commitAll(message) {
       await must(['add', '-A']);
-      await must([...SCRATCH_IDENTITY, 'commit', '-q', '--allow-empty', '--no-verify', '-m', message]);
+      await must([
+        ...SCRATCH_IDENTITY,
+        'commit',
+        '-q',
+        '--allow-empty',
+        '--no-verify',
+        '-m',
+        message,
+      ]);
       return must(['rev-parse', 'HEAD']);
     },
   };
@@ -498,7 +697,14 @@ export interface RawDiffRecord {
 
 function rawEntry(mode: string, oid: string): TreeEntry | null {
   if (/^0+$/.test(mode)) return null;
-  const kind: TreeEntryKind = mode === '120000' ? 'symlink' : mode === '160000' ? 'submodule' : mode.startsWith('04') ? 'directory' : 'file';
+  const kind: TreeEntryKind =
+    mode === '120000'
+      ? 'symlink'
+      : mode === '160000'
+        ? 'submodule'
+        : mode.startsWith('04')
+          ? 'directory'
+          : 'file';
   return { kind, mode, oid };
 }
 
@@ -513,14 +719,28 @@ export function parseRawDiff(output: string): RawDiffRecord[] {
   const records: RawDiffRecord[] = [];
   for (let i = 0; i < fields.length;) {
     const header = fields[i]!;
-    const [oldMode = '', newMode = '', oldId = '', newId = '', status = ''] = header.replace(/^:/, '').split(' ');
-    if (!header.startsWith(':') || status === '') throw new GitError(`git diff --raw record ${JSON.stringify(header)} is not "<modes> <ids> <status>"; expected a raw diff header`, [], null, '');
+    const [oldMode = '', newMode = '', oldId = '', newId = '', status = ''] = header
+      .replace(/^:/, '')
+      .split(' ');
+    if (!header.startsWith(':') || status === '')
+      throw new GitError(
+        `git diff --raw record ${JSON.stringify(header)} is not "<modes> <ids> <status>"; expected a raw diff header`,
+        [],
+        null,
+        '',
+      );
     const letter = status.charAt(0);
     const paths = letter === 'R' || letter === 'C' ? 2 : 1;
     const names = fields.slice(i + 1, i + 1 + paths);
     // The name-status parser decides statuses and reports a record cut short.
     const [file] = parseNameStatus([status, ...names].join('\u0000') + '\u0000');
-    if (file === undefined) throw new GitError(`git diff output ends after status ${JSON.stringify(status)}; expected a path`, [], null, '');
+    if (file === undefined)
+      throw new GitError(
+        `git diff output ends after status ${JSON.stringify(status)}; expected a path`,
+        [],
+        null,
+        '',
+      );
     const basePath = letter === 'A' || letter === 'C' ? null : names[0]!;
     records.push({
       file,
@@ -547,17 +767,40 @@ export function parseNameStatus(output: string): ChangedFile[] {
     if (letter === 'R' || letter === 'C') {
       const previous = fields[i + 1];
       const path = fields[i + 2];
-      if (previous === undefined || path === undefined) throw new GitError(`git diff output ends inside a ${JSON.stringify(status)} record; expected two paths`, [], null, '');
-      files.push(letter === 'R' ? { status: 'renamed', path, previousPath: previous } : { status: 'added', path, previousPath: null });
+      if (previous === undefined || path === undefined)
+        throw new GitError(
+          `git diff output ends inside a ${JSON.stringify(status)} record; expected two paths`,
+          [],
+          null,
+          '',
+        );
+      files.push(
+        letter === 'R'
+          ? { status: 'renamed', path, previousPath: previous }
+          : { status: 'added', path, previousPath: null },
+      );
       i += 3;
       continue;
     }
     const path = fields[i + 1];
-    if (path === undefined) throw new GitError(`git diff output ends after status ${JSON.stringify(status)}; expected a path`, [], null, '');
+    if (path === undefined)
+      throw new GitError(
+        `git diff output ends after status ${JSON.stringify(status)}; expected a path`,
+        [],
+        null,
+        '',
+      );
     if (letter === 'A') files.push({ status: 'added', path, previousPath: null });
-    else if (letter === 'M' || letter === 'T') files.push({ status: 'modified', path, previousPath: null });
+    else if (letter === 'M' || letter === 'T')
+      files.push({ status: 'modified', path, previousPath: null });
     else if (letter === 'D') files.push({ status: 'deleted', path, previousPath: null });
-    else throw new GitError(`git diff reported status ${JSON.stringify(status)} for ${JSON.stringify(path)}; expected A, M, T, D, R or C`, [], null, '');
+    else
+      throw new GitError(
+        `git diff reported status ${JSON.stringify(status)} for ${JSON.stringify(path)}; expected A, M, T, D, R or C`,
+        [],
+        null,
+        '',
+      );
     i += 2;
   }
   return files;
@@ -578,7 +821,10 @@ export interface WorktreeGit {
   listFiles(): Promise<string[]>;
 }
 
-export function createWorktreeGit(cwd: string, options: Pick<GitReaderOptions, 'git' | 'timeoutMs' | 'maxListBytes'> = {}): WorktreeGit {
+export function createWorktreeGit(
+  cwd: string,
+  options: Pick<GitReaderOptions, 'git' | 'timeoutMs' | 'maxListBytes'> = {},
+): WorktreeGit {
   const run = runner(cwd, options.git ?? 'git', options.timeoutMs ?? 30_000);
   const maxList = options.maxListBytes ?? 64 * 1024 * 1024;
   return {
@@ -593,11 +839,25 @@ export function createWorktreeGit(cwd: string, options: Pick<GitReaderOptions, '
       const result = await run(args, 4096);
       if (result.code === 0) return result.stdout.toString('utf8').trim();
       // No upstream configured, a detached HEAD, or an upstream whose ref is gone.
-      if (result.code === 1 || /upstream|does not point to a branch|no such branch/i.test(result.stderr)) return null;
+      if (
+        result.code === 1 ||
+        /upstream|does not point to a branch|no such branch/i.test(result.stderr)
+      )
+        return null;
       throw failed(args, result);
     },
     async changedSince(base) {
-      const args = ['diff', '--name-status', '-M', '-z', '--no-ext-diff', '--no-textconv', '--no-color', checkRevision(base), '--'];
+      const args = [
+        'diff',
+        '--name-status',
+        '-M',
+        '-z',
+        '--no-ext-diff',
+        '--no-textconv',
+        '--no-color',
+        checkRevision(base),
+        '--',
+      ];
       const result = await run(args, maxList);
       if (result.code !== 0) throw failed(args, result);
       return parseNameStatus(result.stdout.toString('utf8'));
@@ -606,7 +866,14 @@ export function createWorktreeGit(cwd: string, options: Pick<GitReaderOptions, '
       const args = ['ls-files', '-z', '--cached', '--others', '--exclude-standard', '--full-name'];
       const result = await run(args, maxList);
       if (result.code !== 0) throw failed(args, result);
-      return [...new Set(result.stdout.toString('utf8').split('\u0000').filter((path) => path !== ''))];
+      return [
+        ...new Set(
+          result.stdout
+            .toString('utf8')
+            .split('\u0000')
+            .filter((path) => path !== ''),
+        ),
+      ];
     },
   };
 }

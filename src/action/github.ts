@@ -13,7 +13,11 @@ export const PULL_REQUEST_FILE_CAP = 3000;
 
 /** A failed API call. `status` is the HTTP status; 500 also stands for a connection failure. */
 export class ApiError extends Error {
-  constructor(readonly status: number, message: string, readonly operation: string) {
+  constructor(
+    readonly status: number,
+    message: string,
+    readonly operation: string,
+  ) {
     super(message);
     this.name = 'ApiError';
   }
@@ -72,13 +76,29 @@ export interface GitHubClient {
    * Bytes of a regular file at `ref`; null when absent, a directory, a submodule or a symlink.
    * Throws `ContentTooLargeError` past `MAX_CONFIG_BYTES` without downloading the file.
    */
-  getFileContent(owner: string, repo: string, path: string, ref: string): Promise<Uint8Array | null>;
+  getFileContent(
+    owner: string,
+    repo: string,
+    path: string,
+    ref: string,
+  ): Promise<Uint8Array | null>;
   /** Whether anything (a file, a symlink, a directory, a submodule) is at `path` in `ref`: false only on a 404. */
   pathExists(owner: string, repo: string, path: string, ref: string): Promise<boolean>;
   /** The oldest comment whose body starts with `marker`, written by the token's own identity; null when that identity is not known. */
-  findComment(owner: string, repo: string, issueNumber: number, marker: string): Promise<Comment | null>;
+  findComment(
+    owner: string,
+    repo: string,
+    issueNumber: number,
+    marker: string,
+  ): Promise<Comment | null>;
   /** Every comment whose body starts with `marker` written by `login`, oldest first. */
-  listMarkedComments(owner: string, repo: string, issueNumber: number, marker: string, login: string): Promise<Comment[]>;
+  listMarkedComments(
+    owner: string,
+    repo: string,
+    issueNumber: number,
+    marker: string,
+    login: string,
+  ): Promise<Comment[]>;
   /** Deletes a comment; a comment already gone counts as deleted. */
   deleteComment(owner: string, repo: string, commentId: number): Promise<void>;
   /**
@@ -94,7 +114,12 @@ export interface GitHubClient {
    * whatever the number of files; no rename detection). Throws `ApiError` when GitHub cuts a tree
    * short (`truncated`), so a partial list is never taken for the whole.
    */
-  listChangesBetween(owner: string, repo: string, base: string, head: string): Promise<ChangedFile[]>;
+  listChangesBetween(
+    owner: string,
+    repo: string,
+    base: string,
+    head: string,
+  ): Promise<ChangedFile[]>;
   /** A comment by id, null when it was deleted. */
   getComment(owner: string, repo: string, commentId: number): Promise<Comment | null>;
   /**
@@ -143,18 +168,40 @@ const MAX_COMMENT_PAGES = 100;
 
 let clientCount = 0;
 
-function toComment(data: { id: number; html_url: string; body?: string | null; user?: { login: string } | null }): Comment {
-  return { id: data.id, url: data.html_url, body: data.body ?? '', author: data.user?.login ?? null };
+function toComment(data: {
+  id: number;
+  html_url: string;
+  body?: string | null;
+  user?: { login: string } | null;
+}): Comment {
+  return {
+    id: data.id,
+    url: data.html_url,
+    body: data.body ?? '',
+    author: data.user?.login ?? null,
+  };
 }
 
-function toChangedFile(entry: { filename: string; status: string; previous_filename?: string }): ChangedFile {
+function toChangedFile(entry: {
+  filename: string;
+  status: string;
+  previous_filename?: string;
+}): ChangedFile {
   switch (entry.status) {
-    case 'added': case 'copied': return { status: 'added', path: entry.filename, previousPath: null };
-    case 'removed': return { status: 'deleted', path: entry.filename, previousPath: null };
+    case 'added':
+    case 'copied':
+      return { status: 'added', path: entry.filename, previousPath: null };
+    case 'removed':
+      return { status: 'deleted', path: entry.filename, previousPath: null };
     case 'renamed':
-      return { status: 'renamed', path: entry.filename, previousPath: entry.previous_filename ?? null };
+      return {
+        status: 'renamed',
+        path: entry.filename,
+        previousPath: entry.previous_filename ?? null,
+      };
     // `modified`, `changed` (mode only) and `unchanged` all keep the path.
-    default: return { status: 'modified', path: entry.filename, previousPath: null };
+    default:
+      return { status: 'modified', path: entry.filename, previousPath: null };
   }
 }
 
@@ -164,7 +211,8 @@ async function readBounded(body: unknown, path: string, limit: number): Promise<
     if (body.byteLength > limit) throw new ContentTooLargeError(path, body.byteLength, limit);
     return new Uint8Array(body);
   }
-  if (typeof body === 'string') return readBounded(new TextEncoder().encode(body).buffer as ArrayBuffer, path, limit);
+  if (typeof body === 'string')
+    return readBounded(new TextEncoder().encode(body).buffer as ArrayBuffer, path, limit);
   const reader = (body as ReadableStream<Uint8Array>).getReader();
   const chunks: Uint8Array[] = [];
   let total = 0;
@@ -217,35 +265,52 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     error: (...args: unknown[]) => options.log.warn(redact(args)),
   };
 
-  const limitHandler = (kind: string) => (retryAfter: number, request: { method: string; url: string }, _octokit: unknown, retryCount: number): boolean => {
-    const retrying = retryCount < rateLimitRetries && retryAfter <= maxWait;
-    log.warn(`GitHub ${kind} on ${request.method} ${request.url}: ${retrying ? `waiting ${retryAfter} s, then retry ${retryCount + 1} of ${rateLimitRetries}` : `not retrying (asked to wait ${retryAfter} s; retries used ${retryCount} of ${rateLimitRetries}, longest wait ${maxWait} s)`}`);
-    return retrying;
-  };
+  const limitHandler =
+    (kind: string) =>
+    (
+      retryAfter: number,
+      request: { method: string; url: string },
+      _octokit: unknown,
+      retryCount: number,
+    ): boolean => {
+      const retrying = retryCount < rateLimitRetries && retryAfter <= maxWait;
+      log.warn(
+        `GitHub ${kind} on ${request.method} ${request.url}: ${retrying ? `waiting ${retryAfter} s, then retry ${retryCount + 1} of ${rateLimitRetries}` : `not retrying (asked to wait ${retryAfter} s; retries used ${retryCount} of ${rateLimitRetries}, longest wait ${maxWait} s)`}`,
+      );
+      return retrying;
+    };
 
   clientCount += 1;
   const limiterId = `context-reach-${clientCount}`;
   let octokit!: Octokit;
   let loading: Promise<void> | null = null;
   // The Octokit stack is loaded and built on the first call (see octokit.ts for why).
-  const connect = () => loading ??= import('./octokit.js').then(({ getOctokit, actionsDefaults, retry, throttling }) => {
-    const baseFetch = (actionsDefaults.request?.fetch ?? globalThis.fetch) as typeof fetch;
-    const timedFetch = (url: string | URL | Request, init?: RequestInit): Promise<Response> =>
-      baseFetch(url, { ...init, signal: init?.signal ?? AbortSignal.timeout(timeoutMs) });
-    octokit = getOctokit(token, {
-      baseUrl: options.baseUrl ?? 'https://api.github.com',
-      log,
-      request: { ...actionsDefaults.request, fetch: timedFetch },
-      retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
-      throttle: {
-        // One limiter set per client: spacing between writes is per run, not shared across clients.
-        id: limiterId,
-        retryAfterBaseValue: msPerSecond,
-        onRateLimit: limitHandler('rate limit'),
-        onSecondaryRateLimit: limitHandler('secondary rate limit'),
+  const connect = () =>
+    (loading ??= import('./octokit.js').then(
+      ({ getOctokit, actionsDefaults, retry, throttling }) => {
+        const baseFetch = (actionsDefaults.request?.fetch ?? globalThis.fetch) as typeof fetch;
+        const timedFetch = (url: string | URL | Request, init?: RequestInit): Promise<Response> =>
+          baseFetch(url, { ...init, signal: init?.signal ?? AbortSignal.timeout(timeoutMs) });
+        octokit = getOctokit(
+          token,
+          {
+            baseUrl: options.baseUrl ?? 'https://api.github.com',
+            log,
+            request: { ...actionsDefaults.request, fetch: timedFetch },
+            retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
+            throttle: {
+              // One limiter set per client: spacing between writes is per run, not shared across clients.
+              id: limiterId,
+              retryAfterBaseValue: msPerSecond,
+              onRateLimit: limitHandler('rate limit'),
+              onSecondaryRateLimit: limitHandler('secondary rate limit'),
+            },
+          },
+          retry,
+          throttling,
+        );
       },
-    }, retry, throttling);
-  });
+    ));
 
   async function call<T>(operation: string, run: () => Promise<T>): Promise<T> {
     try {
@@ -253,40 +318,76 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
       return await run();
     } catch (error) {
       if (error instanceof ApiError || error instanceof ContentTooLargeError) throw error;
-      const status = typeof (error as { status?: unknown }).status === 'number' ? (error as { status: number }).status : 0;
+      const status =
+        typeof (error as { status?: unknown }).status === 'number'
+          ? (error as { status: number }).status
+          : 0;
       const reason = redact([(error as Error).message ?? String(error)]);
-      throw new ApiError(status, `GitHub API ${operation} failed${status ? ` with status ${status}` : ''}: ${reason}`, operation);
+      throw new ApiError(
+        status,
+        `GitHub API ${operation} failed${status ? ` with status ${status}` : ''}: ${reason}`,
+        operation,
+      );
     }
   }
 
   let identityAsked: Promise<string | null> | null = null;
-  const identity = (): Promise<string | null> => identityAsked ??= (async () => {
-    if (commentAuthor !== null) return commentAuthor;
-    try {
-      return await call('read the authenticated user', async () => (await octokit.rest.users.getAuthenticated()).data.login);
-    } catch (error) {
-      // An installation token (the workflow's own, or an app's) may not read /user: 403.
-      if (!(error instanceof ApiError) || (error.status !== 403 && error.status !== 401 && error.status !== 404)) throw error;
-    }
-    try {
-      return await call('read the authenticated identity (GraphQL viewer)', async () => {
-        const answer = await octokit.graphql<{ viewer?: { login?: unknown } }>('query { viewer { login } }');
-        return typeof answer.viewer?.login === 'string' && answer.viewer.login !== '' ? answer.viewer.login : null;
-      });
-    } catch (error) {
-      log.warn(`Could not tell which account the token acts as (${error instanceof Error ? error.message : String(error)}); the report comment is recognised by the author of the comment this run writes.`);
-      return null;
-    }
-  })();
+  const identity = (): Promise<string | null> =>
+    (identityAsked ??= (async () => {
+      if (commentAuthor !== null) return commentAuthor;
+      try {
+        return await call(
+          'read the authenticated user',
+          async () => (await octokit.rest.users.getAuthenticated()).data.login,
+        );
+      } catch (error) {
+        // An installation token (the workflow's own, or an app's) may not read /user: 403.
+        if (
+          !(error instanceof ApiError) ||
+          (error.status !== 403 && error.status !== 401 && error.status !== 404)
+        )
+          throw error;
+      }
+      try {
+        return await call('read the authenticated identity (GraphQL viewer)', async () => {
+          const answer = await octokit.graphql<{ viewer?: { login?: unknown } }>(
+            'query { viewer { login } }',
+          );
+          return typeof answer.viewer?.login === 'string' && answer.viewer.login !== ''
+            ? answer.viewer.login
+            : null;
+        });
+      } catch (error) {
+        log.warn(
+          `Could not tell which account the token acts as (${error instanceof Error ? error.message : String(error)}); the report comment is recognised by the author of the comment this run writes.`,
+        );
+        return null;
+      }
+    })());
 
-  const isOurs = (comment: { body?: string | null; user?: { login: string } | null }, marker: string, login: string): boolean =>
-    (comment.body ?? '').startsWith(marker) && comment.user?.login === login;
+  const isOurs = (
+    comment: { body?: string | null; user?: { login: string } | null },
+    marker: string,
+    login: string,
+  ): boolean => (comment.body ?? '').startsWith(marker) && comment.user?.login === login;
 
-  const markedComments = (owner: string, repo: string, issueNumber: number, marker: string, login: string, firstOnly: boolean) =>
+  const markedComments = (
+    owner: string,
+    repo: string,
+    issueNumber: number,
+    marker: string,
+    login: string,
+    firstOnly: boolean,
+  ) =>
     call(`list comments of #${issueNumber}`, async () => {
       const found: Comment[] = [];
       let pages = 0;
-      for await (const page of octokit.paginate.iterator(octokit.rest.issues.listComments, { owner, repo, issue_number: issueNumber, per_page: 100 })) {
+      for await (const page of octokit.paginate.iterator(octokit.rest.issues.listComments, {
+        owner,
+        repo,
+        issue_number: issueNumber,
+        per_page: 100,
+      })) {
         for (const comment of page.data) {
           if (!isOurs(comment, marker, login)) continue;
           found.push(toComment(comment));
@@ -294,7 +395,9 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
         }
         pages += 1;
         if (pages >= MAX_COMMENT_PAGES) {
-          log.warn(`Stopped looking for the report comment after ${pages * 100} comments on #${issueNumber}.`);
+          log.warn(
+            `Stopped looking for the report comment after ${pages * 100} comments on #${issueNumber}.`,
+          );
           break;
         }
       }
@@ -302,23 +405,38 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     });
 
   type TreeItem = { path?: string; mode?: string; type?: string; sha?: string };
-  const treeOf = (owner: string, repo: string, commit: string) => call(`read the tree of ${commit}`, async () => {
-    const { data } = await octokit.rest.git.getTree({ owner, repo, tree_sha: commit, recursive: 'true' });
-    if (data.truncated) {
-      throw new ApiError(0, `GitHub cut the file tree of ${commit} short (over its 100,000 entries or 7 MB), so the changed files cannot all be listed; check out with fetch-depth: 0 so the action reads the whole change from git`, 'read a tree');
-    }
-    const entries = new Map<string, string>();
-    for (const item of data.tree as TreeItem[]) {
-      if (item.type === 'tree' || typeof item.path !== 'string') continue;
-      entries.set(item.path, `${item.mode ?? ''} ${item.sha ?? ''}`);
-    }
-    return entries;
-  });
+  const treeOf = (owner: string, repo: string, commit: string) =>
+    call(`read the tree of ${commit}`, async () => {
+      const { data } = await octokit.rest.git.getTree({
+        owner,
+        repo,
+        tree_sha: commit,
+        recursive: 'true',
+      });
+      if (data.truncated) {
+        throw new ApiError(
+          0,
+          `GitHub cut the file tree of ${commit} short (over its 100,000 entries or 7 MB), so the changed files cannot all be listed; check out with fetch-depth: 0 so the action reads the whole change from git`,
+          'read a tree',
+        );
+      }
+      const entries = new Map<string, string>();
+      for (const item of data.tree as TreeItem[]) {
+        if (item.type === 'tree' || typeof item.path !== 'string') continue;
+        entries.set(item.path, `${item.mode ?? ''} ${item.sha ?? ''}`);
+      }
+      return entries;
+    });
 
   return {
     listPullRequestFiles(owner, repo, number) {
       return call(`list files of pull request #${number}`, async () => {
-        const entries = await octokit.paginate(octokit.rest.pulls.listFiles, { owner, repo, pull_number: number, per_page: 100 });
+        const entries = await octokit.paginate(octokit.rest.pulls.listFiles, {
+          owner,
+          repo,
+          pull_number: number,
+          per_page: 100,
+        });
         const files = entries.map(toChangedFile);
         return { files, truncated: files.length >= PULL_REQUEST_FILE_CAP };
       });
@@ -334,19 +452,32 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
           throw error;
         }
         if (Array.isArray(data) || data === null || typeof data !== 'object') return null;
-        const item = data as { type: string; path: string; size: number; encoding?: string; content?: string };
+        const item = data as {
+          type: string;
+          path: string;
+          size: number;
+          encoding?: string;
+          content?: string;
+        };
         // GitHub answers a symlink to a file in the repository with that file: its path gives it away.
         if (item.type !== 'file' || item.path !== path) return null;
-        if (item.size > MAX_CONFIG_BYTES) throw new ContentTooLargeError(path, item.size, MAX_CONFIG_BYTES);
+        if (item.size > MAX_CONFIG_BYTES)
+          throw new ContentTooLargeError(path, item.size, MAX_CONFIG_BYTES);
         if (item.size === 0) return new Uint8Array(0);
         if (item.encoding === 'base64' && item.content) {
           const bytes = Buffer.from(item.content, 'base64');
-          if (bytes.byteLength > MAX_CONFIG_BYTES) throw new ContentTooLargeError(path, bytes.byteLength, MAX_CONFIG_BYTES);
+          if (bytes.byteLength > MAX_CONFIG_BYTES)
+            throw new ContentTooLargeError(path, bytes.byteLength, MAX_CONFIG_BYTES);
           return new Uint8Array(bytes.buffer, bytes.byteOffset, bytes.byteLength);
         }
         // Files over 1 MB come without content (encoding "none"); the raw media type carries them.
         const raw = await octokit.rest.repos.getContent({
-          owner, repo, path, ref, mediaType: { format: 'raw' }, request: { parseSuccessResponseBody: false },
+          owner,
+          repo,
+          path,
+          ref,
+          mediaType: { format: 'raw' },
+          request: { parseSuccessResponseBody: false },
         });
         return readBounded(raw.data, path, MAX_CONFIG_BYTES);
       });
@@ -388,7 +519,12 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
 
     mergeBase(owner, repo, base, head) {
       return call(`compare ${base}...${head}`, async () => {
-        const { data } = await octokit.rest.repos.compareCommitsWithBasehead({ owner, repo, basehead: `${base}...${head}`, per_page: 1 });
+        const { data } = await octokit.rest.repos.compareCommitsWithBasehead({
+          owner,
+          repo,
+          basehead: `${base}...${head}`,
+          per_page: 1,
+        });
         return data.merge_base_commit.sha;
       });
     },
@@ -401,14 +537,19 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
         if (old === undefined) changes.push({ status: 'added', path, previousPath: null });
         else if (old !== entry) changes.push({ status: 'modified', path, previousPath: null });
       }
-      for (const path of before.keys()) if (!after.has(path)) changes.push({ status: 'deleted', path, previousPath: null });
+      for (const path of before.keys())
+        if (!after.has(path)) changes.push({ status: 'deleted', path, previousPath: null });
       return changes;
     },
 
     getComment(owner, repo, commentId) {
       return call(`read comment ${commentId}`, async () => {
         try {
-          const { data } = await octokit.rest.issues.getComment({ owner, repo, comment_id: commentId });
+          const { data } = await octokit.rest.issues.getComment({
+            owner,
+            repo,
+            comment_id: commentId,
+          });
           return toComment(data);
         } catch (error) {
           if ((error as { status?: number }).status === 404) return null;
@@ -419,14 +560,25 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
 
     createComment(owner, repo, issueNumber, body) {
       return call(`create a comment on #${issueNumber}`, async () => {
-        const { data } = await octokit.rest.issues.createComment({ owner, repo, issue_number: issueNumber, body, request: { retries: 0 } });
+        const { data } = await octokit.rest.issues.createComment({
+          owner,
+          repo,
+          issue_number: issueNumber,
+          body,
+          request: { retries: 0 },
+        });
         return toComment(data);
       });
     },
 
     updateComment(owner, repo, commentId, body) {
       return call(`update comment ${commentId}`, async () => {
-        const { data } = await octokit.rest.issues.updateComment({ owner, repo, comment_id: commentId, body });
+        const { data } = await octokit.rest.issues.updateComment({
+          owner,
+          repo,
+          comment_id: commentId,
+          body,
+        });
         return toComment(data);
       });
     },
@@ -448,8 +600,18 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
 
     listOpenPullRequests(owner, repo, head) {
       return call(`list open pull requests of ${head}`, async () => {
-        const entries = await octokit.paginate(octokit.rest.pulls.list, { owner, repo, state: 'open', head, per_page: 100 });
-        return entries.map((entry) => ({ number: entry.number, headSha: entry.head.sha, headLabel: entry.head.label }));
+        const entries = await octokit.paginate(octokit.rest.pulls.list, {
+          owner,
+          repo,
+          state: 'open',
+          head,
+          per_page: 100,
+        });
+        return entries.map((entry) => ({
+          number: entry.number,
+          headSha: entry.head.sha,
+          headLabel: entry.head.label,
+        }));
       });
     },
   };
@@ -486,12 +648,17 @@ export async function publishComment(
   const all = await client.listMarkedComments(owner, repo, issueNumber, marker, login);
   if (all.length <= 1) return written;
   const [oldest, ...others] = all as [Comment, ...Comment[]];
-  const kept = oldest.id === written.comment.id ? written.comment : await client.updateComment(owner, repo, oldest.id, body);
+  const kept =
+    oldest.id === written.comment.id
+      ? written.comment
+      : await client.updateComment(owner, repo, oldest.id, body);
   for (const other of others) {
     try {
       await client.deleteComment(owner, repo, other.id);
     } catch {
-      await client.updateComment(owner, repo, other.id, supersededBody(kept.url)).catch(() => undefined);
+      await client
+        .updateComment(owner, repo, other.id, supersededBody(kept.url))
+        .catch(() => undefined);
     }
   }
   return { comment: kept, action: written.action };
@@ -505,11 +672,15 @@ async function writeComment(
   const existing = await client.findComment(owner, repo, issueNumber, marker);
   if (existing) {
     try {
-      return { comment: await client.updateComment(owner, repo, existing.id, body), action: 'updated' };
+      return {
+        comment: await client.updateComment(owner, repo, existing.id, body),
+        action: 'updated',
+      };
     } catch (error) {
       if (!(error instanceof ApiError)) throw error;
-      const gone = isNotFoundError(error)
-        || (error.status === 422 && (await client.getComment(owner, repo, existing.id)) === null);
+      const gone =
+        isNotFoundError(error) ||
+        (error.status === 422 && (await client.getComment(owner, repo, existing.id)) === null);
       if (!gone) throw error;
     }
   }
@@ -517,13 +688,17 @@ async function writeComment(
   // dropped connection never leaves two report comments.
   for (let attempt = 1; ; attempt += 1) {
     try {
-      return { comment: await client.createComment(owner, repo, issueNumber, body), action: 'created' };
+      return {
+        comment: await client.createComment(owner, repo, issueNumber, body),
+        action: 'created',
+      };
     } catch (error) {
       if (!outcomeUnknown(error) || attempt >= CREATE_ATTEMPTS) throw error;
     }
     const landed = await client.findComment(owner, repo, issueNumber, marker);
     if (landed) {
-      const comment = landed.body === body ? landed : await client.updateComment(owner, repo, landed.id, body);
+      const comment =
+        landed.body === body ? landed : await client.updateComment(owner, repo, landed.id, body);
       return { comment, action: 'created' };
     }
   }

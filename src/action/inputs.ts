@@ -46,7 +46,10 @@ export interface Settings {
 export type GetInput = (name: string) => string;
 
 export class InputError extends Error {
-  constructor(readonly input: string, message: string) {
+  constructor(
+    readonly input: string,
+    message: string,
+  ) {
     super(message);
     this.name = 'InputError';
   }
@@ -60,13 +63,19 @@ function quote(value: string): string {
 function oneOf<T extends string>(name: string, raw: string, allowed: readonly T[], fallback: T): T {
   if (raw === '') return fallback;
   if ((allowed as readonly string[]).includes(raw)) return raw as T;
-  throw new InputError(name, `Input "${name}" is ${quote(raw)}; expected one of ${allowed.join(', ')} (action.yml, input ${name}).`);
+  throw new InputError(
+    name,
+    `Input "${name}" is ${quote(raw)}; expected one of ${allowed.join(', ')} (action.yml, input ${name}).`,
+  );
 }
 
 /** A path the action writes to or reads its own files from: no control characters. */
 function outputPath(name: string, raw: string): string {
   if (/[\u0000-\u001f]/.test(raw)) {
-    throw new InputError(name, `Input "${name}" is ${quote(raw)}; expected a file path without control characters (action.yml, input ${name}).`);
+    throw new InputError(
+      name,
+      `Input "${name}" is ${quote(raw)}; expected a file path without control characters (action.yml, input ${name}).`,
+    );
   }
   return raw;
 }
@@ -80,15 +89,26 @@ function webLink(name: string, raw: string): string {
     url = null;
   }
   if (url === null || !/^https?:$/.test(url.protocol) || /[\s\u0000-\u001f]/.test(raw)) {
-    throw new InputError(name, `Input "${name}" is ${quote(raw)}; expected an absolute http or https URL such as "https://example.org/report.html" (action.yml, input ${name}).`);
+    throw new InputError(
+      name,
+      `Input "${name}" is ${quote(raw)}; expected an absolute http or https URL such as "https://example.org/report.html" (action.yml, input ${name}).`,
+    );
   }
   return raw;
 }
 
 function repositoryPath(name: string, raw: string): string {
   const parts = raw.split('/');
-  if (/[\u0000-\u001f\\]/.test(raw) || raw.startsWith('/') || /^[A-Za-z]:/.test(raw) || parts.some((part) => part === '' || part === '.' || part === '..')) {
-    throw new InputError(name, `Input "${name}" is ${quote(raw)}; expected a path inside the repository such as ".github/context-reach.yml" (relative, "/" separators, no "." or ".." parts) (action.yml, input ${name}).`);
+  if (
+    /[\u0000-\u001f\\]/.test(raw) ||
+    raw.startsWith('/') ||
+    /^[A-Za-z]:/.test(raw) ||
+    parts.some((part) => part === '' || part === '.' || part === '..')
+  ) {
+    throw new InputError(
+      name,
+      `Input "${name}" is ${quote(raw)}; expected a path inside the repository such as ".github/context-reach.yml" (relative, "/" separators, no "." or ".." parts) (action.yml, input ${name}).`,
+    );
   }
   return raw;
 }
@@ -97,18 +117,30 @@ function repositoryPath(name: string, raw: string): string {
  * Every input, defaulted and checked. `getInput` returns the raw input (the runner's `INPUT_*`
  * value); `env` supplies `RUNNER_TEMP`.
  */
-export function readSettings(getInput: GetInput, env: Readonly<Record<string, string | undefined>>): Settings {
+export function readSettings(
+  getInput: GetInput,
+  env: Readonly<Record<string, string | undefined>>,
+): Settings {
   const read = (name: string): string => (getInput(name) ?? '').trim();
 
   const token = read('github-token');
   if (/\s/.test(token)) {
     // The value is a secret: say what is wrong without quoting it.
-    throw new InputError('github-token', 'Input "github-token" contains whitespace; expected a single token (action.yml, input github-token).');
+    throw new InputError(
+      'github-token',
+      'Input "github-token" contains whitespace; expected a single token (action.yml, input github-token).',
+    );
   }
   const policyRaw = read('policy');
   const baseRaw = read('base');
-  if (baseRaw !== '' && (baseRaw.startsWith('-') || /[\s\u0000-\u001f~^:?*[\\]/.test(baseRaw) || baseRaw.includes('..'))) {
-    throw new InputError('base', `Input "base" is ${quote(baseRaw)}; expected a branch, tag or commit id such as "main" (action.yml, input base).`);
+  if (
+    baseRaw !== '' &&
+    (baseRaw.startsWith('-') || /[\s\u0000-\u001f~^:?*[\\]/.test(baseRaw) || baseRaw.includes('..'))
+  ) {
+    throw new InputError(
+      'base',
+      `Input "base" is ${quote(baseRaw)}; expected a branch, tag or commit id such as "main" (action.yml, input base).`,
+    );
   }
   const reportRaw = read('report-json');
   const sarifRaw = read('sarif');
@@ -122,7 +154,10 @@ export function readSettings(getInput: GetInput, env: Readonly<Record<string, st
     failOn: oneOf('fail-on', read('fail-on'), ['block', 'warn', 'never'] as const, 'block'),
     comment: oneOf('comment', read('comment'), ['update', 'off'] as const, 'update'),
     suggestions: oneOf('suggestions', read('suggestions'), ['on', 'off'] as const, 'on'),
-    reportJson: reportRaw === '' ? join(temp, 'context-reach', 'report.json') : outputPath('report-json', reportRaw),
+    reportJson:
+      reportRaw === ''
+        ? join(temp, 'context-reach', 'report.json')
+        : outputPath('report-json', reportRaw),
     sarif: sarifRaw === '' ? null : outputPath('sarif', sarifRaw),
     base: baseRaw === '' ? null : baseRaw,
     htmlReport: htmlRaw === '' ? null : outputPath('html-report', htmlRaw),

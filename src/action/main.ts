@@ -16,7 +16,8 @@ runAction({
   readJson: async (path) => JSON.parse(await readFile(path, 'utf8')) as unknown,
   readFile: (path, maxBytes) => createFileSource(maxBytes).read(path),
   // Never through a symbolic link the pull request put in the checkout.
-  writeFile: (path, text) => writeReportFile(path, text, process.env.GITHUB_WORKSPACE ?? process.cwd()),
+  writeFile: (path, text) =>
+    writeReportFile(path, text, process.env.GITHUB_WORKSPACE ?? process.cwd()),
   createGit: (cwd) => createGitReader(cwd),
   createGitHub: (token, options) => createGitHubClient(token, options),
 }).catch((error: unknown) => {

@@ -51,7 +51,8 @@ async function pullRequestsOfHead(api: GitHubClient, run: WorkflowRunInfo): Prom
   for (const number of [...candidates].sort((a, b) => a - b)) {
     const pull = await api.getPullRequest(run.owner, run.repo, number).catch(() => null);
     // A closed (or merged) pull request gets no new comment, whatever number the payload names.
-    if (pull !== null && pull.headSha === run.headSha && pull.state === 'open') confirmed.push(number);
+    if (pull !== null && pull.headSha === run.headSha && pull.state === 'open')
+      confirmed.push(number);
   }
   return confirmed;
 }
@@ -61,38 +62,58 @@ async function readReport(deps: PublishDeps, path: string): Promise<GateReport> 
   try {
     bytes = await deps.readFile(path, MAX_REPORT_BYTES);
   } catch (error) {
-    throw new PublishError(`The report to publish could not be read: ${error instanceof Error ? error.message : String(error)}; expected the JSON report the first workflow uploaded (input publish-report).`);
+    throw new PublishError(
+      `The report to publish could not be read: ${error instanceof Error ? error.message : String(error)}; expected the JSON report the first workflow uploaded (input publish-report).`,
+    );
   }
   let text: string;
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
   } catch {
-    throw new PublishError(`${path} is not UTF-8 text; expected the JSON report the first workflow uploaded (input publish-report).`);
+    throw new PublishError(
+      `${path} is not UTF-8 text; expected the JSON report the first workflow uploaded (input publish-report).`,
+    );
   }
   try {
     return readGateJson(text, path);
   } catch (error) {
-    throw new PublishError(`Refusing to publish: ${error instanceof Error ? error.message : String(error)}.`);
+    throw new PublishError(
+      `Refusing to publish: ${error instanceof Error ? error.message : String(error)}.`,
+    );
   }
 }
 
 /** Publish mode: check the report, find its pull request through the API, keep the one comment. */
-export async function runPublish(deps: PublishDeps, settings: Settings & { publishReport: string }): Promise<void> {
+export async function runPublish(
+  deps: PublishDeps,
+  settings: Settings & { publishReport: string },
+): Promise<void> {
   const { env, out, api } = deps;
   const eventName = env.GITHUB_EVENT_NAME ?? '';
   if (eventName !== 'workflow_run') {
-    throw new PublishError(`Input publish-report runs on a workflow_run event (the second workflow of the fork-safe recipe); this run is ${JSON.stringify(eventName)}.`);
+    throw new PublishError(
+      `Input publish-report runs on a workflow_run event (the second workflow of the fork-safe recipe); this run is ${JSON.stringify(eventName)}.`,
+    );
   }
-  const run = parseWorkflowRun(env.GITHUB_EVENT_PATH ? await deps.readJson(env.GITHUB_EVENT_PATH) : {});
+  const run = parseWorkflowRun(
+    env.GITHUB_EVENT_PATH ? await deps.readJson(env.GITHUB_EVENT_PATH) : {},
+  );
   if (!PUBLISHED_EVENTS.includes(run.event)) {
-    out.notice(`The workflow run ${run.runId} ran on ${JSON.stringify(run.event)}, not on a pull request: nothing to publish.`);
+    out.notice(
+      `The workflow run ${run.runId} ran on ${JSON.stringify(run.event)}, not on a pull request: nothing to publish.`,
+    );
     return;
   }
-  if (api === null) throw new PublishError('Publish mode needs a token that may comment (input github-token, with pull-requests: write).');
+  if (api === null)
+    throw new PublishError(
+      'Publish mode needs a token that may comment (input github-token, with pull-requests: write).',
+    );
 
   const report = await readReport(deps, settings.publishReport);
   if (report.head !== run.headSha) {
-    throw new PublishError(`Refusing to publish: the report judges head ${JSON.stringify(report.head.slice(0, 40))}, but workflow run ${run.runId} ran on ${run.headSha}; a report is published only for the commit its run checked.`);
+    throw new PublishError(
+      `Refusing to publish: the report judges head ${JSON.stringify(report.head.slice(0, 40))}, but workflow run ${run.runId} ran on ${run.headSha}; a report is published only for the commit its run checked.`,
+    );
   }
 
   const server = env.GITHUB_SERVER_URL ?? 'https://github.com';
@@ -101,13 +122,25 @@ export async function runPublish(deps: PublishDeps, settings: Settings & { publi
   let commentUrl = '';
   if (pulls.length === 1) {
     const body = renderComment(report, { blobUrl });
-    const published = await publishComment(api, { owner: run.owner, repo: run.repo, issueNumber: pulls[0]!, marker: COMMENT_MARKER, body });
+    const published = await publishComment(api, {
+      owner: run.owner,
+      repo: run.repo,
+      issueNumber: pulls[0]!,
+      marker: COMMENT_MARKER,
+      body,
+    });
     commentUrl = published.comment.url;
-    out.info(`${published.action === 'created' ? 'Created' : 'Updated'} the report comment on #${pulls[0]}: ${commentUrl}`);
+    out.info(
+      `${published.action === 'created' ? 'Created' : 'Updated'} the report comment on #${pulls[0]}: ${commentUrl}`,
+    );
   } else if (pulls.length === 0) {
-    out.notice(`No open pull request has head ${run.headSha} now (it may have been pushed again or closed): the report of workflow run ${run.runId} was not published.`);
+    out.notice(
+      `No open pull request has head ${run.headSha} now (it may have been pushed again or closed): the report of workflow run ${run.runId} was not published.`,
+    );
   } else {
-    out.warning(`Pull requests ${pulls.map((n) => `#${n}`).join(', ')} all have head ${run.headSha}: the report was not published, as it cannot say which one it judged.`);
+    out.warning(
+      `Pull requests ${pulls.map((n) => `#${n}`).join(', ')} all have head ${run.headSha}: the report was not published, as it cannot say which one it judged.`,
+    );
   }
   await out.summary(fitSummary((limit) => renderComment(report, { blobUrl, limit })));
   out.output('verdict', report.verdict);
@@ -115,5 +148,7 @@ export async function runPublish(deps: PublishDeps, settings: Settings & { publi
   out.output('warnings', String(report.warnings));
   out.output('report-json', settings.publishReport);
   out.output('comment-url', commentUrl);
-  out.info(`context-reach published verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings); the first workflow's check carries the decision.`);
+  out.info(
+    `context-reach published verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings); the first workflow's check carries the decision.`,
+  );
 }

@@ -47,10 +47,17 @@ export function diffRightLines(patch: string): Set<number> {
   let inHunk = false;
   for (const row of patch.split('\n')) {
     const hunk = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,\d+)? @@/.exec(row);
-    if (hunk) { right = Number(hunk[1]); inHunk = true; continue; }
+    if (hunk) {
+      right = Number(hunk[1]);
+      inHunk = true;
+      continue;
+    }
     if (!inHunk || row.startsWith('\\')) continue;
     if (row.startsWith('-')) continue;
-    if (row.startsWith('+') || row.startsWith(' ') || row === '') { lines.add(right); right += 1; }
+    if (row.startsWith('+') || row.startsWith(' ') || row === '') {
+      lines.add(right);
+      right += 1;
+    }
   }
   return lines;
 }
@@ -68,9 +75,15 @@ export interface SuggestionOutcome {
  * moved is deleted and written again (a review comment cannot move); one whose body changed is
  * updated in place; ours that no plan names (the finding is fixed or gone) are deleted.
  */
-export async function syncSuggestions(api: ReviewApi, target: ReviewTarget, planned: readonly PlannedSuggestion[]): Promise<SuggestionOutcome> {
+export async function syncSuggestions(
+  api: ReviewApi,
+  target: ReviewTarget,
+  planned: readonly PlannedSuggestion[],
+): Promise<SuggestionOutcome> {
   const outcome: SuggestionOutcome = { created: 0, updated: 0, kept: 0, removed: 0 };
-  const ours = (await api.listReviewComments(target)).filter((c) => c.byBot && suggestionIdOf(c.body) !== null);
+  const ours = (await api.listReviewComments(target)).filter(
+    (c) => c.byBot && suggestionIdOf(c.body) !== null,
+  );
   const byId = new Map<string, ReviewComment[]>();
   for (const comment of ours) {
     const id = suggestionIdOf(comment.body)!;
@@ -80,21 +93,36 @@ export async function syncSuggestions(api: ReviewApi, target: ReviewTarget, plan
   for (const suggestion of planned) {
     const [first, ...extra] = byId.get(suggestion.id) ?? [];
     // Duplicates left by an interrupted run go; one stays.
-    for (const comment of extra) { await api.deleteReviewComment(target, comment.id); outcome.removed += 1; }
-    const samePlace = first && first.path === suggestion.path && first.line === suggestion.line
-      && (first.startLine ?? first.line) === suggestion.startLine;
+    for (const comment of extra) {
+      await api.deleteReviewComment(target, comment.id);
+      outcome.removed += 1;
+    }
+    const samePlace =
+      first &&
+      first.path === suggestion.path &&
+      first.line === suggestion.line &&
+      (first.startLine ?? first.line) === suggestion.startLine;
     if (first && samePlace) {
       if (first.body === suggestion.body) outcome.kept += 1;
-      else { await api.updateReviewComment(target, first.id, suggestion.body); outcome.updated += 1; }
+      else {
+        await api.updateReviewComment(target, first.id, suggestion.body);
+        outcome.updated += 1;
+      }
       continue;
     }
-    if (first) { await api.deleteReviewComment(target, first.id); outcome.removed += 1; }
+    if (first) {
+      await api.deleteReviewComment(target, first.id);
+      outcome.removed += 1;
+    }
     await api.createReviewComment(target, suggestion);
     outcome.created += 1;
   }
   for (const [id, comments] of byId) {
     if (wanted.has(id)) continue;
-    for (const comment of comments) { await api.deleteReviewComment(target, comment.id); outcome.removed += 1; }
+    for (const comment of comments) {
+      await api.deleteReviewComment(target, comment.id);
+      outcome.removed += 1;
+    }
   }
   return outcome;
 }
@@ -107,22 +135,46 @@ export function createReviewApi(token: string, options: { baseUrl?: string }): R
   const client = async (): Promise<Octokit> => {
     if (octokit) return octokit;
     const { getOctokit, actionsDefaults, retry } = await import('./octokit.js');
-    octokit = getOctokit(token, { baseUrl: options.baseUrl ?? 'https://api.github.com', request: { ...actionsDefaults.request }, retry: { retries: 2 } }, retry);
+    octokit = getOctokit(
+      token,
+      {
+        baseUrl: options.baseUrl ?? 'https://api.github.com',
+        request: { ...actionsDefaults.request },
+        retry: { retries: 2 },
+      },
+      retry,
+    );
     return octokit;
   };
   return {
     async listReviewComments({ owner, repo, pull }) {
       const kit = await client();
-      const entries = await kit.paginate(kit.rest.pulls.listReviewComments, { owner, repo, pull_number: pull, per_page: 100 });
+      const entries = await kit.paginate(kit.rest.pulls.listReviewComments, {
+        owner,
+        repo,
+        pull_number: pull,
+        per_page: 100,
+      });
       return entries.map((c) => ({
-        id: c.id, path: c.path, line: c.line ?? null, startLine: c.start_line ?? null, body: c.body,
+        id: c.id,
+        path: c.path,
+        line: c.line ?? null,
+        startLine: c.start_line ?? null,
+        body: c.body,
         byBot: c.user?.type === 'Bot',
       }));
     },
     async createReviewComment({ owner, repo, pull, headSha }, s) {
       const kit = await client();
       await kit.rest.pulls.createReviewComment({
-        owner, repo, pull_number: pull, commit_id: headSha, path: s.path, body: s.body, line: s.line, side: 'RIGHT',
+        owner,
+        repo,
+        pull_number: pull,
+        commit_id: headSha,
+        path: s.path,
+        body: s.body,
+        line: s.line,
+        side: 'RIGHT',
         ...(s.startLine < s.line ? { start_line: s.startLine, start_side: 'RIGHT' as const } : {}),
         request: { retries: 0 },
       });
@@ -137,8 +189,17 @@ export function createReviewApi(token: string, options: { baseUrl?: string }): R
     },
     async listPatches({ owner, repo, pull }) {
       const kit = await client();
-      const entries = await kit.paginate(kit.rest.pulls.listFiles, { owner, repo, pull_number: pull, per_page: 100 });
-      return new Map(entries.filter((e) => typeof e.patch === 'string').map((e) => [e.filename, e.patch as string]));
+      const entries = await kit.paginate(kit.rest.pulls.listFiles, {
+        owner,
+        repo,
+        pull_number: pull,
+        per_page: 100,
+      });
+      return new Map(
+        entries
+          .filter((e) => typeof e.patch === 'string')
+          .map((e) => [e.filename, e.patch as string]),
+      );
     },
   };
 }
@@ -146,11 +207,14 @@ export function createReviewApi(token: string, options: { baseUrl?: string }): R
 /** Whether an error from the API is a refusal to write (a read-only token, as forks get). */
 export function isWriteRefused(error: unknown): boolean {
   const status = (error as { status?: unknown } | null)?.status;
-  return status === 403 || status === 404 && /not accessible/i.test(String((error as Error).message));
+  return (
+    status === 403 || (status === 404 && /not accessible/i.test(String((error as Error).message)))
+  );
 }
 
 /** Said when suggestions are skipped because the token may not write them. */
-export const SUGGESTIONS_SKIPPED = 'Review suggestions were skipped: the token cannot write review comments on this pull request (a read-only token, as pull requests from forks get). The fixes are in the report comment and the job summary.';
+export const SUGGESTIONS_SKIPPED =
+  'Review suggestions were skipped: the token cannot write review comments on this pull request (a read-only token, as pull requests from forks get). The fixes are in the report comment and the job summary.';
 
 /**
  * Plans and syncs the suggestions of one report: the head text of each file with a blocking
@@ -165,16 +229,25 @@ export async function publishSuggestions(
 ): Promise<{ outcome: SuggestionOutcome | null; notice: string | null }> {
   if (target.isFork) return { outcome: null, notice: SUGGESTIONS_SKIPPED };
   const { planSuggestions } = await import('../core/render/suggestions.js');
-  const blocking = report.files.filter((f) => f.findings.some((x) => x.counts === 'block' && x.remedy));
+  const blocking = report.files.filter((f) =>
+    f.findings.some((x) => x.counts === 'block' && x.remedy),
+  );
   const texts = new Map<string, string>();
   for (const file of blocking) {
     const bytes = await readHead(file.path).catch(() => null);
-    if (bytes) texts.set(file.path, new TextDecoder('utf-8', { fatal: false }).decode(bytes).replace(/^\uFEFF/, ''));
+    if (bytes)
+      texts.set(
+        file.path,
+        new TextDecoder('utf-8', { fatal: false }).decode(bytes).replace(/^\uFEFF/, ''),
+      );
   }
   try {
     const patches = blocking.length > 0 ? await api.listPatches(target) : new Map<string, string>();
     const lines = new Map([...patches].map(([path, patch]) => [path, diffRightLines(patch)]));
-    return { outcome: await syncSuggestions(api, target, planSuggestions(report, texts, lines)), notice: null };
+    return {
+      outcome: await syncSuggestions(api, target, planSuggestions(report, texts, lines)),
+      notice: null,
+    };
   } catch (error) {
     if (isWriteRefused(error)) return { outcome: null, notice: SUGGESTIONS_SKIPPED };
     throw error;

@@ -11,7 +11,12 @@ import { renderSarif } from '../core/render/sarif.js';
 import { VERSION } from '../core/version.js';
 import { parseEvent, type EventInfo } from './event.js';
 import type { GitReader } from './git.js';
-import { isPermissionError, publishComment, type GitHubClient, type GitHubClientOptions } from './github.js';
+import {
+  isPermissionError,
+  publishComment,
+  type GitHubClient,
+  type GitHubClientOptions,
+} from './github.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { runPublish } from './publish.js';
 import { createReviewApi, publishSuggestions, type ReviewApi } from './review-suggestions.js';
@@ -32,9 +37,11 @@ export interface ActionDeps {
   createReviews?(token: string, options: { baseUrl?: string }): ReviewApi;
 }
 
-export const FORK_NOTICE = 'The token cannot comment on this pull request (a read-only token, as pull requests from forks get). The report is in the job summary and the annotations, and the verdict still decides the check. To get the comment on fork pull requests, use the two-workflow recipe in the README ("Pull requests from forks").';
+export const FORK_NOTICE =
+  'The token cannot comment on this pull request (a read-only token, as pull requests from forks get). The report is in the job summary and the annotations, and the verdict still decides the check. To get the comment on fork pull requests, use the two-workflow recipe in the README ("Pull requests from forks").';
 
-export const COMMENT_FAILED_NOTICE = 'The report comment could not be written; the report is in the job summary, the annotations and the JSON report, and the verdict still decides the check';
+export const COMMENT_FAILED_NOTICE =
+  'The report comment could not be written; the report is in the job summary, the annotations and the JSON report, and the verdict still decides the check';
 
 interface Changes {
   /** Where the pull request's changes start: the merge base when git knows it. */
@@ -48,12 +55,20 @@ interface Changes {
 }
 
 /** Changes read from the local repository: the whole diff, every file through a few git processes. */
-async function localChanges(git: GitReader, baseSha: string, headSha: string, start: string | null): Promise<Changes> {
+async function localChanges(
+  git: GitReader,
+  baseSha: string,
+  headSha: string,
+  start: string | null,
+): Promise<Changes> {
   // Like the pull request's own diff: changes since head left the base branch, not the base
   // branch's later commits. The policy still comes from the base branch's commit.
   const from = start ?? (await git.mergeBase(baseSha, headSha).catch(() => null)) ?? baseSha;
   return {
-    base: from, policyRef: baseSha, head: headSha, changes: await git.changedFiles(from, headSha),
+    base: from,
+    policyRef: baseSha,
+    head: headSha,
+    changes: await git.changedFiles(from, headSha),
     source: {
       read: (ref, path) => git.show(ref, path),
       readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
@@ -69,18 +84,32 @@ async function localChanges(git: GitReader, baseSha: string, headSha: string, st
  * file); else the REST API, where a file list GitHub cuts short is completed from the two
  * commits' trees, or the run fails closed.
  */
-async function gatherChanges(event: EventInfo, base: string, git: GitReader, api: GitHubClient | null): Promise<Changes> {
+async function gatherChanges(
+  event: EventInfo,
+  base: string,
+  git: GitReader,
+  api: GitHubClient | null,
+): Promise<Changes> {
   // A checkout without the history (or without git at all) falls back to the API.
   const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
   const [baseSha, headSha] = await Promise.all([local(base), local(event.head)]);
   if (baseSha !== null && headSha !== null) return localChanges(git, baseSha, headSha, null);
   if (api === null || event.pullNumber === null) {
-    throw new Error(`The checkout lacks commit ${baseSha === null ? base : event.head} and there is ${api === null ? 'no token' : 'no pull request'} to ask the API instead; check out with fetch-depth: 0, or give a base input that exists.`);
+    throw new Error(
+      `The checkout lacks commit ${baseSha === null ? base : event.head} and there is ${api === null ? 'no token' : 'no pull request'} to ask the API instead; check out with fetch-depth: 0, or give a base input that exists.`,
+    );
   }
-  const mergeBase = await api.mergeBase(event.owner, event.repo, base, event.head).catch(() => null);
-  if (mergeBase !== null && await git.fetchCommits([mergeBase, base, event.head])) {
-    const [fetchedBase, fetchedHead, fetchedStart] = await Promise.all([local(base), local(event.head), local(mergeBase)]);
-    if (fetchedBase !== null && fetchedHead !== null && fetchedStart !== null) return localChanges(git, fetchedBase, fetchedHead, fetchedStart);
+  const mergeBase = await api
+    .mergeBase(event.owner, event.repo, base, event.head)
+    .catch(() => null);
+  if (mergeBase !== null && (await git.fetchCommits([mergeBase, base, event.head]))) {
+    const [fetchedBase, fetchedHead, fetchedStart] = await Promise.all([
+      local(base),
+      local(event.head),
+      local(mergeBase),
+    ]);
+    if (fetchedBase !== null && fetchedHead !== null && fetchedStart !== null)
+      return localChanges(git, fetchedBase, fetchedHead, fetchedStart);
   }
   const listed = await api.listPullRequestFiles(event.owner, event.repo, event.pullNumber);
   let changes = listed.files;
@@ -88,20 +117,26 @@ async function gatherChanges(event: EventInfo, base: string, git: GitReader, api
   if (listed.truncated) {
     // GitHub lists at most 3,000 files of a pull request (and compares at most 300): the two
     // commits' trees list every path. When even they are cut short, the run fails closed.
-    const from = mergeBase ?? await api.mergeBase(event.owner, event.repo, base, event.head);
+    const from = mergeBase ?? (await api.mergeBase(event.owner, event.repo, base, event.head));
     try {
       changes = await api.listChangesBetween(event.owner, event.repo, from, event.head);
     } catch (error) {
-      throw new Error(`GitHub lists only the first ${listed.files.length.toLocaleString('en-US')} files of this pull request, and the full list could not be read (${error instanceof Error ? error.message : String(error)}); files past that would go unjudged, so nothing is judged. Check out with fetch-depth: 0 so the action reads the whole change from git.`);
+      throw new Error(
+        `GitHub lists only the first ${listed.files.length.toLocaleString('en-US')} files of this pull request, and the full list could not be read (${error instanceof Error ? error.message : String(error)}); files past that would go unjudged, so nothing is judged. Check out with fetch-depth: 0 so the action reads the whole change from git.`,
+      );
     }
     start = from;
   }
   return {
-    base: start, policyRef: base, head: event.head, changes,
+    base: start,
+    policyRef: base,
+    head: event.head,
+    changes,
     source: {
       read: (ref, path) => api.getFileContent(event.owner, event.repo, path, ref),
       exists: (ref, path) => api.pathExists(event.owner, event.repo, path, ref),
-    }, notices: [],
+    },
+    notices: [],
   };
 }
 
@@ -110,7 +145,12 @@ function failsCheck(verdict: Verdict, failOn: Settings['failOn']): boolean {
   return verdict === 'block' || (failOn === 'warn' && verdict === 'warn');
 }
 
-function setOutputs(out: RunnerOutput, report: Pick<GateReport, 'verdict' | 'blocking' | 'warnings'>, reportPath: string, commentUrl: string): void {
+function setOutputs(
+  out: RunnerOutput,
+  report: Pick<GateReport, 'verdict' | 'blocking' | 'warnings'>,
+  reportPath: string,
+  commentUrl: string,
+): void {
   out.output('verdict', report.verdict);
   out.output('blocking', String(report.blocking));
   out.output('warnings', String(report.warnings));
@@ -123,18 +163,27 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   const { env, out } = deps;
   const settings = readSettings(deps.getInput, env);
   if (settings.token) out.secret(settings.token);
-  const connect = () => settings.token
-    ? deps.createGitHub(settings.token, { baseUrl: env.GITHUB_API_URL, log: { debug: () => {}, info: (m) => out.info(m), warn: (m) => out.warning(m) } })
-    : null;
+  const connect = () =>
+    settings.token
+      ? deps.createGitHub(settings.token, {
+          baseUrl: env.GITHUB_API_URL,
+          log: { debug: () => {}, info: (m) => out.info(m), warn: (m) => out.warning(m) },
+        })
+      : null;
   if (settings.publishReport !== null) {
-    await runPublish({ env, out, readJson: deps.readJson, readFile: deps.readFile, api: connect() }, { ...settings, publishReport: settings.publishReport });
+    await runPublish(
+      { env, out, readJson: deps.readJson, readFile: deps.readFile, api: connect() },
+      { ...settings, publishReport: settings.publishReport },
+    );
     return;
   }
 
   const payload = env.GITHUB_EVENT_PATH ? await deps.readJson(env.GITHUB_EVENT_PATH) : {};
   const event = parseEvent(env.GITHUB_EVENT_NAME ?? '', payload, settings.base, env.GITHUB_SHA);
   if (event.base === null) {
-    out.notice('This event has no base commit to compare with (a new branch\'s first push): nothing was judged. Give the base input to compare against a ref.');
+    out.notice(
+      "This event has no base commit to compare with (a new branch's first push): nothing was judged. Give the base input to compare against a ref.",
+    );
     setOutputs(out, { verdict: 'ok', blocking: 0, warnings: 0 }, '', '');
     return;
   }
@@ -145,14 +194,22 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   let labels = event.labels;
   if (api && event.pullNumber !== null) {
     // Labels added after the event (the usual way to apply a waiver) count on a re-run.
-    labels = await api.getPullRequest(event.owner, event.repo, event.pullNumber).then((pr) => pr.labels, () => event.labels);
+    labels = await api.getPullRequest(event.owner, event.repo, event.pullNumber).then(
+      (pr) => pr.labels,
+      () => event.labels,
+    );
   }
 
   let report: GateReport;
   try {
     report = await runGate(gathered.source, {
-      base: gathered.base, head: gathered.head, changes: gathered.changes, policyPath: settings.policyPath, policyRef: gathered.policyRef,
-      labels, notices: gathered.notices,
+      base: gathered.base,
+      head: gathered.head,
+      changes: gathered.changes,
+      policyPath: settings.policyPath,
+      policyRef: gathered.policyRef,
+      labels,
+      notices: gathered.notices,
     });
   } catch (error) {
     // A policy that cannot be read fails closed: the check fails and says where, and an earlier
@@ -161,8 +218,16 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     const body = renderFailure(message);
     let commentUrl = '';
     if (settings.comment === 'update' && event.pullNumber !== null && api) {
-      commentUrl = await publishComment(api, { owner: event.owner, repo: event.repo, issueNumber: event.pullNumber, marker: COMMENT_MARKER, body })
-        .then((published) => published.comment.url, () => '');
+      commentUrl = await publishComment(api, {
+        owner: event.owner,
+        repo: event.repo,
+        issueNumber: event.pullNumber,
+        marker: COMMENT_MARKER,
+        body,
+      }).then(
+        (published) => published.comment.url,
+        () => '',
+      );
     }
     await out.summary(body);
     setOutputs(out, { verdict: 'block', blocking: 1, warnings: 0 }, '', commentUrl);
@@ -179,39 +244,90 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   if (settings.sarif) await deps.writeFile(settings.sarif, renderSarif(report, VERSION));
   if (settings.htmlReport) await deps.writeFile(settings.htmlReport, renderHtmlReport(report));
   // The page is uploaded by a later step, so its own URL is not known yet: the run's page lists it.
-  const runPage = settings.htmlReport && env.GITHUB_RUN_ID ? `${server}/${event.owner}/${event.repo}/actions/runs/${env.GITHUB_RUN_ID}` : null;
-  const html = { htmlReportUrl: settings.htmlReportUrl ?? runPage, htmlReportWhere: settings.htmlReportUrl ? null : runPage ? 'in the artifacts of this workflow run' : null };
+  const runPage =
+    settings.htmlReport && env.GITHUB_RUN_ID
+      ? `${server}/${event.owner}/${event.repo}/actions/runs/${env.GITHUB_RUN_ID}`
+      : null;
+  const html = {
+    htmlReportUrl: settings.htmlReportUrl ?? runPage,
+    htmlReportWhere: settings.htmlReportUrl
+      ? null
+      : runPage
+        ? 'in the artifacts of this workflow run'
+        : null,
+  };
 
   let commentUrl = '';
   const runNotices: string[] = [];
   if (settings.comment === 'update' && event.pullNumber !== null && api) {
     const body = renderComment(report, { blobUrl, unannotated: omitted, ...html });
     try {
-      const published = await publishComment(api, { owner: event.owner, repo: event.repo, issueNumber: event.pullNumber, marker: COMMENT_MARKER, body });
+      const published = await publishComment(api, {
+        owner: event.owner,
+        repo: event.repo,
+        issueNumber: event.pullNumber,
+        marker: COMMENT_MARKER,
+        body,
+      });
       commentUrl = published.comment.url;
-      out.info(`${published.action === 'created' ? 'Created' : 'Updated'} the report comment: ${commentUrl}`);
+      out.info(
+        `${published.action === 'created' ? 'Created' : 'Updated'} the report comment: ${commentUrl}`,
+      );
     } catch (error) {
       // The comment is a copy of the report: failing to write it loses nothing, so the verdict still decides.
-      const notice = isPermissionError(error) ? FORK_NOTICE : `${COMMENT_FAILED_NOTICE} (${error instanceof Error ? error.message : String(error)})`;
+      const notice = isPermissionError(error)
+        ? FORK_NOTICE
+        : `${COMMENT_FAILED_NOTICE} (${error instanceof Error ? error.message : String(error)})`;
       if (isPermissionError(error)) out.notice(notice);
       else out.warning(notice);
       runNotices.push(notice);
     }
   }
   if (settings.suggestions === 'on' && event.pullNumber !== null && api) {
-    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, { baseUrl: env.GITHUB_API_URL });
-    const target = { owner: event.owner, repo: event.repo, pull: event.pullNumber, headSha: gathered.head, isFork: event.isFork };
-    await publishSuggestions(reviews, target, report, (path) => gathered.source.read(gathered.head, path)).then(({ outcome, notice }) => {
-      if (notice) { out.notice(notice); runNotices.push(notice); }
-      if (outcome) out.info(`Review suggestions: ${outcome.created} created, ${outcome.updated} updated, ${outcome.kept} kept, ${outcome.removed} removed.`);
-    }, (error: unknown) => out.warning(`Review suggestions could not be written (${error instanceof Error ? error.message : String(error)}); the fixes are in the report.`));
+    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, {
+      baseUrl: env.GITHUB_API_URL,
+    });
+    const target = {
+      owner: event.owner,
+      repo: event.repo,
+      pull: event.pullNumber,
+      headSha: gathered.head,
+      isFork: event.isFork,
+    };
+    await publishSuggestions(reviews, target, report, (path) =>
+      gathered.source.read(gathered.head, path),
+    ).then(
+      ({ outcome, notice }) => {
+        if (notice) {
+          out.notice(notice);
+          runNotices.push(notice);
+        }
+        if (outcome)
+          out.info(
+            `Review suggestions: ${outcome.created} created, ${outcome.updated} updated, ${outcome.kept} kept, ${outcome.removed} removed.`,
+          );
+      },
+      (error: unknown) =>
+        out.warning(
+          `Review suggestions could not be written (${error instanceof Error ? error.message : String(error)}); the fixes are in the report.`,
+        ),
+    );
   }
   for (const notice of gathered.notices) out.warning(notice);
-  const summaryReport = runNotices.length > 0 ? { ...report, notices: [...report.notices, ...runNotices] } : report;
-  await out.summary(fitSummary((limit) => renderComment(summaryReport, { blobUrl, unannotated: omitted, limit, ...html })));
+  const summaryReport =
+    runNotices.length > 0 ? { ...report, notices: [...report.notices, ...runNotices] } : report;
+  await out.summary(
+    fitSummary((limit) =>
+      renderComment(summaryReport, { blobUrl, unannotated: omitted, limit, ...html }),
+    ),
+  );
   setOutputs(out, report, settings.reportJson, commentUrl);
-  out.info(`context-reach verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings)`);
+  out.info(
+    `context-reach verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings)`,
+  );
   if (failsCheck(report.verdict, settings.failOn)) {
-    out.fail(`context-reach: ${report.verdict === 'block' ? `${report.blocking} blocking finding${report.blocking === 1 ? '' : 's'}` : `${report.warnings} warning${report.warnings === 1 ? '' : 's'}`} (fail-on: ${settings.failOn}). See the job summary.`);
+    out.fail(
+      `context-reach: ${report.verdict === 'block' ? `${report.blocking} blocking finding${report.blocking === 1 ? '' : 's'}` : `${report.warnings} warning${report.warnings === 1 ? '' : 's'}`} (fail-on: ${settings.failOn}). See the job summary.`,
+    );
   }
 }

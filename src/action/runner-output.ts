@@ -23,7 +23,8 @@ export const SUMMARY_LIMIT = 1024 * 1024;
 /** What a summary may take, in UTF-8 bytes: the limit less a margin for the cut note and rounding (default: `SUMMARY_LIMIT − 16 KiB`). */
 export const SUMMARY_BYTES = SUMMARY_LIMIT - 16 * 1024;
 
-const CUT_NOTE = '\n\n_The summary was cut at GitHub\'s 1 MiB limit; the JSON report has everything._\n';
+const CUT_NOTE =
+  "\n\n_The summary was cut at GitHub's 1 MiB limit; the JSON report has everything._\n";
 
 /** `text` cut to at most `maxBytes` bytes of UTF-8 at a character boundary (no half character, no lone surrogate). */
 export function cutUtf8(text: string, maxBytes: number): string {
@@ -39,7 +40,10 @@ export function cutUtf8(text: string, maxBytes: number): string {
  * A summary rendered to fit `maxBytes` of UTF-8: `render` takes a budget in characters (what the
  * renderers count), and the budget shrinks by the measured bytes-per-character until it fits.
  */
-export function fitSummary(render: (limitChars: number) => string, maxBytes = SUMMARY_BYTES): string {
+export function fitSummary(
+  render: (limitChars: number) => string,
+  maxBytes = SUMMARY_BYTES,
+): string {
   let limit = maxBytes;
   for (let attempt = 0; attempt < 6; attempt += 1) {
     const text = render(limit);
@@ -50,15 +54,18 @@ export function fitSummary(render: (limitChars: number) => string, maxBytes = SU
   return render(limit);
 }
 
-export function createRunnerOutput(env: Readonly<Record<string, string | undefined>> = process.env): RunnerOutput {
+export function createRunnerOutput(
+  env: Readonly<Record<string, string | undefined>> = process.env,
+): RunnerOutput {
   return {
     secret: (value) => issueCommand('add-mask', {}, value),
     output: (name, value) => setOutput(env, name, value),
     async summary(markdown) {
       // Bytes, as the runner counts them: 1 MiB of characters can be 3 MiB of UTF-8.
-      const text = Buffer.byteLength(markdown, 'utf8') > SUMMARY_BYTES
-        ? `${cutUtf8(markdown, SUMMARY_BYTES - Buffer.byteLength(CUT_NOTE, 'utf8'))}${CUT_NOTE}`
-        : markdown;
+      const text =
+        Buffer.byteLength(markdown, 'utf8') > SUMMARY_BYTES
+          ? `${cutUtf8(markdown, SUMMARY_BYTES - Buffer.byteLength(CUT_NOTE, 'utf8'))}${CUT_NOTE}`
+          : markdown;
       appendSummary(env, text);
     },
     annotate(a) {

@@ -47,33 +47,54 @@ export function readInput(env: Readonly<Record<string, string | undefined>>, nam
 }
 
 /** The `name<<delimiter` block of one output; the delimiter is random so no value can end it early. */
-export function outputBlock(name: string, value: string, delimiter = `ghadelimiter_${randomUUID()}`): string {
+export function outputBlock(
+  name: string,
+  value: string,
+  delimiter = `ghadelimiter_${randomUUID()}`,
+): string {
   if (name.includes(delimiter) || value.includes(delimiter)) {
-    throw new Error(`The output ${JSON.stringify(name)} contains the delimiter ${JSON.stringify(delimiter)}; expected a name and value without it`);
+    throw new Error(
+      `The output ${JSON.stringify(name)} contains the delimiter ${JSON.stringify(delimiter)}; expected a name and value without it`,
+    );
   }
   return `${name}<<${delimiter}${EOL}${value}${EOL}${delimiter}`;
 }
 
 /** Sets an output: appended to the `GITHUB_OUTPUT` file, or the old `set-output` command without one. */
-export function setOutput(env: Readonly<Record<string, string | undefined>>, name: string, value: string): void {
+export function setOutput(
+  env: Readonly<Record<string, string | undefined>>,
+  name: string,
+  value: string,
+): void {
   const file = env.GITHUB_OUTPUT ?? '';
   if (file === '') {
     process.stdout.write(EOL);
     issueCommand('set-output', { name }, value);
     return;
   }
-  if (!existsSync(file)) throw new Error(`The output file at GITHUB_OUTPUT (${JSON.stringify(file)}) is missing; expected the file the runner creates`);
+  if (!existsSync(file))
+    throw new Error(
+      `The output file at GITHUB_OUTPUT (${JSON.stringify(file)}) is missing; expected the file the runner creates`,
+    );
   appendFileSync(file, `${outputBlock(name, value)}${EOL}`, 'utf8');
 }
 
 /** Appends markdown (and a line end) to the job summary at `GITHUB_STEP_SUMMARY`. */
-export function appendSummary(env: Readonly<Record<string, string | undefined>>, markdown: string): void {
+export function appendSummary(
+  env: Readonly<Record<string, string | undefined>>,
+  markdown: string,
+): void {
   const file = env.GITHUB_STEP_SUMMARY ?? '';
-  if (file === '') throw new Error('GITHUB_STEP_SUMMARY is not set; expected the job summary file the runner names (this runner may not support job summaries)');
+  if (file === '')
+    throw new Error(
+      'GITHUB_STEP_SUMMARY is not set; expected the job summary file the runner names (this runner may not support job summaries)',
+    );
   try {
     accessSync(file, constants.R_OK | constants.W_OK);
   } catch {
-    throw new Error(`The job summary file ${JSON.stringify(file)} cannot be read and written; expected the file the runner creates`);
+    throw new Error(
+      `The job summary file ${JSON.stringify(file)} cannot be read and written; expected the file the runner creates`,
+    );
   }
   appendFileSync(file, `${markdown}${EOL}`, 'utf8');
 }

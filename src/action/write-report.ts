@@ -15,10 +15,18 @@ export class UnsafeReportPathError extends Error {
   }
 }
 
-async function kindOf(path: string): Promise<'missing' | 'symlink' | 'directory' | 'file' | 'other'> {
+async function kindOf(
+  path: string,
+): Promise<'missing' | 'symlink' | 'directory' | 'file' | 'other'> {
   try {
     const stat = await lstat(path);
-    return stat.isSymbolicLink() ? 'symlink' : stat.isDirectory() ? 'directory' : stat.isFile() ? 'file' : 'other';
+    return stat.isSymbolicLink()
+      ? 'symlink'
+      : stat.isDirectory()
+        ? 'directory'
+        : stat.isFile()
+          ? 'file'
+          : 'other';
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code === 'ENOENT') return 'missing';
     throw error;
@@ -31,19 +39,28 @@ async function kindOf(path: string): Promise<'missing' | 'symlink' | 'directory'
  * a symbolic link; the file itself is opened with `O_NOFOLLOW` and must be a regular file or
  * new. Outside the checkout (the runner's temp folder) folders are made as usual.
  */
-export async function writeReportFile(path: string, text: string, workspace: string, cwd = process.cwd()): Promise<void> {
+export async function writeReportFile(
+  path: string,
+  text: string,
+  workspace: string,
+  cwd = process.cwd(),
+): Promise<void> {
   const target = resolve(cwd, path);
   const root = resolve(cwd, workspace);
   const inside = relative(root, target);
   const inWorkspace = inside !== '' && !inside.startsWith('..') && !isAbsolute(inside);
   if (inWorkspace) {
     let folder = root;
-    for (const part of dirname(inside).split(sep).filter((p) => p !== '' && p !== '.')) {
+    for (const part of dirname(inside)
+      .split(sep)
+      .filter((p) => p !== '' && p !== '.')) {
       folder = resolve(folder, part);
       const kind = await kindOf(folder);
       if (kind === 'missing') await mkdir(folder);
       else if (kind !== 'directory') {
-        throw new UnsafeReportPathError(`${relative(root, folder)} in the checkout is ${kind === 'symlink' ? 'a symbolic link' : 'not a folder'}; the report ${path} is not written through it (choose a report path outside the checkout, e.g. under RUNNER_TEMP)`);
+        throw new UnsafeReportPathError(
+          `${relative(root, folder)} in the checkout is ${kind === 'symlink' ? 'a symbolic link' : 'not a folder'}; the report ${path} is not written through it (choose a report path outside the checkout, e.g. under RUNNER_TEMP)`,
+        );
       }
     }
   } else {
@@ -51,10 +68,16 @@ export async function writeReportFile(path: string, text: string, workspace: str
   }
   const kind = await kindOf(target);
   if (kind !== 'missing' && kind !== 'file') {
-    throw new UnsafeReportPathError(`${path} is ${kind === 'symlink' ? 'a symbolic link' : 'not a regular file'}; the report is not written through it (choose a report path outside the checkout, e.g. under RUNNER_TEMP)`);
+    throw new UnsafeReportPathError(
+      `${path} is ${kind === 'symlink' ? 'a symbolic link' : 'not a regular file'}; the report is not written through it (choose a report path outside the checkout, e.g. under RUNNER_TEMP)`,
+    );
   }
   // O_NOFOLLOW refuses a link that appears between the check and the open (0 where the platform has none).
-  const handle = await open(target, constants.O_WRONLY | constants.O_CREAT | constants.O_TRUNC | (constants.O_NOFOLLOW ?? 0), 0o644);
+  const handle = await open(
+    target,
+    constants.O_WRONLY | constants.O_CREAT | constants.O_TRUNC | (constants.O_NOFOLLOW ?? 0),
+    0o644,
+  );
   try {
     await handle.writeFile(text, 'utf8');
   } finally {

@@ -13,14 +13,21 @@ async function findDemo(): Promise<string> {
   let folder = dirname(fileURLToPath(import.meta.url));
   for (let i = 0; i < 6; i += 1) {
     const candidate = join(folder, 'fixtures', 'demo');
-    if (await stat(join(candidate, 'base')).then(() => true, () => false)) return candidate;
+    if (
+      await stat(join(candidate, 'base')).then(
+        () => true,
+        () => false,
+      )
+    )
+      return candidate;
     folder = resolve(folder, '..');
   }
   throw new Error('the bundled demo (fixtures/demo) was not found next to this program');
 }
 
 async function replaceTree(repo: string, from: string): Promise<void> {
-  for (const entry of await readdir(repo)) if (entry !== '.git') await rm(join(repo, entry), { recursive: true, force: true });
+  for (const entry of await readdir(repo))
+    if (entry !== '.git') await rm(join(repo, entry), { recursive: true, force: true });
   await cp(from, repo, { recursive: true });
 }
 
@@ -29,7 +36,11 @@ async function replaceTree(repo: string, from: string): Promise<void> {
  * request), runs the gate on it and prints the comment as it would appear. Always exits 0: a showcase.
  */
 export async function runDemo(args: string[], io: Console): Promise<number> {
-  const { values } = parseArgs({ args, strict: true, options: { format: { type: 'string' }, keep: { type: 'boolean' }, html: { type: 'string' } } });
+  const { values } = parseArgs({
+    args,
+    strict: true,
+    options: { format: { type: 'string' }, keep: { type: 'boolean' }, html: { type: 'string' } },
+  });
   const format = (values.format ?? 'markdown') as 'markdown' | 'text' | 'json';
   const demo = await findDemo();
   const repo = await mkdtemp(join(tmpdir(), 'context-reach-demo-'));
@@ -39,18 +50,30 @@ export async function runDemo(args: string[], io: Console): Promise<number> {
     await replaceTree(repo, join(demo, 'base'));
     const base = await scratch.commitAll('Quillmoor main before the pull request');
     await replaceTree(repo, join(demo, 'head'));
-    const head = await scratch.commitAll('Serve Quill Mini at 256k and give Quill 8B a longer context');
+    const head = await scratch.commitAll(
+      'Serve Quill Mini at 256k and give Quill 8B a longer context',
+    );
     const git = createGitReader(repo);
     const report = await runGate(gitContentSource(git), {
-      base, head, changes: await git.changedFiles(base, head), policyPath: '.github/context-reach.yml',
+      base,
+      head,
+      changes: await git.changedFiles(base, head),
+      policyPath: '.github/context-reach.yml',
     });
-    io.out(renderReport(report, ['markdown', 'text', 'json'].includes(format) ? format : 'markdown', io));
+    io.out(
+      renderReport(report, ['markdown', 'text', 'json'].includes(format) ? format : 'markdown', io),
+    );
     if (values.html !== undefined) {
       await writeHtmlReport(values.html, report);
-      if (format !== 'json') io.out(`\nThe HTML report (charts, findings, fixes that pass these rules) is at ${values.html}; open it in a browser.\n`);
+      if (format !== 'json')
+        io.out(
+          `\nThe HTML report (charts, findings, fixes that pass these rules) is at ${values.html}; open it in a browser.\n`,
+        );
     }
     if (format !== 'json') {
-      io.out(`\nverdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings). In a workflow the check would ${report.verdict === 'block' ? 'fail' : 'pass'}; the demo exits 0.\n`);
+      io.out(
+        `\nverdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings). In a workflow the check would ${report.verdict === 'block' ? 'fail' : 'pass'}; the demo exits 0.\n`,
+      );
       if (values.keep) io.out(`scratch repository kept at ${repo}\n`);
     }
     return 0;

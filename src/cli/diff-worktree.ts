@@ -22,23 +22,39 @@ interface DiffValues {
  * `--base`, or, with no upstream, the base `diff` picks for a commit. The policy is read at the
  * upstream's tip (or the base), as the pull request's gate will read it.
  */
-export async function diffWorktree(git: GitReader, values: DiffValues, format: 'text' | 'markdown' | 'json',
-  failOn: 'block' | 'warn' | 'never', io: Console): Promise<number> {
+export async function diffWorktree(
+  git: GitReader,
+  values: DiffValues,
+  format: 'text' | 'markdown' | 'json',
+  failOn: 'block' | 'warn' | 'never',
+  io: Console,
+): Promise<number> {
   const worktree = createWorktreeGit(io.cwd);
   const files = createWorktreeFiles(await worktree.topLevel());
   const head = await git.resolveCommit('HEAD');
-  if (head === null) throw new UsageError('the repository has no commit yet; commit once, then compare the working tree with it');
+  if (head === null)
+    throw new UsageError(
+      'the repository has no commit yet; commit once, then compare the working tree with it',
+    );
   const upstream = values.base === undefined ? await worktree.upstream() : null;
-  const base = values.base !== undefined ? await commitOf(git, values.base, '--base')
-    : upstream ?? await defaultBase(git, head);
+  const base =
+    values.base !== undefined
+      ? await commitOf(git, values.base, '--base')
+      : (upstream ?? (await defaultBase(git, head)));
   const start = (await git.mergeBase(base, head)) ?? base;
   const changes = await worktree.changedSince(start);
-  const report = await runGate({ read: (ref, path) => (ref === WORKTREE ? files.read(path) : git.show(ref, path)) }, {
-    base: start, policyRef: base, head: WORKTREE, changes,
-    policyPath: values.policy ?? '.github/context-reach.yml',
-    labels: values.label ?? [],
-    overrides: servingPatch(values),
-  });
+  const report = await runGate(
+    { read: (ref, path) => (ref === WORKTREE ? files.read(path) : git.show(ref, path)) },
+    {
+      base: start,
+      policyRef: base,
+      head: WORKTREE,
+      changes,
+      policyPath: values.policy ?? '.github/context-reach.yml',
+      labels: values.label ?? [],
+      overrides: servingPatch(values),
+    },
+  );
   io.out(renderReport(report, format, io));
   if (values.html !== undefined) await writeHtmlReport(values.html, report);
   return exitStatus(report, failOn);

@@ -18,15 +18,27 @@ export const DIFF_USAGE = `usage: context-reach diff [--base REF] [--head REF] [
        [--served-span N] [--sequences N] [--device-gib G] [--cache-dtype D]
        [--tensor-parallel N] [--pipeline-parallel N] ...
 ${optionLines([
-    ['--base REF', 'branch, tag or commit to compare against (default: where HEAD left its upstream, else origin/HEAD, origin/main, origin/master, main or master, else the parent of HEAD)'],
-    ['--head REF', 'branch, tag or commit to judge (default: the working tree, staged and unstaged changes of tracked files)'],
-    ['--policy FILE', 'repository-relative path of the policy, read at the base (default: .github/context-reach.yml)'],
-    ['--format F', 'one of text, markdown, json (default: text)'],
-    ['--fail-on V', 'lowest verdict that exits 1: one of block, warn, never (default: block)'],
-    ['--label NAME', 'a pull-request label, e.g. the policy\'s waiver label; repeat for more (default: none)'],
-    ['--html FILE', 'also write the standalone HTML report to FILE (default: none)'],
-    ...SERVING_HELP,
-  ])}`;
+  [
+    '--base REF',
+    'branch, tag or commit to compare against (default: where HEAD left its upstream, else origin/HEAD, origin/main, origin/master, main or master, else the parent of HEAD)',
+  ],
+  [
+    '--head REF',
+    'branch, tag or commit to judge (default: the working tree, staged and unstaged changes of tracked files)',
+  ],
+  [
+    '--policy FILE',
+    'repository-relative path of the policy, read at the base (default: .github/context-reach.yml)',
+  ],
+  ['--format F', 'one of text, markdown, json (default: text)'],
+  ['--fail-on V', 'lowest verdict that exits 1: one of block, warn, never (default: block)'],
+  [
+    '--label NAME',
+    "a pull-request label, e.g. the policy's waiver label; repeat for more (default: none)",
+  ],
+  ['--html FILE', 'also write the standalone HTML report to FILE (default: none)'],
+  ...SERVING_HELP,
+])}`;
 
 const FORMATS = ['text', 'markdown', 'json'] as const;
 const FAIL_ON = ['block', 'warn', 'never'] as const;
@@ -44,7 +56,11 @@ export function exitStatus(report: GateReport, failOn: (typeof FAIL_ON)[number])
   return failOn === 'warn' && report.verdict === 'warn' ? 1 : 0;
 }
 
-export function renderReport(report: GateReport, format: (typeof FORMATS)[number], io: Console): string {
+export function renderReport(
+  report: GateReport,
+  format: (typeof FORMATS)[number],
+  io: Console,
+): string {
   if (format === 'json') return renderGateJson(report);
   if (format === 'markdown') return renderComment(report);
   return renderDiffText(report, terminalStyle(io.stdout, io.env));
@@ -78,27 +94,44 @@ export async function defaultBase(git: GitReader, head: string): Promise<string>
  */
 export async function runDiff(args: string[], io: Console): Promise<number> {
   const { values } = parseArgs({
-    args, allowPositionals: false, strict: true,
+    args,
+    allowPositionals: false,
+    strict: true,
     options: {
-      base: { type: 'string' }, head: { type: 'string' }, policy: { type: 'string' },
-      format: { type: 'string' }, 'fail-on': { type: 'string' }, label: { type: 'string', multiple: true },
-      html: { type: 'string' }, ...SERVING_FLAGS,
+      base: { type: 'string' },
+      head: { type: 'string' },
+      policy: { type: 'string' },
+      format: { type: 'string' },
+      'fail-on': { type: 'string' },
+      label: { type: 'string', multiple: true },
+      html: { type: 'string' },
+      ...SERVING_FLAGS,
     },
   });
   const format = (values.format ?? 'text') as (typeof FORMATS)[number];
-  if (!FORMATS.includes(format)) throw new UsageError(`--format takes one of ${FORMATS.join(', ')}, got '${values.format}'`);
+  if (!FORMATS.includes(format))
+    throw new UsageError(`--format takes one of ${FORMATS.join(', ')}, got '${values.format}'`);
   const failOn = (values['fail-on'] ?? 'block') as (typeof FAIL_ON)[number];
-  if (!FAIL_ON.includes(failOn)) throw new UsageError(`--fail-on takes one of ${FAIL_ON.join(', ')}, got '${values['fail-on']}'`);
+  if (!FAIL_ON.includes(failOn))
+    throw new UsageError(
+      `--fail-on takes one of ${FAIL_ON.join(', ')}, got '${values['fail-on']}'`,
+    );
 
   const git = createGitReader(io.cwd);
   if (values.head === undefined) return diffWorktree(git, values, format, failOn, io);
   const head = await commitOf(git, values.head, '--head');
-  const base = values.base !== undefined ? await commitOf(git, values.base, '--base') : await defaultBase(git, head);
+  const base =
+    values.base !== undefined
+      ? await commitOf(git, values.base, '--base')
+      : await defaultBase(git, head);
   // Changes since head left the base (as a pull request shows them); the policy from the base itself.
   const start = (await git.mergeBase(base, head)) ?? base;
   const changes = await git.changedFiles(start, head);
   const report = await runGate(gitContentSource(git), {
-    base: start, policyRef: base, head, changes,
+    base: start,
+    policyRef: base,
+    head,
+    changes,
     policyPath: values.policy ?? '.github/context-reach.yml',
     labels: values.label ?? [],
     overrides: servingPatch(values),

@@ -14,11 +14,17 @@ export const INSPECT_USAGE = `usage: context-reach inspect FILE... [--json] [--a
        [--weight-dtype D] [--weight-group-size N] [--cache-dtype D] [--position-dtype D]
        [--tensor-parallel N] [--pipeline-parallel N] [--activation-reserve-gib G]
 ${optionLines([
-    ['FILE...', 'model configs: checkpoint config.json files or context-reach model files (YAML or JSON)'],
-    ['--json', 'print the JSON report instead of text (default: text)'],
-    ['--at POINTER', 'JSON pointer to the model block inside a larger document, e.g. /text_config (default: the whole document)'],
-    ...SERVING_HELP,
-  ])}`;
+  [
+    'FILE...',
+    'model configs: checkpoint config.json files or context-reach model files (YAML or JSON)',
+  ],
+  ['--json', 'print the JSON report instead of text (default: text)'],
+  [
+    '--at POINTER',
+    'JSON pointer to the model block inside a larger document, e.g. /text_config (default: the whole document)',
+  ],
+  ...SERVING_HELP,
+])}`;
 
 /** Files read ahead of the one being measured (default: `8`). */
 const READ_AHEAD = 8;
@@ -26,7 +32,9 @@ const READ_AHEAD = 8;
 /** `inspect`: measure each file; exit status 2 when any file could not be read. */
 export async function runInspect(args: string[], files: FileSource, io: Console): Promise<number> {
   const { values, positionals } = parseArgs({
-    args, allowPositionals: true, strict: true,
+    args,
+    allowPositionals: true,
+    strict: true,
     options: { json: { type: 'boolean' }, at: { type: 'string' }, ...SERVING_FLAGS },
   });
   if (positionals.length === 0) {

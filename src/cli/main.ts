@@ -5,7 +5,9 @@ import { run } from './run.js';
 
 const io = createConsole();
 run(process.argv.slice(2), { files: createFileSource(), io }).then(
-  (code) => { process.exitCode = code; },
+  (code) => {
+    process.exitCode = code;
+  },
   (error: unknown) => {
     io.error(`context-reach: ${error instanceof Error ? error.message : String(error)}`);
     process.exitCode = 2;

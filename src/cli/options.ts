@@ -57,19 +57,26 @@ export const SERVING_FLAGS = {
 /** The serving patch the flags describe (only the flags given). */
 export function servingPatch(values: Record<string, unknown>): ServingPatch {
   const patch: ServingPatch = {};
-  const text = (name: string) => (typeof values[name] === 'string' ? (values[name] as string) : undefined);
+  const text = (name: string) =>
+    typeof values[name] === 'string' ? (values[name] as string) : undefined;
   let v: string | undefined;
   if ((v = text('served-span')) !== undefined) patch.span = positiveInteger('served-span', v);
-  if ((v = text('trained-span')) !== undefined) patch.trainedSpan = positiveInteger('trained-span', v);
+  if ((v = text('trained-span')) !== undefined)
+    patch.trainedSpan = positiveInteger('trained-span', v);
   if ((v = text('sequences')) !== undefined) patch.sequences = positiveInteger('sequences', v);
   if ((v = text('device-gib')) !== undefined) patch.deviceGiB = positiveNumber('device-gib', v);
   if ((v = text('weight-dtype')) !== undefined) patch.weights = storageDType('weight-dtype', v);
   if ((v = text('cache-dtype')) !== undefined) patch.cache = storageDType('cache-dtype', v);
-  if ((v = text('position-dtype')) !== undefined) patch.positions = floatFormat('position-dtype', v);
-  if ((v = text('tensor-parallel')) !== undefined) patch.tensorParallel = positiveInteger('tensor-parallel', v);
-  if ((v = text('pipeline-parallel')) !== undefined) patch.pipelineParallel = positiveInteger('pipeline-parallel', v);
-  if ((v = text('activation-reserve-gib')) !== undefined) patch.activationReserveGiB = nonNegativeNumber('activation-reserve-gib', v);
-  if ((v = text('weight-group-size')) !== undefined) patch.weightGroupSize = positiveInteger('weight-group-size', v);
+  if ((v = text('position-dtype')) !== undefined)
+    patch.positions = floatFormat('position-dtype', v);
+  if ((v = text('tensor-parallel')) !== undefined)
+    patch.tensorParallel = positiveInteger('tensor-parallel', v);
+  if ((v = text('pipeline-parallel')) !== undefined)
+    patch.pipelineParallel = positiveInteger('pipeline-parallel', v);
+  if ((v = text('activation-reserve-gib')) !== undefined)
+    patch.activationReserveGiB = nonNegativeNumber('activation-reserve-gib', v);
+  if ((v = text('weight-group-size')) !== undefined)
+    patch.weightGroupSize = positiveInteger('weight-group-size', v);
   return patch;
 }
 
@@ -78,17 +85,50 @@ export type OptionHelp = readonly [flag: string, text: string];
 
 /** The serving flags' help, shared by `inspect` and `diff`. */
 export const SERVING_HELP: readonly OptionHelp[] = [
-  ['--served-span N', 'tokens served per sequence: a positive whole number (default: the file\'s serving span, else the policy\'s, else the declared span)'],
-  ['--trained-span N', 'tokens the model was trained at: a positive whole number (default: as stated, else the scaling block\'s original span, else the declared span)'],
-  ['--sequences N', 'sequences held at once: a positive whole number (default: the file\'s, else the policy\'s, else 1)'],
-  ['--device-gib G', 'device memory in GiB (2^30 bytes): a positive number (default: the file\'s or the policy\'s, else no memory budget)'],
-  ['--weight-dtype D', `weight storage: one of ${STORAGE_DTYPES.join(', ')} (default: the file's, else bf16)`],
-  ['--cache-dtype D', `key/value cache storage: one of ${STORAGE_DTYPES.join(', ')} (default: the weight dtype)`],
-  ['--position-dtype D', `format positions and angles are computed in: one of ${FLOAT_FORMATS.join(', ')} (default: fp32)`],
-  ['--weight-group-size N', 'weights sharing one scale when --weight-dtype is int4, int8 or fp8: a positive whole number (default: the file\'s quantization, else none)'],
-  ['--tensor-parallel N', 'tensor-parallel degree, devices one layer is split over: a positive whole number (default: the file\'s or the policy\'s, else 1)'],
-  ['--pipeline-parallel N', 'pipeline-parallel degree, stages the layers are split into: a positive whole number (default: the file\'s or the policy\'s, else 1)'],
-  ['--activation-reserve-gib G', 'GiB per device kept for activations and workspace beside the reserve fraction: a number of at least 0 (default: 0)'],
+  [
+    '--served-span N',
+    "tokens served per sequence: a positive whole number (default: the file's serving span, else the policy's, else the declared span)",
+  ],
+  [
+    '--trained-span N',
+    "tokens the model was trained at: a positive whole number (default: as stated, else the scaling block's original span, else the declared span)",
+  ],
+  [
+    '--sequences N',
+    "sequences held at once: a positive whole number (default: the file's, else the policy's, else 1)",
+  ],
+  [
+    '--device-gib G',
+    "device memory in GiB (2^30 bytes): a positive number (default: the file's or the policy's, else no memory budget)",
+  ],
+  [
+    '--weight-dtype D',
+    `weight storage: one of ${STORAGE_DTYPES.join(', ')} (default: the file's, else bf16)`,
+  ],
+  [
+    '--cache-dtype D',
+    `key/value cache storage: one of ${STORAGE_DTYPES.join(', ')} (default: the weight dtype)`,
+  ],
+  [
+    '--position-dtype D',
+    `format positions and angles are computed in: one of ${FLOAT_FORMATS.join(', ')} (default: fp32)`,
+  ],
+  [
+    '--weight-group-size N',
+    "weights sharing one scale when --weight-dtype is int4, int8 or fp8: a positive whole number (default: the file's quantization, else none)",
+  ],
+  [
+    '--tensor-parallel N',
+    "tensor-parallel degree, devices one layer is split over: a positive whole number (default: the file's or the policy's, else 1)",
+  ],
+  [
+    '--pipeline-parallel N',
+    "pipeline-parallel degree, stages the layers are split into: a positive whole number (default: the file's or the policy's, else 1)",
+  ],
+  [
+    '--activation-reserve-gib G',
+    'GiB per device kept for activations and workspace beside the reserve fraction: a number of at least 0 (default: 0)',
+  ],
 ];
 
 /** `options:` and one aligned line per option, for a command's usage text. */

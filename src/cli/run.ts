@@ -24,7 +24,10 @@ interface Command {
 // `diff` and `demo` (git, the gate, the HTML report) are loaded when asked for, so `inspect` and
 // `--version` start without compiling them.
 const COMMANDS: Record<string, () => Promise<Command>> = {
-  inspect: async () => ({ usage: INSPECT_USAGE, run: (args, deps) => runInspect(args, deps.files, deps.io) }),
+  inspect: async () => ({
+    usage: INSPECT_USAGE,
+    run: (args, deps) => runInspect(args, deps.files, deps.io),
+  }),
   diff: async () => {
     const { DIFF_USAGE, runDiff } = await import('./diff.js');
     return { usage: DIFF_USAGE, run: (args, deps) => runDiff(args, deps.io) };
@@ -76,8 +79,13 @@ export async function run(argv: string[], deps: CliDeps): Promise<number> {
     }
     return await entry.run(rest, deps);
   } catch (error) {
-    if (error instanceof UsageError || String((error as { code?: unknown })?.code ?? '').startsWith('ERR_PARSE_ARGS')) {
-      deps.io.error(`context-reach: ${(error as Error).message}\n${entry?.usage ?? await usage()}`);
+    if (
+      error instanceof UsageError ||
+      String((error as { code?: unknown })?.code ?? '').startsWith('ERR_PARSE_ARGS')
+    ) {
+      deps.io.error(
+        `context-reach: ${(error as Error).message}\n${entry?.usage ?? (await usage())}`,
+      );
       return 2;
     }
     throw error;

@@ -13,8 +13,14 @@ export function createWorktreeFiles(topLevel: string, maxBytes = MAX_FILE_BYTES)
   const files = createFileSource(maxBytes);
   return {
     async read(path) {
-      if (path === '' || path.startsWith('/') || path.split('/').some((part) => part === '' || part === '.' || part === '..')) {
-        throw new Error(`path ${JSON.stringify(path)} is not usable; expected a repository-relative path without empty, "." or ".." parts`);
+      if (
+        path === '' ||
+        path.startsWith('/') ||
+        path.split('/').some((part) => part === '' || part === '.' || part === '..')
+      ) {
+        throw new Error(
+          `path ${JSON.stringify(path)} is not usable; expected a repository-relative path without empty, "." or ".." parts`,
+        );
       }
       const full = join(topLevel, path);
       const info = await lstat(full).catch((error: NodeJS.ErrnoException) => {

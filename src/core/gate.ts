@@ -4,7 +4,13 @@ import type { Judging } from './compare/judging.js';
 import { inspectModel, toFailure, type FileFailure, type FileReport } from './inspect.js';
 import type { ServingPatch } from './model.js';
 import { decodeText } from './parse/source.js';
-import { DEFAULT_POLICY, isModelConfig, parsePolicy, resolvePolicy, type Policy } from './policy/index.js';
+import {
+  DEFAULT_POLICY,
+  isModelConfig,
+  parsePolicy,
+  resolvePolicy,
+  type Policy,
+} from './policy/index.js';
 import { attachRemedies } from './remedy/attach.js';
 import { createScanMemo, type ScanMemo } from './metrics/scan-memo.js';
 import { pairMoves } from './pair-moves.js';
@@ -65,14 +71,23 @@ export class PolicyUnreadableError extends Error {}
 export class BaseUnreadableError extends Error {}
 
 /** The measured version of one file from its bytes (or the error reading them); null when absent. */
-function inspectVersion(bytes: Uint8Array | null | Error, path: string, serving: ServingPatch,
-  overrides: ServingPatch | undefined, policyPath: string, memo: ScanMemo): FileReport | FileFailure | null {
+function inspectVersion(
+  bytes: Uint8Array | null | Error,
+  path: string,
+  serving: ServingPatch,
+  overrides: ServingPatch | undefined,
+  policyPath: string,
+  memo: ScanMemo,
+): FileReport | FileFailure | null {
   if (bytes instanceof Error) return toFailure(path, bytes);
   if (bytes === null) return null;
   try {
     return inspectModel(decodeText(bytes, path), path, {
-      defaults: serving, defaultsOrigin: { key: `${policyPath} serving`, line: null },
-      overrides, overridesOrigin: { key: 'command line', line: null }, memo,
+      defaults: serving,
+      defaultsOrigin: { key: `${policyPath} serving`, line: null },
+      overrides,
+      overridesOrigin: { key: 'command line', line: null },
+      memo,
     });
   } catch (error) {
     return toFailure(path, error);
@@ -80,8 +95,13 @@ function inspectVersion(bytes: Uint8Array | null | Error, path: string, serving:
 }
 
 /** Bytes of every request, in order: one batch when the source batches, else `concurrency` reads at a time. */
-async function readAll(source: ContentSource, requests: ContentRequest[], concurrency: number): Promise<(Uint8Array | null | Error)[]> {
-  const asError = (error: unknown): Error => (error instanceof Error ? error : new Error(String(error)));
+async function readAll(
+  source: ContentSource,
+  requests: ContentRequest[],
+  concurrency: number,
+): Promise<(Uint8Array | null | Error)[]> {
+  const asError = (error: unknown): Error =>
+    error instanceof Error ? error : new Error(String(error));
   if (source.readMany) {
     try {
       return await source.readMany(requests);
@@ -92,7 +112,11 @@ async function readAll(source: ContentSource, requests: ContentRequest[], concur
   return mapLimited(requests, concurrency, (r) => source.read(r.ref, r.path).catch(asError));
 }
 
-async function mapLimited<T, R>(items: T[], limit: number, work: (item: T) => Promise<R>): Promise<R[]> {
+async function mapLimited<T, R>(
+  items: T[],
+  limit: number,
+  work: (item: T) => Promise<R>,
+): Promise<R[]> {
   const results: R[] = new Array(items.length);
   let next = 0;
   const workers = Array.from({ length: Math.min(limit, items.length) }, async () => {
@@ -116,7 +140,9 @@ function headPolicyChanges(base: Policy, bytes: Uint8Array | null, path: string)
   try {
     return policyChanges(base, parsePolicy(decodeText(bytes, path), path));
   } catch (error) {
-    return [`the head's policy does not read: ${error instanceof Error ? error.message : String(error)}`];
+    return [
+      `the head's policy does not read: ${error instanceof Error ? error.message : String(error)}`,
+    ];
   }
 }
 
@@ -139,34 +165,58 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   let policy: Policy = DEFAULT_POLICY;
   if (basePolicyBytes !== null) {
     policy = parsePolicy(decodeText(basePolicyBytes, policyPath), policyPath);
-  } else if (source.exists && await source.exists(request.policyRef ?? base, policyPath)) {
+  } else if (source.exists && (await source.exists(request.policyRef ?? base, policyPath))) {
     // A symlink, a directory or a submodule where the policy belongs is not "no policy".
-    throw new PolicyUnreadableError(`${policyPath} exists on the base commit but is not a regular file (a symbolic link, a directory or a submodule); expected the policy as a regular file, or nothing at that path`);
+    throw new PolicyUnreadableError(
+      `${policyPath} exists on the base commit but is not a regular file (a symbolic link, a directory or a submodule); expected the policy as a regular file, or nothing at that path`,
+    );
   }
-  const headPolicyBytes = request.changes.some((c) => c.path === policyPath || c.previousPath === policyPath)
+  const headPolicyBytes = request.changes.some(
+    (c) => c.path === policyPath || c.previousPath === policyPath,
+  )
     ? await source.read(head, policyPath)
     : basePolicyBytes;
   const policyChanged = !sameBytes(basePolicyBytes, headPolicyBytes);
   const limitChanges = policyChanged ? headPolicyChanges(policy, headPolicyBytes, policyPath) : [];
 
-  const relevant = request.changes.filter((c) =>
-    isModelConfig(policy, c.path) || (c.previousPath !== null && isModelConfig(policy, c.previousPath)));
+  const relevant = request.changes.filter(
+    (c) =>
+      isModelConfig(policy, c.path) ||
+      (c.previousPath !== null && isModelConfig(policy, c.previousPath)),
+  );
   let deleted = relevant.filter((c) => c.status === 'deleted');
   const judged = relevant.filter((c) => c.status !== 'deleted');
 
   // Head of every file, then base of every file not added: one read for the whole run.
   const requests: ContentRequest[] = [
     ...judged.map((change) => ({ ref: head, path: change.path })),
-    ...judged.filter((change) => change.status !== 'added').map((change) => ({ ref: base, path: change.previousPath ?? change.path })),
+    ...judged
+      .filter((change) => change.status !== 'added')
+      .map((change) => ({ ref: base, path: change.previousPath ?? change.path })),
   ];
-  const answers: (Uint8Array | null | Error)[] = requests.length === 0 ? [] : await readAll(source, requests, request.concurrency ?? 8);
+  const answers: (Uint8Array | null | Error)[] =
+    requests.length === 0 ? [] : await readAll(source, requests, request.concurrency ?? 8);
   const configs: ChangedConfig[] = [];
   let nextBase = judged.length;
   for (const [i, change] of judged.entries()) {
     const filePolicy = resolvePolicy(policy, change.path);
-    const judging: Judging = { limits: filePolicy.limits, rules: filePolicy.rules, standing: filePolicy.standing };
-    const headVersion = inspectVersion(answers[i]!, change.path, filePolicy.serving, request.overrides, policyPath, memo)
-      ?? { path: change.path, line: null, message: `${change.path} is not a regular file at head (a symlink, a submodule or too large to read), so it was not judged` };
+    const judging: Judging = {
+      limits: filePolicy.limits,
+      rules: filePolicy.rules,
+      standing: filePolicy.standing,
+    };
+    const headVersion = inspectVersion(
+      answers[i]!,
+      change.path,
+      filePolicy.serving,
+      request.overrides,
+      policyPath,
+      memo,
+    ) ?? {
+      path: change.path,
+      line: null,
+      message: `${change.path} is not a regular file at head (a symlink, a submodule or too large to read), so it was not judged`,
+    };
     answers[i] = null; // the bytes are no longer needed
     let baseVersion: FileReport | FileFailure | null = null;
     let status = change.status;
@@ -175,9 +225,18 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
       answers[nextBase++] = null;
       const basePath = change.previousPath ?? change.path;
       if (baseAnswer instanceof Error) {
-        throw new BaseUnreadableError(`${basePath} could not be read at base ${base}: ${baseAnswer.message}. Its head cannot be judged against it, so the check fails until it can be read (re-run the job)`);
+        throw new BaseUnreadableError(
+          `${basePath} could not be read at base ${base}: ${baseAnswer.message}. Its head cannot be judged against it, so the check fails until it can be read (re-run the job)`,
+        );
       }
-      baseVersion = inspectVersion(baseAnswer, basePath, filePolicy.serving, request.overrides, policyPath, memo);
+      baseVersion = inspectVersion(
+        baseAnswer,
+        basePath,
+        filePolicy.serving,
+        request.overrides,
+        policyPath,
+        memo,
+      );
       // A base version that is not there (a 404, a shallow history) is an added file.
       if (baseVersion === null) status = 'added';
     }
@@ -186,21 +245,39 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
 
   // A config moved and rewritten shows as deleted plus added: pair them by the model they
   // describe and judge the pair as a change (`src/core/pair-moves.ts`).
-  const arrived = configs.filter((c) => c.change.status === 'added' && c.head !== null && 'spec' in c.head);
+  const arrived = configs.filter(
+    (c) => c.change.status === 'added' && c.head !== null && 'spec' in c.head,
+  );
   if (arrived.length > 0 && deleted.length > 0) {
-    const answers = await readAll(source, deleted.map((change) => ({ ref: base, path: change.path })), request.concurrency ?? 8);
+    const answers = await readAll(
+      source,
+      deleted.map((change) => ({ ref: base, path: change.path })),
+      request.concurrency ?? 8,
+    );
     const gone = new Map<string, FileReport>();
     deleted.forEach((change, i) => {
       const answer = answers[i]!;
       if (answer instanceof Error) {
-        throw new BaseUnreadableError(`${change.path} (deleted) could not be read at base ${base}: ${answer.message}. It may have moved to an added file, which cannot be judged against it, so the check fails until it can be read (re-run the job)`);
+        throw new BaseUnreadableError(
+          `${change.path} (deleted) could not be read at base ${base}: ${answer.message}. It may have moved to an added file, which cannot be judged against it, so the check fails until it can be read (re-run the job)`,
+        );
       }
-      const version = inspectVersion(answer, change.path, resolvePolicy(policy, change.path).serving, request.overrides, policyPath, memo);
+      const version = inspectVersion(
+        answer,
+        change.path,
+        resolvePolicy(policy, change.path).serving,
+        request.overrides,
+        policyPath,
+        memo,
+      );
       if (version !== null && 'spec' in version) gone.set(change.path, version);
     });
     const moves = pairMoves(
       [...gone.values()].map((version) => ({ path: version.path, spec: version.spec })),
-      arrived.map((config) => ({ path: config.change.path, spec: (config.head as FileReport).spec })),
+      arrived.map((config) => ({
+        path: config.change.path,
+        spec: (config.head as FileReport).spec,
+      })),
     );
     for (const move of moves) {
       const config = arrived.find((c) => c.change.path === move.to)!;
@@ -216,21 +293,37 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   const notices = [...(request.notices ?? [])];
   const judgedConfigs = configs.filter((config) => {
     const head = config.head;
-    const skip = policy.files === DEFAULT_POLICY.files && head !== null && 'notAModel' in head && head.notAModel === true;
-    if (skip) notices.push(`${config.change.path} matched the default file globs but is not a model config; it was not judged (list your model files under \`files\` in the policy to judge exactly those).`);
+    const skip =
+      policy.files === DEFAULT_POLICY.files &&
+      head !== null &&
+      'notAModel' in head &&
+      head.notAModel === true;
+    if (skip)
+      notices.push(
+        `${config.change.path} matched the default file globs but is not a model config; it was not judged (list your model files under \`files\` in the policy to judge exactly those).`,
+      );
     return !skip;
   });
 
   const labels = request.labels ?? [];
   const waiverLabel = policy.waiverLabel ?? null;
   // Every blocking finding gets its remedy here, proven against the same policy and base.
-  return attachRemedies(decide({
-    configs: judgedConfigs,
-    deleted,
-    policy: { source: basePolicyBytes === null ? 'built-in' : 'file', path: policyPath, changedInHead: policyChanged, ...(limitChanges.length > 0 ? { limitChanges } : {}) },
-    waiver: { label: waiverLabel, applied: waiverLabel !== null && labels.includes(waiverLabel) },
-    notices,
-    base,
-    head,
-  }), judgedConfigs, memo);
+  return attachRemedies(
+    decide({
+      configs: judgedConfigs,
+      deleted,
+      policy: {
+        source: basePolicyBytes === null ? 'built-in' : 'file',
+        path: policyPath,
+        changedInHead: policyChanged,
+        ...(limitChanges.length > 0 ? { limitChanges } : {}),
+      },
+      waiver: { label: waiverLabel, applied: waiverLabel !== null && labels.includes(waiverLabel) },
+      notices,
+      base,
+      head,
+    }),
+    judgedConfigs,
+    memo,
+  );
 }

@@ -3,18 +3,46 @@
  * engine) use. A test pins this list; widen it on purpose, not by accident.
  */
 export type { ChangedFile } from './changes.js';
-export type { Dialect, Finding, FloatFormat, LocationMap, ModelSpec, ServingPatch, Severity, StorageDType } from './model.js';
+export type {
+  Dialect,
+  Finding,
+  FloatFormat,
+  LocationMap,
+  ModelSpec,
+  ServingPatch,
+  Severity,
+  StorageDType,
+} from './model.js';
 export { FLOAT_FORMATS, STORAGE_DTYPES } from './model.js';
 export type { Metrics, MetricPath, PrecisionMetrics } from './metrics/types.js';
 export { computeMetrics } from './metrics/compute.js';
 export { readModel } from './parse/read-model.js';
 export { decodeText } from './parse/source.js';
 export { NotAModelError, ReadError } from './parse/errors.js';
-export { inspectModel, toFailure, type FileFailure, type FileReport, type InspectOptions } from './inspect.js';
-export { DEFAULT_POLICY, DEFAULT_POLICY_PATH, PolicyError, parsePolicy, resolvePolicy, isModelConfig } from './policy/index.js';
+export {
+  inspectModel,
+  toFailure,
+  type FileFailure,
+  type FileReport,
+  type InspectOptions,
+} from './inspect.js';
+export {
+  DEFAULT_POLICY,
+  DEFAULT_POLICY_PATH,
+  PolicyError,
+  parsePolicy,
+  resolvePolicy,
+  isModelConfig,
+} from './policy/index.js';
 export type { Policy, FilePolicy } from './policy/index.js';
 export { runGate, type ContentSource, type GateRequest } from './gate.js';
-export { decide, type GateReport, type FileDecision, type JudgedFinding, type Verdict } from './compare/decide.js';
+export {
+  decide,
+  type GateReport,
+  type FileDecision,
+  type JudgedFinding,
+  type Verdict,
+} from './compare/decide.js';
 export { METRIC_PATHS, metricValue } from './compare/metric-path.js';
 export { RULES, type RuleId } from './rules/catalog.js';
 export { renderComment, COMMENT_LIMIT, type MarkdownContext } from './render/comment.js';

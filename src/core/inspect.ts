@@ -1,4 +1,11 @@
-import type { Dialect, Finding, LocationMap, ModelSpec, ServingPatch, SourceLocation } from './model.js';
+import type {
+  Dialect,
+  Finding,
+  LocationMap,
+  ModelSpec,
+  ServingPatch,
+  SourceLocation,
+} from './model.js';
 import type { Metrics } from './metrics/types.js';
 import { computeMetrics } from './metrics/compute.js';
 import type { ScanMemo } from './metrics/scan-memo.js';
@@ -58,20 +65,44 @@ export function inspectModel(text: string, path: string, options: InspectOptions
   let spec = read.spec;
   let locations = read.locations;
   if (options.defaults) {
-    ({ spec, locations } = applyServing(spec, locations, options.defaults, 'default',
-      options.defaultsOrigin ?? { key: 'policy serving', line: null }));
+    ({ spec, locations } = applyServing(
+      spec,
+      locations,
+      options.defaults,
+      'default',
+      options.defaultsOrigin ?? { key: 'policy serving', line: null },
+    ));
   }
   if (options.overrides) {
-    ({ spec, locations } = applyServing(spec, locations, options.overrides, 'override',
-      options.overridesOrigin ?? { key: 'command line', line: null }));
+    ({ spec, locations } = applyServing(
+      spec,
+      locations,
+      options.overrides,
+      'override',
+      options.overridesOrigin ?? { key: 'command line', line: null },
+    ));
   }
   const metrics = computeMetrics(spec, options.memo);
-  const findings = [...read.findings, ...specFindings(spec, locations), ...metricFindings(spec, metrics, locations)];
-  return { path, dialect: read.dialect, spec, locations, metrics, findings: sortFindings(findings) };
+  const findings = [
+    ...read.findings,
+    ...specFindings(spec, locations),
+    ...metricFindings(spec, metrics, locations),
+  ];
+  return {
+    path,
+    dialect: read.dialect,
+    spec,
+    locations,
+    metrics,
+    findings: sortFindings(findings),
+  };
 }
 
 /** Most severe first, then by line, so the first rows of any report are the ones that matter. */
 export function sortFindings(findings: Finding[]): Finding[] {
-  return [...findings].sort((a, b) =>
-    SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] || (a.line ?? Infinity) - (b.line ?? Infinity));
+  return [...findings].sort(
+    (a, b) =>
+      SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] ||
+      (a.line ?? Infinity) - (b.line ?? Infinity),
+  );
 }

@@ -11,7 +11,14 @@ export const FLOAT_FORMATS: readonly FloatFormat[] = ['fp32', 'bf16', 'fp16'];
 
 /** Storage formats for weights and the key/value cache. */
 export type StorageDType = 'fp32' | 'bf16' | 'fp16' | 'fp8' | 'int8' | 'int4';
-export const STORAGE_DTYPES: readonly StorageDType[] = ['fp32', 'bf16', 'fp16', 'fp8', 'int8', 'int4'];
+export const STORAGE_DTYPES: readonly StorageDType[] = [
+  'fp32',
+  'bf16',
+  'fp16',
+  'fp8',
+  'int8',
+  'int4',
+];
 
 /**
  * Context-extension schemes for rotary codes (METRICS.md, symbol θ'_i). `pairwise`: one factor
@@ -19,7 +26,14 @@ export const STORAGE_DTYPES: readonly StorageDType[] = ['fp32', 'bf16', 'fp16', 
  * `longrope`, formerly `su`).
  */
 export type ScalingKind = 'linear' | 'ntk' | 'dynamic' | 'yarn' | 'banded' | 'pairwise';
-export const SCALING_KINDS: readonly ScalingKind[] = ['linear', 'ntk', 'dynamic', 'yarn', 'banded', 'pairwise'];
+export const SCALING_KINDS: readonly ScalingKind[] = [
+  'linear',
+  'ntk',
+  'dynamic',
+  'yarn',
+  'banded',
+  'pairwise',
+];
 
 export interface Scaling {
   kind: ScalingKind;
@@ -67,7 +81,14 @@ export type PositionCode =
   | { kind: 'none' };
 
 export type PositionKind = PositionCode['kind'];
-export const POSITION_KINDS: readonly PositionKind[] = ['sinusoidal', 'learned', 'rotary', 'alibi', 'relative', 'none'];
+export const POSITION_KINDS: readonly PositionKind[] = [
+  'sinusoidal',
+  'learned',
+  'rotary',
+  'alibi',
+  'relative',
+  'none',
+];
 
 /**
  * A vision tower beside the language model (multimodal configs), ViT style: patch embedding,

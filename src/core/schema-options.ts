@@ -6,4 +6,8 @@
  * no optimising pass over code that runs a few hundred times. The errors are the same: instance
  * paths, keywords, params, data and parent schemas do not depend on these options.
  */
-export const SCHEMA_COMPILE_OPTIONS = { inlineRefs: false, validateSchema: false, code: { optimize: false } } as const;
+export const SCHEMA_COMPILE_OPTIONS = {
+  inlineRefs: false,
+  validateSchema: false,
+  code: { optimize: false },
+} as const;

@@ -27,10 +27,16 @@ const SPEC_PATH: Record<Field, string> = {
 
 function current(spec: ModelSpec, field: Field): unknown {
   switch (field) {
-    case 'weights': case 'cache': case 'positions': return spec.dtypes[field];
-    case 'trainedSpan': return spec.trainedSpan;
-    case 'weightGroupSize': return spec.quantization ?? null;
-    default: return spec.serving[field] ?? null;
+    case 'weights':
+    case 'cache':
+    case 'positions':
+      return spec.dtypes[field];
+    case 'trainedSpan':
+      return spec.trainedSpan;
+    case 'weightGroupSize':
+      return spec.quantization ?? null;
+    default:
+      return spec.serving[field] ?? null;
   }
 }
 
@@ -54,10 +60,19 @@ export function applyServing(
     if (value === undefined || field === 'weightGroupSize') continue;
     if (mode === 'default' && current(spec, field) !== null) continue;
     switch (field) {
-      case 'weights': case 'cache': next.dtypes[field] = value as never; weightsSet ||= field === 'weights'; break;
-      case 'positions': next.dtypes.positions = value as never; break;
-      case 'trainedSpan': next.trainedSpan = value as number; break;
-      default: next.serving[field] = value as number;
+      case 'weights':
+      case 'cache':
+        next.dtypes[field] = value as never;
+        weightsSet ||= field === 'weights';
+        break;
+      case 'positions':
+        next.dtypes.positions = value as never;
+        break;
+      case 'trainedSpan':
+        next.trainedSpan = value as number;
+        break;
+      default:
+        next.serving[field] = value as number;
     }
     nextLocations[SPEC_PATH[field]] = where(field);
   }

@@ -25,7 +25,8 @@ export function formatTokens(value: number | null): string {
   if (value === null || !Number.isFinite(value)) return '—';
   const plain = formatInteger(value);
   const magnitude = Math.abs(value);
-  if (magnitude >= 1024 * 1024 && magnitude % (1024 * 1024) === 0) return `${plain} (${value / (1024 * 1024)}M)`;
+  if (magnitude >= 1024 * 1024 && magnitude % (1024 * 1024) === 0)
+    return `${plain} (${value / (1024 * 1024)}M)`;
   if (magnitude >= 1024 && magnitude % 1024 === 0) return `${plain} (${value / 1024}k)`;
   return plain;
 }
@@ -50,7 +51,12 @@ export function formatBytes(value: number | null): string {
 export function formatCount(value: number | null): string {
   if (value === null || !Number.isFinite(value)) return '—';
   const magnitude = Math.abs(value);
-  for (const [size, suffix] of [[1e12, 'T'], [1e9, 'B'], [1e6, 'M'], [1e3, 'k']] as const) {
+  for (const [size, suffix] of [
+    [1e12, 'T'],
+    [1e9, 'B'],
+    [1e6, 'M'],
+    [1e3, 'k'],
+  ] as const) {
     if (magnitude >= size) return `${Number((value / size).toPrecision(3))}${suffix}`;
   }
   return formatInteger(value);
@@ -58,7 +64,8 @@ export function formatCount(value: number | null): string {
 
 /** A signed percentage change from `before` to `after`, null when undefined. */
 export function percentChange(before: number | null, after: number | null): number | null {
-  if (before === null || after === null || !Number.isFinite(before) || !Number.isFinite(after)) return null;
+  if (before === null || after === null || !Number.isFinite(before) || !Number.isFinite(after))
+    return null;
   if (before === 0) return after === 0 ? 0 : null;
   return ((after - before) / Math.abs(before)) * 100;
 }

@@ -26,7 +26,19 @@ let afterSecond: { id: number; body: string; line: number }[] = [];
 let fixedText = '';
 
 function git(...args: string[]): string {
-  return execFileSync('git', ['-c', 'user.name=test', '-c', 'user.email=test@example.invalid', '-c', 'commit.gpgsign=false', ...args], { cwd: repo.dir, encoding: 'utf8' }).trim();
+  return execFileSync(
+    'git',
+    [
+      '-c',
+      'user.name=test',
+      '-c',
+      'user.email=test@example.invalid',
+      '-c',
+      'commit.gpgsign=false',
+      ...args,
+    ],
+    { cwd: repo.dir, encoding: 'utf8' },
+  ).trim();
 }
 
 /** The file's unified diff between two commits, from its first hunk on, as the pull request's file list carries it. */
@@ -50,14 +62,30 @@ beforeAll(async () => {
   repo = scenarioRepo(
     { '.github/context-reach.yml': POLICY, 'models/tiny/config.json': checkpointConfig() },
     // The pull request quadruples the declared span and leaves the rotary code as it was.
-    { '.github/context-reach.yml': POLICY, 'models/tiny/config.json': checkpointConfig({ max_position_embeddings: 16384 }) },
+    {
+      '.github/context-reach.yml': POLICY,
+      'models/tiny/config.json': checkpointConfig({ max_position_embeddings: 16384 }),
+    },
   );
   fake = await startFakeGitHub({ owner: OWNER, repo: REPO });
   fake.state.pulls.set(7, {
-    number: 7, baseSha: repo.base, headSha: repo.head, baseRef: 'main', headRef: 'feature', labels: [],
-    headRepo: `${OWNER}/${REPO}`, files: [{ filename: 'models/tiny/config.json', status: 'modified', patch: patchOf(repo.base, repo.head, 'models/tiny/config.json') }],
+    number: 7,
+    baseSha: repo.base,
+    headSha: repo.head,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: [],
+    headRepo: `${OWNER}/${REPO}`,
+    files: [
+      {
+        filename: 'models/tiny/config.json',
+        status: 'modified',
+        patch: patchOf(repo.base, repo.head, 'models/tiny/config.json'),
+      },
+    ],
   });
-  const snapshot = () => fake.state.reviewComments.map((c) => ({ id: c.id, body: c.body, line: c.line }));
+  const snapshot = () =>
+    fake.state.reviewComments.map((c) => ({ id: c.id, body: c.body, line: c.line }));
   first = await run();
   afterFirst = snapshot();
   second = await run();
@@ -74,7 +102,13 @@ beforeAll(async () => {
     const fixed = git('rev-parse', 'HEAD');
     const pull = fake.state.pulls.get(7)!;
     pull.headSha = fixed;
-    pull.files = [{ filename: 'models/tiny/config.json', status: 'modified', patch: patchOf(repo.base, fixed, 'models/tiny/config.json') }];
+    pull.files = [
+      {
+        filename: 'models/tiny/config.json',
+        status: 'modified',
+        patch: patchOf(repo.base, fixed, 'models/tiny/config.json'),
+      },
+    ];
     third = await run(fixed);
   }
 }, 90_000);
@@ -96,7 +130,9 @@ describe('the bundled action on a pull request', () => {
     expect(Number(first.outputs.blocking)).toBeGreaterThanOrEqual(1);
     expect(first.outputs.warnings).toMatch(/^\d+$/);
     expect(first.outputs['report-json']).toMatch(/context-reach[/\\]report\.json$/);
-    expect(first.outputs['comment-url']).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/example-org\/model-zoo\/pull\/7#issuecomment-\d+$/);
+    expect(first.outputs['comment-url']).toMatch(
+      /^http:\/\/127\.0\.0\.1:\d+\/example-org\/model-zoo\/pull\/7#issuecomment-\d+$/,
+    );
   });
 
   it('creates the comment on the first run and updates the same one on the later runs', () => {
@@ -114,7 +150,9 @@ describe('the bundled action on a pull request', () => {
   });
 
   it('annotates the offending line of the model config', () => {
-    const error = first.annotations.find((a) => a.level === 'error' && a.message.includes('declared span grew'));
+    const error = first.annotations.find(
+      (a) => a.level === 'error' && a.message.includes('declared span grew'),
+    );
     expect(error?.properties.file).toBe('models/tiny/config.json');
     // max_position_embeddings is on line 10 of the generated config.
     expect(error?.properties.line).toBe('10');
@@ -127,13 +165,15 @@ describe('the bundled action on a pull request', () => {
     expect(report.files[0].path).toBe('models/tiny/config.json');
   });
 
-  it('posts the fix as one review suggestion on the offending line, in the file\'s own JSON keys', () => {
+  it("posts the fix as one review suggestion on the offending line, in the file's own JSON keys", () => {
     expect(afterFirst).toHaveLength(1);
     expect(fake.calls('pulls/create-review-comment')).toHaveLength(1);
     const [suggestion] = afterFirst;
     expect(suggestion!.line).toBe(10);
     expect(suggestion!.body).toMatch(/^<!-- context-reach:suggestion [0-9a-f]{16} -->/);
-    expect(suggestion!.body).toContain('```suggestion\n  "max_position_embeddings": 16384,\n  "rope_scaling": {"rope_type": "linear", "factor": 4.0, "original_max_position_embeddings": 4096},\n```');
+    expect(suggestion!.body).toContain(
+      '```suggestion\n  "max_position_embeddings": 16384,\n  "rope_scaling": {"rope_type": "linear", "factor": 4.0, "original_max_position_embeddings": 4096},\n```',
+    );
     expect(suggestion!.body).toContain('still needs fine\\-tuning');
   });
 
@@ -144,14 +184,18 @@ describe('the bundled action on a pull request', () => {
 
   it('applying the suggestion gives valid JSON that clears the finding, and the re-run removes the suggestion', () => {
     expect(() => JSON.parse(fixedText)).not.toThrow();
-    expect(JSON.parse(fixedText).rope_scaling).toEqual({ rope_type: 'linear', factor: 4, original_max_position_embeddings: 4096 });
+    expect(JSON.parse(fixedText).rope_scaling).toEqual({
+      rope_type: 'linear',
+      factor: 4,
+      original_max_position_embeddings: 4096,
+    });
     expect(third.outputs.verdict).not.toBe('block');
     expect(fake.calls('pulls/delete-review-comment')).toHaveLength(1);
     expect(fake.state.reviewComments).toEqual([]);
     expect(fake.calls('pulls/create-review-comment')).toHaveLength(1);
   });
 
-  it('makes only requests that GitHub\'s REST description allows, method, path and body', () => {
+  it("makes only requests that GitHub's REST description allows, method, path and body", () => {
     expect(fake.requests.length).toBeGreaterThan(0);
     expect(fake.mismatches).toEqual([]);
     expect(fake.responseMismatches).toEqual([]);
@@ -161,14 +205,25 @@ describe('the bundled action on a pull request', () => {
   it('registers the token as a secret and prints it nowhere else', () => {
     // `::add-mask::` is how an action tells the runner to hide a value from every later line.
     expect(first.stdout.split('\n')[0]).toBe(`::add-mask::${fake.state.token}`);
-    const stdout = first.stdout.split('\n').filter((line) => !line.startsWith('::add-mask::')).join('\n');
-    for (const text of [stdout, first.stderr, first.summary, ...Object.values(first.files), ...fake.state.comments.map((c) => c.body)]) {
+    const stdout = first.stdout
+      .split('\n')
+      .filter((line) => !line.startsWith('::add-mask::'))
+      .join('\n');
+    for (const text of [
+      stdout,
+      first.stderr,
+      first.summary,
+      ...Object.values(first.files),
+      ...fake.state.comments.map((c) => c.body),
+    ]) {
       expect(text).not.toContain(fake.state.token);
     }
   });
 
-  it('finishes well inside the runner\'s patience (each run under 5 s)', () => {
-    console.log(`bundle e2e: first run ${first.elapsedMs.toFixed(0)} ms, second ${second.elapsedMs.toFixed(0)} ms`);
+  it("finishes well inside the runner's patience (each run under 5 s)", () => {
+    console.log(
+      `bundle e2e: first run ${first.elapsedMs.toFixed(0)} ms, second ${second.elapsedMs.toFixed(0)} ms`,
+    );
     expect(first.elapsedMs).toBeLessThan(5000);
   });
 });

@@ -3,12 +3,18 @@ import { createGitReader } from '../../src/action/git.js';
 import type { GateReport } from '../../src/core/compare/decide.js';
 import { runGate, type ContentRequest, type ContentSource } from '../../src/core/gate.js';
 import { renderGateJson } from '../../src/core/render/gate-json.js';
-import { checkpointConfig, scenarioRepo, type ScenarioRepo, type Tree } from '../support/scenario-repo.js';
+import {
+  checkpointConfig,
+  scenarioRepo,
+  type ScenarioRepo,
+  type Tree,
+} from '../support/scenario-repo.js';
 
 // The gate reads the versions of all files with one batched call per run when the source
 // offers readMany (the git adapter does), and must judge exactly as it does reading file by file.
 
-const POLICY = 'limits:\n  fitSequences: { min: 1 }\nserving:\n  device-memory-gib: 80\n  sequences: 4\n';
+const POLICY =
+  'limits:\n  fitSequences: { min: 1 }\nserving:\n  device-memory-gib: 80\n  sequences: 4\n';
 /** More files than the read window (32) the gate once had, so nothing depends on such a window. */
 const FILES = 45;
 
@@ -22,7 +28,10 @@ beforeAll(() => {
     const text = checkpointConfig({ max_position_embeddings: 2048 * (1 + (i % 5)) });
     if (i % 9 !== 0) base[path] = text; // every ninth file is added in head
     if (i % 11 === 3) continue; // some are deleted in head
-    head[path] = i % 2 === 0 ? checkpointConfig({ max_position_embeddings: 4096 * (1 + (i % 5)) }) : text.replace('10000', '20000');
+    head[path] =
+      i % 2 === 0
+        ? checkpointConfig({ max_position_embeddings: 4096 * (1 + (i % 5)) })
+        : text.replace('10000', '20000');
   }
   // Renamed, a symlink and a file that is not a model config, among the batched reads.
   base['models/old-name/config.json'] = checkpointConfig({ rope_theta: 500000 });
@@ -37,7 +46,10 @@ afterAll(() => repo?.remove());
 async function judge(source: ContentSource): Promise<GateReport> {
   const git = createGitReader(repo.dir);
   return runGate(source, {
-    base: repo.base, head: repo.head, changes: await git.changedFiles(repo.base, repo.head), policyPath: '.github/context-reach.yml',
+    base: repo.base,
+    head: repo.head,
+    changes: await git.changedFiles(repo.base, repo.head),
+    policyPath: '.github/context-reach.yml',
   });
 }
 
@@ -47,7 +59,10 @@ describe('runGate(source, request) with a source that offers readMany', () => {
     let reads = 0;
     const batches: number[] = [];
     const batched = await judge({
-      read: (ref, path) => { reads += 1; return git.show(ref, path); },
+      read: (ref, path) => {
+        reads += 1;
+        return git.show(ref, path);
+      },
       readMany: (requests: readonly ContentRequest[]) => {
         batches.push(requests.length);
         return git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path })));
@@ -57,16 +72,22 @@ describe('runGate(source, request) with a source that offers readMany', () => {
     expect(renderGateJson(batched)).toBe(renderGateJson(single));
     expect(batched.files.length).toBeGreaterThan(32);
     expect(batches).toHaveLength(1);
-    expect(batches[0]).toBe(batched.files.length + batched.files.filter((f) => f.status !== 'added').length);
+    expect(batches[0]).toBe(
+      batched.files.length + batched.files.filter((f) => f.status !== 'added').length,
+    );
     // Only the policy is read on its own (once at base; head's is the same file unchanged).
     expect(reads).toBe(1);
   });
 
   it('fails closed when a readMany throws: a base version that cannot be read stops the gate, naming the file and why', async () => {
     const git = createGitReader(repo.dir);
-    await expect(judge({
-      read: (ref, path) => git.show(ref, path),
-      readMany: async () => { throw new Error('the batch broke'); },
-    })).rejects.toThrow(/could not be read at base [0-9a-f]{40}: the batch broke/);
+    await expect(
+      judge({
+        read: (ref, path) => git.show(ref, path),
+        readMany: async () => {
+          throw new Error('the batch broke');
+        },
+      }),
+    ).rejects.toThrow(/could not be read at base [0-9a-f]{40}: the batch broke/);
   });
 });

@@ -1,10 +1,24 @@
 import { execFileSync } from 'node:child_process';
-import { chmodSync, mkdirSync, mkdtempSync, rmSync, statSync, symlinkSync, unlinkSync, writeFileSync } from 'node:fs';
+import {
+  chmodSync,
+  mkdirSync,
+  mkdtempSync,
+  rmSync,
+  statSync,
+  symlinkSync,
+  unlinkSync,
+  writeFileSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import {
-  ContentTooLargeError, GitError, MAX_CONFIG_BYTES, createGitReader, createScratchRepository, parseNameStatus,
+  ContentTooLargeError,
+  GitError,
+  MAX_CONFIG_BYTES,
+  createGitReader,
+  createScratchRepository,
+  parseNameStatus,
 } from '../../src/action/git.js';
 import type { GitReader } from '../../src/action/git.js';
 
@@ -18,7 +32,13 @@ function git(...args: string[]): string {
   return execFileSync('git', args, {
     cwd: repo,
     encoding: 'utf8',
-    env: { ...process.env, GIT_AUTHOR_NAME: 'Test Author', GIT_AUTHOR_EMAIL: 'author@example.invalid', GIT_COMMITTER_NAME: 'Test Author', GIT_COMMITTER_EMAIL: 'author@example.invalid' },
+    env: {
+      ...process.env,
+      GIT_AUTHOR_NAME: 'Test Author',
+      GIT_AUTHOR_EMAIL: 'author@example.invalid',
+      GIT_COMMITTER_NAME: 'Test Author',
+      GIT_COMMITTER_EMAIL: 'author@example.invalid',
+    },
   }).trim();
 }
 
@@ -71,15 +91,29 @@ describe('changedFiles(base, head)', () => {
   test('lists modified, renamed (with the old path), deleted and added files as git diff does', async () => {
     const files = await reader.changedFiles(base, head);
     const byPath = new Map(files.map((file) => [file.path, file]));
-    expect(byPath.get('models/a/config.json')).toEqual({ status: 'modified', path: 'models/a/config.json', previousPath: null });
-    expect(byPath.get('models/new.reach.yaml')).toEqual({ status: 'renamed', path: 'models/new.reach.yaml', previousPath: 'models/old.reach.yaml' });
-    expect(byPath.get('notes/delete-me.txt')).toEqual({ status: 'deleted', path: 'notes/delete-me.txt', previousPath: null });
+    expect(byPath.get('models/a/config.json')).toEqual({
+      status: 'modified',
+      path: 'models/a/config.json',
+      previousPath: null,
+    });
+    expect(byPath.get('models/new.reach.yaml')).toEqual({
+      status: 'renamed',
+      path: 'models/new.reach.yaml',
+      previousPath: 'models/old.reach.yaml',
+    });
+    expect(byPath.get('notes/delete-me.txt')).toEqual({
+      status: 'deleted',
+      path: 'notes/delete-me.txt',
+      previousPath: null,
+    });
     expect(byPath.get(ODD_NAME)?.status).toBe('added');
     expect(byPath.get(NEWLINE_NAME)?.status).toBe('added');
     expect(byPath.get('models/outside.json')?.status).toBe('added');
     expect(byPath.has('models/stays.json')).toBe(false);
     // Cross-check the count against git's own summary of the same diff.
-    expect(files).toHaveLength(git('diff', '--name-only', '-M', base, head, '-z').split('\u0000').filter(Boolean).length);
+    expect(files).toHaveLength(
+      git('diff', '--name-only', '-M', base, head, '-z').split('\u0000').filter(Boolean).length,
+    );
   });
 
   test('is empty between a commit and itself', async () => {
@@ -89,13 +123,21 @@ describe('changedFiles(base, head)', () => {
 
 describe('show(commit, path)', () => {
   test('gives the bytes of a file at each commit', async () => {
-    expect(Buffer.from((await reader.show(base, 'models/a/config.json')) as Uint8Array).toString('utf8')).toBe(CONFIG_A);
-    expect(Buffer.from((await reader.show(head, 'models/a/config.json')) as Uint8Array).toString('utf8')).toBe(CONFIG_A.replace('4096', '5120'));
+    expect(
+      Buffer.from((await reader.show(base, 'models/a/config.json')) as Uint8Array).toString('utf8'),
+    ).toBe(CONFIG_A);
+    expect(
+      Buffer.from((await reader.show(head, 'models/a/config.json')) as Uint8Array).toString('utf8'),
+    ).toBe(CONFIG_A.replace('4096', '5120'));
   });
 
   test('reads names with spaces, glob characters, non-ASCII letters and a newline exactly', async () => {
-    expect(Buffer.from((await reader.show(head, ODD_NAME)) as Uint8Array).toString('utf8')).toBe('{"odd": true}\n');
-    expect(Buffer.from((await reader.show(head, NEWLINE_NAME)) as Uint8Array).toString('utf8')).toBe('{"newline": true}\n');
+    expect(Buffer.from((await reader.show(head, ODD_NAME)) as Uint8Array).toString('utf8')).toBe(
+      '{"odd": true}\n',
+    );
+    expect(
+      Buffer.from((await reader.show(head, NEWLINE_NAME)) as Uint8Array).toString('utf8'),
+    ).toBe('{"newline": true}\n');
     // "*" in the name is not a pattern: no other file answers for it.
     expect(await reader.show(head, 'models/ü ber #1 [x]x.json')).toBeNull();
   });
@@ -110,7 +152,9 @@ describe('show(commit, path)', () => {
     expect(await reader.show(head, 'models/outside.json')).toBeNull();
     expect(await reader.show(head, 'models/inside.json')).toBeNull();
     expect(await reader.show(head, 'linked/config.json')).toBeNull();
-    expect(await reader.entry(head, 'models/outside.json')).toEqual(expect.objectContaining({ kind: 'symlink', mode: '120000' }));
+    expect(await reader.entry(head, 'models/outside.json')).toEqual(
+      expect.objectContaining({ kind: 'symlink', mode: '120000' }),
+    );
   });
 
   test('is null for a directory', async () => {
@@ -120,10 +164,14 @@ describe('show(commit, path)', () => {
 
   test('reads a file of exactly MAX_CONFIG_BYTES and refuses one byte more', async () => {
     expect(MAX_CONFIG_BYTES).toBe(4 * 1024 * 1024);
-    expect((await reader.show(head, 'models/exact/config.json'))?.byteLength).toBe(statSync(join(repo, 'models/exact/config.json')).size);
+    expect((await reader.show(head, 'models/exact/config.json'))?.byteLength).toBe(
+      statSync(join(repo, 'models/exact/config.json')).size,
+    );
     const error = await reader.show(head, 'models/big/config.json').catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ContentTooLargeError);
-    expect((error as ContentTooLargeError).size).toBe(statSync(join(repo, 'models/big/config.json')).size);
+    expect((error as ContentTooLargeError).size).toBe(
+      statSync(join(repo, 'models/big/config.json')).size,
+    );
     expect((error as Error).message).toContain('models/big/config.json');
   });
 
@@ -166,11 +214,16 @@ describe('showMany(requests)', () => {
       } else if (one === null) {
         expect(got, request.path).toBeNull();
       } else {
-        expect(Buffer.from(got as Uint8Array).equals(Buffer.from(one as Uint8Array)), request.path).toBe(true);
+        expect(
+          Buffer.from(got as Uint8Array).equals(Buffer.from(one as Uint8Array)),
+          request.path,
+        ).toBe(true);
       }
     }
     // Checked against git itself, not only against show.
-    expect(Buffer.from(many[1] as Uint8Array).toString('utf8')).toBe(git('show', `${head}:models/a/config.json`) + '\n');
+    expect(Buffer.from(many[1] as Uint8Array).toString('utf8')).toBe(
+      git('show', `${head}:models/a/config.json`) + '\n',
+    );
     expect(many[11]).toBeInstanceOf(ContentTooLargeError);
     expect(many[12]).toBeInstanceOf(GitError);
   });
@@ -180,7 +233,10 @@ describe('showMany(requests)', () => {
     const counting = join(root, 'counting-git');
     writeFileSync(counting, `#!/bin/sh\necho "$@" >> '${log}'\nexec git "$@"\n`);
     chmodSync(counting, 0o755);
-    const requests = Array.from({ length: 40 }, (_, i) => ({ commit: i % 2 === 0 ? base : head, path: i % 4 < 2 ? 'models/a/config.json' : 'models/stays.json' }));
+    const requests = Array.from({ length: 40 }, (_, i) => ({
+      commit: i % 2 === 0 ? base : head,
+      path: i % 4 < 2 ? 'models/a/config.json' : 'models/stays.json',
+    }));
     const answers = await createGitReader(repo, { git: counting }).showMany(requests);
     expect(answers.every((a) => a instanceof Uint8Array)).toBe(true);
     const calls = execFileSync('cat', [log], { encoding: 'utf8' }).trim().split('\n');
@@ -191,7 +247,9 @@ describe('showMany(requests)', () => {
   });
 
   test('is empty for no requests, without running git', async () => {
-    expect(await createGitReader(repo, { git: join(root, 'no-git-here') }).showMany([])).toEqual([]);
+    expect(await createGitReader(repo, { git: join(root, 'no-git-here') }).showMany([])).toEqual(
+      [],
+    );
   });
 });
 
@@ -217,7 +275,9 @@ describe('hasCommit(rev), resolveCommit(rev), mergeBase(a, b)', () => {
 
   test('outside a repository git\'s failure is an error, not "no such commit"', async () => {
     const empty = mkdtempSync(join(root, 'not-a-repo-'));
-    const error = await createGitReader(empty).hasCommit('HEAD').catch((e: unknown) => e);
+    const error = await createGitReader(empty)
+      .hasCommit('HEAD')
+      .catch((e: unknown) => e);
     expect(error).toBeInstanceOf(GitError);
     expect((error as GitError).exitCode).toBe(128);
   });
@@ -229,7 +289,9 @@ describe('bounds', () => {
     writeFileSync(slow, '#!/bin/sh\nsleep 5\n');
     chmodSync(slow, 0o755);
     const started = Date.now();
-    const error = await createGitReader(repo, { git: slow, timeoutMs: 200 }).hasCommit('HEAD').catch((e: unknown) => e);
+    const error = await createGitReader(repo, { git: slow, timeoutMs: 200 })
+      .hasCommit('HEAD')
+      .catch((e: unknown) => e);
     expect(error).toBeInstanceOf(GitError);
     expect((error as Error).message).toMatch(/did not finish within 200 ms/);
     expect(Date.now() - started).toBeLessThan(4000);
@@ -237,12 +299,16 @@ describe('bounds', () => {
   });
 
   test('listing output past its bound is refused', async () => {
-    const error = await createGitReader(repo, { maxListBytes: 16 }).changedFiles(base, head).catch((e: unknown) => e);
+    const error = await createGitReader(repo, { maxListBytes: 16 })
+      .changedFiles(base, head)
+      .catch((e: unknown) => e);
     expect((error as Error).message).toMatch(/more than 16 bytes/);
   });
 
   test('a missing git executable is a clear error', async () => {
-    const error = await createGitReader(repo, { git: join(root, 'no-git-here') }).hasCommit('HEAD').catch((e: unknown) => e);
+    const error = await createGitReader(repo, { git: join(root, 'no-git-here') })
+      .hasCommit('HEAD')
+      .catch((e: unknown) => e);
     expect((error as Error).message).toMatch(/could not be started \(ENOENT\)/);
   });
 });
@@ -271,7 +337,10 @@ describe('createScratchRepository(cwd)', () => {
     const scratch = mkdtempSync(join(root, 'scratch-'));
     const emptyConfig = join(root, 'empty-gitconfig');
     writeFileSync(emptyConfig, '');
-    const saved = { global: process.env.GIT_CONFIG_GLOBAL, nosystem: process.env.GIT_CONFIG_NOSYSTEM };
+    const saved = {
+      global: process.env.GIT_CONFIG_GLOBAL,
+      nosystem: process.env.GIT_CONFIG_NOSYSTEM,
+    };
     // Hide the machine's own settings: the scratch identity must be enough on a bare runner.
     process.env.GIT_CONFIG_GLOBAL = emptyConfig;
     process.env.GIT_CONFIG_NOSYSTEM = '1';
@@ -284,13 +353,22 @@ describe('createScratchRepository(cwd)', () => {
       const second = await repository.commitAll('after');
       const reader = createGitReader(scratch);
       expect(await reader.resolveCommit('main')).toBe(second);
-      expect(await reader.changedFiles(first, second)).toEqual([{ status: 'modified', path: 'config.json', previousPath: null }]);
-      expect(execFileSync('git', ['log', '-1', '--format=%an <%ae>'], { cwd: scratch, encoding: 'utf8' }).trim()).toBe('context-reach demo <demo@example.invalid>');
+      expect(await reader.changedFiles(first, second)).toEqual([
+        { status: 'modified', path: 'config.json', previousPath: null },
+      ]);
+      expect(
+        execFileSync('git', ['log', '-1', '--format=%an <%ae>'], {
+          cwd: scratch,
+          encoding: 'utf8',
+        }).trim(),
+      ).toBe('context-reach demo <demo@example.invalid>');
       // A commit with nothing changed still gets its own id.
       expect(await repository.commitAll('again')).not.toBe(second);
     } finally {
-      if (saved.global === undefined) delete process.env.GIT_CONFIG_GLOBAL; else process.env.GIT_CONFIG_GLOBAL = saved.global;
-      if (saved.nosystem === undefined) delete process.env.GIT_CONFIG_NOSYSTEM; else process.env.GIT_CONFIG_NOSYSTEM = saved.nosystem;
+      if (saved.global === undefined) delete process.env.GIT_CONFIG_GLOBAL;
+      else process.env.GIT_CONFIG_GLOBAL = saved.global;
+      if (saved.nosystem === undefined) delete process.env.GIT_CONFIG_NOSYSTEM;
+      else process.env.GIT_CONFIG_NOSYSTEM = saved.nosystem;
     }
   });
 });

@@ -1,11 +1,24 @@
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import {
-  ApiError, PULL_REQUEST_FILE_CAP, createGitHubClient, isNotFoundError, isPermissionError, publishComment,
+  ApiError,
+  PULL_REQUEST_FILE_CAP,
+  createGitHubClient,
+  isNotFoundError,
+  isPermissionError,
+  publishComment,
 } from '../../src/action/github.js';
 import type { GitHubClient, GitHubClientOptions } from '../../src/action/github.js';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/action/git.js';
 import {
-  COMMENT_BODY_LIMIT, connectionReset, hang, primaryRateLimit, secondaryRateLimit, serverError, startFakeGitHub, statusFault, tree,
+  COMMENT_BODY_LIMIT,
+  connectionReset,
+  hang,
+  primaryRateLimit,
+  secondaryRateLimit,
+  serverError,
+  startFakeGitHub,
+  statusFault,
+  tree,
 } from '../support/fake-github.js';
 import type { FakeGitHub, FakePullFile } from '../support/fake-github.js';
 
@@ -28,17 +41,34 @@ function client(options: Partial<GitHubClientOptions> = {}): GitHubClient {
   });
 }
 
-function addPull(number: number, files: FakePullFile[], extra: { labels?: string[]; headRepo?: string } = {}): void {
+function addPull(
+  number: number,
+  files: FakePullFile[],
+  extra: { labels?: string[]; headRepo?: string } = {},
+): void {
   fake.state.pulls.set(number, {
-    number, baseSha: BASE, headSha: HEAD, baseRef: 'main', headRef: 'feature', labels: extra.labels ?? [],
-    headRepo: extra.headRepo ?? `${OWNER}/${REPO}`, files,
+    number,
+    baseSha: BASE,
+    headSha: HEAD,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: extra.labels ?? [],
+    headRepo: extra.headRepo ?? `${OWNER}/${REPO}`,
+    files,
   });
 }
 
 function addComment(issueNumber: number, body: string, user = fake.state.tokenUser): number {
   const id = fake.state.nextCommentId;
   fake.state.nextCommentId += 1;
-  fake.state.comments.push({ id, issueNumber, body, user, createdAt: '2024-01-01T00:00:00Z', updatedAt: '2024-01-01T00:00:00Z' });
+  fake.state.comments.push({
+    id,
+    issueNumber,
+    body,
+    user,
+    createdAt: '2024-01-01T00:00:00Z',
+    updatedAt: '2024-01-01T00:00:00Z',
+  });
   return id;
 }
 
@@ -59,12 +89,26 @@ afterEach(async () => {
 
 describe('listPullRequestFiles(owner, repo, number)', () => {
   test('pages through 250 files, 100 a page, following the Link header', async () => {
-    addPull(7, Array.from({ length: 250 }, (_, i) => ({ filename: `models/m${i}/config.json`, status: 'modified' as const })));
+    addPull(
+      7,
+      Array.from({ length: 250 }, (_, i) => ({
+        filename: `models/m${i}/config.json`,
+        status: 'modified' as const,
+      })),
+    );
     const { files, truncated } = await client().listPullRequestFiles(OWNER, REPO, 7);
     expect(files).toHaveLength(250);
-    expect(files[249]).toEqual({ status: 'modified', path: 'models/m249/config.json', previousPath: null });
+    expect(files[249]).toEqual({
+      status: 'modified',
+      path: 'models/m249/config.json',
+      previousPath: null,
+    });
     expect(truncated).toBe(false);
-    expect(fake.calls('pulls/list-files').map((call) => call.query)).toEqual(['?per_page=100', '?per_page=100&page=2', '?per_page=100&page=3']);
+    expect(fake.calls('pulls/list-files').map((call) => call.query)).toEqual([
+      '?per_page=100',
+      '?per_page=100&page=2',
+      '?per_page=100&page=3',
+    ]);
   });
 
   test('maps every status of the REST description onto added, modified, renamed, deleted', async () => {
@@ -90,7 +134,13 @@ describe('listPullRequestFiles(owner, repo, number)', () => {
   });
 
   test('flags truncated when GitHub stops at its 3,000-file cap', async () => {
-    addPull(9, Array.from({ length: 3500 }, (_, i) => ({ filename: `f${i}.json`, status: 'added' as const })));
+    addPull(
+      9,
+      Array.from({ length: 3500 }, (_, i) => ({
+        filename: `f${i}.json`,
+        status: 'added' as const,
+      })),
+    );
     const { files, truncated } = await client().listPullRequestFiles(OWNER, REPO, 9);
     expect(PULL_REQUEST_FILE_CAP).toBe(3000);
     expect(files).toHaveLength(3000);
@@ -99,7 +149,13 @@ describe('listPullRequestFiles(owner, repo, number)', () => {
   });
 
   test('is not truncated one file below the cap', async () => {
-    addPull(10, Array.from({ length: 2999 }, (_, i) => ({ filename: `f${i}.json`, status: 'added' as const })));
+    addPull(
+      10,
+      Array.from({ length: 2999 }, (_, i) => ({
+        filename: `f${i}.json`,
+        status: 'added' as const,
+      })),
+    );
     const { files, truncated } = await client().listPullRequestFiles(OWNER, REPO, 10);
     expect(files).toHaveLength(2999);
     expect(truncated).toBe(false);
@@ -118,7 +174,9 @@ describe('retries and rate limits', () => {
   test('gives up with ApiError after the configured retries', async () => {
     addPull(7, []);
     fake.fail('pulls/get', serverError(502), serverError(502), serverError(502));
-    const error = await client({ retries: 2 }).getPullRequest(OWNER, REPO, 7).catch((e: unknown) => e);
+    const error = await client({ retries: 2 })
+      .getPullRequest(OWNER, REPO, 7)
+      .catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiError);
     expect((error as ApiError).status).toBe(502);
     expect(fake.calls('pulls/get')).toHaveLength(3);
@@ -151,13 +209,17 @@ describe('retries and rate limits', () => {
     // Timers fire no earlier than asked; 5 ms of slack for clock granularity.
     expect(elapsed).toBeGreaterThanOrEqual(115);
     expect(fake.calls('pulls/get').map((call) => call.status)).toEqual([403, 200]);
-    expect(logs.some((line) => line.includes('secondary rate limit') && line.includes('waiting 3 s'))).toBe(true);
+    expect(
+      logs.some((line) => line.includes('secondary rate limit') && line.includes('waiting 3 s')),
+    ).toBe(true);
   });
 
   test('a wait longer than the bound is not honoured: the call fails as a rate limit, not a permission error', async () => {
     addPull(7, []);
     fake.fail('pulls/get', secondaryRateLimit(600));
-    const error = await client({ maxRateLimitWaitSeconds: 60 }).getPullRequest(OWNER, REPO, 7).catch((e: unknown) => e);
+    const error = await client({ maxRateLimitWaitSeconds: 60 })
+      .getPullRequest(OWNER, REPO, 7)
+      .catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiError);
     expect((error as ApiError).status).toBe(403);
     expect(isPermissionError(error)).toBe(false);
@@ -167,7 +229,9 @@ describe('retries and rate limits', () => {
   test('rate-limit retries are bounded', async () => {
     addPull(7, []);
     fake.fail('pulls/get', secondaryRateLimit(1), secondaryRateLimit(1), secondaryRateLimit(1));
-    const error = await client({ rateLimitRetries: 2 }).getPullRequest(OWNER, REPO, 7).catch((e: unknown) => e);
+    const error = await client({ rateLimitRetries: 2 })
+      .getPullRequest(OWNER, REPO, 7)
+      .catch((e: unknown) => e);
     expect((error as ApiError).status).toBe(403);
     expect(fake.calls('pulls/get')).toHaveLength(3);
   });
@@ -186,15 +250,18 @@ describe('getFileContent(owner, repo, path, ref)', () => {
   const big = new Uint8Array(2 * 1024 * 1024).map((_, i) => 32 + (i % 90));
 
   beforeEach(() => {
-    fake.state.trees.set(HEAD, tree({
-      'models/a b/ü#1?.json': '{"hidden_size": 64}',
-      'models/empty.json': '',
-      'models/large.json': big,
-      'models/huge.json': new Uint8Array(MAX_CONFIG_BYTES + 1),
-      'models/inside-link.json': { type: 'symlink', target: 'a b/ü#1?.json' },
-      'models/outside-link.json': { type: 'symlink', target: '../../../etc/passwd' },
-      'vendor/sub': { type: 'submodule', url: 'https://example.invalid/sub.git' },
-    }));
+    fake.state.trees.set(
+      HEAD,
+      tree({
+        'models/a b/ü#1?.json': '{"hidden_size": 64}',
+        'models/empty.json': '',
+        'models/large.json': big,
+        'models/huge.json': new Uint8Array(MAX_CONFIG_BYTES + 1),
+        'models/inside-link.json': { type: 'symlink', target: 'a b/ü#1?.json' },
+        'models/outside-link.json': { type: 'symlink', target: '../../../etc/passwd' },
+        'vendor/sub': { type: 'submodule', url: 'https://example.invalid/sub.git' },
+      }),
+    );
   });
 
   test('reads a file whose path has spaces, "#", "?" and non-ASCII letters', async () => {
@@ -216,7 +283,9 @@ describe('getFileContent(owner, repo, path, ref)', () => {
   });
 
   test('reads an empty file as zero bytes', async () => {
-    expect((await client().getFileContent(OWNER, REPO, 'models/empty.json', HEAD))?.byteLength).toBe(0);
+    expect(
+      (await client().getFileContent(OWNER, REPO, 'models/empty.json', HEAD))?.byteLength,
+    ).toBe(0);
   });
 
   test('reads a file past the inline limit through the raw media type, byte for byte', async () => {
@@ -226,7 +295,9 @@ describe('getFileContent(owner, repo, path, ref)', () => {
   });
 
   test('refuses a file one byte past MAX_CONFIG_BYTES without downloading it', async () => {
-    const error = await client().getFileContent(OWNER, REPO, 'models/huge.json', HEAD).catch((e: unknown) => e);
+    const error = await client()
+      .getFileContent(OWNER, REPO, 'models/huge.json', HEAD)
+      .catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ContentTooLargeError);
     expect((error as ContentTooLargeError).size).toBe(4 * 1024 * 1024 + 1);
     expect(fake.calls('repos/get-content')).toHaveLength(1);
@@ -247,7 +318,8 @@ describe('comments', () => {
   });
 
   test('findComment(…) pages through long threads', async () => {
-    for (let i = 0; i < 150; i += 1) addComment(7, `chatter ${i}`, { login: 'someone', type: 'User', id: 5 });
+    for (let i = 0; i < 150; i += 1)
+      addComment(7, `chatter ${i}`, { login: 'someone', type: 'User', id: 5 });
     const ours = addComment(7, `${MARKER}\nreport`);
     expect((await client().findComment(OWNER, REPO, 7, MARKER))?.id).toBe(ours);
     expect(fake.calls('issues/list-comments')).toHaveLength(2);
@@ -256,7 +328,9 @@ describe('comments', () => {
   test('findComment(…) with commentAuthor takes only that login', async () => {
     addComment(7, `${MARKER}\nbot`);
     const mine = addComment(7, `${MARKER}\nmine`, { login: 'release-robot', type: 'User', id: 9 });
-    expect((await client({ commentAuthor: 'release-robot' }).findComment(OWNER, REPO, 7, MARKER))?.id).toBe(mine);
+    expect(
+      (await client({ commentAuthor: 'release-robot' }).findComment(OWNER, REPO, 7, MARKER))?.id,
+    ).toBe(mine);
   });
 
   test('findComment(…) is null when no comment carries the marker', async () => {
@@ -268,7 +342,13 @@ describe('comments', () => {
     addPull(7, []);
     const actions: string[] = [];
     for (let run = 1; run <= 5; run += 1) {
-      const { action, comment } = await publishComment(client(), { owner: OWNER, repo: REPO, issueNumber: 7, marker: MARKER, body: `${MARKER}\nrun ${run}` });
+      const { action, comment } = await publishComment(client(), {
+        owner: OWNER,
+        repo: REPO,
+        issueNumber: 7,
+        marker: MARKER,
+        body: `${MARKER}\nrun ${run}`,
+      });
       actions.push(action);
       expect(comment.url).toContain(`#issuecomment-${comment.id}`);
     }
@@ -279,35 +359,73 @@ describe('comments', () => {
 
   test('publishComment(…) creates a new comment when the old one is gone (404 on update)', async () => {
     const old = addComment(7, `${MARKER}\nold`);
-    fake.fail('issues/update-comment', { ...statusFault(404, 'Not Found'), effect: (state) => { state.comments = state.comments.filter((c) => c.id !== old); } });
-    const { action } = await publishComment(client(), { owner: OWNER, repo: REPO, issueNumber: 7, marker: MARKER, body: `${MARKER}\nnew` });
+    fake.fail('issues/update-comment', {
+      ...statusFault(404, 'Not Found'),
+      effect: (state) => {
+        state.comments = state.comments.filter((c) => c.id !== old);
+      },
+    });
+    const { action } = await publishComment(client(), {
+      owner: OWNER,
+      repo: REPO,
+      issueNumber: 7,
+      marker: MARKER,
+      body: `${MARKER}\nnew`,
+    });
     expect(action).toBe('created');
     expect(fake.state.comments.map((c) => c.body)).toEqual([`${MARKER}\nnew`]);
   });
 
   test('publishComment(…) on a 422 creates a new comment only when a fresh read finds the old one gone', async () => {
     const old = addComment(7, `${MARKER}\nold`);
-    fake.fail('issues/update-comment', { ...statusFault(422, 'Validation Failed'), effect: (state) => { state.comments = state.comments.filter((c) => c.id !== old); } });
-    expect((await publishComment(client(), { owner: OWNER, repo: REPO, issueNumber: 7, marker: MARKER, body: `${MARKER}\nnew` })).action).toBe('created');
+    fake.fail('issues/update-comment', {
+      ...statusFault(422, 'Validation Failed'),
+      effect: (state) => {
+        state.comments = state.comments.filter((c) => c.id !== old);
+      },
+    });
+    expect(
+      (
+        await publishComment(client(), {
+          owner: OWNER,
+          repo: REPO,
+          issueNumber: 7,
+          marker: MARKER,
+          body: `${MARKER}\nnew`,
+        })
+      ).action,
+    ).toBe('created');
     expect(fake.state.comments).toHaveLength(1);
 
     fake.fail('issues/update-comment', statusFault(422, 'Validation Failed'));
-    const error = await publishComment(client(), { owner: OWNER, repo: REPO, issueNumber: 7, marker: MARKER, body: `${MARKER}\nagain` }).catch((e: unknown) => e);
+    const error = await publishComment(client(), {
+      owner: OWNER,
+      repo: REPO,
+      issueNumber: 7,
+      marker: MARKER,
+      body: `${MARKER}\nagain`,
+    }).catch((e: unknown) => e);
     expect((error as ApiError).status).toBe(422);
     expect(fake.state.comments).toHaveLength(1);
   });
 
-  test('a body past GitHub\'s 65,536-character limit is refused with 422', async () => {
-    const error = await client().createComment(OWNER, REPO, 7, 'x'.repeat(COMMENT_BODY_LIMIT + 1)).catch((e: unknown) => e);
+  test("a body past GitHub's 65,536-character limit is refused with 422", async () => {
+    const error = await client()
+      .createComment(OWNER, REPO, 7, 'x'.repeat(COMMENT_BODY_LIMIT + 1))
+      .catch((e: unknown) => e);
     expect((error as ApiError).status).toBe(422);
     expect(fake.state.comments).toHaveLength(0);
   });
 
-  test('a read-only token\'s 403 on create and update is a permission error, and the token is in no message', async () => {
+  test("a read-only token's 403 on create and update is a permission error, and the token is in no message", async () => {
     const id = addComment(7, `${MARKER}\nold`);
     fake.state.readOnly = true;
-    const created = await client().createComment(OWNER, REPO, 7, 'x').catch((e: unknown) => e);
-    const updated = await client().updateComment(OWNER, REPO, id, 'x').catch((e: unknown) => e);
+    const created = await client()
+      .createComment(OWNER, REPO, 7, 'x')
+      .catch((e: unknown) => e);
+    const updated = await client()
+      .updateComment(OWNER, REPO, id, 'x')
+      .catch((e: unknown) => e);
     for (const error of [created, updated]) {
       expect(error).toBeInstanceOf(ApiError);
       expect(isPermissionError(error)).toBe(true);
@@ -320,7 +438,9 @@ describe('comments', () => {
 
   test('getComment(…) is null and updateComment(…) a not-found ApiError for a deleted comment', async () => {
     expect(await client().getComment(OWNER, REPO, 424242)).toBeNull();
-    const error = await client().updateComment(OWNER, REPO, 424242, 'x').catch((e: unknown) => e);
+    const error = await client()
+      .updateComment(OWNER, REPO, 424242, 'x')
+      .catch((e: unknown) => e);
     expect(isNotFoundError(error)).toBe(true);
   });
 });
@@ -330,14 +450,24 @@ describe('getPullRequest(owner, repo, number)', () => {
     addPull(7, [{ filename: 'a.json', status: 'added' }], { labels: ['context-waiver', 'infra'] });
     addPull(8, [], { headRepo: 'stranger/model-zoo' });
     expect(await client().getPullRequest(OWNER, REPO, 7)).toEqual({
-      number: 7, baseSha: BASE, headSha: HEAD, labels: ['context-waiver', 'infra'], isFork: false, changedFiles: 1, state: 'open',
+      number: 7,
+      baseSha: BASE,
+      headSha: HEAD,
+      labels: ['context-waiver', 'infra'],
+      isFork: false,
+      changedFiles: 1,
+      state: 'open',
     });
     expect((await client().getPullRequest(OWNER, REPO, 8)).isFork).toBe(true);
   });
 
   test('a wrong token is a 401 ApiError that does not quote the token', async () => {
     addPull(7, []);
-    const wrong = createGitHubClient('ghs_wrongTokenValue000', { baseUrl: fake.url, log: { debug: () => {}, info: () => {}, warn: () => {} }, msPerSecond: 1 });
+    const wrong = createGitHubClient('ghs_wrongTokenValue000', {
+      baseUrl: fake.url,
+      log: { debug: () => {}, info: () => {}, warn: () => {} },
+      msPerSecond: 1,
+    });
     const error = await wrong.getPullRequest(OWNER, REPO, 7).catch((e: unknown) => e);
     expect((error as ApiError).status).toBe(401);
     expect((error as Error).message).not.toContain('ghs_wrongTokenValue000');
@@ -345,16 +475,35 @@ describe('getPullRequest(owner, repo, number)', () => {
   });
 });
 
-describe('the fake server checks requests against GitHub\'s REST description', () => {
+describe("the fake server checks requests against GitHub's REST description", () => {
   test('a body the description forbids and a route it does not have are both recorded', async () => {
-    const headers = { authorization: `token ${fake.state.token}`, 'content-type': 'application/json' };
-    await fetch(`${fake.url}/repos/${OWNER}/${REPO}/issues/7/comments`, { method: 'POST', headers, body: JSON.stringify({ text: 'x' }) });
+    const headers = {
+      authorization: `token ${fake.state.token}`,
+      'content-type': 'application/json',
+    };
+    await fetch(`${fake.url}/repos/${OWNER}/${REPO}/issues/7/comments`, {
+      method: 'POST',
+      headers,
+      body: JSON.stringify({ text: 'x' }),
+    });
     await fetch(`${fake.url}/repos/${OWNER}/${REPO}/no-such-thing`, { headers });
-    await fetch(`${fake.url}/repos/${OWNER}/${REPO}/pulls/7/files?per_page=many&colour=red`, { headers });
+    await fetch(`${fake.url}/repos/${OWNER}/${REPO}/pulls/7/files?per_page=many&colour=red`, {
+      headers,
+    });
     const problems = fake.mismatches.map((mismatch) => mismatch.problem);
-    expect(problems.some((problem) => problem.includes('request body of issues/create-comment') && problem.includes("must have required property 'body'"))).toBe(true);
+    expect(
+      problems.some(
+        (problem) =>
+          problem.includes('request body of issues/create-comment') &&
+          problem.includes("must have required property 'body'"),
+      ),
+    ).toBe(true);
     expect(problems.some((problem) => problem.includes('matches no operation'))).toBe(true);
-    expect(problems.some((problem) => problem.includes('per_page="many"') && problem.includes('must be integer'))).toBe(true);
+    expect(
+      problems.some(
+        (problem) => problem.includes('per_page="many"') && problem.includes('must be integer'),
+      ),
+    ).toBe(true);
     expect(problems.some((problem) => problem.includes('query parameter colour'))).toBe(true);
     // Checked: clear them so the shared after-each check covers only the adapter's requests.
     fake.mismatches.length = 0;

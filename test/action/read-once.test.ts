@@ -3,19 +3,34 @@ import { chmodSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'nod
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createGitReader, gitContentSource, parseNameStatus, parseRawDiff } from '../../src/action/git.js';
+import {
+  createGitReader,
+  gitContentSource,
+  parseNameStatus,
+  parseRawDiff,
+} from '../../src/action/git.js';
 import { runDiff } from '../../src/cli/diff.js';
 import { runGate } from '../../src/core/gate.js';
 import { stableKey, type ScanMemo } from '../../src/core/metrics/scan-memo.js';
 import { renderGateJson } from '../../src/core/render/gate-json.js';
-import { checkpointConfig, scenarioRepo, type ScenarioRepo, type Tree } from '../support/scenario-repo.js';
+import {
+  checkpointConfig,
+  scenarioRepo,
+  type ScenarioRepo,
+  type Tree,
+} from '../support/scenario-repo.js';
 
 // Issue 16: a run reads every blob once, with a fixed number of git processes whatever the
 // number of files and remedies; the count is taken from a git wrapper that logs each start.
 
 const POLICY = [
-  'serving:', '  span: 8192', '  sequences: 4', '  device-memory-gib: 80',
-  'limits:', '  discriminationSpan: { min: 4096, severity: block }', '',
+  'serving:',
+  '  span: 8192',
+  '  sequences: 4',
+  '  device-memory-gib: 80',
+  'limits:',
+  '  discriminationSpan: { min: 4096, severity: block }',
+  '',
 ].join('\n');
 
 /** A pull request over `count` configs; one in ten gets a change that blocks (three kinds in turn). */
@@ -25,7 +40,11 @@ function pullRequest(count: number): { base: Tree; head: Tree } {
   for (let i = 0; i < count; i++) {
     const path = `models/m${String(i).padStart(3, '0')}/config.json`;
     const theta = [10000, 500000, 1000000][i % 3]!;
-    base[path] = checkpointConfig({ max_position_embeddings: 8192, rope_theta: theta, num_hidden_layers: 16 + (i % 7) });
+    base[path] = checkpointConfig({
+      max_position_embeddings: 8192,
+      rope_theta: theta,
+      num_hidden_layers: 16 + (i % 7),
+    });
     const kind = i % 10 === 4 ? (i / 10) % 3 : -1;
     head[path] = checkpointConfig({
       max_position_embeddings: kind === 0 ? 4096 : 8192, // the served span goes past the code's reach
@@ -48,7 +67,10 @@ beforeAll(() => {
   counting = join(root, 'bin');
   execFileSync('mkdir', [counting]);
   const realGit = execFileSync('sh', ['-c', 'command -v git'], { encoding: 'utf8' }).trim();
-  writeFileSync(join(counting, 'git'), `#!/bin/sh\necho "$*" | cut -c1-200 >> '${log}'\nexec '${realGit}' "$@"\n`);
+  writeFileSync(
+    join(counting, 'git'),
+    `#!/bin/sh\necho "$*" | cut -c1-200 >> '${log}'\nexec '${realGit}' "$@"\n`,
+  );
   chmodSync(join(counting, 'git'), 0o755);
   const big = pullRequest(300);
   large = scenarioRepo(big.base, big.head);
@@ -63,14 +85,25 @@ afterAll(() => {
 });
 
 /** `context-reach diff --format json` in `repo` with git found through the counting wrapper; the report and the git starts. */
-async function diffCounting(repo: ScenarioRepo): Promise<{ report: { blocking: number; files: { findings: { severity: string; remedy?: unknown }[] }[] }; starts: string[] }> {
+async function diffCounting(
+  repo: ScenarioRepo,
+): Promise<{
+  report: { blocking: number; files: { findings: { severity: string; remedy?: unknown }[] }[] };
+  starts: string[];
+}> {
   writeFileSync(log, '');
   const path = process.env.PATH;
   process.env.PATH = `${counting}:${path}`;
   let out = '';
   try {
     await runDiff(['--base', repo.base, '--head', repo.head, '--format', 'json'], {
-      out: (text) => { out += text; }, error: () => {}, stdout: {}, env: {}, cwd: repo.dir,
+      out: (text) => {
+        out += text;
+      },
+      error: () => {},
+      stdout: {},
+      env: {},
+      cwd: repo.dir,
     });
   } finally {
     process.env.PATH = path;
@@ -85,42 +118,97 @@ describe('one run of diff on a pull request with blocking findings', () => {
     // The pull request is what the test means: blocking findings, and remedies searched for them.
     expect(big.report.files).toHaveLength(300);
     expect(big.report.blocking).toBeGreaterThanOrEqual(30);
-    const remedied = big.report.files.flatMap((f) => f.findings).filter((f) => f.severity === 'block' && f.remedy !== undefined);
+    const remedied = big.report.files
+      .flatMap((f) => f.findings)
+      .filter((f) => f.severity === 'block' && f.remedy !== undefined);
     expect(remedied.length).toBeGreaterThanOrEqual(30);
     expect(big.starts.length).toBe(few.starts.length);
     // Discovery once (rev-parse, merge-base, one diff), the policy, and the blobs in one batch.
     expect(big.starts.length).toBeLessThanOrEqual(10);
     expect(big.starts.filter((s) => s.includes(' diff '))).toHaveLength(1);
     expect(big.starts.filter((s) => s.includes('merge-base'))).toHaveLength(1);
-    expect(big.starts.filter((s) => s.includes('cat-file --batch') && !s.includes('--batch-check'))).toHaveLength(2); // the policy, then every config
+    expect(
+      big.starts.filter((s) => s.includes('cat-file --batch') && !s.includes('--batch-check')),
+    ).toHaveLength(2); // the policy, then every config
     expect(big.starts.filter((s) => s.includes('ls-tree'))).toHaveLength(1); // the policy's entry only
   }, 120_000);
 });
 
 describe('parseRawDiff(output)', () => {
   const ID = (c: string) => c.repeat(40);
-  it('gives the files parseNameStatus gives, with each side\'s mode and blob id', () => {
+  it("gives the files parseNameStatus gives, with each side's mode and blob id", () => {
     const raw = [
-      `:100644 100644 ${ID('a')} ${ID('b')} M`, 'm.json',
-      `:000000 100644 ${ID('0')} ${ID('c')} A`, 'a.json',
-      `:100644 000000 ${ID('d')} ${ID('0')} D`, 'd.json',
-      `:100644 120000 ${ID('e')} ${ID('f')} T`, 't.json',
-      `:100755 100644 ${ID('1')} ${ID('2')} R091`, 'old.json', 'new.json',
-      `:100644 100644 ${ID('3')} ${ID('3')} C100`, 'src.json', 'copy.json', '',
+      `:100644 100644 ${ID('a')} ${ID('b')} M`,
+      'm.json',
+      `:000000 100644 ${ID('0')} ${ID('c')} A`,
+      'a.json',
+      `:100644 000000 ${ID('d')} ${ID('0')} D`,
+      'd.json',
+      `:100644 120000 ${ID('e')} ${ID('f')} T`,
+      't.json',
+      `:100755 100644 ${ID('1')} ${ID('2')} R091`,
+      'old.json',
+      'new.json',
+      `:100644 100644 ${ID('3')} ${ID('3')} C100`,
+      'src.json',
+      'copy.json',
+      '',
     ].join('\u0000');
     const records = parseRawDiff(raw);
-    expect(records.map((r) => r.file)).toEqual(parseNameStatus(['M', 'm.json', 'A', 'a.json', 'D', 'd.json', 'T', 't.json', 'R091', 'old.json', 'new.json', 'C100', 'src.json', 'copy.json', ''].join('\u0000')));
-    expect(records[0]).toMatchObject({ basePath: 'm.json', baseEntry: { kind: 'file', oid: ID('a') }, headEntry: { kind: 'file', oid: ID('b') } });
-    expect(records[1]).toMatchObject({ basePath: null, baseEntry: null, headEntry: { oid: ID('c') } });
-    expect(records[2]).toMatchObject({ basePath: 'd.json', baseEntry: { oid: ID('d') }, headEntry: null });
+    expect(records.map((r) => r.file)).toEqual(
+      parseNameStatus(
+        [
+          'M',
+          'm.json',
+          'A',
+          'a.json',
+          'D',
+          'd.json',
+          'T',
+          't.json',
+          'R091',
+          'old.json',
+          'new.json',
+          'C100',
+          'src.json',
+          'copy.json',
+          '',
+        ].join('\u0000'),
+      ),
+    );
+    expect(records[0]).toMatchObject({
+      basePath: 'm.json',
+      baseEntry: { kind: 'file', oid: ID('a') },
+      headEntry: { kind: 'file', oid: ID('b') },
+    });
+    expect(records[1]).toMatchObject({
+      basePath: null,
+      baseEntry: null,
+      headEntry: { oid: ID('c') },
+    });
+    expect(records[2]).toMatchObject({
+      basePath: 'd.json',
+      baseEntry: { oid: ID('d') },
+      headEntry: null,
+    });
     expect(records[3]!.headEntry).toMatchObject({ kind: 'symlink', mode: '120000' });
-    expect(records[4]).toMatchObject({ basePath: 'old.json', baseEntry: { mode: '100755', oid: ID('1') }, headEntry: { oid: ID('2') } });
-    expect(records[5]).toMatchObject({ basePath: null, baseEntry: null, headEntry: { oid: ID('3') } });
+    expect(records[4]).toMatchObject({
+      basePath: 'old.json',
+      baseEntry: { mode: '100755', oid: ID('1') },
+      headEntry: { oid: ID('2') },
+    });
+    expect(records[5]).toMatchObject({
+      basePath: null,
+      baseEntry: null,
+      headEntry: { oid: ID('3') },
+    });
   });
 
   it('refuses a header that is not a raw record and a record cut short', () => {
     expect(() => parseRawDiff('M\u0000a.json\u0000')).toThrow(/not "<modes> <ids> <status>"/);
-    expect(() => parseRawDiff(`:100644 100644 ${ID('a')} ${ID('b')} R100\u0000a.json\u0000`)).toThrow(/ends inside/);
+    expect(() =>
+      parseRawDiff(`:100644 100644 ${ID('a')} ${ID('b')} R100\u0000a.json\u0000`),
+    ).toThrow(/ends inside/);
   });
 });
 
@@ -128,25 +216,41 @@ describe('the run-scoped memo of positional computations', () => {
   it('leaves the report byte for byte as computing everything each time gives it', async () => {
     const git = createGitReader(large.dir);
     const changes = await git.changedFiles(large.base, large.head);
-    const request = { base: large.base, head: large.head, changes, policyPath: '.github/context-reach.yml' };
+    const request = {
+      base: large.base,
+      head: large.head,
+      changes,
+      policyPath: '.github/context-reach.yml',
+    };
     let hits = 0;
     const counted: ScanMemo = (() => {
       const inner = new Map<string, unknown>();
       return {
         call(name, fn, ...args) {
           const key = `${name}(${args.map(stableKey).join(',')})`;
-          if (inner.has(key)) { hits += 1; return inner.get(key) as ReturnType<typeof fn>; }
+          if (inner.has(key)) {
+            hits += 1;
+            return inner.get(key) as ReturnType<typeof fn>;
+          }
           const value = fn(...args);
           inner.set(key, value);
           return value;
         },
-        get hits() { return hits; },
-        get misses() { return inner.size; },
+        get hits() {
+          return hits;
+        },
+        get misses() {
+          return inner.size;
+        },
       };
     })();
     const never: ScanMemo = { call: (_name, fn, ...args) => fn(...args), hits: 0, misses: 0 };
-    const memoised = renderGateJson(await runGate(gitContentSource(git), { ...request, memo: counted }));
-    const computed = renderGateJson(await runGate(gitContentSource(git), { ...request, memo: never }));
+    const memoised = renderGateJson(
+      await runGate(gitContentSource(git), { ...request, memo: counted }),
+    );
+    const computed = renderGateJson(
+      await runGate(gitContentSource(git), { ...request, memo: never }),
+    );
     expect(memoised).toBe(computed);
     // Three bases, one span: base and head, and 300 files, share a handful of scans.
     expect(hits).toBeGreaterThan(500);

@@ -35,7 +35,8 @@ afterEach(async () => {
   result = null;
 });
 
-const comments = (r: ScenarioResult) => r.fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
+const comments = (r: ScenarioResult) =>
+  r.fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
 
 describe('gate scenarios', () => {
   it('blocks a served span raised past the reach of the scaled rotary code', async () => {
@@ -54,7 +55,10 @@ describe('gate scenarios', () => {
   it('passes a cache dtype change that makes the service fit again, and marks the old block resolved', async () => {
     const serving = '  span: 131072\n  sequences: 4\n';
     result = await runScenario({
-      base: { '.github/context-reach.yml': POLICY, 'm/model.reach.yaml': ownModel(serving, 'fp32') },
+      base: {
+        '.github/context-reach.yml': POLICY,
+        'm/model.reach.yaml': ownModel(serving, 'fp32'),
+      },
       head: { '.github/context-reach.yml': POLICY, 'm/model.reach.yaml': ownModel(serving, 'fp8') },
     });
     expect(result.error).toBeNull();
@@ -68,11 +72,18 @@ describe('gate scenarios', () => {
   it('judges a new file on its head version alone', async () => {
     result = await runScenario({
       base: { 'README.md': 'models' },
-      head: { 'README.md': 'models', 'models/new/config.json': checkpointConfig({ max_position_embeddings: 8192 }) },
+      head: {
+        'README.md': 'models',
+        'models/new/config.json': checkpointConfig({ max_position_embeddings: 8192 }),
+      },
     });
     const report = JSON.parse(Object.values(result.written)[0]!);
     expect(report.files).toHaveLength(1);
-    expect(report.files[0]).toMatchObject({ path: 'models/new/config.json', status: 'added', base: null });
+    expect(report.files[0]).toMatchObject({
+      path: 'models/new/config.json',
+      status: 'added',
+      base: null,
+    });
     expect(report.files[0].head.metrics.declaredSpan).toBe(8192);
     expect(comments(result)[0]!.body).toContain('new file, judged on its own');
   });
@@ -83,18 +94,29 @@ describe('gate scenarios', () => {
       head: { 'models/new/config.json': checkpointConfig({ num_key_value_heads: 2 }) },
     });
     const report = JSON.parse(Object.values(result.written)[0]!);
-    expect(report.files[0]).toMatchObject({ path: 'models/new/config.json', previousPath: 'models/old/config.json', status: 'renamed' });
-    expect(report.files[0].base.metrics.cachePerTokenBytes).toBe(2 * report.files[0].head.metrics.cachePerTokenBytes);
+    expect(report.files[0]).toMatchObject({
+      path: 'models/new/config.json',
+      previousPath: 'models/old/config.json',
+      status: 'renamed',
+    });
+    expect(report.files[0].base.metrics.cachePerTokenBytes).toBe(
+      2 * report.files[0].head.metrics.cachePerTokenBytes,
+    );
   });
 
   it('lists a deleted file without judging it', async () => {
     result = await runScenario({
-      base: { 'models/gone/config.json': checkpointConfig(), 'models/kept/config.json': checkpointConfig() },
+      base: {
+        'models/gone/config.json': checkpointConfig(),
+        'models/kept/config.json': checkpointConfig(),
+      },
       head: { 'models/kept/config.json': checkpointConfig() },
     });
     const report = JSON.parse(Object.values(result.written)[0]!);
     expect(report.files).toHaveLength(0);
-    expect(report.deleted).toEqual([{ status: 'deleted', path: 'models/gone/config.json', previousPath: null }]);
+    expect(report.deleted).toEqual([
+      { status: 'deleted', path: 'models/gone/config.json', previousPath: null },
+    ]);
     expect(result.out.outputs.verdict).toBe('ok');
     expect(comments(result)[0]!.body).toContain('Deleted, not judged');
   });
@@ -104,19 +126,25 @@ describe('gate scenarios', () => {
     const loose = 'limits:\n  cachePerTokenBytes: { max: 100000000 }\n';
     result = await runScenario({
       base: { '.github/context-reach.yml': strict, 'models/a/config.json': checkpointConfig() },
-      head: { '.github/context-reach.yml': loose, 'models/a/config.json': checkpointConfig({ num_key_value_heads: 8 }) },
+      head: {
+        '.github/context-reach.yml': loose,
+        'models/a/config.json': checkpointConfig({ num_key_value_heads: 8 }),
+      },
     });
     expect(result.out.outputs.verdict).toBe('block');
     const body = comments(result)[0]!.body;
     expect(body).toContain('limit-crossed');
-    expect(body).toContain('this run judged by the base commit\'s policy. After merge: <code>limits.');
+    expect(body).toContain(
+      "this run judged by the base commit's policy. After merge: <code>limits.",
+    );
   });
 
   it('still decides with a read-only fork token: no comment, report in the summary, a notice', async () => {
     result = await runScenario({
       base: { 'models/a/config.json': checkpointConfig() },
       head: { 'models/a/config.json': checkpointConfig({ max_position_embeddings: 65536 }) },
-      readOnly: true, fork: true,
+      readOnly: true,
+      fork: true,
     });
     expect(result.error).toBeNull();
     expect(comments(result)).toHaveLength(0);
@@ -126,14 +154,19 @@ describe('gate scenarios', () => {
     expect(result.out.summaries[0]).toContain('span-grew-code-unchanged');
     expect(result.out.summaries[0]).toContain('Pull requests from forks');
     expect(result.out.annotations.some((a) => a.level === 'error')).toBe(true);
-    expect(result.out.log.some((l) => l.level === 'notice' && l.message.includes('read-only'))).toBe(true);
+    expect(
+      result.out.log.some((l) => l.level === 'notice' && l.message.includes('read-only')),
+    ).toBe(true);
   });
 
   it('turns blocks into warnings under the waiver label and records it', async () => {
     const policy = 'waiver-label: accept-context-risk\n';
     result = await runScenario({
       base: { '.github/context-reach.yml': policy, 'models/a/config.json': checkpointConfig() },
-      head: { '.github/context-reach.yml': policy, 'models/a/config.json': checkpointConfig({ max_position_embeddings: 65536 }) },
+      head: {
+        '.github/context-reach.yml': policy,
+        'models/a/config.json': checkpointConfig({ max_position_embeddings: 65536 }),
+      },
       labels: ['accept-context-risk'],
     });
     expect(result.out.outputs.verdict).toBe('warn');
@@ -159,8 +192,14 @@ describe('gate scenarios', () => {
 
   it('fails closed, naming key and line, when the base policy is broken', async () => {
     result = await runScenario({
-      base: { '.github/context-reach.yml': 'limits:\n  headroom: { minimum: 0 }\n', 'models/a/config.json': checkpointConfig() },
-      head: { '.github/context-reach.yml': 'limits:\n  headroom: { minimum: 0 }\n', 'models/a/config.json': checkpointConfig({ rope_theta: 20000 }) },
+      base: {
+        '.github/context-reach.yml': 'limits:\n  headroom: { minimum: 0 }\n',
+        'models/a/config.json': checkpointConfig(),
+      },
+      head: {
+        '.github/context-reach.yml': 'limits:\n  headroom: { minimum: 0 }\n',
+        'models/a/config.json': checkpointConfig({ rope_theta: 20000 }),
+      },
     });
     expect(result.out.outputs.verdict).toBe('block');
     expect(result.out.failed).toMatch(/context-reach\.yml/);
@@ -173,7 +212,9 @@ describe('gate scenarios', () => {
       head: { 'web/config.json': '{"port": 8081}\n' },
     });
     expect(result.out.outputs.verdict).toBe('ok');
-    expect(comments(result)[0]!.body).toContain('matched the default file globs but is not a model config');
+    expect(comments(result)[0]!.body).toContain(
+      'matched the default file globs but is not a model config',
+    );
   });
 
   it('blocks the same file when the policy lists it as a model config', async () => {
@@ -183,7 +224,11 @@ describe('gate scenarios', () => {
       head: { '.github/context-reach.yml': policy, 'web/config.json': '{"port": 8081}\n' },
     });
     expect(result.out.outputs.verdict).toBe('block');
-    expect(result.out.annotations[0]).toMatchObject({ level: 'error', file: 'web/config.json', line: 1 });
+    expect(result.out.annotations[0]).toMatchObject({
+      level: 'error',
+      file: 'web/config.json',
+      line: 1,
+    });
   });
   it('judges memory per device under a tensor-parallel policy override, and offers a larger tensor degree', async () => {
     // A 70B-class shape (80 layers, 64 heads, head 128; Touvron et al. 2023, Llama 2: 8 key/value heads) served
@@ -191,11 +236,17 @@ describe('gate scenarios', () => {
     // device holds 1 per layer: 64 sequences × 4,096 tokens × 40,960 bytes = 10 GiB of cache (fits 72 GiB usable).
     // The pull request goes to 64 kv heads (full multi-head attention, 78,371,889,152 parameters, 18.2 GiB of fp16
     // weights per device): 8 kv heads per device, 64 × 4,096 × 327,680 bytes = 80 GiB of cache per device: over.
-    const policy = 'serving:\n  device-memory-gib: 80\n  sequences: 64\n  span: 4096\noverrides:\n  - files: ["models/big/**"]\n    serving:\n      tensor-parallel: 8\n';
-    const big = (kv: number) => checkpointConfig({
-      hidden_size: 8192, intermediate_size: 28672, num_hidden_layers: 80, num_attention_heads: 64, num_key_value_heads: kv,
-      torch_dtype: 'float16',
-    });
+    const policy =
+      'serving:\n  device-memory-gib: 80\n  sequences: 64\n  span: 4096\noverrides:\n  - files: ["models/big/**"]\n    serving:\n      tensor-parallel: 8\n';
+    const big = (kv: number) =>
+      checkpointConfig({
+        hidden_size: 8192,
+        intermediate_size: 28672,
+        num_hidden_layers: 80,
+        num_attention_heads: 64,
+        num_key_value_heads: kv,
+        torch_dtype: 'float16',
+      });
     result = await runScenario({
       base: { '.github/context-reach.yml': policy, 'models/big/config.json': big(8) },
       head: { '.github/context-reach.yml': policy, 'models/big/config.json': big(64) },
@@ -204,15 +255,23 @@ describe('gate scenarios', () => {
     expect(result.out.outputs.verdict).toBe('block');
     const body = comments(result)[0]!.body.replace(/\\/g, '');
     expect(body).toContain('memory-over-budget');
-    expect(body).toContain('Head: per device, 8 devices (tensor-parallel 8 × pipeline-parallel 1): weights 18.2 GiB, cache 80 GiB at 4,096 tokens × 64 sequences');
+    expect(body).toContain(
+      'Head: per device, 8 devices (tensor-parallel 8 × pipeline-parallel 1): weights 18.2 GiB, cache 80 GiB at 4,096 tokens × 64 sequences',
+    );
     expect(body).toMatch(/Per device \(8 devices: tensor-parallel 8 × pipeline-parallel 1\)/);
     expect(body).toContain('reserve kept for activations, workspace and fragmentation');
     // The remedy search finds the next tensor degree that shards 64 heads and 64 kv heads and fits: 16.
     // The comment lists two other fixes at most; the JSON report carries every one.
     const report = JSON.parse(Object.values(result.written)[0]!);
-    const finding = report.files[0].findings.find((f: { rule: string }) => f.rule === 'memory-over-budget');
-    const tensor = [finding.remedy, ...(finding.remedyAlternatives ?? [])].find((r: { change: Record<string, unknown> }) => 'serving.tensorParallel' in r.change);
+    const finding = report.files[0].findings.find(
+      (f: { rule: string }) => f.rule === 'memory-over-budget',
+    );
+    const tensor = [finding.remedy, ...(finding.remedyAlternatives ?? [])].find(
+      (r: { change: Record<string, unknown> }) => 'serving.tensorParallel' in r.change,
+    );
     expect(tensor.change['serving.tensorParallel']).toBe(16);
-    expect(tensor.cost).toBe('16 devices per replica (tensor-parallel 16 × pipeline-parallel 1), was 8');
+    expect(tensor.cost).toBe(
+      '16 devices per replica (tensor-parallel 16 × pipeline-parallel 1), was 8',
+    );
   });
 });

@@ -12,9 +12,15 @@ const CLI = resolve(import.meta.dirname, '../../dist/cli.js');
 const ROOT = resolve(import.meta.dirname, '../..');
 const run = promisify(execFile);
 
-async function cli(args: string[], cwd = ROOT): Promise<{ code: number; stdout: string; stderr: string }> {
+async function cli(
+  args: string[],
+  cwd = ROOT,
+): Promise<{ code: number; stdout: string; stderr: string }> {
   try {
-    const { stdout, stderr } = await run(process.execPath, [CLI, ...args], { cwd, env: { ...process.env, NO_COLOR: '1' } });
+    const { stdout, stderr } = await run(process.execPath, [CLI, ...args], {
+      cwd,
+      env: { ...process.env, NO_COLOR: '1' },
+    });
     return { code: 0, stdout, stderr };
   } catch (error) {
     const e = error as { code: number; stdout: string; stderr: string };
@@ -31,11 +37,19 @@ function tempFile(name: string, text: string): string {
 
 describe('context-reach inspect', () => {
   it('prints one JSON document with every metric of the contract for each file', async () => {
-    const { code, stdout } = await cli(['inspect', '--json', 'fixtures/demo/head/models/quill-8b/config.json', 'fixtures/demo/head/models/quill-mini/model.reach.yaml']);
+    const { code, stdout } = await cli([
+      'inspect',
+      '--json',
+      'fixtures/demo/head/models/quill-8b/config.json',
+      'fixtures/demo/head/models/quill-mini/model.reach.yaml',
+    ]);
     expect(code).toBe(0);
     const doc = JSON.parse(stdout);
     expect(doc.version).toBe(1);
-    expect(doc.files.map((f: { dialect: string }) => f.dialect)).toEqual(['checkpoint', 'context-reach']);
+    expect(doc.files.map((f: { dialect: string }) => f.dialect)).toEqual([
+      'checkpoint',
+      'context-reach',
+    ]);
     for (const file of doc.files) {
       for (const metric of METRIC_PATHS) {
         const value = metric.startsWith('precision.')
@@ -45,17 +59,33 @@ describe('context-reach inspect', () => {
       }
       // Blocking findings also carry their remedy (issue 6); the others are exactly the five keys.
       for (const finding of file.findings) {
-        expect(Object.keys(finding)).toEqual(finding.severity === 'block'
-          ? ['rule', 'severity', 'message', 'key', 'line', 'remedy', 'remedyWhyNot', 'remedyAlternatives']
-          : ['rule', 'severity', 'message', 'key', 'line']);
+        expect(Object.keys(finding)).toEqual(
+          finding.severity === 'block'
+            ? [
+                'rule',
+                'severity',
+                'message',
+                'key',
+                'line',
+                'remedy',
+                'remedyWhyNot',
+                'remedyAlternatives',
+              ]
+            : ['rule', 'severity', 'message', 'key', 'line'],
+        );
       }
     }
   });
 
   it('groups the readable report as range, spectrum, number formats, budget, findings', async () => {
-    const { code, stdout } = await cli(['inspect', 'fixtures/demo/head/models/quill-mini/model.reach.yaml']);
+    const { code, stdout } = await cli([
+      'inspect',
+      'fixtures/demo/head/models/quill-mini/model.reach.yaml',
+    ]);
     expect(code).toBe(0);
-    const order = ['Range', 'Spectrum', 'Number formats', 'Budget', 'Findings'].map((h) => stdout.indexOf(`  ${h}`));
+    const order = ['Range', 'Spectrum', 'Number formats', 'Budget', 'Findings'].map((h) =>
+      stdout.indexOf(`  ${h}`),
+    );
     expect(order.every((i) => i > 0)).toBe(true);
     expect([...order].sort((a, b) => a - b)).toEqual(order);
     expect(stdout).toContain('not a guarantee of model quality');
@@ -63,18 +93,35 @@ describe('context-reach inspect', () => {
   });
 
   it('applies serving flags over the file', async () => {
-    const { stdout } = await cli(['inspect', '--json', '--served-span', '4096', '--cache-dtype', 'fp8', 'fixtures/demo/head/models/quill-8b/config.json']);
+    const { stdout } = await cli([
+      'inspect',
+      '--json',
+      '--served-span',
+      '4096',
+      '--cache-dtype',
+      'fp8',
+      'fixtures/demo/head/models/quill-8b/config.json',
+    ]);
     const file = JSON.parse(stdout).files[0];
     expect(file.metrics.servedSpan).toBe(4096);
     expect(file.spec.dtypes.cache).toBe('fp8');
   });
 
   it('exits 2 naming file and line for a broken file, still reporting the others, with no stack trace', async () => {
-    const broken = tempFile('config.json', '{\n  "hidden_size": 4096,\n  "num_hidden_layers": 32,\n  oops\n}\n');
-    const { code, stdout, stderr } = await cli(['inspect', broken, 'fixtures/demo/head/models/quill-8b/config.json']);
+    const broken = tempFile(
+      'config.json',
+      '{\n  "hidden_size": 4096,\n  "num_hidden_layers": 32,\n  oops\n}\n',
+    );
+    const { code, stdout, stderr } = await cli([
+      'inspect',
+      broken,
+      'fixtures/demo/head/models/quill-8b/config.json',
+    ]);
     expect(code).toBe(2);
     expect(stdout).toContain('quill-8b');
-    expect(stdout).toMatch(new RegExp(`${broken.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}.*line 4|:4`));
+    expect(stdout).toMatch(
+      new RegExp(`${broken.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}.*line 4|:4`),
+    );
     expect(stdout + stderr).not.toMatch(/\n\s+at .+:\d+:\d+/);
   });
 
@@ -86,7 +133,10 @@ describe('context-reach inspect', () => {
   });
 
   it('reads a model block nested in a larger document with --at', async () => {
-    const nested = tempFile('train.json', JSON.stringify({ trainer: { steps: 10 }, model: JSON.parse(checkpointConfig()) }, null, 2));
+    const nested = tempFile(
+      'train.json',
+      JSON.stringify({ trainer: { steps: 10 }, model: JSON.parse(checkpointConfig()) }, null, 2),
+    );
     const { code, stdout } = await cli(['inspect', '--json', '--at', '/model', nested]);
     expect(code).toBe(0);
     expect(JSON.parse(stdout).files[0].metrics.declaredSpan).toBe(4096);
@@ -100,11 +150,16 @@ describe('context-reach diff', () => {
       { 'models/a/config.json': checkpointConfig({ max_position_embeddings: 32768 }) },
     );
     try {
-      const json = await cli(['diff', '--base', repo.base, '--head', repo.head, '--format', 'json'], repo.dir);
+      const json = await cli(
+        ['diff', '--base', repo.base, '--head', repo.head, '--format', 'json'],
+        repo.dir,
+      );
       expect(json.code).toBe(1);
       const report = JSON.parse(json.stdout);
       expect(report.verdict).toBe('block');
-      expect(report.files[0].findings.map((f: { rule: string }) => f.rule)).toContain('span-grew-code-unchanged');
+      expect(report.files[0].findings.map((f: { rule: string }) => f.rule)).toContain(
+        'span-grew-code-unchanged',
+      );
       const never = await cli(['diff', '--base', repo.base, '--fail-on', 'never'], repo.dir);
       expect(never.code).toBe(0);
       expect(never.stdout).toContain('BLOCK');
@@ -114,7 +169,10 @@ describe('context-reach diff', () => {
   });
 
   it('uses the parent commit as base when on the main line', async () => {
-    const repo = scenarioRepo({ 'models/a/config.json': checkpointConfig() }, { 'models/a/config.json': checkpointConfig({ rope_theta: 500000 }) });
+    const repo = scenarioRepo(
+      { 'models/a/config.json': checkpointConfig() },
+      { 'models/a/config.json': checkpointConfig({ rope_theta: 500000 }) },
+    );
     try {
       const { code, stdout } = await cli(['diff', '--format', 'json'], repo.dir);
       expect(code).toBe(0);
@@ -126,7 +184,7 @@ describe('context-reach diff', () => {
 });
 
 describe('context-reach demo', () => {
-  it('shows the invented pull request\'s comment and verdict and exits 0', async () => {
+  it("shows the invented pull request's comment and verdict and exits 0", async () => {
     const { code, stdout } = await cli(['demo']);
     expect(code).toBe(0);
     expect(stdout).toContain('<!-- context-reach:pull-request-report -->');

@@ -10,9 +10,15 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 const CLI = resolve(import.meta.dirname, '../../dist/cli.js');
 const run = promisify(execFile);
 
-async function diff(args: string[], cwd: string): Promise<{ code: number; stdout: string; stderr: string }> {
+async function diff(
+  args: string[],
+  cwd: string,
+): Promise<{ code: number; stdout: string; stderr: string }> {
   try {
-    const { stdout, stderr } = await run(process.execPath, [CLI, 'diff', ...args], { cwd, env: { ...process.env, NO_COLOR: '1' } });
+    const { stdout, stderr } = await run(process.execPath, [CLI, 'diff', ...args], {
+      cwd,
+      env: { ...process.env, NO_COLOR: '1' },
+    });
     return { code: 0, stdout, stderr };
   } catch (error) {
     const e = error as { code: number; stdout: string; stderr: string };
@@ -21,9 +27,23 @@ async function diff(args: string[], cwd: string): Promise<{ code: number; stdout
 }
 
 function git(cwd: string, ...args: string[]): string {
-  return execFileSync('git', ['-c', 'user.name=test', '-c', 'user.email=test@example.invalid', '-c', 'commit.gpgsign=false', ...args], {
-    cwd, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'],
-  }).trim();
+  return execFileSync(
+    'git',
+    [
+      '-c',
+      'user.name=test',
+      '-c',
+      'user.email=test@example.invalid',
+      '-c',
+      'commit.gpgsign=false',
+      ...args,
+    ],
+    {
+      cwd,
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'pipe'],
+    },
+  ).trim();
 }
 
 function write(dir: string, path: string, text: string): void {
@@ -76,8 +96,9 @@ describe('context-reach diff with no flags (before a push)', () => {
     git(dir, 'commit', '--quiet', '-am', 'local commit');
     const { stdout } = await diff(['--format', 'json'], dir);
     const report = JSON.parse(stdout);
-    expect(report.files.map((f: { path: string; status: string }) => `${f.status} ${f.path}`).sort())
-      .toEqual(['added models/b/config.json', 'modified models/a/config.json']);
+    expect(
+      report.files.map((f: { path: string; status: string }) => `${f.status} ${f.path}`).sort(),
+    ).toEqual(['added models/b/config.json', 'modified models/a/config.json']);
   });
 
   it('passes a clean working tree with nothing to judge', async () => {
@@ -89,13 +110,25 @@ describe('context-reach diff with no flags (before a push)', () => {
 
   it('reads the policy at the upstream, so an uncommitted policy edit cannot loosen the check', async () => {
     const strict = 'limits:\n  declaredSpan:\n    max: 8192\n';
-    const { dir } = trackedClone({ 'models/a/config.json': checkpointConfig(), '.github/context-reach.yml': strict });
+    const { dir } = trackedClone({
+      'models/a/config.json': checkpointConfig(),
+      '.github/context-reach.yml': strict,
+    });
     write(dir, '.github/context-reach.yml', 'limits:\n  declaredSpan:\n    max: 65536\n');
-    write(dir, 'models/a/config.json', checkpointConfig({ max_position_embeddings: 16384, rope_scaling: { rope_type: 'linear', factor: 4 } }));
+    write(
+      dir,
+      'models/a/config.json',
+      checkpointConfig({
+        max_position_embeddings: 16384,
+        rope_scaling: { rope_type: 'linear', factor: 4 },
+      }),
+    );
     const { code, stdout } = await diff(['--format', 'json'], dir);
     const report = JSON.parse(stdout);
     expect(report.policy).toMatchObject({ source: 'file', changedInHead: true });
-    expect(report.files[0].deltas.find((d: { metric: string }) => d.metric === 'declaredSpan')).toMatchObject({ head: 16384, state: 'crossed', limit: { max: 8192 } });
+    expect(
+      report.files[0].deltas.find((d: { metric: string }) => d.metric === 'declaredSpan'),
+    ).toMatchObject({ head: 16384, state: 'crossed', limit: { max: 8192 } });
     expect(code).toBe(1);
   });
 

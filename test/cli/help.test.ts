@@ -8,13 +8,36 @@ import { FLOAT_FORMATS, STORAGE_DTYPES } from '../../src/core/model.js';
 /** The option lines of a usage text: flag and description. */
 function options(usage: string): Map<string, string> {
   const body = usage.slice(usage.indexOf('options:\n') + 'options:\n'.length);
-  return new Map(body.split('\n').map((line) => /^ {2}(--[a-z-]+|\S+)(?: \S+)?\s{2,}(.*)$/.exec(line)).filter((m) => m !== null).map((m) => [m![1]!, m![2]!]));
+  return new Map(
+    body
+      .split('\n')
+      .map((line) => /^ {2}(--[a-z-]+|\S+)(?: \S+)?\s{2,}(.*)$/.exec(line))
+      .filter((m) => m !== null)
+      .map((m) => [m![1]!, m![2]!]),
+  );
 }
 
 describe('--help of every command', () => {
   const commands: [string, string, string[]][] = [
-    ['inspect', INSPECT_USAGE, ['--json', '--at', ...Object.keys(SERVING_FLAGS).map((f) => `--${f}`)]],
-    ['diff', DIFF_USAGE, ['--base', '--head', '--policy', '--format', '--fail-on', '--label', '--html', ...Object.keys(SERVING_FLAGS).map((f) => `--${f}`)]],
+    [
+      'inspect',
+      INSPECT_USAGE,
+      ['--json', '--at', ...Object.keys(SERVING_FLAGS).map((f) => `--${f}`)],
+    ],
+    [
+      'diff',
+      DIFF_USAGE,
+      [
+        '--base',
+        '--head',
+        '--policy',
+        '--format',
+        '--fail-on',
+        '--label',
+        '--html',
+        ...Object.keys(SERVING_FLAGS).map((f) => `--${f}`),
+      ],
+    ],
     ['demo', DEMO_USAGE, ['--format', '--keep', '--html']],
   ];
 

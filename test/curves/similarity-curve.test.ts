@@ -12,11 +12,20 @@ function reference(theta: Float64Array, span: number, buckets: number, spacing: 
   const edges = bucketEdges(span, buckets, spacing)!;
   const out = [];
   for (let b = 0; b + 1 < edges.length; b++) {
-    let min = Infinity; let max = -Infinity; let minAt = 0; let maxAt = 0;
+    let min = Infinity;
+    let max = -Infinity;
+    let minAt = 0;
+    let maxAt = 0;
     for (let k = edges[b]!; k < edges[b + 1]!; k++) {
       const s = cosineSum(theta, k) / theta.length;
-      if (s < min) { min = s; minAt = k; }
-      if (s > max) { max = s; maxAt = k; }
+      if (s < min) {
+        min = s;
+        minAt = k;
+      }
+      if (s > max) {
+        max = s;
+        maxAt = k;
+      }
     }
     out.push({ start: edges[b], end: edges[b + 1]! - 1, min, minAt, max, maxAt });
   }
@@ -38,18 +47,35 @@ describe('similarityCurve(theta, span, buckets, spacing)', () => {
     expect(similarityCurve(theta, span, 64, 'log', span * 17 + 200 * span)).toEqual(drawn);
   });
 
-  it('gives exactly the straightforward loop\'s min and max per bucket (bit for bit, ties to the earlier k)', () => {
-    for (const [base, d, span, buckets, spacing] of [[10000, 128, 20000, 64, 'log'], [500, 64, 9000, 37, 'linear'], [1e6, 128, 3000, 400, 'log']] as const) {
+  it("gives exactly the straightforward loop's min and max per bucket (bit for bit, ties to the earlier k)", () => {
+    for (const [base, d, span, buckets, spacing] of [
+      [10000, 128, 20000, 64, 'log'],
+      [500, 64, 9000, 37, 'linear'],
+      [1e6, 128, 3000, 400, 'log'],
+    ] as const) {
       const theta = geometricFrequencies(base, d)!;
-      expect(similarityCurve(theta, span, buckets, spacing)).toEqual(reference(theta, span, buckets, spacing));
+      expect(similarityCurve(theta, span, buckets, spacing)).toEqual(
+        reference(theta, span, buckets, spacing),
+      );
     }
   });
 
   it('agrees with the loop on random codes and spans (property)', () => {
-    fc.assert(fc.property(fc.double({ min: 50, max: 1e7, noNaN: true }), fc.integer({ min: 1, max: 32 }), fc.integer({ min: 2, max: 3000 }), fc.integer({ min: 1, max: 50 }), (base, pairs, span, buckets) => {
-      const theta = geometricFrequencies(base, 2 * pairs)!;
-      expect(similarityCurve(theta, span, buckets, 'log')).toEqual(reference(theta, span, buckets, 'log'));
-    }), { numRuns: 40 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 50, max: 1e7, noNaN: true }),
+        fc.integer({ min: 1, max: 32 }),
+        fc.integer({ min: 2, max: 3000 }),
+        fc.integer({ min: 1, max: 50 }),
+        (base, pairs, span, buckets) => {
+          const theta = geometricFrequencies(base, 2 * pairs)!;
+          expect(similarityCurve(theta, span, buckets, 'log')).toEqual(
+            reference(theta, span, buckets, 'log'),
+          );
+        },
+      ),
+      { numRuns: 40 },
+    );
   });
 
   it('agrees with the exact scan: the largest bucket maximum gives the separation floor, the first negative minimum the discrimination span', () => {
@@ -72,10 +98,15 @@ describe('similarityCurve(theta, span, buckets, spacing)', () => {
     for (let i = 1; i < curve.length; i++) expect(curve[i]!.start).toBe(curve[i - 1]!.end + 1);
   });
 
-  it.each([[null, 100], [new Float64Array(0), 100], [new Float64Array([0.1]), 1], [new Float64Array([0.1]), null], [new Float64Array([0.1]), 2 ** 40]])(
-    'is null for theta %p and span %p', (theta, span) => {
-      expect(similarityCurve(theta as Float64Array | null, span as number | null)).toBeNull();
-    });
+  it.each([
+    [null, 100],
+    [new Float64Array(0), 100],
+    [new Float64Array([0.1]), 1],
+    [new Float64Array([0.1]), null],
+    [new Float64Array([0.1]), 2 ** 40],
+  ])('is null for theta %p and span %p', (theta, span) => {
+    expect(similarityCurve(theta as Float64Array | null, span as number | null)).toBeNull();
+  });
 
   it('is null for no buckets', () => {
     expect(similarityCurve(new Float64Array([0.1]), 100, 0)).toBeNull();
@@ -86,10 +117,20 @@ describe('similarityCurve(theta, span, buckets, spacing)', () => {
 describe('pairStatuses(theta, scaled, trained, span)', () => {
   it('tallies to exposedPairs and, by wavelength, to unturnedPairs (METRICS.md)', () => {
     const theta = geometricFrequencies(1e6, 128)!;
-    const scaling = { kind: 'yarn' as const, factor: 4, originalSpan: 32768, alpha: 1, beta: 32, low: 1, high: 4 };
+    const scaling = {
+      kind: 'yarn' as const,
+      factor: 4,
+      originalSpan: 32768,
+      alpha: 1,
+      beta: 32,
+      low: 1,
+      high: 4,
+    };
     const scaled = scaleFrequencies(theta, 1e6, 128, scaling, 262144, 32768)!;
     const pairs = pairStatuses(theta, scaled, 32768, 262144)!;
-    expect(pairs.filter((p) => p.status === 'exposed').length).toBe(exposedPairs(theta, scaled, 32768, 262144));
+    expect(pairs.filter((p) => p.status === 'exposed').length).toBe(
+      exposedPairs(theta, scaled, 32768, 262144),
+    );
     expect(pairs.filter((p) => p.wavelength > 32768).length).toBe(unturnedPairs(scaled, 32768));
     // Vaswani et al. 2017 §3.5: the fastest pair's wavelength is 2π.
     expect(pairs[0]!.wavelength).toBeCloseTo(2 * Math.PI, 12); // 1e-12: θ_0 = base^0 = 1 exactly, one division

@@ -20,7 +20,13 @@ describe('context-reach diff --html FILE', () => {
     try {
       const status = await run(['diff', '--base', repo.base, '--head', repo.head, '--html', file], {
         files: { read: async () => new Uint8Array() },
-        io: { out: (t) => out.push(t), error: (t) => out.push(t), stdout: {}, env: { NO_COLOR: '1' }, cwd: repo.dir },
+        io: {
+          out: (t) => out.push(t),
+          error: (t) => out.push(t),
+          stdout: {},
+          env: { NO_COLOR: '1' },
+          cwd: repo.dir,
+        },
       });
       expect(status).toBe(1);
       const html = readFileSync(file, 'utf8');
@@ -33,7 +39,7 @@ describe('context-reach diff --html FILE', () => {
   });
 });
 
-describe('the action\'s html-report input', () => {
+describe("the action's html-report input", () => {
   let result: ScenarioResult | null = null;
   afterEach(async () => {
     await result?.fake.close();
@@ -43,14 +49,20 @@ describe('the action\'s html-report input', () => {
   it('writes the page through the adapter and links it from the comment and the summary', async () => {
     const { base, head } = demoTrees();
     result = await runScenario({
-      base, head,
-      inputs: { 'html-report': '/runner/out/context-reach.html', 'html-report-url': 'https://reports.example/pr-7.html' },
+      base,
+      head,
+      inputs: {
+        'html-report': '/runner/out/context-reach.html',
+        'html-report-url': 'https://reports.example/pr-7.html',
+      },
     });
     expect(result.error).toBeNull();
     const html = result.written['/runner/out/context-reach.html'];
     expect(html?.startsWith('<!doctype html>')).toBe(true);
     const comment = result.fake.state.comments.find((c) => c.body.startsWith(COMMENT_MARKER))!.body;
-    expect(comment).toContain('Charts, findings and fixes: [the HTML report](https://reports.example/pr-7.html).');
+    expect(comment).toContain(
+      'Charts, findings and fixes: [the HTML report](https://reports.example/pr-7.html).',
+    );
     expect(result.out.summaries[0]).toContain('(https://reports.example/pr-7.html)');
   });
 

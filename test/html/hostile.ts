@@ -24,7 +24,12 @@ export function hostileReport(report: GateReport): GateReport {
       path: `models/${pick(f)}/config.json`,
       status: 'renamed',
       previousPath: pick(f + 1),
-      findings: file.findings.map((finding, i) => ({ ...finding, message: `${finding.message} ${pick(i)}`, key: pick(i + 1), remedyWhyNot: finding.remedy === null ? pick(i + 2) : finding.remedyWhyNot })),
+      findings: file.findings.map((finding, i) => ({
+        ...finding,
+        message: `${finding.message} ${pick(i)}`,
+        key: pick(i + 1),
+        remedyWhyNot: finding.remedy === null ? pick(i + 2) : finding.remedyWhyNot,
+      })),
       headError: file.headError,
     })),
   };

@@ -15,8 +15,16 @@ import { HOSTILE, hostileReport } from './hostile.js';
 const CHROMIUM = '/usr/bin/chromium';
 const ARTIFACTS = resolve(import.meta.dirname, '../../test-artifacts/html-report');
 const DOCS = resolve(import.meta.dirname, '../../docs');
-const FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-  '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const FLAGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
 
 let context: BrowserContext | null = null;
 let profile: string | null = null;
@@ -26,12 +34,18 @@ const requests: string[] = [];
 async function browser(): Promise<BrowserContext> {
   if (context) return context;
   if (!existsSync(CHROMIUM)) {
-    throw new Error(`No browser at ${CHROMIUM}: install Debian's chromium package (apt-get update && apt-get install -y chromium); .ci/run does this before the tests.`);
+    throw new Error(
+      `No browser at ${CHROMIUM}: install Debian's chromium package (apt-get update && apt-get install -y chromium); .ci/run does this before the tests.`,
+    );
   }
   mkdirSync(ARTIFACTS, { recursive: true });
   profile = mkdtempSync(join(tmpdir(), 'context-reach-chromium-'));
   context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM, headless: true, args: FLAGS, offline: true, viewport: { width: 1280, height: 900 },
+    executablePath: CHROMIUM,
+    headless: true,
+    args: FLAGS,
+    offline: true,
+    viewport: { width: 1280, height: 900 },
   });
   // Anything but the page itself is recorded and refused: the report must need nothing else.
   await context.route('**/*', (route) => {
@@ -55,7 +69,9 @@ async function open(name: string, html: string): Promise<{ page: Page; errors: s
   writeFileSync(file, html);
   const page = await (await browser()).newPage();
   const errors: string[] = [];
-  page.on('console', (message) => { if (message.type() === 'error' || message.type() === 'warning') errors.push(message.text()); });
+  page.on('console', (message) => {
+    if (message.type() === 'error' || message.type() === 'warning') errors.push(message.text());
+  });
   page.on('pageerror', (error) => errors.push(error.message));
   await page.goto(pathToFileURL(file).href, { waitUntil: 'load' });
   return { page, errors };
@@ -105,9 +121,16 @@ describe('the HTML report in headless Chromium', async () => {
 
   it('shows hostile paths, keys and messages as text: no element, no handler, no request', async () => {
     const { page, errors } = await open('hostile', renderHtmlReport(hostileReport(report)));
-    expect(await page.locator('script, img, iframe, object, embed, a[href^="javascript"]').count()).toBe(0);
-    const handlers = await page.evaluate(() => [...document.querySelectorAll('*')]
-      .flatMap((el) => [...el.attributes].filter((a) => a.name.startsWith('on')).map((a) => `${el.tagName} ${a.name}`)));
+    expect(
+      await page.locator('script, img, iframe, object, embed, a[href^="javascript"]').count(),
+    ).toBe(0);
+    const handlers = await page.evaluate(() =>
+      [...document.querySelectorAll('*')].flatMap((el) =>
+        [...el.attributes]
+          .filter((a) => a.name.startsWith('on'))
+          .map((a) => `${el.tagName} ${a.name}`),
+      ),
+    );
     expect(handlers).toEqual([]);
     const text = await page.evaluate(() => document.body.innerText);
     for (const hostile of HOSTILE.slice(0, 4)) expect(text.includes(hostile), hostile).toBe(true);

@@ -16,11 +16,17 @@ function numpyPython(): string {
     const probe = spawnSync(candidate, ['-c', 'import numpy'], { encoding: 'utf8' });
     if (probe.status === 0) return candidate;
   }
-  throw new Error('python3 with numpy is needed for this reference test (set PYTHON to one that has it)');
+  throw new Error(
+    'python3 with numpy is needed for this reference test (set PYTHON to one that has it)',
+  );
 }
 
 function numpyAngleErrorMax(theta: number[], span: number): number {
-  const run = spawnSync(numpyPython(), [SCRIPT], { input: JSON.stringify({ theta, span }), encoding: 'utf8', timeout: 120_000 });
+  const run = spawnSync(numpyPython(), [SCRIPT], {
+    input: JSON.stringify({ theta, span }),
+    encoding: 'utf8',
+    timeout: 120_000,
+  });
   if (run.status !== 0) throw new Error(`numpy reference failed: ${run.stderr}`);
   return (JSON.parse(run.stdout) as { angleErrorMax: number }).angleErrorMax;
 }
@@ -29,7 +35,13 @@ describe('angleErrorMax in fp32 against numpy float32 arithmetic', () => {
   it.each([
     { theta: [1, 500000 ** (-2 / 128), 0.75, Math.PI / 1000], span: 2 ** 25 + 12345 },
     { theta: [0.9, 1 - 2 ** -30, 3 * 2 ** -12, 0.75 + 2 ** -40], span: 2 ** 26 - 1 },
-  ])('equals numpy bit for bit for θ = $theta over T = $span', ({ theta, span }) => {
-    expect(angleErrorMax('fp32', Float64Array.from(theta), span)).toBe(numpyAngleErrorMax(theta, span));
-  }, 120_000);
+  ])(
+    'equals numpy bit for bit for θ = $theta over T = $span',
+    ({ theta, span }) => {
+      expect(angleErrorMax('fp32', Float64Array.from(theta), span)).toBe(
+        numpyAngleErrorMax(theta, span),
+      );
+    },
+    120_000,
+  );
 });

@@ -13,29 +13,56 @@ import type { FloatFormat } from '../../src/core/model.js';
 import { angleErrorMax } from '../../src/core/metrics/angle-rounding.js';
 import { referenceAngleErrorMax } from './reference.js';
 
-const SPECIAL = [1, 0.5, 2 ** -7, 0.75, 3 * 2 ** -12, 0.75 + 2 ** -40, 0.75 - 2 ** -45, 1 - 2 ** -30, Math.fround(0.9), Math.fround(0.9) + 2 ** -50, 0.999999, 7.5];
+const SPECIAL = [
+  1,
+  0.5,
+  2 ** -7,
+  0.75,
+  3 * 2 ** -12,
+  0.75 + 2 ** -40,
+  0.75 - 2 ** -45,
+  1 - 2 ** -30,
+  Math.fround(0.9),
+  Math.fround(0.9) + 2 ** -50,
+  0.999999,
+  7.5,
+];
 
 const thetaArb = fc.array(
-  fc.oneof(fc.constantFrom(...SPECIAL), fc.double({ min: Math.log(1e-4), max: Math.log(2), noNaN: true }).map(Math.exp)),
+  fc.oneof(
+    fc.constantFrom(...SPECIAL),
+    fc.double({ min: Math.log(1e-4), max: Math.log(2), noNaN: true }).map(Math.exp),
+  ),
   { minLength: 1, maxLength: 3 },
 );
 
 function check(format: FloatFormat, theta: number[], span: number): void {
   const th = Float64Array.from(theta);
-  expect(angleErrorMax(format, th, span), `${format} θ=${JSON.stringify(theta)} T=${span}`).toBe(referenceAngleErrorMax(format, th, span));
+  expect(angleErrorMax(format, th, span), `${format} θ=${JSON.stringify(theta)} T=${span}`).toBe(
+    referenceAngleErrorMax(format, th, span),
+  );
 }
 
 describe('angleErrorMax over runs of shared rounded positions', () => {
   it('equals the every-position loop bit for bit in bf16 over spans up to 2^18 (ten binades of runs)', () => {
     fc.assert(
-      fc.property(thetaArb, fc.integer({ min: 257, max: 2 ** 18 }), (theta, span) => check('bf16', theta, span)),
+      fc.property(thetaArb, fc.integer({ min: 257, max: 2 ** 18 }), (theta, span) =>
+        check('bf16', theta, span),
+      ),
       { numRuns: 120, seed: 20261202 },
     );
   }, 120_000);
 
   it('equals the every-position loop in bf16 at every binade edge and around it', () => {
     for (let e = 8; e <= 16; e++) {
-      for (const span of [2 ** e - 1, 2 ** e, 2 ** e + 1, 2 ** e + 2 ** (e - 8), 2 ** e + 2 ** (e - 8) + 1, 2 ** (e + 1) - 2 ** (e - 7)]) {
+      for (const span of [
+        2 ** e - 1,
+        2 ** e,
+        2 ** e + 1,
+        2 ** e + 2 ** (e - 8),
+        2 ** e + 2 ** (e - 8) + 1,
+        2 ** (e + 1) - 2 ** (e - 7),
+      ]) {
         check('bf16', [1, 0.75, 0.9, 0.3], span);
       }
     }
@@ -43,7 +70,11 @@ describe('angleErrorMax over runs of shared rounded positions', () => {
 
   it('equals the every-position loop bit for bit in fp32 just past 2^24, where positions start to share values', () => {
     fc.assert(
-      fc.property(thetaArb, fc.integer({ min: 2 ** 24 + 1, max: 2 ** 24 + 2 ** 21 }), (theta, span) => check('fp32', theta, span)),
+      fc.property(
+        thetaArb,
+        fc.integer({ min: 2 ** 24 + 1, max: 2 ** 24 + 2 ** 21 }),
+        (theta, span) => check('fp32', theta, span),
+      ),
       { numRuns: 12, seed: 77 },
     );
     // The run holding the last position rounds up into the next binade (2^25 - 1 rounds to 2^25).

@@ -41,26 +41,37 @@ describe('blurredPairs(format, [θ], T) where angles step by half a spacing to o
       exactIn(24, 2 ** 23 + 1, -7), // just above a power of two
     ];
     for (const theta of thetas) {
-      expect(blurredPairs('fp32', Float64Array.of(theta), span), `θ = ${theta}`).toBe(blurredByWalking('fp32', theta, span) ? 1 : 0);
+      expect(blurredPairs('fp32', Float64Array.of(theta), span), `θ = ${theta}`).toBe(
+        blurredByWalking('fp32', theta, span) ? 1 : 0,
+      );
     }
   }, 60_000);
 
   it('agrees with the walk for random significands near a power of two, in all three formats and spans up to their limits', () => {
-    const limits: Record<FloatFormat, number> = { fp32: 2 ** 20, bf16: 2 ** 8 + 1, fp16: 2 ** 11 + 1 };
+    const limits: Record<FloatFormat, number> = {
+      fp32: 2 ** 20,
+      bf16: 2 ** 8 + 1,
+      fp16: 2 ** 11 + 1,
+    };
     const bits: Record<FloatFormat, number> = { fp32: 24, bf16: 8, fp16: 11 };
-    fc.assert(fc.property(
-      fc.constantFrom<FloatFormat>('fp32', 'bf16', 'fp16'),
-      fc.integer({ min: 0, max: 64 }),
-      fc.integer({ min: -14, max: 2 }),
-      fc.double({ min: 0, max: 1, noNaN: true }),
-      (format, below, exponent, spanShare) => {
-        const m = bits[format];
-        // Significands at or just under 2^m - 1 (steps just under a spacing) and a few random ones.
-        const significand = Math.max(2 ** (m - 1), 2 ** m - 1 - below);
-        const theta = exactIn(m, significand, exponent);
-        const span = Math.max(2, Math.floor(limits[format] * spanShare));
-        expect(blurredPairs(format, Float64Array.of(theta), span)).toBe(blurredByWalking(format, theta, span) ? 1 : 0);
-      },
-    ), { numRuns: 150 });
+    fc.assert(
+      fc.property(
+        fc.constantFrom<FloatFormat>('fp32', 'bf16', 'fp16'),
+        fc.integer({ min: 0, max: 64 }),
+        fc.integer({ min: -14, max: 2 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (format, below, exponent, spanShare) => {
+          const m = bits[format];
+          // Significands at or just under 2^m - 1 (steps just under a spacing) and a few random ones.
+          const significand = Math.max(2 ** (m - 1), 2 ** m - 1 - below);
+          const theta = exactIn(m, significand, exponent);
+          const span = Math.max(2, Math.floor(limits[format] * spanShare));
+          expect(blurredPairs(format, Float64Array.of(theta), span)).toBe(
+            blurredByWalking(format, theta, span) ? 1 : 0,
+          );
+        },
+      ),
+      { numRuns: 150 },
+    );
   }, 60_000);
 });

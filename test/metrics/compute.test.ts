@@ -9,7 +9,16 @@ import { SCALAR_METRICS } from '../../src/core/metrics/types.js';
 import type { Scaling } from '../../src/core/model.js';
 import { makeSpec } from './spec-fixtures.js';
 
-const scaling = (over: Partial<Scaling>): Scaling => ({ kind: 'linear', factor: 4, originalSpan: null, alpha: 1, beta: 32, low: 1, high: 4, ...over });
+const scaling = (over: Partial<Scaling>): Scaling => ({
+  kind: 'linear',
+  factor: 4,
+  originalSpan: null,
+  alpha: 1,
+  beta: 32,
+  low: 1,
+  high: 4,
+  ...over,
+});
 
 describe('spans', () => {
   it('evaluationSpan(spec) is the served span when given, else the declared span', () => {
@@ -22,34 +31,71 @@ describe('spans', () => {
     expect(evaluationSpan(makeSpec({ serving: { span: 10.5 } }))).toBeNull();
   });
 
-  it('trainedSpan(spec) prefers the scaling block\'s original span, then the explicit span, then the declared span (METRICS.md, L0)', () => {
-    const rotary = (s: Scaling | null) => ({ kind: 'rotary' as const, base: 10000, fraction: 1, scaling: s });
+  it("trainedSpan(spec) prefers the scaling block's original span, then the explicit span, then the declared span (METRICS.md, L0)", () => {
+    const rotary = (s: Scaling | null) => ({
+      kind: 'rotary' as const,
+      base: 10000,
+      fraction: 1,
+      scaling: s,
+    });
     // With a scaling block, an explicit span is the tuned span, not L0.
-    expect(trainedSpan(makeSpec({ trainedSpan: 1024, position: rotary(scaling({ originalSpan: 2048 })) }))).toBe(2048);
-    expect(trainedSpan(makeSpec({ trainedSpan: 1024, position: rotary(scaling({ originalSpan: null })) }))).toBe(1024);
-    expect(trainedSpan(makeSpec({ position: rotary(scaling({ originalSpan: 2048 })), declaredSpan: 8192 }))).toBe(2048);
+    expect(
+      trainedSpan(
+        makeSpec({ trainedSpan: 1024, position: rotary(scaling({ originalSpan: 2048 })) }),
+      ),
+    ).toBe(2048);
+    expect(
+      trainedSpan(
+        makeSpec({ trainedSpan: 1024, position: rotary(scaling({ originalSpan: null })) }),
+      ),
+    ).toBe(1024);
+    expect(
+      trainedSpan(
+        makeSpec({ position: rotary(scaling({ originalSpan: 2048 })), declaredSpan: 8192 }),
+      ),
+    ).toBe(2048);
     expect(trainedSpan(makeSpec({ declaredSpan: 8192 }))).toBe(8192);
   });
 });
 
 describe('reach, headroom, extensionRatio, scalingCover', () => {
   it('reach(spec) is the table size for a learned code, whatever the trained span', () => {
-    expect(computeMetrics(makeSpec({ position: { kind: 'learned' }, declaredSpan: 1024, trainedSpan: 512 })).reach).toBe(1024);
+    expect(
+      computeMetrics(
+        makeSpec({ position: { kind: 'learned' }, declaredSpan: 1024, trainedSpan: 512 }),
+      ).reach,
+    ).toBe(1024);
   });
 
   it('reach(spec) is L0·factor, at least the declared span when L0 was not stated explicitly', () => {
-    const position = { kind: 'rotary' as const, base: 10000, fraction: 1, scaling: scaling({ factor: 4, originalSpan: 1024 }) };
+    const position = {
+      kind: 'rotary' as const,
+      base: 10000,
+      fraction: 1,
+      scaling: scaling({ factor: 4, originalSpan: 1024 }),
+    };
     // L0 = 1024 from the scaling block, factor 4 → 4096; declared 8192 is larger and not overruled
     expect(computeMetrics(makeSpec({ position, declaredSpan: 8192 })).reach).toBe(8192);
     expect(computeMetrics(makeSpec({ position, declaredSpan: 2048 })).reach).toBe(4096);
     // explicit trained span with a scaling block: the tuned span; reach max(L0·factor, tuned), no declared floor
-    expect(computeMetrics(makeSpec({ position, declaredSpan: 8192, trainedSpan: 1024 })).reach).toBe(4096);
+    expect(
+      computeMetrics(makeSpec({ position, declaredSpan: 8192, trainedSpan: 1024 })).reach,
+    ).toBe(4096);
   });
 
   it('reach(spec) never multiplies a tuned span by the factor again: Llama-3.1-style banded ×8 from 8,192 tuned at 131,072 reaches 131,072 (Llama 3.1 figures from memory)', () => {
-    const position = { kind: 'rotary' as const, base: 500000, fraction: 1, scaling: scaling({ kind: 'banded', factor: 8, originalSpan: 8192 }) };
-    const m = computeMetrics(makeSpec({ position, declaredSpan: 131072, trainedSpan: 131072, serving: { span: 4096 } }));
-    expect([m.trainedSpan, m.tunedSpan, m.scalingCover, m.reach]).toEqual([8192, 131072, 65536, 131072]);
+    const position = {
+      kind: 'rotary' as const,
+      base: 500000,
+      fraction: 1,
+      scaling: scaling({ kind: 'banded', factor: 8, originalSpan: 8192 }),
+    };
+    const m = computeMetrics(
+      makeSpec({ position, declaredSpan: 131072, trainedSpan: 131072, serving: { span: 4096 } }),
+    );
+    expect([m.trainedSpan, m.tunedSpan, m.scalingCover, m.reach]).toEqual([
+      8192, 131072, 65536, 131072,
+    ]);
     expect(m.reach).not.toBe(131072 * 8);
     // Without a scaling block an explicit span is L0 itself, and no tuned span.
     const plain = computeMetrics(makeSpec({ declaredSpan: 8192, trainedSpan: 4096 }));
@@ -57,7 +103,13 @@ describe('reach, headroom, extensionRatio, scalingCover', () => {
   });
 
   it('reach(spec) is null for relative buckets (no hard limit), and bucketHorizon is the max distance (Raffel et al. 2020, section 2.1: 32 buckets, 128)', () => {
-    const m = computeMetrics(makeSpec({ position: { kind: 'relative', buckets: 32, maxDistance: 128 }, declaredSpan: 512, serving: { span: 4096 } }));
+    const m = computeMetrics(
+      makeSpec({
+        position: { kind: 'relative', buckets: 32, maxDistance: 128 },
+        declaredSpan: 512,
+        serving: { span: 4096 },
+      }),
+    );
     expect([m.reach, m.headroom, m.bucketHorizon]).toEqual([null, null, 128]);
     expect(computeMetrics(makeSpec({})).bucketHorizon).toBeNull();
   });
@@ -70,7 +122,12 @@ describe('reach, headroom, extensionRatio, scalingCover', () => {
 
   it('scalingCover(spec) is null without scaling and L0·factor with it', () => {
     expect(computeMetrics(makeSpec()).scalingCover).toBeNull();
-    const position = { kind: 'rotary' as const, base: 10000, fraction: 1, scaling: scaling({ kind: 'yarn', factor: 8, originalSpan: 4096 }) };
+    const position = {
+      kind: 'rotary' as const,
+      base: 10000,
+      fraction: 1,
+      scaling: scaling({ kind: 'yarn', factor: 8, originalSpan: 4096 }),
+    };
     expect(computeMetrics(makeSpec({ position, declaredSpan: 32768 })).scalingCover).toBe(32768);
   });
 });
@@ -82,21 +139,37 @@ describe('frequency metrics', () => {
     expect(m.unturnedPairs).toBe(11);
     expect(m.exposedPairs).toBe(0);
     // serving 4096 unscaled: every unturned pair now goes past its trained angle
-    expect(computeMetrics(makeSpec({ declaredSpan: 2048, serving: { span: 4096 } })).exposedPairs).toBe(11);
+    expect(
+      computeMetrics(makeSpec({ declaredSpan: 2048, serving: { span: 4096 } })).exposedPairs,
+    ).toBe(11);
   });
 
   it('exposedPairs(spec) is 0 under linear interpolation that exactly covers the served span', () => {
-    const position = { kind: 'rotary' as const, base: 10000, fraction: 1, scaling: scaling({ factor: 2, originalSpan: 2048 }) };
+    const position = {
+      kind: 'rotary' as const,
+      base: 10000,
+      fraction: 1,
+      scaling: scaling({ factor: 2, originalSpan: 2048 }),
+    };
     expect(computeMetrics(makeSpec({ position, declaredSpan: 4096 })).exposedPairs).toBe(0);
   });
 
   it('dynamic scaling uses s = max(1, T/L0): at T = L0 the frequencies are unscaled', () => {
-    const position = { kind: 'rotary' as const, base: 10000, fraction: 1, scaling: scaling({ kind: 'dynamic', factor: 4, originalSpan: 2048 }) };
+    const position = {
+      kind: 'rotary' as const,
+      base: 10000,
+      fraction: 1,
+      scaling: scaling({ kind: 'dynamic', factor: 4, originalSpan: 2048 }),
+    };
     const dyn = computeMetrics(makeSpec({ position, declaredSpan: 2048 }));
     const plain = computeMetrics(makeSpec({ declaredSpan: 2048 }));
     expect(dyn.slowestWavelength).toBe(plain.slowestWavelength);
-    const stretched = computeMetrics(makeSpec({ position, declaredSpan: 2048, serving: { span: 8192 } }));
-    expect((stretched.slowestWavelength as number) > (plain.slowestWavelength as number)).toBe(true);
+    const stretched = computeMetrics(
+      makeSpec({ position, declaredSpan: 2048, serving: { span: 8192 } }),
+    );
+    expect((stretched.slowestWavelength as number) > (plain.slowestWavelength as number)).toBe(
+      true,
+    );
   });
 
   it('separationFloor(spec) lies in [0, 2] and separationFloorOffset(spec) in [1, T)', () => {
@@ -108,16 +181,27 @@ describe('frequency metrics', () => {
   it('frequency rows and the precision block are null for learned, alibi and position-free codes', () => {
     for (const kind of ['learned', 'alibi', 'none'] as const) {
       const m = computeMetrics(makeSpec({ position: { kind } }));
-      for (const key of ['fastestWavelength', 'slowestWavelength', 'unturnedPairs', 'exposedPairs', 'separationFloor', 'separationFloorOffset', 'discriminationSpan'] as const) {
+      for (const key of [
+        'fastestWavelength',
+        'slowestWavelength',
+        'unturnedPairs',
+        'exposedPairs',
+        'separationFloor',
+        'separationFloorOffset',
+        'discriminationSpan',
+      ] as const) {
         expect(m[key], `${kind} ${key}`).toBeNull();
       }
-      for (const f of ['fp32', 'bf16', 'fp16'] as const) expect(Object.values(m.precision[f]).every((v) => v === null)).toBe(true);
+      for (const f of ['fp32', 'bf16', 'fp16'] as const)
+        expect(Object.values(m.precision[f]).every((v) => v === null)).toBe(true);
     }
   });
 
   it('alibiSlopes/alibiHorizon(spec) are set for alibi only', () => {
     expect(computeMetrics(makeSpec()).alibiSlopes).toBeNull();
-    expect(computeMetrics(makeSpec({ position: { kind: 'alibi' }, heads: 8 })).alibiSlopes).toHaveLength(8);
+    expect(
+      computeMetrics(makeSpec({ position: { kind: 'alibi' }, heads: 8 })).alibiSlopes,
+    ).toHaveLength(8);
   });
 });
 
@@ -142,7 +226,12 @@ describe('number formats', () => {
 
   it('precision.fp32 has no collisions and no blurred pairs at T = 4096', () => {
     const p = computeMetrics(makeSpec({ declaredSpan: 4096 })).precision.fp32;
-    expect(p).toMatchObject({ positionExactLimit: 2 ** 24, collidingPositions: 0, overflowPosition: null, blurredPairs: 0 });
+    expect(p).toMatchObject({
+      positionExactLimit: 2 ** 24,
+      collidingPositions: 0,
+      overflowPosition: null,
+      blurredPairs: 0,
+    });
     // rounding θ to 24 bits and the angle once: at most about 2^-24 of the largest angle 4095
     expect(p.angleErrorMax! > 0 && p.angleErrorMax! < 4095 * 2 ** -23).toBe(true);
   });
@@ -161,18 +250,29 @@ describe('context budget', () => {
   it('params(spec) adds the output matrix when untied and the table for a learned code', () => {
     const tied = computeMetrics(makeSpec()).params!;
     expect(computeMetrics(makeSpec({ tied: false })).params! - tied).toBe(1000 * 256);
-    expect(computeMetrics(makeSpec({ position: { kind: 'learned' } })).params! - tied).toBe(2048 * 256);
+    expect(computeMetrics(makeSpec({ position: { kind: 'learned' } })).params! - tied).toBe(
+      2048 * 256,
+    );
   });
 
   it('weightBytes(spec) is params × 2 by default (bf16) and × 0.5 for int4', () => {
     const m = computeMetrics(makeSpec());
     expect(m.weightBytes).toBe(m.params! * 2);
-    expect(computeMetrics(makeSpec({ dtypes: { weights: 'int4' } })).weightBytes).toBe(m.params! * 0.5);
+    expect(computeMetrics(makeSpec({ dtypes: { weights: 'int4' } })).weightBytes).toBe(
+      m.params! * 0.5,
+    );
   });
 
   it('cacheBytesAtSpan(spec) holds min(T, w) tokens on windowed layers and T on the others', () => {
     // 2 layers, 4 kv heads × 64 × 2 bytes × 2 (K and V) = 1024 bytes per layer-token
-    const m = computeMetrics(makeSpec({ declaredSpan: 4096, slidingWindow: 1000, windowLayers: 1, serving: { sequences: 3 } }));
+    const m = computeMetrics(
+      makeSpec({
+        declaredSpan: 4096,
+        slidingWindow: 1000,
+        windowLayers: 1,
+        serving: { sequences: 3 },
+      }),
+    );
     expect(m.cachePerTokenBytes).toBe(2048);
     expect(m.cacheBytesAtSpan).toBe(3 * 1024 * (4096 + 1000));
     expect(m.receptiveField).toBeNull();
@@ -188,19 +288,38 @@ describe('context budget', () => {
   it('tokenBudget(spec) subtracts the reservations, a missing one counting 0; null with neither', () => {
     expect(computeMetrics(makeSpec()).tokenBudget).toBeNull();
     expect(computeMetrics(makeSpec({ serving: { outputTokens: 500 } })).tokenBudget).toBe(1548);
-    expect(computeMetrics(makeSpec({ serving: { outputTokens: 500, promptTokens: 48 } })).tokenBudget).toBe(1500);
+    expect(
+      computeMetrics(makeSpec({ serving: { outputTokens: 500, promptTokens: 48 } })).tokenBudget,
+    ).toBe(1500);
   });
 
   it('positionShare(spec) is 1/3 for a sinusoidal code with std 1 (code d/2 against tokens d) and 1/(1+mult²) for a learned table', () => {
-    expect(computeMetrics(makeSpec({ position: { kind: 'sinusoidal' }, embeddingInitStd: 1 })).positionShare).toBe(1 / 3);
-    expect(computeMetrics(makeSpec({ position: { kind: 'learned' }, embeddingInitStd: 0.02, embeddingMultiplier: 2 })).positionShare).toBeCloseTo(0.2, 14);
+    expect(
+      computeMetrics(makeSpec({ position: { kind: 'sinusoidal' }, embeddingInitStd: 1 }))
+        .positionShare,
+    ).toBe(1 / 3);
+    expect(
+      computeMetrics(
+        makeSpec({ position: { kind: 'learned' }, embeddingInitStd: 0.02, embeddingMultiplier: 2 }),
+      ).positionShare,
+    ).toBeCloseTo(0.2, 14);
     expect(computeMetrics(makeSpec({ position: { kind: 'learned' } })).positionShare).toBeNull();
     expect(computeMetrics(makeSpec({ embeddingInitStd: 0.02 })).positionShare).toBeNull();
   });
 
   it('computeMetrics(spec) fills every scalar metric of the contract for a complete rotary spec', () => {
-    const m = computeMetrics(makeSpec({ serving: { deviceGiB: 80, outputTokens: 10 }, slidingWindow: 512 }));
-    const nullable = new Set(['servedSpan', 'scalingCover', 'alibiHorizon', 'positionShare', 'tunedSpan', 'bucketHorizon', 'visionParams']);
+    const m = computeMetrics(
+      makeSpec({ serving: { deviceGiB: 80, outputTokens: 10 }, slidingWindow: 512 }),
+    );
+    const nullable = new Set([
+      'servedSpan',
+      'scalingCover',
+      'alibiHorizon',
+      'positionShare',
+      'tunedSpan',
+      'bucketHorizon',
+      'visionParams',
+    ]);
     for (const key of SCALAR_METRICS) if (!nullable.has(key)) expect(m[key], key).not.toBeNull();
   });
 });

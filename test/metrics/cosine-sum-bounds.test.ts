@@ -12,7 +12,7 @@ import { referenceSimilarity } from './reference.js';
 
 /** `θ_i = base^(-2i/d)`, i < d/2 (Su et al. 2021, "RoFormer", Eq. 15). */
 function rotaryTheta(base: number, d: number): Float64Array {
-  return Float64Array.from({ length: d / 2 }, (_, i) => base ** (-2 * i / d));
+  return Float64Array.from({ length: d / 2 }, (_, i) => base ** ((-2 * i) / d));
 }
 
 /** The reference sum in pair order, written out here so the check does not lean on the code it checks. */
@@ -24,24 +24,28 @@ function referenceSum(theta: Float64Array, k: number): number {
 
 describe('cosineSumBounds(theta, k0, k1)', () => {
   it('holds the reference sum at every offset of the interval, for random frequencies and offsets up to 2^31', () => {
-    fc.assert(fc.property(
-      fc.array(fc.double({ min: 1e-9, max: 4, noNaN: true }), { minLength: 1, maxLength: 24 }),
-      fc.integer({ min: 1, max: 2 ** 31 - 5000 }),
-      fc.integer({ min: 0, max: 3000 }),
-      (values, k0, length) => {
-        const theta = Float64Array.from(values);
-        const { lower, upper } = cosineSumBounds(theta, k0, k0 + length);
-        // Sample the interval: both ends, and every offset of a short interval.
-        const step = Math.max(1, Math.floor(length / 200));
-        for (let k = k0; k <= k0 + length; k += step) {
-          const s = referenceSum(theta, k);
-          if (!(s >= lower && s <= upper)) throw new Error(`k=${k}: ${s} outside [${lower}, ${upper}]`);
-        }
-        const last = referenceSum(theta, k0 + length);
-        expect(last).toBeGreaterThanOrEqual(lower);
-        expect(last).toBeLessThanOrEqual(upper);
-      },
-    ), { numRuns: 300 });
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 1e-9, max: 4, noNaN: true }), { minLength: 1, maxLength: 24 }),
+        fc.integer({ min: 1, max: 2 ** 31 - 5000 }),
+        fc.integer({ min: 0, max: 3000 }),
+        (values, k0, length) => {
+          const theta = Float64Array.from(values);
+          const { lower, upper } = cosineSumBounds(theta, k0, k0 + length);
+          // Sample the interval: both ends, and every offset of a short interval.
+          const step = Math.max(1, Math.floor(length / 200));
+          for (let k = k0; k <= k0 + length; k += step) {
+            const s = referenceSum(theta, k);
+            if (!(s >= lower && s <= upper))
+              throw new Error(`k=${k}: ${s} outside [${lower}, ${upper}]`);
+          }
+          const last = referenceSum(theta, k0 + length);
+          expect(last).toBeGreaterThanOrEqual(lower);
+          expect(last).toBeLessThanOrEqual(upper);
+        },
+      ),
+      { numRuns: 300 },
+    );
   });
 
   it('is [-P, P] widened by the slack when every pair turns a whole circle in the interval', () => {
@@ -84,7 +88,10 @@ describe('similarityScan(theta, T) passing over intervals by their bounds', () =
   it('finds a floor far from k = 1 when every pair returns to angle 0 together (θ_i = 2π j_i / 7000)', () => {
     // At k = 7000 every angle is a whole number of turns, so the sum is P up to rounding: the
     // floor sits there, after thousands of offsets whose blocks the bounds pass over.
-    const theta = Float64Array.from([3, 5, 11, 17, 29, 41, 59, 97], (j) => 2 * Math.PI * j / 7000);
+    const theta = Float64Array.from(
+      [3, 5, 11, 17, 29, 41, 59, 97],
+      (j) => (2 * Math.PI * j) / 7000,
+    );
     const span = 20_000;
     const fast = similarityScan(theta, span);
     const ref = referenceSimilarity(theta, span);
@@ -96,18 +103,21 @@ describe('similarityScan(theta, T) passing over intervals by their bounds', () =
   });
 
   it('equals the straightforward loop on random codes with slow and fast pairs at spans up to 2^15', () => {
-    fc.assert(fc.property(
-      fc.integer({ min: 4, max: 32 }).map((n) => 2 * n),
-      fc.double({ min: 2, max: 1e6, noNaN: true }),
-      fc.integer({ min: 2, max: 2 ** 15 }),
-      (d, base, span) => {
-        const theta = rotaryTheta(base, d);
-        const fast = similarityScan(theta, span);
-        const ref = referenceSimilarity(theta, span);
-        expect(fast.separationFloorOffset).toBe(ref.separationFloorOffset);
-        expect(fast.discriminationSpan).toBe(ref.discriminationSpan);
-        expect(fast.separationFloor).toBe(ref.separationFloor);
-      },
-    ), { numRuns: 40 });
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 4, max: 32 }).map((n) => 2 * n),
+        fc.double({ min: 2, max: 1e6, noNaN: true }),
+        fc.integer({ min: 2, max: 2 ** 15 }),
+        (d, base, span) => {
+          const theta = rotaryTheta(base, d);
+          const fast = similarityScan(theta, span);
+          const ref = referenceSimilarity(theta, span);
+          expect(fast.separationFloorOffset).toBe(ref.separationFloorOffset);
+          expect(fast.discriminationSpan).toBe(ref.discriminationSpan);
+          expect(fast.separationFloor).toBe(ref.separationFloor);
+        },
+      ),
+      { numRuns: 40 },
+    );
   });
 });

@@ -10,7 +10,19 @@ import type { Metrics } from '../../src/core/metrics/types.js';
 import type { ModelSpec, PositionCode } from '../../src/core/model.js';
 import { makeSpec } from './spec-fixtures.js';
 
-const BAD_NUMBERS: unknown[] = [0, -1, -4096, 1.5, NaN, Infinity, -Infinity, 2 ** 60, 2 ** 53 + 2, null, undefined];
+const BAD_NUMBERS: unknown[] = [
+  0,
+  -1,
+  -4096,
+  1.5,
+  NaN,
+  Infinity,
+  -Infinity,
+  2 ** 60,
+  2 ** 53 + 2,
+  null,
+  undefined,
+];
 
 /** Every metric is null or a finite number (alibiSlopes: null or an array of finite numbers). */
 function expectSane(m: Metrics, label: string): void {
@@ -18,14 +30,16 @@ function expectSane(m: Metrics, label: string): void {
     if (key === 'precision') {
       for (const [format, block] of Object.entries(value as Metrics['precision'])) {
         for (const [name, v] of Object.entries(block)) {
-          if (!(v === null || (typeof v === 'number' && Number.isFinite(v)))) throw new Error(`${label}: precision.${format}.${name} = ${v}`);
+          if (!(v === null || (typeof v === 'number' && Number.isFinite(v))))
+            throw new Error(`${label}: precision.${format}.${name} = ${v}`);
         }
       }
     } else if (key === 'layerKinds') {
       // Checked entry by entry in degenerate-shapes.test.ts.
       if (!(value === null || Array.isArray(value))) throw new Error(`${label}: layerKinds`);
     } else if (key === 'alibiSlopes') {
-      if (!(value === null || (Array.isArray(value) && value.every((x) => Number.isFinite(x))))) throw new Error(`${label}: alibiSlopes`);
+      if (!(value === null || (Array.isArray(value) && value.every((x) => Number.isFinite(x)))))
+        throw new Error(`${label}: alibiSlopes`);
     } else if (!(value === null || (typeof value === 'number' && Number.isFinite(value)))) {
       throw new Error(`${label}: ${key} = ${value}`);
     }
@@ -34,7 +48,12 @@ function expectSane(m: Metrics, label: string): void {
 
 const CODES: PositionCode[] = [
   { kind: 'rotary', base: 10000, fraction: 1, scaling: null },
-  { kind: 'rotary', base: 10000, fraction: 1, scaling: { kind: 'yarn', factor: 4, originalSpan: 512, alpha: 1, beta: 32, low: 1, high: 4 } },
+  {
+    kind: 'rotary',
+    base: 10000,
+    fraction: 1,
+    scaling: { kind: 'yarn', factor: 4, originalSpan: 512, alpha: 1, beta: 32, low: 1, high: 4 },
+  },
   { kind: 'sinusoidal' },
   { kind: 'learned' },
   { kind: 'alibi' },
@@ -43,28 +62,66 @@ const CODES: PositionCode[] = [
 
 /** Top-level numeric fields and nested numeric fields, as setters. */
 const FIELDS: [string, (s: ModelSpec, v: unknown) => ModelSpec][] = [
-  ...(['layers', 'hidden', 'heads', 'kvHeads', 'headDim', 'ffn', 'vocab', 'declaredSpan', 'trainedSpan', 'slidingWindow', 'windowLayers', 'embeddingInitStd', 'embeddingMultiplier'] as const).map(
-    (k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [k, (s, v) => ({ ...s, [k]: v })],
-  ),
+  ...(
+    [
+      'layers',
+      'hidden',
+      'heads',
+      'kvHeads',
+      'headDim',
+      'ffn',
+      'vocab',
+      'declaredSpan',
+      'trainedSpan',
+      'slidingWindow',
+      'windowLayers',
+      'embeddingInitStd',
+      'embeddingMultiplier',
+    ] as const
+  ).map((k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [
+    k,
+    (s, v) => ({ ...s, [k]: v }),
+  ]),
   ...(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens'] as const).map(
-    (k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [`serving.${k}`, (s, v) => ({ ...s, serving: { ...s.serving, [k]: v } })],
+    (k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [
+      `serving.${k}`,
+      (s, v) => ({ ...s, serving: { ...s.serving, [k]: v } }),
+    ],
   ),
-  ['position.base', (s, v) => (s.position.kind === 'rotary' ? { ...s, position: { ...s.position, base: v as number } } : s)],
-  ['position.fraction', (s, v) => (s.position.kind === 'rotary' ? { ...s, position: { ...s.position, fraction: v as number } } : s)],
+  [
+    'position.base',
+    (s, v) =>
+      s.position.kind === 'rotary' ? { ...s, position: { ...s.position, base: v as number } } : s,
+  ],
+  [
+    'position.fraction',
+    (s, v) =>
+      s.position.kind === 'rotary'
+        ? { ...s, position: { ...s.position, fraction: v as number } }
+        : s,
+  ],
   ...(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high'] as const).map(
     (k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [
       `position.scaling.${k}`,
-      (s, v) => (s.position.kind === 'rotary' && s.position.scaling ? { ...s, position: { ...s.position, scaling: { ...s.position.scaling, [k]: v } } } : s),
+      (s, v) =>
+        s.position.kind === 'rotary' && s.position.scaling
+          ? { ...s, position: { ...s.position, scaling: { ...s.position.scaling, [k]: v } } }
+          : s,
     ],
   ),
   ...(['total', 'active'] as const).map((k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [
     `experts.${k}`,
     (s, v) => ({ ...s, experts: { total: 8, active: 2, [k]: v } }),
   ]),
-  ...(['layers', 'heads', 'kvHeads', 'headDim', 'ffn'] as const).map((k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [
-    `encoder.${k}`,
-    (s, v) => ({ ...s, encoder: { layers: 2, heads: 4, kvHeads: 4, headDim: 64, ffn: 1024, [k]: v } }),
-  ]),
+  ...(['layers', 'heads', 'kvHeads', 'headDim', 'ffn'] as const).map(
+    (k): [string, (s: ModelSpec, v: unknown) => ModelSpec] => [
+      `encoder.${k}`,
+      (s, v) => ({
+        ...s,
+        encoder: { layers: 2, heads: 4, kvHeads: 4, headDim: 64, ffn: 1024, [k]: v },
+      }),
+    ],
+  ),
 ];
 
 describe('computeMetrics(spec) on degenerate input', () => {
@@ -95,7 +152,9 @@ describe('computeMetrics(spec) on degenerate input', () => {
       expect(m.params).toBeNull();
       expect(m.positionShare).toBeNull();
     }
-    const sinusoidal = computeMetrics(makeSpec({ hidden: 2 ** 60, position: { kind: 'sinusoidal' } }));
+    const sinusoidal = computeMetrics(
+      makeSpec({ hidden: 2 ** 60, position: { kind: 'sinusoidal' } }),
+    );
     expect(sinusoidal.slowestWavelength).toBeNull();
   });
 
@@ -112,7 +171,12 @@ describe('computeMetrics(spec) on degenerate input', () => {
   });
 
   it('gives null for a spec whose position or serving blocks are missing entirely', () => {
-    const broken = { ...makeSpec(), position: undefined, serving: undefined, dtypes: undefined } as unknown as ModelSpec;
+    const broken = {
+      ...makeSpec(),
+      position: undefined,
+      serving: undefined,
+      dtypes: undefined,
+    } as unknown as ModelSpec;
     const m = computeMetrics(broken);
     expectSane(m, 'missing blocks');
     expect(m.fastestWavelength).toBeNull();

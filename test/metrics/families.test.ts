@@ -27,7 +27,13 @@ describe('mixtures of experts against the published totals', () => {
   it('DeepSeek-V2-Lite reads at 15.7B parameters (Liu et al. 2024, DeepSeek-V2, Appendix B: 15.7B total), no blocking finding', () => {
     const { spec, all } = read('deepseek-v2-lite-latent.json');
     expect(all.filter((f) => f.severity === 'block')).toEqual([]);
-    expect(spec.experts).toMatchObject({ total: 64, active: 6, width: 1408, shared: 2, denseLayers: 1 });
+    expect(spec.experts).toMatchObject({
+      total: 64,
+      active: 6,
+      width: 1408,
+      shared: 2,
+      denseLayers: 1,
+    });
     const m = computeMetrics(withSpan(spec, 4096));
     expect(rel(m.params, 15.7e9)).toBeLessThan(0.02);
     // Architecture count, derived by hand from the published shapes: 15,706,484,224.
@@ -71,7 +77,14 @@ describe('mixtures of experts against the published totals', () => {
 
   it('Qwen1.5-MoE-A2.7B style: one gated shared expert of shared_expert_intermediate_size; 14.3B total, 2.7B activated (Qwen team 2024 model release, from memory)', () => {
     const { spec } = read('qwen2-moe-shared-expert.json');
-    expect(spec.experts).toMatchObject({ total: 60, active: 4, width: 1408, shared: 1, sharedWidth: 5632, sharedGate: true });
+    expect(spec.experts).toMatchObject({
+      total: 60,
+      active: 4,
+      width: 1408,
+      shared: 1,
+      sharedWidth: 5632,
+      sharedGate: true,
+    });
     const m = computeMetrics(withSpan(spec, 4096));
     expect(rel(m.params, 14.3e9)).toBeLessThan(0.02);
     expect(rel(m.activeParams, 2.7e9)).toBeLessThan(0.02);
@@ -88,7 +101,13 @@ describe('mixtures of experts against the published totals', () => {
   it('Llama-4-Scout style: 16 experts top 1 plus a shared expert, 109B total and 17B active (Meta 2025 model release, from memory)', () => {
     const { spec, all } = read('llama4-chunked-experts.json');
     expect(all.filter((f) => f.severity === 'block')).toEqual([]);
-    expect(spec.experts).toMatchObject({ total: 16, active: 1, width: 8192, shared: 1, denseLayers: 0 });
+    expect(spec.experts).toMatchObject({
+      total: 16,
+      active: 1,
+      width: 8192,
+      shared: 1,
+      denseLayers: 0,
+    });
     expect(spec.ffn).toBe(16384);
     const m = computeMetrics(withSpan(spec, 16384));
     expect(rel(m.params, 109e9)).toBeLessThan(0.02);
@@ -102,9 +121,14 @@ describe('mixtures of experts against the published totals', () => {
     const listed = readModel(configText({ ...base, mlp_only_layers: [0, 1, 47] }), 'c.json').spec;
     expect(listed.experts?.denseLayers).toBe(3);
     const deep = JSON.parse(fixture('deepseek-v2-lite-latent.json')) as Record<string, unknown>;
-    expect(readModel(configText({ ...deep, first_k_dense_replace: 3, moe_layer_freq: 2 }), 'c.json').spec.experts?.denseLayers).toBe(27 - 12);
+    expect(
+      readModel(configText({ ...deep, first_k_dense_replace: 3, moe_layer_freq: 2 }), 'c.json').spec
+        .experts?.denseLayers,
+    ).toBe(27 - 12);
     // One dense layer of width ffn replaces one mixture: the difference is exact.
-    const one = computeMetrics(readModel(configText({ ...base, mlp_only_layers: [5] }), 'c.json').spec).params!;
+    const one = computeMetrics(
+      readModel(configText({ ...base, mlp_only_layers: [5] }), 'c.json').spec,
+    ).params!;
     const none = computeMetrics(readModel(configText(base), 'c.json').spec).params!;
     const mixture = 128 * 3 * 2048 * 768 + 2048 * 128;
     expect(none - one).toBe(mixture - 3 * 2048 * 6144);
@@ -121,32 +145,54 @@ describe('latent attention (Liu et al. 2024, DeepSeek-V2)', () => {
 
   it('the rotary code has d_h^R / 2 = 32 pairs: the wavelengths span base^(62/64)·2π (Su et al. 2021, eq. 15 over the decoupled width)', () => {
     const { spec } = read('deepseek-v2-lite-latent.json');
-    const unscaled: ModelSpec = { ...withSpan(spec, 4096), position: { kind: 'rotary', base: 10000, fraction: 1, scaling: null } };
+    const unscaled: ModelSpec = {
+      ...withSpan(spec, 4096),
+      position: { kind: 'rotary', base: 10000, fraction: 1, scaling: null },
+    };
     const m = computeMetrics(unscaled);
     expect(m.fastestWavelength).toBeCloseTo(2 * Math.PI, 12);
     expect(m.slowestWavelength! / (2 * Math.PI * 10000 ** (62 / 64))).toBeCloseTo(1, 12);
   });
 
-  it('counts the paper\'s projections: W^DKV+W^KR, W^UK+W^UV, W^Q (or W^DQ, W^UQ), W^O, and the latents\' norms', () => {
+  it("counts the paper's projections: W^DKV+W^KR, W^UK+W^UV, W^Q (or W^DQ, W^UQ), W^O, and the latents' norms", () => {
     const { spec } = read('deepseek-v2-lite-latent.json');
     const plain = parameterBreakdown(spec)!;
-    const q = readModel(fixture('deepseek-v2-lite-latent.json').replace('"q_lora_rank": null', '"q_lora_rank": 1536'), 'c.json').spec;
+    const q = readModel(
+      fixture('deepseek-v2-lite-latent.json').replace('"q_lora_rank": null', '"q_lora_rank": 1536'),
+      'c.json',
+    ).spec;
     const compressed = parameterBreakdown(q)!;
     // Per layer: W^Q 2048·16·192 becomes W^DQ 2048·1536 + W^UQ 1536·16·192, plus a 1536-wide norm.
-    expect(compressed.matrices - plain.matrices).toBe(27 * (2048 * 1536 + 1536 * 16 * 192 - 2048 * 16 * 192));
+    expect(compressed.matrices - plain.matrices).toBe(
+      27 * (2048 * 1536 + 1536 * 16 * 192 - 2048 * 16 * 192),
+    );
     expect(compressed.vectors - plain.vectors).toBe(27 * 1536);
   });
 
   it('kv-heads rules and remedies do not apply: a head count the latent does not group raises no kv-heads-indivisible', () => {
-    const text = fixture('deepseek-v2-lite-latent.json').replace('"num_key_value_heads": 16', '"num_key_value_heads": 3');
+    const text = fixture('deepseek-v2-lite-latent.json').replace(
+      '"num_key_value_heads": 16',
+      '"num_key_value_heads": 3',
+    );
     const r = readModel(text, 'c.json');
-    expect(specFindings(r.spec, r.locations).map((f) => f.rule)).not.toContain('kv-heads-indivisible');
+    expect(specFindings(r.spec, r.locations).map((f) => f.rule)).not.toContain(
+      'kv-heads-indivisible',
+    );
     expect(computeMetrics(withSpan(r.spec, 4096)).cachePerTokenBytes).toBe(27 * 576 * 2);
   });
 
   it('an odd decoupled rotary width is reported on qk_rope_head_dim', () => {
-    const r = readModel(fixture('deepseek-v2-lite-latent.json').replace('"qk_rope_head_dim": 64', '"qk_rope_head_dim": 63'), 'c.json');
-    expect(specFindings(r.spec, r.locations).map((f) => [f.rule, f.key])).toContainEqual(['rotary-width-odd', 'qk_rope_head_dim']);
+    const r = readModel(
+      fixture('deepseek-v2-lite-latent.json').replace(
+        '"qk_rope_head_dim": 64',
+        '"qk_rope_head_dim": 63',
+      ),
+      'c.json',
+    );
+    expect(specFindings(r.spec, r.locations).map((f) => [f.rule, f.key])).toContainEqual([
+      'rotary-width-odd',
+      'qk_rope_head_dim',
+    ]);
   });
 });
 
@@ -176,7 +222,14 @@ describe('layers that differ', () => {
     expect(rel(b.embedding, 302e6)).toBeLessThan(0.02);
     expect(rel(b.nonEmbeddingParams, 698e6)).toBeLessThan(0.02);
     expect(spec.layerTypes!.filter((t) => t === 'sliding').length).toBe(22);
-    expect(spec.layerTypes!.slice(0, 6)).toEqual(['sliding', 'sliding', 'sliding', 'sliding', 'sliding', 'full']);
+    expect(spec.layerTypes!.slice(0, 6)).toEqual([
+      'sliding',
+      'sliding',
+      'sliding',
+      'sliding',
+      'sliding',
+      'full',
+    ]);
   });
 
   it('Gemma 3 4B language model: 3,209M non-embedding (Gemma 3 report, Table 1); 29 local and 5 global layers', () => {
@@ -186,11 +239,13 @@ describe('layers that differ', () => {
     expect(spec.layerTypes!.filter((t) => t === 'full').length).toBe(5);
   });
 
-  it('Gemma 3 local layers keep their own base 10000, unscaled; the top level is the global layers\' scaled code', () => {
+  it("Gemma 3 local layers keep their own base 10000, unscaled; the top level is the global layers' scaled code", () => {
     const { spec } = read('gemma3-4b-text-scaled.json');
     const m = computeMetrics(withSpan(spec, 32768));
     const kinds = m.layerKinds!;
-    expect(kinds.map((k) => [k.attention, k.layers, k.window, k.rotaryBase, k.scaled, k.visibleSpan])).toEqual([
+    expect(
+      kinds.map((k) => [k.attention, k.layers, k.window, k.rotaryBase, k.scaled, k.visibleSpan]),
+    ).toEqual([
       ['sliding', 29, 1024, 10000, false, 1024],
       ['full', 5, null, 1_000_000, true, 32768],
     ]);
@@ -222,32 +277,49 @@ describe('layers that differ', () => {
   });
 
   it('an empty no_rope_layers list takes the Llama-4-style default of every 4th layer position-free, as the config class does', () => {
-    const cfg = { ...(JSON.parse(fixture('llama4-chunked-experts.json')) as Record<string, unknown>), no_rope_layers: [] };
+    const cfg = {
+      ...(JSON.parse(fixture('llama4-chunked-experts.json')) as Record<string, unknown>),
+      no_rope_layers: [],
+    };
     const r = readModel(configText(cfg), 'c.json');
     expect(r.findings).toEqual([]);
-    expect(r.spec.positionFreeLayers).toEqual(read('llama4-chunked-experts.json').spec.positionFreeLayers);
+    expect(r.spec.positionFreeLayers).toEqual(
+      read('llama4-chunked-experts.json').spec.positionFreeLayers,
+    );
   });
 
   it('a position-free first layer leaves the rotary layers their own number formats', () => {
     const { spec } = read('llama4-chunked-experts.json');
     const m = computeMetrics({ ...withSpan(spec, 16384), positionFreeLayers: [0] });
-    const rotaryFull = m.layerKinds!.find((k) => k.attention === 'chunked' && k.positionCode === 'rotary')!;
+    const rotaryFull = m.layerKinds!.find(
+      (k) => k.attention === 'chunked' && k.positionCode === 'rotary',
+    )!;
     expect(m.layerKinds![0]!.positionCode).toBe('none');
     expect(rotaryFull.precision.bf16.blurredPairs).toBe(m.precision.bf16.blurredPairs);
     expect(rotaryFull.precision.bf16.blurredPairs).not.toBeNull();
   });
 
   it('an unknown layer_types entry is a finding, never a silent default', () => {
-    const types = Array.from({ length: 26 }, (_, i) => (i % 2 ? 'linear_attention' : 'full_attention'));
-    const cfg = { ...(JSON.parse(fixture('gemma3-local-global.json')) as Record<string, unknown>), layer_types: types };
+    const types = Array.from({ length: 26 }, (_, i) =>
+      i % 2 ? 'linear_attention' : 'full_attention',
+    );
+    const cfg = {
+      ...(JSON.parse(fixture('gemma3-local-global.json')) as Record<string, unknown>),
+      layer_types: types,
+    };
     const r = readModel(configText(cfg), 'c.json');
-    expect(r.findings.map((f) => [f.rule, f.key])).toContainEqual(['key-ignored', 'layer_types[1]']);
+    expect(r.findings.map((f) => [f.rule, f.key])).toContainEqual([
+      'key-ignored',
+      'layer_types[1]',
+    ]);
   });
 
-  it('flopsPerToken counts each layer\'s own span: windowed layers attend min(T, w) (Kaplan et al. 2020, Table 1, n_ctx per layer)', () => {
+  it("flopsPerToken counts each layer's own span: windowed layers attend min(T, w) (Kaplan et al. 2020, Table 1, n_ctx per layer)", () => {
     const { spec } = read('gemma2-alternating.json');
     const m = computeMetrics(spec);
-    expect(m.flopsPerToken).toBe(2 * m.nonEmbeddingParams! + 2 * (21 * 4096 + 21 * 8192) * 16 * 256);
+    expect(m.flopsPerToken).toBe(
+      2 * m.nonEmbeddingParams! + 2 * (21 * 4096 + 21 * 8192) * 16 * 256,
+    );
   });
 });
 
@@ -263,7 +335,13 @@ describe('encoder-only models', () => {
   });
 
   it('BERT-large (340M, Devlin et al. 2018, §3) reads within 2% with no cache; fitSequences is null as no cache bounds it', () => {
-    const cfg = { ...(JSON.parse(fixture('bert-absolute.json')) as Record<string, unknown>), hidden_size: 1024, num_hidden_layers: 24, num_attention_heads: 16, intermediate_size: 4096 };
+    const cfg = {
+      ...(JSON.parse(fixture('bert-absolute.json')) as Record<string, unknown>),
+      hidden_size: 1024,
+      num_hidden_layers: 24,
+      num_attention_heads: 16,
+      intermediate_size: 4096,
+    };
     const { spec } = readModel(configText(cfg), 'c.json');
     const m = computeMetrics({ ...spec, serving: { ...spec.serving, deviceGiB: 16 } });
     expect(rel(m.params, 340e6)).toBeLessThan(0.02);
@@ -272,7 +350,10 @@ describe('encoder-only models', () => {
   });
 
   it('a BERT-family config that says is_decoder: true keeps its cache', () => {
-    const cfg = { ...(JSON.parse(fixture('bert-absolute.json')) as Record<string, unknown>), is_decoder: true };
+    const cfg = {
+      ...(JSON.parse(fixture('bert-absolute.json')) as Record<string, unknown>),
+      is_decoder: true,
+    };
     const m = computeMetrics(readModel(configText(cfg), 'c.json').spec);
     expect(m.cachePerTokenBytes).toBe(12 * 2 * 768 * 2);
   });
@@ -280,7 +361,14 @@ describe('encoder-only models', () => {
 
 describe('parameterBreakdown(spec)', () => {
   it('params = embedding + output + matrices + vectors for every family fixture', () => {
-    for (const name of ['deepseek-v2-lite-latent.json', 'qwen3-moe-experts.json', 'gemma2-alternating.json', 'bert-absolute.json', 'mixtral-moe.json', 'gpt2-compact.json']) {
+    for (const name of [
+      'deepseek-v2-lite-latent.json',
+      'qwen3-moe-experts.json',
+      'gemma2-alternating.json',
+      'bert-absolute.json',
+      'mixtral-moe.json',
+      'gpt2-compact.json',
+    ]) {
       const b = parameterBreakdown(read(name).spec)!;
       expect(b.embedding + b.output + b.matrices + b.vectors, name).toBe(b.params);
     }

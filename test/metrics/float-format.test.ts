@@ -50,9 +50,12 @@ function binary32Inputs(count: number, seed: number): number[] {
   for (let n = 0; n < count; n++) {
     const kind = n % 4;
     let u: number;
-    if (kind === 0) u = Math.floor(next() * 2 ** 32); // anywhere
-    else if (kind === 1) u = ((Math.floor(next() * 48) + 88) << 23) | Math.floor(next() * 2 ** 23); // exponents 2^-39 .. 2^8: fp16 subnormals to normals
-    else if (kind === 2) u = ((Math.floor(next() * 6) + 140) << 23) | Math.floor(next() * 2 ** 23); // 2^13 .. 2^18: around 65504 and overflow
+    if (kind === 0)
+      u = Math.floor(next() * 2 ** 32); // anywhere
+    else if (kind === 1)
+      u = ((Math.floor(next() * 48) + 88) << 23) | Math.floor(next() * 2 ** 23); // exponents 2^-39 .. 2^8: fp16 subnormals to normals
+    else if (kind === 2)
+      u = ((Math.floor(next() * 6) + 140) << 23) | Math.floor(next() * 2 ** 23); // 2^13 .. 2^18: around 65504 and overflow
     else u = ((Math.floor(next() * 254) + 1) << 23) | (Math.floor(next() * 2 ** 10) << 13) | 0x1000; // fp16-length significands plus a tie bit
     if (next() < 0.5) u |= 0x80000000;
     out.push(fromBits32(u >>> 0));
@@ -70,7 +73,8 @@ describe('float-format: IEEE 754 limits', () => {
     expect(roundToFormat(257, 'bf16')).toBe(256);
     expect(roundToFormat(2049, 'fp16')).toBe(2048);
     for (const f of ['fp32', 'bf16', 'fp16'] as const) {
-      for (let n = 0; n <= Math.min(positionExactLimit(f), 4096); n++) expect(roundToFormat(n, f)).toBe(n);
+      for (let n = 0; n <= Math.min(positionExactLimit(f), 4096); n++)
+        expect(roundToFormat(n, f)).toBe(n);
     }
   });
 
@@ -114,7 +118,8 @@ describe('float-format: roundToFormat against outside references', () => {
     for (const x of inputs) {
       const ours = roundToFormat(x, 'fp16');
       const theirs = f16round(x);
-      if (!Object.is(ours, theirs)) throw new Error(`fp16 mismatch at ${x}: ours ${ours}, library ${theirs}`);
+      if (!Object.is(ours, theirs))
+        throw new Error(`fp16 mismatch at ${x}: ours ${ours}, library ${theirs}`);
       if (ours !== 0 && Math.abs(ours) < 2 ** -14) subnormals++;
       if (!Number.isFinite(ours)) overflows++;
     }
@@ -127,7 +132,8 @@ describe('float-format: roundToFormat against outside references', () => {
     for (const x of inputs) {
       const ours = roundToFormat(x, 'bf16');
       const reference = bf16FromBinary32(x);
-      if (!Object.is(ours, reference)) throw new Error(`bf16 mismatch at ${x}: ours ${ours}, bit trick ${reference}`);
+      if (!Object.is(ours, reference))
+        throw new Error(`bf16 mismatch at ${x}: ours ${ours}, bit trick ${reference}`);
     }
   });
 

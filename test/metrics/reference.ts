@@ -39,7 +39,11 @@ export interface ReferencePrecision {
 }
 
 /** The number-format block by visiting every (p, i). */
-export function referencePrecision(format: FloatFormat, theta: Float64Array, span: number): ReferencePrecision {
+export function referencePrecision(
+  format: FloatFormat,
+  theta: Float64Array,
+  span: number,
+): ReferencePrecision {
   const fl = (x: number) => roundToFormat(x, format);
   const P = theta.length;
   const t = Array.from(theta, fl);
@@ -73,7 +77,11 @@ export function referencePrecision(format: FloatFormat, theta: Float64Array, spa
 }
 
 /** `angleErrorMax` alone by visiting every (p, i), for the long spans where the full block is slow. */
-export function referenceAngleErrorMax(format: FloatFormat, theta: Float64Array, span: number): number {
+export function referenceAngleErrorMax(
+  format: FloatFormat,
+  theta: Float64Array,
+  span: number,
+): number {
   const fl = format === 'fp32' ? Math.fround : (x: number) => roundToFormat(x, format);
   const t = Array.from(theta, fl);
   let errorMax = 0;

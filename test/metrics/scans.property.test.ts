@@ -21,33 +21,68 @@ function expectClose(actual: number | null, expected: number | null, what: strin
     return;
   }
   const scale = Math.max(Math.abs(expected), Number.MIN_VALUE);
-  if (!(Math.abs(actual - expected) <= 1e-9 * scale)) throw new Error(`${what}: fast ${actual}, reference ${expected}`);
+  if (!(Math.abs(actual - expected) <= 1e-9 * scale))
+    throw new Error(`${what}: fast ${actual}, reference ${expected}`);
 }
 
 function checkAgainstReference(theta: Float64Array, span: number, label: string): void {
   const fast = similarityScan(theta, span);
   const ref = referenceSimilarity(theta, span);
-  expect(fast.separationFloorOffset, `${label} separationFloorOffset`).toBe(ref.separationFloorOffset);
+  expect(fast.separationFloorOffset, `${label} separationFloorOffset`).toBe(
+    ref.separationFloorOffset,
+  );
   expect(fast.discriminationSpan, `${label} discriminationSpan`).toBe(ref.discriminationSpan);
   expectClose(fast.separationFloor, ref.separationFloor, `${label} separationFloor`);
   for (const f of FORMATS) {
     const got = numberFormatMetrics(f, theta, span);
     const want = referencePrecision(f, theta, span);
-    expect(got.collidingPositions, `${label} ${f} collidingPositions`).toBe(want.collidingPositions);
+    expect(got.collidingPositions, `${label} ${f} collidingPositions`).toBe(
+      want.collidingPositions,
+    );
     expect(got.overflowPosition, `${label} ${f} overflowPosition`).toBe(want.overflowPosition);
     expect(got.blurredPairs, `${label} ${f} blurredPairs`).toBe(want.blurredPairs);
     expectClose(got.angleErrorMax, want.angleErrorMax, `${label} ${f} angleErrorMax`);
   }
 }
 
-function rotarySpec(base: number, headDim: number, fraction: number, scaling: Scaling | null, declared: number, served: number): ModelSpec {
+function rotarySpec(
+  base: number,
+  headDim: number,
+  fraction: number,
+  scaling: Scaling | null,
+  declared: number,
+  served: number,
+): ModelSpec {
   return {
-    name: null, layers: 2, hidden: headDim * 2, heads: 2, kvHeads: 2, headDim, ffn: 8, gated: false, vocab: 10,
-    tied: true, bias: false, experts: null, encoder: null,
+    name: null,
+    layers: 2,
+    hidden: headDim * 2,
+    heads: 2,
+    kvHeads: 2,
+    headDim,
+    ffn: 8,
+    gated: false,
+    vocab: 10,
+    tied: true,
+    bias: false,
+    experts: null,
+    encoder: null,
     position: { kind: 'rotary', base, fraction, scaling },
-    declaredSpan: declared, trainedSpan: null, slidingWindow: null, windowLayers: null,
-    dtypes: { weights: null, cache: null, positions: null }, embeddingInitStd: null, embeddingMultiplier: null,
-    serving: { span: served, sequences: null, deviceGiB: null, reserve: null, outputTokens: null, promptTokens: null },
+    declaredSpan: declared,
+    trainedSpan: null,
+    slidingWindow: null,
+    windowLayers: null,
+    dtypes: { weights: null, cache: null, positions: null },
+    embeddingInitStd: null,
+    embeddingMultiplier: null,
+    serving: {
+      span: served,
+      sequences: null,
+      deviceGiB: null,
+      reserve: null,
+      outputTokens: null,
+      promptTokens: null,
+    },
   };
 }
 
@@ -55,7 +90,10 @@ const scalingArb: fc.Arbitrary<Scaling | null> = fc.oneof(
   fc.constant(null),
   fc.record({
     kind: fc.constantFrom<ScalingKind>('linear', 'ntk', 'dynamic', 'yarn', 'banded'),
-    factor: fc.oneof(fc.double({ min: 1, max: 16, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true })),
+    factor: fc.oneof(
+      fc.double({ min: 1, max: 16, noNaN: true }),
+      fc.double({ min: 0.01, max: 1, noNaN: true }),
+    ),
     originalSpan: fc.oneof(fc.constant(null), fc.integer({ min: 16, max: 4096 })),
     alpha: fc.constantFrom(1, 2),
     beta: fc.constantFrom(32, 16),
@@ -75,10 +113,21 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
         fc.integer({ min: 1, max: 5000 }),
         fc.integer({ min: 1, max: 5000 }),
         (logBase, halfHead, fraction, scaling, declared, served) => {
-          const spec = rotarySpec(Math.exp(logBase), 2 * halfHead, fraction, scaling, declared, served);
+          const spec = rotarySpec(
+            Math.exp(logBase),
+            2 * halfHead,
+            fraction,
+            scaling,
+            declared,
+            served,
+          );
           const plan = frequencyPlan(spec, served, scaling?.originalSpan ?? declared);
           if (plan === null) return;
-          checkAgainstReference(plan.scaled, served, JSON.stringify({ logBase, halfHead, fraction, scaling, served }));
+          checkAgainstReference(
+            plan.scaled,
+            served,
+            JSON.stringify({ logBase, halfHead, fraction, scaling, served }),
+          );
         },
       ),
       { numRuns: 150, seed: 424242 },
@@ -88,7 +137,10 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
   it('equal the reference on random raw frequencies, including θ > 1, fp16 subnormal and zero-rounding θ', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.double({ min: Math.log(1e-9), max: Math.log(40), noNaN: true }), { minLength: 1, maxLength: 9 }),
+        fc.array(fc.double({ min: Math.log(1e-9), max: Math.log(40), noNaN: true }), {
+          minLength: 1,
+          maxLength: 9,
+        }),
         fc.integer({ min: 1, max: 4000 }),
         (logs, span) => {
           const theta = Float64Array.from(logs, Math.exp);
@@ -102,7 +154,10 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
   it('equal the reference for large angles kθ up to 1e9, where the seeds are reduced by whole turns', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.double({ min: Math.log(50), max: Math.log(3e5), noNaN: true }), { minLength: 1, maxLength: 6 }),
+        fc.array(fc.double({ min: Math.log(50), max: Math.log(3e5), noNaN: true }), {
+          minLength: 1,
+          maxLength: 6,
+        }),
         fc.integer({ min: 600, max: 3000 }),
         (logs, span) => {
           const theta = Float64Array.from(logs, Math.exp);
@@ -131,7 +186,9 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
       for (const theta of [one, two]) {
         const fast = similarityScan(theta, q);
         const ref = referenceSimilarity(theta, q);
-        expect(fast.separationFloorOffset, `q=${q} P=${theta.length}`).toBe(ref.separationFloorOffset);
+        expect(fast.separationFloorOffset, `q=${q} P=${theta.length}`).toBe(
+          ref.separationFloorOffset,
+        );
         expect(fast.separationFloor, `q=${q} P=${theta.length}`).toBe(ref.separationFloor);
       }
     }
@@ -140,16 +197,23 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
 
   it('discriminationSpan(θ, T) matches where Σcos passes within rounding of zero (θ = π/(2m))', () => {
     for (let m = 2; m <= 400; m++) {
-      for (const theta of [Float64Array.from([Math.PI / (2 * m)]), Float64Array.from([Math.PI / (2 * m), Math.PI / (2 * m), (3 * Math.PI) / (2 * m)])]) {
+      for (const theta of [
+        Float64Array.from([Math.PI / (2 * m)]),
+        Float64Array.from([Math.PI / (2 * m), Math.PI / (2 * m), (3 * Math.PI) / (2 * m)]),
+      ]) {
         const span = 4 * m + 2;
-        expect(similarityScan(theta, span).discriminationSpan, `m=${m} P=${theta.length}`).toBe(referenceSimilarity(theta, span).discriminationSpan);
+        expect(similarityScan(theta, span).discriminationSpan, `m=${m} P=${theta.length}`).toBe(
+          referenceSimilarity(theta, span).discriminationSpan,
+        );
       }
     }
   });
 
   it('equal the reference across the format thresholds (T around 257, 2049, 65520)', () => {
     const theta = Float64Array.from([1, 0.31, 0.0123, 1.7e-5, 3e-8]);
-    for (const span of [1, 2, 3, 256, 257, 258, 259, 2048, 2049, 2050, 2051, 65519, 65520, 65521, 65530]) {
+    for (const span of [
+      1, 2, 3, 256, 257, 258, 259, 2048, 2049, 2050, 2051, 65519, 65520, 65521, 65530,
+    ]) {
       checkAgainstReference(theta, span, `T=${span}`);
     }
   });
@@ -180,7 +244,10 @@ describe('similarityScan and numberFormatMetrics against the straightforward loo
   it('equal the reference where the bounds are checked three levels deep (T up to 300,000, intervals of 512·8^j)', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.double({ min: Math.log(1e-5), max: Math.log(3), noNaN: true }), { minLength: 1, maxLength: 12 }),
+        fc.array(fc.double({ min: Math.log(1e-5), max: Math.log(3), noNaN: true }), {
+          minLength: 1,
+          maxLength: 12,
+        }),
         fc.integer({ min: 33_000, max: 300_000 }),
         (logs, span) => {
           const theta = Float64Array.from(logs, Math.exp);

@@ -21,9 +21,19 @@ const GIB = 2 ** 30;
  */
 function seventyB(serving: Record<string, unknown> = {}): string {
   return JSON.stringify({
-    model_type: 'llama', hidden_size: 8192, intermediate_size: 28672, num_hidden_layers: 80, num_attention_heads: 64,
-    num_key_value_heads: 8, vocab_size: 32000, max_position_embeddings: 4096, rope_theta: 10000, hidden_act: 'silu',
-    tie_word_embeddings: false, torch_dtype: 'float16', ...serving,
+    model_type: 'llama',
+    hidden_size: 8192,
+    intermediate_size: 28672,
+    num_hidden_layers: 80,
+    num_attention_heads: 64,
+    num_key_value_heads: 8,
+    vocab_size: 32000,
+    max_position_embeddings: 4096,
+    rope_theta: 10000,
+    hidden_act: 'silu',
+    tie_word_embeddings: false,
+    torch_dtype: 'float16',
+    ...serving,
   });
 }
 
@@ -64,69 +74,154 @@ describe('per-device figures of a 70B-class shape (METRICS.md, serving across de
     [8, 4, 1, 20 * 2 * 1 * 128 * 2], // 10,240
     [16, 4, 1, 20 * 2 * 1 * 128 * 2], // 10,240
   ];
-  it.each(cases)('t = %i, p = %i: %i key/value heads and %i cache bytes per token on each device, weights split evenly', (t, p, kv, perToken) => {
-    const m = computeMetrics(specWith(seventyB(), { tensorParallel: t, pipelineParallel: p, span: 4096, sequences: 64, deviceGiB: 80 }));
-    expect(m.devices).toBe(t * p);
-    expect(m.kvHeadsPerDevice).toBe(kv);
-    expect(m.cachePerTokenBytesPerDevice).toBe(perToken);
-    expect(m.weightBytesPerDevice).toBe(WEIGHT_BYTES / (t * p));
-    expect(Number.isInteger(m.weightBytesPerDevice)).toBe(true);
-    expect(m.memoryBytesPerDevice).toBe(WEIGHT_BYTES / (t * p) + 64 * 4096 * perToken);
-    expect(m.fitSequences).toBe(Math.floor((80 * GIB * 0.9 - WEIGHT_BYTES / (t * p)) / (4096 * perToken)));
-  });
+  it.each(cases)(
+    't = %i, p = %i: %i key/value heads and %i cache bytes per token on each device, weights split evenly',
+    (t, p, kv, perToken) => {
+      const m = computeMetrics(
+        specWith(seventyB(), {
+          tensorParallel: t,
+          pipelineParallel: p,
+          span: 4096,
+          sequences: 64,
+          deviceGiB: 80,
+        }),
+      );
+      expect(m.devices).toBe(t * p);
+      expect(m.kvHeadsPerDevice).toBe(kv);
+      expect(m.cachePerTokenBytesPerDevice).toBe(perToken);
+      expect(m.weightBytesPerDevice).toBe(WEIGHT_BYTES / (t * p));
+      expect(Number.isInteger(m.weightBytesPerDevice)).toBe(true);
+      expect(m.memoryBytesPerDevice).toBe(WEIGHT_BYTES / (t * p) + 64 * 4096 * perToken);
+      expect(m.fitSequences).toBe(
+        Math.floor((80 * GIB * 0.9 - WEIGHT_BYTES / (t * p)) / (4096 * perToken)),
+      );
+    },
+  );
 
   it('gives exact integers: t = 8 splits 137,953,296,384 weight bytes into 17,244,162,048 per device, t = 16 p = 4 into 2,155,520,256', () => {
-    expect(computeMetrics(specWith(seventyB(), { tensorParallel: 8 })).weightBytesPerDevice).toBe(17_244_162_048);
-    expect(computeMetrics(specWith(seventyB(), { tensorParallel: 16, pipelineParallel: 4 })).weightBytesPerDevice).toBe(2_155_520_256);
+    expect(computeMetrics(specWith(seventyB(), { tensorParallel: 8 })).weightBytesPerDevice).toBe(
+      17_244_162_048,
+    );
+    expect(
+      computeMetrics(specWith(seventyB(), { tensorParallel: 16, pipelineParallel: 4 }))
+        .weightBytesPerDevice,
+    ).toBe(2_155_520_256);
   });
 
   it('fits over 8 devices of 80 GiB what one device cannot hold: 358 sequences of 4,096 tokens per replica', () => {
     const one = computeMetrics(specWith(seventyB(), { span: 4096, deviceGiB: 80 }));
     expect(one.fitSequences).toBeLessThan(0);
-    const eight = computeMetrics(specWith(seventyB(), { span: 4096, deviceGiB: 80, tensorParallel: 8 }));
+    const eight = computeMetrics(
+      specWith(seventyB(), { span: 4096, deviceGiB: 80, tensorParallel: 8 }),
+    );
     // (80 GiB · 0.9 − 17,244,162,048) / (4,096 · 40,960) = (77,309,411,328 − 17,244,162,048) / 167,772,160 = 358.01…
     expect(eight.fitSequences).toBe(358);
   });
 
   it('subtracts an activation reserve per device from the usable memory', () => {
-    const m = computeMetrics(specWith(seventyB(), { span: 4096, deviceGiB: 80, tensorParallel: 8, activationReserveGiB: 4 }));
-    expect(m.fitSequences).toBe(Math.floor((80 * GIB * 0.9 - 4 * GIB - 17_244_162_048) / 167_772_160));
+    const m = computeMetrics(
+      specWith(seventyB(), {
+        span: 4096,
+        deviceGiB: 80,
+        tensorParallel: 8,
+        activationReserveGiB: 4,
+      }),
+    );
+    expect(m.fitSequences).toBe(
+      Math.floor((80 * GIB * 0.9 - 4 * GIB - 17_244_162_048) / 167_772_160),
+    );
   });
 });
 
 describe('with t = p = 1 every figure is the single-device one', () => {
   const shapes: [string, string][] = [
     ['70B-class', seventyB()],
-    ['windowed, 24 of 32 layers', JSON.stringify({ model_type: 'mistral', hidden_size: 4096, intermediate_size: 14336, num_hidden_layers: 32, num_attention_heads: 32, num_key_value_heads: 8, vocab_size: 32000, max_position_embeddings: 32768, rope_theta: 1000000, sliding_window: 4096, layer_types: [...Array(8).fill('full_attention'), ...Array(24).fill('sliding_attention')] })],
-    ['learned table with biases', JSON.stringify({ model_type: 'gpt2', n_embd: 768, n_layer: 12, n_head: 12, vocab_size: 50257, n_positions: 1024 })],
-    ['encoder-decoder', JSON.stringify({ model_type: 't5', d_model: 512, num_layers: 6, num_heads: 8, d_kv: 64, d_ff: 2048, vocab_size: 32128, n_positions: 512 })],
+    [
+      'windowed, 24 of 32 layers',
+      JSON.stringify({
+        model_type: 'mistral',
+        hidden_size: 4096,
+        intermediate_size: 14336,
+        num_hidden_layers: 32,
+        num_attention_heads: 32,
+        num_key_value_heads: 8,
+        vocab_size: 32000,
+        max_position_embeddings: 32768,
+        rope_theta: 1000000,
+        sliding_window: 4096,
+        layer_types: [...Array(8).fill('full_attention'), ...Array(24).fill('sliding_attention')],
+      }),
+    ],
+    [
+      'learned table with biases',
+      JSON.stringify({
+        model_type: 'gpt2',
+        n_embd: 768,
+        n_layer: 12,
+        n_head: 12,
+        vocab_size: 50257,
+        n_positions: 1024,
+      }),
+    ],
+    [
+      'encoder-decoder',
+      JSON.stringify({
+        model_type: 't5',
+        d_model: 512,
+        num_layers: 6,
+        num_heads: 8,
+        d_kv: 64,
+        d_ff: 2048,
+        vocab_size: 32128,
+        n_positions: 512,
+      }),
+    ],
   ];
-  it.each(shapes)('%s: devices 1, per-device figures equal weightBytes, cachePerTokenBytes, memoryBytes, and fitSequences as before', (_name, text) => {
-    for (const serving of [{}, { span: 8192, sequences: 16, deviceGiB: 40, reserve: 0.2 }]) {
-      const spec = specWith(text, serving);
-      const m = computeMetrics(spec);
-      expect(m.devices).toBe(1);
-      expect(m.kvHeadsPerDevice).toBe(spec.kvHeads);
-      expect(m.weightBytesPerDevice).toBe(m.weightBytes);
-      expect(m.weightBytes).toBe(weightBytes(spec, m.params));
-      expect(m.cachePerTokenBytesPerDevice).toBe(m.cachePerTokenBytes);
-      expect(m.memoryBytesPerDevice).toBe(m.memoryBytes);
-      // The single-device formula of the context budget, kept in memory-fit.ts.
-      expect(m.fitSequences).toBe(fitSequences(spec, m.weightBytes, m.cacheBytesAtSpan, servedSequences(spec)));
-    }
-  });
+  it.each(shapes)(
+    '%s: devices 1, per-device figures equal weightBytes, cachePerTokenBytes, memoryBytes, and fitSequences as before',
+    (_name, text) => {
+      for (const serving of [{}, { span: 8192, sequences: 16, deviceGiB: 40, reserve: 0.2 }]) {
+        const spec = specWith(text, serving);
+        const m = computeMetrics(spec);
+        expect(m.devices).toBe(1);
+        expect(m.kvHeadsPerDevice).toBe(spec.kvHeads);
+        expect(m.weightBytesPerDevice).toBe(m.weightBytes);
+        expect(m.weightBytes).toBe(weightBytes(spec, m.params));
+        expect(m.cachePerTokenBytesPerDevice).toBe(m.cachePerTokenBytes);
+        expect(m.memoryBytesPerDevice).toBe(m.memoryBytes);
+        // The single-device formula of the context budget, kept in memory-fit.ts.
+        expect(m.fitSequences).toBe(
+          fitSequences(spec, m.weightBytes, m.cacheBytesAtSpan, servedSequences(spec)),
+        );
+      }
+    },
+  );
 });
 
 describe('the busiest pipeline stage', () => {
   it('holds the full-attention layers first when windowed layers are mixed in: 8 full + 2 windowed of 10 per stage', () => {
-    const text = JSON.stringify({ model_type: 'mistral', hidden_size: 4096, intermediate_size: 14336, num_hidden_layers: 32, num_attention_heads: 32, num_key_value_heads: 8, vocab_size: 32000, max_position_embeddings: 32768, rope_theta: 1000000, sliding_window: 4096, layer_types: [...Array(8).fill('full_attention'), ...Array(24).fill('sliding_attention')] });
+    const text = JSON.stringify({
+      model_type: 'mistral',
+      hidden_size: 4096,
+      intermediate_size: 14336,
+      num_hidden_layers: 32,
+      num_attention_heads: 32,
+      num_key_value_heads: 8,
+      vocab_size: 32000,
+      max_position_embeddings: 32768,
+      rope_theta: 1000000,
+      sliding_window: 4096,
+      layer_types: [...Array(8).fill('full_attention'), ...Array(24).fill('sliding_attention')],
+    });
     const m = computeMetrics(specWith(text, { span: 32768, sequences: 1, pipelineParallel: 4 }));
     const layer = 2 * 8 * 128 * 2; // bytes per token and layer (bf16 by default)
     // ceil(32/4) = 8 layers per stage; the busiest has all 8 full layers (32,768 tokens each).
     expect(m.memoryBytesPerDevice! - m.weightBytesPerDevice!).toBe(8 * layer * 32768);
     const m3 = computeMetrics(specWith(text, { span: 32768, sequences: 1, pipelineParallel: 3 }));
     // ceil(32/3) = 11 layers: 8 full, 3 windowed at 4,096 tokens.
-    expect(m3.memoryBytesPerDevice! - m3.weightBytesPerDevice!).toBe(8 * layer * 32768 + 3 * layer * 4096);
+    expect(m3.memoryBytesPerDevice! - m3.weightBytesPerDevice!).toBe(
+      8 * layer * 32768 + 3 * layer * 4096,
+    );
   });
 });
 
@@ -150,16 +245,28 @@ describe('sharding degrees', () => {
 
 describe('layout-unshardable (METRICS.md: heads % t != 0, or kvHeads and t with neither dividing the other)', () => {
   const findings = (heads: number, kv: number, t: number) => {
-    const text = JSON.stringify({ model_type: 'llama', hidden_size: heads * 128, num_hidden_layers: 4, num_attention_heads: heads, num_key_value_heads: kv, vocab_size: 1000, max_position_embeddings: 4096, rope_theta: 10000 });
-    return specFindings(specWith(text, { tensorParallel: t }), { 'serving.tensorParallel': { key: 'serving.tensor-parallel', line: 3 } })
-      .filter((f) => f.rule === 'layout-unshardable');
+    const text = JSON.stringify({
+      model_type: 'llama',
+      hidden_size: heads * 128,
+      num_hidden_layers: 4,
+      num_attention_heads: heads,
+      num_key_value_heads: kv,
+      vocab_size: 1000,
+      max_position_embeddings: 4096,
+      rope_theta: 10000,
+    });
+    return specFindings(specWith(text, { tensorParallel: t }), {
+      'serving.tensorParallel': { key: 'serving.tensor-parallel', line: 3 },
+    }).filter((f) => f.rule === 'layout-unshardable');
   };
 
   it('blocks 12 key/value heads over 8 ranks though 8 divides the 48 heads, naming the degrees that work', () => {
     const [f] = findings(48, 12, 8);
     expect(f).toMatchObject({ severity: 'block', key: 'serving.tensor-parallel', line: 3 });
     // Divisors of 48 that 12 divides or that divide 12... 1, 2, 3, 4, 6, 12, 24, 48; not 8 or 16.
-    expect(f!.message).toBe('The tensor-parallel degree 8 (serving.tensor-parallel) cannot shard the attention: 8 and the 12 key/value heads do not divide one another; use a tensor-parallel degree of 1, 2, 3, 4, 6, 12, 24 or 48.');
+    expect(f!.message).toBe(
+      'The tensor-parallel degree 8 (serving.tensor-parallel) cannot shard the attention: 8 and the 12 key/value heads do not divide one another; use a tensor-parallel degree of 1, 2, 3, 4, 6, 12, 24 or 48.',
+    );
   });
 
   it('lets 16 ranks share 8 key/value heads (each keeps a copy) and 2 ranks split them', () => {

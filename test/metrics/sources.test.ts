@@ -6,7 +6,11 @@
 import { describe, expect, it } from 'vitest';
 import { computeMetrics } from '../../src/core/metrics/compute.js';
 import { alibiHorizon, alibiSlopes } from '../../src/core/metrics/alibi-slopes.js';
-import { ntkBase, scaleFrequencies, yarnAttentionScale } from '../../src/core/metrics/context-scaling.js';
+import {
+  ntkBase,
+  scaleFrequencies,
+  yarnAttentionScale,
+} from '../../src/core/metrics/context-scaling.js';
 import { geometricFrequencies } from '../../src/core/metrics/frequencies.js';
 import type { EncoderStack, ModelSpec } from '../../src/core/model.js';
 import { makeSpec } from './spec-fixtures.js';
@@ -20,8 +24,18 @@ describe('Vaswani et al. 2017, "Attention Is All You Need"', () => {
   const base = (): ModelSpec => {
     const encoder: EncoderStack = { layers: 6, heads: 8, kvHeads: 8, headDim: 64, ffn: 2048 };
     return makeSpec({
-      layers: 6, hidden: 512, heads: 8, kvHeads: 8, headDim: 64, ffn: 2048, vocab: 37000, tied: true, bias: true,
-      encoder, position: { kind: 'sinusoidal' }, declaredSpan: 512,
+      layers: 6,
+      hidden: 512,
+      heads: 8,
+      kvHeads: 8,
+      headDim: 64,
+      ffn: 2048,
+      vocab: 37000,
+      tied: true,
+      bias: true,
+      encoder,
+      position: { kind: 'sinusoidal' },
+      declaredSpan: 512,
     });
   };
 
@@ -39,7 +53,8 @@ describe('Vaswani et al. 2017, "Attention Is All You Need"', () => {
     expect(theta[0]).toBe(1);
     const ratio = Math.pow(10000, -2 / 512);
     // consecutive ratios agree to a few binary64 roundings
-    for (let i = 1; i < theta.length; i++) expect(Math.abs(theta[i] / theta[i - 1] / ratio - 1)).toBeLessThan(1e-13);
+    for (let i = 1; i < theta.length; i++)
+      expect(Math.abs(theta[i] / theta[i - 1] / ratio - 1)).toBeLessThan(1e-13);
   });
 
   it('params(spec) of the base model (N=6, d=512, ff=2048, h=8, shared 37,000 vocab) is 65M within 5% (Table 3)', () => {
@@ -52,8 +67,17 @@ describe('Vaswani et al. 2017, "Attention Is All You Need"', () => {
 describe('Devlin et al. 2018, BERT (§3 "Model Architecture")', () => {
   const bert = (layers: number, hidden: number, heads: number): ModelSpec =>
     makeSpec({
-      layers, hidden, heads, kvHeads: heads, headDim: hidden / heads, ffn: 4 * hidden, vocab: 30522, tied: true, bias: true,
-      position: { kind: 'learned' }, declaredSpan: 512,
+      layers,
+      hidden,
+      heads,
+      kvHeads: heads,
+      headDim: hidden / heads,
+      ffn: 4 * hidden,
+      vocab: 30522,
+      tied: true,
+      bias: true,
+      position: { kind: 'learned' },
+      declaredSpan: 512,
     });
 
   it('params(spec) is 110M for BERT-BASE and 340M for BERT-LARGE within 3% (learned table 512, vocab 30,522)', () => {
@@ -70,8 +94,17 @@ describe('Devlin et al. 2018, BERT (§3 "Model Architecture")', () => {
 describe('Brown et al. 2020, GPT-3, Table 2.1', () => {
   const gpt3 = (layers: number, hidden: number, heads: number): ModelSpec =>
     makeSpec({
-      layers, hidden, heads, kvHeads: heads, headDim: hidden / heads, ffn: 4 * hidden, vocab: 50257, tied: true, bias: true,
-      position: { kind: 'learned' }, declaredSpan: 2048,
+      layers,
+      hidden,
+      heads,
+      kvHeads: heads,
+      headDim: hidden / heads,
+      ffn: 4 * hidden,
+      vocab: 50257,
+      tied: true,
+      bias: true,
+      position: { kind: 'learned' },
+      declaredSpan: 2048,
     });
 
   it.each([
@@ -79,15 +112,22 @@ describe('Brown et al. 2020, GPT-3, Table 2.1', () => {
     ['Medium', 24, 1024, 16, 350e6],
     ['6.7B', 32, 4096, 32, 6.7e9],
     ['175B', 96, 12288, 96, 175.0e9],
-  ])('params(spec) of GPT-3 %s is the printed n_params within 3%%', (_name, layers, hidden, heads, printed) => {
-    // 3%: Table 2.1 prints two or three significant digits (rows with the printed d_model/head
-    // inconsistencies named in SOURCES.md are left out)
-    expect(relativeError(computeMetrics(gpt3(layers, hidden, heads)).params, printed)).toBeLessThan(0.03);
-  });
+  ])(
+    'params(spec) of GPT-3 %s is the printed n_params within 3%%',
+    (_name, layers, hidden, heads, printed) => {
+      // 3%: Table 2.1 prints two or three significant digits (rows with the printed d_model/head
+      // inconsistencies named in SOURCES.md are left out)
+      expect(
+        relativeError(computeMetrics(gpt3(layers, hidden, heads)).params, printed),
+      ).toBeLessThan(0.03);
+    },
+  );
 
   it('nonEmbeddingParams(spec) of 175B is 12·n_layer·d_model² = 1.739e11 within 0.5% (Kaplan et al. 2020, Eq. 2.1)', () => {
     // 0.5%: Kaplan's approximation leaves out biases and norms
-    expect(relativeError(computeMetrics(gpt3(96, 12288, 96)).nonEmbeddingParams, 1.739e11)).toBeLessThan(0.005);
+    expect(
+      relativeError(computeMetrics(gpt3(96, 12288, 96)).nonEmbeddingParams, 1.739e11),
+    ).toBeLessThan(0.005);
   });
 
   it('flopsPerToken(spec) of 175B adds the context term 2·n_layer·n_ctx·d_attn = 4.83e9 to 2N (Kaplan et al. 2020, Table 1)', () => {
@@ -104,8 +144,17 @@ describe('Touvron et al. 2023, LLaMA, Table 2', () => {
   const llamaFfn = (d: number): number => 256 * Math.ceil(Math.floor((2 * 4 * d) / 3) / 256);
   const llama = (hidden: number, heads: number, layers: number): ModelSpec =>
     makeSpec({
-      layers, hidden, heads, kvHeads: heads, headDim: hidden / heads, ffn: llamaFfn(hidden), gated: true, vocab: 32000,
-      tied: false, bias: false, declaredSpan: 2048,
+      layers,
+      hidden,
+      heads,
+      kvHeads: heads,
+      headDim: hidden / heads,
+      ffn: llamaFfn(hidden),
+      gated: true,
+      vocab: 32000,
+      tied: false,
+      bias: false,
+      declaredSpan: 2048,
     });
 
   it('the 2/3·4d rule with multiple_of = 256 gives 11008, 13824, 17920, 22016 (llama/model.py, SOURCES.md §5)', () => {
@@ -117,13 +166,18 @@ describe('Touvron et al. 2023, LLaMA, Table 2', () => {
     [5120, 40, 40, 13.0e9],
     [6656, 52, 60, 32.5e9],
     [8192, 64, 80, 65.2e9],
-  ])('params(spec) with dim %i, %i heads, %i layers is the printed size within 1%%', (hidden, heads, layers, printed) => {
-    // 1%: Table 2 prints three significant digits
-    expect(relativeError(computeMetrics(llama(hidden, heads, layers)).params, printed)).toBeLessThan(0.01);
-  });
+  ])(
+    'params(spec) with dim %i, %i heads, %i layers is the printed size within 1%%',
+    (hidden, heads, layers, printed) => {
+      // 1%: Table 2 prints three significant digits
+      expect(
+        relativeError(computeMetrics(llama(hidden, heads, layers)).params, printed),
+      ).toBeLessThan(0.01);
+    },
+  );
 });
 
-describe('Press et al. 2022, ALiBi, §3 and the authors\' code', () => {
+describe("Press et al. 2022, ALiBi, §3 and the authors' code", () => {
   it('alibiSlopes(8) is 1/2, 1/4, …, 1/256 (§3)', () => {
     expect(alibiSlopes(8)).toEqual([1, 2, 3, 4, 5, 6, 7, 8].map((j) => 2 ** -j));
   });
@@ -150,22 +204,46 @@ describe('Press et al. 2022, ALiBi, §3 and the authors\' code', () => {
 describe('Peng et al. 2023, YaRN', () => {
   it('yarnAttentionScale(8) is 0.1 ln 8 + 1 (Eq. 22); worked values for s = 2..32 (SOURCES.md §9)', () => {
     expect(yarnAttentionScale(8)).toBe(0.1 * Math.log(8) + 1);
-    const worked: [number, number][] = [[2, 1.0693], [4, 1.1386], [8, 1.2079], [16, 1.2773], [32, 1.3466]];
+    const worked: [number, number][] = [
+      [2, 1.0693],
+      [4, 1.1386],
+      [8, 1.2079],
+      [16, 1.2773],
+      [32, 1.3466],
+    ];
     // four printed decimals: absolute 5e-5
-    for (const [s, v] of worked) expect(Math.abs((yarnAttentionScale(s) as number) - v)).toBeLessThan(5e-5);
+    for (const [s, v] of worked)
+      expect(Math.abs((yarnAttentionScale(s) as number) - v)).toBeLessThan(5e-5);
   });
 
   it('ntkBase(10000, s, 128) is b·s^(|D|/(|D|-2)) (Eq. 16): 20221.3, 40889.9, 82684.6, 167198.7, 338096.9', () => {
-    const worked: [number, number][] = [[2, 20221.3], [4, 40889.9], [8, 82684.6], [16, 167198.7], [32, 338096.9]];
+    const worked: [number, number][] = [
+      [2, 20221.3],
+      [4, 40889.9],
+      [8, 82684.6],
+      [16, 167198.7],
+      [32, 338096.9],
+    ];
     // one printed decimal: absolute 0.05
-    for (const [s, v] of worked) expect(Math.abs((ntkBase(10000, s, 128) as number) - v)).toBeLessThan(0.05);
+    for (const [s, v] of worked)
+      expect(Math.abs((ntkBase(10000, s, 128) as number) - v)).toBeLessThan(0.05);
   });
 
   it('yarn ramp edges for |D| = 128, b = 10000: L = 2048 ramps over 16.13 < d < 40.21, L = 4096 over 20.94 < d < 45.03 (Eq. 18, α=1, β=32)', () => {
     const theta = geometricFrequencies(10000, 128)!;
-    for (const [L, inner, outer] of [[2048, 16.13, 40.21], [4096, 20.94, 45.03]]) {
+    for (const [L, inner, outer] of [
+      [2048, 16.13, 40.21],
+      [4096, 20.94, 45.03],
+    ]) {
       const s = 4;
-      const scaled = scaleFrequencies(theta, 10000, 128, { kind: 'yarn', factor: s, originalSpan: L, alpha: 1, beta: 32, low: 1, high: 4 }, L * s, L)!;
+      const scaled = scaleFrequencies(
+        theta,
+        10000,
+        128,
+        { kind: 'yarn', factor: s, originalSpan: L, alpha: 1, beta: 32, low: 1, high: 4 },
+        L * s,
+        L,
+      )!;
       for (let d = 0; d < 64; d++) {
         const ratio = scaled[d] / theta[d];
         // γ = 1 keeps θ; γ = 0 divides by s; in between strictly between (relative 1e-12)
@@ -183,16 +261,39 @@ describe('Peng et al. 2023, YaRN', () => {
 });
 
 describe('Chen et al. 2023, Position Interpolation', () => {
-  it('linear scaling by s = L\'/L makes the angle at m equal the unscaled angle at m·L/L\' (Eq. 4); reach is L\' = 32768 from 2048 (Table 1)', () => {
+  it("linear scaling by s = L'/L makes the angle at m equal the unscaled angle at m·L/L' (Eq. 4); reach is L' = 32768 from 2048 (Table 1)", () => {
     const spec = makeSpec({
-      hidden: 4096, heads: 32, declaredSpan: 32768,
-      position: { kind: 'rotary', base: 10000, fraction: 1, scaling: { kind: 'linear', factor: 16, originalSpan: 2048, alpha: 1, beta: 32, low: 1, high: 4 } },
+      hidden: 4096,
+      heads: 32,
+      declaredSpan: 32768,
+      position: {
+        kind: 'rotary',
+        base: 10000,
+        fraction: 1,
+        scaling: {
+          kind: 'linear',
+          factor: 16,
+          originalSpan: 2048,
+          alpha: 1,
+          beta: 32,
+          low: 1,
+          high: 4,
+        },
+      },
     });
     const theta = geometricFrequencies(10000, 128)!;
-    const scaled = scaleFrequencies(theta, 10000, 128, spec.position.kind === 'rotary' ? spec.position.scaling : null, 32768, 2048)!;
+    const scaled = scaleFrequencies(
+      theta,
+      10000,
+      128,
+      spec.position.kind === 'rotary' ? spec.position.scaling : null,
+      32768,
+      2048,
+    )!;
     const m = 30000;
     // one division each side: relative 1e-15
-    for (let i = 0; i < 64; i++) expect(Math.abs((m * scaled[i]) / (((m * 2048) / 32768) * theta[i]) - 1)).toBeLessThan(1e-15);
+    for (let i = 0; i < 64; i++)
+      expect(Math.abs((m * scaled[i]) / (((m * 2048) / 32768) * theta[i]) - 1)).toBeLessThan(1e-15);
     const metrics = computeMetrics({ ...spec, serving: { ...spec.serving, span: 4096 } });
     expect(metrics.reach).toBe(32768);
     expect(metrics.scalingCover).toBe(32768);
@@ -209,16 +310,29 @@ describe('Su et al. 2021, RoFormer', () => {
   });
 
   it('rotaryWidth: a partial rotation of 0.25 on head 128 rotates 32 dimensions, 16 pairs', () => {
-    const m = computeMetrics(makeSpec({ hidden: 1024, heads: 8, position: { kind: 'rotary', base: 10000, fraction: 0.25, scaling: null } }));
+    const m = computeMetrics(
+      makeSpec({
+        hidden: 1024,
+        heads: 8,
+        position: { kind: 'rotary', base: 10000, fraction: 0.25, scaling: null },
+      }),
+    );
     // slowest pair i = 15 of r = 32: 2π·10000^(30/32); relative 1e-12
-    expect(relativeError(m.slowestWavelength, 2 * Math.PI * Math.pow(10000, 30 / 32))).toBeLessThan(1e-12);
+    expect(relativeError(m.slowestWavelength, 2 * Math.PI * Math.pow(10000, 30 / 32))).toBeLessThan(
+      1e-12,
+    );
   });
 });
 
 describe('Men et al. 2024, "Base of RoPE Bounds Context Length" (criterion only, SOURCES.md §12)', () => {
   it('discriminationSpan(spec) is L_θ + 1 with L_θ = sup{L : B_m = Σ cos(m θ_i) >= 0 for all m <= L} (Thm 1, Eqs. 9–10)', () => {
     for (const base of [500, 2000, 10000]) {
-      const spec = makeSpec({ hidden: 1024, heads: 8, declaredSpan: 60000, position: { kind: 'rotary', base, fraction: 1, scaling: null } });
+      const spec = makeSpec({
+        hidden: 1024,
+        heads: 8,
+        declaredSpan: 60000,
+        position: { kind: 'rotary', base, fraction: 1, scaling: null },
+      });
       const theta = geometricFrequencies(base, 128)!;
       let L = 0;
       for (let m = 1; m < 60000; m++) {
@@ -235,7 +349,15 @@ describe('Men et al. 2024, "Base of RoPE Bounds Context Length" (criterion only,
 
 describe('KV cache (common practice, SOURCES.md §11) and GQA (Ainslie et al. 2023)', () => {
   const spec = (kvHeads: number): ModelSpec =>
-    makeSpec({ layers: 32, hidden: 4096, heads: 32, kvHeads, headDim: 128, dtypes: { weights: 'fp16' }, declaredSpan: 2048 });
+    makeSpec({
+      layers: 32,
+      hidden: 4096,
+      heads: 32,
+      kvHeads,
+      headDim: 128,
+      dtypes: { weights: 'fp16' },
+      declaredSpan: 2048,
+    });
 
   it('cachePerTokenBytes(spec) is 524,288 for 32 layers, 32 kv heads, head 128, fp16; 2048 tokens take 1 GiB', () => {
     const m = computeMetrics(spec(32));
@@ -244,7 +366,9 @@ describe('KV cache (common practice, SOURCES.md §11) and GQA (Ainslie et al. 20
   });
 
   it('cachePerTokenBytes(spec) shrinks by the head count H going from MHA to MQA (§2.2)', () => {
-    expect((computeMetrics(spec(1)).cachePerTokenBytes as number) * 32).toBe(computeMetrics(spec(32)).cachePerTokenBytes);
+    expect((computeMetrics(spec(1)).cachePerTokenBytes as number) * 32).toBe(
+      computeMetrics(spec(32)).cachePerTokenBytes,
+    );
   });
 });
 

@@ -10,7 +10,12 @@ type SpecOverrides = Partial<Omit<ModelSpec, 'serving' | 'dtypes'>> & {
 export function makeSpec(over: SpecOverrides = {}): ModelSpec {
   const hidden = over.hidden ?? 256;
   const heads = over.heads ?? 4;
-  const position: PositionCode = over.position ?? { kind: 'rotary', base: 10000, fraction: 1, scaling: null };
+  const position: PositionCode = over.position ?? {
+    kind: 'rotary',
+    base: 10000,
+    fraction: 1,
+    scaling: null,
+  };
   const { serving, dtypes, ...rest } = over;
   return {
     name: 'toy-model',
@@ -35,6 +40,14 @@ export function makeSpec(over: SpecOverrides = {}): ModelSpec {
     embeddingMultiplier: null,
     ...rest,
     dtypes: { weights: null, cache: null, positions: null, ...dtypes },
-    serving: { span: null, sequences: null, deviceGiB: null, reserve: null, outputTokens: null, promptTokens: null, ...serving },
+    serving: {
+      span: null,
+      sequences: null,
+      deviceGiB: null,
+      reserve: null,
+      outputTokens: null,
+      promptTokens: null,
+      ...serving,
+    },
   };
 }

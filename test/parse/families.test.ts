@@ -11,7 +11,8 @@ function inspect(name: string, overrides = {}) {
 }
 
 function rotary(spec: ModelSpec) {
-  if (spec.position.kind !== 'rotary') throw new Error(`expected a rotary code, got ${spec.position.kind}`);
+  if (spec.position.kind !== 'rotary')
+    throw new Error(`expected a rotary code, got ${spec.position.kind}`);
   return spec.position;
 }
 
@@ -27,7 +28,11 @@ describe('long-context scalings published configs ship', () => {
     expect(code.scaling?.kind).toBe('pairwise');
     expect(code.scaling?.longFactors).toHaveLength(48);
     expect(code.scaling?.factor).toBe(32);
-    expect([r.metrics.trainedSpan, r.metrics.reach, r.metrics.tunedSpan]).toEqual([4096, 131072, null]);
+    expect([r.metrics.trainedSpan, r.metrics.reach, r.metrics.tunedSpan]).toEqual([
+      4096,
+      131072,
+      null,
+    ]);
     expect(r.findings.filter((f) => f.severity === 'block')).toEqual([]);
     // Attention factor: sqrt(1 + ln 32 / ln 4096) (published implementation, after LongRoPE, Ding et al. 2024).
     expect(r.metrics.attentionScale).toBeCloseTo(Math.sqrt(1 + Math.log(32) / Math.log(4096)), 12);
@@ -36,14 +41,20 @@ describe('long-context scalings published configs ship', () => {
     expect(r.findings.filter((f) => f.rule === 'key-unread')).toEqual([]);
   });
 
-  test('pairwise scaling uses the short factors at or below the original span and the long ones past it: θ\'_i = θ_i / factor_i', () => {
+  test("pairwise scaling uses the short factors at or below the original span and the long ones past it: θ'_i = θ_i / factor_i", () => {
     const at4k = inspect('phi3-longrope.json', { span: 4096 });
     const at8k = inspect('phi3-longrope.json', { span: 8192 });
     const code = rotary(at4k.spec);
     // Fastest pair (i = 0): θ_0 = 1, so the wavelength is 2π · factor_0 of the chosen list.
-    expect(at4k.metrics.fastestWavelength).toBeCloseTo(2 * Math.PI * code.scaling!.shortFactors![0], 9);
+    expect(at4k.metrics.fastestWavelength).toBeCloseTo(
+      2 * Math.PI * code.scaling!.shortFactors![0],
+      9,
+    );
     // Slowest pair (i = 47): θ_47 = 10000^(-94/96) (Su et al. 2021, eq. 15), divided by the long factor.
-    expect(at8k.metrics.slowestWavelength).toBeCloseTo((2 * Math.PI / Math.pow(10000, -94 / 96)) * code.scaling!.longFactors![47], 3);
+    expect(at8k.metrics.slowestWavelength).toBeCloseTo(
+      ((2 * Math.PI) / Math.pow(10000, -94 / 96)) * code.scaling!.longFactors![47],
+      3,
+    );
   });
 
   test('su, the older name of longrope, reads the same; the factor lists are checked against the pairs', () => {
@@ -55,8 +66,13 @@ describe('long-context scalings published configs ship', () => {
     const r = inspect('qwen2-vl-mrope.json');
     expect(rotary(r.spec).scaling).toBeNull();
     expect(r.findings.filter((f) => f.severity !== 'info')).toEqual([]);
-    const bad = fixture('qwen2-vl-mrope.json').replace('[\n      16,\n      24,\n      24\n    ]', '[16, 24, 16]');
-    const f = readModel(bad, 'qwen2-vl.json').findings.find((x) => x.key === 'rope_scaling.mrope_section');
+    const bad = fixture('qwen2-vl-mrope.json').replace(
+      '[\n      16,\n      24,\n      24\n    ]',
+      '[16, 24, 16]',
+    );
+    const f = readModel(bad, 'qwen2-vl.json').findings.find(
+      (x) => x.key === 'rope_scaling.mrope_section',
+    );
     expect(f).toMatchObject({ rule: 'value-invalid', severity: 'block' });
     expect(f!.message).toContain('adds up to 56 pairs, but the rotary code has 64 pairs');
   });
@@ -68,7 +84,9 @@ describe('long-context scalings published configs ship', () => {
     expect(assumed?.message).toContain('taken on assumption');
     expect(plain.metrics.reach).toBe(131072);
     const tuned = inspect('llama-rotary-llama3.json', { trainedSpan: 131072 });
-    expect([tuned.metrics.trainedSpan, tuned.metrics.tunedSpan, tuned.metrics.reach]).toEqual([8192, 131072, 131072]);
+    expect([tuned.metrics.trainedSpan, tuned.metrics.tunedSpan, tuned.metrics.reach]).toEqual([
+      8192, 131072, 131072,
+    ]);
     expect(tuned.findings).toEqual([]);
   });
 });
@@ -76,16 +94,33 @@ describe('long-context scalings published configs ship', () => {
 describe('relative buckets, ALiBi and position-free families', () => {
   test('t5-encoder-decoder.json: no hard reach, bucketHorizon 128 (Raffel et al. 2020, section 2.1), and a span past n_positions does not block', () => {
     const r = inspect('t5-encoder-decoder.json', { span: 4096 });
-    expect([r.metrics.reach, r.metrics.bucketHorizon, r.metrics.headroom]).toEqual([null, 128, null]);
+    expect([r.metrics.reach, r.metrics.bucketHorizon, r.metrics.headroom]).toEqual([
+      null,
+      128,
+      null,
+    ]);
     expect(r.findings.filter((f) => f.severity === 'block')).toEqual([]);
   });
 
   test('DeBERTa-style relative_key keeps a clear finding that the code is not modelled', () => {
-    const { findings } = readModel(configText({ model_type: 'deberta-v2', hidden_size: 768, num_hidden_layers: 12, num_attention_heads: 12, vocab_size: 128100, max_position_embeddings: 512, position_embedding_type: 'relative_key' }), 'c.json');
-    expect(findings.find((f) => f.rule === 'position-code-assumed')?.message).toContain('relative position embeddings are not one of the modelled codes');
+    const { findings } = readModel(
+      configText({
+        model_type: 'deberta-v2',
+        hidden_size: 768,
+        num_hidden_layers: 12,
+        num_attention_heads: 12,
+        vocab_size: 128100,
+        max_position_embeddings: 512,
+        position_embedding_type: 'relative_key',
+      }),
+      'c.json',
+    );
+    expect(findings.find((f) => f.rule === 'position-code-assumed')?.message).toContain(
+      'relative position embeddings are not one of the modelled codes',
+    );
   });
 
-  test('bloom-176b.json: ALiBi with no maximum-positions key never blocks; params within 2% of the BLOOM paper\'s 176B', () => {
+  test("bloom-176b.json: ALiBi with no maximum-positions key never blocks; params within 2% of the BLOOM paper's 176B", () => {
     const r = inspect('bloom-176b.json');
     expect(r.spec.position).toEqual({ kind: 'alibi' });
     expect(r.findings.filter((f) => f.severity !== 'info')).toEqual([]);
@@ -93,16 +128,22 @@ describe('relative buckets, ALiBi and position-free families', () => {
     // BLOOM paper (BigScience 2022): 176B parameters; the count here is 176,247,242,752 (the paper's 176,247M: from memory).
     within(r.metrics.params, 176e9);
     // Served longer than any stated span: ALiBi has no stated span to cross.
-    expect(inspect('bloom-176b.json', { span: 8192 }).findings.filter((f) => f.severity === 'block')).toEqual([]);
+    expect(
+      inspect('bloom-176b.json', { span: 8192 }).findings.filter((f) => f.severity === 'block'),
+    ).toEqual([]);
   });
 
-  test('falcon-7b-rotary.json: no maximum-positions key, so FalconConfig\'s published default 2048 is taken and said so; rotary since alibi is false', () => {
+  test("falcon-7b-rotary.json: no maximum-positions key, so FalconConfig's published default 2048 is taken and said so; rotary since alibi is false", () => {
     const text = fixture('falcon-7b-rotary.json');
     const r = inspect('falcon-7b-rotary.json');
     expect(rotary(r.spec).base).toBe(10000);
     expect([r.spec.declaredSpan, r.spec.kvHeads, r.spec.ffn]).toEqual([2048, 1, 4 * 4544]);
     const taken = r.findings.find((f) => f.rule === 'family-default-taken');
-    expect(taken).toMatchObject({ severity: 'info', key: 'model_type', line: lineOf(text, '"model_type"') });
+    expect(taken).toMatchObject({
+      severity: 'info',
+      key: 'model_type',
+      line: lineOf(text, '"model_type"'),
+    });
     expect(taken!.message).toContain('max_position_embeddings 2048');
     expect(taken!.message).toContain('FalconConfig');
     expect(r.findings.filter((f) => f.severity !== 'info')).toEqual([]);
@@ -113,7 +154,14 @@ describe('relative buckets, ALiBi and position-free families', () => {
 
   test('mpt-7b.json: MPT keys (n_layers, n_heads, d_model, expansion_ratio, no_bias, max_seq_len, attn_config.alibi) read as a 6.7B ALiBi model (MosaicML, from memory)', () => {
     const r = inspect('mpt-7b.json');
-    expect([r.spec.layers, r.spec.heads, r.spec.hidden, r.spec.ffn, r.spec.bias, r.spec.declaredSpan]).toEqual([32, 32, 4096, 16384, false, 2048]);
+    expect([
+      r.spec.layers,
+      r.spec.heads,
+      r.spec.hidden,
+      r.spec.ffn,
+      r.spec.bias,
+      r.spec.declaredSpan,
+    ]).toEqual([32, 32, 4096, 16384, false, 2048]);
     expect(r.spec.position).toEqual({ kind: 'alibi' });
     expect(r.findings.filter((f) => f.severity !== 'info')).toEqual([]);
     // Every key of the published MPT style is either read or known to change no metric.
@@ -134,46 +182,116 @@ describe('sparse and nested configs', () => {
   test('gemma3-multimodal-sparse.json: the sparse text_config reads with Gemma3TextConfig defaults (each named), and the SigLIP tower counts 417M apart (Gemma 3 report, Table 1: 4B, vision 417M, non-embedding 3,209M)', () => {
     const text = fixture('gemma3-multimodal-sparse.json');
     const r = inspectModel(text, 'gemma3.json');
-    expect([r.spec.hidden, r.spec.layers, r.spec.heads, r.spec.kvHeads, r.spec.headDim, r.spec.vocab]).toEqual([2560, 34, 8, 4, 256, 262208]);
-    const taken = r.findings.find((f) => f.rule === 'family-default-taken' && f.key === 'text_config.model_type');
-    for (const key of ['num_attention_heads 8', 'num_key_value_heads 4', 'head_dim 256', 'vocab_size 262208', 'Gemma3TextConfig']) expect(taken!.message).toContain(key);
+    expect([
+      r.spec.hidden,
+      r.spec.layers,
+      r.spec.heads,
+      r.spec.kvHeads,
+      r.spec.headDim,
+      r.spec.vocab,
+    ]).toEqual([2560, 34, 8, 4, 256, 262208]);
+    const taken = r.findings.find(
+      (f) => f.rule === 'family-default-taken' && f.key === 'text_config.model_type',
+    );
+    for (const key of [
+      'num_attention_heads 8',
+      'num_key_value_heads 4',
+      'head_dim 256',
+      'vocab_size 262208',
+      'Gemma3TextConfig',
+    ])
+      expect(taken!.message).toContain(key);
     within(r.metrics.visionParams, 417e6);
     within(r.metrics.nonEmbeddingParams, 3209e6);
     expect(r.findings.filter((f) => f.severity === 'block')).toEqual([]);
   });
 
-  test('visionParams of a ViT-L/16 at 224 is within 2% of the ViT paper\'s 307M (Dosovitskiy et al. 2021, Table 1; the paper\'s count includes a 1000-class head)', () => {
-    within(visionParams({ hidden: 1024, layers: 24, ffn: 4096, patch: 16, image: 224, channels: 3 }), 307e6);
-    within(visionParams({ hidden: 768, layers: 12, ffn: 3072, patch: 16, image: 224, channels: 3 }), 86e6);
+  test("visionParams of a ViT-L/16 at 224 is within 2% of the ViT paper's 307M (Dosovitskiy et al. 2021, Table 1; the paper's count includes a 1000-class head)", () => {
+    within(
+      visionParams({ hidden: 1024, layers: 24, ffn: 4096, patch: 16, image: 224, channels: 3 }),
+      307e6,
+    );
+    within(
+      visionParams({ hidden: 768, layers: 12, ffn: 3072, patch: 16, image: 224, channels: 3 }),
+      86e6,
+    );
   });
 
   test('a file with only vision_config is never read as a language model', () => {
-    const text = configText({ model_type: 'llava', vision_config: { hidden_size: 1024, num_hidden_layers: 24, num_attention_heads: 16, intermediate_size: 4096, image_size: 336, patch_size: 14 } });
+    const text = configText({
+      model_type: 'llava',
+      vision_config: {
+        hidden_size: 1024,
+        num_hidden_layers: 24,
+        num_attention_heads: 16,
+        intermediate_size: 4096,
+        image_size: 336,
+        patch_size: 14,
+      },
+    });
     expect(() => readModel(text, 'c.json')).toThrow(/not a model config/);
   });
 
   test('every family default table names its published config class', () => {
     for (const [type, family] of Object.entries(FAMILY_DEFAULTS)) {
-      expect(family.source, type).toMatch(/^from the published config class [A-Z][A-Za-z0-9]+Config$/);
+      expect(family.source, type).toMatch(
+        /^from the published config class [A-Z][A-Za-z0-9]+Config$/,
+      );
       expect(Object.keys(family.values).length, type).toBeGreaterThan(0);
     }
     // LlamaConfig: 4096 wide, 11008 feed-forward, 32 layers and heads, 2048 positions, untied (from the published config class).
-    expect(FAMILY_DEFAULTS.llama.values).toMatchObject({ hidden_size: 4096, intermediate_size: 11008, num_hidden_layers: 32, max_position_embeddings: 2048, tie_word_embeddings: false });
+    expect(FAMILY_DEFAULTS.llama.values).toMatchObject({
+      hidden_size: 4096,
+      intermediate_size: 11008,
+      num_hidden_layers: 32,
+      max_position_embeddings: 2048,
+      tie_word_embeddings: false,
+    });
   });
 
   test('a key written as null keeps its meaning "not set": no family default stands in for it', () => {
-    const { spec } = readModel(configText({ model_type: 'mistral', hidden_size: 1024, num_hidden_layers: 2, num_attention_heads: 8, vocab_size: 1000, max_position_embeddings: 4096, rope_theta: 10000, sliding_window: null }), 'c.json');
+    const { spec } = readModel(
+      configText({
+        model_type: 'mistral',
+        hidden_size: 1024,
+        num_hidden_layers: 2,
+        num_attention_heads: 8,
+        vocab_size: 1000,
+        max_position_embeddings: 4096,
+        rope_theta: 10000,
+        sliding_window: null,
+      }),
+      'c.json',
+    );
     expect(spec.slidingWindow).toBeNull();
   });
 });
 
 describe('keys the reader does not honour', () => {
   test('an unknown key of the model block or of rope_scaling is reported as key-unread with its line; ordinary keys are not', () => {
-    const text = configText({ model_type: 'llama', hidden_size: 1024, num_hidden_layers: 2, num_attention_heads: 8, vocab_size: 1000, max_position_embeddings: 4096, rope_theta: 10000,
-      intermediate_size: 2048, tie_word_embeddings: true, bos_token_id: 1, eos_token_id: 2, attention_dropout: 0.0, rms_norm_eps: 1e-5, use_cache: true, torch_dtype: 'bfloat16',
-      num_memory_tokens: 16, rope_scaling: { rope_type: 'linear', factor: 2.0, extra_window: 4 } });
+    const text = configText({
+      model_type: 'llama',
+      hidden_size: 1024,
+      num_hidden_layers: 2,
+      num_attention_heads: 8,
+      vocab_size: 1000,
+      max_position_embeddings: 4096,
+      rope_theta: 10000,
+      intermediate_size: 2048,
+      tie_word_embeddings: true,
+      bos_token_id: 1,
+      eos_token_id: 2,
+      attention_dropout: 0.0,
+      rms_norm_eps: 1e-5,
+      use_cache: true,
+      torch_dtype: 'bfloat16',
+      num_memory_tokens: 16,
+      rope_scaling: { rope_type: 'linear', factor: 2.0, extra_window: 4 },
+    });
     const { findings } = readModel(text, 'c.json');
-    expect(findings.filter((f) => f.rule === 'key-unread').map((f) => [f.key, f.severity, f.line])).toEqual([
+    expect(
+      findings.filter((f) => f.rule === 'key-unread').map((f) => [f.key, f.severity, f.line]),
+    ).toEqual([
       ['num_memory_tokens', 'info', lineOf(text, '"num_memory_tokens"')],
       ['rope_scaling.extra_window', 'info', lineOf(text, '"extra_window"')],
     ]);
@@ -193,7 +311,10 @@ model:
 `;
 
   test('relative buckets with buckets and max-distance: no reach, bucketHorizon from max-distance (Raffel et al. 2020, section 2.1)', () => {
-    const text = OWN.replace('code: rotary', 'code: relative\n    buckets: 32\n    max-distance: 128');
+    const text = OWN.replace(
+      'code: rotary',
+      'code: relative\n    buckets: 32\n    max-distance: 128',
+    );
     const r = inspectModel(text, 'm.reach.yaml');
     expect(r.spec.position).toEqual({ kind: 'relative', buckets: 32, maxDistance: 128 });
     expect([r.metrics.reach, r.metrics.bucketHorizon]).toEqual([null, 128]);
@@ -203,18 +324,29 @@ model:
   test('pairwise scaling with short-factors and long-factors, and trained-span as the tuned span of a scaled code', () => {
     const ones = `[${Array(64).fill(1).join(', ')}]`;
     const twos = `[${Array(64).fill(2).join(', ')}]`;
-    const text = OWN.replace('code: rotary', `code: rotary\n    scaling: {kind: pairwise, factor: 32, original-span: 4096, short-factors: ${ones}, long-factors: ${twos}}`)
-      .replace('declared-span: 131072', 'declared-span: 131072\n  trained-span: 131072');
+    const text = OWN.replace(
+      'code: rotary',
+      `code: rotary\n    scaling: {kind: pairwise, factor: 32, original-span: 4096, short-factors: ${ones}, long-factors: ${twos}}`,
+    ).replace('declared-span: 131072', 'declared-span: 131072\n  trained-span: 131072');
     const r = inspectModel(text, 'm.reach.yaml');
-    expect(rotary(r.spec).scaling).toMatchObject({ kind: 'pairwise', shortFactors: Array(64).fill(1), longFactors: Array(64).fill(2) });
-    expect([r.metrics.trainedSpan, r.metrics.tunedSpan, r.metrics.reach]).toEqual([4096, 131072, 131072]);
+    expect(rotary(r.spec).scaling).toMatchObject({
+      kind: 'pairwise',
+      shortFactors: Array(64).fill(1),
+      longFactors: Array(64).fill(2),
+    });
+    expect([r.metrics.trainedSpan, r.metrics.tunedSpan, r.metrics.reach]).toEqual([
+      4096, 131072, 131072,
+    ]);
     // Past the original span every pair is divided by its long factor, 2: the fastest wavelength is 2π · 2.
     expect(r.metrics.fastestWavelength).toBeCloseTo(4 * Math.PI, 9);
     expect(r.findings.filter((f) => f.severity === 'block')).toEqual([]);
   });
 
   test('pairwise factor lists of the wrong length are reported against the pairs (64 for head 128)', () => {
-    const text = OWN.replace('code: rotary', 'code: rotary\n    scaling: {kind: pairwise, factor: 32, original-span: 4096, short-factors: [1, 1], long-factors: [2, 2]}');
+    const text = OWN.replace(
+      'code: rotary',
+      'code: rotary\n    scaling: {kind: pairwise, factor: 32, original-span: 4096, short-factors: [1, 1], long-factors: [2, 2]}',
+    );
     const r = inspectModel(text, 'm.reach.yaml');
     expect(r.findings.filter((f) => f.rule === 'value-invalid').map((f) => f.message)).toEqual([
       expect.stringContaining('number 2, but the rotary code has 64 pairs'),

@@ -1,5 +1,10 @@
 import { describe, expect, test } from 'vitest';
-import { PointerError, formatPointer, parsePointer, resolvePointer } from '../../src/core/parse/json-pointer.js';
+import {
+  PointerError,
+  formatPointer,
+  parsePointer,
+  resolvePointer,
+} from '../../src/core/parse/json-pointer.js';
 
 // RFC 6901 (2013), section 5: the example document and what each pointer evaluates to.
 const RFC_DOCUMENT = JSON.parse(`{
@@ -57,13 +62,19 @@ function pointerError(run: () => unknown): PointerError {
 }
 
 describe('resolvePointer(root, pointer)', () => {
-  test.each(RFC_SECTION_5)('resolvePointer(RFC 6901 example, %j) is the value RFC 6901 section 5 gives', (pointer, expected) => {
-    expect(resolvePointer(RFC_DOCUMENT, pointer).value).toEqual(expected);
-  });
+  test.each(RFC_SECTION_5)(
+    'resolvePointer(RFC 6901 example, %j) is the value RFC 6901 section 5 gives',
+    (pointer, expected) => {
+      expect(resolvePointer(RFC_DOCUMENT, pointer).value).toEqual(expected);
+    },
+  );
 
-  test.each(RFC_SECTION_6)('resolvePointer(RFC 6901 example, %j) reads the URI-fragment form of section 6', (pointer, expected) => {
-    expect(resolvePointer(RFC_DOCUMENT, pointer).value).toEqual(expected);
-  });
+  test.each(RFC_SECTION_6)(
+    'resolvePointer(RFC 6901 example, %j) reads the URI-fragment form of section 6',
+    (pointer, expected) => {
+      expect(resolvePointer(RFC_DOCUMENT, pointer).value).toEqual(expected);
+    },
+  );
 
   test('resolvePointer returns the document path, list indexes as numbers', () => {
     expect(resolvePointer(RFC_DOCUMENT, '/foo/1').path).toEqual(['foo', 1]);
@@ -75,12 +86,18 @@ describe('resolvePointer(root, pointer)', () => {
     const error = pointerError(() => resolvePointer(root, '/model/txet/layers'));
     expect(error.resolved).toBe('/model');
     expect(error.resolvedPath).toEqual(['model']);
-    expect(error.message).toBe('pointer "/model/txet/layers" stops at "/model": no key "txet" there (keys: "text")');
+    expect(error.message).toBe(
+      'pointer "/model/txet/layers" stops at "/model": no key "txet" there (keys: "text")',
+    );
   });
 
   test('resolvePointer refuses an index past the end, a non-index and "-" in a list', () => {
-    expect(pointerError(() => resolvePointer(RFC_DOCUMENT, '/foo/2')).reason).toContain('index 2 is past the end of a list of 2');
-    expect(pointerError(() => resolvePointer(RFC_DOCUMENT, '/foo/01')).reason).toContain('is not an index');
+    expect(pointerError(() => resolvePointer(RFC_DOCUMENT, '/foo/2')).reason).toContain(
+      'index 2 is past the end of a list of 2',
+    );
+    expect(pointerError(() => resolvePointer(RFC_DOCUMENT, '/foo/01')).reason).toContain(
+      'is not an index',
+    );
     expect(pointerError(() => resolvePointer(RFC_DOCUMENT, '/foo/-')).reason).toContain('"-"');
   });
 
@@ -93,8 +110,12 @@ describe('resolvePointer(root, pointer)', () => {
   test('resolvePointer follows own keys only, never inherited ones', () => {
     const root = Object.create(null);
     root.a = 1;
-    expect(pointerError(() => resolvePointer({ a: 1 }, '/toString')).reason).toContain('no key "toString"');
-    expect(pointerError(() => resolvePointer(root, '/__proto__')).reason).toContain('no key "__proto__"');
+    expect(pointerError(() => resolvePointer({ a: 1 }, '/toString')).reason).toContain(
+      'no key "toString"',
+    );
+    expect(pointerError(() => resolvePointer(root, '/__proto__')).reason).toContain(
+      'no key "__proto__"',
+    );
   });
 });
 
@@ -105,18 +126,26 @@ describe('parsePointer(pointer) and formatPointer(tokens)', () => {
   });
 
   test('parsePointer refuses a pointer without a leading "/"', () => {
-    expect(pointerError(() => parsePointer('model')).reason).toBe('must start with "/" (for example "/model")');
+    expect(pointerError(() => parsePointer('model')).reason).toBe(
+      'must start with "/" (for example "/model")',
+    );
   });
 
-  test.each([['/a~'], ['/a~2b']])('parsePointer(%j) refuses "~" not followed by 0 or 1', (pointer) => {
-    expect(pointerError(() => parsePointer(pointer)).reason).toContain('"~" not followed by 0 or 1');
-  });
+  test.each([['/a~'], ['/a~2b']])(
+    'parsePointer(%j) refuses "~" not followed by 0 or 1',
+    (pointer) => {
+      expect(pointerError(() => parsePointer(pointer)).reason).toContain(
+        '"~" not followed by 0 or 1',
+      );
+    },
+  );
 
   test('parsePointer refuses a malformed percent escape in the fragment form', () => {
     expect(pointerError(() => parsePointer('#/%zz')).reason).toContain('% escape');
   });
 
   test('formatPointer(parsePointer(p)) is p for every pointer of RFC 6901 section 5', () => {
-    for (const [pointer] of RFC_SECTION_5) expect(formatPointer(parsePointer(pointer))).toBe(pointer);
+    for (const [pointer] of RFC_SECTION_5)
+      expect(formatPointer(parsePointer(pointer))).toBe(pointer);
   });
 });

@@ -14,8 +14,20 @@ describe('readModel(own dialect) experts, latent attention and layer patterns', 
   test('own-experts-latent.reach.yaml states what the DeepSeek-V2-Lite config states, and counts the same', () => {
     const own = read('own-experts-latent.reach.yaml');
     expect(own.all).toEqual([]);
-    expect(own.spec.experts).toEqual({ total: 64, active: 6, width: 1408, shared: 2, denseLayers: 1 });
-    expect(own.spec.latent).toEqual({ kvRank: 512, qRank: null, ropeDim: 64, nopeDim: 128, valueDim: 128 });
+    expect(own.spec.experts).toEqual({
+      total: 64,
+      active: 6,
+      width: 1408,
+      shared: 2,
+      denseLayers: 1,
+    });
+    expect(own.spec.latent).toEqual({
+      kvRank: 512,
+      qRank: null,
+      ropeDim: 64,
+      nopeDim: 128,
+      valueDim: 128,
+    });
     expect(own.locations['latent.kvRank'].key).toBe('model.latent-attention.kv-rank');
     // Same shapes as the checkpoint-style fixture (Liu et al. 2024, DeepSeek-V2: 15.7B total).
     const checkpoint = read('deepseek-v2-lite-latent.json');
@@ -33,18 +45,29 @@ describe('readModel(own dialect) experts, latent attention and layer patterns', 
     const checkpoint = read('gemma3-local-global.json');
     expect(own.spec.layerTypes).toEqual(checkpoint.spec.layerTypes);
     expect(parameterBreakdown(own.spec)!.params).toBe(parameterBreakdown(checkpoint.spec)!.params);
-    expect(computeMetrics(own.spec).cacheBytesAtSpan).toBe(computeMetrics(checkpoint.spec).cacheBytesAtSpan);
+    expect(computeMetrics(own.spec).cacheBytesAtSpan).toBe(
+      computeMetrics(checkpoint.spec).cacheBytesAtSpan,
+    );
   });
 
   test('a sliding kind without a sliding-window block is a finding on the window', () => {
-    const text = fixture('own-layer-pattern.reach.yaml').replace('  sliding-window:\n    size: 1024\n', '');
+    const text = fixture('own-layer-pattern.reach.yaml').replace(
+      '  sliding-window:\n    size: 1024\n',
+      '',
+    );
     const r = readModel(text, 'm.reach.yaml');
-    expect(r.findings.map((f) => [f.rule, f.key])).toContainEqual(['value-invalid', 'model.sliding-window']);
+    expect(r.findings.map((f) => [f.rule, f.key])).toContainEqual([
+      'value-invalid',
+      'model.sliding-window',
+    ]);
   });
 
   test('a chunked kind reads chunked-attention; position-free layers are listed', () => {
     const text = fixture('own-layer-pattern.reach.yaml')
-      .replace('kinds: [sliding, sliding, sliding, sliding, sliding, full]', 'kinds: [chunked, chunked, chunked, full]\n    position-free: [3, 7]')
+      .replace(
+        'kinds: [sliding, sliding, sliding, sliding, sliding, full]',
+        'kinds: [chunked, chunked, chunked, full]\n    position-free: [3, 7]',
+      )
       .replace('  sliding-window:\n    size: 1024\n', '  chunked-attention:\n    size: 8192\n');
     const r = readModel(text, 'm.reach.yaml');
     expect(r.findings).toEqual([]);
@@ -52,19 +75,30 @@ describe('readModel(own dialect) experts, latent attention and layer patterns', 
     expect(r.spec.positionFreeLayers).toEqual([3, 7]);
     const kinds = computeMetrics(r.spec).layerKinds!;
     expect(kinds.map((k) => [k.attention, k.positionCode, k.layers])).toEqual([
-      ['chunked', 'rotary', 20], ['full', 'none', 2], ['full', 'rotary', 4],
+      ['chunked', 'rotary', 20],
+      ['full', 'none', 2],
+      ['full', 'rotary', 4],
     ]);
   });
 
   test('encoder-only: true gives no decoding cache', () => {
-    const text = fixture('own-minimal.reach.json').replace('"declared-span": 2048', '"declared-span": 2048, "encoder-only": true');
+    const text = fixture('own-minimal.reach.json').replace(
+      '"declared-span": 2048',
+      '"declared-span": 2048, "encoder-only": true',
+    );
     const m = computeMetrics(readModel(text, 'm.reach.json').spec);
     expect(m.cachePerTokenBytes).toBe(0);
   });
 
   test('local-base on a non-rotary code has no effect and says so', () => {
-    const text = fixture('own-minimal.reach.json').replace('{ "code": "rotary" }', '{ "code": "learned", "local-base": 10000 }');
+    const text = fixture('own-minimal.reach.json').replace(
+      '{ "code": "rotary" }',
+      '{ "code": "learned", "local-base": 10000 }',
+    );
     const r = readModel(text, 'm.reach.json');
-    expect(r.findings.map((f) => [f.rule, f.key])).toContainEqual(['key-ignored', 'model.position.local-base']);
+    expect(r.findings.map((f) => [f.rule, f.key])).toContainEqual([
+      'key-ignored',
+      'model.position.local-base',
+    ]);
   });
 });

@@ -1,7 +1,12 @@
 import { describe, expect, test } from 'vitest';
 import { ReadError } from '../../src/core/parse/errors.js';
 import {
-  FORBIDDEN_KEYS, MAX_ALIASES, MAX_NESTING, MAX_TEXT_LENGTH, decodeText, parseSource,
+  FORBIDDEN_KEYS,
+  MAX_ALIASES,
+  MAX_NESTING,
+  MAX_TEXT_LENGTH,
+  decodeText,
+  parseSource,
 } from '../../src/core/parse/source.js';
 import { lineOf, readError } from './helpers.js';
 
@@ -45,8 +50,12 @@ describe('parseSource(text, file) lines and literals', () => {
     const doc = parseSource(YAML_TEXT, 'model.yaml');
     expect(doc.lineOf(['format'])).toBe(lineOf(YAML_TEXT, 'format:'));
     expect(doc.lineOf(['model', 'layers'])).toBe(lineOf(YAML_TEXT, 'layers:'));
-    expect(doc.lineOf(['model', 'position', 'scaling', 'kind'])).toBe(lineOf(YAML_TEXT, 'kind: yarn'));
-    expect(doc.lineOf(['model', 'position', 'scaling', 'factor'])).toBe(lineOf(YAML_TEXT, 'factor: 4'));
+    expect(doc.lineOf(['model', 'position', 'scaling', 'kind'])).toBe(
+      lineOf(YAML_TEXT, 'kind: yarn'),
+    );
+    expect(doc.lineOf(['model', 'position', 'scaling', 'factor'])).toBe(
+      lineOf(YAML_TEXT, 'factor: 4'),
+    );
     expect(doc.lineOf(['model', 'list', 1])).toBe(lineOf(YAML_TEXT, '- 2'));
   });
 
@@ -71,7 +80,11 @@ describe('parseSource(text, file) lines and literals', () => {
     const yaml = parseSource(YAML_TEXT, 'model.yaml').value;
     expect(JSON.parse(JSON.stringify(yaml))).toEqual({
       format: 'context-reach-model/1',
-      model: { layers: 32, position: { code: 'rotary', scaling: { kind: 'yarn', factor: 4 } }, list: [1, 2] },
+      model: {
+        layers: 32,
+        position: { code: 'rotary', scaling: { kind: 'yarn', factor: 4 } },
+        list: [1, 2],
+      },
     });
   });
 
@@ -124,18 +137,24 @@ describe('parseSource(text, file) errors', () => {
     ['single quotes', "{\n  'a': 1\n}\n", 2],
     ['text after the document', '{"a": 1}\n{"b": 2}\n', 2],
     ['an unclosed mapping', '{\n  "a": 1\n', 3],
-  ])('parseSource(text, "x.json") refuses %s, which YAML would read but JSON loaders refuse', (_, text, line) => {
-    const error = readError(() => parseSource(text, 'config.json'));
-    expect(error.reason).toMatch(/^is not valid JSON: /);
-    expect(error.line).toBe(line);
-  });
+  ])(
+    'parseSource(text, "x.json") refuses %s, which YAML would read but JSON loaders refuse',
+    (_, text, line) => {
+      const error = readError(() => parseSource(text, 'config.json'));
+      expect(error.reason).toMatch(/^is not valid JSON: /);
+      expect(error.line).toBe(line);
+    },
+  );
 
   test('parseSource(text, "x.yaml") reads JSON-like text as YAML flow style, trailing comma included', () => {
     expect(parseSource('{"a": 1,}', 'config.yaml').value.a).toBe(1);
   });
 
   test('parseSource(text, "x.json") reads bare NaN, Infinity and -Infinity as numbers, as Python\'s json module writes and reads them', () => {
-    const v = parseSource('{"a": NaN, "b": Infinity, "c": -Infinity, "d": "NaN"}', 'config.json').value;
+    const v = parseSource(
+      '{"a": NaN, "b": Infinity, "c": -Infinity, "d": "NaN"}',
+      'config.json',
+    ).value;
     expect(Number.isNaN(v.a)).toBe(true);
     expect([v.b, v.c, v.d]).toEqual([Infinity, -Infinity, 'NaN']);
   });
@@ -187,9 +206,14 @@ describe('parseSource(text, file) errors', () => {
     expect(error.reason).toBe(`top level is ${shown}; expected a mapping of keys`);
   });
 
-  test.each([[''], ['# only a comment\n'], ['~'], ['null']])('parseSource(%j) throws: an empty file holds no mapping', (text) => {
-    expect(readError(() => parseSource(text, 'f.yaml')).reason).toBe('is empty; expected a mapping of keys');
-  });
+  test.each([[''], ['# only a comment\n'], ['~'], ['null']])(
+    'parseSource(%j) throws: an empty file holds no mapping',
+    (text) => {
+      expect(readError(() => parseSource(text, 'f.yaml')).reason).toBe(
+        'is empty; expected a mapping of keys',
+      );
+    },
+  );
 
   test('parseSource refuses a stream of several YAML documents', () => {
     const error = readError(() => parseSource('a: 1\n---\nb: 2\n', 'f.yaml'));
@@ -203,31 +227,45 @@ describe('parseSource(text, file) errors', () => {
   });
 
   test('parseSource refuses mappings and lists used as keys', () => {
-    expect(readError(() => parseSource('? [a, b]\n: 1\n', 'f.yaml')).reason).toContain('keys must be plain text');
+    expect(readError(() => parseSource('? [a, b]\n: 1\n', 'f.yaml')).reason).toContain(
+      'keys must be plain text',
+    );
   });
 });
 
 describe('parseSource(text, file) against untrusted text', () => {
-  test.each(FORBIDDEN_KEYS.map((k) => [k]))('parseSource refuses the key %s in JSON, and no prototype changes', (key) => {
-    const text = `{"a": 1, "nested": {"${key}": {"polluted": true}}}`;
-    const error = readError(() => parseSource(text, 'evil.json'));
-    expect(error.reason).toContain(`"${key}"`);
-    expect(error.key).toBe(`nested.${key}`);
-    expect(({} as Record<string, unknown>).polluted).toBeUndefined();
-    expect(Object.prototype).not.toHaveProperty('polluted');
-  });
+  test.each(FORBIDDEN_KEYS.map((k) => [k]))(
+    'parseSource refuses the key %s in JSON, and no prototype changes',
+    (key) => {
+      const text = `{"a": 1, "nested": {"${key}": {"polluted": true}}}`;
+      const error = readError(() => parseSource(text, 'evil.json'));
+      expect(error.reason).toContain(`"${key}"`);
+      expect(error.key).toBe(`nested.${key}`);
+      expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+      expect(Object.prototype).not.toHaveProperty('polluted');
+    },
+  );
 
   test('parseSource refuses __proto__ as a YAML key, quoted or plain, and no prototype changes', () => {
-    for (const text of ['__proto__:\n  polluted: yes\n', '"__proto__": {polluted: true}\n', 'a:\n  - {__proto__: {polluted: 1}}\n']) {
+    for (const text of [
+      '__proto__:\n  polluted: yes\n',
+      '"__proto__": {polluted: true}\n',
+      'a:\n  - {__proto__: {polluted: 1}}\n',
+    ]) {
       expect(readError(() => parseSource(text, 'evil.yaml')).reason).toContain('__proto__');
     }
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
   });
 
   test('parseSource expands a few aliases like YAML says', () => {
-    const v = parseSource('base: &b {heads: 8, layers: 6}\nencoder: *b\ndecoder: *b\n', 'f.yaml').value;
+    const v = parseSource(
+      'base: &b {heads: 8, layers: 6}\nencoder: *b\ndecoder: *b\n',
+      'f.yaml',
+    ).value;
     expect(JSON.parse(JSON.stringify(v))).toEqual({
-      base: { heads: 8, layers: 6 }, encoder: { heads: 8, layers: 6 }, decoder: { heads: 8, layers: 6 },
+      base: { heads: 8, layers: 6 },
+      encoder: { heads: 8, layers: 6 },
+      decoder: { heads: 8, layers: 6 },
     });
   });
 
@@ -250,7 +288,9 @@ describe('parseSource(text, file) against untrusted text', () => {
     // 60 aliases (under the alias limit) of a 2,000-item list would add 120,000 values.
     const big = `[${Array(2_000).fill('1').join(', ')}]`;
     const text = `a: &a ${big}\nb: [${Array(60).fill('*a').join(', ')}]\n`;
-    expect(readError(() => parseSource(text, 'wide.yaml')).reason).toContain('aliases expand to more than 100000 values');
+    expect(readError(() => parseSource(text, 'wide.yaml')).reason).toContain(
+      'aliases expand to more than 100000 values',
+    );
   });
 
   test('parseSource refuses an alias inside the value it names', () => {
@@ -288,7 +328,9 @@ describe('parseSource(text, file) against untrusted text', () => {
   test('parseSource refuses nesting that only aliases make too deep', () => {
     const inner = `${'['.repeat(200)}${']'.repeat(200)}`;
     const text = `a: &a ${inner}\nb: &b ${'['.repeat(100)}*a${']'.repeat(100)}\n`;
-    expect(readError(() => parseSource(text, 'alias-deep.yaml')).reason).toContain('once aliases are expanded');
+    expect(readError(() => parseSource(text, 'alias-deep.yaml')).reason).toContain(
+      'once aliases are expanded',
+    );
   });
 
   test('parseSource drops a leading byte-order mark (U+FEFF)', () => {
@@ -315,7 +357,9 @@ describe('parseSource(text, file) against untrusted text', () => {
 
   test(`parseSource refuses text longer than ${MAX_TEXT_LENGTH} characters`, () => {
     const text = `a: "${'x'.repeat(MAX_TEXT_LENGTH)}"\n`;
-    expect(readError(() => parseSource(text, 'huge.yaml')).reason).toContain(`limited to ${MAX_TEXT_LENGTH}`);
+    expect(readError(() => parseSource(text, 'huge.yaml')).reason).toContain(
+      `limited to ${MAX_TEXT_LENGTH}`,
+    );
   });
 });
 
@@ -346,7 +390,9 @@ describe('decodeText(bytes, path)', () => {
   });
 
   test('decodeText refuses UTF-16 with a byte-order mark (FF FE)', () => {
-    const error = readError(() => decodeText(new Uint8Array([0xff, 0xfe, 0x61, 0x00]), 'utf16.json'));
+    const error = readError(() =>
+      decodeText(new Uint8Array([0xff, 0xfe, 0x61, 0x00]), 'utf16.json'),
+    );
     expect(error.reason).toContain('UTF-16');
   });
 
@@ -358,7 +404,9 @@ describe('decodeText(bytes, path)', () => {
   });
 
   test('decodeText refuses binary data (a PNG signature: 89 50 4E 47 0D 0A 1A 0A, then NULs)', () => {
-    const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d]);
+    const png = new Uint8Array([
+      0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d,
+    ]);
     expect(() => decodeText(png, 'image.json')).toThrow(ReadError);
   });
 });

@@ -22,7 +22,11 @@ describe('editDistance(a, b)', () => {
   });
 
   test('is symmetric', () => {
-    for (const [a, b] of [['memoryBytes', 'memorybites'], ['span-past-reach', 'span-past-rech'], ['x', 'yz']]) {
+    for (const [a, b] of [
+      ['memoryBytes', 'memorybites'],
+      ['span-past-reach', 'span-past-rech'],
+      ['x', 'yz'],
+    ]) {
       expect(editDistance(a, b)).toBe(editDistance(b, a));
     }
   });

@@ -1,12 +1,19 @@
 import { matchesGlob } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import {
-  DEFAULT_POLICY, isModelConfig, matchingOverrides, parsePolicy, resolvePolicy, ruleLevel, servingPatchOf,
+  DEFAULT_POLICY,
+  isModelConfig,
+  matchingOverrides,
+  parsePolicy,
+  resolvePolicy,
+  ruleLevel,
+  servingPatchOf,
 } from '../../src/core/policy/index.js';
 
 const FILE = '.github/context-reach.yml';
 
-const POLICY = parsePolicy(`limits:
+const POLICY = parsePolicy(
+  `limits:
   headroom: {min: 0}
   memoryBytes: {max: 80000000000, severity: warn}
   params: {max-increase-pct: 5}
@@ -29,11 +36,14 @@ overrides:
       headroom: {min: -1024}
 standing: block
 waiver-label: reach-waiver
-`, FILE);
+`,
+  FILE,
+);
 
 describe('resolvePolicy(policy, filePath)', () => {
   test('gives tensor- and pipeline-parallel degrees, an activation reserve and a quantized weight format, overridden per glob, with their lines', () => {
-    const policy = parsePolicy(`serving:
+    const policy = parsePolicy(
+      `serving:
   device-memory-gib: 80
   activation-reserve-gib: 2
   tensor-parallel: 2
@@ -44,18 +54,38 @@ limits:
 overrides:
   - files: ["models/big/**"]
     serving: {tensor-parallel: 8, pipeline-parallel: 2}
-`, FILE);
+`,
+      FILE,
+    );
     const small = resolvePolicy(policy, 'models/small/config.json');
-    expect(small.serving).toEqual({ deviceGiB: 80, activationReserveGiB: 2, tensorParallel: 2, weights: 'int4', weightGroupSize: 128 });
+    expect(small.serving).toEqual({
+      deviceGiB: 80,
+      activationReserveGiB: 2,
+      tensorParallel: 2,
+      weights: 'int4',
+      weightGroupSize: 128,
+    });
     expect(small.limits.memoryBytesPerDevice).toEqual({ max: 7e10, severity: 'block' });
     const big = resolvePolicy(policy, 'models/big/config.json');
-    expect(big.serving).toMatchObject({ tensorParallel: 8, pipelineParallel: 2, activationReserveGiB: 2 });
-    expect(big.origins['serving.tensorParallel']).toEqual({ key: 'overrides[0].serving.tensor-parallel', line: 11 });
-    expect(small.origins['serving.weightGroupSize']).toEqual({ key: 'serving.weight-group-size', line: 6 });
+    expect(big.serving).toMatchObject({
+      tensorParallel: 8,
+      pipelineParallel: 2,
+      activationReserveGiB: 2,
+    });
+    expect(big.origins['serving.tensorParallel']).toEqual({
+      key: 'overrides[0].serving.tensor-parallel',
+      line: 11,
+    });
+    expect(small.origins['serving.weightGroupSize']).toEqual({
+      key: 'serving.weight-group-size',
+      line: 6,
+    });
   });
 
   test('refuses a tensor-parallel degree of 0, naming the key and line', () => {
-    expect(() => parsePolicy('serving:\n  tensor-parallel: 0\n', FILE)).toThrow('.github/context-reach.yml:2: serving.tensor-parallel: is 0; expected a number at least 1');
+    expect(() => parsePolicy('serving:\n  tensor-parallel: 0\n', FILE)).toThrow(
+      '.github/context-reach.yml:2: serving.tensor-parallel: is 0; expected a number at least 1',
+    );
   });
 
   test('a file no override matches gets the top level', () => {
@@ -80,20 +110,33 @@ overrides:
     });
     expect(resolved.serving).toEqual({ span: 65536, deviceGiB: 40 });
     expect({ ...resolved.rules }).toEqual({ 'pairs-blurred': 'off', 'span-past-reach': 'warn' });
-    expect(resolved.origins['serving.span']).toEqual({ key: 'overrides[0].serving.span', line: 12 });
-    expect(resolved.origins['serving.deviceGiB']).toEqual({ key: 'serving.device-memory-gib', line: 7 });
+    expect(resolved.origins['serving.span']).toEqual({
+      key: 'overrides[0].serving.span',
+      line: 12,
+    });
+    expect(resolved.origins['serving.deviceGiB']).toEqual({
+      key: 'serving.device-memory-gib',
+      line: 7,
+    });
   });
 
   test('later overrides win key by key over earlier ones', () => {
     const resolved = resolvePolicy(POLICY, 'models/experimental/long/config.json');
     expect(resolved.limits.headroom).toEqual({ min: -1024, severity: 'info' });
     expect(resolved.serving).toEqual({ span: 131072, sequences: 2, deviceGiB: 40 });
-    expect(resolved.origins['limits.headroom']).toEqual({ key: 'overrides[1].limits.headroom', line: 21 });
+    expect(resolved.origins['limits.headroom']).toEqual({
+      key: 'overrides[1].limits.headroom',
+      line: 21,
+    });
     expect(matchingOverrides(POLICY, 'models/experimental/long/config.json')).toHaveLength(2);
   });
 
-  test('limits come out in the metric contract\'s order, whatever the file\'s order', () => {
-    expect(Object.keys(resolvePolicy(POLICY, 'x.json').limits)).toEqual(['headroom', 'params', 'memoryBytes']);
+  test("limits come out in the metric contract's order, whatever the file's order", () => {
+    expect(Object.keys(resolvePolicy(POLICY, 'x.json').limits)).toEqual([
+      'headroom',
+      'params',
+      'memoryBytes',
+    ]);
   });
 
   test('the built-in policy has no limits, no rule changes and reports standing findings', () => {
@@ -112,7 +155,7 @@ overrides:
 });
 
 describe('ruleLevel(filePolicy, ruleId, ownSeverity)', () => {
-  test('is the policy\'s level where it sets one, the rule\'s own severity otherwise', () => {
+  test("is the policy's level where it sets one, the rule's own severity otherwise", () => {
     const resolved = resolvePolicy(POLICY, 'models/experimental/a.json');
     expect(ruleLevel(resolved, 'pairs-blurred', 'warn')).toBe('off');
     expect(ruleLevel(resolved, 'frequencies-changed', 'warn')).toBe('warn');
@@ -127,13 +170,31 @@ describe('ruleLevel(filePolicy, ruleId, ownSeverity)', () => {
 });
 
 describe('servingPatchOf(block)', () => {
-  test('turns the file\'s kebab-case keys into ServingPatch fields and leaves absent keys out', () => {
-    expect(servingPatchOf({
-      span: 1, sequences: 2, 'device-memory-gib': 3, reserve: 0.2, weights: 'int4', cache: 'fp8', positions: 'bf16',
-      'output-tokens': 4, 'prompt-tokens': 5, 'trained-span': 6,
-    })).toEqual({
-      span: 1, sequences: 2, deviceGiB: 3, reserve: 0.2, weights: 'int4', cache: 'fp8', positions: 'bf16',
-      outputTokens: 4, promptTokens: 5, trainedSpan: 6,
+  test("turns the file's kebab-case keys into ServingPatch fields and leaves absent keys out", () => {
+    expect(
+      servingPatchOf({
+        span: 1,
+        sequences: 2,
+        'device-memory-gib': 3,
+        reserve: 0.2,
+        weights: 'int4',
+        cache: 'fp8',
+        positions: 'bf16',
+        'output-tokens': 4,
+        'prompt-tokens': 5,
+        'trained-span': 6,
+      }),
+    ).toEqual({
+      span: 1,
+      sequences: 2,
+      deviceGiB: 3,
+      reserve: 0.2,
+      weights: 'int4',
+      cache: 'fp8',
+      positions: 'bf16',
+      outputTokens: 4,
+      promptTokens: 5,
+      trainedSpan: 6,
     });
     expect(servingPatchOf({})).toEqual({});
     expect(Object.keys(servingPatchOf({ reserve: 0 }))).toEqual(['reserve']);
@@ -171,7 +232,7 @@ describe('isModelConfig(policy, path)', () => {
     expect(isModelConfig(DEFAULT_POLICY, '.models/config.json')).toBe(true);
   });
 
-  test('a policy\'s files and exclude replace the built-in lists', () => {
+  test("a policy's files and exclude replace the built-in lists", () => {
     const policy = parsePolicy('files: ["zoo/**/*.json"]\nexclude: ["zoo/old/**"]\n', FILE);
     expect(isModelConfig(policy, 'zoo/a/config.json')).toBe(true);
     expect(isModelConfig(policy, 'zoo/old/config.json')).toBe(false);

@@ -5,10 +5,18 @@ import { METRIC_PATHS } from '../../src/core/compare/metric-path.js';
 import { FLOAT_FORMATS, STORAGE_DTYPES } from '../../src/core/model.js';
 import { PRECISION_METRICS, SCALAR_METRICS } from '../../src/core/metrics/types.js';
 import { RULES } from '../../src/core/rules/catalog.js';
-import { DEFAULT_EXCLUDE, DEFAULT_FILES, POLICY_SCHEMA, parsePolicy, servingPatchOf } from '../../src/core/policy/index.js';
+import {
+  DEFAULT_EXCLUDE,
+  DEFAULT_FILES,
+  POLICY_SCHEMA,
+  parsePolicy,
+  servingPatchOf,
+} from '../../src/core/policy/index.js';
 
 type Schema = Record<string, any>;
-const shipped = JSON.parse(readFileSync(new URL('../../schema/policy.schema.json', import.meta.url), 'utf8')) as Schema;
+const shipped = JSON.parse(
+  readFileSync(new URL('../../schema/policy.schema.json', import.meta.url), 'utf8'),
+) as Schema;
 const definitions = shipped.definitions as Record<string, Schema>;
 
 describe('schema/policy.schema.json', () => {
@@ -16,7 +24,7 @@ describe('schema/policy.schema.json', () => {
     expect(POLICY_SCHEMA).toEqual(shipped);
   });
 
-  test('is a valid draft-07 JSON Schema (ajv\'s draft-07 meta-schema)', () => {
+  test("is a valid draft-07 JSON Schema (ajv's draft-07 meta-schema)", () => {
     const ajv = new Ajv({ strict: true, allowUnionTypes: true });
     expect(ajv.validateSchema(shipped)).toBe(true);
     expect(shipped.$schema).toBe('http://json-schema.org/draft-07/schema#');
@@ -25,7 +33,9 @@ describe('schema/policy.schema.json', () => {
   test('enumerates exactly the limitable metric names: SCALAR_METRICS and precision.<format>.<metric>', () => {
     const expected = [
       ...SCALAR_METRICS,
-      ...FLOAT_FORMATS.flatMap((format) => PRECISION_METRICS.map((metric) => `precision.${format}.${metric}`)),
+      ...FLOAT_FORMATS.flatMap((format) =>
+        PRECISION_METRICS.map((metric) => `precision.${format}.${metric}`),
+      ),
     ];
     expect(Object.keys(definitions.limits.properties)).toEqual(expected);
     expect(Object.keys(definitions.limits.properties)).toEqual([...METRIC_PATHS]);
@@ -33,23 +43,43 @@ describe('schema/policy.schema.json', () => {
   });
 
   test('every metric entry has a description naming its unit', () => {
-    for (const [name, entry] of Object.entries(definitions.limits.properties as Record<string, Schema>)) {
-      expect(entry.description, name).toMatch(/^(tokens|token|count|ratio|bytes|radians|FLOP|0\.\.1|0\.\.2):/);
+    for (const [name, entry] of Object.entries(
+      definitions.limits.properties as Record<string, Schema>,
+    )) {
+      expect(entry.description, name).toMatch(
+        /^(tokens|token|count|ratio|bytes|radians|FLOP|0\.\.1|0\.\.2):/,
+      );
     }
   });
 
   // After adding a rule: node scripts/sync-policy-schema-rules.mjs
   test('enumerates exactly the rule ids of the catalogue, each with a description', () => {
     expect(Object.keys(definitions.rules.properties).sort()).toEqual(Object.keys(RULES).sort());
-    for (const [id, entry] of Object.entries(definitions.rules.properties as Record<string, Schema>)) {
+    for (const [id, entry] of Object.entries(
+      definitions.rules.properties as Record<string, Schema>,
+    )) {
       expect(entry.description, id).toBe(`${RULES[id as keyof typeof RULES].title}.`);
     }
   });
 
   test('serving keys are the fourteen of the policy file, each mapped to a ServingPatch field', () => {
     const keys = Object.keys(definitions.serving.properties);
-    expect(keys).toEqual(['span', 'sequences', 'device-memory-gib', 'reserve', 'activation-reserve-gib', 'tensor-parallel',
-      'pipeline-parallel', 'weights', 'weight-group-size', 'cache', 'positions', 'output-tokens', 'prompt-tokens', 'trained-span']);
+    expect(keys).toEqual([
+      'span',
+      'sequences',
+      'device-memory-gib',
+      'reserve',
+      'activation-reserve-gib',
+      'tensor-parallel',
+      'pipeline-parallel',
+      'weights',
+      'weight-group-size',
+      'cache',
+      'positions',
+      'output-tokens',
+      'prompt-tokens',
+      'trained-span',
+    ]);
     const patch = servingPatchOf(Object.fromEntries(keys.map((key) => [key, 1])) as never);
     expect(Object.keys(patch)).toHaveLength(14);
     expect(definitions.serving.properties.weights.enum).toEqual([...STORAGE_DTYPES]);
@@ -71,7 +101,9 @@ describe('schema/policy.schema.json', () => {
       expect(typeof target.title, key).toBe('string');
       expect(typeof target.description, key).toBe('string');
     }
-    for (const [key, entry] of Object.entries(definitions.serving.properties as Record<string, Schema>)) {
+    for (const [key, entry] of Object.entries(
+      definitions.serving.properties as Record<string, Schema>,
+    )) {
       expect(typeof entry.title, key).toBe('string');
       expect(entry.description, key).toMatch(/\(default: .+\)\.$/);
     }

@@ -8,15 +8,48 @@ import { SCALAR_METRICS } from '../../src/core/metrics/types.js';
 const ROOT = resolve(import.meta.dirname, '../..');
 const read = (path: string) => readFileSync(resolve(ROOT, path), 'utf8');
 
-describe('the core\'s public surface', () => {
+describe("the core's public surface", () => {
   it('exports exactly this list (widen it on purpose)', () => {
     expect(Object.keys(core).sort()).toEqual([
-      'ANNOTATIONS_PER_LEVEL', 'COMMENT_LIMIT', 'COMMENT_MARKER', 'DEFAULT_POLICY', 'DEFAULT_POLICY_PATH',
-      'ESTIMATE_NOTICE', 'FLOAT_FORMATS', 'METRIC_PATHS', 'NotAModelError', 'PLAIN', 'PolicyError', 'REPORT_VERSION',
-      'RULES', 'ReadError', 'STORAGE_DTYPES', 'VERSION', 'attachRemedies', 'computeMetrics', 'decide', 'decodeText', 'escapeHtml',
-      'escapeMarkdown', 'inspectModel', 'isModelConfig', 'metricValue', 'parsePolicy', 'planAnnotations', 'readModel', 'remedyFileReport',
-      'renderComment', 'renderDiffText', 'renderGateJson', 'renderHtmlReport', 'renderInspectJson', 'renderInspectText', 'renderSarif',
-      'resolvePolicy', 'runGate', 'toFailure',
+      'ANNOTATIONS_PER_LEVEL',
+      'COMMENT_LIMIT',
+      'COMMENT_MARKER',
+      'DEFAULT_POLICY',
+      'DEFAULT_POLICY_PATH',
+      'ESTIMATE_NOTICE',
+      'FLOAT_FORMATS',
+      'METRIC_PATHS',
+      'NotAModelError',
+      'PLAIN',
+      'PolicyError',
+      'REPORT_VERSION',
+      'RULES',
+      'ReadError',
+      'STORAGE_DTYPES',
+      'VERSION',
+      'attachRemedies',
+      'computeMetrics',
+      'decide',
+      'decodeText',
+      'escapeHtml',
+      'escapeMarkdown',
+      'inspectModel',
+      'isModelConfig',
+      'metricValue',
+      'parsePolicy',
+      'planAnnotations',
+      'readModel',
+      'remedyFileReport',
+      'renderComment',
+      'renderDiffText',
+      'renderGateJson',
+      'renderHtmlReport',
+      'renderInspectJson',
+      'renderInspectText',
+      'renderSarif',
+      'resolvePolicy',
+      'runGate',
+      'toFailure',
     ]);
   });
 
@@ -33,14 +66,16 @@ describe('the core\'s public surface', () => {
     walk(resolve(ROOT, 'src/core'));
     for (const file of files) {
       const text = readFileSync(file, 'utf8');
-      expect(text, file).not.toMatch(/from ['"](node:)?(fs|fs\/promises|child_process|os|http|https|net|worker_threads)['"]/);
+      expect(text, file).not.toMatch(
+        /from ['"](node:)?(fs|fs\/promises|child_process|os|http|https|net|worker_threads)['"]/,
+      );
       expect(text, file).not.toMatch(/from ['"]@actions\//);
       expect(text, file).not.toMatch(/\bprocess\.(env|exit|argv|stdout|cwd)/);
     }
   });
 });
 
-describe('the project\'s documents', () => {
+describe("the project's documents", () => {
   it('keeps the version in package.json and the code equal', () => {
     expect(JSON.parse(read('package.json')).version).toBe(core.VERSION);
   });
@@ -55,20 +90,23 @@ describe('the project\'s documents', () => {
     expect(METRIC_PATHS.length).toBe(SCALAR_METRICS.length + 15);
   });
 
-  it('documents every rule id in the README\'s rules table', () => {
+  it("documents every rule id in the README's rules table", () => {
     const readme = read('README.md');
     for (const id of Object.keys(core.RULES)) expect(readme, id).toContain(`\`${id}\``);
   });
 
   it('has the two-command quick start at the top of the README', () => {
     const readme = read('README.md');
-    const quick = readme.slice(readme.indexOf('## Quick start'), readme.indexOf('## Quick start') + 600);
+    const quick = readme.slice(
+      readme.indexOf('## Quick start'),
+      readme.indexOf('## Quick start') + 600,
+    );
     expect(quick).toContain('node dist/cli.js demo');
     expect(quick).toContain('npm ci && npm test');
     expect(readme.slice(0, 1500)).toMatch(/pull request/);
   });
 
-  it('calls the README\'s test command from CI', () => {
+  it("calls the README's test command from CI", () => {
     expect(read('.ci/run')).toMatch(/^npm test( |$)/m);
     expect(JSON.parse(read('package.json')).scripts.test).toBe('vitest run');
   });

@@ -1,7 +1,11 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { createGitHubClient, publishComment } from '../../src/action/github.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
-import { runScenario, type ScenarioOptions, type ScenarioResult } from '../support/action-harness.js';
+import {
+  runScenario,
+  type ScenarioOptions,
+  type ScenarioResult,
+} from '../support/action-harness.js';
 import { startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 
@@ -11,8 +15,14 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 // converge on one comment.
 
 const MODEL = 'models/a/config.json';
-const BLOCKING = { base: { [MODEL]: checkpointConfig() }, head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) } };
-const PASSING = { base: { [MODEL]: checkpointConfig() }, head: { [MODEL]: checkpointConfig({ rope_theta: 10000 }) } };
+const BLOCKING = {
+  base: { [MODEL]: checkpointConfig() },
+  head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) },
+};
+const PASSING = {
+  base: { [MODEL]: checkpointConfig() },
+  head: { [MODEL]: checkpointConfig({ rope_theta: 10000 }) },
+};
 
 const fakes: FakeGitHub[] = [];
 afterEach(async () => {
@@ -29,11 +39,14 @@ async function scenario(options: Partial<ScenarioOptions> = {}): Promise<Scenari
   return result;
 }
 
-const marked = (fake: FakeGitHub) => fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
+const marked = (fake: FakeGitHub) =>
+  fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
 
-describe('the comment is recognised by the token\'s own identity', () => {
-  it('a person\'s token (GET /user answers): three runs keep exactly one comment (point 5)', async () => {
-    const fake = await startFakeGitHub({ tokenUser: { login: 'dana-example', type: 'User', id: 501 } });
+describe("the comment is recognised by the token's own identity", () => {
+  it("a person's token (GET /user answers): three runs keep exactly one comment (point 5)", async () => {
+    const fake = await startFakeGitHub({
+      tokenUser: { login: 'dana-example', type: 'User', id: 501 },
+    });
     for (let run = 0; run < 3; run += 1) {
       const result = await scenario({ fake });
       expect(result.error).toBeNull();
@@ -52,9 +65,16 @@ describe('the comment is recognised by the token\'s own identity', () => {
     expect(fake.calls('graphql').length).toBeGreaterThan(0);
   });
 
-  it('another bot\'s comment with the marker is never edited (point 6)', async () => {
+  it("another bot's comment with the marker is never edited (point 6)", async () => {
     const fake = await startFakeGitHub();
-    const other = { id: 1, issueNumber: 7, body: `${COMMENT_MARKER}\nanother integration's text`, user: { login: 'other-app[bot]', type: 'Bot' as const, id: 99 }, createdAt: '2024-01-01T00:00:00Z', updatedAt: '2024-01-01T00:00:00Z' };
+    const other = {
+      id: 1,
+      issueNumber: 7,
+      body: `${COMMENT_MARKER}\nanother integration's text`,
+      user: { login: 'other-app[bot]', type: 'Bot' as const, id: 99 },
+      createdAt: '2024-01-01T00:00:00Z',
+      updatedAt: '2024-01-01T00:00:00Z',
+    };
     fake.state.comments.push(other);
     const result = await scenario({ fake });
     expect(result.error).toBeNull();
@@ -71,8 +91,22 @@ describe('runs at the same time converge on one comment (point 7)', () => {
     const bot = fake.state.tokenUser;
     // What two simultaneous first runs leave: both found nothing and both created.
     fake.state.comments.push(
-      { id: 10, issueNumber: 7, body: `${COMMENT_MARKER}\n🟢 **Passes**`, user: bot, createdAt: '2024-01-01T00:00:00Z', updatedAt: '2024-01-01T00:00:00Z' },
-      { id: 11, issueNumber: 7, body: `${COMMENT_MARKER}\n🔴 **Blocked**`, user: bot, createdAt: '2024-01-01T00:00:01Z', updatedAt: '2024-01-01T00:00:01Z' },
+      {
+        id: 10,
+        issueNumber: 7,
+        body: `${COMMENT_MARKER}\n🟢 **Passes**`,
+        user: bot,
+        createdAt: '2024-01-01T00:00:00Z',
+        updatedAt: '2024-01-01T00:00:00Z',
+      },
+      {
+        id: 11,
+        issueNumber: 7,
+        body: `${COMMENT_MARKER}\n🔴 **Blocked**`,
+        user: bot,
+        createdAt: '2024-01-01T00:00:01Z',
+        updatedAt: '2024-01-01T00:00:01Z',
+      },
     );
     const result = await scenario({ fake });
     expect(result.error).toBeNull();
@@ -85,9 +119,23 @@ describe('runs at the same time converge on one comment (point 7)', () => {
   it('two writers racing through publishComment with different verdicts leave one comment', async () => {
     const fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
     fakes.push(fake);
-    const client = () => createGitHubClient(fake.state.token, { baseUrl: fake.url, log: { debug: () => {}, info: () => {}, warn: () => {} }, msPerSecond: 1 });
-    const target = (body: string) => ({ owner: 'example-org', repo: 'model-zoo', issueNumber: 7, marker: COMMENT_MARKER, body: `${COMMENT_MARKER}\n${body}` });
-    const [a, b] = await Promise.all([publishComment(client(), target('🟢 **Passes**')), publishComment(client(), target('🔴 **Blocked**'))]);
+    const client = () =>
+      createGitHubClient(fake.state.token, {
+        baseUrl: fake.url,
+        log: { debug: () => {}, info: () => {}, warn: () => {} },
+        msPerSecond: 1,
+      });
+    const target = (body: string) => ({
+      owner: 'example-org',
+      repo: 'model-zoo',
+      issueNumber: 7,
+      marker: COMMENT_MARKER,
+      body: `${COMMENT_MARKER}\n${body}`,
+    });
+    const [a, b] = await Promise.all([
+      publishComment(client(), target('🟢 **Passes**')),
+      publishComment(client(), target('🔴 **Blocked**')),
+    ]);
     expect(marked(fake)).toHaveLength(1);
     expect([a.comment.id, b.comment.id]).toEqual([marked(fake)[0]!.id, marked(fake)[0]!.id]);
   });
@@ -96,13 +144,38 @@ describe('runs at the same time converge on one comment (point 7)', () => {
     const fake = await startFakeGitHub();
     const bot = fake.state.tokenUser;
     fake.state.comments.push(
-      { id: 10, issueNumber: 7, body: `${COMMENT_MARKER}\nold`, user: bot, createdAt: '2024-01-01T00:00:00Z', updatedAt: '2024-01-01T00:00:00Z' },
-      { id: 11, issueNumber: 7, body: `${COMMENT_MARKER}\nolder twin`, user: bot, createdAt: '2024-01-01T00:00:01Z', updatedAt: '2024-01-01T00:00:01Z' },
+      {
+        id: 10,
+        issueNumber: 7,
+        body: `${COMMENT_MARKER}\nold`,
+        user: bot,
+        createdAt: '2024-01-01T00:00:00Z',
+        updatedAt: '2024-01-01T00:00:00Z',
+      },
+      {
+        id: 11,
+        issueNumber: 7,
+        body: `${COMMENT_MARKER}\nolder twin`,
+        user: bot,
+        createdAt: '2024-01-01T00:00:01Z',
+        updatedAt: '2024-01-01T00:00:01Z',
+      },
     );
-    const result = await scenario({ fake, ...PASSING, prepare: (f) => f.fail('issues/delete-comment', { kind: 'status', status: 403, body: { message: 'Must have admin rights to Repository.' } }) });
+    const result = await scenario({
+      fake,
+      ...PASSING,
+      prepare: (f) =>
+        f.fail('issues/delete-comment', {
+          kind: 'status',
+          status: 403,
+          body: { message: 'Must have admin rights to Repository.' },
+        }),
+    });
     expect(result.error).toBeNull();
     expect(marked(fake).map((c) => c.id)).toEqual([10]);
-    expect(fake.state.comments.find((c) => c.id === 11)!.body).toMatch(/replaced by \[the current context-reach report\]\(.*#issuecomment-10\)/);
+    expect(fake.state.comments.find((c) => c.id === 11)!.body).toMatch(
+      /replaced by \[the current context-reach report\]\(.*#issuecomment-10\)/,
+    );
   });
 });
 
@@ -112,13 +185,22 @@ describe('the README workflows set a concurrency group per pull request (point 7
     const { parse } = await import('yaml');
     const root = new URL('../../', import.meta.url);
     const readme = readFileSync(new URL('README.md', root), 'utf8');
-    const blocks = [...readme.matchAll(/```yaml\n([\s\S]*?)```/g)].map((m) => m[1]!).filter((text) => /^on:/m.test(text));
-    const files = ['.github/workflows/context-reach.yml', '.github/workflows/context-reach-publish.yml'].map((p) => readFileSync(new URL(p, root), 'utf8'));
+    const blocks = [...readme.matchAll(/```yaml\n([\s\S]*?)```/g)]
+      .map((m) => m[1]!)
+      .filter((text) => /^on:/m.test(text));
+    const files = [
+      '.github/workflows/context-reach.yml',
+      '.github/workflows/context-reach-publish.yml',
+    ].map((p) => readFileSync(new URL(p, root), 'utf8'));
     expect(blocks.length).toBeGreaterThanOrEqual(3);
     for (const text of [...blocks, ...files]) {
-      const workflow = parse(text) as { on: Record<string, unknown>; concurrency?: { group?: string } };
+      const workflow = parse(text) as {
+        on: Record<string, unknown>;
+        concurrency?: { group?: string };
+      };
       const group = workflow.concurrency?.group ?? '';
-      if ('pull_request' in workflow.on) expect(group).toContain('${{ github.event.pull_request.number }}');
+      if ('pull_request' in workflow.on)
+        expect(group).toContain('${{ github.event.pull_request.number }}');
       else expect(group).toContain('github.event.workflow_run.pull_requests[0].number');
     }
   });

@@ -17,23 +17,59 @@ describe('jsonSyntaxErrorOffset(text)', () => {
   it('is -1 exactly when JSON.parse (ECMA-404 / RFC 8259, the reference) accepts the text', () => {
     const texts = fc.oneof(
       fc.json(),
-      fc.string({ unit: fc.constantFrom('{', '}', '[', ']', '"', ':', ',', '1', '-', '.', 'e', 't', 'r', 'u', 'n', 'l', ' ', '\\', 'x') }),
+      fc.string({
+        unit: fc.constantFrom(
+          '{',
+          '}',
+          '[',
+          ']',
+          '"',
+          ':',
+          ',',
+          '1',
+          '-',
+          '.',
+          'e',
+          't',
+          'r',
+          'u',
+          'n',
+          'l',
+          ' ',
+          '\\',
+          'x',
+        ),
+      }),
       fc.json().chain((j) => fc.nat({ max: j.length }).map((cut) => j.slice(0, cut))),
-      fc.tuple(fc.json(), fc.nat(), fc.constantFrom('x', ',', '}', '"', '\u0001', ' ')).map(([j, at, c]) => j.slice(0, at % (j.length + 1)) + c + j.slice(at % (j.length + 1))),
+      fc
+        .tuple(fc.json(), fc.nat(), fc.constantFrom('x', ',', '}', '"', '\u0001', ' '))
+        .map(([j, at, c]) => j.slice(0, at % (j.length + 1)) + c + j.slice(at % (j.length + 1))),
     );
-    fc.assert(fc.property(texts, (text) => {
-      let valid = true;
-      try {
-        JSON.parse(text);
-      } catch {
-        valid = false;
-      }
-      expect(jsonSyntaxErrorOffset(text) === -1, JSON.stringify(text)).toBe(valid);
-    }), { numRuns: 5000 });
+    fc.assert(
+      fc.property(texts, (text) => {
+        let valid = true;
+        try {
+          JSON.parse(text);
+        } catch {
+          valid = false;
+        }
+        expect(jsonSyntaxErrorOffset(text) === -1, JSON.stringify(text)).toBe(valid);
+      }),
+      { numRuns: 5000 },
+    );
   });
 
   it('points at the character JSON.parse names when it gives a position', () => {
-    for (const text of ['{"a": 1,}', '{"a" 1}', '[1, 2', '{"a": tru}', '{"a": "b\u0001"}', '{"a": 0x10}', '{}x', '["\\q"]']) {
+    for (const text of [
+      '{"a": 1,}',
+      '{"a" 1}',
+      '[1, 2',
+      '{"a": tru}',
+      '{"a": "b\u0001"}',
+      '{"a": 0x10}',
+      '{}x',
+      '["\\q"]',
+    ]) {
       let position: number | null = null;
       try {
         JSON.parse(text);
@@ -54,31 +90,57 @@ describe('jsonSyntaxErrorOffset(text)', () => {
   });
 
   it('gives parseSource the line of a control character that starts a config.json (an engine message without a position)', () => {
-    const error = (() => { try { parseSource('\u000e{\n  "a": 1\n}\n', 'models/x/config.json'); } catch (e) { return e; } return null; })();
+    const error = (() => {
+      try {
+        parseSource('\u000e{\n  "a": 1\n}\n', 'models/x/config.json');
+      } catch (e) {
+        return e;
+      }
+      return null;
+    })();
     expect(error).toBeInstanceOf(ReadError);
     expect((error as ReadError).line).toBe(1);
     expect((error as ReadError).reason).toMatch(/^is not valid JSON: Unexpected token/);
-    expect((error as ReadError).reason).not.toContain('is not valid JSON: Unexpected token \'\u000e\', "');
+    expect((error as ReadError).reason).not.toContain(
+      "is not valid JSON: Unexpected token '\u000e', \"",
+    );
   });
 });
 
 async function report(head: Record<string, unknown>, policy = ''): Promise<GateReport> {
   const path = 'models/a/config.json';
   const files: Record<string, Record<string, Uint8Array>> = {
-    ['b'.repeat(40)]: { [path]: new TextEncoder().encode(checkpointConfig()), 'p.yml': new TextEncoder().encode(policy) },
-    ['c'.repeat(40)]: { [path]: new TextEncoder().encode(checkpointConfig(head)), 'p.yml': new TextEncoder().encode(policy) },
+    ['b'.repeat(40)]: {
+      [path]: new TextEncoder().encode(checkpointConfig()),
+      'p.yml': new TextEncoder().encode(policy),
+    },
+    ['c'.repeat(40)]: {
+      [path]: new TextEncoder().encode(checkpointConfig(head)),
+      'p.yml': new TextEncoder().encode(policy),
+    },
   };
-  return runGate({ read: async (ref, p) => files[ref]?.[p] ?? null }, {
-    base: 'b'.repeat(40), head: 'c'.repeat(40), changes: [{ status: 'modified', path, previousPath: null }], policyPath: 'p.yml',
-  });
+  return runGate(
+    { read: async (ref, p) => files[ref]?.[p] ?? null },
+    {
+      base: 'b'.repeat(40),
+      head: 'c'.repeat(40),
+      changes: [{ status: 'modified', path, previousPath: null }],
+      policyPath: 'p.yml',
+    },
+  );
 }
 
 describe('readGateJson(renderGateJson(report), file)', () => {
   it('renders the same comment as the report it was written from (a change that passes, judged by limits)', async () => {
-    const original = await report({ num_key_value_heads: 8 }, 'serving: { device-memory-gib: 80 }\nlimits:\n  memoryBytes: { max: 100000000000 }\n');
+    const original = await report(
+      { num_key_value_heads: 8 },
+      'serving: { device-memory-gib: 80 }\nlimits:\n  memoryBytes: { max: 100000000000 }\n',
+    );
     expect(original.verdict).not.toBe('block');
     const back = readGateJson(renderGateJson(original), 'report.json');
-    expect(renderComment(back, { blobUrl: 'https://github.example/o/r/blob/c' })).toBe(renderComment(original, { blobUrl: 'https://github.example/o/r/blob/c' }));
+    expect(renderComment(back, { blobUrl: 'https://github.example/o/r/blob/c' })).toBe(
+      renderComment(original, { blobUrl: 'https://github.example/o/r/blob/c' }),
+    );
   });
 
   it('renders the same comment for a blocked change, its remedies included', async () => {
@@ -99,8 +161,24 @@ describe('readGateJson(renderGateJson(report), file)', () => {
   });
 
   it('refuses a report whose counts do not follow from its findings, and text past its size bound', () => {
-    const text = renderGateJson({ version: 1, verdict: 'ok', blocking: 2, warnings: 0, files: [], deleted: [], notices: [], base: 'b'.repeat(40), head: 'e'.repeat(40), policy: { source: 'built-in', path: 'p', changedInHead: false }, waiver: { label: null, applied: false, waivedBlocks: 0 } });
-    expect(() => readGateJson(text, 'r.json')).toThrow('r.json: /blocking is 2 but the findings make it 0; the report was altered');
-    expect(() => readGateJson(' '.repeat(64 * 1024 * 1024 + 1), 'r.json')).toThrow(/characters long; a report is read up to 67108864/);
+    const text = renderGateJson({
+      version: 1,
+      verdict: 'ok',
+      blocking: 2,
+      warnings: 0,
+      files: [],
+      deleted: [],
+      notices: [],
+      base: 'b'.repeat(40),
+      head: 'e'.repeat(40),
+      policy: { source: 'built-in', path: 'p', changedInHead: false },
+      waiver: { label: null, applied: false, waivedBlocks: 0 },
+    });
+    expect(() => readGateJson(text, 'r.json')).toThrow(
+      'r.json: /blocking is 2 but the findings make it 0; the report was altered',
+    );
+    expect(() => readGateJson(' '.repeat(64 * 1024 * 1024 + 1), 'r.json')).toThrow(
+      /characters long; a report is read up to 67108864/,
+    );
   });
 });

@@ -11,7 +11,12 @@ import { checkpointConfig, scenarioRepo } from '../support/scenario-repo.js';
 const FROM = 'models/chat/config.json';
 const TO = 'archive/2026/chat-long/config.json';
 /** The same keys written on one line, in another order: git's similarity score does not pair them. */
-const minified = (overrides: Record<string, unknown> = {}) => JSON.stringify(Object.fromEntries(Object.entries(JSON.parse(checkpointConfig(overrides)) as Record<string, unknown>).reverse()));
+const minified = (overrides: Record<string, unknown> = {}) =>
+  JSON.stringify(
+    Object.fromEntries(
+      Object.entries(JSON.parse(checkpointConfig(overrides)) as Record<string, unknown>).reverse(),
+    ),
+  );
 
 const fakes: FakeGitHub[] = [];
 afterEach(async () => {
@@ -22,7 +27,22 @@ afterEach(async () => {
   }
 });
 
-async function run(head: Record<string, string>, noHistory = false): Promise<{ result: ScenarioResult; report: { verdict: string; files: { path: string; status: string; previousPath: string | null; findings: { rule: string }[] }[]; deleted: unknown[] } }> {
+async function run(
+  head: Record<string, string>,
+  noHistory = false,
+): Promise<{
+  result: ScenarioResult;
+  report: {
+    verdict: string;
+    files: {
+      path: string;
+      status: string;
+      previousPath: string | null;
+      findings: { rule: string }[];
+    }[];
+    deleted: unknown[];
+  };
+}> {
   const result = await runScenario({ base: { [FROM]: checkpointConfig() }, head, noHistory });
   fakes.push(result.fake);
   expect(result.error).toBeNull();
@@ -31,21 +51,30 @@ async function run(head: Record<string, string>, noHistory = false): Promise<{ r
 
 describe('a model config moved and minified', () => {
   it('is not a rename to git (the premise)', async () => {
-    const repo = scenarioRepo({ [FROM]: checkpointConfig() }, { [TO]: minified({ max_position_embeddings: 16384 }) });
+    const repo = scenarioRepo(
+      { [FROM]: checkpointConfig() },
+      { [TO]: minified({ max_position_embeddings: 16384 }) },
+    );
     const changes = await createGitReader(repo.dir).changedFiles(repo.base, repo.head);
     repo.remove();
     expect(changes.map((c) => c.status).sort()).toEqual(['added', 'deleted']);
   });
 
-  it.each([[false], [true]])('with a quadrupled span blocks as the same edit in place does (no history: %s)', async (noHistory) => {
-    const { report, result } = await run({ [TO]: minified({ max_position_embeddings: 16384 }) }, noHistory);
-    expect(report.verdict).toBe('block');
-    expect(report.files).toHaveLength(1);
-    expect(report.files[0]).toMatchObject({ path: TO, status: 'renamed', previousPath: FROM });
-    expect(report.files[0]!.findings.map((f) => f.rule)).toContain('span-grew-code-unchanged');
-    expect(report.deleted).toEqual([]);
-    expect(result.out.outputs.verdict).toBe('block');
-  });
+  it.each([[false], [true]])(
+    'with a quadrupled span blocks as the same edit in place does (no history: %s)',
+    async (noHistory) => {
+      const { report, result } = await run(
+        { [TO]: minified({ max_position_embeddings: 16384 }) },
+        noHistory,
+      );
+      expect(report.verdict).toBe('block');
+      expect(report.files).toHaveLength(1);
+      expect(report.files[0]).toMatchObject({ path: TO, status: 'renamed', previousPath: FROM });
+      expect(report.files[0]!.findings.map((f) => f.rule)).toContain('span-grew-code-unchanged');
+      expect(report.deleted).toEqual([]);
+      expect(result.out.outputs.verdict).toBe('block');
+    },
+  );
 
   it('unchanged in content passes, judged as a move, nothing listed as deleted', async () => {
     const { report } = await run({ [TO]: minified() });

@@ -31,13 +31,23 @@ let reportText: string;
 let folder: string;
 
 /** The workflow_run payload GitHub sends the second workflow (the fields it reads, and a few more). */
-function workflowRun(overrides: { headSha?: string; event?: string; headOwner?: string; pullNumbers?: number[] } = {}) {
+function workflowRun(
+  overrides: { headSha?: string; event?: string; headOwner?: string; pullNumbers?: number[] } = {},
+) {
   return {
     action: 'completed',
     workflow_run: {
-      id: 4242, name: 'context-reach', event: overrides.event ?? 'pull_request', status: 'completed', conclusion: 'failure',
-      head_sha: overrides.headSha ?? first.head, head_branch: 'feature',
-      head_repository: { full_name: `${overrides.headOwner ?? 'someone-else'}/${REPO}`, owner: { login: overrides.headOwner ?? 'someone-else' } },
+      id: 4242,
+      name: 'context-reach',
+      event: overrides.event ?? 'pull_request',
+      status: 'completed',
+      conclusion: 'failure',
+      head_sha: overrides.headSha ?? first.head,
+      head_branch: 'feature',
+      head_repository: {
+        full_name: `${overrides.headOwner ?? 'someone-else'}/${REPO}`,
+        owner: { login: overrides.headOwner ?? 'someone-else' },
+      },
       // GitHub leaves this empty for pull requests from forks.
       pull_requests: (overrides.pullNumbers ?? []).map((number) => ({ number })),
     },
@@ -51,27 +61,46 @@ interface Published {
 }
 
 /** Runs the action in publish mode, in-process with the real GitHub adapter, on `report` (text or bytes). */
-async function publish(report: string | Uint8Array, payload: unknown = workflowRun(), eventName = 'workflow_run'): Promise<Published> {
+async function publish(
+  report: string | Uint8Array,
+  payload: unknown = workflowRun(),
+  eventName = 'workflow_run',
+): Promise<Published> {
   const path = join(folder, `report-${Math.random().toString(36).slice(2)}.json`);
   writeFileSync(path, report);
   const out = createRecordingOutput();
   let error: unknown = null;
   await runAction({
-    env: { GITHUB_EVENT_NAME: eventName, GITHUB_EVENT_PATH: 'event.json', GITHUB_API_URL: fake.url, GITHUB_SERVER_URL: 'https://github.example', RUNNER_TEMP: folder },
-    getInput: (name) => ({ 'github-token': fake.state.token, 'publish-report': path } as Record<string, string>)[name] ?? '',
+    env: {
+      GITHUB_EVENT_NAME: eventName,
+      GITHUB_EVENT_PATH: 'event.json',
+      GITHUB_API_URL: fake.url,
+      GITHUB_SERVER_URL: 'https://github.example',
+      RUNNER_TEMP: folder,
+    },
+    getInput: (name) =>
+      (({ 'github-token': fake.state.token, 'publish-report': path }) as Record<string, string>)[
+        name
+      ] ?? '',
     out,
     readJson: async () => payload,
     readFile: (p, max) => createFileSource(max).read(p),
-    writeFile: async () => { throw new Error('publish mode writes no files'); },
+    writeFile: async () => {
+      throw new Error('publish mode writes no files');
+    },
     createGit: (cwd) => createGitReader(cwd),
     createGitHub: (token, options) => createGitHubClient(token, { ...options, msPerSecond: 1 }),
-  }).catch((caught: unknown) => { error = caught; });
+  }).catch((caught: unknown) => {
+    error = caught;
+  });
   return { out, error };
 }
 
 const ours = () => fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
 
-function tampered(change: (report: Record<string, unknown> & { files: Record<string, unknown>[] }) => void): string {
+function tampered(
+  change: (report: Record<string, unknown> & { files: Record<string, unknown>[] }) => void,
+): string {
   const report = JSON.parse(reportText);
   change(report);
   return JSON.stringify(report);
@@ -83,15 +112,36 @@ beforeAll(async () => {
   first = await runScenario({
     base: { [MODEL]: checkpointConfig() },
     head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) },
-    fork: true, readOnly: true, inputs: { comment: 'off' },
+    fork: true,
+    readOnly: true,
+    inputs: { comment: 'off' },
   });
   fake = first.fake;
   reportText = Object.values(first.written)[0]!;
   // Workflow 2 runs in the base repository with a token that may comment.
   fake.state.readOnly = false;
   // Another open pull request from another fork, and a closed one from the same branch label.
-  fake.state.pulls.set(8, { number: 8, baseSha: first.base, headSha: 'd'.repeat(40), baseRef: 'main', headRef: 'feature', labels: [], headRepo: `mallory/${REPO}`, files: [] });
-  fake.state.pulls.set(9, { number: 9, baseSha: first.base, headSha: first.head, baseRef: 'main', headRef: 'feature', labels: [], headRepo: `someone-else/${REPO}`, files: [], state: 'closed' });
+  fake.state.pulls.set(8, {
+    number: 8,
+    baseSha: first.base,
+    headSha: 'd'.repeat(40),
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: [],
+    headRepo: `mallory/${REPO}`,
+    files: [],
+  });
+  fake.state.pulls.set(9, {
+    number: 9,
+    baseSha: first.base,
+    headSha: first.head,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: [],
+    headRepo: `someone-else/${REPO}`,
+    files: [],
+    state: 'closed',
+  });
 }, 60_000);
 
 afterAll(async () => {
@@ -108,16 +158,22 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
     expect(fake.state.comments).toHaveLength(0);
   });
 
-  it('posts the report to the one open pull request whose head is the run\'s head commit, found through the API', async () => {
+  it("posts the report to the one open pull request whose head is the run's head commit, found through the API", async () => {
     const { out, error } = await publish(reportText);
     expect(error).toBeNull();
     expect(ours()).toHaveLength(1);
     expect(ours()[0]!.issueNumber).toBe(7);
     expect(ours()[0]!.body).toContain('span-grew-code-unchanged');
     expect(ours()[0]!.body).toContain('■ **Blocked**');
-    expect(out.outputs).toMatchObject({ verdict: 'block', blocking: '1', 'comment-url': expect.stringContaining('/pull/7#issuecomment-') });
+    expect(out.outputs).toMatchObject({
+      verdict: 'block',
+      blocking: '1',
+      'comment-url': expect.stringContaining('/pull/7#issuecomment-'),
+    });
     expect(out.failed).toBeNull();
-    expect(fake.calls('pulls/list').map((c) => c.query)).toContain('?state=open&head=someone-else%3Afeature&per_page=100');
+    expect(fake.calls('pulls/list').map((c) => c.query)).toContain(
+      '?state=open&head=someone-else%3Afeature&per_page=100',
+    );
     expect(fake.calls('pulls/get').length).toBeGreaterThan(0);
   });
 
@@ -131,41 +187,68 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
   it('renders the same findings and metric rows as the first workflow judged', async () => {
     const original = JSON.parse(reportText) as GateReport;
     const body = ours()[0]!.body;
-    for (const finding of original.files[0]!.findings) expect(body).toContain(`\`${finding.rule}\``);
+    for (const finding of original.files[0]!.findings)
+      expect(body).toContain(`\`${finding.rule}\``);
     expect(body).toContain('|`declaredSpan`');
     // The memory chart is drawn where memory is at issue; this report's one file blocks on its span only.
-    expect(body.includes('```mermaid')).toBe(original.files[0]!.findings.some((f) => f.rule === 'memory-over-budget' || f.metric === 'memoryBytes'));
+    expect(body.includes('```mermaid')).toBe(
+      original.files[0]!.findings.some(
+        (f) => f.rule === 'memory-over-budget' || f.metric === 'memoryBytes',
+      ),
+    );
     expect(body).toContain('✓ **Fix**');
   });
 
   it('refuses a report for another commit than the run checked: no comment is touched', async () => {
     const before = ours()[0]!.body;
-    const { error } = await publish(tampered((r) => { r.head = 'e'.repeat(40); }));
-    expect(String((error as Error).message)).toMatch(/^Refusing to publish: the report judges head "e{40}", but workflow run 4242 ran on [0-9a-f]{40}/);
+    const { error } = await publish(
+      tampered((r) => {
+        r.head = 'e'.repeat(40);
+      }),
+    );
+    expect(String((error as Error).message)).toMatch(
+      /^Refusing to publish: the report judges head "e{40}", but workflow run 4242 ran on [0-9a-f]{40}/,
+    );
     expect(ours()[0]!.body).toBe(before);
   });
 
-  it('publishes nowhere when no open pull request has the run\'s head now (pushed again), and says so', async () => {
-    const moved = await publish(tampered((r) => { r.head = 'f'.repeat(40); }), workflowRun({ headSha: 'f'.repeat(40) }));
+  it("publishes nowhere when no open pull request has the run's head now (pushed again), and says so", async () => {
+    const moved = await publish(
+      tampered((r) => {
+        r.head = 'f'.repeat(40);
+      }),
+      workflowRun({ headSha: 'f'.repeat(40) }),
+    );
     expect(moved.error).toBeNull();
-    expect(moved.out.log.some((l) => l.level === 'notice' && l.message.includes('No open pull request has head ffff'))).toBe(true);
+    expect(
+      moved.out.log.some(
+        (l) => l.level === 'notice' && l.message.includes('No open pull request has head ffff'),
+      ),
+    ).toBe(true);
     expect(ours().map((c) => c.issueNumber)).toEqual([7]);
   });
 
-  it('ignores pull request numbers that do not have the run\'s head (a number in the payload is checked, not trusted)', async () => {
+  it("ignores pull request numbers that do not have the run's head (a number in the payload is checked, not trusted)", async () => {
     const { error } = await publish(reportText, workflowRun({ pullNumbers: [8, 7] }));
     expect(error).toBeNull();
     expect(fake.state.comments.filter((c) => c.issueNumber === 8)).toHaveLength(0);
   });
 
   it('re-escapes a tampered report: markup in paths, messages, keys, notices and the waiver label stays text', async () => {
-    const hostile = '<img src=x onerror=alert(1)> @someone #123 [x](https://evil.example) <!-- context-reach:pull-request-report --> | `';
+    const hostile =
+      '<img src=x onerror=alert(1)> @someone #123 [x](https://evil.example) <!-- context-reach:pull-request-report --> | `';
     const text = tampered((r) => {
       (r.notices as string[]).push(hostile);
       r.waiver = { label: hostile, applied: true, waivedBlocks: 0 };
-      const file = r.files[0] as { path: string; findings: { message: string; key: string | null }[] };
+      const file = r.files[0] as {
+        path: string;
+        findings: { message: string; key: string | null }[];
+      };
       file.path = `models/${hostile}/config.json`;
-      for (const f of file.findings) { f.message = hostile; f.key = hostile; }
+      for (const f of file.findings) {
+        f.message = hostile;
+        f.key = hostile;
+      }
       (r.deleted as unknown[]).push({ status: 'deleted', path: hostile, previousPath: null });
     });
     const { error } = await publish(text);
@@ -178,7 +261,10 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
   });
 
   it('drops fields a report does not have, whatever they hold; nothing reaches a prototype', async () => {
-    const text = reportText.replace('{\n  "version": 1,', '{\n  "__proto__": {"polluted": "yes"},\n  "html": "<script>alert(1)</script>",\n  "version": 1,');
+    const text = reportText.replace(
+      '{\n  "version": 1,',
+      '{\n  "__proto__": {"polluted": "yes"},\n  "html": "<script>alert(1)</script>",\n  "version": 1,',
+    );
     const { error } = await publish(text);
     expect(error).toBeNull();
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
@@ -186,17 +272,73 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
   });
 
   it.each([
-    ['a verdict its findings do not give', (r: Record<string, unknown>) => { r.verdict = 'ok'; }, /\/verdict is "ok" but the findings make it "block"; the report was altered/],
-    ['a file verdict its findings do not give', (r: Record<string, unknown> & { files: Record<string, unknown>[] }) => { r.files[0]!.verdict = 'ok'; }, /\/files\/0\/verdict is "ok" but its findings make it "block"/],
-    ['a count that is text', (r: Record<string, unknown>) => { r.blocking = '1'; }, /\/blocking is "1"; expected must be integer/],
-    ['a line below 1', (r: Record<string, unknown> & { files: { findings: { line: number }[] }[] }) => { r.files[0]!.findings[0]!.line = -5; }, /\/files\/0\/findings\/0\/line is -5; expected must be >= 1/],
-    ['an unknown severity', (r: Record<string, unknown> & { files: { findings: { severity: string }[] }[] }) => { r.files[0]!.findings[0]!.severity = 'critical'; }, /\/files\/0\/findings\/0\/severity is "critical"; expected one of "block", "warn", "info"/],
-    ['an unknown metric', (r: Record<string, unknown> & { files: { deltas: { metric: string }[] }[] }) => { r.files[0]!.deltas[0]!.metric = '<b>x</b>'; }, /\/files\/0\/deltas\/0\/metric is "<b>x<\/b>"; expected one of "declaredSpan"/],
-    ['a spec size that is text', (r: Record<string, unknown> & { files: { head: { spec: { layers: unknown } } }[] }) => { r.files[0]!.head.spec.layers = '<script>'; }, /\/files\/0\/head\/spec\/layers is "<script>"; expected must be number,null/],
-    ['another version', (r: Record<string, unknown>) => { r.version = 2; }, /\/version is 2; expected must be equal to constant/],
-    ['a remedy changing a field named like markup', (r: Record<string, unknown> & { files: { findings: { remedy?: { change: Record<string, unknown> } | null }[] }[] }) => {
-      r.files[0]!.findings.find((f) => f.remedy)!.remedy!.change['<img src=x>'] = 1;
-    }, /\/files\/0\/findings\/0\/remedy\/change is a mapping; expected must match pattern/],
+    [
+      'a verdict its findings do not give',
+      (r: Record<string, unknown>) => {
+        r.verdict = 'ok';
+      },
+      /\/verdict is "ok" but the findings make it "block"; the report was altered/,
+    ],
+    [
+      'a file verdict its findings do not give',
+      (r: Record<string, unknown> & { files: Record<string, unknown>[] }) => {
+        r.files[0]!.verdict = 'ok';
+      },
+      /\/files\/0\/verdict is "ok" but its findings make it "block"/,
+    ],
+    [
+      'a count that is text',
+      (r: Record<string, unknown>) => {
+        r.blocking = '1';
+      },
+      /\/blocking is "1"; expected must be integer/,
+    ],
+    [
+      'a line below 1',
+      (r: Record<string, unknown> & { files: { findings: { line: number }[] }[] }) => {
+        r.files[0]!.findings[0]!.line = -5;
+      },
+      /\/files\/0\/findings\/0\/line is -5; expected must be >= 1/,
+    ],
+    [
+      'an unknown severity',
+      (r: Record<string, unknown> & { files: { findings: { severity: string }[] }[] }) => {
+        r.files[0]!.findings[0]!.severity = 'critical';
+      },
+      /\/files\/0\/findings\/0\/severity is "critical"; expected one of "block", "warn", "info"/,
+    ],
+    [
+      'an unknown metric',
+      (r: Record<string, unknown> & { files: { deltas: { metric: string }[] }[] }) => {
+        r.files[0]!.deltas[0]!.metric = '<b>x</b>';
+      },
+      /\/files\/0\/deltas\/0\/metric is "<b>x<\/b>"; expected one of "declaredSpan"/,
+    ],
+    [
+      'a spec size that is text',
+      (r: Record<string, unknown> & { files: { head: { spec: { layers: unknown } } }[] }) => {
+        r.files[0]!.head.spec.layers = '<script>';
+      },
+      /\/files\/0\/head\/spec\/layers is "<script>"; expected must be number,null/,
+    ],
+    [
+      'another version',
+      (r: Record<string, unknown>) => {
+        r.version = 2;
+      },
+      /\/version is 2; expected must be equal to constant/,
+    ],
+    [
+      'a remedy changing a field named like markup',
+      (
+        r: Record<string, unknown> & {
+          files: { findings: { remedy?: { change: Record<string, unknown> } | null }[] }[];
+        },
+      ) => {
+        r.files[0]!.findings.find((f) => f.remedy)!.remedy!.change['<img src=x>'] = 1;
+      },
+      /\/files\/0\/findings\/0\/remedy\/change is a mapping; expected must match pattern/,
+    ],
   ])('refuses a report with %s, naming the field', async (_, change, expected) => {
     const before = ours()[0]!.body;
     const { error, out } = await publish(tampered(change as never));
@@ -210,7 +352,11 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
   it.each([
     ['text that is not JSON', '{"version": 1,', /is not a JSON report/],
     ['bytes that are not UTF-8', Uint8Array.from([0x7b, 0xff, 0x7d]), /is not UTF-8 text/],
-    ['JSON nested 100,000 levels deep', `${'['.repeat(100_000)}${']'.repeat(100_000)}`, /the top level is a list; expected must be object/],
+    [
+      'JSON nested 100,000 levels deep',
+      `${'['.repeat(100_000)}${']'.repeat(100_000)}`,
+      /the top level is a list; expected must be object/,
+    ],
   ])('refuses %s', async (_, text, expected) => {
     const { error } = await publish(text);
     expect((error as Error).message).toMatch(expected);
@@ -220,32 +366,46 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
     const path = join(folder, 'huge.json');
     writeFileSync(path, '');
     truncateSync(path, MAX_REPORT_BYTES + 1);
-    const error = await createFileSource(MAX_REPORT_BYTES).read(path).catch((e: unknown) => e);
-    expect((error as Error).message).toMatch(/over the 67108864-byte limit for a model config; it was not read|67108865 bytes is over the 67108864-byte limit/);
+    const error = await createFileSource(MAX_REPORT_BYTES)
+      .read(path)
+      .catch((e: unknown) => e);
+    expect((error as Error).message).toMatch(
+      /over the 67108864-byte limit for a model config; it was not read|67108865 bytes is over the 67108864-byte limit/,
+    );
   });
 
   it('runs only on workflow_run, and publishes nothing for a run that was not on a pull request', async () => {
     const wrongEvent = await publish(reportText, workflowRun(), 'pull_request');
-    expect((wrongEvent.error as Error).message).toMatch(/runs on a workflow_run event .*this run is "pull_request"/);
+    expect((wrongEvent.error as Error).message).toMatch(
+      /runs on a workflow_run event .*this run is "pull_request"/,
+    );
     const push = await publish(reportText, workflowRun({ event: 'push' }));
     expect(push.error).toBeNull();
-    expect(push.out.log.some((l) => l.level === 'notice' && l.message.includes('nothing to publish'))).toBe(true);
+    expect(
+      push.out.log.some((l) => l.level === 'notice' && l.message.includes('nothing to publish')),
+    ).toBe(true);
   });
 });
 
 describe('publish mode in the bundled action (dist/index.js)', () => {
-  it('posts the artifact\'s report from a workflow_run, exit 0, token nowhere', async () => {
+  it("posts the artifact's report from a workflow_run, exit 0, token nowhere", async () => {
     const path = join(folder, 'artifact-report.json');
     writeFileSync(path, reportText);
     const run = await runBundle({
-      eventName: 'workflow_run', event: workflowRun(), workspace: folder, apiUrl: fake.url, repository: `${OWNER}/${REPO}`,
+      eventName: 'workflow_run',
+      event: workflowRun(),
+      workspace: folder,
+      apiUrl: fake.url,
+      repository: `${OWNER}/${REPO}`,
       inputs: { 'github-token': fake.state.token, 'publish-report': path },
     });
     expect(run.code).toBe(0);
     expect(run.outputs.verdict).toBe('block');
     expect(run.outputs['comment-url']).toContain('/pull/7#issuecomment-');
     expect(ours()).toHaveLength(1);
-    const lines = `${run.stdout}\n${run.stderr}`.split('\n').filter((line) => !line.startsWith('::add-mask::'));
+    const lines = `${run.stdout}\n${run.stderr}`
+      .split('\n')
+      .filter((line) => !line.startsWith('::add-mask::'));
     for (const text of [...lines, run.summary]) expect(text).not.toContain(fake.state.token);
   });
 });

@@ -1,6 +1,10 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
-import { runScenario, type ScenarioOptions, type ScenarioResult } from '../support/action-harness.js';
+import {
+  runScenario,
+  type ScenarioOptions,
+  type ScenarioResult,
+} from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 
@@ -10,7 +14,10 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 // against temporary repositories and the loopback API stand-in.
 
 const MODEL = 'models/a/config.json';
-const BLOCKING = { base: { [MODEL]: checkpointConfig() }, head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) } };
+const BLOCKING = {
+  base: { [MODEL]: checkpointConfig() },
+  head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) },
+};
 
 const fakes: FakeGitHub[] = [];
 afterEach(async () => {
@@ -27,38 +34,70 @@ async function scenario(options: Partial<ScenarioOptions> = {}): Promise<Scenari
   return result;
 }
 
-const comments = (r: ScenarioResult) => r.fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
+const comments = (r: ScenarioResult) =>
+  r.fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
 
 describe('a base version that cannot be read fails closed (point 2)', () => {
   it('no history, the base keeps answering 502 past the retries: verdict block, naming the file and the reason', async () => {
-    const result = await scenario({ noHistory: true, prepare: (f) => { f.state.failingReads = new Set([`${[...f.state.trees.keys()][0]!}:${MODEL}`]); } });
+    const result = await scenario({
+      noHistory: true,
+      prepare: (f) => {
+        f.state.failingReads = new Set([`${[...f.state.trees.keys()][0]!}:${MODEL}`]);
+      },
+    });
     expect(result.error).toBeNull();
     expect(result.out.outputs.verdict).toBe('block');
-    expect(result.out.failed).toMatch(/could not judge this change: models\/a\/config\.json could not be read at base [0-9a-f]{40}: GitHub API read models\/a\/config\.json at [0-9a-f]{40} failed with status 502/);
+    expect(result.out.failed).toMatch(
+      /could not judge this change: models\/a\/config\.json could not be read at base [0-9a-f]{40}: GitHub API read models\/a\/config\.json at [0-9a-f]{40} failed with status 502/,
+    );
     expect(comments(result)).toHaveLength(1);
     expect(comments(result)[0]!.body).toContain('Could not judge this change');
   });
 
   it('a base that is absent (404) is still an added file, judged on its head', async () => {
-    const result = await scenario({ noHistory: true, prepare: (f) => { f.state.trees.get([...f.state.trees.keys()][0]!)!.delete(MODEL); } });
+    const result = await scenario({
+      noHistory: true,
+      prepare: (f) => {
+        f.state.trees.get([...f.state.trees.keys()][0]!)!.delete(MODEL);
+      },
+    });
     expect(result.error).toBeNull();
-    expect(JSON.parse(Object.values(result.written)[0]!).files[0]).toMatchObject({ status: 'added', base: null });
+    expect(JSON.parse(Object.values(result.written)[0]!).files[0]).toMatchObject({
+      status: 'added',
+      base: null,
+    });
   });
 });
 
 describe('a policy path that exists but is not a regular file fails closed (point 10)', () => {
   const policy = 'limits:\n  declaredSpan: { max: 8192 }\n';
-  const tree = (side: Record<string, string>) => ({ ...side, 'policies/real.yml': policy, '.github/context-reach.yml': { symlink: '../policies/real.yml' } });
-
-  it.each([[false], [true]])('a symbolic link at the policy path (no history: %s): verdict block, the path named', async (noHistory) => {
-    const result = await scenario({ base: tree(BLOCKING.base), head: tree(BLOCKING.head), noHistory });
-    expect(result.error).toBeNull();
-    expect(result.out.outputs.verdict).toBe('block');
-    expect(result.out.failed).toMatch(/\.github\/context-reach\.yml exists on the base commit but is not a regular file/);
+  const tree = (side: Record<string, string>) => ({
+    ...side,
+    'policies/real.yml': policy,
+    '.github/context-reach.yml': { symlink: '../policies/real.yml' },
   });
 
+  it.each([[false], [true]])(
+    'a symbolic link at the policy path (no history: %s): verdict block, the path named',
+    async (noHistory) => {
+      const result = await scenario({
+        base: tree(BLOCKING.base),
+        head: tree(BLOCKING.head),
+        noHistory,
+      });
+      expect(result.error).toBeNull();
+      expect(result.out.outputs.verdict).toBe('block');
+      expect(result.out.failed).toMatch(
+        /\.github\/context-reach\.yml exists on the base commit but is not a regular file/,
+      );
+    },
+  );
+
   it('a directory at the policy path: verdict block', async () => {
-    const withDir = (side: Record<string, string>) => ({ ...side, '.github/context-reach.yml/inner.yml': policy });
+    const withDir = (side: Record<string, string>) => ({
+      ...side,
+      '.github/context-reach.yml/inner.yml': policy,
+    });
     const result = await scenario({ base: withDir(BLOCKING.base), head: withDir(BLOCKING.head) });
     expect(result.out.outputs.verdict).toBe('block');
     expect(result.out.failed).toMatch(/not a regular file/);
@@ -73,15 +112,25 @@ describe('more changed files than the API lists (point 3)', () => {
     for (let i = 0; i < 3200; i += 1) {
       const path = i === 3100 ? `m${i}/config.json` : `notes/n${String(i).padStart(4, '0')}.txt`;
       base[path] = path.endsWith('.json') ? checkpointConfig() : 'a';
-      head[path] = path.endsWith('.json') ? checkpointConfig({ max_position_embeddings: 16384 }) : 'b';
+      head[path] = path.endsWith('.json')
+        ? checkpointConfig({ max_position_embeddings: 16384 })
+        : 'b';
     }
     return { base, head };
   }
 
   it('no history and GitHub cuts the trees short too: the run fails closed and says why', async () => {
-    const result = await scenario({ ...manyFiles(), noHistory: true, prepare: (f) => { f.state.truncatedTrees = new Set(f.state.trees.keys()); } });
+    const result = await scenario({
+      ...manyFiles(),
+      noHistory: true,
+      prepare: (f) => {
+        f.state.truncatedTrees = new Set(f.state.trees.keys());
+      },
+    });
     expect(result.error).toBeInstanceOf(Error);
-    expect((result.error as Error).message).toMatch(/GitHub lists only the first 3,000 files of this pull request, and the full list could not be read \(.*cut the file tree .* short/);
+    expect((result.error as Error).message).toMatch(
+      /GitHub lists only the first 3,000 files of this pull request, and the full list could not be read \(.*cut the file tree .* short/,
+    );
     expect(result.out.outputs.verdict).not.toBe('ok');
   }, 60_000);
 });
@@ -95,6 +144,8 @@ describe('reading contents in few requests (the read cost)', () => {
     expect(result.fake.calls('repos/get-content')).toHaveLength(0);
     expect(result.fake.calls('pulls/list-files')).toHaveLength(0);
     expect(result.fake.calls('repos/compare-commits-with-basehead')).toHaveLength(1);
-    console.log(`read cost with a shallow fetch: ${result.fake.requests.length} API requests in all (${[...new Set(result.fake.requests.map((r) => r.operationId))].join(', ')})`);
+    console.log(
+      `read cost with a shallow fetch: ${result.fake.requests.length} API requests in all (${[...new Set(result.fake.requests.map((r) => r.operationId))].join(', ')})`,
+    );
   });
 });

@@ -35,14 +35,16 @@ export function numberProblems(report: GateReport): string[] {
       problems.push(...nonFinite(version.metrics, `${file.path}/${side}/metrics`));
       const odd = nonFinite(version.spec, `${file.path}/${side}/spec`);
       const explained = side === 'head' ? file.findings.length > 0 : version.findings.length > 0;
-      if (odd.length > 0 && !explained) problems.push(`${odd.join(', ')} without a finding that explains it`);
+      if (odd.length > 0 && !explained)
+        problems.push(`${odd.join(', ')} without a finding that explains it`);
     }
   }
   return problems;
 }
 
 /** Messages that say why a whole file has no line: it is empty, too long, or not a regular file. */
-const WHOLE_FILE = /is empty|characters long|bytes; expected at most|not a regular file|not UTF-8|UTF-16/;
+const WHOLE_FILE =
+  /is empty|characters long|bytes; expected at most|not a regular file|not UTF-8|UTF-16/;
 
 /** Problems with the findings: unreadable files must be findings naming the file, and the line where there is one. */
 export function findingProblems(report: GateReport): string[] {
@@ -50,10 +52,15 @@ export function findingProblems(report: GateReport): string[] {
   for (const file of report.files) {
     for (const finding of file.findings) {
       if (finding.file !== file.path) problems.push(`${file.path}: finding names ${finding.file}`);
-      if (finding.line !== null && !(Number.isSafeInteger(finding.line) && finding.line >= 1)) problems.push(`${file.path}: line ${finding.line}`);
+      if (finding.line !== null && !(Number.isSafeInteger(finding.line) && finding.line >= 1))
+        problems.push(`${file.path}: line ${finding.line}`);
       if (finding.rule !== 'config-unreadable') continue;
-      if (!finding.message.includes(file.path)) problems.push(`${file.path}: unreadable-file finding does not name the file: ${finding.message}`);
-      if (finding.line === null && !WHOLE_FILE.test(finding.message)) problems.push(`${file.path}: unreadable-file finding without a line: ${finding.message}`);
+      if (!finding.message.includes(file.path))
+        problems.push(
+          `${file.path}: unreadable-file finding does not name the file: ${finding.message}`,
+        );
+      if (finding.line === null && !WHOLE_FILE.test(finding.message))
+        problems.push(`${file.path}: unreadable-file finding without a line: ${finding.message}`);
     }
   }
   return problems;
@@ -81,14 +88,43 @@ const LEAKED = /\bNaN\b|Infinity|undefined|\[object /;
  * element from the pull request, no link but ours (`allowedLink`), no mention or reference, every
  * table row as wide as its header, and no NaN/Infinity/undefined outside quoted texts.
  */
-export function markdownProblems(markdown: string, report: GateReport, allowedLink: RegExp): string[] {
+export function markdownProblems(
+  markdown: string,
+  report: GateReport,
+  allowedLink: RegExp,
+): string[] {
   const problems: string[] = [];
-  if (!markdown.startsWith(`${COMMENT_MARKER}\n`)) problems.push('the marker is not the first line');
-  if (markdown.split('<!--').length !== 2) problems.push(`${markdown.split('<!--').length - 1} HTML comments; expected only the marker`);
+  if (!markdown.startsWith(`${COMMENT_MARKER}\n`))
+    problems.push('the marker is not the first line');
+  if (markdown.split('<!--').length !== 2)
+    problems.push(`${markdown.split('<!--').length - 1} HTML comments; expected only the marker`);
   const html = renderGfm(markdown);
   for (const tag of html.match(/<[a-z][a-z0-9-]*\b[^>]*>/gi) ?? []) {
     const name = /^<([a-z0-9-]+)/i.exec(tag)![1]!.toLowerCase();
-    const allowed = ['p', 'h2', 'h3', 'table', 'thead', 'tbody', 'tr', 'th', 'td', 'code', 'pre', 'strong', 'em', 'ul', 'ol', 'li', 'details', 'summary', 'sub', 'blockquote', 'br', 'hr'];
+    const allowed = [
+      'p',
+      'h2',
+      'h3',
+      'table',
+      'thead',
+      'tbody',
+      'tr',
+      'th',
+      'td',
+      'code',
+      'pre',
+      'strong',
+      'em',
+      'ul',
+      'ol',
+      'li',
+      'details',
+      'summary',
+      'sub',
+      'blockquote',
+      'br',
+      'hr',
+    ];
     if (name === 'a') {
       const href = /href="([^"]*)"/.exec(tag)?.[1] ?? '';
       if (!allowedLink.test(href)) problems.push(`a link the report did not make: ${tag}`);
@@ -99,8 +135,19 @@ export function markdownProblems(markdown: string, report: GateReport, allowedLi
     }
   }
   // GitHub links @name and #123 in text; entities are decoded first, so decode them here too.
-  const entities: Record<string, string> = { '#35': '#', '#64': '@', amp: '&', lt: '<', gt: '>', quot: '"', '#39': "'", '#124': '|' };
-  const text = html.replace(/<[^>]+>/g, ' ').replace(/&(#35|#64|amp|lt|gt|quot|#39|#124);/g, (_, name: string) => entities[name]!);
+  const entities: Record<string, string> = {
+    '#35': '#',
+    '#64': '@',
+    amp: '&',
+    lt: '<',
+    gt: '>',
+    quot: '"',
+    '#39': "'",
+    '#124': '|',
+  };
+  const text = html
+    .replace(/<[^>]+>/g, ' ')
+    .replace(/&(#35|#64|amp|lt|gt|quot|#39|#124);/g, (_, name: string) => entities[name]!);
   for (const found of text.match(/(^|[^\w\u200b])[@#][\p{L}\p{N}_]/gu) ?? []) {
     problems.push(`a mention or reference survives: ${JSON.stringify(found)}`);
   }
@@ -109,7 +156,8 @@ export function markdownProblems(markdown: string, report: GateReport, allowedLi
     const width = (rows[0]?.match(/<th[ >]/g) ?? []).length;
     for (const row of rows.slice(1)) {
       const cells = (row.match(/<td[ >]/g) ?? []).length;
-      if (cells !== width) problems.push(`a table row with ${cells} cells under a ${width}-column header`);
+      if (cells !== width)
+        problems.push(`a table row with ${cells} cells under a ${width}-column header`);
     }
   }
   let rest = markdown;
@@ -118,6 +166,9 @@ export function markdownProblems(markdown: string, report: GateReport, allowedLi
     rest = rest.split(escapeMarkdown(quoted)).join('').split(codeSpan(quoted)).join('');
   }
   const leaked = LEAKED.exec(rest);
-  if (leaked) problems.push(`${JSON.stringify(leaked[0])} outside any quoted text: …${rest.slice(Math.max(0, leaked.index - 80), leaked.index + 40)}…`);
+  if (leaked)
+    problems.push(
+      `${JSON.stringify(leaked[0])} outside any quoted text: …${rest.slice(Math.max(0, leaked.index - 80), leaked.index + 40)}…`,
+    );
   return problems;
 }

@@ -1,4 +1,11 @@
-import { mkdirSync, mkdtempSync, readFileSync, symlinkSync, writeFileSync, lstatSync } from 'node:fs';
+import {
+  mkdirSync,
+  mkdtempSync,
+  readFileSync,
+  symlinkSync,
+  writeFileSync,
+  lstatSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -23,14 +30,18 @@ describe('report files and symbolic links in the checkout', () => {
     const { workspace, canary } = setup();
     mkdirSync(join(workspace, 'context-reach'));
     symlinkSync(canary, join(workspace, 'context-reach', 'report.json'));
-    await expect(writeReportFile('context-reach/report.json', '{"x":1}', workspace, workspace)).rejects.toThrow(/report\.json is a symbolic link; the report is not written through it/);
+    await expect(
+      writeReportFile('context-reach/report.json', '{"x":1}', workspace, workspace),
+    ).rejects.toThrow(/report\.json is a symbolic link; the report is not written through it/);
     expect(readFileSync(canary, 'utf8')).toContain('canary');
   });
 
   it('a symlinked folder on the way: refused, nothing written outside the checkout', async () => {
     const { workspace, outside } = setup();
     symlinkSync(outside, join(workspace, 'reports'));
-    await expect(writeReportFile(join(workspace, 'reports', 'out', 'report.sarif'), '{}', workspace)).rejects.toThrow(/reports in the checkout is a symbolic link/);
+    await expect(
+      writeReportFile(join(workspace, 'reports', 'out', 'report.sarif'), '{}', workspace),
+    ).rejects.toThrow(/reports in the checkout is a symbolic link/);
     expect(() => lstatSync(join(outside, 'out'))).toThrow();
   });
 
@@ -39,7 +50,13 @@ describe('report files and symbolic links in the checkout', () => {
     await writeReportFile('a/b/report.json', 'one', workspace, workspace);
     await writeReportFile('a/b/report.json', 'two', workspace, workspace);
     expect(readFileSync(join(workspace, 'a', 'b', 'report.json'), 'utf8')).toBe('two');
-    await writeReportFile(join(outside, 'temp', 'context-reach', 'report.json'), 'three', workspace);
-    expect(readFileSync(join(outside, 'temp', 'context-reach', 'report.json'), 'utf8')).toBe('three');
+    await writeReportFile(
+      join(outside, 'temp', 'context-reach', 'report.json'),
+      'three',
+      workspace,
+    );
+    expect(readFileSync(join(outside, 'temp', 'context-reach', 'report.json'), 'utf8')).toBe(
+      'three',
+    );
   });
 });

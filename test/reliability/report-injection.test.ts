@@ -4,7 +4,12 @@ import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { runScenario, type ScenarioResult } from '../support/action-harness.js';
 import { startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
 import { pullRequestEvent, runBundle, type BundleRun } from '../support/run-bundle.js';
-import { checkpointConfig, scenarioRepo, type ScenarioRepo, type Tree } from '../support/scenario-repo.js';
+import {
+  checkpointConfig,
+  scenarioRepo,
+  type ScenarioRepo,
+  type Tree,
+} from '../support/scenario-repo.js';
 import { markdownProblems, renderGfm } from './report-checks.js';
 
 // The report as an attack surface: file names, keys, values, a waiver label and notices written
@@ -30,7 +35,8 @@ const HOSTILE_NAMES = [
   'a)www.evil.example **b** ~~c~~',
 ];
 
-const HOSTILE_VALUE = '<img src=x onerror=alert(1)> @someone #123 [x](https://evil.example) <!-- context-reach:pull-request-report -->';
+const HOSTILE_VALUE =
+  '<img src=x onerror=alert(1)> @someone #123 [x](https://evil.example) <!-- context-reach:pull-request-report -->';
 const LABEL = '<script>@someone #9</script>';
 const POLICY = `waiver-label: ${JSON.stringify(LABEL)}\nlimits:\n  cachePerTokenBytes: { max: 1000 }\n`;
 
@@ -40,15 +46,21 @@ function trees(): { base: Tree; head: Tree } {
   HOSTILE_NAMES.forEach((name, i) => {
     const path = `models/${name}/config.json`;
     base[path] = checkpointConfig({ hidden_size: 2048 + i * 0 });
-    head[path] = checkpointConfig({ max_position_embeddings: 8192, [`${name} key`]: HOSTILE_VALUE, ...(i % 2 === 0 ? { hidden_size: HOSTILE_VALUE } : {}) });
+    head[path] = checkpointConfig({
+      max_position_embeddings: 8192,
+      [`${name} key`]: HOSTILE_VALUE,
+      ...(i % 2 === 0 ? { hidden_size: HOSTILE_VALUE } : {}),
+    });
   });
   // A rename from a hostile name (same text but the span, so git pairs the two), a deletion of
   // one, an unknown hostile key in the own dialect, and a file the default globs pick that is not
   // a model (a notice quotes its path).
-  const own = (span: number) => `format: context-reach-model/1\nmodel:\n  name: renamed-model\n  layers: 24\n  hidden: 2048\n  heads: 16\n  kv-heads: 4\n  vocab: 32000\n  feed-forward: { size: 5632, gated: true }\n  position: { code: rotary, base: 10000 }\n  declared-span: ${span}\n  dtypes: { weights: bf16 }\n`;
+  const own = (span: number) =>
+    `format: context-reach-model/1\nmodel:\n  name: renamed-model\n  layers: 24\n  hidden: 2048\n  heads: 16\n  kv-heads: 4\n  vocab: 32000\n  feed-forward: { size: 5632, gated: true }\n  position: { code: rotary, base: 10000 }\n  declared-span: ${span}\n  dtypes: { weights: bf16 }\n`;
   base[`models/old ${HOSTILE_NAMES[2]}/model.reach.yaml`] = own(2048);
   head[`models/new ${HOSTILE_NAMES[3]}/model.reach.yaml`] = own(4096);
-  head[`models/keys ${HOSTILE_NAMES[5]}/model.reach.yaml`] = `format: context-reach-model/1\nmodel:\n  layers: 2\n  hidden: 256\n  heads: 4\n  vocab: 1000\n  declared-span: 4096\n  ${JSON.stringify(HOSTILE_VALUE)}: 1\n`;
+  head[`models/keys ${HOSTILE_NAMES[5]}/model.reach.yaml`] =
+    `format: context-reach-model/1\nmodel:\n  layers: 2\n  hidden: 256\n  heads: 4\n  vocab: 1000\n  declared-span: 4096\n  ${JSON.stringify(HOSTILE_VALUE)}: 1\n`;
   base[`models/gone ${HOSTILE_NAMES[8]}/config.json`] = checkpointConfig();
   head[`web/${HOSTILE_NAMES[4]}/config.json`] = '{"port": 8080}\n';
   return { base, head };
@@ -71,13 +83,18 @@ afterAll(async () => {
 describe('renderComment(report) of a pull request written to inject markup, as the action posts it', () => {
   it('judged every hostile path (the names reached the report, as data)', () => {
     expect(result.error).toBeNull();
-    for (const name of HOSTILE_NAMES) expect(report.files.map((f) => f.path)).toContain(`models/${name}/config.json`);
+    for (const name of HOSTILE_NAMES)
+      expect(report.files.map((f) => f.path)).toContain(`models/${name}/config.json`);
     expect(report.files.some((f) => f.previousPath?.includes(HOSTILE_NAMES[2]!))).toBe(true);
-    expect(report.deleted.map((d) => d.path)).toContain(`models/gone ${HOSTILE_NAMES[8]}/config.json`);
+    expect(report.deleted.map((d) => d.path)).toContain(
+      `models/gone ${HOSTILE_NAMES[8]}/config.json`,
+    );
     expect(report.waiver.applied).toBe(true);
     expect(report.notices.some((n) => n.includes(HOSTILE_NAMES[4]!))).toBe(true);
     // Hostile values are quoted in the findings (so they are in the comment, escaped).
-    expect(report.files.flatMap((f) => f.findings).some((f) => f.message.includes('onerror'))).toBe(true);
+    expect(report.files.flatMap((f) => f.findings).some((f) => f.message.includes('onerror'))).toBe(
+      true,
+    );
   });
 
   it('posts one comment that starts with the marker and holds it nowhere else', () => {
@@ -99,9 +116,24 @@ describe('renderComment(report) of a pull request written to inject markup, as t
   });
 
   it('still shows each hostile name, readable, as text', () => {
-    const text = renderGfm(result.fake.state.comments[0]!.body).replace(/<[^>]+>/g, '').replace(/\u200b/g, '')
-      .replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&#124;/g, '|').replace(/&#35;/g, '#').replace(/&amp;/g, '&');
-    for (const name of ['a|b|c', '<script>alert(1)', '<img src=x onerror=alert(1)>', '@someone and @org', '#123 and GH-7', COMMENT_MARKER]) {
+    const text = renderGfm(result.fake.state.comments[0]!.body)
+      .replace(/<[^>]+>/g, '')
+      .replace(/\u200b/g, '')
+      .replace(/&lt;/g, '<')
+      .replace(/&gt;/g, '>')
+      .replace(/&quot;/g, '"')
+      .replace(/&#39;/g, "'")
+      .replace(/&#124;/g, '|')
+      .replace(/&#35;/g, '#')
+      .replace(/&amp;/g, '&');
+    for (const name of [
+      'a|b|c',
+      '<script>alert(1)',
+      '<img src=x onerror=alert(1)>',
+      '@someone and @org',
+      '#123 and GH-7',
+      COMMENT_MARKER,
+    ]) {
       expect(text).toContain(name);
     }
   });
@@ -111,15 +143,38 @@ describe('the bundled action: a file name that tries to inject workflow commands
   let repo: ScenarioRepo;
   let fake: FakeGitHub;
   let run: BundleRun;
-  const NAME = 'models/x\n::set-output name=verdict::ok\n::add-mask::nothing\n::error file=y::forged/config.json';
+  const NAME =
+    'models/x\n::set-output name=verdict::ok\n::add-mask::nothing\n::error file=y::forged/config.json';
 
   beforeAll(async () => {
-    repo = scenarioRepo({ [NAME]: checkpointConfig() }, { [NAME]: checkpointConfig({ max_position_embeddings: 65536 }) });
+    repo = scenarioRepo(
+      { [NAME]: checkpointConfig() },
+      { [NAME]: checkpointConfig({ max_position_embeddings: 65536 }) },
+    );
     fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
-    fake.state.pulls.set(7, { number: 7, baseSha: repo.base, headSha: repo.head, baseRef: 'main', headRef: 'feature', labels: [], headRepo: 'example-org/model-zoo', files: [{ filename: NAME, status: 'modified' }] });
+    fake.state.pulls.set(7, {
+      number: 7,
+      baseSha: repo.base,
+      headSha: repo.head,
+      baseRef: 'main',
+      headRef: 'feature',
+      labels: [],
+      headRepo: 'example-org/model-zoo',
+      files: [{ filename: NAME, status: 'modified' }],
+    });
     run = await runBundle({
-      eventName: 'pull_request', event: pullRequestEvent({ owner: 'example-org', repo: 'model-zoo', number: 7, base: repo.base, head: repo.head }),
-      workspace: repo.dir, apiUrl: fake.url, repository: 'example-org/model-zoo', inputs: { 'github-token': fake.state.token },
+      eventName: 'pull_request',
+      event: pullRequestEvent({
+        owner: 'example-org',
+        repo: 'model-zoo',
+        number: 7,
+        base: repo.base,
+        head: repo.head,
+      }),
+      workspace: repo.dir,
+      apiUrl: fake.url,
+      repository: 'example-org/model-zoo',
+      inputs: { 'github-token': fake.state.token },
     });
   }, 60_000);
 
@@ -131,7 +186,9 @@ describe('the bundled action: a file name that tries to inject workflow commands
   it('writes no workflow command the file name spells: its newlines are escaped in the annotation', () => {
     expect(run.outputs.verdict).toBe('block');
     const commands = run.stdout.split('\n').filter((line) => line.startsWith('::'));
-    expect(commands.filter((line) => line.startsWith('::add-mask::'))).toEqual([`::add-mask::${fake.state.token}`]);
+    expect(commands.filter((line) => line.startsWith('::add-mask::'))).toEqual([
+      `::add-mask::${fake.state.token}`,
+    ]);
     expect(commands.some((line) => line.startsWith('::set-output'))).toBe(false);
     expect(commands.some((line) => line.startsWith('::error file=y::'))).toBe(false);
     const annotation = run.annotations.find((a) => a.level === 'error');

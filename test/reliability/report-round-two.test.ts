@@ -28,7 +28,10 @@ import { renderGfm } from './report-checks.js';
 // in a name are shown, and the job summary fits GitHub's limit in bytes, not characters.
 
 const MODEL = 'models/a/config.json';
-const BLOCKING = { base: { [MODEL]: checkpointConfig() }, head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) } };
+const BLOCKING = {
+  base: { [MODEL]: checkpointConfig() },
+  head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) },
+};
 
 let first: ScenarioResult;
 let fake: FakeGitHub;
@@ -39,8 +42,13 @@ function workflowRun(pullNumbers: number[] = []) {
   return {
     action: 'completed',
     workflow_run: {
-      id: 4343, name: 'context-reach', event: 'pull_request', status: 'completed', conclusion: 'failure',
-      head_sha: first.head, head_branch: 'feature',
+      id: 4343,
+      name: 'context-reach',
+      event: 'pull_request',
+      status: 'completed',
+      conclusion: 'failure',
+      head_sha: first.head,
+      head_branch: 'feature',
       head_repository: { full_name: `someone-else/${REPO}`, owner: { login: 'someone-else' } },
       pull_requests: pullNumbers.map((number) => ({ number })),
     },
@@ -48,25 +56,43 @@ function workflowRun(pullNumbers: number[] = []) {
   };
 }
 
-async function publish(report: string, payload: unknown = workflowRun()): Promise<{ out: RecordingOutput; error: unknown }> {
+async function publish(
+  report: string,
+  payload: unknown = workflowRun(),
+): Promise<{ out: RecordingOutput; error: unknown }> {
   const path = join(folder, `report-${Math.random().toString(36).slice(2)}.json`);
   writeFileSync(path, report);
   const out = createRecordingOutput();
   let error: unknown = null;
   await runAction({
-    env: { GITHUB_EVENT_NAME: 'workflow_run', GITHUB_EVENT_PATH: 'event.json', GITHUB_API_URL: fake.url, GITHUB_SERVER_URL: 'https://github.example', RUNNER_TEMP: folder },
-    getInput: (name) => ({ 'github-token': fake.state.token, 'publish-report': path } as Record<string, string>)[name] ?? '',
+    env: {
+      GITHUB_EVENT_NAME: 'workflow_run',
+      GITHUB_EVENT_PATH: 'event.json',
+      GITHUB_API_URL: fake.url,
+      GITHUB_SERVER_URL: 'https://github.example',
+      RUNNER_TEMP: folder,
+    },
+    getInput: (name) =>
+      (({ 'github-token': fake.state.token, 'publish-report': path }) as Record<string, string>)[
+        name
+      ] ?? '',
     out,
     readJson: async () => payload,
     readFile: (p, max) => createFileSource(max).read(p),
-    writeFile: async () => { throw new Error('publish mode writes no files'); },
+    writeFile: async () => {
+      throw new Error('publish mode writes no files');
+    },
     createGit: (cwd) => createGitReader(cwd),
     createGitHub: (token, options) => createGitHubClient(token, { ...options, msPerSecond: 1 }),
-  }).catch((caught: unknown) => { error = caught; });
+  }).catch((caught: unknown) => {
+    error = caught;
+  });
   return { out, error };
 }
 
-function tampered(change: (report: Record<string, unknown> & { files: Record<string, unknown>[] }) => void): string {
+function tampered(
+  change: (report: Record<string, unknown> & { files: Record<string, unknown>[] }) => void,
+): string {
   const report = JSON.parse(reportText);
   change(report);
   return JSON.stringify(report);
@@ -76,13 +102,28 @@ const ours = () => fake.state.comments.filter((c) => c.body.startsWith(COMMENT_M
 
 beforeAll(async () => {
   folder = mkdtempSync(join(tmpdir(), 'context-reach-round-two-'));
-  first = await runScenario({ ...BLOCKING, fork: true, readOnly: true, inputs: { comment: 'off' } });
+  first = await runScenario({
+    ...BLOCKING,
+    fork: true,
+    readOnly: true,
+    inputs: { comment: 'off' },
+  });
   fake = first.fake;
   reportText = Object.values(first.written)[0]!;
   fake.state.readOnly = false;
   // The same head in a closed pull request: the payload may name it, GitHub says it is closed.
   fake.state.pulls.delete(7);
-  fake.state.pulls.set(9, { number: 9, baseSha: first.base, headSha: first.head, baseRef: 'main', headRef: 'feature', labels: [], headRepo: `someone-else/${REPO}`, files: [], state: 'closed' });
+  fake.state.pulls.set(9, {
+    number: 9,
+    baseSha: first.base,
+    headSha: first.head,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: [],
+    headRepo: `someone-else/${REPO}`,
+    files: [],
+    state: 'closed',
+  });
 }, 60_000);
 
 afterAll(async () => {
@@ -93,24 +134,71 @@ afterAll(async () => {
 
 describe('publish mode reads back every field to its type and range (point 1)', () => {
   it.each([
-    ['a rule id with a backtick and markup', (r: { files: { findings: { rule: string }[] }[] }) => {
-      r.files[0]!.findings[0]!.rule = 'x` ![t](https://evil.example/p.png) <b>@someone</b> `y';
-    }, /\/files\/0\/findings\/0\/rule is "x` !\[t\].*; expected one of "config-unreadable"/],
-    ['a rule id not in the catalogue', (r: { files: { findings: { rule: string }[] }[] }) => { r.files[0]!.findings[0]!.rule = 'made-up-rule'; }, /\/files\/0\/findings\/0\/rule is "made-up-rule"/],
-    ['a base that is not a commit id', (r: Record<string, unknown>) => { r.base = '` ## Passes `'; }, /\/base is "` ## Passes `"; expected must match pattern/],
-    ['a head that is not a commit id', (r: Record<string, unknown>) => { r.head = `${first.head}\` @x`; }, /\/head is .*; expected must match pattern/],
-    ['a remedy raising text that is no rule', (r: { files: { findings: { remedy?: { raises: string[] } | null }[] }[] }) => {
-      r.files[0]!.findings.find((f) => f.remedy)!.remedy!.raises = ['`<img src=x>`'];
-    }, /\/remedy\/raises\/0 is "`<img src=x>`"; expected must match pattern/],
-    ['a path with a `..` segment', (r: { files: { path: string }[] }) => { r.files[0]!.path = 'models/../../../settings/config.json'; }, /\/files\/0\/path is "models\/\.\.\/\.\.\/\.\.\/settings\/config\.json"; expected must match pattern/],
+    [
+      'a rule id with a backtick and markup',
+      (r: { files: { findings: { rule: string }[] }[] }) => {
+        r.files[0]!.findings[0]!.rule = 'x` ![t](https://evil.example/p.png) <b>@someone</b> `y';
+      },
+      /\/files\/0\/findings\/0\/rule is "x` !\[t\].*; expected one of "config-unreadable"/,
+    ],
+    [
+      'a rule id not in the catalogue',
+      (r: { files: { findings: { rule: string }[] }[] }) => {
+        r.files[0]!.findings[0]!.rule = 'made-up-rule';
+      },
+      /\/files\/0\/findings\/0\/rule is "made-up-rule"/,
+    ],
+    [
+      'a base that is not a commit id',
+      (r: Record<string, unknown>) => {
+        r.base = '` ## Passes `';
+      },
+      /\/base is "` ## Passes `"; expected must match pattern/,
+    ],
+    [
+      'a head that is not a commit id',
+      (r: Record<string, unknown>) => {
+        r.head = `${first.head}\` @x`;
+      },
+      /\/head is .*; expected must match pattern/,
+    ],
+    [
+      'a remedy raising text that is no rule',
+      (r: { files: { findings: { remedy?: { raises: string[] } | null }[] }[] }) => {
+        r.files[0]!.findings.find((f) => f.remedy)!.remedy!.raises = ['`<img src=x>`'];
+      },
+      /\/remedy\/raises\/0 is "`<img src=x>`"; expected must match pattern/,
+    ],
+    [
+      'a path with a `..` segment',
+      (r: { files: { path: string }[] }) => {
+        r.files[0]!.path = 'models/../../../settings/config.json';
+      },
+      /\/files\/0\/path is "models\/\.\.\/\.\.\/\.\.\/settings\/config\.json"; expected must match pattern/,
+    ],
   ])('refuses %s, naming the field, and touches no comment', (_, change, expected) => {
-    const error = (() => { try { readGateJson(tampered(change as never), 'report.json'); return null; } catch (e) { return e as Error; } })();
+    const error = (() => {
+      try {
+        readGateJson(tampered(change as never), 'report.json');
+        return null;
+      } catch (e) {
+        return e as Error;
+      }
+    })();
     expect(error?.message).toMatch(expected);
   });
 
   it('the action refuses such a report: no comment, no summary', async () => {
-    const { error, out } = await publish(tampered((r) => { (r.files[0]!.findings as { rule: string }[])[0]!.rule = 'x` ![t](https://evil.example/p.png) `y'; }), workflowRun([7]));
-    expect((error as Error).message).toMatch(/^Refusing to publish: .*\/files\/0\/findings\/0\/rule is /);
+    const { error, out } = await publish(
+      tampered((r) => {
+        (r.files[0]!.findings as { rule: string }[])[0]!.rule =
+          'x` ![t](https://evil.example/p.png) `y';
+      }),
+      workflowRun([7]),
+    );
+    expect((error as Error).message).toMatch(
+      /^Refusing to publish: .*\/files\/0\/findings\/0\/rule is /,
+    );
     expect(fake.state.comments).toHaveLength(0);
     expect(out.summaries).toEqual([]);
   });
@@ -124,12 +212,14 @@ describe('publish mode reads back every field to its type and range (point 1)', 
 });
 
 describe('publish mode and closed pull requests (point 11)', () => {
-  it('posts nothing to a closed pull request that has the run\'s head, even when the payload names it', async () => {
+  it("posts nothing to a closed pull request that has the run's head, even when the payload names it", async () => {
     const { error, out } = await publish(reportText, workflowRun([9]));
     expect(error).toBeNull();
     expect(fake.state.comments.filter((c) => c.issueNumber === 9)).toHaveLength(0);
     expect(ours()).toHaveLength(0);
-    expect(out.log.some((l) => l.level === 'notice' && /No open pull request has head/.test(l.message))).toBe(true);
+    expect(
+      out.log.some((l) => l.level === 'notice' && /No open pull request has head/.test(l.message)),
+    ).toBe(true);
   });
 });
 
@@ -141,17 +231,33 @@ describe('names from a pull request in links, SARIF and text (point 11)', () => 
 
   const withPath = (path: string): GateReport => ({
     ...report,
-    files: report.files.map((f) => ({ ...f, path, findings: f.findings.map((x) => ({ ...x, file: path })) })),
+    files: report.files.map((f) => ({
+      ...f,
+      path,
+      findings: f.findings.map((x) => ({ ...x, file: path })),
+    })),
   });
 
   it('never links a forged path with `..` segments (the link would reach another page of the host)', () => {
-    const body = renderComment(withPath('models/../../../../settings/tokens'), { blobUrl: 'https://github.example/o/r/blob/0123456789012345678901234567890123456789' });
+    const body = renderComment(withPath('models/../../../../settings/tokens'), {
+      blobUrl: 'https://github.example/o/r/blob/0123456789012345678901234567890123456789',
+    });
     const html = renderGfm(body);
     const hrefs = [...html.matchAll(/href="([^"]*)"/g)].map((m) => m[1]!);
-    expect(hrefs.filter((h) => h.includes('..') || h.includes('%2e') || h.includes('%2E'))).toEqual([]);
+    expect(hrefs.filter((h) => h.includes('..') || h.includes('%2e') || h.includes('%2E'))).toEqual(
+      [],
+    );
     expect(body).toContain('line ');
     // A real path is still linked.
-    expect(renderGfm(renderComment(report, { blobUrl: 'https://github.example/o/r/blob/0123456789012345678901234567890123456789' }))).toMatch(/href="https:\/\/github\.example\/o\/r\/blob\/0{0}0123456789012345678901234567890123456789\/models\/a\/config\.json#L\d+"/);
+    expect(
+      renderGfm(
+        renderComment(report, {
+          blobUrl: 'https://github.example/o/r/blob/0123456789012345678901234567890123456789',
+        }),
+      ),
+    ).toMatch(
+      /href="https:\/\/github\.example\/o\/r\/blob\/0{0}0123456789012345678901234567890123456789\/models\/a\/config\.json#L\d+"/,
+    );
   });
 
   it.each([
@@ -159,26 +265,34 @@ describe('names from a pull request in links, SARIF and text (point 11)', () => 
     ['q?x=1/config.json', 'q%3Fx%3D1/config.json'],
     ['m/%2f..%2fsecret/config.json', 'm/%252f..%252fsecret/config.json'],
     ['sp ace/config.json', 'sp%20ace/config.json'],
-  ])('writes the SARIF location of %s as a URI reference (RFC 3986) that resolves to the same name', (path, uri) => {
-    const sarif = JSON.parse(renderSarif(withPath(path), '0.0.0'));
-    const locations = sarif.runs[0].results.map((r: { locations: { physicalLocation: { artifactLocation: { uri: string } } }[] }) => r.locations[0]!.physicalLocation.artifactLocation.uri);
-    expect(locations.length).toBeGreaterThan(0);
-    for (const location of locations) {
-      expect(location).toBe(uri);
-      // Resolved against a base URI, as a SARIF viewer does: the path comes back whole, no fragment, no query.
-      const resolved = new URL(location, 'file:///src/');
-      expect(resolved.hash).toBe('');
-      expect(resolved.search).toBe('');
-      expect(decodeURIComponent(resolved.pathname.slice('/src/'.length))).toBe(path);
-    }
-  });
+  ])(
+    'writes the SARIF location of %s as a URI reference (RFC 3986) that resolves to the same name',
+    (path, uri) => {
+      const sarif = JSON.parse(renderSarif(withPath(path), '0.0.0'));
+      const locations = sarif.runs[0].results.map(
+        (r: { locations: { physicalLocation: { artifactLocation: { uri: string } } }[] }) =>
+          r.locations[0]!.physicalLocation.artifactLocation.uri,
+      );
+      expect(locations.length).toBeGreaterThan(0);
+      for (const location of locations) {
+        expect(location).toBe(uri);
+        // Resolved against a base URI, as a SARIF viewer does: the path comes back whole, no fragment, no query.
+        const resolved = new URL(location, 'file:///src/');
+        expect(resolved.hash).toBe('');
+        expect(resolved.search).toBe('');
+        expect(decodeURIComponent(resolved.pathname.slice('/src/'.length))).toBe(path);
+      }
+    },
+  );
 
   it('shows bidirectional controls in a name as <U+XXXX> in the comment, HTML report, SARIF, annotations and log', () => {
     // "abc‮nosj.gifnoc" would read as "abccong.json" with the override obeyed.
     const path = 'models/abc\u202enosj.gifnoc/config.json';
     const hostile = withPath(path);
     hostile.files[0]!.findings[0]!.message = `${path} \u2066hidden\u2069 and \u200f`;
-    const comment = renderComment(hostile, { blobUrl: 'https://github.example/o/r/blob/0123456789012345678901234567890123456789' });
+    const comment = renderComment(hostile, {
+      blobUrl: 'https://github.example/o/r/blob/0123456789012345678901234567890123456789',
+    });
     const html = renderHtmlReport(hostile);
     const sarif = renderSarif(hostile, '0.0.0');
     const annotations = planAnnotations(hostile).annotations;
@@ -197,7 +311,10 @@ describe('names from a pull request in links, SARIF and text (point 11)', () => 
   it('shows them in the log and workflow commands the runner prints', () => {
     const lines: string[] = [];
     const write = process.stdout.write.bind(process.stdout);
-    (process.stdout as { write: unknown }).write = (chunk: string) => { lines.push(String(chunk)); return true; };
+    (process.stdout as { write: unknown }).write = (chunk: string) => {
+      lines.push(String(chunk));
+      return true;
+    };
     try {
       const out = createRunnerOutput({});
       out.warning('models/abc\u202enosj.gifnoc/config.json is not a model');
@@ -210,14 +327,18 @@ describe('names from a pull request in links, SARIF and text (point 11)', () => 
   });
 });
 
-describe('the job summary fits GitHub\'s 1 MiB in bytes (point 9)', () => {
+describe("the job summary fits GitHub's 1 MiB in bytes (point 9)", () => {
   let report: GateReport;
   beforeAll(async () => {
     const one = (await gateOver(BLOCKING.base, BLOCKING.head)).report;
     // 3,000 blocking configs with non-Latin folder names (3 bytes of UTF-8 per character).
     const files = Array.from({ length: 3000 }, (_, i) => {
       const path = `模型/${'配置'.repeat(20)}${i}/config.json`;
-      return { ...one.files[0]!, path, findings: one.files[0]!.findings.map((f) => ({ ...f, file: path })) };
+      return {
+        ...one.files[0]!,
+        path,
+        findings: one.files[0]!.findings.map((f) => ({ ...f, file: path })),
+      };
     });
     report = { ...one, files, blocking: one.blocking * 3000 };
   }, 30_000);
@@ -226,12 +347,16 @@ describe('the job summary fits GitHub\'s 1 MiB in bytes (point 9)', () => {
     const started = performance.now();
     const text = fitSummary((limit) => renderComment(report, { limit }));
     const bytes = Buffer.byteLength(text, 'utf8');
-    console.log(`summary of 3,000 blocking configs with non-Latin paths: ${text.length} characters, ${bytes} bytes, ${(performance.now() - started).toFixed(0)} ms`);
+    console.log(
+      `summary of 3,000 blocking configs with non-Latin paths: ${text.length} characters, ${bytes} bytes, ${(performance.now() - started).toFixed(0)} ms`,
+    );
     expect(bytes).toBeLessThanOrEqual(SUMMARY_LIMIT - 16 * 1024);
     expect(bytes).toBeGreaterThan(SUMMARY_LIMIT / 2);
     expect(text).toMatch(/Trimmed to fit GitHub's comment limit/);
     // Before: a character budget of 1 MiB − 1 KiB gave about 2.4 MB for such names.
-    expect(Buffer.byteLength(renderComment(report, { limit: SUMMARY_LIMIT - 1024 }), 'utf8')).toBeGreaterThan(SUMMARY_LIMIT);
+    expect(
+      Buffer.byteLength(renderComment(report, { limit: SUMMARY_LIMIT - 1024 }), 'utf8'),
+    ).toBeGreaterThan(SUMMARY_LIMIT);
   });
 
   it('the summary writer cuts any longer text by bytes, at a character boundary', () => {

@@ -43,28 +43,56 @@ const LINK = /^https:\/\/github\.example\/o\/r\/blob\/c{40}\//;
 function source(pair: GeneratedPair | null): ContentSource {
   const encode = (text: string) => new TextEncoder().encode(text);
   const files: Record<string, Record<string, Uint8Array | null>> = {
-    [BASE]: { [POLICY_PATH]: encode(POLICY), [CONTROL]: encode(CONTROL_BASE), ...(pair ? { [pair.path]: pair.base } : {}) },
-    [HEAD]: { [POLICY_PATH]: encode(POLICY), [CONTROL]: encode(CONTROL_HEAD), ...(pair ? { [pair.path]: pair.head } : {}) },
+    [BASE]: {
+      [POLICY_PATH]: encode(POLICY),
+      [CONTROL]: encode(CONTROL_BASE),
+      ...(pair ? { [pair.path]: pair.base } : {}),
+    },
+    [HEAD]: {
+      [POLICY_PATH]: encode(POLICY),
+      [CONTROL]: encode(CONTROL_HEAD),
+      ...(pair ? { [pair.path]: pair.head } : {}),
+    },
   };
   return { read: async (ref, path) => files[ref]?.[path] ?? null };
 }
 
 function gate(pair: GeneratedPair | null): Promise<GateReport> {
   const changes = [{ status: 'modified' as const, path: CONTROL, previousPath: null }];
-  if (pair) changes.push({ status: pair.base === null ? 'added' as never : 'modified', path: pair.path, previousPath: null });
+  if (pair)
+    changes.push({
+      status: pair.base === null ? ('added' as never) : 'modified',
+      path: pair.path,
+      previousPath: null,
+    });
   return runGate(source(pair), { base: BASE, head: HEAD, changes, policyPath: POLICY_PATH });
 }
 
 /** The control file's decision with nothing else in the pull request. */
 const alone = gate(null).then((report) => report.files.find((f) => f.path === CONTROL)!);
 
-const stats = { runs: 0, clean: 0, readable: 0, unreadable: 0, damaged: 0, findings: 0, blocked: 0, totalMs: 0, maxMs: 0, slowest: '' };
+const stats = {
+  runs: 0,
+  clean: 0,
+  readable: 0,
+  unreadable: 0,
+  damaged: 0,
+  findings: 0,
+  blocked: 0,
+  totalMs: 0,
+  maxMs: 0,
+  slowest: '',
+};
 
 /** When set, each generated pull request is written here before it runs, so a hang names its input. */
 const DUMP = process.env.CONTEXT_REACH_DUMP_CASE;
 
 async function checkOne(pair: GeneratedPair, control: FileDecision): Promise<void> {
-  if (DUMP) writeFileSync(`${DUMP}.${process.pid}`, `${pair.path}\n---base\n${pair.base ? new TextDecoder().decode(pair.base) : 'null'}\n---head\n${new TextDecoder().decode(pair.head)}`);
+  if (DUMP)
+    writeFileSync(
+      `${DUMP}.${process.pid}`,
+      `${pair.path}\n---base\n${pair.base ? new TextDecoder().decode(pair.base) : 'null'}\n---head\n${new TextDecoder().decode(pair.head)}`,
+    );
   const started = performance.now();
   const report = await gate(pair);
   const body = renderComment(report, { blobUrl: 'https://github.example/o/r/blob/' + HEAD });
@@ -75,7 +103,10 @@ async function checkOne(pair: GeneratedPair, control: FileDecision): Promise<voi
 
   const file = report.files.find((f) => f.path === pair.path);
   expect(file, 'the generated file is judged').toBeDefined();
-  expect(report.files.find((f) => f.path === CONTROL), 'the other file is judged as it is alone').toEqual(control);
+  expect(
+    report.files.find((f) => f.path === CONTROL),
+    'the other file is judged as it is alone',
+  ).toEqual(control);
   expect(numberProblems(report)).toEqual([]);
   expect(findingProblems(report)).toEqual([]);
   expect(markdownProblems(body, report, LINK)).toEqual([]);
@@ -102,13 +133,18 @@ export function describeWholePath(part: number, blocks: number, runsPerBlock: nu
     for (let block = 1; block <= blocks; block += 1) {
       it(`block ${block}: runGate → renderComment/renderGateJson/renderSarif finish, explain every odd number, locate every unreadable file, escape everything, and judge the other file as alone`, async () => {
         const control = await alone;
-        await fc.assert(fc.asyncProperty(generatedPair, (pair) => checkOne(pair, control)), { numRuns: runsPerBlock });
+        await fc.assert(
+          fc.asyncProperty(generatedPair, (pair) => checkOne(pair, control)),
+          { numRuns: runsPerBlock },
+        );
       }, 600_000);
     }
 
     afterAll(() => {
       // Figures for docs/reliability.md.
-      console.log(`whole-path property, part ${part}: ${stats.runs} runs, ${stats.readable} read as models, ${stats.unreadable} unreadable (finding with file and line), ${stats.damaged} with damaged bytes, ${stats.blocked} blocked, ${stats.clean} passed or warned, ${stats.findings} findings; mean ${(stats.totalMs / stats.runs).toFixed(2)} ms, max ${stats.maxMs.toFixed(0)} ms per pull request`);
+      console.log(
+        `whole-path property, part ${part}: ${stats.runs} runs, ${stats.readable} read as models, ${stats.unreadable} unreadable (finding with file and line), ${stats.damaged} with damaged bytes, ${stats.blocked} blocked, ${stats.clean} passed or warned, ${stats.findings} findings; mean ${(stats.totalMs / stats.runs).toFixed(2)} ms, max ${stats.maxMs.toFixed(0)} ms per pull request`,
+      );
     });
   });
 }

@@ -39,8 +39,13 @@ const CHECKPOINT_KEYS: Record<string, string[]> = {
 };
 
 const FLAG_KEYS: Record<string, keyof ServingPatch> = {
-  'serving.span': 'span', 'serving.sequences': 'sequences', 'dtypes.cache': 'cache', 'dtypes.positions': 'positions',
-  'serving.tensorParallel': 'tensorParallel', 'serving.pipelineParallel': 'pipelineParallel', 'dtypes.weights': 'weights',
+  'serving.span': 'span',
+  'serving.sequences': 'sequences',
+  'dtypes.cache': 'cache',
+  'dtypes.positions': 'positions',
+  'serving.tensorParallel': 'tensorParallel',
+  'serving.pipelineParallel': 'pipelineParallel',
+  'dtypes.weights': 'weights',
   'quantization.groupSize': 'weightGroupSize',
 };
 
@@ -51,7 +56,10 @@ function edit(path: string, text: string, change: Change): { text: string; flags
     const json = JSON.parse(text) as Record<string, unknown>;
     for (const [key, value] of Object.entries(change)) {
       const at = CHECKPOINT_KEYS[key];
-      if (!at) { (flags as Record<string, unknown>)[FLAG_KEYS[key]!] = value; continue; }
+      if (!at) {
+        (flags as Record<string, unknown>)[FLAG_KEYS[key]!] = value;
+        continue;
+      }
       let node = json;
       for (const part of at.slice(0, -1)) node = (node[part] ??= {}) as Record<string, unknown>;
       node[at[at.length - 1]!] = value;
@@ -72,16 +80,35 @@ function blockingCounts(file: FileDecision): Map<string, number> {
   return counts;
 }
 
-describe('the demo\'s remedies, applied to the files and judged again by the gate', async () => {
+describe("the demo's remedies, applied to the files and judged again by the gate", async () => {
   const { base, head } = demoTrees();
   const { report } = await gateOver(base, head);
-  const rejudge = async (path: string, change: Change): Promise<{ before: FileDecision; after: FileDecision; report: GateReport }> => {
+  const rejudge = async (
+    path: string,
+    change: Change,
+  ): Promise<{ before: FileDecision; after: FileDecision; report: GateReport }> => {
     const edited = edit(path, head[path]!, change);
     const again = await gateOver(base, { ...head, [path]: edited.text }, edited.flags);
-    return { before: report.files.find((f) => f.path === path)!, after: again.report.files.find((f) => f.path === path)!, report: again.report };
+    return {
+      before: report.files.find((f) => f.path === path)!,
+      after: again.report.files.find((f) => f.path === path)!,
+      report: again.report,
+    };
   };
-  const cases = report.files.flatMap((file) => file.findings.filter((f) => f.severity === 'block').flatMap((finding) =>
-    [finding.remedy, ...(finding.remedyAlternatives ?? [])].filter((r) => r).map((remedy, i) => ({ file: file.path, finding, remedy: remedy!, label: `${file.path} ${finding.rule} ${i === 0 ? 'remedy' : `alternative ${i}`}: ${JSON.stringify(remedy!.change)}` }))));
+  const cases = report.files.flatMap((file) =>
+    file.findings
+      .filter((f) => f.severity === 'block')
+      .flatMap((finding) =>
+        [finding.remedy, ...(finding.remedyAlternatives ?? [])]
+          .filter((r) => r)
+          .map((remedy, i) => ({
+            file: file.path,
+            finding,
+            remedy: remedy!,
+            label: `${file.path} ${finding.rule} ${i === 0 ? 'remedy' : `alternative ${i}`}: ${JSON.stringify(remedy!.change)}`,
+          })),
+      ),
+  );
 
   it('proves a remedy for every blocking finding of the demo', () => {
     const blocking = report.files.flatMap((f) => f.findings).filter((f) => f.severity === 'block');
@@ -90,20 +117,29 @@ describe('the demo\'s remedies, applied to the files and judged again by the gat
     expect(cases.length).toBeGreaterThanOrEqual(5);
   });
 
-  it.each(cases.map((c) => [c.label, c] as const))('%s clears its finding, blocks nothing new, and measures what it promised', async (_label, c) => {
-    const { before, after } = await rejudge(c.file, c.remedy.change);
-    const still = after.findings.filter((f) => f.severity === 'block' && f.rule === c.finding.rule && f.metric === c.finding.metric);
-    expect(still).toEqual([]);
-    const was = blockingCounts(before);
-    for (const [id, count] of blockingCounts(after)) expect(count, id).toBeLessThanOrEqual(was.get(id) ?? 0);
-    for (const [metric, value] of Object.entries(c.remedy.metrics)) {
-      expect(metricValue(after.head!.metrics, metric as MetricPath), metric).toBe(value);
-    }
-  });
+  it.each(cases.map((c) => [c.label, c] as const))(
+    '%s clears its finding, blocks nothing new, and measures what it promised',
+    async (_label, c) => {
+      const { before, after } = await rejudge(c.file, c.remedy.change);
+      const still = after.findings.filter(
+        (f) => f.severity === 'block' && f.rule === c.finding.rule && f.metric === c.finding.metric,
+      );
+      expect(still).toEqual([]);
+      const was = blockingCounts(before);
+      for (const [id, count] of blockingCounts(after))
+        expect(count, id).toBeLessThanOrEqual(was.get(id) ?? 0);
+      for (const [metric, value] of Object.entries(c.remedy.metrics)) {
+        expect(metricValue(after.head!.metrics, metric as MetricPath), metric).toBe(value);
+      }
+    },
+  );
 
-  it.each(report.files.filter((f) => f.remedyTogether).map((f) => [f.path, f] as const))('%s: all first remedies together pass the gate', async (path, file) => {
-    expect(file.remedyTogether!.passes).toBe(true);
-    const { after } = await rejudge(path, file.remedyTogether!.change);
-    expect(after.verdict).not.toBe('block');
-  });
+  it.each(report.files.filter((f) => f.remedyTogether).map((f) => [f.path, f] as const))(
+    '%s: all first remedies together pass the gate',
+    async (path, file) => {
+      expect(file.remedyTogether!.passes).toBe(true);
+      const { after } = await rejudge(path, file.remedyTogether!.change);
+      expect(after.verdict).not.toBe('block');
+    },
+  );
 });

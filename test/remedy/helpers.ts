@@ -33,20 +33,40 @@ model:
   feed-forward: { size: 5632, gated: true }
   vocab: 32000
   position:
-${(m.position ?? 'code: rotary\nbase: 10000').split('\n').map((l) => `    ${l}`).join('\n')}
+${(m.position ?? 'code: rotary\nbase: 10000')
+  .split('\n')
+  .map((l) => `    ${l}`)
+  .join('\n')}
   declared-span: ${m.declared ?? 4096}
 ${m.trained !== undefined ? `  trained-span: ${m.trained}\n` : ''}  dtypes: ${m.dtypes ?? '{ weights: bf16, cache: bf16, positions: fp32 }'}
-${m.serving ? `serving:\n${m.serving.split('\n').map((l) => `  ${l}`).join('\n')}\n` : ''}`;
+${
+  m.serving
+    ? `serving:\n${m.serving
+        .split('\n')
+        .map((l) => `  ${l}`)
+        .join('\n')}\n`
+    : ''
+}`;
 }
 
-const CHANGE: ChangedFile = { status: 'modified', path: 'models/m/model.reach.yaml', previousPath: null };
+const CHANGE: ChangedFile = {
+  status: 'modified',
+  path: 'models/m/model.reach.yaml',
+  previousPath: null,
+};
 
 /** A head (and optional base) judged under a policy text, as the gate would: serving defaults and limits applied. */
-export function contextOf(headText: string, options: { base?: string; policy?: string } = {}): { ctx: RemedyContext; head: FileReport; judging: Judging } {
+export function contextOf(
+  headText: string,
+  options: { base?: string; policy?: string } = {},
+): { ctx: RemedyContext; head: FileReport; judging: Judging } {
   let judging = BUILT_IN_JUDGING;
   let serving = {};
   if (options.policy) {
-    const file = resolvePolicy(parsePolicy(options.policy, '.github/context-reach.yml'), CHANGE.path);
+    const file = resolvePolicy(
+      parsePolicy(options.policy, '.github/context-reach.yml'),
+      CHANGE.path,
+    );
     judging = { limits: file.limits, rules: file.rules, standing: file.standing };
     serving = file.serving;
   }
@@ -57,10 +77,25 @@ export function contextOf(headText: string, options: { base?: string; policy?: s
 }
 
 /** The remedy fields of the first blocking finding with `rule` (and `metric`, for limits). */
-export function remedyFor(headText: string, rule: string, options: { base?: string; policy?: string; metric?: string } = {}): RemedyFields & { finding: { rule: string; metric?: string } } {
+export function remedyFor(
+  headText: string,
+  rule: string,
+  options: { base?: string; policy?: string; metric?: string } = {},
+): RemedyFields & { finding: { rule: string; metric?: string } } {
   const { ctx } = contextOf(headText, options);
-  const decision = decideFile({ change: ctx.change, base: ctx.base, head: ctx.head, judging: ctx.judging }, false);
-  const finding = decision.findings.find((f) => f.rule === rule && f.severity === 'block' && (options.metric === undefined || f.metric === options.metric));
-  if (!finding) throw new Error(`no blocking ${rule}${options.metric ? ` on ${options.metric}` : ''} among ${decision.findings.map((f) => `${f.rule}/${f.severity}`).join(', ')}`);
+  const decision = decideFile(
+    { change: ctx.change, base: ctx.base, head: ctx.head, judging: ctx.judging },
+    false,
+  );
+  const finding = decision.findings.find(
+    (f) =>
+      f.rule === rule &&
+      f.severity === 'block' &&
+      (options.metric === undefined || f.metric === options.metric),
+  );
+  if (!finding)
+    throw new Error(
+      `no blocking ${rule}${options.metric ? ` on ${options.metric}` : ''} among ${decision.findings.map((f) => `${f.rule}/${f.severity}`).join(', ')}`,
+    );
   return { ...proposeRemedy(ctx, finding), finding };
 }

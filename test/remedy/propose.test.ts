@@ -14,7 +14,10 @@ describe('proposeRemedy(ctx, finding) for span-past-reach', () => {
   it('adds linear scaling with the smallest whole factor covering the span: ceil(T / L0) (Chen et al. 2023, Eq. 4)', () => {
     // Served 16,384 on a code trained at its declared 4,096: s = L'/L = 16384/4096 = 4.
     const r = remedyFor(modelText({ serving: 'span: 16384' }), 'span-past-reach');
-    expect(r.remedy?.change).toEqual({ 'position.scaling.kind': 'linear', 'position.scaling.factor': 4 });
+    expect(r.remedy?.change).toEqual({
+      'position.scaling.kind': 'linear',
+      'position.scaling.factor': 4,
+    });
     expect(r.remedy?.metrics).toMatchObject({ reach: 16384, headroom: 0 });
     expect(r.remedyWhyNot).toBeNull();
   });
@@ -26,7 +29,12 @@ describe('proposeRemedy(ctx, finding) for span-past-reach', () => {
   });
 
   it('raises the factor of the scaling kind in use (yarn stays yarn)', () => {
-    const yarn = modelText({ position: 'code: rotary\nbase: 1000000\nscaling: { kind: yarn, factor: 4, original-span: 32768 }', declared: 131072, serving: 'span: 262144' });
+    const yarn = modelText({
+      position:
+        'code: rotary\nbase: 1000000\nscaling: { kind: yarn, factor: 4, original-span: 32768 }',
+      declared: 131072,
+      serving: 'span: 262144',
+    });
     const r = remedyFor(yarn, 'span-past-reach');
     expect(r.remedy?.change).toEqual({ 'position.scaling.factor': 8 });
     // Peng et al. 2023 (YaRN) Eq. 22: 0.1 ln(8) + 1 = 1.2079.
@@ -39,7 +47,10 @@ describe('proposeRemedy(ctx, finding) for span-past-reach', () => {
   });
 
   it('gives a learned table only the shorter span, saying nothing else applies', () => {
-    const r = remedyFor(modelText({ position: 'code: learned', declared: 2048, serving: 'span: 4096' }), 'span-past-reach');
+    const r = remedyFor(
+      modelText({ position: 'code: learned', declared: 2048, serving: 'span: 4096' }),
+      'span-past-reach',
+    );
     expect(r.remedy?.change).toEqual({ 'serving.span': 2048 });
     expect(r.remedyAlternatives).toEqual([]);
   });
@@ -53,7 +64,9 @@ describe('proposeRemedy(ctx, finding) for memory-over-budget', () => {
   it('holds the most sequences that fit: floor((device·0.9 − weights) / cache per sequence)', () => {
     const { head } = contextOf(model(24));
     const perSequence = 32768 * 16 * 2 * 4 * 128 * 2;
-    const expected = Math.floor((24 * GIB * 0.9 - (head.metrics.weightBytes as number)) / perSequence);
+    const expected = Math.floor(
+      (24 * GIB * 0.9 - (head.metrics.weightBytes as number)) / perSequence,
+    );
     const r = remedyFor(model(24), 'memory-over-budget');
     expect(r.remedy?.change).toEqual({ 'serving.sequences': expected });
     expect(r.remedy?.metrics.memoryBytes).toBeLessThanOrEqual(24 * GIB * 0.9);
@@ -72,21 +85,30 @@ describe('proposeRemedy(ctx, finding) for memory-over-budget', () => {
     // cache (no fit); 4 stages hold 4 layers, 16 GiB: fits.
     expect(changes[3]).toEqual({ 'serving.tensorParallel': 4 });
     expect(changes[4]).toEqual({ 'serving.pipelineParallel': 4 });
-    expect(r.remedyAlternatives[3]!.cost).toBe('4 devices per replica (tensor-parallel 4 × pipeline-parallel 1), was 1');
+    expect(r.remedyAlternatives[3]!.cost).toBe(
+      '4 devices per replica (tensor-parallel 4 × pipeline-parallel 1), was 1',
+    );
     expect(changes).toHaveLength(5);
     for (const alternative of r.remedyAlternatives) {
-      expect(alternative.metrics.memoryBytesPerDevice ?? alternative.metrics.memoryBytes).toBeLessThanOrEqual(24 * GIB * 0.9);
+      expect(
+        alternative.metrics.memoryBytesPerDevice ?? alternative.metrics.memoryBytes,
+      ).toBeLessThanOrEqual(24 * GIB * 0.9);
     }
   });
 
   it('finds none when the weights alone exceed the device, and says why for each kind', () => {
     const r = remedyFor(model(1), 'memory-over-budget');
     expect(r.remedy).toBeNull();
-    expect(r.remedyWhyNot).toMatch(/^No change found that passes: not even one sequence of 32,768 \(32k\) tokens clears it; even a int4 cache does not clear it; even one key\/value head does not clear it; no served span from 1 to 32,767 tokens clears it; even a tensor-parallel degree of 16 does not clear it; even 16 pipeline stages \(one per layer\) do not clear it; even int4 weights in groups of 128 do not clear it\.$/);
+    expect(r.remedyWhyNot).toMatch(
+      /^No change found that passes: not even one sequence of 32,768 \(32k\) tokens clears it; even a int4 cache does not clear it; even one key\/value head does not clear it; no served span from 1 to 32,767 tokens clears it; even a tensor-parallel degree of 16 does not clear it; even 16 pipeline stages \(one per layer\) do not clear it; even int4 weights in groups of 128 do not clear it\.$/,
+    );
   });
 
   it('answers a fitSequences floor with a dtype, heads or span (holding fewer sequences does not change what fits)', () => {
-    const r = remedyFor(model(80), 'limit-crossed', { metric: 'fitSequences', policy: 'limits:\n  fitSequences: { min: 100 }\n' });
+    const r = remedyFor(model(80), 'limit-crossed', {
+      metric: 'fitSequences',
+      policy: 'limits:\n  fitSequences: { min: 100 }\n',
+    });
     expect(r.remedy?.change).toEqual({ 'dtypes.cache': 'fp8' });
     expect(r.remedy?.metrics.fitSequences).toBeGreaterThanOrEqual(100);
     expect(r.remedyAlternatives.some((a) => 'serving.sequences' in a.change)).toBe(false);
@@ -97,45 +119,72 @@ describe('proposeRemedy(ctx, finding) for a discrimination or separation limit',
   const limit = (min: number) => `limits:\n  discriminationSpan: { min: ${min} }\n`;
 
   it('finds the smallest two-digit base with no negative cosine sum before the limit, and proves it', () => {
-    const r = remedyFor(modelText({ declared: 8192 }), 'limit-crossed', { metric: 'discriminationSpan', policy: limit(8192) });
+    const r = remedyFor(modelText({ declared: 8192 }), 'limit-crossed', {
+      metric: 'discriminationSpan',
+      policy: limit(8192),
+    });
     const base = r.remedy?.change['position.base'] as number;
     // Men et al. 2024, Table 2 (arXiv v1): 8k needs a base of 8.4e4 (SOURCES.md §12).
     expect(base).toBe(84000);
     expect(r.remedy?.metrics.discriminationSpan).toBeNull();
     // The grid step below fails: the remedy is the nearest passing base on the grid.
     const { head } = contextOf(modelText({ declared: 8192 }));
-    expect(computeMetrics(applyChange(head.spec, { 'position.base': 83000 })).discriminationSpan).not.toBeNull();
+    expect(
+      computeMetrics(applyChange(head.spec, { 'position.base': 83000 })).discriminationSpan,
+    ).not.toBeNull();
   });
 
   it('lowers the base for a separation floor, since faster pairs separate neighbours more', () => {
-    const r = remedyFor(modelText({ declared: 8192 }), 'limit-crossed', { metric: 'separationFloor', policy: 'limits:\n  separationFloor: { min: 0.3 }\n' });
+    const r = remedyFor(modelText({ declared: 8192 }), 'limit-crossed', {
+      metric: 'separationFloor',
+      policy: 'limits:\n  separationFloor: { min: 0.3 }\n',
+    });
     expect(r.remedy?.change['position.base']).toBeLessThan(10000);
     expect(r.remedy?.metrics.separationFloor).toBeGreaterThanOrEqual(0.3);
   });
 
   it('searches nothing for a limit on a floor the scans left uncomputed (span past the scan bound), and says why', () => {
-    const r = remedyFor(modelText({ declared: 2 ** 40 }), 'limit-crossed', { metric: 'separationFloor', policy: 'limits:\n  separationFloor: { min: 0.3 }\n' });
+    const r = remedyFor(modelText({ declared: 2 ** 40 }), 'limit-crossed', {
+      metric: 'separationFloor',
+      policy: 'limits:\n  separationFloor: { min: 0.3 }\n',
+    });
     expect(r.finding.metric).toBe('separationFloor');
     expect(r.remedy).toBeNull();
     expect(r.remedyWhyNot).toContain('scan-incomplete');
   });
 
   it('has no base to change on a sinusoidal code', () => {
-    const r = remedyFor(modelText({ position: 'code: sinusoidal', declared: 8192 }), 'limit-crossed', { metric: 'discriminationSpan', policy: limit(8192) });
+    const r = remedyFor(
+      modelText({ position: 'code: sinusoidal', declared: 8192 }),
+      'limit-crossed',
+      { metric: 'discriminationSpan', policy: limit(8192) },
+    );
     expect(r.remedy).toBeNull();
-    expect(r.remedyWhyNot).toBe('No change found that passes: a sinusoidal position code has no base to change.');
+    expect(r.remedyWhyNot).toBe(
+      'No change found that passes: a sinusoidal position code has no base to change.',
+    );
   });
 
   it('rejects a base that clears the limit but raises a finding the policy blocks, and says which', () => {
     const text = modelText({ declared: 8192 });
-    const r = remedyFor(text, 'limit-crossed', { base: text, metric: 'discriminationSpan', policy: `${limit(8192)}rules:\n  frequencies-changed: block\n` });
+    const r = remedyFor(text, 'limit-crossed', {
+      base: text,
+      metric: 'discriminationSpan',
+      policy: `${limit(8192)}rules:\n  frequencies-changed: block\n`,
+    });
     expect(r.remedy).toBeNull();
-    expect(r.remedyWhyNot).toBe('No change found that passes: a rotary base of 84,000 (a retraining-level change) clears it but still blocks on frequencies-changed.');
+    expect(r.remedyWhyNot).toBe(
+      'No change found that passes: a rotary base of 84,000 (a retraining-level change) clears it but still blocks on frequencies-changed.',
+    );
   });
 
   it('lists the warnings a proven base raises', () => {
     const text = modelText({ declared: 8192 });
-    const r = remedyFor(text, 'limit-crossed', { base: text, metric: 'discriminationSpan', policy: limit(8192) });
+    const r = remedyFor(text, 'limit-crossed', {
+      base: text,
+      metric: 'discriminationSpan',
+      policy: limit(8192),
+    });
     expect(r.remedy?.raises).toEqual(['frequencies-changed']);
   });
 });
@@ -155,47 +204,72 @@ describe('proposeRemedy(ctx, finding) for positions-collide', () => {
 });
 
 describe('proposeRemedy(ctx, finding) for span-grew-code-unchanged', () => {
-  it('adds linear scaling from the base version\'s trained span: factor ceil(16384 / 4096) = 4, original span 4096', () => {
-    const r = remedyFor(modelText({ declared: 16384 }), 'span-grew-code-unchanged', { base: modelText({ declared: 4096 }) });
-    expect(r.remedy?.change).toEqual({ 'position.scaling.kind': 'linear', 'position.scaling.factor': 4, 'position.scaling.originalSpan': 4096 });
+  it("adds linear scaling from the base version's trained span: factor ceil(16384 / 4096) = 4, original span 4096", () => {
+    const r = remedyFor(modelText({ declared: 16384 }), 'span-grew-code-unchanged', {
+      base: modelText({ declared: 4096 }),
+    });
+    expect(r.remedy?.change).toEqual({
+      'position.scaling.kind': 'linear',
+      'position.scaling.factor': 4,
+      'position.scaling.originalSpan': 4096,
+    });
     expect(r.remedy?.metrics).toMatchObject({ trainedSpan: 4096, scalingCover: 16384 });
   });
 
   it('finds none for a learned table, which has no scaling factor', () => {
-    const r = remedyFor(modelText({ position: 'code: learned', declared: 2048 }), 'span-grew-code-unchanged', { base: modelText({ position: 'code: learned', declared: 1024 }) });
+    const r = remedyFor(
+      modelText({ position: 'code: learned', declared: 2048 }),
+      'span-grew-code-unchanged',
+      { base: modelText({ position: 'code: learned', declared: 1024 }) },
+    );
     expect(r.remedy).toBeNull();
-    expect(r.remedyWhyNot).toBe('No change found that passes: a learned position code has no scaling factor.');
+    expect(r.remedyWhyNot).toBe(
+      'No change found that passes: a learned position code has no scaling factor.',
+    );
   });
 });
 
 describe('proposeRemedy(ctx, finding) within its work budget', () => {
-  it('runs no proof past what is left of the file\'s budget, and says so', () => {
+  it("runs no proof past what is left of the file's budget, and says so", () => {
     const { ctx } = contextOf(modelText({ serving: 'span: 16384' }));
     ctx.work.left = 1000;
     const finding = ctx.head.findings.find((f) => f.rule === 'span-past-reach')!;
     const r = proposeRemedy(ctx, finding);
     expect(r.remedy).toBeNull();
     // 64 pairs × 16,384 offsets for the factor; 64 × 4,096 for the shorter span.
-    expect(r.remedyWhyNot).toBe('No change found that passes: a linear factor of 4 or more was not proven: its proof would scan 1,048,576 pair·offsets, past what is left of the search\'s budget (2,147,483,648 per finding, 4,294,967,296 per file); serving at most 4,096 (4k) tokens was not proven: its proof would scan 262,144 pair·offsets, past what is left of the search\'s budget (2,147,483,648 per finding, 4,294,967,296 per file).');
+    expect(r.remedyWhyNot).toBe(
+      "No change found that passes: a linear factor of 4 or more was not proven: its proof would scan 1,048,576 pair·offsets, past what is left of the search's budget (2,147,483,648 per finding, 4,294,967,296 per file); serving at most 4,096 (4k) tokens was not proven: its proof would scan 262,144 pair·offsets, past what is left of the search's budget (2,147,483,648 per finding, 4,294,967,296 per file).",
+    );
   });
 });
 
 describe('proposeRemedy(ctx, finding) for other findings', () => {
   it('meets a headroom floor with the factor covering T plus the floor', () => {
-    const r = remedyFor(modelText({ serving: 'span: 4096' }), 'limit-crossed', { metric: 'headroom', policy: 'limits:\n  headroom: { min: 1024 }\n' });
+    const r = remedyFor(modelText({ serving: 'span: 4096' }), 'limit-crossed', {
+      metric: 'headroom',
+      policy: 'limits:\n  headroom: { min: 1024 }\n',
+    });
     // ceil((4096 + 1024) / 4096) = 2.
-    expect(r.remedy?.change).toEqual({ 'position.scaling.kind': 'linear', 'position.scaling.factor': 2 });
+    expect(r.remedy?.change).toEqual({
+      'position.scaling.kind': 'linear',
+      'position.scaling.factor': 2,
+    });
     expect(r.remedyAlternatives.map((a) => a.change)).toEqual([{ 'serving.span': 3072 }]);
   });
 
-  it('searches nothing for a rule about the file itself, and says so with the rule\'s help', () => {
+  it("searches nothing for a rule about the file itself, and says so with the rule's help", () => {
     const r = remedyFor(modelText({ kvHeads: 3 }), 'kv-heads-indivisible');
     expect(r.remedy).toBeNull();
-    expect(r.remedyWhyNot).toMatch(/^no remedy is searched for kv-heads-indivisible: the value itself must be corrected, as the message says\. Grouped-query attention/);
+    expect(r.remedyWhyNot).toMatch(
+      /^no remedy is searched for kv-heads-indivisible: the value itself must be corrected, as the message says\. Grouped-query attention/,
+    );
   });
 
   it('searches nothing for a limit on a metric no change here moves on purpose', () => {
-    const r = remedyFor(modelText(), 'limit-crossed', { metric: 'flopsPerToken', policy: 'limits:\n  flopsPerToken: { max: 1 }\n' });
+    const r = remedyFor(modelText(), 'limit-crossed', {
+      metric: 'flopsPerToken',
+      policy: 'limits:\n  flopsPerToken: { max: 1 }\n',
+    });
     expect(r.remedy).toBeNull();
     expect(r.remedyWhyNot).toMatch(/^no remedy is searched for a limit on flopsPerToken/);
   });

@@ -9,7 +9,10 @@ import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderSarif } from '../../src/core/render/sarif.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 
-function gateOver(files: { path: string; base: Record<string, unknown>; head: Record<string, unknown> }[], extra: Partial<Parameters<typeof decide>[0]> = {}) {
+function gateOver(
+  files: { path: string; base: Record<string, unknown>; head: Record<string, unknown> }[],
+  extra: Partial<Parameters<typeof decide>[0]> = {},
+) {
   const configs: ChangedConfig[] = files.map((f) => ({
     change: { status: 'modified', path: f.path, previousPath: null },
     base: inspectModel(checkpointConfig(f.base), f.path),
@@ -17,13 +20,21 @@ function gateOver(files: { path: string; base: Record<string, unknown>; head: Re
     judging: BUILT_IN_JUDGING,
   }));
   return decide({
-    configs, deleted: [], policy: { source: 'file', path: '.github/context-reach.yml', changedInHead: false },
-    waiver: { label: null, applied: false }, notices: [], base: '1'.repeat(40), head: '2'.repeat(40), ...extra,
+    configs,
+    deleted: [],
+    policy: { source: 'file', path: '.github/context-reach.yml', changedInHead: false },
+    waiver: { label: null, applied: false },
+    notices: [],
+    base: '1'.repeat(40),
+    head: '2'.repeat(40),
+    ...extra,
   });
 }
 
 describe('renderComment(report)', () => {
-  const report = gateOver([{ path: 'models/a/config.json', base: {}, head: { max_position_embeddings: 8192 } }]);
+  const report = gateOver([
+    { path: 'models/a/config.json', base: {}, head: { max_position_embeddings: 8192 } },
+  ]);
   const body = renderComment(report, { blobUrl: 'https://github.example/o/r/blob/222' });
   const lines = body.split('\n');
 
@@ -34,20 +45,33 @@ describe('renderComment(report)', () => {
 
   it('lists what blocks with a link to the line at the head commit, then the message', () => {
     const at = lines.findIndex((l) => l.startsWith('**1.** <code>models/a/config.json</code>'));
-    expect(lines[at]).toBe('**1.** <code>models/a/config.json</code> [line 10](https://github.example/o/r/blob/222/models/a/config.json#L10) <code>max\\_position\\_embeddings</code> · `span-grew-code-unchanged`  ');
-    expect(lines[at + 1]).toBe('The declared span grew from 4,096 to 8,192 tokens while the position code \\(rotary, base 10,000, no scaling\\) stayed the same; add or raise context scaling so the code reaches 8,192, or state the trained span if the model was trained that long.');
+    expect(lines[at]).toBe(
+      '**1.** <code>models/a/config.json</code> [line 10](https://github.example/o/r/blob/222/models/a/config.json#L10) <code>max\\_position\\_embeddings</code> · `span-grew-code-unchanged`  ',
+    );
+    expect(lines[at + 1]).toBe(
+      'The declared span grew from 4,096 to 8,192 tokens while the position code \\(rotary, base 10,000, no scaling\\) stayed the same; add or raise context scaling so the code reaches 8,192, or state the trained span if the model was trained that long.',
+    );
   });
 
   it('has a table row per changed metric with base, head and change; the inherited trained span is marked assumed', () => {
     const rows = lines.filter((l) => l.startsWith('|`')).map((l) => l.split('|').slice(1, -1));
-    expect(rows).toContainEqual(['`declaredSpan`', '4,096 (4k)', '8,192 (8k)', '+4,096 (+100 %)', '', '']);
+    expect(rows).toContainEqual([
+      '`declaredSpan`',
+      '4,096 (4k)',
+      '8,192 (8k)',
+      '+4,096 (+100 %)',
+      '',
+      '',
+    ]);
     expect(rows).toContainEqual(['`trainedSpan`', '4,096 (4k)', '4,096 (4k) *assumed*']);
   });
 
   it('draws no memory chart where memory is not at issue, and keeps the file sections and other metrics collapsed', () => {
     expect(body).not.toContain('```mermaid');
     expect(body).toContain('<details><summary>Other metrics</summary>');
-    expect(body).toContain('<details><summary>■ <code>models/a/config.json</code>: 1 blocking</summary>');
+    expect(body).toContain(
+      '<details><summary>■ <code>models/a/config.json</code>: 1 blocking</summary>',
+    );
   });
 
   it('says the metrics are estimates, not a guarantee', () => {
@@ -59,20 +83,32 @@ describe('renderComment(report)', () => {
     expect((html.match(/<details/g) ?? []).length).toBe((html.match(/<\/details>/g) ?? []).length);
   });
 
-  it('stays under GitHub\'s 65,536-character limit and says what it trimmed', () => {
-    const many = gateOver(Array.from({ length: 60 }, (_, i) => ({ path: `models/m${i}/config.json`, base: {}, head: { max_position_embeddings: 8192, rope_theta: 20000 + i } })));
+  it("stays under GitHub's 65,536-character limit and says what it trimmed", () => {
+    const many = gateOver(
+      Array.from({ length: 60 }, (_, i) => ({
+        path: `models/m${i}/config.json`,
+        base: {},
+        head: { max_position_embeddings: 8192, rope_theta: 20000 + i },
+      })),
+    );
     const full = renderComment(many, { limit: Infinity });
     expect(full.length).toBeGreaterThan(COMMENT_LIMIT);
     const trimmed = renderComment(many);
     expect(trimmed.length).toBeLessThanOrEqual(COMMENT_LIMIT);
-    expect(trimmed).toContain('Trimmed to fit GitHub\'s comment limit');
+    expect(trimmed).toContain("Trimmed to fit GitHub's comment limit");
     expect(trimmed.split('\n')[0]).toBe(COMMENT_MARKER);
   });
 });
 
 describe('renderComment(report) with hundreds of blocking files', () => {
   it('lists the first 20 blockers, names the rest by count, and stays under the limit', () => {
-    const many = gateOver(Array.from({ length: 300 }, (_, i) => ({ path: `models/family-${i}/variant/config.json`, base: {}, head: { max_position_embeddings: 8192 } })));
+    const many = gateOver(
+      Array.from({ length: 300 }, (_, i) => ({
+        path: `models/family-${i}/variant/config.json`,
+        base: {},
+        head: { max_position_embeddings: 8192 },
+      })),
+    );
     const body = renderComment(many);
     expect(body.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(body.split('\n')[0]).toBe(COMMENT_MARKER);
@@ -85,25 +121,41 @@ describe('renderComment(report) with hundreds of blocking files', () => {
 describe('planAnnotations(report)', () => {
   it('keeps at most 10 per level, errors first, and counts the rest', () => {
     // A longer span (block) and a narrower rotary width (warn) in each of 14 files.
-    const many = gateOver(Array.from({ length: 14 }, (_, i) => ({ path: `m${i}.json`, base: {}, head: { max_position_embeddings: 8192, head_dim: 64 } })));
+    const many = gateOver(
+      Array.from({ length: 14 }, (_, i) => ({
+        path: `m${i}.json`,
+        base: {},
+        head: { max_position_embeddings: 8192, head_dim: 64 },
+      })),
+    );
     const { annotations, omitted } = planAnnotations(many);
     expect(annotations.filter((a) => a.level === 'error')).toHaveLength(10);
     expect(annotations.filter((a) => a.level === 'warning')).toHaveLength(10);
     expect(annotations[0]!.level).toBe('error');
-    expect(omitted).toBe(many.files.flatMap((f) => f.findings).filter((f) => f.counts !== null).length - annotations.length);
+    expect(omitted).toBe(
+      many.files.flatMap((f) => f.findings).filter((f) => f.counts !== null).length -
+        annotations.length,
+    );
     expect(omitted).toBeGreaterThan(0);
   });
 });
 
 describe('renderSarif(report)', () => {
   it('writes SARIF 2.1.0 with rule metadata and a result per finding at its line', () => {
-    const report = gateOver([{ path: 'models/a/config.json', base: {}, head: { max_position_embeddings: 8192 } }]);
+    const report = gateOver([
+      { path: 'models/a/config.json', base: {}, head: { max_position_embeddings: 8192 } },
+    ]);
     const sarif = JSON.parse(renderSarif(report, '0.1.0'));
     expect(sarif.version).toBe('2.1.0');
     const run = sarif.runs[0];
-    const result = run.results.find((r: { ruleId: string }) => r.ruleId === 'span-grew-code-unchanged');
+    const result = run.results.find(
+      (r: { ruleId: string }) => r.ruleId === 'span-grew-code-unchanged',
+    );
     expect(result.level).toBe('error');
-    expect(result.locations[0].physicalLocation).toEqual({ artifactLocation: { uri: 'models/a/config.json', uriBaseId: '%SRCROOT%' }, region: { startLine: 10 } });
+    expect(result.locations[0].physicalLocation).toEqual({
+      artifactLocation: { uri: 'models/a/config.json', uriBaseId: '%SRCROOT%' },
+      region: { startLine: 10 },
+    });
     expect(run.tool.driver.rules[result.ruleIndex].id).toBe('span-grew-code-unchanged');
   });
 });

@@ -57,14 +57,19 @@ describe('escapeMarkdown(text)', () => {
   it('prints the same visible text (zero-width spaces aside) for plain punctuation', () => {
     const input = 'rope_scaling.factor = 4 (was 2) [ok] *x* -1 + 2 ! ~';
     const html = render(escapeMarkdown(input));
-    const text = html.replace(/<\/?p>/g, '').replace(/\u200b/g, '').trim();
+    const text = html
+      .replace(/<\/?p>/g, '')
+      .replace(/\u200b/g, '')
+      .trim();
     expect(text).toBe(input);
   });
 });
 
 describe('escapeHtml(text)', () => {
   it('escapes the five HTML-significant characters', () => {
-    expect(escapeHtml(`<a href="x" title='y'>&</a>`)).toBe('&lt;a href=&quot;x&quot; title=&#39;y&#39;&gt;&amp;&lt;/a&gt;');
+    expect(escapeHtml(`<a href="x" title='y'>&</a>`)).toBe(
+      '&lt;a href=&quot;x&quot; title=&#39;y&#39;&gt;&amp;&lt;/a&gt;',
+    );
   });
 });
 
@@ -84,8 +89,12 @@ describe('encodePath(path)', () => {
 
   it('encodes the parentheses that would end a markdown link target, and what markdown reads as emphasis', () => {
     // RFC 3986 §2.3 leaves only ALPHA, DIGIT, "-", ".", "_", "~" unreserved; "~" is encoded too as GFM strikethrough.
-    expect(encodePath("a)www.evil.example **b** ~~c~~!'(")).toBe('a%29www.evil.example%20%2A%2Ab%2A%2A%20%7E%7Ec%7E%7E%21%27%28');
-    const html = render(`[line 1](https://github.example/o/r/blob/1/${encodePath('a)www.evil.example **b**/config.json')}#L3)`);
+    expect(encodePath("a)www.evil.example **b** ~~c~~!'(")).toBe(
+      'a%29www.evil.example%20%2A%2Ab%2A%2A%20%7E%7Ec%7E%7E%21%27%28',
+    );
+    const html = render(
+      `[line 1](https://github.example/o/r/blob/1/${encodePath('a)www.evil.example **b**/config.json')}#L3)`,
+    );
     expect(html.match(/<a /g)).toHaveLength(1);
     expect(html).not.toMatch(/<(strong|em|del)>/);
   });

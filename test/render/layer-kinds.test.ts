@@ -12,7 +12,14 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 function textOf(name: string, span?: number): string {
   const r = readModel(fixture(name), name);
   const spec = span === undefined ? r.spec : { ...r.spec, serving: { ...r.spec.serving, span } };
-  return renderFileText({ path: name, dialect: r.dialect, spec, metrics: computeMetrics(spec), findings: r.findings, locations: r.locations } as never);
+  return renderFileText({
+    path: name,
+    dialect: r.dialect,
+    spec,
+    metrics: computeMetrics(spec),
+    findings: r.findings,
+    locations: r.locations,
+  } as never);
 }
 
 describe('renderFileText shows layer kinds and shapes', () => {
@@ -31,7 +38,9 @@ describe('renderFileText shows layer kinds and shapes', () => {
   });
 
   it('names latent attention and encoder-only stacks in the header', () => {
-    expect(textOf('deepseek-v2-lite-latent.json', 4096)).toContain('6 of 64 experts × 1,408 + 2 shared, 1 dense layer · latent attention, cache 512 + 64 per token and layer');
+    expect(textOf('deepseek-v2-lite-latent.json', 4096)).toContain(
+      '6 of 64 experts × 1,408 + 2 shared, 1 dense layer · latent attention, cache 512 + 64 per token and layer',
+    );
     expect(textOf('bert-absolute.json')).toContain('encoder-only, no decoding cache');
     expect(textOf('llama2-7b-shape.json')).not.toContain('Layer kinds');
   });
@@ -43,21 +52,42 @@ async function report(head: Record<string, unknown>): Promise<GateReport> {
     ['b'.repeat(40)]: { [path]: new TextEncoder().encode(checkpointConfig()) },
     ['c'.repeat(40)]: { [path]: new TextEncoder().encode(checkpointConfig(head)) },
   };
-  return runGate({ read: async (ref, p) => files[ref]?.[p] ?? null }, {
-    base: 'b'.repeat(40), head: 'c'.repeat(40), changes: [{ status: 'modified', path, previousPath: null }], policyPath: 'p.yml',
-  });
+  return runGate(
+    { read: async (ref, p) => files[ref]?.[p] ?? null },
+    {
+      base: 'b'.repeat(40),
+      head: 'c'.repeat(40),
+      changes: [{ status: 'modified', path, previousPath: null }],
+      policyPath: 'p.yml',
+    },
+  );
 }
 
 describe('readGateJson keeps the new shapes', () => {
   it('reads back latent attention, experts widths, layer kinds and their metrics as written', async () => {
     const original = await report({
-      kv_lora_rank: 512, qk_rope_head_dim: 64, qk_nope_head_dim: 128, v_head_dim: 128,
-      n_routed_experts: 8, num_experts_per_tok: 2, moe_intermediate_size: 1024, n_shared_experts: 1,
-      sliding_window: 1024, layer_types: Array.from({ length: 16 }, (_, i) => (i % 4 === 3 ? 'full_attention' : 'sliding_attention')),
+      kv_lora_rank: 512,
+      qk_rope_head_dim: 64,
+      qk_nope_head_dim: 128,
+      v_head_dim: 128,
+      n_routed_experts: 8,
+      num_experts_per_tok: 2,
+      moe_intermediate_size: 1024,
+      n_shared_experts: 1,
+      sliding_window: 1024,
+      layer_types: Array.from({ length: 16 }, (_, i) =>
+        i % 4 === 3 ? 'full_attention' : 'sliding_attention',
+      ),
       rope_local_base_freq: 10000,
     });
     const head = original.files[0]!.head!;
-    expect(head.spec.latent).toEqual({ kvRank: 512, qRank: null, ropeDim: 64, nopeDim: 128, valueDim: 128 });
+    expect(head.spec.latent).toEqual({
+      kvRank: 512,
+      qRank: null,
+      ropeDim: 64,
+      nopeDim: 128,
+      valueDim: 128,
+    });
     expect(head.metrics.layerKinds!.length).toBe(2);
     const back = readGateJson(renderGateJson(original), 'report.json').files[0]!.head!;
     expect(back.spec.latent).toEqual(head.spec.latent);

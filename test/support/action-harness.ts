@@ -57,7 +57,8 @@ function pullFiles(base: Tree, head: Tree): FakePullFile[] {
   for (const path of new Set([...Object.keys(base), ...Object.keys(head)])) {
     if (!(path in head)) files.push({ filename: path, status: 'removed' });
     else if (!(path in base)) files.push({ filename: path, status: 'added' });
-    else if (String(base[path]) !== String(head[path])) files.push({ filename: path, status: 'modified' });
+    else if (String(base[path]) !== String(head[path]))
+      files.push({ filename: path, status: 'modified' });
   }
   return files;
 }
@@ -68,15 +69,30 @@ function pullFiles(base: Tree, head: Tree): FakePullFile[] {
  */
 export async function runScenario(options: ScenarioOptions): Promise<ScenarioResult> {
   const repo = scenarioRepo(options.base, options.head);
-  const fake = options.fake ?? await startFakeGitHub({ owner: OWNER, repo: REPO });
+  const fake = options.fake ?? (await startFakeGitHub({ owner: OWNER, repo: REPO }));
   fake.state.readOnly = options.readOnly ?? false;
   fake.state.pulls.set(7, {
-    number: 7, baseSha: repo.base, headSha: repo.head, baseRef: 'main', headRef: 'feature',
-    labels: options.labels ?? [], headRepo: options.fork ? `someone-else/${REPO}` : `${OWNER}/${REPO}`,
+    number: 7,
+    baseSha: repo.base,
+    headSha: repo.head,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: options.labels ?? [],
+    headRepo: options.fork ? `someone-else/${REPO}` : `${OWNER}/${REPO}`,
     files: pullFiles(options.base, options.head),
   });
   const { tree } = await import('./fake-github.js');
-  const asFakeTree = (t: Tree) => tree(Object.fromEntries(Object.entries(t).map(([p, v]) => [p, typeof v === 'object' && !(v instanceof Uint8Array) ? { type: 'symlink' as const, target: v.symlink } : v])));
+  const asFakeTree = (t: Tree) =>
+    tree(
+      Object.fromEntries(
+        Object.entries(t).map(([p, v]) => [
+          p,
+          typeof v === 'object' && !(v instanceof Uint8Array)
+            ? { type: 'symlink' as const, target: v.symlink }
+            : v,
+        ]),
+      ),
+    );
   fake.state.trees.set(repo.base, asFakeTree(options.base));
   fake.state.trees.set(repo.head, asFakeTree(options.head));
   options.prepare?.(fake);
@@ -88,17 +104,36 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
   try {
     await runAction({
       env: {
-        GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: 'event.json', GITHUB_API_URL: fake.url,
-        GITHUB_SERVER_URL: 'https://github.example', RUNNER_TEMP: temp,
-        GITHUB_WORKSPACE: options.emptyClone ? emptyClone(repo.dir) : options.noHistory ? mkdtempSync(join(tmpdir(), 'context-reach-empty-')) : repo.dir,
+        GITHUB_EVENT_NAME: 'pull_request',
+        GITHUB_EVENT_PATH: 'event.json',
+        GITHUB_API_URL: fake.url,
+        GITHUB_SERVER_URL: 'https://github.example',
+        RUNNER_TEMP: temp,
+        GITHUB_WORKSPACE: options.emptyClone
+          ? emptyClone(repo.dir)
+          : options.noHistory
+            ? mkdtempSync(join(tmpdir(), 'context-reach-empty-'))
+            : repo.dir,
       },
       getInput: (name) => inputs[name] ?? '',
       out,
-      readJson: async () => pullRequestEvent({ owner: OWNER, repo: REPO, number: 7, base: repo.base, head: repo.head, labels: options.labels, fork: options.fork }),
+      readJson: async () =>
+        pullRequestEvent({
+          owner: OWNER,
+          repo: REPO,
+          number: 7,
+          base: repo.base,
+          head: repo.head,
+          labels: options.labels,
+          fork: options.fork,
+        }),
       readFile: (path, maxBytes) => createFileSource(maxBytes).read(path),
-      writeFile: async (path, text) => { written[path] = text; },
+      writeFile: async (path, text) => {
+        written[path] = text;
+      },
       createGit: (cwd) => createGitReader(cwd),
-      createGitHub: (token, clientOptions) => createGitHubClient(token, { ...clientOptions, msPerSecond: 1 }),
+      createGitHub: (token, clientOptions) =>
+        createGitHubClient(token, { ...clientOptions, msPerSecond: 1 }),
     });
   } catch (caught) {
     error = caught;

@@ -28,14 +28,24 @@ export function demoTrees(): { base: Record<string, string>; head: Record<string
 }
 
 /** Runs the gate over a base and a head tree in a temporary git repository, as `diff` does. */
-export async function gateOver(base: Tree, head: Tree, overrides?: ServingPatch): Promise<{ report: GateReport; repo: ScenarioRepo }> {
+export async function gateOver(
+  base: Tree,
+  head: Tree,
+  overrides?: ServingPatch,
+): Promise<{ report: GateReport; repo: ScenarioRepo }> {
   const repo = scenarioRepo(base, head);
   const git = createGitReader(repo.dir);
   try {
-    const report = await runGate({ read: (ref, path) => git.show(ref, path) }, {
-      base: repo.base, head: repo.head, changes: await git.changedFiles(repo.base, repo.head),
-      policyPath: '.github/context-reach.yml', overrides,
-    });
+    const report = await runGate(
+      { read: (ref, path) => git.show(ref, path) },
+      {
+        base: repo.base,
+        head: repo.head,
+        changes: await git.changedFiles(repo.base, repo.head),
+        policyPath: '.github/context-reach.yml',
+        overrides,
+      },
+    );
     return { report, repo };
   } finally {
     repo.remove();

@@ -157,8 +157,10 @@ export function secondaryRateLimit(seconds: number): StatusFault {
     status: 403,
     headers: { 'retry-after': String(seconds) },
     body: {
-      message: 'You have exceeded a secondary rate limit. Please wait a few minutes before you try again.',
-      documentation_url: 'https://docs.github.com/rest/overview/rate-limits-for-the-rest-api#about-secondary-rate-limits',
+      message:
+        'You have exceeded a secondary rate limit. Please wait a few minutes before you try again.',
+      documentation_url:
+        'https://docs.github.com/rest/overview/rate-limits-for-the-rest-api#about-secondary-rate-limits',
     },
   };
 }
@@ -169,7 +171,10 @@ export function primaryRateLimit(resetEpochSeconds: number): StatusFault {
     kind: 'status',
     status: 403,
     headers: { 'x-ratelimit-remaining': '0', 'x-ratelimit-reset': String(resetEpochSeconds) },
-    body: { message: 'API rate limit exceeded for installation.', documentation_url: 'https://docs.github.com/rest/overview/rate-limits-for-the-rest-api' },
+    body: {
+      message: 'API rate limit exceeded for installation.',
+      documentation_url: 'https://docs.github.com/rest/overview/rate-limits-for-the-rest-api',
+    },
   };
 }
 
@@ -199,7 +204,11 @@ function rightLines(patch: string): Set<number> {
   let inHunk = false;
   for (const row of patch.split('\n')) {
     const hunk = /^@@ -\d+(?:,\d+)? \+(\d+)(?:,\d+)? @@/.exec(row);
-    if (hunk) { right = Number(hunk[1]); inHunk = true; continue; }
+    if (hunk) {
+      right = Number(hunk[1]);
+      inHunk = true;
+      continue;
+    }
     if (!inHunk || row.startsWith('-') || row.startsWith('\\')) continue;
     out.add(right);
     right += 1;
@@ -214,12 +223,20 @@ function blobSha(bytes: Uint8Array): string {
 
 /** GitHub wraps base64 content at 60 characters a line. */
 function wrappedBase64(bytes: Uint8Array): string {
-  return (Buffer.from(bytes).toString('base64').match(/.{1,60}/g) ?? []).join('\n') + '\n';
+  return (
+    (
+      Buffer.from(bytes)
+        .toString('base64')
+        .match(/.{1,60}/g) ?? []
+    ).join('\n') + '\n'
+  );
 }
 
 function deepMerge(target: unknown, patch: unknown): unknown {
   if (patch === null || typeof patch !== 'object' || Array.isArray(patch)) return patch;
-  const out: Record<string, unknown> = { ...((target && typeof target === 'object' && !Array.isArray(target)) ? target as object : {}) };
+  const out: Record<string, unknown> = {
+    ...(target && typeof target === 'object' && !Array.isArray(target) ? (target as object) : {}),
+  };
   for (const [key, value] of Object.entries(patch)) out[key] = deepMerge(out[key], value);
   return out;
 }
@@ -257,44 +274,70 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
   const faults = new Map<string, Fault[]>();
   let url = '';
 
-  const userObject = (user: FakeUser): unknown => deepMerge(sampleOf('simple-user'), {
-    login: user.login, id: user.id, type: user.type, node_id: `U_${user.id}`,
-    url: `${url}/users/${encodeURIComponent(user.login)}`, html_url: `${url}/${encodeURIComponent(user.login)}`,
-  });
+  const userObject = (user: FakeUser): unknown =>
+    deepMerge(sampleOf('simple-user'), {
+      login: user.login,
+      id: user.id,
+      type: user.type,
+      node_id: `U_${user.id}`,
+      url: `${url}/users/${encodeURIComponent(user.login)}`,
+      html_url: `${url}/${encodeURIComponent(user.login)}`,
+    });
 
-  const commentObject = (comment: FakeComment): unknown => deepMerge(sampleOf('issue-comment'), {
-    id: comment.id,
-    node_id: `IC_${comment.id}`,
-    url: `${url}/repos/${state.owner}/${state.repo}/issues/comments/${comment.id}`,
-    html_url: `${url}/${state.owner}/${state.repo}/pull/${comment.issueNumber}#issuecomment-${comment.id}`,
-    issue_url: `${url}/repos/${state.owner}/${state.repo}/issues/${comment.issueNumber}`,
-    body: comment.body,
-    user: userObject(comment.user),
-    created_at: comment.createdAt,
-    updated_at: comment.updatedAt,
-    author_association: 'NONE',
-  });
+  const commentObject = (comment: FakeComment): unknown =>
+    deepMerge(sampleOf('issue-comment'), {
+      id: comment.id,
+      node_id: `IC_${comment.id}`,
+      url: `${url}/repos/${state.owner}/${state.repo}/issues/comments/${comment.id}`,
+      html_url: `${url}/${state.owner}/${state.repo}/pull/${comment.issueNumber}#issuecomment-${comment.id}`,
+      issue_url: `${url}/repos/${state.owner}/${state.repo}/issues/${comment.issueNumber}`,
+      body: comment.body,
+      user: userObject(comment.user),
+      created_at: comment.createdAt,
+      updated_at: comment.updatedAt,
+      author_association: 'NONE',
+    });
 
-  const reviewCommentObject = (comment: FakeReviewComment): unknown => deepMerge(sampleOf('pull-request-review-comment'), {
-    id: comment.id, node_id: `PRRC_${comment.id}`, pull_request_review_id: comment.id + 1,
-    url: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}`,
-    html_url: `${url}/${state.owner}/${state.repo}/pull/${comment.pullNumber}#discussion_r${comment.id}`,
-    pull_request_url: `${url}/repos/${state.owner}/${state.repo}/pulls/${comment.pullNumber}`,
-    diff_hunk: '@@ -1 +1 @@', path: comment.path, commit_id: comment.commitId, original_commit_id: comment.commitId,
-    user: userObject(comment.user), body: comment.body, created_at: '2024-01-01T00:00:00Z', updated_at: '2024-01-01T00:00:00Z',
-    author_association: 'NONE', line: comment.line, original_line: comment.line, side: 'RIGHT',
-    start_line: comment.startLine, original_start_line: comment.startLine, start_side: comment.startLine === null ? null : 'RIGHT',
-    _links: {
-      self: { href: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}` },
-      html: { href: `${url}/${state.owner}/${state.repo}/pull/${comment.pullNumber}#discussion_r${comment.id}` },
-      pull_request: { href: `${url}/repos/${state.owner}/${state.repo}/pulls/${comment.pullNumber}` },
-    },
-  });
+  const reviewCommentObject = (comment: FakeReviewComment): unknown =>
+    deepMerge(sampleOf('pull-request-review-comment'), {
+      id: comment.id,
+      node_id: `PRRC_${comment.id}`,
+      pull_request_review_id: comment.id + 1,
+      url: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}`,
+      html_url: `${url}/${state.owner}/${state.repo}/pull/${comment.pullNumber}#discussion_r${comment.id}`,
+      pull_request_url: `${url}/repos/${state.owner}/${state.repo}/pulls/${comment.pullNumber}`,
+      diff_hunk: '@@ -1 +1 @@',
+      path: comment.path,
+      commit_id: comment.commitId,
+      original_commit_id: comment.commitId,
+      user: userObject(comment.user),
+      body: comment.body,
+      created_at: '2024-01-01T00:00:00Z',
+      updated_at: '2024-01-01T00:00:00Z',
+      author_association: 'NONE',
+      line: comment.line,
+      original_line: comment.line,
+      side: 'RIGHT',
+      start_line: comment.startLine,
+      original_start_line: comment.startLine,
+      start_side: comment.startLine === null ? null : 'RIGHT',
+      _links: {
+        self: { href: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}` },
+        html: {
+          href: `${url}/${state.owner}/${state.repo}/pull/${comment.pullNumber}#discussion_r${comment.id}`,
+        },
+        pull_request: {
+          href: `${url}/repos/${state.owner}/${state.repo}/pulls/${comment.pullNumber}`,
+        },
+      },
+    });
 
   const repoObject = (fullName: string): unknown => {
     const [owner, name] = fullName.split('/');
     return deepMerge(sampleOf('repository'), {
-      name, full_name: fullName, owner: userObject({ login: owner, type: 'User', id: 7 }),
+      name,
+      full_name: fullName,
+      owner: userObject({ login: owner, type: 'User', id: 7 }),
       fork: fullName !== `${state.owner}/${state.repo}`,
     });
   };
@@ -303,11 +346,34 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
   const simplePull = (pull: FakePull): unknown => {
     const baseName = `${state.owner}/${state.repo}`;
     return deepMerge(sampleOf('pull-request-simple'), {
-      number: pull.number, state: pull.state ?? 'open', title: `Invented change ${pull.number}`,
-      url: `${url}/repos/${baseName}/pulls/${pull.number}`, html_url: `${url}/${baseName}/pull/${pull.number}`,
-      labels: pull.labels.map((name, index) => ({ id: index + 1, node_id: `LA_${index}`, url: `${url}/labels/${index}`, name, description: 'label', color: 'ededed', default: false })),
-      base: { sha: pull.baseSha, ref: pull.baseRef, label: `${state.owner}:${pull.baseRef}`, repo: repoObject(baseName), user: userObject({ login: state.owner, type: 'User', id: 7 }) },
-      head: { sha: pull.headSha, ref: pull.headRef, label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`, repo: repoObject(pull.headRepo), user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }) },
+      number: pull.number,
+      state: pull.state ?? 'open',
+      title: `Invented change ${pull.number}`,
+      url: `${url}/repos/${baseName}/pulls/${pull.number}`,
+      html_url: `${url}/${baseName}/pull/${pull.number}`,
+      labels: pull.labels.map((name, index) => ({
+        id: index + 1,
+        node_id: `LA_${index}`,
+        url: `${url}/labels/${index}`,
+        name,
+        description: 'label',
+        color: 'ededed',
+        default: false,
+      })),
+      base: {
+        sha: pull.baseSha,
+        ref: pull.baseRef,
+        label: `${state.owner}:${pull.baseRef}`,
+        repo: repoObject(baseName),
+        user: userObject({ login: state.owner, type: 'User', id: 7 }),
+      },
+      head: {
+        sha: pull.headSha,
+        ref: pull.headRef,
+        label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
+        repo: repoObject(pull.headRepo),
+        user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }),
+      },
     });
   };
 
@@ -317,29 +383,69 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     html: `${url}/${state.owner}/${state.repo}/blob/x/${path}`,
   });
 
-  const entryObject = (path: string, entry: FakeEntry | 'dir', withContent: boolean): Record<string, unknown> => {
+  const entryObject = (
+    path: string,
+    entry: FakeEntry | 'dir',
+    withContent: boolean,
+  ): Record<string, unknown> => {
     const base = {
-      name: posix.basename(path), path,
+      name: posix.basename(path),
+      path,
       url: `${url}/repos/${state.owner}/${state.repo}/contents/${path}`,
-      git_url: null, html_url: null, download_url: null, _links: links(path),
+      git_url: null,
+      html_url: null,
+      download_url: null,
+      _links: links(path),
     };
-    if (entry === 'dir') return { ...base, type: 'dir', size: 0, sha: blobSha(new TextEncoder().encode(path)) };
+    if (entry === 'dir')
+      return { ...base, type: 'dir', size: 0, sha: blobSha(new TextEncoder().encode(path)) };
     if (entry.type === 'symlink') {
       const bytes = new TextEncoder().encode(entry.target);
-      return { ...base, type: 'symlink', target: entry.target, size: bytes.byteLength, sha: blobSha(bytes) };
+      return {
+        ...base,
+        type: 'symlink',
+        target: entry.target,
+        size: bytes.byteLength,
+        sha: blobSha(bytes),
+      };
     }
-    if (entry.type === 'submodule') return { ...base, type: 'submodule', submodule_git_url: entry.url, size: 0, sha: '0'.repeat(40) };
+    if (entry.type === 'submodule')
+      return {
+        ...base,
+        type: 'submodule',
+        submodule_git_url: entry.url,
+        size: 0,
+        sha: '0'.repeat(40),
+      };
     const inline = entry.bytes.byteLength <= INLINE_LIMIT;
     const file = { ...base, type: 'file', size: entry.bytes.byteLength, sha: blobSha(entry.bytes) };
     if (!withContent) return file;
-    return { ...file, encoding: inline ? 'base64' : 'none', content: inline ? wrappedBase64(entry.bytes) : '' };
+    return {
+      ...file,
+      encoding: inline ? 'base64' : 'none',
+      content: inline ? wrappedBase64(entry.bytes) : '',
+    };
   };
 
-  const notFound = (documentation = 'https://docs.github.com/rest'): Answer => ({ status: 404, json: { message: 'Not Found', documentation_url: documentation, status: '404' } });
-  const forbidden = (): Answer => ({ status: 403, json: { message: 'Resource not accessible by integration', documentation_url: 'https://docs.github.com/rest', status: '403' } });
+  const notFound = (documentation = 'https://docs.github.com/rest'): Answer => ({
+    status: 404,
+    json: { message: 'Not Found', documentation_url: documentation, status: '404' },
+  });
+  const forbidden = (): Answer => ({
+    status: 403,
+    json: {
+      message: 'Resource not accessible by integration',
+      documentation_url: 'https://docs.github.com/rest',
+      status: '403',
+    },
+  });
 
   /** One page of a list, with GitHub's Link header. */
-  const page = <T>(items: T[], query: URLSearchParams, path: string): { slice: T[]; headers: Record<string, string> } => {
+  const page = <T>(
+    items: T[],
+    query: URLSearchParams,
+    path: string,
+  ): { slice: T[]; headers: Record<string, string> } => {
     const perPage = Math.min(Math.max(Number(query.get('per_page') ?? 30) || 30, 1), 100);
     const current = Math.max(Number(query.get('page') ?? 1) || 1, 1);
     const last = Math.max(Math.ceil(items.length / perPage), 1);
@@ -350,9 +456,13 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       return `<${url}${path}?${next.toString()}>`;
     };
     const rels: string[] = [];
-    if (current < last) rels.push(`${linkTo(current + 1)}; rel="next"`, `${linkTo(last)}; rel="last"`);
+    if (current < last)
+      rels.push(`${linkTo(current + 1)}; rel="next"`, `${linkTo(last)}; rel="last"`);
     if (current > 1) rels.push(`${linkTo(1)}; rel="first"`, `${linkTo(current - 1)}; rel="prev"`);
-    return { slice: items.slice((current - 1) * perPage, current * perPage), headers: rels.length ? { link: rels.join(', ') } : {} };
+    return {
+      slice: items.slice((current - 1) * perPage, current * perPage),
+      headers: rels.length ? { link: rels.join(', ') } : {},
+    };
   };
 
   const lookup = (ref: string, path: string): { entry: FakeEntry | 'dir'; path: string } | null => {
@@ -363,15 +473,24 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       // GitHub answers a symlink to a file in the repository with that file (contents API docs).
       const target = posix.normalize(posix.join(posix.dirname(path), entry.target));
       const followed = tree.get(target);
-      if (!target.startsWith('../') && followed?.type === 'file') return { entry: followed, path: target };
+      if (!target.startsWith('../') && followed?.type === 'file')
+        return { entry: followed, path: target };
     }
     if (entry) return { entry, path };
     for (const key of tree.keys()) if (key.startsWith(`${path}/`)) return { entry: 'dir', path };
     return null;
   };
 
-  function handle(operation: Operation, params: Record<string, string>, query: URLSearchParams, body: string, accept: string, pathname: string): Answer {
-    if (params.owner !== undefined && (params.owner !== state.owner || params.repo !== state.repo)) return notFound();
+  function handle(
+    operation: Operation,
+    params: Record<string, string>,
+    query: URLSearchParams,
+    body: string,
+    accept: string,
+    pathname: string,
+  ): Answer {
+    if (params.owner !== undefined && (params.owner !== state.owner || params.repo !== state.repo))
+      return notFound();
     const write = operation.method !== 'GET';
     if (write && state.readOnly) return forbidden();
     switch (operation.operationId) {
@@ -382,10 +501,32 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         return {
           status: 200,
           json: deepMerge(sampleOf('pull-request'), {
-            number: pull.number, state: pull.state ?? 'open', title: `Invented change ${pull.number}`,
-            labels: pull.labels.map((name, index) => ({ id: index + 1, node_id: `LA_${index}`, url: `${url}/labels/${index}`, name, description: null, color: 'ededed', default: false })),
-            base: { sha: pull.baseSha, ref: pull.baseRef, label: `${state.owner}:${pull.baseRef}`, repo: repoObject(baseName), user: userObject({ login: state.owner, type: 'User', id: 7 }) },
-            head: { sha: pull.headSha, ref: pull.headRef, label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`, repo: repoObject(pull.headRepo), user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }) },
+            number: pull.number,
+            state: pull.state ?? 'open',
+            title: `Invented change ${pull.number}`,
+            labels: pull.labels.map((name, index) => ({
+              id: index + 1,
+              node_id: `LA_${index}`,
+              url: `${url}/labels/${index}`,
+              name,
+              description: null,
+              color: 'ededed',
+              default: false,
+            })),
+            base: {
+              sha: pull.baseSha,
+              ref: pull.baseRef,
+              label: `${state.owner}:${pull.baseRef}`,
+              repo: repoObject(baseName),
+              user: userObject({ login: state.owner, type: 'User', id: 7 }),
+            },
+            head: {
+              sha: pull.headSha,
+              ref: pull.headRef,
+              label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
+              repo: repoObject(pull.headRepo),
+              user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }),
+            },
             changed_files: pull.files.length,
           }),
         };
@@ -397,7 +538,9 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         const pulls = [...state.pulls.values()]
           .filter((pull) => wanted === 'all' || (pull.state ?? 'open') === wanted)
           // `head` filters by "user:ref" (REST documentation, "List pull requests").
-          .filter((pull) => head === null || `${pull.headRepo.split('/')[0]}:${pull.headRef}` === head)
+          .filter(
+            (pull) => head === null || `${pull.headRepo.split('/')[0]}:${pull.headRef}` === head,
+          )
           .filter((pull) => baseRef === null || pull.baseRef === baseRef)
           .sort((a, b) => b.number - a.number)
           .map((pull) => simplePull(pull));
@@ -408,20 +551,33 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         const pull = state.pulls.get(Number(params.pull_number));
         if (!pull) return notFound();
         // GitHub lists at most 3000 files of a pull request.
-        const listed = pull.files.slice(0, 3000).map((file) => deepMerge(sampleOf('diff-entry'), {
-          ...file, sha: null, additions: 1, deletions: 0, changes: 1,
-          blob_url: `${url}/blob/${file.filename}`, raw_url: `${url}/raw/${file.filename}`,
-          contents_url: `${url}/repos/${state.owner}/${state.repo}/contents/${file.filename}?ref=${pull.headSha}`,
-        }));
+        const listed = pull.files.slice(0, 3000).map((file) =>
+          deepMerge(sampleOf('diff-entry'), {
+            ...file,
+            sha: null,
+            additions: 1,
+            deletions: 0,
+            changes: 1,
+            blob_url: `${url}/blob/${file.filename}`,
+            raw_url: `${url}/raw/${file.filename}`,
+            contents_url: `${url}/repos/${state.owner}/${state.repo}/contents/${file.filename}?ref=${pull.headSha}`,
+          }),
+        );
         const { slice, headers } = page(listed, query, pathname);
         return { status: 200, headers, json: slice };
       }
       case 'repos/get-content': {
         const ref = query.get('ref') ?? 'main';
-        if (state.failingReads?.has(`${ref}:${params.path}`)) return { status: 502, json: { message: 'Server Error' } };
+        if (state.failingReads?.has(`${ref}:${params.path}`))
+          return { status: 502, json: { message: 'Server Error' } };
         const found = lookup(ref, params.path);
-        if (!found) return notFound('https://docs.github.com/rest/repos/contents#get-repository-content');
-        if (/application\/vnd\.github(\.v3)?\.raw/.test(accept) && found.entry !== 'dir' && found.entry.type === 'file') {
+        if (!found)
+          return notFound('https://docs.github.com/rest/repos/contents#get-repository-content');
+        if (
+          /application\/vnd\.github(\.v3)?\.raw/.test(accept) &&
+          found.entry !== 'dir' &&
+          found.entry.type === 'file'
+        ) {
           return { status: 200, raw: found.entry.bytes };
         }
         if (found.entry === 'dir') {
@@ -431,16 +587,28 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
             if (!key.startsWith(`${found.path}/`)) continue;
             const rest = key.slice(found.path.length + 1);
             const slash = rest.indexOf('/');
-            children.set(`${found.path}/${slash < 0 ? rest : rest.slice(0, slash)}`, slash < 0 ? entry : 'dir');
+            children.set(
+              `${found.path}/${slash < 0 ? rest : rest.slice(0, slash)}`,
+              slash < 0 ? entry : 'dir',
+            );
           }
-          return { status: 200, json: [...children].map(([path, entry]) => entryObject(path, entry, false)) };
+          return {
+            status: 200,
+            json: [...children].map(([path, entry]) => entryObject(path, entry, false)),
+          };
         }
         return { status: 200, json: entryObject(found.path, found.entry, true) };
       }
       case 'users/get-authenticated': {
         // An installation token (the workflow's, an app's) may not read /user (REST documentation, "Get the authenticated user").
         if (state.tokenUser.type === 'Bot') return forbidden();
-        return { status: 200, json: deepMerge(sampleOf('public-user'), { ...(userObject(state.tokenUser) as object), user_view_type: 'public' }) };
+        return {
+          status: 200,
+          json: deepMerge(sampleOf('public-user'), {
+            ...(userObject(state.tokenUser) as object),
+            user_view_type: 'public',
+          }),
+        };
       }
       case 'repos/compare-commits-with-basehead': {
         const [base, head] = params.basehead.split('...');
@@ -450,8 +618,14 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         return {
           status: 200,
           json: deepMerge(sampleOf('commit-comparison'), {
-            base_commit: commit(base), merge_base_commit: commit(state.mergeBases?.get(`${base}...${head}`) ?? base),
-            status: 'ahead', ahead_by: 1, behind_by: 0, total_commits: 1, commits: [commit(head)], files: [],
+            base_commit: commit(base),
+            merge_base_commit: commit(state.mergeBases?.get(`${base}...${head}`) ?? base),
+            status: 'ahead',
+            ahead_by: 1,
+            behind_by: 0,
+            total_commits: 1,
+            commits: [commit(head)],
+            files: [],
           }),
         };
       }
@@ -459,64 +633,175 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         const tree = state.trees.get(params.tree_sha);
         if (!tree) return notFound();
         const entries = [...tree].map(([path, entry]) => {
-          if (entry.type === 'symlink') return { path, mode: '120000', type: 'blob', sha: blobSha(new TextEncoder().encode(entry.target)), size: entry.target.length };
-          if (entry.type === 'submodule') return { path, mode: '160000', type: 'commit', sha: '0'.repeat(40) };
-          return { path, mode: '100644', type: 'blob', sha: blobSha(entry.bytes), size: entry.bytes.byteLength };
+          if (entry.type === 'symlink')
+            return {
+              path,
+              mode: '120000',
+              type: 'blob',
+              sha: blobSha(new TextEncoder().encode(entry.target)),
+              size: entry.target.length,
+            };
+          if (entry.type === 'submodule')
+            return { path, mode: '160000', type: 'commit', sha: '0'.repeat(40) };
+          return {
+            path,
+            mode: '100644',
+            type: 'blob',
+            sha: blobSha(entry.bytes),
+            size: entry.bytes.byteLength,
+          };
         });
-        return { status: 200, json: { sha: blobSha(new TextEncoder().encode(params.tree_sha)), url: `${url}/repos/${state.owner}/${state.repo}/git/trees/${params.tree_sha}`, truncated: state.truncatedTrees?.has(params.tree_sha) ?? false, tree: entries } };
+        return {
+          status: 200,
+          json: {
+            sha: blobSha(new TextEncoder().encode(params.tree_sha)),
+            url: `${url}/repos/${state.owner}/${state.repo}/git/trees/${params.tree_sha}`,
+            truncated: state.truncatedTrees?.has(params.tree_sha) ?? false,
+            tree: entries,
+          },
+        };
       }
       case 'issues/list-comments': {
         const number = Number(params.issue_number);
-        const comments = state.comments.filter((comment) => comment.issueNumber === number).sort((a, b) => a.id - b.id);
+        const comments = state.comments
+          .filter((comment) => comment.issueNumber === number)
+          .sort((a, b) => a.id - b.id);
         const { slice, headers } = page(comments.map(commentObject), query, pathname);
         return { status: 200, headers, json: slice };
       }
       case 'issues/create-comment': {
         const text = (JSON.parse(body) as { body: string }).body;
-        if (text.length > COMMENT_BODY_LIMIT) return { status: 422, json: { message: 'Validation Failed', errors: [{ resource: 'IssueComment', code: 'custom', field: 'body', message: `body is too long (maximum is ${COMMENT_BODY_LIMIT} characters)` }], documentation_url: 'https://docs.github.com/rest', status: '422' } };
-        const now = new Date(Date.UTC(2024, 0, 1, 0, 0, state.nextCommentId % 60)).toISOString().replace('.000', '');
-        const comment: FakeComment = { id: state.nextCommentId, issueNumber: Number(params.issue_number), body: text, user: state.tokenUser, createdAt: now, updatedAt: now };
+        if (text.length > COMMENT_BODY_LIMIT)
+          return {
+            status: 422,
+            json: {
+              message: 'Validation Failed',
+              errors: [
+                {
+                  resource: 'IssueComment',
+                  code: 'custom',
+                  field: 'body',
+                  message: `body is too long (maximum is ${COMMENT_BODY_LIMIT} characters)`,
+                },
+              ],
+              documentation_url: 'https://docs.github.com/rest',
+              status: '422',
+            },
+          };
+        const now = new Date(Date.UTC(2024, 0, 1, 0, 0, state.nextCommentId % 60))
+          .toISOString()
+          .replace('.000', '');
+        const comment: FakeComment = {
+          id: state.nextCommentId,
+          issueNumber: Number(params.issue_number),
+          body: text,
+          user: state.tokenUser,
+          createdAt: now,
+          updatedAt: now,
+        };
         state.nextCommentId += 1;
         state.comments.push(comment);
-        return { status: 201, headers: { location: `${url}/repos/${state.owner}/${state.repo}/issues/comments/${comment.id}` }, json: commentObject(comment) };
+        return {
+          status: 201,
+          headers: {
+            location: `${url}/repos/${state.owner}/${state.repo}/issues/comments/${comment.id}`,
+          },
+          json: commentObject(comment),
+        };
       }
       case 'issues/get-comment': {
-        const comment = state.comments.find((candidate) => candidate.id === Number(params.comment_id));
+        const comment = state.comments.find(
+          (candidate) => candidate.id === Number(params.comment_id),
+        );
         return comment ? { status: 200, json: commentObject(comment) } : notFound();
       }
       case 'issues/update-comment': {
-        const comment = state.comments.find((candidate) => candidate.id === Number(params.comment_id));
+        const comment = state.comments.find(
+          (candidate) => candidate.id === Number(params.comment_id),
+        );
         if (!comment) return notFound();
         const text = (JSON.parse(body) as { body: string }).body;
-        if (text.length > COMMENT_BODY_LIMIT) return { status: 422, json: { message: 'Validation Failed', errors: [{ resource: 'IssueComment', code: 'custom', field: 'body', message: 'body is too long' }], documentation_url: 'https://docs.github.com/rest', status: '422' } };
+        if (text.length > COMMENT_BODY_LIMIT)
+          return {
+            status: 422,
+            json: {
+              message: 'Validation Failed',
+              errors: [
+                {
+                  resource: 'IssueComment',
+                  code: 'custom',
+                  field: 'body',
+                  message: 'body is too long',
+                },
+              ],
+              documentation_url: 'https://docs.github.com/rest',
+              status: '422',
+            },
+          };
         comment.body = text;
         comment.updatedAt = '2024-01-02T00:00:00Z';
         return { status: 200, json: commentObject(comment) };
       }
       case 'pulls/list-review-comments': {
         const number = Number(params.pull_number);
-        const comments = state.reviewComments.filter((c) => c.pullNumber === number).sort((a, b) => a.id - b.id);
+        const comments = state.reviewComments
+          .filter((c) => c.pullNumber === number)
+          .sort((a, b) => a.id - b.id);
         const { slice, headers } = page(comments.map(reviewCommentObject), query, pathname);
         return { status: 200, headers, json: slice };
       }
       case 'pulls/create-review-comment': {
         const pull = state.pulls.get(Number(params.pull_number));
         if (!pull) return notFound();
-        const request = JSON.parse(body) as { body: string; commit_id: string; path: string; line?: number; start_line?: number; side?: string };
+        const request = JSON.parse(body) as {
+          body: string;
+          commit_id: string;
+          path: string;
+          line?: number;
+          start_line?: number;
+          side?: string;
+        };
         // GitHub takes a review comment only on a line of the file's diff (right side here).
         const file = pull.files.find((f) => f.filename === request.path);
         const lines = file?.patch ? rightLines(file.patch) : new Set<number>();
         const wanted = [request.start_line ?? request.line ?? 0, request.line ?? 0];
         if (request.line === undefined || !lines.has(wanted[0]!) || !lines.has(wanted[1]!)) {
-          return { status: 422, json: { message: 'Validation Failed', errors: [{ resource: 'PullRequestReviewComment', code: 'custom', field: 'pull_request_review_thread.line', message: 'could not be resolved' }], documentation_url: 'https://docs.github.com/rest', status: '422' } };
+          return {
+            status: 422,
+            json: {
+              message: 'Validation Failed',
+              errors: [
+                {
+                  resource: 'PullRequestReviewComment',
+                  code: 'custom',
+                  field: 'pull_request_review_thread.line',
+                  message: 'could not be resolved',
+                },
+              ],
+              documentation_url: 'https://docs.github.com/rest',
+              status: '422',
+            },
+          };
         }
         const comment: FakeReviewComment = {
-          id: state.nextCommentId, pullNumber: pull.number, path: request.path, commitId: request.commit_id,
-          line: request.line, startLine: request.start_line ?? null, body: request.body, user: state.tokenUser,
+          id: state.nextCommentId,
+          pullNumber: pull.number,
+          path: request.path,
+          commitId: request.commit_id,
+          line: request.line,
+          startLine: request.start_line ?? null,
+          body: request.body,
+          user: state.tokenUser,
         };
         state.nextCommentId += 1;
         state.reviewComments.push(comment);
-        return { status: 201, headers: { location: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}` }, json: reviewCommentObject(comment) };
+        return {
+          status: 201,
+          headers: {
+            location: `${url}/repos/${state.owner}/${state.repo}/pulls/comments/${comment.id}`,
+          },
+          json: reviewCommentObject(comment),
+        };
       }
       case 'pulls/update-review-comment': {
         const comment = state.reviewComments.find((c) => c.id === Number(params.comment_id));
@@ -531,7 +816,9 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         return { status: 204 };
       }
       case 'issues/delete-comment': {
-        const index = state.comments.findIndex((candidate) => candidate.id === Number(params.comment_id));
+        const index = state.comments.findIndex(
+          (candidate) => candidate.id === Number(params.comment_id),
+        );
         if (index < 0) return notFound();
         state.comments.splice(index, 1);
         return { status: 204 };
@@ -543,13 +830,24 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
   }
 
   function send(res: ServerResponse, answer: Answer): void {
-    const headers: Record<string, string> = { 'x-github-request-id': `FAKE:${requests.length}`, ...answer.headers };
+    const headers: Record<string, string> = {
+      'x-github-request-id': `FAKE:${requests.length}`,
+      ...answer.headers,
+    };
     if (answer.raw) {
-      res.writeHead(answer.status, { ...headers, 'content-type': 'application/vnd.github.raw', 'content-length': String(answer.raw.byteLength) });
+      res.writeHead(answer.status, {
+        ...headers,
+        'content-type': 'application/vnd.github.raw',
+        'content-length': String(answer.raw.byteLength),
+      });
       res.end(Buffer.from(answer.raw));
     } else if (answer.json !== undefined) {
       const text = JSON.stringify(answer.json);
-      res.writeHead(answer.status, { ...headers, 'content-type': 'application/json; charset=utf-8', 'content-length': String(Buffer.byteLength(text)) });
+      res.writeHead(answer.status, {
+        ...headers,
+        'content-type': 'application/json; charset=utf-8',
+        'content-length': String(Buffer.byteLength(text)),
+      });
       res.end(text);
     } else {
       res.writeHead(answer.status, headers);
@@ -565,24 +863,64 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     const parsed = new URL(req.url ?? '/', 'http://fake.invalid');
     if (method === 'POST' && parsed.pathname === '/graphql') {
       // GraphQL is not in the REST description; the one query the action sends is answered here.
-      const authorized = req.headers.authorization === `token ${state.token}` || req.headers.authorization === `Bearer ${state.token}`;
-      requests.push({ method, path: '/graphql', query: '', operationId: 'graphql', status: authorized ? 200 : 401, authorized, fault: false });
+      const authorized =
+        req.headers.authorization === `token ${state.token}` ||
+        req.headers.authorization === `Bearer ${state.token}`;
+      requests.push({
+        method,
+        path: '/graphql',
+        query: '',
+        operationId: 'graphql',
+        status: authorized ? 200 : 401,
+        authorized,
+        fault: false,
+      });
       const queued = faults.get('graphql')?.shift();
       const query = (JSON.parse(body || '{}') as { query?: string }).query ?? '';
-      if (!/^query \{ viewer \{ login \} \}$/.test(query)) mismatches.push({ method, url: '/graphql', operationId: 'graphql', problem: `unexpected GraphQL query ${JSON.stringify(query)}` });
+      if (!/^query \{ viewer \{ login \} \}$/.test(query))
+        mismatches.push({
+          method,
+          url: '/graphql',
+          operationId: 'graphql',
+          problem: `unexpected GraphQL query ${JSON.stringify(query)}`,
+        });
       if (queued && queued.kind === 'status') {
         send(res, { status: queued.status, json: queued.body });
         return;
       }
-      send(res, authorized ? { status: 200, json: { data: { viewer: { login: state.tokenUser.login } } } } : { status: 401, json: { message: 'Bad credentials' } });
+      send(
+        res,
+        authorized
+          ? { status: 200, json: { data: { viewer: { login: state.tokenUser.login } } } }
+          : { status: 401, json: { message: 'Bad credentials' } },
+      );
       return;
     }
-    const check = checkRequest(method, parsed.pathname, parsed.searchParams, req.headers['content-type'], body);
-    for (const problem of check.problems) mismatches.push({ method, url: req.url ?? '', operationId: check.operation?.operationId ?? null, problem });
-    const authorized = req.headers.authorization === `token ${state.token}` || req.headers.authorization === `Bearer ${state.token}`;
+    const check = checkRequest(
+      method,
+      parsed.pathname,
+      parsed.searchParams,
+      req.headers['content-type'],
+      body,
+    );
+    for (const problem of check.problems)
+      mismatches.push({
+        method,
+        url: req.url ?? '',
+        operationId: check.operation?.operationId ?? null,
+        problem,
+      });
+    const authorized =
+      req.headers.authorization === `token ${state.token}` ||
+      req.headers.authorization === `Bearer ${state.token}`;
     const entry: LoggedRequest = {
-      method, path: decodeURIComponent(parsed.pathname), query: parsed.search, operationId: check.operation?.operationId ?? null,
-      status: 0, authorized, fault: false,
+      method,
+      path: decodeURIComponent(parsed.pathname),
+      query: parsed.search,
+      operationId: check.operation?.operationId ?? null,
+      status: 0,
+      authorized,
+      fault: false,
     };
     requests.push(entry);
     const queue = faults.get(check.operation?.operationId ?? '') ?? [];
@@ -601,7 +939,14 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       if (fault.kind === 'reset-after') {
         entry.status = 'reset-after';
         if (authorized && check.operation && check.problems.length === 0) {
-          handle(check.operation, check.params, parsed.searchParams, body, String(req.headers.accept ?? ''), parsed.pathname);
+          handle(
+            check.operation,
+            check.params,
+            parsed.searchParams,
+            body,
+            String(req.headers.accept ?? ''),
+            parsed.pathname,
+          );
         }
         req.socket.destroy();
         return;
@@ -612,14 +957,43 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       return;
     }
     let answer: Answer;
-    if (!authorized) answer = { status: 401, json: { message: 'Bad credentials', documentation_url: 'https://docs.github.com/rest', status: '401' } };
+    if (!authorized)
+      answer = {
+        status: 401,
+        json: {
+          message: 'Bad credentials',
+          documentation_url: 'https://docs.github.com/rest',
+          status: '401',
+        },
+      };
     else if (!check.operation) answer = notFound();
     // GitHub refuses what its description does not allow; the fake does not guess at it either.
-    else if (check.problems.length > 0) answer = { status: 422, json: { message: `Invalid request: ${check.problems.join('; ')}`, documentation_url: 'https://docs.github.com/rest', status: '422' } };
-    else answer = handle(check.operation, check.params, parsed.searchParams, body, String(req.headers.accept ?? ''), parsed.pathname);
+    else if (check.problems.length > 0)
+      answer = {
+        status: 422,
+        json: {
+          message: `Invalid request: ${check.problems.join('; ')}`,
+          documentation_url: 'https://docs.github.com/rest',
+          status: '422',
+        },
+      };
+    else
+      answer = handle(
+        check.operation,
+        check.params,
+        parsed.searchParams,
+        body,
+        String(req.headers.accept ?? ''),
+        parsed.pathname,
+      );
     if (check.operation && answer.raw === undefined) {
       for (const problem of checkResponse(check.operation, answer.status, answer.json)) {
-        responseMismatches.push({ method, url: req.url ?? '', operationId: check.operation.operationId, problem });
+        responseMismatches.push({
+          method,
+          url: req.url ?? '',
+          operationId: check.operation.operationId,
+          problem,
+        });
       }
     }
     entry.status = answer.status;
@@ -628,7 +1002,12 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
 
   const server = createServer((req, res) => {
     onRequest(req, res).catch((error: unknown) => {
-      mismatches.push({ method: req.method ?? '', url: req.url ?? '', operationId: null, problem: `fake server failed: ${(error as Error).stack ?? String(error)}` });
+      mismatches.push({
+        method: req.method ?? '',
+        url: req.url ?? '',
+        operationId: null,
+        problem: `fake server failed: ${(error as Error).stack ?? String(error)}`,
+      });
       if (!res.headersSent) res.writeHead(500, { 'content-type': 'application/json' });
       res.end('{"message":"fake server failure"}');
     });
@@ -651,16 +1030,21 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     },
     close() {
       server.closeAllConnections();
-      return new Promise((resolve, reject) => server.close((error) => (error ? reject(error) : resolve())));
+      return new Promise((resolve, reject) =>
+        server.close((error) => (error ? reject(error) : resolve())),
+      );
     },
   };
 }
 
 /** A tree from a plain object: strings and byte arrays are files. */
-export function tree(entries: Record<string, string | Uint8Array | FakeEntry>): Map<string, FakeEntry> {
+export function tree(
+  entries: Record<string, string | Uint8Array | FakeEntry>,
+): Map<string, FakeEntry> {
   const map = new Map<string, FakeEntry>();
   for (const [path, value] of Object.entries(entries)) {
-    if (typeof value === 'string') map.set(path, { type: 'file', bytes: new TextEncoder().encode(value) });
+    if (typeof value === 'string')
+      map.set(path, { type: 'file', bytes: new TextEncoder().encode(value) });
     else if (value instanceof Uint8Array) map.set(path, { type: 'file', bytes: value });
     else map.set(path, value);
   }

@@ -42,9 +42,16 @@ interface Spec {
 let spec: Spec | null = null;
 let routes: Route[] | null = null;
 const validators = new Map<string, ValidateFunction>();
-const ajv = new Ajv({ strict: false, allErrors: true, validateFormats: false, allowUnionTypes: true });
+const ajv = new Ajv({
+  strict: false,
+  allErrors: true,
+  validateFormats: false,
+  allowUnionTypes: true,
+});
 
-export const OPENAPI_FILE = createRequire(import.meta.url).resolve('@octokit/openapi/generated/api.github.com.json');
+export const OPENAPI_FILE = createRequire(import.meta.url).resolve(
+  '@octokit/openapi/generated/api.github.com.json',
+);
 
 export function loadSpec(): Spec {
   spec ??= JSON.parse(readFileSync(OPENAPI_FILE, 'utf8')) as Spec;
@@ -66,26 +73,35 @@ function buildRoutes(): Route[] {
   for (const [template, item] of Object.entries(loadSpec().paths)) {
     for (const [method, raw] of Object.entries(item)) {
       if (!['get', 'post', 'put', 'patch', 'delete', 'head'].includes(method)) continue;
-      const parameters = ((raw.parameters as unknown[] | undefined) ?? []).map((parameter) => resolveRef<Parameter>(parameter));
+      const parameters = ((raw.parameters as unknown[] | undefined) ?? []).map((parameter) =>
+        resolveRef<Parameter>(parameter),
+      );
       const names: string[] = [];
       let literals = 0;
-      const source = template.split('/').map((segment) => {
-        const match = /^\{(.+)\}$/.exec(segment);
-        if (!match) {
-          literals += 1;
-          return segment.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-        }
-        names.push(match[1]);
-        const multi = parameters.find((parameter) => parameter.name === match[1])?.['x-multi-segment'];
-        return multi ? '(.+)' : '([^/]+)';
-      }).join('/');
+      const source = template
+        .split('/')
+        .map((segment) => {
+          const match = /^\{(.+)\}$/.exec(segment);
+          if (!match) {
+            literals += 1;
+            return segment.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+          }
+          names.push(match[1]);
+          const multi = parameters.find((parameter) => parameter.name === match[1])?.[
+            'x-multi-segment'
+          ];
+          return multi ? '(.+)' : '([^/]+)';
+        })
+        .join('/');
       result.push({
         operation: {
           operationId: raw.operationId as string,
           method: method.toUpperCase(),
           template,
           parameters,
-          requestBody: raw.requestBody ? resolveRef(raw.requestBody) as Operation['requestBody'] : null,
+          requestBody: raw.requestBody
+            ? (resolveRef(raw.requestBody) as Operation['requestBody'])
+            : null,
           responses: raw.responses as Record<string, unknown>,
         },
         pattern: new RegExp(`^${source}$`),
@@ -114,9 +130,18 @@ function adapt(node: unknown, definitions: Record<string, unknown>): unknown {
   }
   const out: Schema = {};
   for (const [key, value] of Object.entries(source)) {
-    if (key === 'nullable' || key === 'discriminator' || key === 'example' || key === 'examples' || key.startsWith('x-')) continue;
+    if (
+      key === 'nullable' ||
+      key === 'discriminator' ||
+      key === 'example' ||
+      key === 'examples' ||
+      key.startsWith('x-')
+    )
+      continue;
     if (key === 'properties' || key === 'patternProperties') {
-      out[key] = Object.fromEntries(Object.entries(value as Schema).map(([name, schema]) => [name, adapt(schema, definitions)]));
+      out[key] = Object.fromEntries(
+        Object.entries(value as Schema).map(([name, schema]) => [name, adapt(schema, definitions)]),
+      );
     } else if (['items', 'additionalProperties', 'not', 'allOf', 'anyOf', 'oneOf'].includes(key)) {
       out[key] = adapt(value, definitions);
     } else {
@@ -138,7 +163,10 @@ function validatorFor(id: string, schema: unknown): ValidateFunction {
 }
 
 function describeErrors(validate: ValidateFunction): string {
-  return (validate.errors ?? []).slice(0, 5).map((error) => `${error.instancePath || '/'} ${error.message ?? ''}`).join('; ');
+  return (validate.errors ?? [])
+    .slice(0, 5)
+    .map((error) => `${error.instancePath || '/'} ${error.message ?? ''}`)
+    .join('; ');
 }
 
 export interface RequestCheck {
@@ -156,11 +184,24 @@ function coerce(value: string, schema: Schema | undefined): unknown {
 }
 
 /** Matches a request against the description and checks its parameters and JSON body. */
-export function checkRequest(method: string, rawPath: string, query: URLSearchParams, contentType: string | undefined, body: string): RequestCheck {
+export function checkRequest(
+  method: string,
+  rawPath: string,
+  query: URLSearchParams,
+  contentType: string | undefined,
+  body: string,
+): RequestCheck {
   routes ??= buildRoutes();
   const problems: string[] = [];
-  const route = routes.find((candidate) => candidate.operation.method === method && candidate.pattern.test(rawPath));
-  if (!route) return { operation: null, params: {}, problems: [`${method} ${rawPath} matches no operation of GitHub's REST description`] };
+  const route = routes.find(
+    (candidate) => candidate.operation.method === method && candidate.pattern.test(rawPath),
+  );
+  if (!route)
+    return {
+      operation: null,
+      params: {},
+      problems: [`${method} ${rawPath} matches no operation of GitHub's REST description`],
+    };
   const { operation } = route;
   const match = route.pattern.exec(rawPath) as RegExpExecArray;
   const params: Record<string, string> = {};
@@ -173,38 +214,53 @@ export function checkRequest(method: string, rawPath: string, query: URLSearchPa
       return;
     }
     params[name] = value;
-    const parameter = operation.parameters.find((candidate) => candidate.in === 'path' && candidate.name === name);
+    const parameter = operation.parameters.find(
+      (candidate) => candidate.in === 'path' && candidate.name === name,
+    );
     if (parameter?.schema) {
       const validate = validatorFor(`${operation.operationId}#path:${name}`, parameter.schema);
-      if (!validate(coerce(value, resolveRef(parameter.schema)))) problems.push(`path parameter ${name}=${JSON.stringify(value)}: ${describeErrors(validate)}`);
+      if (!validate(coerce(value, resolveRef(parameter.schema))))
+        problems.push(
+          `path parameter ${name}=${JSON.stringify(value)}: ${describeErrors(validate)}`,
+        );
     }
   });
   for (const [name, value] of query) {
-    const parameter = operation.parameters.find((candidate) => candidate.in === 'query' && candidate.name === name);
+    const parameter = operation.parameters.find(
+      (candidate) => candidate.in === 'query' && candidate.name === name,
+    );
     if (!parameter) {
       problems.push(`query parameter ${name} is not a parameter of ${operation.operationId}`);
       continue;
     }
     if (parameter.schema) {
       const validate = validatorFor(`${operation.operationId}#query:${name}`, parameter.schema);
-      if (!validate(coerce(value, resolveRef(parameter.schema)))) problems.push(`query parameter ${name}=${JSON.stringify(value)}: ${describeErrors(validate)}`);
+      if (!validate(coerce(value, resolveRef(parameter.schema))))
+        problems.push(
+          `query parameter ${name}=${JSON.stringify(value)}: ${describeErrors(validate)}`,
+        );
     }
   }
   for (const parameter of operation.parameters) {
-    if (parameter.in === 'query' && parameter.required && !query.has(parameter.name)) problems.push(`required query parameter ${parameter.name} is missing`);
+    if (parameter.in === 'query' && parameter.required && !query.has(parameter.name))
+      problems.push(`required query parameter ${parameter.name} is missing`);
   }
   const json = operation.requestBody?.content?.['application/json'];
   if (operation.requestBody && json) {
     if (body === '') {
-      if (operation.requestBody.required) problems.push(`${operation.operationId} requires a JSON body; none was sent`);
+      if (operation.requestBody.required)
+        problems.push(`${operation.operationId} requires a JSON body; none was sent`);
     } else if (!(contentType ?? '').toLowerCase().startsWith('application/json')) {
-      problems.push(`${operation.operationId} expects content-type application/json; got ${JSON.stringify(contentType)}`);
+      problems.push(
+        `${operation.operationId} expects content-type application/json; got ${JSON.stringify(contentType)}`,
+      );
     } else {
       let parsed: unknown;
       try {
         parsed = JSON.parse(body);
         const validate = validatorFor(`${operation.operationId}#body`, json.schema);
-        if (!validate(parsed)) problems.push(`request body of ${operation.operationId}: ${describeErrors(validate)}`);
+        if (!validate(parsed))
+          problems.push(`request body of ${operation.operationId}: ${describeErrors(validate)}`);
       } catch {
         problems.push(`request body of ${operation.operationId} is not JSON`);
       }
@@ -219,13 +275,21 @@ export function checkRequest(method: string, rawPath: string, query: URLSearchPa
 export function checkResponse(operation: Operation, status: number, value: unknown): string[] {
   let documented = operation.responses[String(status)] ?? operation.responses.default;
   // The description lists only some error statuses per operation; every error body is a basic-error.
-  if (!documented && status >= 400) documented = { content: { 'application/json': { schema: { $ref: '#/components/schemas/basic-error' } } } };
+  if (!documented && status >= 400)
+    documented = {
+      content: { 'application/json': { schema: { $ref: '#/components/schemas/basic-error' } } },
+    };
   if (!documented) return [`${operation.operationId} documents no ${status} response`];
   const response = resolveRef<{ content?: Record<string, { schema: Schema }> }>(documented);
   const schema = response.content?.['application/json']?.schema;
-  if (!schema) return value === undefined ? [] : [`${operation.operationId} documents no JSON body for ${status}`];
+  if (!schema)
+    return value === undefined
+      ? []
+      : [`${operation.operationId} documents no JSON body for ${status}`];
   const validate = validatorFor(`${operation.operationId}#response:${status}`, schema);
-  return validate(value) ? [] : [`${status} answer of ${operation.operationId}: ${describeErrors(validate)}`];
+  return validate(value)
+    ? []
+    : [`${status} answer of ${operation.operationId}: ${describeErrors(validate)}`];
 }
 
 /**
@@ -237,23 +301,35 @@ export function sample(node: unknown, depth = 0, top = true): unknown {
   if (!schema || depth > 30) return null;
   if (!top && schema.nullable === true) return null;
   if (Array.isArray(schema.allOf)) {
-    return Object.assign({}, ...(schema.allOf as unknown[]).map((part) => sample(part, depth + 1, true)));
+    return Object.assign(
+      {},
+      ...(schema.allOf as unknown[]).map((part) => sample(part, depth + 1, true)),
+    );
   }
   const alternatives = (schema.oneOf ?? schema.anyOf) as unknown[] | undefined;
   if (alternatives) return sample(alternatives[0], depth + 1, top);
   if (Array.isArray(schema.enum)) return schema.enum[0];
   switch (schema.type) {
-    case 'array': return [];
+    case 'array':
+      return [];
     case 'string':
-      return schema.format === 'date-time' ? '2024-01-01T00:00:00Z'
-        : schema.format === 'uri' ? 'https://example.invalid/sample'
-          : schema.format === 'email' ? 'someone@example.invalid' : 'sample';
-    case 'integer': case 'number': return 1;
-    case 'boolean': return false;
+      return schema.format === 'date-time'
+        ? '2024-01-01T00:00:00Z'
+        : schema.format === 'uri'
+          ? 'https://example.invalid/sample'
+          : schema.format === 'email'
+            ? 'someone@example.invalid'
+            : 'sample';
+    case 'integer':
+    case 'number':
+      return 1;
+    case 'boolean':
+      return false;
     default: {
       const out: Record<string, unknown> = {};
       const properties = (schema.properties ?? {}) as Record<string, unknown>;
-      for (const name of (schema.required as string[] | undefined) ?? []) out[name] = sample(properties[name] ?? {}, depth + 1, false);
+      for (const name of (schema.required as string[] | undefined) ?? [])
+        out[name] = sample(properties[name] ?? {}, depth + 1, false);
       return out;
     }
   }

@@ -15,19 +15,43 @@ export interface RecordingOutput extends RunnerOutput {
 
 export function createRecordingOutput(): RecordingOutput {
   const out: RecordingOutput = {
-    secrets: [], outputs: {}, summaries: [], annotations: [], log: [], failed: null,
-    secret(value) { out.secrets.push(value); },
-    output(name, value) { out.outputs[name] = value; },
-    async summary(markdown) { out.summaries.push(markdown); },
-    annotate(annotation) { out.annotations.push(annotation); },
-    info(message) { out.log.push({ level: 'info', message }); },
-    notice(message) { out.log.push({ level: 'notice', message }); },
-    warning(message) { out.log.push({ level: 'warning', message }); },
-    fail(message) { out.failed = message; out.log.push({ level: 'fail', message }); },
+    secrets: [],
+    outputs: {},
+    summaries: [],
+    annotations: [],
+    log: [],
+    failed: null,
+    secret(value) {
+      out.secrets.push(value);
+    },
+    output(name, value) {
+      out.outputs[name] = value;
+    },
+    async summary(markdown) {
+      out.summaries.push(markdown);
+    },
+    annotate(annotation) {
+      out.annotations.push(annotation);
+    },
+    info(message) {
+      out.log.push({ level: 'info', message });
+    },
+    notice(message) {
+      out.log.push({ level: 'notice', message });
+    },
+    warning(message) {
+      out.log.push({ level: 'warning', message });
+    },
+    fail(message) {
+      out.failed = message;
+      out.log.push({ level: 'fail', message });
+    },
     everything() {
       return [
-        ...Object.values(out.outputs), ...out.summaries,
-        ...out.annotations.map((a) => `${a.title} ${a.message} ${a.file}`), ...out.log.map((l) => l.message),
+        ...Object.values(out.outputs),
+        ...out.summaries,
+        ...out.annotations.map((a) => `${a.title} ${a.message} ${a.file}`),
+        ...out.log.map((l) => l.message),
       ].join('\n');
     },
   };

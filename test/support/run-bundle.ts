@@ -24,10 +24,18 @@ export interface BundleRun {
 export const PEAK_RSS_PRELOAD = resolve(import.meta.dirname, 'peak-rss.cjs');
 
 /** The line `peak-rss.cjs` prints: peak RSS in MiB, CPU time in ms, and stderr without the line. */
-export function takePeakRss(stderr: string): { peakRssMiB: number | null; cpuMs: number | null; stderr: string } {
+export function takePeakRss(stderr: string): {
+  peakRssMiB: number | null;
+  cpuMs: number | null;
+  stderr: string;
+} {
   const match = /\n?@@peak-rss-kib (\d+) cpu-ms (\d+)\n/.exec(stderr);
   return match
-    ? { peakRssMiB: Number(match[1]) / 1024, cpuMs: Number(match[2]), stderr: stderr.replace(match[0], '') }
+    ? {
+        peakRssMiB: Number(match[1]) / 1024,
+        cpuMs: Number(match[2]),
+        stderr: stderr.replace(match[0], ''),
+      }
     : { peakRssMiB: null, cpuMs: null, stderr };
 }
 
@@ -47,7 +55,12 @@ export function parseOutputFile(text: string): Record<string, string> {
 }
 
 function unescapeCommand(text: string): string {
-  return text.replace(/%0D/g, '\r').replace(/%0A/g, '\n').replace(/%3A/g, ':').replace(/%2C/g, ',').replace(/%25/g, '%');
+  return text
+    .replace(/%0D/g, '\r')
+    .replace(/%0A/g, '\n')
+    .replace(/%3A/g, ':')
+    .replace(/%2C/g, ',')
+    .replace(/%25/g, '%');
 }
 
 export function parseAnnotations(stdout: string): BundleRun['annotations'] {
@@ -103,16 +116,31 @@ export async function runBundle(options: {
     GITHUB_OUTPUT: outputPath,
     RUNNER_TEMP: temp,
   };
-  for (const [name, value] of Object.entries(options.inputs)) env[`INPUT_${name.toUpperCase()}`] = value;
+  for (const [name, value] of Object.entries(options.inputs))
+    env[`INPUT_${name.toUpperCase()}`] = value;
   const started = performance.now();
-  const child = spawn(process.execPath, [...(options.nodeArgs ?? []), options.bundle ?? ACTION_BUNDLE], { cwd: options.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(
+    process.execPath,
+    [...(options.nodeArgs ?? []), options.bundle ?? ACTION_BUNDLE],
+    { cwd: options.workspace, env, stdio: ['ignore', 'pipe', 'pipe'] },
+  );
   let stdout = '';
   let stderr = '';
-  child.stdout.on('data', (chunk) => { stdout += chunk; });
-  child.stderr.on('data', (chunk) => { stderr += chunk; });
+  child.stdout.on('data', (chunk) => {
+    stdout += chunk;
+  });
+  child.stderr.on('data', (chunk) => {
+    stderr += chunk;
+  });
   const code = await new Promise<number | null>((done, fail) => {
-    const timer = setTimeout(() => { child.kill('SIGKILL'); fail(new Error(`the action did not finish within ${options.timeoutMs ?? 20_000} ms`)); }, options.timeoutMs ?? 20_000);
-    child.on('close', (exit) => { clearTimeout(timer); done(exit); });
+    const timer = setTimeout(() => {
+      child.kill('SIGKILL');
+      fail(new Error(`the action did not finish within ${options.timeoutMs ?? 20_000} ms`));
+    }, options.timeoutMs ?? 20_000);
+    child.on('close', (exit) => {
+      clearTimeout(timer);
+      done(exit);
+    });
   });
   const elapsedMs = performance.now() - started;
   const files: Record<string, string> = {};
@@ -127,7 +155,12 @@ export async function runBundle(options: {
   walk(temp);
   const measured = takePeakRss(stderr);
   return {
-    code, stdout, stderr: measured.stderr, elapsedMs, files, peakRssMiB: measured.peakRssMiB,
+    code,
+    stdout,
+    stderr: measured.stderr,
+    elapsedMs,
+    files,
+    peakRssMiB: measured.peakRssMiB,
     outputs: parseOutputFile(readFileSync(outputPath, 'utf8')),
     summary: readFileSync(summaryPath, 'utf8'),
     annotations: parseAnnotations(stdout),
@@ -135,7 +168,15 @@ export async function runBundle(options: {
 }
 
 /** A pull_request event payload as GitHub sends it (the fields the action reads, and a few more). */
-export function pullRequestEvent(options: { owner: string; repo: string; number: number; base: string; head: string; labels?: string[]; fork?: boolean }) {
+export function pullRequestEvent(options: {
+  owner: string;
+  repo: string;
+  number: number;
+  base: string;
+  head: string;
+  labels?: string[];
+  fork?: boolean;
+}) {
   const full = `${options.owner}/${options.repo}`;
   return {
     action: 'synchronize',
@@ -144,7 +185,11 @@ export function pullRequestEvent(options: { owner: string; repo: string; number:
       number: options.number,
       labels: (options.labels ?? []).map((name, i) => ({ id: i + 1, name })),
       base: { sha: options.base, ref: 'main', repo: { full_name: full } },
-      head: { sha: options.head, ref: 'feature', repo: { full_name: options.fork ? `someone-else/${options.repo}` : full } },
+      head: {
+        sha: options.head,
+        ref: 'feature',
+        repo: { full_name: options.fork ? `someone-else/${options.repo}` : full },
+      },
     },
     repository: { name: options.repo, full_name: full, owner: { login: options.owner } },
   };

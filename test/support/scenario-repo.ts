@@ -14,17 +14,33 @@ export interface ScenarioRepo {
 }
 
 function git(dir: string, ...args: string[]): string {
-  return execFileSync('git', ['-c', 'user.name=test', '-c', 'user.email=test@example.invalid', '-c', 'commit.gpgsign=false', ...args], {
-    cwd: dir, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'],
-  }).trim();
+  return execFileSync(
+    'git',
+    [
+      '-c',
+      'user.name=test',
+      '-c',
+      'user.email=test@example.invalid',
+      '-c',
+      'commit.gpgsign=false',
+      ...args,
+    ],
+    {
+      cwd: dir,
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'pipe'],
+    },
+  ).trim();
 }
 
 function writeTree(dir: string, tree: Tree): void {
-  for (const entry of readdirSync(dir)) if (entry !== '.git') rmSync(join(dir, entry), { recursive: true, force: true });
+  for (const entry of readdirSync(dir))
+    if (entry !== '.git') rmSync(join(dir, entry), { recursive: true, force: true });
   for (const [path, content] of Object.entries(tree)) {
     const target = join(dir, path);
     mkdirSync(dirname(target), { recursive: true });
-    if (typeof content === 'object' && !(content instanceof Uint8Array)) symlinkSync(content.symlink, target);
+    if (typeof content === 'object' && !(content instanceof Uint8Array))
+      symlinkSync(content.symlink, target);
     else writeFileSync(target, content);
   }
 }
@@ -41,24 +57,33 @@ export function scenarioRepo(base: Tree, head: Tree): ScenarioRepo {
   git(dir, 'add', '--all');
   git(dir, 'commit', '--quiet', '--allow-empty', '-m', 'head');
   const headSha = git(dir, 'rev-parse', 'HEAD');
-  return { dir, base: baseSha, head: headSha, remove: () => rmSync(dir, { recursive: true, force: true }) };
+  return {
+    dir,
+    base: baseSha,
+    head: headSha,
+    remove: () => rmSync(dir, { recursive: true, force: true }),
+  };
 }
 
 /** A checkout-style model config in JSON, with overrides for the keys a scenario changes. */
 export function checkpointConfig(overrides: Record<string, unknown> = {}): string {
-  return `${JSON.stringify({
-    model_type: 'llama',
-    hidden_size: 2048,
-    intermediate_size: 5632,
-    num_hidden_layers: 16,
-    num_attention_heads: 16,
-    num_key_value_heads: 4,
-    hidden_act: 'silu',
-    vocab_size: 32000,
-    max_position_embeddings: 4096,
-    rope_theta: 10000,
-    tie_word_embeddings: false,
-    torch_dtype: 'bfloat16',
-    ...overrides,
-  }, null, 2)}\n`;
+  return `${JSON.stringify(
+    {
+      model_type: 'llama',
+      hidden_size: 2048,
+      intermediate_size: 5632,
+      num_hidden_layers: 16,
+      num_attention_heads: 16,
+      num_key_value_heads: 4,
+      hidden_act: 'silu',
+      vocab_size: 32000,
+      max_position_embeddings: 4096,
+      rope_theta: 10000,
+      tie_word_embeddings: false,
+      torch_dtype: 'bfloat16',
+      ...overrides,
+    },
+    null,
+    2,
+  )}\n`;
 }

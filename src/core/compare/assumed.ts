@@ -32,7 +32,10 @@ function sameFinding(a: Finding, b: Finding): boolean {
 
 /** The report's findings less the ones its spec and metrics give again: those came from reading the text. */
 export function readerFindings(report: FileReport): Finding[] {
-  const derived = [...specFindings(report.spec, report.locations), ...metricFindings(report.spec, report.metrics, report.locations)];
+  const derived = [
+    ...specFindings(report.spec, report.locations),
+    ...metricFindings(report.spec, report.metrics, report.locations),
+  ];
   const out: Finding[] = [];
   for (const finding of report.findings) {
     const at = derived.findIndex((d) => sameFinding(d, finding));
@@ -53,19 +56,34 @@ export function samePositionCode(a: ModelSpec, b: ModelSpec): boolean {
  * (so change rules still see an unchanged code); its metrics and the findings that follow from
  * them are those of the assumed trained span.
  */
-export function inheritTrainedSpan(base: FileReport, head: FileReport): { head: FileReport; assumption: Assumption } | null {
+export function inheritTrainedSpan(
+  base: FileReport,
+  head: FileReport,
+): { head: FileReport; assumption: Assumption } | null {
   const inherited = base.metrics.trainedSpan;
-  if (inherited === null || head.spec.trainedSpan !== null || !samePositionCode(base.spec, head.spec)) return null;
+  if (
+    inherited === null ||
+    head.spec.trainedSpan !== null ||
+    !samePositionCode(base.spec, head.spec)
+  )
+    return null;
   if (head.metrics.trainedSpan === inherited) return null;
   const assumedSpec: ModelSpec = { ...head.spec, trainedSpan: inherited };
   const metrics = computeMetrics(assumedSpec);
-  const moved = METRIC_PATHS.filter((m) => metricValue(metrics, m) !== metricValue(head.metrics, m));
+  const moved = METRIC_PATHS.filter(
+    (m) => metricValue(metrics, m) !== metricValue(head.metrics, m),
+  );
   // A span past the assumed reach is the grown span itself, which `span-grew-code-unchanged`
   // already says: only findings the head had on its own face stay about spans.
   const had = new Set(head.findings.map((f) => f.rule));
-  const derived = metricFindings(assumedSpec, metrics, head.locations)
-    .filter((f) => !SPAN_RULES.has(f.rule) || had.has(f.rule));
-  const findings = sortFindings([...readerFindings(head), ...specFindings(head.spec, head.locations), ...derived]);
+  const derived = metricFindings(assumedSpec, metrics, head.locations).filter(
+    (f) => !SPAN_RULES.has(f.rule) || had.has(f.rule),
+  );
+  const findings = sortFindings([
+    ...readerFindings(head),
+    ...specFindings(head.spec, head.locations),
+    ...derived,
+  ]);
   return {
     head: { ...head, metrics, findings },
     assumption: {

@@ -5,7 +5,9 @@ import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 /** Every name a policy limit or a report row can use, scalar metrics first. */
 export const METRIC_PATHS: readonly MetricPath[] = [
   ...SCALAR_METRICS,
-  ...FLOAT_FORMATS.flatMap((format) => PRECISION_METRICS.map((name) => `precision.${format}.${name}` as MetricPath)),
+  ...FLOAT_FORMATS.flatMap((format) =>
+    PRECISION_METRICS.map((name) => `precision.${format}.${name}` as MetricPath),
+  ),
 ];
 
 const KNOWN = new Set<string>(METRIC_PATHS);
@@ -17,7 +19,11 @@ export function isMetricPath(name: string): name is MetricPath {
 /** The value of one metric, or null when it does not apply. */
 export function metricValue(metrics: Metrics, path: MetricPath): number | null {
   if (path.startsWith('precision.')) {
-    const [, format, name] = path.split('.') as [string, keyof Metrics['precision'], keyof Metrics['precision']['fp32']];
+    const [, format, name] = path.split('.') as [
+      string,
+      keyof Metrics['precision'],
+      keyof Metrics['precision']['fp32'],
+    ];
     return metrics.precision[format]?.[name] ?? null;
   }
   const value = metrics[path as keyof Metrics];
@@ -43,14 +49,37 @@ export const METRIC_SOURCES: Partial<Record<string, string[]>> = {
   params: ['layers', 'hidden', 'ffn', 'experts.total', 'experts.width', 'vocab'],
   weightBytes: ['quantization', 'dtypes.weights', 'layers', 'hidden'],
   cachePerTokenBytes: ['kvHeads', 'latent.kvRank', 'headDim', 'dtypes.cache', 'layers'],
-  cacheBytesAtSpan: ['serving.sequences', 'serving.span', 'dtypes.cache', 'kvHeads', 'latent.kvRank', 'layerTypes', 'slidingWindow'],
+  cacheBytesAtSpan: [
+    'serving.sequences',
+    'serving.span',
+    'dtypes.cache',
+    'kvHeads',
+    'latent.kvRank',
+    'layerTypes',
+    'slidingWindow',
+  ],
   memoryBytes: ['serving.sequences', 'serving.span', 'dtypes.cache', 'dtypes.weights'],
   fitSequences: ['serving.sequences', 'serving.deviceGiB', 'serving.span', 'dtypes.cache'],
   flopsPerToken: ['serving.span', 'layers', 'hidden'],
   tokenBudget: ['serving.outputTokens', 'serving.promptTokens', 'serving.span'],
   devices: ['serving.tensorParallel', 'serving.pipelineParallel'],
   kvHeadsPerDevice: ['serving.tensorParallel', 'kvHeads'],
-  weightBytesPerDevice: ['serving.tensorParallel', 'serving.pipelineParallel', 'quantization', 'dtypes.weights'],
-  cachePerTokenBytesPerDevice: ['serving.tensorParallel', 'serving.pipelineParallel', 'kvHeads', 'dtypes.cache'],
-  memoryBytesPerDevice: ['serving.sequences', 'serving.span', 'serving.tensorParallel', 'serving.pipelineParallel'],
+  weightBytesPerDevice: [
+    'serving.tensorParallel',
+    'serving.pipelineParallel',
+    'quantization',
+    'dtypes.weights',
+  ],
+  cachePerTokenBytesPerDevice: [
+    'serving.tensorParallel',
+    'serving.pipelineParallel',
+    'kvHeads',
+    'dtypes.cache',
+  ],
+  memoryBytesPerDevice: [
+    'serving.sequences',
+    'serving.span',
+    'serving.tensorParallel',
+    'serving.pipelineParallel',
+  ],
 };

@@ -28,17 +28,23 @@ function quoted(text: string): string {
 export function starterGlob(path: string): string {
   const parts = path.split('/');
   const name = parts[parts.length - 1]!;
-  const pattern = name === 'config.json' ? 'config.json'
-    : /\.reach\.(ya?ml|json)$/.test(name) ? '*.reach.{yaml,yml,json}'
-      : /\.(ya?ml|json)$/.test(name) && name.includes('model') ? '*model*.{json,yaml,yml}'
-        : name;
+  const pattern =
+    name === 'config.json'
+      ? 'config.json'
+      : /\.reach\.(ya?ml|json)$/.test(name)
+        ? '*.reach.{yaml,yml,json}'
+        : /\.(ya?ml|json)$/.test(name) && name.includes('model')
+          ? '*model*.{json,yaml,yml}'
+          : name;
   return parts.length > 1 ? `${parts[0]}/**/${pattern}` : `**/${pattern}`;
 }
 
 /** Folders (as `top/**` globs) a workflow's `paths` filter needs: every found config's top folder, then the policy. */
 export function workflowPaths(found: readonly FoundConfig[]): string[] | null {
   if (found.length === 0) return null;
-  const tops = [...new Set(found.map((c) => (c.path.includes('/') ? `${c.path.split('/')[0]}/**` : c.path)))].sort();
+  const tops = [
+    ...new Set(found.map((c) => (c.path.includes('/') ? `${c.path.split('/')[0]}/**` : c.path))),
+  ].sort();
   return [...tops, DEFAULT_POLICY_PATH];
 }
 
@@ -51,17 +57,42 @@ function common<T>(found: readonly FoundConfig[], pick: (spec: ModelSpec) => T |
 
 /** Meaning of a metric's limit, from the policy schema (`unit: definition`). */
 function meaning(metric: string): string {
-  const limits = (POLICY_SCHEMA.definitions as Record<string, { properties?: Record<string, { description?: string }> }>).limits;
+  const limits = (
+    POLICY_SCHEMA.definitions as Record<
+      string,
+      { properties?: Record<string, { description?: string }> }
+    >
+  ).limits;
   return limits?.properties?.[metric]?.description ?? metric;
 }
 
 /** Limits suggested in the starter policy, commented out: metric, its bounds as YAML lines, and why. */
 const SUGGESTED_LIMITS: readonly { metric: string; bounds: string[]; why: string }[] = [
-  { metric: 'headroom', bounds: ['min: 0'], why: 'block a span past what the position code supports' },
-  { metric: 'exposedPairs', bounds: ['max: 0'], why: 'block rotary pairs turned further than training turned them' },
-  { metric: 'declaredSpan', bounds: ['max-increase-pct: 100', 'severity: warn'], why: 'warn when a pull request more than doubles the span' },
-  { metric: 'fitSequences', bounds: ['min: 1'], why: 'block when not one sequence fits the device (needs serving.device-memory-gib)' },
-  { metric: 'memoryBytes', bounds: ['max-increase-pct: 25', 'severity: warn'], why: 'warn when memory at the span grows by more than a quarter' },
+  {
+    metric: 'headroom',
+    bounds: ['min: 0'],
+    why: 'block a span past what the position code supports',
+  },
+  {
+    metric: 'exposedPairs',
+    bounds: ['max: 0'],
+    why: 'block rotary pairs turned further than training turned them',
+  },
+  {
+    metric: 'declaredSpan',
+    bounds: ['max-increase-pct: 100', 'severity: warn'],
+    why: 'warn when a pull request more than doubles the span',
+  },
+  {
+    metric: 'fitSequences',
+    bounds: ['min: 1'],
+    why: 'block when not one sequence fits the device (needs serving.device-memory-gib)',
+  },
+  {
+    metric: 'memoryBytes',
+    bounds: ['max-increase-pct: 25', 'severity: warn'],
+    why: 'warn when memory at the span grows by more than a quarter',
+  },
 ];
 
 /**
@@ -79,22 +110,38 @@ export function renderStarterPolicy(found: readonly FoundConfig[]): string {
     '# and in the schema above, which editors with a YAML language server use for completion.',
   ];
   if (found.length === 0) {
-    lines.push('#', '# `context-reach init` found no model configs, so the built-in globs pick them (see `files` below).');
+    lines.push(
+      '#',
+      '# `context-reach init` found no model configs, so the built-in globs pick them (see `files` below).',
+    );
   } else {
-    lines.push('#', `# Written by \`context-reach init\` from the ${found.length} model config${found.length === 1 ? '' : 's'} found:`);
+    lines.push(
+      '#',
+      `# Written by \`context-reach init\` from the ${found.length} model config${found.length === 1 ? '' : 's'} found:`,
+    );
     for (const config of found) {
-      const what = config.spec === null ? 'could not be read; fix it and run the gate'
-        : `${config.dialect}, ${config.spec.declaredSpan.toLocaleString('en-US')} positions`;
+      const what =
+        config.spec === null
+          ? 'could not be read; fix it and run the gate'
+          : `${config.dialect}, ${config.spec.declaredSpan.toLocaleString('en-US')} positions`;
       lines.push(`#   ${commentText(config.path)} (${commentText(what)})`);
     }
   }
   lines.push('');
   const globs = [...new Set(found.map((c) => starterGlob(c.path)))];
   if (globs.length > 0) {
-    lines.push('# Which files are model configs (globs, repository-relative; `**` is any depth).', 'files:');
+    lines.push(
+      '# Which files are model configs (globs, repository-relative; `**` is any depth).',
+      'files:',
+    );
     for (const glob of globs) lines.push(`  - ${quoted(glob)}`);
   } else {
-    lines.push('# Which files are model configs (globs, repository-relative; `**` is any depth). Without', '# `files`, the built-in globs apply.', '# files:', '#   - "models/**/config.json"');
+    lines.push(
+      '# Which files are model configs (globs, repository-relative; `**` is any depth). Without',
+      '# `files`, the built-in globs apply.',
+      '# files:',
+      '#   - "models/**/config.json"',
+    );
   }
   lines.push('');
 
@@ -102,13 +149,21 @@ export function renderStarterPolicy(found: readonly FoundConfig[]): string {
   const cache = common(found, (spec) => spec.dtypes.cache);
   const inferred: string[] = [];
   const row = (left: string, note: string) => `${left.padEnd(30)}# ${note}`;
-  if (weights !== null) inferred.push(row(`  weights: ${weights}`, `every config found stores its weights as ${weights}`));
-  if (cache !== null) inferred.push(row(`  cache: ${cache}`, `every config found keeps its key/value cache as ${cache}`));
+  if (weights !== null)
+    inferred.push(
+      row(`  weights: ${weights}`, `every config found stores its weights as ${weights}`),
+    );
+  if (cache !== null)
+    inferred.push(
+      row(`  cache: ${cache}`, `every config found keeps its key/value cache as ${cache}`),
+    );
   const commented = [
-    row('  # span: 8192', 'tokens served per sequence (default: each config\'s declared span)'),
+    row('  # span: 8192', "tokens served per sequence (default: each config's declared span)"),
     row('  # sequences: 1', 'sequences held in the key/value cache at once'),
     row('  # device-memory-gib: 80', 'memory per replica in GiB, for fitSequences'),
-    ...(cache === null ? [row('  # cache: fp8', 'key/value cache format (default: the weight format)')] : []),
+    ...(cache === null
+      ? [row('  # cache: fp8', 'key/value cache format (default: the weight format)')]
+      : []),
   ];
   lines.push('# Serving defaults for every model config; a value the config states itself wins.');
   if (inferred.length > 0) lines.push('serving:', ...inferred, ...commented);
@@ -116,14 +171,15 @@ export function renderStarterPolicy(found: readonly FoundConfig[]): string {
   lines.push('');
 
   lines.push(
-    '# Limits on the head version\'s metrics (names as in the README\'s metrics table). None is set:',
-    '# uncomment the ones your team wants. Each bound is in the metric\'s unit; `severity` is block',
+    "# Limits on the head version's metrics (names as in the README's metrics table). None is set:",
+    "# uncomment the ones your team wants. Each bound is in the metric's unit; `severity` is block",
     '# (the default), warn or info.',
     '# limits:',
   );
   for (const { metric, bounds, why } of SUGGESTED_LIMITS) {
     lines.push(`#   ${metric}:`.padEnd(44) + `# ${commentText(meaning(metric))}`);
-    for (const [i, bound] of bounds.entries()) lines.push(`#     ${bound}`.padEnd(44) + (i === 0 ? `# ${why}` : '').trimEnd());
+    for (const [i, bound] of bounds.entries())
+      lines.push(`#     ${bound}`.padEnd(44) + (i === 0 ? `# ${why}` : '').trimEnd());
   }
   lines.push(
     '',

@@ -10,7 +10,11 @@ export interface WorkflowFile {
 /** The `on: pull_request` trigger, limited to `paths` when given (null: every pull request). */
 function trigger(paths: readonly string[] | null): string[] {
   if (paths === null) return ['on:', '  pull_request:'];
-  return ['on:', '  pull_request:', `    paths: [${paths.map((p) => JSON.stringify(p)).join(', ')}]`];
+  return [
+    'on:',
+    '  pull_request:',
+    `    paths: [${paths.map((p) => JSON.stringify(p)).join(', ')}]`,
+  ];
 }
 
 /**
@@ -90,21 +94,21 @@ export function forkWorkflows(paths: readonly string[] | null): WorkflowFile[] {
     '# Posts the report of context-reach.yml as the one pull-request comment, forks included. It runs',
     '# in the base repository with a token that may comment, so it checks out nothing and runs nothing',
     '# from the pull request: the report is untrusted data, checked and escaped again by the action,',
-    '# and posted only to the open pull request whose head is the run\'s head commit.',
+    "# and posted only to the open pull request whose head is the run's head commit.",
     'name: context-reach publish',
     'on:',
     '  workflow_run:',
     '    workflows: [context-reach]',
     '    types: [completed]',
     'permissions:',
-    '  actions: read           # the first run\'s artifact',
+    "  actions: read           # the first run's artifact",
     '  pull-requests: write    # the one living comment',
     'concurrency:              # one publish at a time per pull request (per head repository when GitHub names none)',
     '  group: context-reach-publish-${{ github.event.workflow_run.pull_requests[0].number || github.event.workflow_run.head_repository.id }}',
     '  cancel-in-progress: false',
     'jobs:',
     '  publish:',
-    '    if: github.event.workflow_run.event == \'pull_request\'',
+    "    if: github.event.workflow_run.event == 'pull_request'",
     '    runs-on: ubuntu-latest',
     '    steps:',
     '      - uses: actions/download-artifact@v4',

@@ -26,7 +26,13 @@
  * are scanned, stopping at the first collision.
  */
 import type { FloatFormat } from '../model.js';
-import { binaryExponent, minNormalExponent, roundToFormat, significantBits, spacingAt } from './float-format.js';
+import {
+  binaryExponent,
+  minNormalExponent,
+  roundToFormat,
+  significantBits,
+  spacingAt,
+} from './float-format.js';
 import { positionOverflowStart } from './position-rounding.js';
 
 const CHUNK = 1024;
@@ -41,7 +47,11 @@ function angleOverflows(p: number, t: number, format: FloatFormat): boolean {
  * token: `overflowPosition`, first p in [0, T) whose `fl_D(p)` or any angle is not finite;
  * null when none is (METRICS.md). Angles are monotone in p, so each pair is a binary search.
  */
-export function overflowPosition(format: FloatFormat, theta: Float64Array, span: number): number | null {
+export function overflowPosition(
+  format: FloatFormat,
+  theta: Float64Array,
+  span: number,
+): number | null {
   const start = positionOverflowStart(format);
   let first = start < span ? start : span;
   for (let i = 0; i < theta.length; i++) {
@@ -178,7 +188,14 @@ function runStart(format: FloatFormat, p: number): number {
  * The run holding position p (>= 2^m), cut at p from above: the larger of `best` and its error,
  * or -1 when its bound shows that neither it nor any lower run can pass `best`.
  */
-function visitRun(format: FloatFormat, t: number, th: number, d: number, p: number, best: number): number {
+function visitRun(
+  format: FloatFormat,
+  t: number,
+  th: number,
+  d: number,
+  p: number,
+  best: number,
+): number {
   const v = roundToFormat(p, format);
   const above = spacingAt(v, format);
   const even = (v / above) % 2 === 0;
@@ -200,7 +217,15 @@ function visitRun(format: FloatFormat, t: number, th: number, d: number, p: numb
  * When t = θ is a power of two every product and difference is exact: the errors are exactly
  * `(h - [k odd]) θ`, at most `h θ`, so once `best` reaches that the rest cannot pass it.
  */
-function binadeRuns(format: FloatFormat, t: number, th: number, d: number, e: number, p: number, best: number): { best: number; done: boolean } {
+function binadeRuns(
+  format: FloatFormat,
+  t: number,
+  th: number,
+  d: number,
+  e: number,
+  p: number,
+  best: number,
+): { best: number; done: boolean } {
   const m = significantBits(format);
   const floorValue = 2 ** e;
   const s = 2 ** (e - m + 1);
@@ -221,7 +246,8 @@ function binadeRuns(format: FloatFormat, t: number, th: number, d: number, e: nu
     if (exact) {
       if (spread <= best) return { best, done: true };
     } else {
-      const bound = ((vt >= edge ? halfHigh : halfLow) + v * d + spread) * (1 + SLACK) + SLACK * (v + s) * th;
+      const bound =
+        ((vt >= edge ? halfHigh : halfLow) + v * d + spread) * (1 + SLACK) + SLACK * (v + s) * th;
       if (bound < best) return { best, done: true };
     }
     const c = roundToFormat(vt, format);
@@ -287,7 +313,8 @@ function pairBlurred(format: FloatFormat, th: number, span: number): boolean {
     // Below: t < u/2 over a short stretch (a few steps each), or u/2 <= t < u (solved, not walked).
     if (roundToFormat(qLo * t, format) === roundToFormat((qLo - 1) * t, format)) return true;
     if (t >= u / 2) {
-      if (collidesWithinBinade(t / u, qLo + 1, qHi, (q) => roundToFormat(q * t, format))) return true;
+      if (collidesWithinBinade(t / u, qLo + 1, qHi, (q) => roundToFormat(q * t, format)))
+        return true;
       continue;
     }
     let prev = roundToFormat(qLo * t, format);
@@ -311,7 +338,12 @@ function pairBlurred(format: FloatFormat, th: number, span: number): boolean {
  * a is `a + floor(y(a-1)/D)`. Away from ties rounding is F, so an F-collision before the next tie
  * is a collision; the two pairs at each tie are checked with `round(q)` itself.
  */
-function collidesWithinBinade(r: number, a: number, b: number, round: (q: number) => number): boolean {
+function collidesWithinBinade(
+  r: number,
+  a: number,
+  b: number,
+  round: (q: number) => number,
+): boolean {
   let N = 1;
   let T = r;
   while (!Number.isInteger(T)) {

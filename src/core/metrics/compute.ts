@@ -6,7 +6,11 @@
 import type { FloatFormat, ModelSpec } from '../model.js';
 import type { LayerKindMetrics, Metrics, PrecisionMetrics } from './types.js';
 import { alibiHorizon, alibiSlopes } from './alibi-slopes.js';
-import { pairwiseAttentionFactor, scaleFrequencies, yarnAttentionScale } from './context-scaling.js';
+import {
+  pairwiseAttentionFactor,
+  scaleFrequencies,
+  yarnAttentionScale,
+} from './context-scaling.js';
 import { flopsPerToken } from './flops.js';
 import { baseFrequencies, rotaryHeadDim, rotaryWidth } from './frequencies.js';
 import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from './kv-cache.js';
@@ -15,8 +19,13 @@ import type { LayerGroup } from './layer-kinds.js';
 import { memoryBytes } from './memory-fit.js';
 import { usableDeviceBytes } from './memory-curve.js';
 import {
-  cachePerSequencePerDevice, cachePerTokenBytesPerDevice, deviceCount, fitSequencesPerDevice, kvHeadsPerDevice,
-  memoryBytesPerDevice, weightBytesPerDevice,
+  cachePerSequencePerDevice,
+  cachePerTokenBytesPerDevice,
+  deviceCount,
+  fitSequencesPerDevice,
+  kvHeadsPerDevice,
+  memoryBytesPerDevice,
+  weightBytesPerDevice,
 } from './per-device.js';
 import { storedWeightBytes } from './quantized-weights.js';
 import { numberFormatMetrics } from './number-format.js';
@@ -26,7 +35,14 @@ import { extensionRatio, headroom, reach, scalingCover } from './reach.js';
 import { receptiveField } from './receptive-field.js';
 import { positiveFinite } from './sizes.js';
 import { similarityScan } from './similarity-scan.js';
-import { bucketHorizon, declaredSpan, evaluationSpan, servedSpan, trainedSpan, tunedSpan } from './spans.js';
+import {
+  bucketHorizon,
+  declaredSpan,
+  evaluationSpan,
+  servedSpan,
+  trainedSpan,
+  tunedSpan,
+} from './spans.js';
 import { visionParams } from './vision-params.js';
 import { tokenBudget } from './token-budget.js';
 import { exposedPairs, unturnedPairs, wavelengthRange } from './wavelengths.js';
@@ -52,7 +68,12 @@ export interface RotarySetting {
  * per token: `θ_i` and `θ'_i` of the spec's code (or of `setting`) over span `T` and trained
  * span `L0`; null for learned, ALiBi and position-free codes and for degenerate input.
  */
-export function frequencyPlan(spec: ModelSpec, span: number | null, trained: number | null, setting?: RotarySetting): FrequencyPlan | null {
+export function frequencyPlan(
+  spec: ModelSpec,
+  span: number | null,
+  trained: number | null,
+  setting?: RotarySetting,
+): FrequencyPlan | null {
   const theta = baseFrequencies(spec, setting?.base);
   if (theta === null) return null;
   const code = spec.position;
@@ -69,8 +90,10 @@ export function frequencyPlan(spec: ModelSpec, span: number | null, trained: num
  */
 export function attentionScale(spec: ModelSpec): number | null {
   const code = spec.position;
-  if (code?.kind === 'rotary' && code.scaling?.kind === 'yarn') return yarnAttentionScale(code.scaling.factor);
-  if (code?.kind === 'rotary' && code.scaling?.kind === 'pairwise') return pairwiseAttentionFactor(code.scaling, trainedSpan(spec));
+  if (code?.kind === 'rotary' && code.scaling?.kind === 'yarn')
+    return yarnAttentionScale(code.scaling.factor);
+  if (code?.kind === 'rotary' && code.scaling?.kind === 'pairwise')
+    return pairwiseAttentionFactor(code.scaling, trainedSpan(spec));
   return 1;
 }
 
@@ -88,15 +111,24 @@ export interface PositionalMetrics {
  * `span` and trained span `trained`, both in tokens: a pure function of exactly these inputs, so
  * a run computes it once per distinct code and span (see `scan-memo.ts`).
  */
-export function positionalMetrics(theta: Float64Array | null, scaled: Float64Array | null, span: number | null, trained: number | null): PositionalMetrics {
+export function positionalMetrics(
+  theta: Float64Array | null,
+  scaled: Float64Array | null,
+  span: number | null,
+  trained: number | null,
+): PositionalMetrics {
   const precision = {} as Record<FloatFormat, PrecisionMetrics>;
-  for (const format of ['fp32', 'bf16', 'fp16'] as const) precision[format] = numberFormatMetrics(format, scaled, span);
+  for (const format of ['fp32', 'bf16', 'fp16'] as const)
+    precision[format] = numberFormatMetrics(format, scaled, span);
   return {
     range: scaled ? wavelengthRange(scaled) : null,
     similarity: similarityScan(scaled, span),
     precision,
     unturnedPairs: scaled && trained !== null ? unturnedPairs(scaled, trained) : null,
-    exposedPairs: theta && scaled && trained !== null && span !== null ? exposedPairs(theta, scaled, trained, span) : null,
+    exposedPairs:
+      theta && scaled && trained !== null && span !== null
+        ? exposedPairs(theta, scaled, trained, span)
+        : null,
   };
 }
 
@@ -113,11 +145,20 @@ export function computeMetrics(spec: ModelSpec, memo?: ScanMemo): Metrics {
   const reachTokens = reach(spec, trained, declared);
 
   const plan = frequencyPlan(spec, span, trained);
-  const positional = viaMemo(memo, 'positionalMetrics', positionalMetrics, plan ? plan.theta : null, plan ? plan.scaled : null, span, trained);
+  const positional = viaMemo(
+    memo,
+    'positionalMetrics',
+    positionalMetrics,
+    plan ? plan.theta : null,
+    plan ? plan.scaled : null,
+    span,
+    trained,
+  );
   const { range, similarity } = positional;
   // A copy per report, so no two reports share (and could change) one object.
   const precision = {} as Record<FloatFormat, PrecisionMetrics>;
-  for (const format of ['fp32', 'bf16', 'fp16'] as const) precision[format] = { ...positional.precision[format] };
+  for (const format of ['fp32', 'bf16', 'fp16'] as const)
+    precision[format] = { ...positional.precision[format] };
 
   const slopes = spec.position?.kind === 'alibi' ? alibiSlopes(spec.heads) : null;
 
@@ -184,20 +225,33 @@ interface TopLevel {
  * it) or the layers are degenerate. Local (sliding, chunked) layers use `localBase` unscaled when
  * the spec states one; settings equal to the top level's reuse its scans.
  */
-export function layerKindMetrics(spec: ModelSpec, span: number | null, trained: number | null, top: TopLevel): LayerKindMetrics[] | null {
+export function layerKindMetrics(
+  spec: ModelSpec,
+  span: number | null,
+  trained: number | null,
+  top: TopLevel,
+): LayerKindMetrics[] | null {
   const groups = layerGroups(spec);
   if (groups === null) return null;
   const code = spec.position;
-  const local = (g: LayerGroup) => g.window !== null && code?.kind === 'rotary' && positiveFinite(spec.localBase) !== null;
+  const local = (g: LayerGroup) =>
+    g.window !== null && code?.kind === 'rotary' && positiveFinite(spec.localBase) !== null;
   if (groups.length === 1 && groups[0]!.positional && !local(groups[0]!)) return null;
   const formats = ['fp32', 'bf16', 'fp16'] as const;
   const precisionCache = new Map<number, Record<FloatFormat, PrecisionMetrics>>();
   return groups.map((g): LayerKindMetrics => {
     const visible = span === null ? null : visibleSpan(g, span);
     const ownCode = g.positional ? code.kind : 'none';
-    const setting: RotarySetting | undefined = local(g) ? { base: spec.localBase as number, unscaled: true } : undefined;
-    const rotaryBase = ownCode === 'rotary' && code.kind === 'rotary' ? (setting ? setting.base : code.base) : null;
-    const plan = !g.positional ? null : setting ? frequencyPlan(spec, span, trained, setting) : top.plan;
+    const setting: RotarySetting | undefined = local(g)
+      ? { base: spec.localBase as number, unscaled: true }
+      : undefined;
+    const rotaryBase =
+      ownCode === 'rotary' && code.kind === 'rotary' ? (setting ? setting.base : code.base) : null;
+    const plan = !g.positional
+      ? null
+      : setting
+        ? frequencyPlan(spec, span, trained, setting)
+        : top.plan;
     let precision: Record<FloatFormat, PrecisionMetrics>;
     if (!g.positional) precision = nullPrecision(span);
     else if (!setting) precision = top.precision;
@@ -205,24 +259,38 @@ export function layerKindMetrics(spec: ModelSpec, span: number | null, trained: 
       const cached = precisionCache.get(setting.base);
       precision = cached ?? ({} as Record<FloatFormat, PrecisionMetrics>);
       if (cached === undefined) {
-        for (const format of formats) precision[format] = numberFormatMetrics(format, plan ? plan.scaled : null, span);
+        for (const format of formats)
+          precision[format] = numberFormatMetrics(format, plan ? plan.scaled : null, span);
         precisionCache.set(setting.base, precision);
       }
     }
     const range = plan === null ? null : setting ? wavelengthRange(plan.scaled) : top.range;
-    const similarity = plan === null ? similarityScan(null, null) : !setting && visible === span ? top.similarity : similarityScan(plan.scaled, visible);
+    const similarity =
+      plan === null
+        ? similarityScan(null, null)
+        : !setting && visible === span
+          ? top.similarity
+          : similarityScan(plan.scaled, visible);
     return {
       attention: g.attention,
       positionCode: ownCode,
       layers: g.layers,
       window: g.window,
       rotaryBase,
-      scaled: ownCode === 'rotary' && !setting && code.kind === 'rotary' && code.scaling !== null && code.scaling !== undefined,
+      scaled:
+        ownCode === 'rotary' &&
+        !setting &&
+        code.kind === 'rotary' &&
+        code.scaling !== null &&
+        code.scaling !== undefined,
       visibleSpan: visible,
       fastestWavelength: range ? range.fastest : null,
       slowestWavelength: range ? range.slowest : null,
       unturnedPairs: plan && trained !== null ? unturnedPairs(plan.scaled, trained) : null,
-      exposedPairs: plan && trained !== null && visible !== null ? exposedPairs(plan.theta, plan.scaled, trained, visible) : null,
+      exposedPairs:
+        plan && trained !== null && visible !== null
+          ? exposedPairs(plan.theta, plan.scaled, trained, visible)
+          : null,
       separationFloor: similarity.separationFloor,
       separationFloorOffset: similarity.separationFloorOffset,
       discriminationSpan: similarity.discriminationSpan,
@@ -233,6 +301,7 @@ export function layerKindMetrics(spec: ModelSpec, span: number | null, trained: 
 
 function nullPrecision(span: number | null): Record<FloatFormat, PrecisionMetrics> {
   const out = {} as Record<FloatFormat, PrecisionMetrics>;
-  for (const format of ['fp32', 'bf16', 'fp16'] as const) out[format] = numberFormatMetrics(format, null, span);
+  for (const format of ['fp32', 'bf16', 'fp16'] as const)
+    out[format] = numberFormatMetrics(format, null, span);
   return out;
 }

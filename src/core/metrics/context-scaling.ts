@@ -24,7 +24,8 @@ export function ntkBase(base: number, factor: number, r: number): number | null 
  * Eq. 18; METRICS.md takes `λ` from the unscaled frequencies); null when `α = β`.
  */
 export function yarnRamp(rho: number, alpha: number, beta: number): number | null {
-  if (!Number.isFinite(alpha) || !Number.isFinite(beta) || alpha === beta || Number.isNaN(rho)) return null;
+  if (!Number.isFinite(alpha) || !Number.isFinite(beta) || alpha === beta || Number.isNaN(rho))
+    return null;
   const g = (rho - alpha) / (beta - alpha);
   return g < 0 ? 0 : g > 1 ? 1 : g;
 }
@@ -41,7 +42,11 @@ export function yarnAttentionScale(factor: number): number | null {
  * factor: effective scaling factor `s`: the configured factor; `max(1, T/L0)` for dynamic
  * scaling (Peng et al. 2023, YaRN, §3.3).
  */
-export function effectiveFactor(scaling: Scaling, span: number | null, trained: number | null): number | null {
+export function effectiveFactor(
+  scaling: Scaling,
+  span: number | null,
+  trained: number | null,
+): number | null {
   if (scaling.kind === 'pairwise') return 1;
   if (scaling.kind === 'dynamic') {
     if (span === null || trained === null) return null;
@@ -56,7 +61,11 @@ export function effectiveFactor(scaling: Scaling, span: number | null, trained: 
  * implementation chooses them (LongRoPE, Ding et al. 2024; Phi-3's `longrope` rotary code). Null
  * when the chosen list is missing or `T`/`L0` is unknown.
  */
-export function pairwiseFactors(scaling: Scaling, span: number | null, trained: number | null): number[] | null {
+export function pairwiseFactors(
+  scaling: Scaling,
+  span: number | null,
+  trained: number | null,
+): number[] | null {
   if (span === null || trained === null) return null;
   const factors = span > trained ? scaling.longFactors : scaling.shortFactors;
   if (!factors || !factors.every((f) => Number.isFinite(f) && f > 0)) return null;
@@ -70,7 +79,8 @@ export function pairwiseFactors(scaling: Scaling, span: number | null, trained: 
  * (Ding et al. 2024). Null when `s` or `L0` is unusable.
  */
 export function pairwiseAttentionFactor(scaling: Scaling, trained: number | null): number | null {
-  if (scaling.attentionFactor !== null && scaling.attentionFactor !== undefined) return positiveFinite(scaling.attentionFactor);
+  if (scaling.attentionFactor !== null && scaling.attentionFactor !== undefined)
+    return positiveFinite(scaling.attentionFactor);
   const s = positiveFinite(scaling.factor);
   if (s === null || trained === null || !(trained > 1)) return null;
   return s <= 1 ? 1 : Math.sqrt(1 + Math.log(s) / Math.log(trained));
@@ -118,7 +128,11 @@ export function scaleFrequencies(
     }
     case 'banded': {
       const { low, high } = scaling;
-      if (trained === null || !(Number.isFinite(low) && Number.isFinite(high) && low >= 0 && high > low)) return null;
+      if (
+        trained === null ||
+        !(Number.isFinite(low) && Number.isFinite(high) && low >= 0 && high > low)
+      )
+        return null;
       for (let i = 0; i < theta.length; i++) {
         const lambda = (2 * Math.PI) / theta[i];
         if (lambda < trained / high) out[i] = theta[i];

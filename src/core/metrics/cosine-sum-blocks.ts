@@ -28,8 +28,13 @@ export interface CosinePlan {
 export function planCosineSums(theta: Float64Array): CosinePlan {
   const P = theta.length;
   const plan: CosinePlan = {
-    theta, twoCos: new Float64Array(P), cos: new Float64Array(P), sin: new Float64Array(P), sumTheta: 0,
-    seedNow: new Float64Array(P), seedBefore: new Float64Array(P),
+    theta,
+    twoCos: new Float64Array(P),
+    cos: new Float64Array(P),
+    sin: new Float64Array(P),
+    sumTheta: 0,
+    seedNow: new Float64Array(P),
+    seedBefore: new Float64Array(P),
   };
   for (let i = 0; i < P; i++) {
     plan.cos[i] = Math.cos(theta[i]);
@@ -47,7 +52,9 @@ export function planCosineSums(theta: Float64Array): CosinePlan {
  */
 export function cosineSumMargin(plan: CosinePlan, k0: number, n: number): number {
   const P = plan.theta.length;
-  return 2.5 * EPS * (P * (4 * n * n + 80 * n + 2) + 2 * (k0 + n) * plan.sumTheta + 2 * P * P + 4 * P);
+  return (
+    2.5 * EPS * (P * (4 * n * n + 80 * n + 2) + 2 * (k0 + n) * plan.sumTheta + 2 * P * P + 4 * P)
+  );
 }
 
 // 2π = A + B + C + D: A and B have 24 significant bits, so n·A and n·B are exact for n < 2^29;
@@ -90,28 +97,85 @@ export function fillCosineSums(plan: CosinePlan, k0: number, n: number, buf: Flo
   buf.fill(0, 0, n);
   let i = 0;
   for (; i + 8 <= P; i += 8) {
-    const a0 = a2[i], a1 = a2[i + 1], a2_ = a2[i + 2], a3 = a2[i + 3];
-    const a4 = a2[i + 4], a5 = a2[i + 5], a6 = a2[i + 6], a7 = a2[i + 7];
-    let q0 = seedNow[i], q1 = seedNow[i + 1], q2 = seedNow[i + 2], q3 = seedNow[i + 3];
-    let q4 = seedNow[i + 4], q5 = seedNow[i + 5], q6 = seedNow[i + 6], q7 = seedNow[i + 7];
-    let p0 = seedBefore[i], p1 = seedBefore[i + 1], p2 = seedBefore[i + 2], p3 = seedBefore[i + 3];
-    let p4 = seedBefore[i + 4], p5 = seedBefore[i + 5], p6 = seedBefore[i + 6], p7 = seedBefore[i + 7];
+    const a0 = a2[i],
+      a1 = a2[i + 1],
+      a2_ = a2[i + 2],
+      a3 = a2[i + 3];
+    const a4 = a2[i + 4],
+      a5 = a2[i + 5],
+      a6 = a2[i + 6],
+      a7 = a2[i + 7];
+    let q0 = seedNow[i],
+      q1 = seedNow[i + 1],
+      q2 = seedNow[i + 2],
+      q3 = seedNow[i + 3];
+    let q4 = seedNow[i + 4],
+      q5 = seedNow[i + 5],
+      q6 = seedNow[i + 6],
+      q7 = seedNow[i + 7];
+    let p0 = seedBefore[i],
+      p1 = seedBefore[i + 1],
+      p2 = seedBefore[i + 2],
+      p3 = seedBefore[i + 3];
+    let p4 = seedBefore[i + 4],
+      p5 = seedBefore[i + 5],
+      p6 = seedBefore[i + 6],
+      p7 = seedBefore[i + 7];
     for (let j = 0; j < n; j++) {
       buf[j] += q0 + q1 + (q2 + q3) + (q4 + q5 + (q6 + q7));
-      const r0 = a0 * q0 - p0, r1 = a1 * q1 - p1, r2 = a2_ * q2 - p2, r3 = a3 * q3 - p3;
-      const r4 = a4 * q4 - p4, r5 = a5 * q5 - p5, r6 = a6 * q6 - p6, r7 = a7 * q7 - p7;
-      p0 = q0; q0 = r0; p1 = q1; q1 = r1; p2 = q2; q2 = r2; p3 = q3; q3 = r3;
-      p4 = q4; q4 = r4; p5 = q5; q5 = r5; p6 = q6; q6 = r6; p7 = q7; q7 = r7;
+      const r0 = a0 * q0 - p0,
+        r1 = a1 * q1 - p1,
+        r2 = a2_ * q2 - p2,
+        r3 = a3 * q3 - p3;
+      const r4 = a4 * q4 - p4,
+        r5 = a5 * q5 - p5,
+        r6 = a6 * q6 - p6,
+        r7 = a7 * q7 - p7;
+      p0 = q0;
+      q0 = r0;
+      p1 = q1;
+      q1 = r1;
+      p2 = q2;
+      q2 = r2;
+      p3 = q3;
+      q3 = r3;
+      p4 = q4;
+      q4 = r4;
+      p5 = q5;
+      q5 = r5;
+      p6 = q6;
+      q6 = r6;
+      p7 = q7;
+      q7 = r7;
     }
   }
   for (; i + 4 <= P; i += 4) {
-    const a0 = a2[i], a1 = a2[i + 1], a2_ = a2[i + 2], a3 = a2[i + 3];
-    let q0 = seedNow[i], q1 = seedNow[i + 1], q2 = seedNow[i + 2], q3 = seedNow[i + 3];
-    let p0 = seedBefore[i], p1 = seedBefore[i + 1], p2 = seedBefore[i + 2], p3 = seedBefore[i + 3];
+    const a0 = a2[i],
+      a1 = a2[i + 1],
+      a2_ = a2[i + 2],
+      a3 = a2[i + 3];
+    let q0 = seedNow[i],
+      q1 = seedNow[i + 1],
+      q2 = seedNow[i + 2],
+      q3 = seedNow[i + 3];
+    let p0 = seedBefore[i],
+      p1 = seedBefore[i + 1],
+      p2 = seedBefore[i + 2],
+      p3 = seedBefore[i + 3];
     for (let j = 0; j < n; j++) {
       buf[j] += q0 + q1 + (q2 + q3);
-      const r0 = a0 * q0 - p0, r1 = a1 * q1 - p1, r2 = a2_ * q2 - p2, r3 = a3 * q3 - p3;
-      p0 = q0; q0 = r0; p1 = q1; q1 = r1; p2 = q2; q2 = r2; p3 = q3; q3 = r3;
+      const r0 = a0 * q0 - p0,
+        r1 = a1 * q1 - p1,
+        r2 = a2_ * q2 - p2,
+        r3 = a3 * q3 - p3;
+      p0 = q0;
+      q0 = r0;
+      p1 = q1;
+      q1 = r1;
+      p2 = q2;
+      q2 = r2;
+      p3 = q3;
+      q3 = r3;
     }
   }
   for (; i < P; i++) {

@@ -9,7 +9,12 @@
  * above the margin positive for sure, and one within the margin is decided by the reference
  * expression (`cosineSum`). So the result is the first k with `cosineSum(θ, k) < 0`.
  */
-import { COSINE_BLOCK, cosineSumMargin, fillCosineSums, planCosineSums } from './cosine-sum-blocks.js';
+import {
+  COSINE_BLOCK,
+  cosineSumMargin,
+  fillCosineSums,
+  planCosineSums,
+} from './cosine-sum-blocks.js';
 import { cosineSum } from './similarity-scan.js';
 
 /** The offset found (null when none in range) and the (pair, offset) elements the scan touched. */
@@ -22,7 +27,11 @@ export interface FirstNegative {
  * tokens: the smallest k in [kStart, kEnd) with `Σ_i cos(k θ_i) < 0`, null when none; also the
  * work done. Null offset for an empty range or no pairs.
  */
-export function firstNegativeOffset(theta: Float64Array, kStart: number, kEnd: number): FirstNegative {
+export function firstNegativeOffset(
+  theta: Float64Array,
+  kStart: number,
+  kEnd: number,
+): FirstNegative {
   const P = theta.length;
   if (P === 0 || !(kEnd > kStart) || !(kStart >= 1)) return { offset: null, elements: 0 };
   const plan = planCosineSums(theta);

@@ -17,7 +17,9 @@ export function attentionWidth(spec: ModelSpec): number | null {
     const rope = positiveCount(spec.latent.ropeDim);
     const nope = nonNegativeCount(spec.latent.nopeDim);
     const value = positiveCount(spec.latent.valueDim);
-    return rope === null || nope === null || value === null ? null : (heads * (nope + rope + value)) / 2;
+    return rope === null || nope === null || value === null
+      ? null
+      : (heads * (nope + rope + value)) / 2;
   }
   const headDim = positiveCount(spec.headDim);
   return headDim === null ? null : heads * headDim;
@@ -29,10 +31,15 @@ export function attentionWidth(spec: ModelSpec): number | null {
  * chunked layers, METRICS.md "Layers that differ"); with every layer full this is
  * `2·nonEmbeddingParams + 2·layers·T·heads·headDim`. Null for degenerate input.
  */
-export function flopsPerToken(spec: ModelSpec, nonEmbeddingParams: number | null, span: number | null): number | null {
+export function flopsPerToken(
+  spec: ModelSpec,
+  nonEmbeddingParams: number | null,
+  span: number | null,
+): number | null {
   const groups = layerGroups(spec);
   const width = attentionWidth(spec);
-  if (nonEmbeddingParams === null || span === null || groups === null || width === null) return null;
+  if (nonEmbeddingParams === null || span === null || groups === null || width === null)
+    return null;
   const layerTokens = groups.reduce((sum, g) => sum + g.layers * visibleSpan(g, span), 0);
   const f = 2 * nonEmbeddingParams + 2 * layerTokens * width;
   return Number.isFinite(f) ? f : null;

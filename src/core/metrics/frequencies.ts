@@ -39,7 +39,13 @@ export function rotaryHeadDim(spec: ModelSpec): number {
  * base 10000 and `d = d_model`; Su et al. 2021, RoFormer, eq. 15 with `d = r`).
  */
 export function geometricFrequencies(base: number, d: number): Float64Array | null {
-  if (positiveFinite(base) === null || positiveCount(d) === null || d % 2 !== 0 || d / 2 > MAX_PAIRS) return null;
+  if (
+    positiveFinite(base) === null ||
+    positiveCount(d) === null ||
+    d % 2 !== 0 ||
+    d / 2 > MAX_PAIRS
+  )
+    return null;
   const pairs = d / 2;
   const theta = new Float64Array(pairs);
   for (let i = 0; i < pairs; i++) theta[i] = Math.pow(base, (-2 * i) / d);

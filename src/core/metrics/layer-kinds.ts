@@ -54,7 +54,9 @@ export function layerAttentions(spec: ModelSpec): LayerAttention[] | null {
   } else {
     const windowed = windowedLayers(spec);
     if (windowed === null) return null;
-    kinds = Array.from({ length: layers }, (_, i): LayerAttention => (i >= layers - windowed ? 'sliding' : 'full'));
+    kinds = Array.from({ length: layers }, (_, i): LayerAttention =>
+      i >= layers - windowed ? 'sliding' : 'full',
+    );
   }
   if (kinds.includes('sliding') && positiveCount(spec.slidingWindow) === null) return null;
   if (kinds.includes('chunked') && positiveCount(spec.chunkSize) === null) return null;
@@ -81,7 +83,12 @@ export function layerGroups(spec: ModelSpec): LayerGroup[] | null {
     const found = groups.find((g) => g.attention === attention && g.positional === positional);
     if (found) found.layers += 1;
     else {
-      const window = attention === 'sliding' ? (spec.slidingWindow as number) : attention === 'chunked' ? (spec.chunkSize as number) : null;
+      const window =
+        attention === 'sliding'
+          ? (spec.slidingWindow as number)
+          : attention === 'chunked'
+            ? (spec.chunkSize as number)
+            : null;
       groups.push({ attention, positional, layers: 1, window });
     }
   });

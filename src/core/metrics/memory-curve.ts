@@ -4,7 +4,11 @@
 import type { ModelSpec } from '../model.js';
 import { servedSequences } from './kv-cache.js';
 import { DEFAULT_RESERVE } from './memory-fit.js';
-import { cachePerSequencePerDevice, memoryBytesPerDevice, weightBytesPerDevice } from './per-device.js';
+import {
+  cachePerSequencePerDevice,
+  memoryBytesPerDevice,
+  weightBytesPerDevice,
+} from './per-device.js';
 import { storedWeightBytes } from './quantized-weights.js';
 import { positiveCount, positiveFinite } from './sizes.js';
 
@@ -14,7 +18,11 @@ import { positiveCount, positiveFinite } from './sizes.js';
  */
 export function memoryAtSpan(spec: ModelSpec, span: number): number | null {
   const t = positiveCount(span);
-  return memoryBytesPerDevice(weightBytesPerDevice(spec, storedWeightBytes(spec)), cachePerSequencePerDevice(spec, t), servedSequences(spec));
+  return memoryBytesPerDevice(
+    weightBytesPerDevice(spec, storedWeightBytes(spec)),
+    cachePerSequencePerDevice(spec, t),
+    servedSequences(spec),
+  );
 }
 
 /**
@@ -43,7 +51,9 @@ export function reserveWords(spec: ModelSpec): string {
   const reserve = stated === null || stated === undefined ? DEFAULT_RESERVE : stated;
   const share = `${Number((reserve * 100).toPrecision(4))} %`;
   const activation = spec.serving?.activationReserveGiB;
-  const extra = typeof activation === 'number' && Number.isFinite(activation) && activation > 0
-    ? ` and ${Number(activation.toPrecision(4))} GiB for activations` : '';
+  const extra =
+    typeof activation === 'number' && Number.isFinite(activation) && activation > 0
+      ? ` and ${Number(activation.toPrecision(4))} GiB for activations`
+      : '';
   return `after the ${share} reserve kept for activations, workspace and fragmentation${extra}`;
 }

@@ -35,10 +35,16 @@ export function memoryBytes(weights: number | null, cache: number | null): numbe
  * sequences))` with `deviceBytes = deviceGiB · 2^30` (METRICS.md); negative when the weights alone
  * do not fit. Null without a device budget, with a reserve outside [0, 1), or an empty cache.
  */
-export function fitSequences(spec: ModelSpec, weights: number | null, cache: number | null, sequences: number | null): number | null {
+export function fitSequences(
+  spec: ModelSpec,
+  weights: number | null,
+  cache: number | null,
+  sequences: number | null,
+): number | null {
   const device = positiveFinite(spec.serving?.deviceGiB);
   const reserveStated = spec.serving?.reserve;
-  const reserve = reserveStated === null || reserveStated === undefined ? DEFAULT_RESERVE : reserveStated;
+  const reserve =
+    reserveStated === null || reserveStated === undefined ? DEFAULT_RESERVE : reserveStated;
   if (device === null || weights === null || cache === null || sequences === null) return null;
   if (!(Number.isFinite(reserve) && reserve >= 0 && reserve < 1) || !(cache > 0)) return null;
   const n = Math.floor((device * 2 ** 30 * (1 - reserve) - weights) / (cache / sequences));

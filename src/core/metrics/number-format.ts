@@ -23,7 +23,11 @@ export const NULL_PRECISION: Readonly<PrecisionMetrics> = Object.freeze({
  * `positionExactLimit` without a valid span; `angleErrorMax` null when anything overflows or the
  * span is past the scan bounds (`MAX_SCAN_SPAN`).
  */
-export function numberFormatMetrics(format: FloatFormat, theta: Float64Array | null, span: number | null): PrecisionMetrics {
+export function numberFormatMetrics(
+  format: FloatFormat,
+  theta: Float64Array | null,
+  span: number | null,
+): PrecisionMetrics {
   if (theta === null) return { ...NULL_PRECISION };
   const limit = positionExactLimit(format);
   if (span === null || !Number.isSafeInteger(span) || span < 1) {
@@ -33,8 +37,14 @@ export function numberFormatMetrics(format: FloatFormat, theta: Float64Array | n
   return {
     positionExactLimit: limit,
     collidingPositions: collidingPositions(format, span),
-    angleErrorMax: overflow === null && scanAllowed(theta.length, span) ? angleErrorMax(format, theta, span) : null,
+    angleErrorMax:
+      overflow === null && scanAllowed(theta.length, span)
+        ? angleErrorMax(format, theta, span)
+        : null,
     overflowPosition: overflow,
-    blurredPairs: span - 1 > limit || scanAllowed(theta.length, span) ? blurredPairs(format, theta, span) : null,
+    blurredPairs:
+      span - 1 > limit || scanAllowed(theta.length, span)
+        ? blurredPairs(format, theta, span)
+        : null,
   };
 }

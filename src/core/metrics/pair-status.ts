@@ -25,7 +25,12 @@ export interface PairInfo {
  * wavelengths above `L0`, whatever the status); null when the arrays differ in length or a span
  * is not positive.
  */
-export function pairStatuses(theta: Float64Array, scaled: Float64Array, trained: number, span: number): PairInfo[] | null {
+export function pairStatuses(
+  theta: Float64Array,
+  scaled: Float64Array,
+  trained: number,
+  span: number,
+): PairInfo[] | null {
   if (theta.length !== scaled.length || !(trained > 0) || !(span > 0)) return null;
   const out: PairInfo[] = [];
   for (let i = 0; i < theta.length; i++) {

@@ -48,11 +48,23 @@ const total = (p: Part): number => p.matrices + p.vectors;
  * heads·headDim·hidden` (q, k, v, o; Ainslie et al. 2023 for kvHeads < heads), plus q, k, v, o
  * biases when on.
  */
-export function attentionParams(hidden: number, heads: number, kvHeads: number, headDim: number, bias: boolean): number {
+export function attentionParams(
+  hidden: number,
+  heads: number,
+  kvHeads: number,
+  headDim: number,
+  bias: boolean,
+): number {
   return total(attentionPart(hidden, heads, kvHeads, headDim, bias));
 }
 
-function attentionPart(hidden: number, heads: number, kvHeads: number, headDim: number, bias: boolean): Part {
+function attentionPart(
+  hidden: number,
+  heads: number,
+  kvHeads: number,
+  headDim: number,
+  bias: boolean,
+): Part {
   return {
     matrices: hidden * heads * headDim + 2 * hidden * kvHeads * headDim + heads * headDim * hidden,
     vectors: bias ? heads * headDim + 2 * kvHeads * headDim + hidden : 0,
@@ -68,21 +80,42 @@ function attentionPart(hidden: number, heads: number, kvHeads: number, headDim: 
  * published implementation's RMS norms on each latent (`d_c`, and `d_c'` when queries are
  * compressed), plus biases on the down-projections and the output when on.
  */
-function latentPart(hidden: number, heads: number, kvRank: number, qRank: number | null, rope: number, nope: number, value: number, bias: boolean): Part {
-  const query = qRank === null ? hidden * heads * (nope + rope) : hidden * qRank + qRank * heads * (nope + rope);
+function latentPart(
+  hidden: number,
+  heads: number,
+  kvRank: number,
+  qRank: number | null,
+  rope: number,
+  nope: number,
+  value: number,
+  bias: boolean,
+): Part {
+  const query =
+    qRank === null
+      ? hidden * heads * (nope + rope)
+      : hidden * qRank + qRank * heads * (nope + rope);
   return {
-    matrices: query + hidden * (kvRank + rope) + kvRank * heads * (nope + value) + heads * value * hidden,
+    matrices:
+      query + hidden * (kvRank + rope) + kvRank * heads * (nope + value) + heads * value * hidden,
     vectors: kvRank + (qRank ?? 0) + (bias ? (qRank ?? 0) + kvRank + rope + hidden : 0),
   };
 }
 
 /** count: one feed-forward block, `(gated ? 3 : 2)·hidden·ffn`, plus biases when on (per hidden unit and output). */
-export function feedForwardParams(hidden: number, ffn: number, gated: boolean, bias: boolean): number {
+export function feedForwardParams(
+  hidden: number,
+  ffn: number,
+  gated: boolean,
+  bias: boolean,
+): number {
   return total(feedForwardPart(hidden, ffn, gated, bias));
 }
 
 function feedForwardPart(hidden: number, ffn: number, gated: boolean, bias: boolean): Part {
-  return { matrices: (gated ? 3 : 2) * hidden * ffn, vectors: bias ? (gated ? 2 : 1) * ffn + hidden : 0 };
+  return {
+    matrices: (gated ? 3 : 2) * hidden * ffn,
+    vectors: bias ? (gated ? 2 : 1) * ffn + hidden : 0,
+  };
 }
 
 /** count: one normalisation of width `hidden`: a scale, plus a shift when biases are on (LayerNorm). */
@@ -113,7 +146,15 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
   const headDim = positiveCount(spec.headDim);
   const ffn = positiveCount(spec.ffn);
   const vocab = positiveCount(spec.vocab);
-  if (layers === null || hidden === null || heads === null || kvHeads === null || headDim === null || ffn === null || vocab === null) {
+  if (
+    layers === null ||
+    hidden === null ||
+    heads === null ||
+    kvHeads === null ||
+    headDim === null ||
+    ffn === null ||
+    vocab === null
+  ) {
     return null;
   }
   const bias = spec.bias === true;
@@ -128,7 +169,14 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
     const nope = nonNegativeCount(l.nopeDim);
     const value = positiveCount(l.valueDim);
     const qRank = l.qRank === null || l.qRank === undefined ? null : positiveCount(l.qRank);
-    if (kvRank === null || rope === null || nope === null || value === null || (l.qRank !== null && l.qRank !== undefined && qRank === null)) return null;
+    if (
+      kvRank === null ||
+      rope === null ||
+      nope === null ||
+      value === null ||
+      (l.qRank !== null && l.qRank !== undefined && qRank === null)
+    )
+      return null;
     attention = latentPart(hidden, heads, kvRank, qRank, rope, nope, value, bias);
   } else {
     attention = attentionPart(hidden, heads, kvHeads, headDim, bias);
@@ -136,10 +184,15 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
   }
 
   const stated = spec.layerNorms;
-  const layerNorms = stated === null || stated === undefined ? DEFAULT_LAYER_NORMS : nonNegativeCount(stated);
+  const layerNorms =
+    stated === null || stated === undefined ? DEFAULT_LAYER_NORMS : nonNegativeCount(stated);
   if (layerNorms === null) return null;
   const encoderDecoder = spec.encoder !== null && spec.encoder !== undefined;
-  const shared = add(attention, encoderDecoder ? attention : { matrices: 0, vectors: 0 }, times(layerNorms + (encoderDecoder ? 1 : 0), norm()));
+  const shared = add(
+    attention,
+    encoderDecoder ? attention : { matrices: 0, vectors: 0 },
+    times(layerNorms + (encoderDecoder ? 1 : 0), norm()),
+  );
 
   const dense = feedForwardPart(hidden, ffn, gated, bias);
   let mixtureTotal = dense;
@@ -150,24 +203,47 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
     const e = positiveCount(x.total);
     const k = positiveCount(x.active);
     const width = x.width === null || x.width === undefined ? ffn : positiveCount(x.width);
-    const sharedCount = x.shared === null || x.shared === undefined ? 0 : nonNegativeCount(x.shared);
-    const sharedWidth = x.sharedWidth === null || x.sharedWidth === undefined ? width : positiveCount(x.sharedWidth);
-    const denseStated = x.denseLayers === null || x.denseLayers === undefined ? 0 : nonNegativeCount(x.denseLayers);
-    if (e === null || k === null || k > e || width === null || sharedCount === null || sharedWidth === null || denseStated === null || denseStated > layers) return null;
+    const sharedCount =
+      x.shared === null || x.shared === undefined ? 0 : nonNegativeCount(x.shared);
+    const sharedWidth =
+      x.sharedWidth === null || x.sharedWidth === undefined ? width : positiveCount(x.sharedWidth);
+    const denseStated =
+      x.denseLayers === null || x.denseLayers === undefined ? 0 : nonNegativeCount(x.denseLayers);
+    if (
+      e === null ||
+      k === null ||
+      k > e ||
+      width === null ||
+      sharedCount === null ||
+      sharedWidth === null ||
+      denseStated === null ||
+      denseStated > layers
+    )
+      return null;
     denseLayers = denseStated;
     const expert = feedForwardPart(hidden, width, gated, bias);
-    const always = add(
-      times(sharedCount, feedForwardPart(hidden, sharedWidth, gated, bias)),
-      { matrices: hidden * e + (x.sharedGate === true && sharedCount > 0 ? hidden : 0), vectors: 0 },
-    );
+    const always = add(times(sharedCount, feedForwardPart(hidden, sharedWidth, gated, bias)), {
+      matrices: hidden * e + (x.sharedGate === true && sharedCount > 0 ? hidden : 0),
+      vectors: 0,
+    });
     mixtureTotal = add(times(e, expert), always);
     mixtureActive = add(times(k, expert), always);
   }
   const moeLayers = spec.experts ? layers - denseLayers : 0;
   const denseCount = layers - moeLayers;
   const finalNorm = norm();
-  let stackTotal = add(times(layers, shared), times(denseCount, dense), times(moeLayers, mixtureTotal), finalNorm);
-  let stackActive = add(times(layers, shared), times(denseCount, dense), times(moeLayers, mixtureActive), finalNorm);
+  let stackTotal = add(
+    times(layers, shared),
+    times(denseCount, dense),
+    times(moeLayers, mixtureTotal),
+    finalNorm,
+  );
+  let stackActive = add(
+    times(layers, shared),
+    times(denseCount, dense),
+    times(moeLayers, mixtureActive),
+    finalNorm,
+  );
 
   if (encoderDecoder) {
     const enc = spec.encoder!;
@@ -176,8 +252,13 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
     const eKv = positiveCount(enc.kvHeads);
     const eHeadDim = positiveCount(enc.headDim);
     const eFfn = positiveCount(enc.ffn);
-    if (eLayers === null || eHeads === null || eKv === null || eHeadDim === null || eFfn === null) return null;
-    const encoderLayer = add(attentionPart(hidden, eHeads, eKv, eHeadDim, bias), feedForwardPart(hidden, eFfn, gated, bias), times(2, norm()));
+    if (eLayers === null || eHeads === null || eKv === null || eHeadDim === null || eFfn === null)
+      return null;
+    const encoderLayer = add(
+      attentionPart(hidden, eHeads, eKv, eHeadDim, bias),
+      feedForwardPart(hidden, eFfn, gated, bias),
+      times(2, norm()),
+    );
     const encoder = add(times(eLayers, encoderLayer), norm());
     stackTotal = add(stackTotal, encoder);
     stackActive = add(stackActive, encoder);
@@ -209,5 +290,7 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
 /** count: `params`, `activeParams`, `nonEmbeddingParams` (METRICS.md); null as `parameterBreakdown`. */
 export function parameterCounts(spec: ModelSpec): ParameterCounts | null {
   const b = parameterBreakdown(spec);
-  return b === null ? null : { params: b.params, activeParams: b.activeParams, nonEmbeddingParams: b.nonEmbeddingParams };
+  return b === null
+    ? null
+    : { params: b.params, activeParams: b.activeParams, nonEmbeddingParams: b.nonEmbeddingParams };
 }

@@ -20,7 +20,8 @@ export interface ParallelDegrees {
 
 /** count: `t` and `p` in force (default `1`); null when one is stated but not a positive whole number. */
 export function parallelDegrees(spec: ModelSpec): ParallelDegrees | null {
-  const stated = (x: number | null | undefined) => (x === null || x === undefined ? DEFAULT_PARALLEL_DEGREE : positiveCount(x));
+  const stated = (x: number | null | undefined) =>
+    x === null || x === undefined ? DEFAULT_PARALLEL_DEGREE : positiveCount(x);
   const t = stated(spec.serving?.tensorParallel);
   const p = stated(spec.serving?.pipelineParallel);
   return t === null || p === null ? null : { t, p };
@@ -64,7 +65,9 @@ function stageCache(spec: ModelSpec, span: number | null): number | null {
   if (groups === null) return null;
   let left = Math.ceil(layers / d.p);
   let total = 0;
-  const heaviest = [...groups].sort((a, b) => b.tokenBytes * tokensHeld(b, span) - a.tokenBytes * tokensHeld(a, span));
+  const heaviest = [...groups].sort(
+    (a, b) => b.tokenBytes * tokensHeld(b, span) - a.tokenBytes * tokensHeld(a, span),
+  );
   for (const group of heaviest) {
     const taken = Math.min(left, group.layers);
     total += taken * group.tokenBytes * tokensHeld(group, span);
@@ -85,7 +88,11 @@ export function cachePerSequencePerDevice(spec: ModelSpec, span: number | null):
 }
 
 /** bytes: `memoryBytesPerDevice = weightBytesPerDevice + sequences · cache per sequence per device`. */
-export function memoryBytesPerDevice(weights: number | null, perSequence: number | null, sequences: number | null): number | null {
+export function memoryBytesPerDevice(
+  weights: number | null,
+  perSequence: number | null,
+  sequences: number | null,
+): number | null {
   if (weights === null || perSequence === null || sequences === null) return null;
   const m = weights + sequences * perSequence;
   return Number.isFinite(m) ? m : null;
@@ -96,8 +103,13 @@ export function memoryBytesPerDevice(weights: number | null, perSequence: number
  * per device)`, `usable` from `usableDeviceBytes`; negative when the weights alone do not fit.
  * Null without a budget or with an empty cache.
  */
-export function fitSequencesPerDevice(usable: number | null, weights: number | null, perSequence: number | null): number | null {
-  if (usable === null || weights === null || perSequence === null || !(perSequence > 0)) return null;
+export function fitSequencesPerDevice(
+  usable: number | null,
+  weights: number | null,
+  perSequence: number | null,
+): number | null {
+  if (usable === null || weights === null || perSequence === null || !(perSequence > 0))
+    return null;
   const n = Math.floor((usable - weights) / perSequence);
   return Number.isFinite(n) ? n : null;
 }
@@ -116,7 +128,10 @@ export function shardingDegrees(heads: number, kvHeads: number, limit = 12): num
     divisors.push(d);
     if (d * d !== h) divisors.push(h / d);
   }
-  return divisors.sort((a, b) => a - b).filter((t) => shards(h, kv, t)).slice(0, limit);
+  return divisors
+    .sort((a, b) => a - b)
+    .filter((t) => shards(h, kv, t))
+    .slice(0, limit);
 }
 
 /** Whether tensor degree `t` shards the heads: `heads % t == 0`, and `kvHeads` and `t` with one dividing the other. */

@@ -39,6 +39,7 @@ export function collidingPositions(format: FloatFormat, span: number): number | 
   if (!Number.isSafeInteger(span) || span < 1) return null;
   const start = positionOverflowStart(format);
   const n = Math.min(span, start);
-  const distinct = representableIntegersUpTo(n - 1, format) + (roundToFormat(n - 1, format) > n - 1 ? 1 : 0);
+  const distinct =
+    representableIntegersUpTo(n - 1, format) + (roundToFormat(n - 1, format) > n - 1 ? 1 : 0);
   return n - distinct + (span > start ? span - start : 0);
 }

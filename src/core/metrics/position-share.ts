@@ -17,7 +17,10 @@ export function positionShare(spec: ModelSpec): number | null {
   if (kind !== 'sinusoidal' && kind !== 'learned') return null;
   const hidden = positiveCount(spec.hidden);
   const std = positiveFinite(spec.embeddingInitStd);
-  const multiplier = spec.embeddingMultiplier === null || spec.embeddingMultiplier === undefined ? 1 : finiteOrNull(spec.embeddingMultiplier);
+  const multiplier =
+    spec.embeddingMultiplier === null || spec.embeddingMultiplier === undefined
+      ? 1
+      : finiteOrNull(spec.embeddingMultiplier);
   if (hidden === null || std === null || multiplier === null) return null;
   const token = hidden * std * std * multiplier * multiplier;
   const code = kind === 'sinusoidal' ? hidden / 2 : hidden * std * std;

@@ -11,7 +11,9 @@ import { positiveCount } from './sizes.js';
 import { bytesPerElement, DEFAULT_WEIGHT_DTYPE, weightDType } from './storage-bytes.js';
 
 /** Weight dtypes that are quantized formats: stored bits and scale bits when given a group size. */
-export const QUANTIZED_DTYPES: Readonly<Partial<Record<StorageDType, { bits: number; scaleBits: number }>>> = {
+export const QUANTIZED_DTYPES: Readonly<
+  Partial<Record<StorageDType, { bits: number; scaleBits: number }>>
+> = {
   int4: { bits: 4, scaleBits: 16 },
   int8: { bits: 8, scaleBits: 16 },
   fp8: { bits: 8, scaleBits: 32 },
@@ -25,10 +27,21 @@ export const DEFAULT_GROUP_SIZE = 128;
  * line): int4/int8 with one 16-bit scale per group, fp8 with one 32-bit scale per group; null
  * for a dtype that is not a quantized format.
  */
-export function dtypeQuantization(dtype: StorageDType, groupSize: number, zeroPoint = false): WeightQuantization | null {
+export function dtypeQuantization(
+  dtype: StorageDType,
+  groupSize: number,
+  zeroPoint = false,
+): WeightQuantization | null {
   const format = QUANTIZED_DTYPES[dtype];
   if (!format) return null;
-  return { method: dtype, bits: format.bits, groupSize, scaleBits: format.scaleBits, zeroPoint: dtype !== 'fp8' && zeroPoint, output: false };
+  return {
+    method: dtype,
+    bits: format.bits,
+    groupSize,
+    scaleBits: format.scaleBits,
+    zeroPoint: dtype !== 'fp8' && zeroPoint,
+    output: false,
+  };
 }
 
 /** The dtype unquantized parts stay in: the weight dtype when it is a float format, else `bf16`. */
@@ -44,8 +57,17 @@ export function unquantizedDType(spec: ModelSpec): StorageDType {
  */
 export function quantizedBytes(weights: number, q: WeightQuantization): number | null {
   const bits = q.bits;
-  if (!(Number.isFinite(bits) && bits > 0 && bits <= 32) || !(Number.isFinite(q.scaleBits) && q.scaleBits >= 0)) return null;
-  const groups = q.groupSize === null ? 0 : positiveCount(q.groupSize) === null ? NaN : Math.ceil(weights / q.groupSize);
+  if (
+    !(Number.isFinite(bits) && bits > 0 && bits <= 32) ||
+    !(Number.isFinite(q.scaleBits) && q.scaleBits >= 0)
+  )
+    return null;
+  const groups =
+    q.groupSize === null
+      ? 0
+      : positiveCount(q.groupSize) === null
+        ? NaN
+        : Math.ceil(weights / q.groupSize);
   const total = (weights * bits + groups * (q.scaleBits + (q.zeroPoint ? bits : 0))) / 8;
   return Number.isFinite(total) ? total : null;
 }
@@ -55,7 +77,11 @@ export function quantizedBytes(weights: number, q: WeightQuantization): number |
  * `output`) by `quantizedBytes`, everything else at the unquantized dtype. Null when the
  * breakdown or the quantization is degenerate.
  */
-export function quantizedWeightBytes(spec: ModelSpec, parts: ParameterBreakdown, q: WeightQuantization): number | null {
+export function quantizedWeightBytes(
+  spec: ModelSpec,
+  parts: ParameterBreakdown,
+  q: WeightQuantization,
+): number | null {
   const plain = bytesPerElement(unquantizedDType(spec));
   const quantized = parts.matrices + (q.output ? parts.output : 0);
   const stored = quantizedBytes(quantized, q);

@@ -19,7 +19,11 @@ export function scalingFactor(spec: ModelSpec): number | null {
  * `declaredSpan` when neither a trained nor a tuned span was stated explicitly (the config's own
  * claim, taken on assumption: `reachAssumed`).
  */
-export function reach(spec: ModelSpec, trained: number | null, declared: number | null): number | null {
+export function reach(
+  spec: ModelSpec,
+  trained: number | null,
+  declared: number | null,
+): number | null {
   if (spec.position?.kind === 'learned') return declared;
   if (spec.position?.kind === 'relative') return null;
   const factor = scalingFactor(spec);
@@ -37,7 +41,11 @@ export function reach(spec: ModelSpec, trained: number | null, declared: number 
  * Whether `reach` rests on the assumption that the declared span is supported: no trained or
  * tuned span is stated, and `L0·factor` falls short of the declared span.
  */
-export function reachAssumed(spec: ModelSpec, trained: number | null, declared: number | null): boolean {
+export function reachAssumed(
+  spec: ModelSpec,
+  trained: number | null,
+  declared: number | null,
+): boolean {
   const kind = spec.position?.kind;
   if (kind === 'learned' || kind === 'relative') return false;
   if (spec.trainedSpan !== null && spec.trainedSpan !== undefined) return false;

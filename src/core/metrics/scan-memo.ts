@@ -21,7 +21,8 @@ export interface ScanMemo {
 
 /** A typed array's bytes as 32-bit words: exact, NaN payloads and the sign of zero included. */
 function bytesKey(view: ArrayBufferView): string {
-  if (view.byteLength % 4 === 0 && view.byteOffset % 4 === 0) return `w${new Uint32Array(view.buffer, view.byteOffset, view.byteLength / 4).join(',')}`;
+  if (view.byteLength % 4 === 0 && view.byteOffset % 4 === 0)
+    return `w${new Uint32Array(view.buffer, view.byteOffset, view.byteLength / 4).join(',')}`;
   return `b${new Uint8Array(view.buffer, view.byteOffset, view.byteLength).join(',')}`;
 }
 
@@ -34,19 +35,30 @@ function bytesKey(view: ArrayBufferView): string {
 export function stableKey(value: unknown): string {
   if (value === null) return 'null';
   switch (typeof value) {
-    case 'undefined': return 'u';
-    case 'boolean': return value ? 't' : 'f';
-    case 'number': return Object.is(value, -0) ? 'n-0' : `n${value}`;
-    case 'bigint': return `b${value}`;
-    case 'string': return JSON.stringify(value);
+    case 'undefined':
+      return 'u';
+    case 'boolean':
+      return value ? 't' : 'f';
+    case 'number':
+      return Object.is(value, -0) ? 'n-0' : `n${value}`;
+    case 'bigint':
+      return `b${value}`;
+    case 'string':
+      return JSON.stringify(value);
     case 'object': {
       if (ArrayBuffer.isView(value)) return `${value.constructor.name}<${bytesKey(value)}>`;
       if (Array.isArray(value)) return `[${value.map(stableKey).join(',')}]`;
-      const entries = Object.keys(value).sort().map((key) => `${JSON.stringify(key)}:${stableKey((value as Record<string, unknown>)[key])}`);
+      const entries = Object.keys(value)
+        .sort()
+        .map(
+          (key) => `${JSON.stringify(key)}:${stableKey((value as Record<string, unknown>)[key])}`,
+        );
       return `{${entries.join(',')}}`;
     }
     default:
-      throw new TypeError(`stableKey: a ${typeof value} cannot be part of a memo key; expected numbers, strings, arrays, typed arrays or plain objects`);
+      throw new TypeError(
+        `stableKey: a ${typeof value} cannot be part of a memo key; expected numbers, strings, arrays, typed arrays or plain objects`,
+      );
   }
 }
 
@@ -67,12 +79,21 @@ export function createScanMemo(): ScanMemo {
       results.set(key, result);
       return result;
     },
-    get hits() { return hits; },
-    get misses() { return misses; },
+    get hits() {
+      return hits;
+    },
+    get misses() {
+      return misses;
+    },
   };
 }
 
 /** `fn(...args)` through `memo` when there is one, else directly. */
-export function viaMemo<A extends unknown[], R>(memo: ScanMemo | undefined, name: string, fn: (...args: A) => R, ...args: A): R {
+export function viaMemo<A extends unknown[], R>(
+  memo: ScanMemo | undefined,
+  name: string,
+  fn: (...args: A) => R,
+  ...args: A
+): R {
   return memo ? memo.call(name, fn, ...args) : fn(...args);
 }

@@ -12,7 +12,12 @@
  * bucket's min and max equal, bit for bit, what the straightforward loop over k gives, and ties
  * go to the earlier offset. Memory is O(P + buckets + block), never O(T).
  */
-import { COSINE_BLOCK, cosineSumMargin, fillCosineSums, planCosineSums } from './cosine-sum-blocks.js';
+import {
+  COSINE_BLOCK,
+  cosineSumMargin,
+  fillCosineSums,
+  planCosineSums,
+} from './cosine-sum-blocks.js';
 import { MAX_SCAN_WORK, SCAN_WORK, scanAllowed } from './scan-limits.js';
 import { cosineSum } from './similarity-scan.js';
 
@@ -39,8 +44,13 @@ export type BucketSpacing = 'log' | 'linear';
  * numbers from 1, at most `buckets + 1` of them. `log` spaces the edges geometrically (one offset
  * per bucket near 1, where S falls fastest), `linear` evenly. Null for `T < 2` or `buckets < 1`.
  */
-export function bucketEdges(span: number, buckets: number, spacing: BucketSpacing): number[] | null {
-  if (!Number.isSafeInteger(span) || span < 2 || !Number.isSafeInteger(buckets) || buckets < 1) return null;
+export function bucketEdges(
+  span: number,
+  buckets: number,
+  spacing: BucketSpacing,
+): number[] | null {
+  if (!Number.isSafeInteger(span) || span < 2 || !Number.isSafeInteger(buckets) || buckets < 1)
+    return null;
   const edges = [1];
   const logEnd = Math.log(span);
   for (let j = 1; j < buckets; j++) {
@@ -66,7 +76,8 @@ export function similarityCurve(
   spacing: BucketSpacing = 'log',
   workLimit: number = MAX_SCAN_WORK,
 ): SimilarityBucket[] | null {
-  if (theta === null || theta.length === 0 || span === null || !scanAllowed(theta.length, span)) return null;
+  if (theta === null || theta.length === 0 || span === null || !scanAllowed(theta.length, span))
+    return null;
   const P = theta.length;
   // Every offset is filled: past the work limit before starting, the curve is not drawn at all.
   let work = span * (P + SCAN_WORK.offset);
@@ -85,7 +96,14 @@ export function similarityCurve(
   let minAt = 1;
   let maxAt = 1;
   const close = () => {
-    out.push({ start: edges[b], end: edges[b + 1] - 1, min: minSum / P, minAt, max: maxSum / P, maxAt });
+    out.push({
+      start: edges[b],
+      end: edges[b + 1] - 1,
+      min: minSum / P,
+      minAt,
+      max: maxSum / P,
+      maxAt,
+    });
     b += 1;
     approxMin = Infinity;
     approxMax = -Infinity;
@@ -108,11 +126,17 @@ export function similarityCurve(
       if (work > workLimit) return null;
       const exact = cosineSum(theta, k);
       if (nearMin) {
-        if (exact < minSum) { minSum = exact; minAt = k; }
+        if (exact < minSum) {
+          minSum = exact;
+          minAt = k;
+        }
         if (v < approxMin) approxMin = v;
       }
       if (nearMax) {
-        if (exact > maxSum) { maxSum = exact; maxAt = k; }
+        if (exact > maxSum) {
+          maxSum = exact;
+          maxAt = k;
+        }
         if (v > approxMax) approxMax = v;
       }
     }

@@ -35,7 +35,12 @@
  * sum high near k = 1) nearly every block is passed over, most of them inside a larger interval.
  */
 import { cosineSumBounds } from './cosine-sum-bounds.js';
-import { COSINE_BLOCK, cosineSumMargin, fillCosineSums, planCosineSums } from './cosine-sum-blocks.js';
+import {
+  COSINE_BLOCK,
+  cosineSumMargin,
+  fillCosineSums,
+  planCosineSums,
+} from './cosine-sum-blocks.js';
 import { MAX_SCAN_WORK, SCAN_WORK, scanAllowed } from './scan-limits.js';
 
 const BLOCK = COSINE_BLOCK;
@@ -76,7 +81,12 @@ export interface SimilarityResult {
 /**
  * Scans offsets k in [kStart, kEnd); null for an empty range or no pairs.
  */
-export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: number, workLimit = MAX_SCAN_WORK): SimilarityPartial | null {
+export function scanSimilarityRange(
+  theta: Float64Array,
+  kStart: number,
+  kEnd: number,
+  workLimit = MAX_SCAN_WORK,
+): SimilarityPartial | null {
   const P = theta.length;
   if (P === 0 || !(kEnd > kStart) || !(kStart >= 1)) return null;
   const plan = planCosineSums(theta);
@@ -159,10 +169,20 @@ export function scanSimilarityRange(theta: Float64Array, kStart: number, kEnd: n
  * still exact (offsets are decided in order), otherwise it is null too.
  */
 export function similarityScan(theta: Float64Array | null, span: number | null): SimilarityResult {
-  const none: SimilarityResult = { separationFloor: null, separationFloorOffset: null, discriminationSpan: null, complete: true };
+  const none: SimilarityResult = {
+    separationFloor: null,
+    separationFloorOffset: null,
+    discriminationSpan: null,
+    complete: true,
+  };
   if (theta === null || span === null || span < 2 || !scanAllowed(theta.length, span)) return none;
   const r = scanSimilarityRange(theta, 1, span);
   if (r === null) return none;
   if (!r.complete) return { ...none, discriminationSpan: r.negative, complete: false };
-  return { separationFloor: r.floor, separationFloorOffset: r.offset, discriminationSpan: r.negative, complete: true };
+  return {
+    separationFloor: r.floor,
+    separationFloorOffset: r.offset,
+    discriminationSpan: r.negative,
+    complete: true,
+  };
 }

@@ -31,10 +31,16 @@ export function evaluationSpan(spec: ModelSpec): number | null {
  */
 export function trainedSpan(spec: ModelSpec): number | null {
   const code = spec.position;
-  if (code?.kind === 'rotary' && code.scaling && code.scaling.originalSpan !== null && code.scaling.originalSpan !== undefined) {
+  if (
+    code?.kind === 'rotary' &&
+    code.scaling &&
+    code.scaling.originalSpan !== null &&
+    code.scaling.originalSpan !== undefined
+  ) {
     return positiveCount(code.scaling.originalSpan);
   }
-  if (spec.trainedSpan !== null && spec.trainedSpan !== undefined) return positiveCount(spec.trainedSpan);
+  if (spec.trainedSpan !== null && spec.trainedSpan !== undefined)
+    return positiveCount(spec.trainedSpan);
   return declaredSpan(spec);
 }
 

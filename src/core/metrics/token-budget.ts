@@ -9,7 +9,10 @@ import { nonNegativeCount } from './sizes.js';
  * null when the serving block gives neither, or one is not a whole number (may be negative:
  * the reservations do not fit).
  */
-export function tokenBudget(serving: Serving | null | undefined, span: number | null): number | null {
+export function tokenBudget(
+  serving: Serving | null | undefined,
+  span: number | null,
+): number | null {
   const out = serving?.outputTokens ?? null;
   const prompt = serving?.promptTokens ?? null;
   if (span === null || (out === null && prompt === null)) return null;

@@ -103,19 +103,52 @@ export interface Metrics {
 
 /** Scalar metric names (everything but `precision` and `alibiSlopes`), in report order. */
 export const SCALAR_METRICS = [
-  'declaredSpan', 'trainedSpan', 'servedSpan', 'evaluationSpan', 'reach', 'tunedSpan', 'bucketHorizon', 'scalingCover', 'headroom',
-  'extensionRatio', 'fastestWavelength', 'slowestWavelength', 'unturnedPairs', 'exposedPairs',
-  'separationFloor', 'separationFloorOffset', 'discriminationSpan', 'attentionScale', 'alibiHorizon',
-  'receptiveField', 'positionShare',
-  'params', 'activeParams', 'nonEmbeddingParams', 'weightBytes', 'cachePerTokenBytes', 'cacheBytesAtSpan',
-  'memoryBytes', 'fitSequences', 'flopsPerToken', 'tokenBudget',
-  'devices', 'kvHeadsPerDevice', 'weightBytesPerDevice', 'cachePerTokenBytesPerDevice', 'memoryBytesPerDevice',
+  'declaredSpan',
+  'trainedSpan',
+  'servedSpan',
+  'evaluationSpan',
+  'reach',
+  'tunedSpan',
+  'bucketHorizon',
+  'scalingCover',
+  'headroom',
+  'extensionRatio',
+  'fastestWavelength',
+  'slowestWavelength',
+  'unturnedPairs',
+  'exposedPairs',
+  'separationFloor',
+  'separationFloorOffset',
+  'discriminationSpan',
+  'attentionScale',
+  'alibiHorizon',
+  'receptiveField',
+  'positionShare',
+  'params',
+  'activeParams',
+  'nonEmbeddingParams',
+  'weightBytes',
+  'cachePerTokenBytes',
+  'cacheBytesAtSpan',
+  'memoryBytes',
+  'fitSequences',
+  'flopsPerToken',
+  'tokenBudget',
+  'devices',
+  'kvHeadsPerDevice',
+  'weightBytesPerDevice',
+  'cachePerTokenBytesPerDevice',
+  'memoryBytesPerDevice',
 ] as const satisfies readonly (keyof Metrics)[];
 
 export type ScalarMetric = (typeof SCALAR_METRICS)[number];
 
 export const PRECISION_METRICS = [
-  'positionExactLimit', 'collidingPositions', 'angleErrorMax', 'overflowPosition', 'blurredPairs',
+  'positionExactLimit',
+  'collidingPositions',
+  'angleErrorMax',
+  'overflowPosition',
+  'blurredPairs',
 ] as const satisfies readonly (keyof PrecisionMetrics)[];
 
 export type PrecisionMetric = (typeof PRECISION_METRICS)[number];

@@ -22,11 +22,22 @@ export function visionParams(tower: VisionTower | null): number | null {
   const patch = positiveCount(tower.patch);
   const image = positiveCount(tower.image);
   const channels = positiveCount(tower.channels);
-  if (layers === null || hidden === null || ffn === null || patch === null || image === null || channels === null) return null;
+  if (
+    layers === null ||
+    hidden === null ||
+    ffn === null ||
+    patch === null ||
+    image === null ||
+    channels === null
+  )
+    return null;
   const patches = Math.floor(image / patch) ** 2;
   const embedding = channels * patch * patch * hidden + hidden + hidden + (patches + 1) * hidden;
   // Heads do not change the count: q, k, v, o are hidden × hidden whatever the split.
-  const layer = attentionParams(hidden, 1, 1, hidden, true) + feedForwardParams(hidden, ffn, false, true) + 2 * normParams(hidden, true);
+  const layer =
+    attentionParams(hidden, 1, 1, hidden, true) +
+    feedForwardParams(hidden, ffn, false, true) +
+    2 * normParams(hidden, true);
   const total = embedding + layers * layer + normParams(hidden, true);
   return Number.isSafeInteger(total) ? total : null;
 }

@@ -27,7 +27,12 @@ export function unturnedPairs(theta: Float64Array, trained: number): number {
  * count: pairs with `θ_i L0 < 2π` and `θ'_i T > θ_i L0 (1 + 1e-9)`: at the span's end they reach
  * angles never seen in training (METRICS.md; the 1e-9 keeps rounding noise from counting).
  */
-export function exposedPairs(theta: Float64Array, scaled: Float64Array, trained: number, span: number): number {
+export function exposedPairs(
+  theta: Float64Array,
+  scaled: Float64Array,
+  trained: number,
+  span: number,
+): number {
   let n = 0;
   for (let i = 0; i < theta.length; i++) {
     const seen = theta[i] * trained;

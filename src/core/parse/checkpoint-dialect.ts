@@ -39,58 +39,191 @@ import { readQuantization } from './quantization.js';
 import type { PathSegment } from './quote.js';
 import type { PositionDraft, ScalingDraft, SpecDraft } from './spec-defaults.js';
 import {
-  DEFAULT_BANDED_HIGH, DEFAULT_BANDED_LOW, DEFAULT_ROTARY_BASE, DEFAULT_YARN_ALPHA, DEFAULT_YARN_BETA, defaultHeadDim, isCount,
+  DEFAULT_BANDED_HIGH,
+  DEFAULT_BANDED_LOW,
+  DEFAULT_ROTARY_BASE,
+  DEFAULT_YARN_ALPHA,
+  DEFAULT_YARN_BETA,
+  defaultHeadDim,
+  isCount,
 } from './spec-defaults.js';
 import type { SourceMapping, SourceValue } from './source.js';
 import { readLatent, readMixture } from './checkpoint-experts.js';
 import { readLayerPlan } from './checkpoint-layers.js';
 import { FAMILY_DEFAULTS } from './checkpoint-families.js';
-import { checkSections, readPairwise, rotaryPairs, type RotaryContext } from './checkpoint-scaling.js';
+import {
+  checkSections,
+  readPairwise,
+  rotaryPairs,
+  type RotaryContext,
+} from './checkpoint-scaling.js';
 import { readMptAttention } from './checkpoint-mpt.js';
 
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
 export const CHECKPOINT_MARKERS: readonly string[] = [
-  'hidden_size', 'num_hidden_layers', 'num_attention_heads', 'n_embd', 'n_layer', 'n_head', 'd_model',
-  'encoder_layers', 'decoder_layers', 'num_layers', 'num_heads',
+  'hidden_size',
+  'num_hidden_layers',
+  'num_attention_heads',
+  'n_embd',
+  'n_layer',
+  'n_head',
+  'd_model',
+  'encoder_layers',
+  'decoder_layers',
+  'num_layers',
+  'num_heads',
 ];
 
 /** Activations gated feed-forward configs are written with. */
 export const GATED_ACTIVATIONS: readonly string[] = ['silu', 'swish', 'swiglu', 'geglu', 'reglu'];
 
 const ROTARY_FAMILIES = new Set([
-  'llama', 'mistral', 'mixtral', 'qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe', 'gemma', 'gemma2', 'gemma3_text', 'phi',
-  'phi3', 'gpt_neox', 'gptj', 'stablelm', 'starcoder2', 'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2',
-  'deepseek_v3', 'granite', 'falcon', 'llama4', 'llama4_text', 'qwen3_next', 'cohere2',
+  'llama',
+  'mistral',
+  'mixtral',
+  'qwen2',
+  'qwen2_moe',
+  'qwen3',
+  'qwen3_moe',
+  'gemma',
+  'gemma2',
+  'gemma3_text',
+  'phi',
+  'phi3',
+  'gpt_neox',
+  'gptj',
+  'stablelm',
+  'starcoder2',
+  'olmo',
+  'olmo2',
+  'cohere',
+  'internlm2',
+  'deepseek_v2',
+  'deepseek_v3',
+  'granite',
+  'falcon',
+  'llama4',
+  'llama4_text',
+  'qwen3_next',
+  'cohere2',
 ]);
 const LEARNED_FAMILIES = new Set([
-  'gpt2', 'gpt_bigcode', 'gpt_neo', 'opt', 'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra',
-  'bart', 'mbart', 'biogpt', 'blenderbot', 'whisper',
+  'gpt2',
+  'gpt_bigcode',
+  'gpt_neo',
+  'opt',
+  'bert',
+  'roberta',
+  'xlm-roberta',
+  'camembert',
+  'distilbert',
+  'electra',
+  'bart',
+  'mbart',
+  'biogpt',
+  'blenderbot',
+  'whisper',
 ]);
-const SINUSOIDAL_FAMILIES = new Set(['marian', 'fsmt', 'pegasus', 'm2m_100', 'xglm', 'speech_to_text']);
+const SINUSOIDAL_FAMILIES = new Set([
+  'marian',
+  'fsmt',
+  'pegasus',
+  'm2m_100',
+  'xglm',
+  'speech_to_text',
+]);
 const ALIBI_FAMILIES = new Set(['bloom', 'mpt']);
 /** Families with relative position biases, which no modelled code describes. */
-const RELATIVE_FAMILIES = new Set(['t5', 'mt5', 'umt5', 'longt5', 'switch_transformers', 'deberta', 'deberta-v2']);
+const RELATIVE_FAMILIES = new Set([
+  't5',
+  'mt5',
+  'umt5',
+  'longt5',
+  'switch_transformers',
+  'deberta',
+  'deberta-v2',
+]);
 /** Relative-bucket families (T5 style, Raffel et al. 2020, section 2.1): a code of their own. */
 const BUCKET_FAMILIES = new Set(['t5', 'mt5', 'umt5', 'longt5', 'switch_transformers']);
 const BUCKET_KEYS = ['relative_attention_num_buckets', 'relative_attention_max_distance'];
 const BIAS_FAMILIES = new Set([
-  'gpt2', 'gpt_bigcode', 'gpt_neo', 'opt', 'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra',
-  'bart', 'mbart', 'biogpt', 'blenderbot', 'whisper', 'marian', 'fsmt', 'pegasus', 'm2m_100', 'xglm', 'bloom',
-  'gpt_neox', 'phi',
+  'gpt2',
+  'gpt_bigcode',
+  'gpt_neo',
+  'opt',
+  'bert',
+  'roberta',
+  'xlm-roberta',
+  'camembert',
+  'distilbert',
+  'electra',
+  'bart',
+  'mbart',
+  'biogpt',
+  'blenderbot',
+  'whisper',
+  'marian',
+  'fsmt',
+  'pegasus',
+  'm2m_100',
+  'xglm',
+  'bloom',
+  'gpt_neox',
+  'phi',
 ]);
 const ENCODER_DECODER_FAMILIES = new Set([
-  't5', 'mt5', 'umt5', 'longt5', 'switch_transformers', 'bart', 'mbart', 'marian', 'pegasus', 'm2m_100', 'fsmt',
-  'blenderbot', 'whisper', 'speech_to_text',
+  't5',
+  'mt5',
+  'umt5',
+  'longt5',
+  'switch_transformers',
+  'bart',
+  'mbart',
+  'marian',
+  'pegasus',
+  'm2m_100',
+  'fsmt',
+  'blenderbot',
+  'whisper',
+  'speech_to_text',
 ]);
 const GEMMA_FAMILIES = new Set(['gemma', 'gemma2', 'gemma3_text']);
 /** Families whose feed-forward block is always gated (three matrices), whatever activation the file names. */
 const GATED_FAMILIES = new Set([
-  'llama', 'mistral', 'mixtral', 'qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe', 'gemma', 'gemma2', 'gemma3_text', 'phi3',
-  'olmo', 'olmo2', 'cohere', 'internlm2', 'deepseek_v2', 'deepseek_v3', 'granite', 'llama4', 'llama4_text', 'cohere2',
+  'llama',
+  'mistral',
+  'mixtral',
+  'qwen2',
+  'qwen2_moe',
+  'qwen3',
+  'qwen3_moe',
+  'gemma',
+  'gemma2',
+  'gemma3_text',
+  'phi3',
+  'olmo',
+  'olmo2',
+  'cohere',
+  'internlm2',
+  'deepseek_v2',
+  'deepseek_v3',
+  'granite',
+  'llama4',
+  'llama4_text',
+  'cohere2',
 ]);
 /** Encoder-only families (no decoding cache) unless the file says `is_decoder: true`. */
 const ENCODER_ONLY_FAMILIES = new Set([
-  'bert', 'roberta', 'xlm-roberta', 'camembert', 'distilbert', 'electra', 'albert', 'deberta', 'deberta-v2', 'modernbert',
+  'bert',
+  'roberta',
+  'xlm-roberta',
+  'camembert',
+  'distilbert',
+  'electra',
+  'albert',
+  'deberta',
+  'deberta-v2',
+  'modernbert',
 ]);
 /** Families with four norms per decoder layer (before and after attention and feed-forward; Gemma 2 report, §2). */
 const FOUR_NORM_FAMILIES = new Set(['gemma2', 'gemma3', 'gemma3_text']);
@@ -98,20 +231,44 @@ const FOUR_NORM_FAMILIES = new Set(['gemma2', 'gemma3', 'gemma3_text']);
 const QK_NORM_FAMILIES = new Set(['qwen3', 'qwen3_moe', 'gemma3', 'gemma3_text']);
 
 const POSITION_TYPES: Readonly<Record<string, PositionDraft['kind']>> = {
-  absolute: 'learned', learned: 'learned', sinusoidal: 'sinusoidal', rotary: 'rotary', rope: 'rotary', alibi: 'alibi', none: 'none',
+  absolute: 'learned',
+  learned: 'learned',
+  sinusoidal: 'sinusoidal',
+  rotary: 'rotary',
+  rope: 'rotary',
+  alibi: 'alibi',
+  none: 'none',
 };
 const RELATIVE_POSITION_TYPES = new Set(['relative_key', 'relative_key_query']);
 
 /** `rope_type` / `type` of a scaling block to our kind; `default` is no scaling. */
 const SCALING_TYPES: Readonly<Record<string, ScalingDraft['kind'] | 'default'>> = {
-  default: 'default', linear: 'linear', dynamic: 'dynamic', yarn: 'yarn', llama3: 'banded', longrope: 'pairwise', su: 'pairwise',
+  default: 'default',
+  linear: 'linear',
+  dynamic: 'dynamic',
+  yarn: 'yarn',
+  llama3: 'banded',
+  longrope: 'pairwise',
+  su: 'pairwise',
   // Multimodal rotary sections (Qwen2-VL): text positions see the plain rotary spectrum.
   mrope: 'default',
 };
 
-const DTYPES: Readonly<Record<string, StorageDType>> = { float32: 'fp32', bfloat16: 'bf16', float16: 'fp16' };
+const DTYPES: Readonly<Record<string, StorageDType>> = {
+  float32: 'fp32',
+  bfloat16: 'bf16',
+  float16: 'fp16',
+};
 
-const ROTARY_KEYS = ['rope_theta', 'rotary_emb_base', 'rope_parameters', 'rope_scaling', 'partial_rotary_factor', 'rotary_pct', 'rotary_dim'];
+const ROTARY_KEYS = [
+  'rope_theta',
+  'rotary_emb_base',
+  'rope_parameters',
+  'rope_scaling',
+  'partial_rotary_factor',
+  'rotary_pct',
+  'rotary_dim',
+];
 
 function isMapping(v: SourceValue | undefined): v is SourceMapping {
   return v !== null && v !== undefined && typeof v === 'object' && !Array.isArray(v);
@@ -119,34 +276,61 @@ function isMapping(v: SourceValue | undefined): v is SourceMapping {
 
 /** Whether `value` looks like a checkpoint-style model config. */
 export function isCheckpointConfig(value: SourceMapping): boolean {
-  return CHECKPOINT_MARKERS.some((k) => Object.prototype.hasOwnProperty.call(value, k) && value[k] !== null);
+  return CHECKPOINT_MARKERS.some(
+    (k) => Object.prototype.hasOwnProperty.call(value, k) && value[k] !== null,
+  );
 }
 
 /** Reads a checkpoint-style config from `r.root` into a draft; every problem becomes a finding on `r`. */
 export function readCheckpoint(r: FieldReader): SpecDraft {
-  const modelType = typeof r.get(['model_type']) === 'string' ? String(r.get(['model_type'])).toLowerCase() : null;
+  const modelType =
+    typeof r.get(['model_type']) === 'string' ? String(r.get(['model_type'])).toLowerCase() : null;
   const family = modelType !== null ? FAMILY_DEFAULTS[modelType] : undefined;
   if (family !== undefined) r.useDefaults(family.values);
   const gpt2Style = r.has(['n_embd']) || r.has(['n_layer']);
-  const encoderDecoder = r.get(['is_encoder_decoder']) === true || r.has(['encoder_layers']) || r.has(['num_decoder_layers'])
-    || (modelType !== null && ENCODER_DECODER_FAMILIES.has(modelType));
+  const encoderDecoder =
+    r.get(['is_encoder_decoder']) === true ||
+    r.has(['encoder_layers']) ||
+    r.has(['num_decoder_layers']) ||
+    (modelType !== null && ENCODER_DECODER_FAMILIES.has(modelType));
 
-  const size = (field: string, candidates: string[], what: string, required: boolean): number | undefined => {
+  const size = (
+    field: string,
+    candidates: string[],
+    what: string,
+    required: boolean,
+  ): number | undefined => {
     const path = r.first(candidates.map((k) => [k]));
     if (path !== null) return r.count(field, path, what);
     if (!required) return undefined;
-    const also = candidates.length > 1 ? ` (read from ${candidates.join(', ')}, the first present)` : '';
+    const also =
+      candidates.length > 1 ? ` (read from ${candidates.join(', ')}, the first present)` : '';
     return r.missing([candidates[0]], `${what}${also}`);
   };
 
   const hidden = size('hidden', ['hidden_size', 'n_embd', 'd_model'], 'the model width', true)!;
-  const layers = size('layers', encoderDecoder
-    ? ['decoder_layers', 'num_decoder_layers', 'num_layers', 'num_hidden_layers', 'n_layer']
-    : ['num_hidden_layers', 'n_layer', 'num_layers', 'n_layers'], encoderDecoder ? 'the number of decoder layers' : 'the number of layers', true)!;
-  const heads = size('heads', encoderDecoder
-    ? ['decoder_attention_heads', 'num_heads', 'num_attention_heads', 'n_head']
-    : ['num_attention_heads', 'n_head', 'num_heads', 'n_heads'], 'the number of attention heads', true)!;
-  let kvHeads = size('kvHeads', ['num_key_value_heads', 'num_kv_heads', 'n_head_kv'], 'key/value heads', false);
+  const layers = size(
+    'layers',
+    encoderDecoder
+      ? ['decoder_layers', 'num_decoder_layers', 'num_layers', 'num_hidden_layers', 'n_layer']
+      : ['num_hidden_layers', 'n_layer', 'num_layers', 'n_layers'],
+    encoderDecoder ? 'the number of decoder layers' : 'the number of layers',
+    true,
+  )!;
+  const heads = size(
+    'heads',
+    encoderDecoder
+      ? ['decoder_attention_heads', 'num_heads', 'num_attention_heads', 'n_head']
+      : ['num_attention_heads', 'n_head', 'num_heads', 'n_heads'],
+    'the number of attention heads',
+    true,
+  )!;
+  let kvHeads = size(
+    'kvHeads',
+    ['num_key_value_heads', 'num_kv_heads', 'n_head_kv'],
+    'key/value heads',
+    false,
+  );
   if (kvHeads === undefined && r.get(['multi_query']) === true) {
     r.locate('kvHeads', ['multi_query']);
     kvHeads = 1;
@@ -154,33 +338,75 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   const mpt = readMptAttention(r);
   if (kvHeads === undefined && mpt.kvHeads !== undefined) kvHeads = mpt.kvHeads;
   const headDim = size('headDim', ['head_dim', 'd_kv'], 'the width of one head', false);
-  const ffn = size('ffn', encoderDecoder
-    ? ['decoder_ffn_dim', 'd_ff', 'intermediate_size', 'ffn_dim']
-    : ['intermediate_size', 'n_inner', 'ffn_dim', 'd_ff', 'ffn_hidden_size'], 'the feed-forward width', false)
-    ?? mpt.ffn(hidden);
+  const ffn =
+    size(
+      'ffn',
+      encoderDecoder
+        ? ['decoder_ffn_dim', 'd_ff', 'intermediate_size', 'ffn_dim']
+        : ['intermediate_size', 'n_inner', 'ffn_dim', 'd_ff', 'ffn_hidden_size'],
+      'the feed-forward width',
+      false,
+    ) ?? mpt.ffn(hidden);
   const vocab = size('vocab', ['vocab_size'], 'the vocabulary size', true)!;
-  const spanKeys = ['max_position_embeddings', 'n_positions', 'n_ctx', 'max_seq_len', 'seq_length', 'max_target_positions'];
-  const declaredSpan = size('declaredSpan', spanKeys, 'the maximum positions', !alibiWithoutSpan(r, modelType, spanKeys))
-    ?? spanNotStated(r, spanKeys);
+  const spanKeys = [
+    'max_position_embeddings',
+    'n_positions',
+    'n_ctx',
+    'max_seq_len',
+    'seq_length',
+    'max_target_positions',
+  ];
+  const declaredSpan =
+    size(
+      'declaredSpan',
+      spanKeys,
+      'the maximum positions',
+      !alibiWithoutSpan(r, modelType, spanKeys),
+    ) ?? spanNotStated(r, spanKeys);
 
   const encoder = encoderDecoder
     ? {
-        layers: size('encoder.layers', ['encoder_layers', 'num_layers'], 'the number of encoder layers', true)!,
-        heads: size('encoder.heads', ['encoder_attention_heads', 'num_heads'], 'the number of encoder heads', true)!,
+        layers: size(
+          'encoder.layers',
+          ['encoder_layers', 'num_layers'],
+          'the number of encoder layers',
+          true,
+        )!,
+        heads: size(
+          'encoder.heads',
+          ['encoder_attention_heads', 'num_heads'],
+          'the number of encoder heads',
+          true,
+        )!,
         headDim: size('encoder.headDim', ['d_kv'], 'the width of one head', false),
-        ffn: size('encoder.ffn', ['encoder_ffn_dim', 'd_ff'], 'the encoder feed-forward width', false),
+        ffn: size(
+          'encoder.ffn',
+          ['encoder_ffn_dim', 'd_ff'],
+          'the encoder feed-forward width',
+          false,
+        ),
       }
     : null;
 
   const mixture = readMixture(r, size, layers, modelType);
   const experts = mixture.experts;
   const latent = readLatent(r, size);
-  const position = readPosition(r, modelType, gpt2Style, latent ? latent.ropeDim : headDim ?? defaultHeadDim(hidden, heads), declaredSpan);
+  const position = readPosition(
+    r,
+    modelType,
+    gpt2Style,
+    latent ? latent.ropeDim : (headDim ?? defaultHeadDim(hidden, heads)),
+    declaredSpan,
+  );
   // Consulted even when the window is off: then they have no effect.
   r.get(['max_window_layers']);
   r.get(['use_sliding_window']);
   const plan = readLayerPlan(r, modelType, layers);
-  const encoderOnly = !encoderDecoder && modelType !== null && ENCODER_ONLY_FAMILIES.has(modelType) && r.get(['is_decoder']) !== true;
+  const encoderOnly =
+    !encoderDecoder &&
+    modelType !== null &&
+    ENCODER_ONLY_FAMILIES.has(modelType) &&
+    r.get(['is_decoder']) !== true;
 
   return {
     name: null,
@@ -210,10 +436,11 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     qkNorms: modelType !== null && QK_NORM_FAMILIES.has(modelType),
     encoderOnly,
     dtypes: { weights: readWeights(r), cache: null, positions: null },
-    embeddingInitStd: r.real('embeddingInitStd', ['initializer_range'], 'standard deviation', {
-      test: (n) => n > 0,
-      expected: 'a standard deviation above 0',
-    }) ?? null,
+    embeddingInitStd:
+      r.real('embeddingInitStd', ['initializer_range'], 'standard deviation', {
+        test: (n) => n > 0,
+        expected: 'a standard deviation above 0',
+      }) ?? null,
     embeddingMultiplier: readMultiplier(r, modelType, hidden),
     quantization: readQuantization(r, hidden),
   };
@@ -222,12 +449,18 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
 /** ALiBi configs (BLOOM) may state no maximum positions: ALiBi has no hard limit. */
 function alibiWithoutSpan(r: FieldReader, modelType: string | null, spanKeys: string[]): boolean {
   if (r.first(spanKeys.map((k) => [k])) !== null) return false;
-  return r.get(['alibi']) === true || r.get(['attn_config', 'alibi']) === true || modelType === 'bloom';
+  return (
+    r.get(['alibi']) === true || r.get(['attn_config', 'alibi']) === true || modelType === 'bloom'
+  );
 }
 
 /** The declared span of an ALiBi config that states none: not stated (NaN), reported as info. */
 function spanNotStated(r: FieldReader, spanKeys: string[]): number {
-  r.report('span-not-stated', r.has(['model_type']) ? ['model_type'] : null, `no maximum-positions key (${spanKeys.join(', ')}) is stated; the ALiBi code has no hard limit, so nothing blocks, and the positional and cache metrics are computed only at a served span (--served-span or the policy's serving block)`);
+  r.report(
+    'span-not-stated',
+    r.has(['model_type']) ? ['model_type'] : null,
+    `no maximum-positions key (${spanKeys.join(', ')}) is stated; the ALiBi code has no hard limit, so nothing blocks, and the positional and cache metrics are computed only at a served span (--served-span or the policy's serving block)`,
+  );
   return NaN;
 }
 
@@ -237,7 +470,12 @@ function readGated(r: FieldReader, modelType: string | null): boolean | undefine
     r.locate('gated', ['feed_forward_proj']);
     return proj.startsWith('gated-');
   }
-  const path = r.first([['hidden_act'], ['hidden_activation'], ['activation_function'], ['dense_act_fn']]);
+  const path = r.first([
+    ['hidden_act'],
+    ['hidden_activation'],
+    ['activation_function'],
+    ['dense_act_fn'],
+  ]);
   const act = path === null ? undefined : r.text('gated', path, 'an activation name');
   if (act !== undefined && GATED_ACTIVATIONS.includes(act.toLowerCase())) return true;
   // The architecture decides, whatever activation it is configured with.
@@ -248,7 +486,11 @@ function readGated(r: FieldReader, modelType: string | null): boolean | undefine
   return path === null ? undefined : false;
 }
 
-function readBias(r: FieldReader, modelType: string | null, gpt2Style: boolean): boolean | undefined {
+function readBias(
+  r: FieldReader,
+  modelType: string | null,
+  gpt2Style: boolean,
+): boolean | undefined {
   const noBias = r.flag('bias', ['no_bias']);
   if (noBias !== undefined) return !noBias;
   const stated = [['attention_bias'], ['mlp_bias'], ['bias'], ['use_bias']].filter((p) => r.has(p));
@@ -260,7 +502,10 @@ function readBias(r: FieldReader, modelType: string | null, gpt2Style: boolean):
     return on ? true : values.some((x) => x.v === false) ? false : undefined;
   }
   if ((modelType !== null && BIAS_FAMILIES.has(modelType)) || (modelType === null && gpt2Style)) {
-    r.locate('bias', modelType !== null ? ['model_type'] : r.has(['n_embd']) ? ['n_embd'] : ['n_layer']);
+    r.locate(
+      'bias',
+      modelType !== null ? ['model_type'] : r.has(['n_embd']) ? ['n_embd'] : ['n_layer'],
+    );
     return true;
   }
   return undefined;
@@ -272,12 +517,20 @@ function readWeights(r: FieldReader): StorageDType | null {
   const name = r.text('dtypes.weights', path, 'a weight format');
   if (name === undefined) return null;
   if (name === 'auto') {
-    r.report('key-ignored', path, `${r.key(path)} is "auto", which names no format; the weights are read at the default bf16, so state float32, bfloat16 or float16`);
+    r.report(
+      'key-ignored',
+      path,
+      `${r.key(path)} is "auto", which names no format; the weights are read at the default bf16, so state float32, bfloat16 or float16`,
+    );
     return null;
   }
   const dtype = DTYPES[name];
   if (dtype === undefined) {
-    r.report('value-invalid', path, `${r.key(path)} is ${r.quote(path)}; expected one of ${Object.keys(DTYPES).join(', ')}`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} is ${r.quote(path)}; expected one of ${Object.keys(DTYPES).join(', ')}`,
+    );
     return null;
   }
   return dtype;
@@ -294,16 +547,33 @@ function readMultiplier(r: FieldReader, modelType: string | null, hidden: number
   return null;
 }
 
-function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boolean, headDim: number, declaredSpan: number): PositionDraft {
+function readPosition(
+  r: FieldReader,
+  modelType: string | null,
+  gpt2Style: boolean,
+  headDim: number,
+  declaredSpan: number,
+): PositionDraft {
   const typePath = ['position_embedding_type'];
-  const alibiPath = r.get(['alibi']) === true ? ['alibi'] : r.get(['attn_config', 'alibi']) === true ? ['attn_config', 'alibi'] : null;
+  const alibiPath =
+    r.get(['alibi']) === true
+      ? ['alibi']
+      : r.get(['attn_config', 'alibi']) === true
+        ? ['attn_config', 'alibi']
+        : null;
   const bucketKeys = BUCKET_KEYS.filter((k) => r.has([k]));
-  if (!r.has(typePath) && alibiPath === null && (bucketKeys.length > 0 || (modelType !== null && BUCKET_FAMILIES.has(modelType)))) {
+  if (
+    !r.has(typePath) &&
+    alibiPath === null &&
+    (bucketKeys.length > 0 || (modelType !== null && BUCKET_FAMILIES.has(modelType)))
+  ) {
     return readBuckets(r, modelType, bucketKeys);
   }
   const mptRotary = r.get(['attn_config', 'rope']) === true && alibiPath === null;
   // Family defaults stand in for rotary keys only when the file states no other code.
-  const rotaryKeys = ROTARY_KEYS.filter((k) => (alibiPath === null && !r.stated(typePath) ? r.has([k]) : r.stated([k])));
+  const rotaryKeys = ROTARY_KEYS.filter((k) =>
+    alibiPath === null && !r.stated(typePath) ? r.has([k]) : r.stated([k]),
+  );
   let kind: PositionDraft['kind'];
   let assumed: string | null = null;
 
@@ -315,7 +585,11 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
       kind = 'none';
       assumed = `${r.key(typePath)} is ${r.quote(typePath)}: relative position embeddings are not one of the modelled codes (learned, sinusoidal, rotary, alibi), so the code is read as none and positional-range metrics are not computed`;
     } else {
-      r.report('value-invalid', typePath, `${r.key(typePath)} is ${r.quote(typePath)}; expected one of ${[...Object.keys(POSITION_TYPES), ...RELATIVE_POSITION_TYPES].join(', ')}`);
+      r.report(
+        'value-invalid',
+        typePath,
+        `${r.key(typePath)} is ${r.quote(typePath)}; expected one of ${[...Object.keys(POSITION_TYPES), ...RELATIVE_POSITION_TYPES].join(', ')}`,
+      );
       kind = 'none';
     }
   } else if (r.has(typePath)) {
@@ -331,11 +605,25 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
   } else if (rotaryKeys.length > 0 || mptRotary) {
     r.locate('position', rotaryKeys.length > 0 ? [rotaryKeys[0]] : ['attn_config', 'rope']);
     kind = 'rotary';
-  } else if (modelType === 'mpt' && r.get(['attn_config', 'alibi']) === false && r.get(['learned_pos_emb']) !== false) {
+  } else if (
+    modelType === 'mpt' &&
+    r.get(['attn_config', 'alibi']) === false &&
+    r.get(['learned_pos_emb']) !== false
+  ) {
     // MPT without ALiBi or rotary keys: its learned table (learned_pos_emb, default true in MptConfig).
-    r.locate('position', r.has(['learned_pos_emb']) ? ['learned_pos_emb'] : ['attn_config', 'alibi']);
+    r.locate(
+      'position',
+      r.has(['learned_pos_emb']) ? ['learned_pos_emb'] : ['attn_config', 'alibi'],
+    );
     kind = 'learned';
-  } else if (modelType !== null && (ROTARY_FAMILIES.has(modelType) || LEARNED_FAMILIES.has(modelType) || SINUSOIDAL_FAMILIES.has(modelType) || ALIBI_FAMILIES.has(modelType) || RELATIVE_FAMILIES.has(modelType))) {
+  } else if (
+    modelType !== null &&
+    (ROTARY_FAMILIES.has(modelType) ||
+      LEARNED_FAMILIES.has(modelType) ||
+      SINUSOIDAL_FAMILIES.has(modelType) ||
+      ALIBI_FAMILIES.has(modelType) ||
+      RELATIVE_FAMILIES.has(modelType))
+  ) {
     r.locate('position', ['model_type']);
     if (ROTARY_FAMILIES.has(modelType)) {
       kind = 'rotary';
@@ -344,7 +632,11 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
       kind = 'none';
       assumed = `model_type "${modelType}" uses relative position biases, which are not one of the modelled codes (learned, sinusoidal, rotary, alibi), so the code is read as none and positional-range metrics are not computed`;
     } else {
-      kind = LEARNED_FAMILIES.has(modelType) ? 'learned' : SINUSOIDAL_FAMILIES.has(modelType) ? 'sinusoidal' : 'alibi';
+      kind = LEARNED_FAMILIES.has(modelType)
+        ? 'learned'
+        : SINUSOIDAL_FAMILIES.has(modelType)
+          ? 'sinusoidal'
+          : 'alibi';
     }
   } else if (gpt2Style) {
     r.locate('position', r.has(['n_positions']) ? ['n_positions'] : ['n_embd']);
@@ -353,14 +645,27 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
     kind = 'none';
     assumed = `no position code is stated (no rope_theta, position_embedding_type or alibi key) and model_type ${modelType === null ? 'is not stated' : `${quoteText(modelType)} is not a known family`}, so the code is read as none and positional-range metrics are not computed; state rope_theta for a rotary code or position_embedding_type otherwise`;
   }
-  if (assumed !== null) r.report('position-code-assumed', r.has(typePath) ? typePath : r.has(['model_type']) ? ['model_type'] : null, assumed);
+  if (assumed !== null)
+    r.report(
+      'position-code-assumed',
+      r.has(typePath) ? typePath : r.has(['model_type']) ? ['model_type'] : null,
+      assumed,
+    );
 
   if (alibiPath !== null && kind !== 'alibi') {
-    r.report('key-ignored', alibiPath, `${r.key(alibiPath)} has no effect: ${r.key(typePath)} states the ${kind} code; remove one of them`);
+    r.report(
+      'key-ignored',
+      alibiPath,
+      `${r.key(alibiPath)} has no effect: ${r.key(typePath)} states the ${kind} code; remove one of them`,
+    );
   }
   if (kind !== 'rotary') {
     for (const key of rotaryKeys) {
-      r.report('key-ignored', [key], `${r.key([key])} has no effect: it applies to rotary codes, and the code is read as ${kind}${r.has(typePath) ? ` (${r.key(typePath)})` : alibiPath ? ` (${r.key(alibiPath)})` : ''}`);
+      r.report(
+        'key-ignored',
+        [key],
+        `${r.key([key])} has no effect: it applies to rotary codes, and the code is read as ${kind}${r.has(typePath) ? ` (${r.key(typePath)})` : alibiPath ? ` (${r.key(alibiPath)})` : ''}`,
+      );
     }
     return { kind };
   }
@@ -371,10 +676,18 @@ function readPosition(r: FieldReader, modelType: string | null, gpt2Style: boole
 function readBuckets(r: FieldReader, modelType: string | null, stated: string[]): PositionDraft {
   r.locate('position', stated.length > 0 ? [stated[0]] : ['model_type']);
   const buckets = r.count('position.buckets', ['relative_attention_num_buckets'], 'buckets');
-  const maxDistance = r.count('position.maxDistance', ['relative_attention_max_distance'], 'tokens');
+  const maxDistance = r.count(
+    'position.maxDistance',
+    ['relative_attention_max_distance'],
+    'tokens',
+  );
   const unstated = BUCKET_KEYS.filter((k) => !stated.includes(k));
   if (unstated.length > 0) {
-    r.report('family-default-taken', r.has(['model_type']) ? ['model_type'] : null, `${unstated.join(' and ')} ${unstated.length === 1 ? 'is' : 'are'} not stated; the T5 defaults apply (32 buckets, max distance 128; Raffel et al. 2020, section 2.1)${modelType === null ? '' : ` for model_type "${modelType}"`}`);
+    r.report(
+      'family-default-taken',
+      r.has(['model_type']) ? ['model_type'] : null,
+      `${unstated.join(' and ')} ${unstated.length === 1 ? 'is' : 'are'} not stated; the T5 defaults apply (32 buckets, max distance 128; Raffel et al. 2020, section 2.1)${modelType === null ? '' : ` for model_type "${modelType}"`}`,
+    );
   }
   return { kind: 'relative', buckets, maxDistance };
 }
@@ -389,24 +702,49 @@ function readRotary(r: FieldReader, headDim: number, declaredSpan: number): Posi
       const chosen = nested.includes('full_attention') ? 'full_attention' : nested[0];
       params = ['rope_parameters', chosen];
       // The local layers' block is read by the layer reader (checkpoint-layers.ts).
-      for (const other of nested.filter((k) => k !== chosen && !(chosen === 'full_attention' && k === 'sliding_attention'))) {
-        r.report('key-ignored', ['rope_parameters', other], `${r.key(['rope_parameters', other])} is not read: one rotary code describes the model, taken from ${r.key(params)}`);
+      for (const other of nested.filter(
+        (k) => k !== chosen && !(chosen === 'full_attention' && k === 'sliding_attention'),
+      )) {
+        r.report(
+          'key-ignored',
+          ['rope_parameters', other],
+          `${r.key(['rope_parameters', other])} is not read: one rotary code describes the model, taken from ${r.key(params)}`,
+        );
       }
     } else params = ['rope_parameters'];
   } else if (rp !== undefined) {
-    r.report('value-invalid', ['rope_parameters'], `${r.key(['rope_parameters'])} ${r.is(['rope_parameters'])}; expected a mapping with rope_type and rope_theta`);
+    r.report(
+      'value-invalid',
+      ['rope_parameters'],
+      `${r.key(['rope_parameters'])} ${r.is(['rope_parameters'])}; expected a mapping with rope_type and rope_theta`,
+    );
   }
 
-  const basePath = r.first([...(params ? [[...params, 'rope_theta']] : []), ['rope_theta'], ['rotary_emb_base'], ['attn_config', 'rope_theta']]);
-  const base = basePath === null ? undefined : r.real('position.base', basePath, 'rotary base', {
-    test: (n) => n > 1,
-    expected: 'a rotary base above 1 (commonly 10000 or more)',
-  });
+  const basePath = r.first([
+    ...(params ? [[...params, 'rope_theta']] : []),
+    ['rope_theta'],
+    ['rotary_emb_base'],
+    ['attn_config', 'rope_theta'],
+  ]);
+  const base =
+    basePath === null
+      ? undefined
+      : r.real('position.base', basePath, 'rotary base', {
+          test: (n) => n > 1,
+          expected: 'a rotary base above 1 (commonly 10000 or more)',
+        });
 
   let fraction: number | undefined;
-  const fractionPath = r.first([...(params ? [[...params, 'partial_rotary_factor']] : []), ['partial_rotary_factor'], ['rotary_pct']]);
+  const fractionPath = r.first([
+    ...(params ? [[...params, 'partial_rotary_factor']] : []),
+    ['partial_rotary_factor'],
+    ['rotary_pct'],
+  ]);
   if (fractionPath !== null) {
-    fraction = r.real('position.fraction', fractionPath, 'share', { test: (n) => n > 0 && n <= 1, expected: 'a share of the head above 0 and at most 1' });
+    fraction = r.real('position.fraction', fractionPath, 'share', {
+      test: (n) => n > 0 && n <= 1,
+      expected: 'a share of the head above 0 and at most 1',
+    });
   } else if (r.has(['rotary_dim'])) {
     const dim = r.count('position.fraction', ['rotary_dim'], 'rotated channels per head');
     if (dim !== undefined && !Number.isNaN(dim)) fraction = isCount(headDim) ? dim / headDim : NaN;
@@ -417,57 +755,132 @@ function readRotary(r: FieldReader, headDim: number, declaredSpan: number): Posi
     if (block !== null) checkSections(r, [...block, 'mrope_section'], ctx);
   }
   let scalingPath: PathSegment[] | null = null;
-  if (params !== null && typeof r.get([...params, 'rope_type']) === 'string' && r.get([...params, 'rope_type']) !== 'default') scalingPath = params;
+  if (
+    params !== null &&
+    typeof r.get([...params, 'rope_type']) === 'string' &&
+    r.get([...params, 'rope_type']) !== 'default'
+  )
+    scalingPath = params;
   else if (r.has(['rope_scaling'])) scalingPath = ['rope_scaling'];
-  return { kind: 'rotary', base, fraction, scaling: scalingPath === null ? null : readScaling(r, scalingPath, ctx) };
+  return {
+    kind: 'rotary',
+    base,
+    fraction,
+    scaling: scalingPath === null ? null : readScaling(r, scalingPath, ctx),
+  };
 }
 
 function readScaling(r: FieldReader, at: PathSegment[], ctx: RotaryContext): ScalingDraft | null {
   const block = r.get(at);
   if (!isMapping(block)) {
-    r.report('value-invalid', at, `${r.key(at)} ${r.is(at)}; expected a mapping with rope_type and factor`);
+    r.report(
+      'value-invalid',
+      at,
+      `${r.key(at)} ${r.is(at)}; expected a mapping with rope_type and factor`,
+    );
     return null;
   }
-  const typePath = r.first([[...at, 'rope_type'], [...at, 'type']]);
+  const typePath = r.first([
+    [...at, 'rope_type'],
+    [...at, 'type'],
+  ]);
   if (typePath === null) {
-    r.report('scaling-kind-unknown', at, `${r.key(at)} states no rope_type (or type); known kinds: ${knownKinds()}; without a kind the code is read unscaled`);
+    r.report(
+      'scaling-kind-unknown',
+      at,
+      `${r.key(at)} states no rope_type (or type); known kinds: ${knownKinds()}; without a kind the code is read unscaled`,
+    );
     return null;
   }
   const name = r.text('position.scaling', typePath, 'a scaling kind');
   if (name === undefined) return null;
   const kind = SCALING_TYPES[name];
   if (kind === undefined) {
-    r.report('scaling-kind-unknown', typePath, `${r.key(typePath)} is ${r.quote(typePath)}, not a known scaling kind (${knownKinds()}); the code is read unscaled, so its reach is understated or wrong — describe the model in the context-reach format if its scaling is one of linear, ntk, dynamic, yarn or banded`);
+    r.report(
+      'scaling-kind-unknown',
+      typePath,
+      `${r.key(typePath)} is ${r.quote(typePath)}, not a known scaling kind (${knownKinds()}); the code is read unscaled, so its reach is understated or wrong — describe the model in the context-reach format if its scaling is one of linear, ntk, dynamic, yarn or banded`,
+    );
     return null;
   }
   if (kind === 'default') return null;
   if (kind === 'pairwise') {
-    const originalPath = r.first([[...at, 'original_max_position_embeddings'], ['original_max_position_embeddings']]);
-    const originalSpan = originalPath === null ? null : r.count('position.scaling.originalSpan', originalPath, 'tokens');
+    const originalPath = r.first([
+      [...at, 'original_max_position_embeddings'],
+      ['original_max_position_embeddings'],
+    ]);
+    const originalSpan =
+      originalPath === null
+        ? null
+        : r.count('position.scaling.originalSpan', originalPath, 'tokens');
     return { ...readPairwise(r, at, ctx, originalSpan), originalSpan };
   }
 
-  const factor = r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor') ?? r.missing([...at, 'factor'], 'the scaling factor (extended span over original span)');
-  const originalPath = r.first([[...at, 'original_max_position_embeddings'], ['original_max_position_embeddings']]);
+  const factor =
+    r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor') ??
+    r.missing([...at, 'factor'], 'the scaling factor (extended span over original span)');
+  const originalPath = r.first([
+    [...at, 'original_max_position_embeddings'],
+    ['original_max_position_embeddings'],
+  ]);
   const draft: ScalingDraft = {
     kind,
     factor,
-    originalSpan: originalPath === null ? null : r.count('position.scaling.originalSpan', originalPath, 'tokens'),
+    originalSpan:
+      originalPath === null
+        ? null
+        : r.count('position.scaling.originalSpan', originalPath, 'tokens'),
   };
   if (kind === 'yarn') {
-    draft.alpha = r.real('position.scaling.alpha', [...at, 'beta_slow'], 'ramp start', { test: (n) => n >= 0, expected: 'a ramp start of at least 0' });
-    draft.beta = r.real('position.scaling.beta', [...at, 'beta_fast'], 'ramp end', { test: (n) => n > 0, expected: 'a ramp end above 0' });
-    orderedRamp(r, at, 'beta_slow', draft.alpha, DEFAULT_YARN_ALPHA, 'beta_fast', draft.beta, DEFAULT_YARN_BETA);
+    draft.alpha = r.real('position.scaling.alpha', [...at, 'beta_slow'], 'ramp start', {
+      test: (n) => n >= 0,
+      expected: 'a ramp start of at least 0',
+    });
+    draft.beta = r.real('position.scaling.beta', [...at, 'beta_fast'], 'ramp end', {
+      test: (n) => n > 0,
+      expected: 'a ramp end above 0',
+    });
+    orderedRamp(
+      r,
+      at,
+      'beta_slow',
+      draft.alpha,
+      DEFAULT_YARN_ALPHA,
+      'beta_fast',
+      draft.beta,
+      DEFAULT_YARN_BETA,
+    );
     for (const key of ['attention_factor', 'mscale', 'mscale_all_dim']) {
       if (r.has([...at, key])) {
-        r.report('key-ignored', [...at, key], `${r.key([...at, key])} is not modelled: attentionScale uses 0.1·ln(s) + 1 (YaRN, Peng et al. 2023, eq. 22), whatever this key sets`);
+        r.report(
+          'key-ignored',
+          [...at, key],
+          `${r.key([...at, key])} is not modelled: attentionScale uses 0.1·ln(s) + 1 (YaRN, Peng et al. 2023, eq. 22), whatever this key sets`,
+        );
       }
     }
   }
   if (kind === 'banded') {
-    draft.low = r.real('position.scaling.low', [...at, 'low_freq_factor'], 'low-frequency factor', { test: (n) => n > 0, expected: 'a factor above 0' });
-    draft.high = r.real('position.scaling.high', [...at, 'high_freq_factor'], 'high-frequency factor', { test: (n) => n > 0, expected: 'a factor above 0' });
-    orderedRamp(r, at, 'low_freq_factor', draft.low, DEFAULT_BANDED_LOW, 'high_freq_factor', draft.high, DEFAULT_BANDED_HIGH);
+    draft.low = r.real('position.scaling.low', [...at, 'low_freq_factor'], 'low-frequency factor', {
+      test: (n) => n > 0,
+      expected: 'a factor above 0',
+    });
+    draft.high = r.real(
+      'position.scaling.high',
+      [...at, 'high_freq_factor'],
+      'high-frequency factor',
+      { test: (n) => n > 0, expected: 'a factor above 0' },
+    );
+    orderedRamp(
+      r,
+      at,
+      'low_freq_factor',
+      draft.low,
+      DEFAULT_BANDED_LOW,
+      'high_freq_factor',
+      draft.high,
+      DEFAULT_BANDED_HIGH,
+    );
   }
   return draft;
 }

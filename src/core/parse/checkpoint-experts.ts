@@ -17,14 +17,34 @@ import type { Experts, LatentAttention } from '../model.js';
 import type { FieldReader } from './fields.js';
 import { isCount } from './spec-defaults.js';
 
-type SizeReader = (field: string, candidates: string[], what: string, required: boolean) => number | undefined;
+type SizeReader = (
+  field: string,
+  candidates: string[],
+  what: string,
+  required: boolean,
+) => number | undefined;
 
 /** Keys these readers consume (for checks that every metric-changing key is read). */
 export const EXPERT_KEYS: readonly string[] = [
-  'num_local_experts', 'num_experts', 'n_routed_experts', 'num_experts_per_tok', 'moe_intermediate_size', 'n_shared_experts',
-  'shared_expert_intermediate_size', 'first_k_dense_replace', 'moe_layer_freq', 'mlp_only_layers', 'decoder_sparse_step',
-  'intermediate_size_mlp', 'moe_layers', 'interleave_moe_layer_step',
-  'kv_lora_rank', 'q_lora_rank', 'qk_rope_head_dim', 'qk_nope_head_dim', 'v_head_dim',
+  'num_local_experts',
+  'num_experts',
+  'n_routed_experts',
+  'num_experts_per_tok',
+  'moe_intermediate_size',
+  'n_shared_experts',
+  'shared_expert_intermediate_size',
+  'first_k_dense_replace',
+  'moe_layer_freq',
+  'mlp_only_layers',
+  'decoder_sparse_step',
+  'intermediate_size_mlp',
+  'moe_layers',
+  'interleave_moe_layer_step',
+  'kv_lora_rank',
+  'q_lora_rank',
+  'qk_rope_head_dim',
+  'qk_nope_head_dim',
+  'v_head_dim',
 ];
 
 /** Families whose mixture layers always add one shared expert as wide as a routed one (Llama-4 style). */
@@ -36,15 +56,30 @@ const ONE_SHARED_FAMILIES = new Set(['llama4', 'llama4_text']);
  * `intermediate_size_mlp`; their mixture layers are `moe_layers`, else every
  * `interleave_moe_layer_step`th layer; `denseFfn` then replaces the feed-forward width.
  */
-export function readMixture(r: FieldReader, size: SizeReader, layers: number, modelType: string | null): { experts: Experts | null; denseFfn?: number } {
+export function readMixture(
+  r: FieldReader,
+  size: SizeReader,
+  layers: number,
+  modelType: string | null,
+): { experts: Experts | null; denseFfn?: number } {
   const experts = readExperts(r, size, layers);
   if (experts === null || modelType === null || !ONE_SHARED_FAMILIES.has(modelType)) {
     for (const key of ['intermediate_size_mlp', 'moe_layers', 'interleave_moe_layer_step']) {
-      if (r.has([key])) r.report('key-ignored', [key], `${r.key([key])} is not read: it belongs to Llama-4-style mixtures (model_type llama4 or llama4_text)${experts === null ? ' and no experts are stated' : ''}`);
+      if (r.has([key]))
+        r.report(
+          'key-ignored',
+          [key],
+          `${r.key([key])} is not read: it belongs to Llama-4-style mixtures (model_type llama4 or llama4_text)${experts === null ? ' and no experts are stated' : ''}`,
+        );
     }
     return { experts };
   }
-  const width = size('experts.width', ['intermediate_size'], 'the width of one routed expert', false);
+  const width = size(
+    'experts.width',
+    ['intermediate_size'],
+    'the width of one routed expert',
+    false,
+  );
   if (width !== undefined) experts.width = width;
   experts.shared = 1;
   r.locate('experts.shared', ['model_type']);
@@ -52,18 +87,40 @@ export function readMixture(r: FieldReader, size: SizeReader, layers: number, mo
   if (r.has(['moe_layers'])) {
     const list = r.get(['moe_layers']);
     r.locate('experts.denseLayers', ['moe_layers']);
-    if (!Array.isArray(list) || list.some((x) => typeof x !== 'number' || !Number.isSafeInteger(x) || x < 0)) {
-      r.report('value-invalid', ['moe_layers'], `${r.key(['moe_layers'])} ${r.is(['moe_layers'])}; expected a list of layer indices`);
+    if (
+      !Array.isArray(list) ||
+      list.some((x) => typeof x !== 'number' || !Number.isSafeInteger(x) || x < 0)
+    ) {
+      r.report(
+        'value-invalid',
+        ['moe_layers'],
+        `${r.key(['moe_layers'])} ${r.is(['moe_layers'])}; expected a list of layer indices`,
+      );
       experts.denseLayers = NaN;
-    } else if (n !== null) experts.denseLayers = n - new Set((list as number[]).filter((i) => i < n)).size;
+    } else if (n !== null)
+      experts.denseLayers = n - new Set((list as number[]).filter((i) => i < n)).size;
   } else if (r.has(['interleave_moe_layer_step'])) {
-    const step = r.count('experts.denseLayers', ['interleave_moe_layer_step'], 'every Nth layer is a mixture');
+    const step = r.count(
+      'experts.denseLayers',
+      ['interleave_moe_layer_step'],
+      'every Nth layer is a mixture',
+    );
     if (step === undefined || !isCount(step)) {
-      if (step !== undefined && !Number.isNaN(step)) r.report('value-invalid', ['interleave_moe_layer_step'], `${r.key(['interleave_moe_layer_step'])} is ${r.quote(['interleave_moe_layer_step'])}; expected a whole number of at least 1`);
+      if (step !== undefined && !Number.isNaN(step))
+        r.report(
+          'value-invalid',
+          ['interleave_moe_layer_step'],
+          `${r.key(['interleave_moe_layer_step'])} is ${r.quote(['interleave_moe_layer_step'])}; expected a whole number of at least 1`,
+        );
       experts.denseLayers = NaN;
     } else if (n !== null) experts.denseLayers = n - countLayers(n, (i) => (i + 1) % step === 0);
   }
-  const denseFfn = size('ffn', ['intermediate_size_mlp'], 'the dense layers\' feed-forward width', false);
+  const denseFfn = size(
+    'ffn',
+    ['intermediate_size_mlp'],
+    "the dense layers' feed-forward width",
+    false,
+  );
   return denseFfn === undefined ? { experts } : { experts, denseFfn };
 }
 
@@ -77,15 +134,34 @@ export function readExperts(r: FieldReader, size: SizeReader, layers: number): E
   if (stated === 0 || stated === 1) return null;
   const experts: Experts = {
     total: size('experts.total', totalKeys, 'the number of experts', true)!,
-    active: size('experts.active', ['num_experts_per_tok'], 'the number of experts each token uses', true)!,
+    active: size(
+      'experts.active',
+      ['num_experts_per_tok'],
+      'the number of experts each token uses',
+      true,
+    )!,
   };
-  const width = size('experts.width', ['moe_intermediate_size'], 'the width of one routed expert', false);
+  const width = size(
+    'experts.width',
+    ['moe_intermediate_size'],
+    'the width of one routed expert',
+    false,
+  );
   if (width !== undefined) experts.width = width;
 
   const sharedCount = size('experts.shared', ['n_shared_experts'], 'shared experts', false);
-  const sharedWidth = size('experts.sharedWidth', ['shared_expert_intermediate_size'], 'the width of the shared expert', false);
+  const sharedWidth = size(
+    'experts.sharedWidth',
+    ['shared_expert_intermediate_size'],
+    'the width of the shared expert',
+    false,
+  );
   if (sharedCount !== undefined && sharedWidth !== undefined) {
-    r.report('key-ignored', ['shared_expert_intermediate_size'], `${r.key(['shared_expert_intermediate_size'])} is not read: n_shared_experts (${sharedCount}) already states the shared experts, each as wide as a routed expert; remove one of them`);
+    r.report(
+      'key-ignored',
+      ['shared_expert_intermediate_size'],
+      `${r.key(['shared_expert_intermediate_size'])} is not read: n_shared_experts (${sharedCount}) already states the shared experts, each as wide as a routed expert; remove one of them`,
+    );
   }
   if (sharedCount !== undefined) experts.shared = sharedCount;
   else if (sharedWidth !== undefined && sharedWidth !== 0) {
@@ -103,11 +179,19 @@ export function readExperts(r: FieldReader, size: SizeReader, layers: number): E
 function readDenseLayers(r: FieldReader, layers: number): number | null {
   const n = isCount(layers) && layers <= 1 << 16 ? layers : null;
   if (r.has(['first_k_dense_replace']) || r.has(['moe_layer_freq'])) {
-    const k = r.has(['first_k_dense_replace']) ? r.count('experts.denseLayers', ['first_k_dense_replace'], 'leading dense layers') : 0;
-    const freq = r.has(['moe_layer_freq']) ? r.count('experts.denseLayers', ['moe_layer_freq'], 'every Nth layer is a mixture') : 1;
+    const k = r.has(['first_k_dense_replace'])
+      ? r.count('experts.denseLayers', ['first_k_dense_replace'], 'leading dense layers')
+      : 0;
+    const freq = r.has(['moe_layer_freq'])
+      ? r.count('experts.denseLayers', ['moe_layer_freq'], 'every Nth layer is a mixture')
+      : 1;
     if (k === undefined || freq === undefined || Number.isNaN(k) || Number.isNaN(freq)) return NaN;
     if (!isCount(freq)) {
-      r.report('value-invalid', ['moe_layer_freq'], `${r.key(['moe_layer_freq'])} is ${r.quote(['moe_layer_freq'])}; expected a whole number of at least 1`);
+      r.report(
+        'value-invalid',
+        ['moe_layer_freq'],
+        `${r.key(['moe_layer_freq'])} is ${r.quote(['moe_layer_freq'])}; expected a whole number of at least 1`,
+      );
       return NaN;
     }
     if (n === null) return null;
@@ -117,14 +201,27 @@ function readDenseLayers(r: FieldReader, layers: number): number | null {
     const listPath = ['mlp_only_layers'];
     const list = r.get(listPath) ?? [];
     if (r.has(listPath)) r.locate('experts.denseLayers', listPath);
-    if (!Array.isArray(list) || list.some((x) => typeof x !== 'number' || !Number.isSafeInteger(x) || x < 0)) {
-      r.report('value-invalid', listPath, `${r.key(listPath)} ${r.is(listPath)}; expected a list of layer indices`);
+    if (
+      !Array.isArray(list) ||
+      list.some((x) => typeof x !== 'number' || !Number.isSafeInteger(x) || x < 0)
+    ) {
+      r.report(
+        'value-invalid',
+        listPath,
+        `${r.key(listPath)} ${r.is(listPath)}; expected a list of layer indices`,
+      );
       return NaN;
     }
-    const step = r.has(['decoder_sparse_step']) ? r.count('experts.denseLayers', ['decoder_sparse_step'], 'every Nth layer is a mixture') : 1;
+    const step = r.has(['decoder_sparse_step'])
+      ? r.count('experts.denseLayers', ['decoder_sparse_step'], 'every Nth layer is a mixture')
+      : 1;
     if (step === undefined || Number.isNaN(step)) return NaN;
     if (!isCount(step)) {
-      r.report('value-invalid', ['decoder_sparse_step'], `${r.key(['decoder_sparse_step'])} is ${r.quote(['decoder_sparse_step'])}; expected a whole number of at least 1`);
+      r.report(
+        'value-invalid',
+        ['decoder_sparse_step'],
+        `${r.key(['decoder_sparse_step'])} is ${r.quote(['decoder_sparse_step'])}; expected a whole number of at least 1`,
+      );
       return NaN;
     }
     if (n === null) return null;
@@ -144,15 +241,30 @@ function countLayers(n: number, test: (i: number) => boolean): number {
 export function readLatent(r: FieldReader, size: SizeReader): LatentAttention | null {
   if (!r.has(['kv_lora_rank'])) {
     for (const key of ['q_lora_rank', 'qk_rope_head_dim', 'qk_nope_head_dim', 'v_head_dim']) {
-      if (r.has([key])) r.report('key-ignored', [key], `${r.key([key])} has no effect: it belongs to latent attention, which kv_lora_rank turns on, and kv_lora_rank is not stated`);
+      if (r.has([key]))
+        r.report(
+          'key-ignored',
+          [key],
+          `${r.key([key])} has no effect: it belongs to latent attention, which kv_lora_rank turns on, and kv_lora_rank is not stated`,
+        );
     }
     return null;
   }
   return {
     kvRank: size('latent.kvRank', ['kv_lora_rank'], 'the compressed key/value width d_c', true)!,
     qRank: size('latent.qRank', ['q_lora_rank'], 'the compressed query width', false) ?? null,
-    ropeDim: size('latent.ropeDim', ['qk_rope_head_dim'], 'the decoupled rotary width per head', true)!,
-    nopeDim: size('latent.nopeDim', ['qk_nope_head_dim'], 'the query/key width without position code per head', true)!,
+    ropeDim: size(
+      'latent.ropeDim',
+      ['qk_rope_head_dim'],
+      'the decoupled rotary width per head',
+      true,
+    )!,
+    nopeDim: size(
+      'latent.nopeDim',
+      ['qk_nope_head_dim'],
+      'the query/key width without position code per head',
+      true,
+    )!,
     valueDim: size('latent.valueDim', ['v_head_dim'], 'the value width per head', true)!,
   };
 }

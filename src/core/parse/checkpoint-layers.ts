@@ -25,14 +25,24 @@ import { isCount } from './spec-defaults.js';
 import type { SourceMapping, SourceValue } from './source.js';
 
 /** Window patterns a family's config class fills in when the file states none: every Nth layer is global. */
-export const FAMILY_PATTERNS: Readonly<Record<string, number>> = { gemma2: 2, gemma3: 6, gemma3_text: 6, cohere2: 4 };
+export const FAMILY_PATTERNS: Readonly<Record<string, number>> = {
+  gemma2: 2,
+  gemma3: 6,
+  gemma3_text: 6,
+  cohere2: 4,
+};
 /** Families whose config class makes every Nth layer position-free when `no_rope_layers` is absent (default N: `4`). */
-export const NO_ROPE_INTERVAL_FAMILIES: Readonly<Record<string, number>> = { llama4: 4, llama4_text: 4 };
+export const NO_ROPE_INTERVAL_FAMILIES: Readonly<Record<string, number>> = {
+  llama4: 4,
+  llama4_text: 4,
+};
 /** Families whose config class turns the window off unless `use_sliding_window` is true. */
 const WINDOW_OFF_FAMILIES = new Set(['qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe']);
 
 const LAYER_TYPE_NAMES: Readonly<Record<string, LayerAttention>> = {
-  full_attention: 'full', sliding_attention: 'sliding', chunked_attention: 'chunked',
+  full_attention: 'full',
+  sliding_attention: 'sliding',
+  chunked_attention: 'chunked',
 };
 
 export interface LayerPlanDraft {
@@ -49,12 +59,24 @@ function isMapping(v: SourceValue | undefined): v is SourceMapping {
 }
 
 /** Reads the per-layer attention pattern; every problem becomes a finding on `r`. */
-export function readLayerPlan(r: FieldReader, modelType: string | null, layers: number): LayerPlanDraft {
-  const plan: LayerPlanDraft = { slidingWindow: null, windowLayers: null, layerTypes: null, positionFreeLayers: null, chunkSize: null, localBase: null };
+export function readLayerPlan(
+  r: FieldReader,
+  modelType: string | null,
+  layers: number,
+): LayerPlanDraft {
+  const plan: LayerPlanDraft = {
+    slidingWindow: null,
+    windowLayers: null,
+    layerTypes: null,
+    positionFreeLayers: null,
+    chunkSize: null,
+    localBase: null,
+  };
   const n = isCount(layers) && layers <= 1 << 16 ? layers : null;
 
   plan.positionFreeLayers = readPositionFree(r, modelType, n);
-  if (r.has(['attention_chunk_size'])) plan.chunkSize = r.count('chunkSize', ['attention_chunk_size'], 'tokens per chunk') ?? null;
+  if (r.has(['attention_chunk_size']))
+    plan.chunkSize = r.count('chunkSize', ['attention_chunk_size'], 'tokens per chunk') ?? null;
 
   const window = readWindowSize(r, modelType);
   plan.slidingWindow = window;
@@ -66,32 +88,61 @@ export function readLayerPlan(r: FieldReader, modelType: string | null, layers: 
   } else if (plan.chunkSize !== null && n !== null) {
     // The Llama-4-style class: layers with the rotary code are chunked, the others full.
     const free = new Set(plan.positionFreeLayers ?? []);
-    if (!hasList(r, ['no_rope_layers']) && !(modelType !== null && NO_ROPE_INTERVAL_FAMILIES[modelType] !== undefined) && !r.has(['no_rope_layer_interval'])) {
-      r.report('key-ignored', ['attention_chunk_size'], `${r.key(['attention_chunk_size'])} states a chunk, but neither layer_types nor no_rope_layers says which layers are chunked; every layer is read as chunked — state layer_types`);
+    if (
+      !hasList(r, ['no_rope_layers']) &&
+      !(modelType !== null && NO_ROPE_INTERVAL_FAMILIES[modelType] !== undefined) &&
+      !r.has(['no_rope_layer_interval'])
+    ) {
+      r.report(
+        'key-ignored',
+        ['attention_chunk_size'],
+        `${r.key(['attention_chunk_size'])} states a chunk, but neither layer_types nor no_rope_layers says which layers are chunked; every layer is read as chunked — state layer_types`,
+      );
     }
-    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention => (free.has(i) ? 'full' : 'chunked'));
-    r.locate('layerTypes', hasList(r, ['no_rope_layers']) ? ['no_rope_layers'] : ['attention_chunk_size']);
+    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention =>
+      free.has(i) ? 'full' : 'chunked',
+    );
+    r.locate(
+      'layerTypes',
+      hasList(r, ['no_rope_layers']) ? ['no_rope_layers'] : ['attention_chunk_size'],
+    );
   }
 
   if (plan.layerTypes !== null) {
     const types = plan.layerTypes;
     if (types.includes('sliding') && window === null) {
-      if (!r.reported(['sliding_window'])) r.missing(['sliding_window'], `the window in tokens: ${r.key(typesPath)} lists sliding_attention layers`);
+      if (!r.reported(['sliding_window']))
+        r.missing(
+          ['sliding_window'],
+          `the window in tokens: ${r.key(typesPath)} lists sliding_attention layers`,
+        );
       plan.slidingWindow = NaN;
     }
     if (!types.includes('sliding') && window !== null) {
-      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: no entry of ${r.key(typesPath)} is "sliding_attention"`);
+      r.report(
+        'key-ignored',
+        ['sliding_window'],
+        `${r.key(['sliding_window'])} has no effect: no entry of ${r.key(typesPath)} is "sliding_attention"`,
+      );
       plan.slidingWindow = null;
     }
     if (types.includes('chunked') && plan.chunkSize === null) {
-      plan.chunkSize = r.missing(['attention_chunk_size'], `tokens per chunk: ${r.key(typesPath)} lists chunked_attention layers`);
+      plan.chunkSize = r.missing(
+        ['attention_chunk_size'],
+        `tokens per chunk: ${r.key(typesPath)} lists chunked_attention layers`,
+      );
     }
     if (!types.includes('chunked') && plan.chunkSize !== null) {
-      r.report('key-ignored', ['attention_chunk_size'], `${r.key(['attention_chunk_size'])} has no effect: no layer is chunked`);
+      r.report(
+        'key-ignored',
+        ['attention_chunk_size'],
+        `${r.key(['attention_chunk_size'])} has no effect: no layer is chunked`,
+      );
       plan.chunkSize = null;
     }
     plan.windowLayers = types.filter((t) => t === 'sliding').length || null;
-    if (plan.windowLayers !== null && r.locations.layerTypes) r.locations.windowLayers = r.locations.layerTypes;
+    if (plan.windowLayers !== null && r.locations.layerTypes)
+      r.locations.windowLayers = r.locations.layerTypes;
     readLocalBase(r, plan);
     return plan;
   }
@@ -108,16 +159,26 @@ export function readLayerPlan(r: FieldReader, modelType: string | null, layers: 
       const stated = r.count('layerTypes', patternPath, 'every Nth layer is global');
       if (stated === undefined || Number.isNaN(stated)) return dropWindow(plan);
       if (!isCount(stated)) {
-        r.report('value-invalid', patternPath, `${r.key(patternPath)} is ${r.quote(patternPath)}; expected a whole number of at least 1 (every Nth layer is global)`);
+        r.report(
+          'value-invalid',
+          patternPath,
+          `${r.key(patternPath)} is ${r.quote(patternPath)}; expected a whole number of at least 1 (every Nth layer is global)`,
+        );
         return dropWindow(plan);
       }
       every = stated;
     } else r.locate('layerTypes', ['model_type']);
     if (n === null) return plan;
-    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention => ((i + 1) % (every as number) !== 0 ? 'sliding' : 'full'));
+    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention =>
+      (i + 1) % (every as number) !== 0 ? 'sliding' : 'full',
+    );
     plan.windowLayers = plan.layerTypes.filter((t) => t === 'sliding').length || null;
     if (plan.windowLayers === null) {
-      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: with every ${every === 1 ? '' : `${every}th `}layer global, no layer slides`);
+      r.report(
+        'key-ignored',
+        ['sliding_window'],
+        `${r.key(['sliding_window'])} has no effect: with every ${every === 1 ? '' : `${every}th `}layer global, no layer slides`,
+      );
       plan.slidingWindow = null;
       plan.layerTypes = null;
     }
@@ -132,7 +193,11 @@ export function readLayerPlan(r: FieldReader, modelType: string | null, layers: 
     }
     const windowed = layers - Math.max(0, first);
     if (windowed <= 0) {
-      r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: layers from index ${r.key(['max_window_layers'])} (${first}) on use the window, and there are ${layers} layers; lower max_window_layers to below ${layers}, or remove sliding_window`);
+      r.report(
+        'key-ignored',
+        ['sliding_window'],
+        `${r.key(['sliding_window'])} has no effect: layers from index ${r.key(['max_window_layers'])} (${first}) on use the window, and there are ${layers} layers; lower max_window_layers to below ${layers}, or remove sliding_window`,
+      );
       delete r.locations.windowLayers;
       return dropWindow(plan);
     }
@@ -150,8 +215,15 @@ function hasList(r: FieldReader, path: string[]): boolean {
 
 /** Keys this reader consumes (for checks that every metric-changing key is read). */
 export const LAYER_KEYS: readonly string[] = [
-  'layer_types', 'sliding_window', 'use_sliding_window', 'sliding_window_pattern', 'max_window_layers', 'attention_chunk_size',
-  'no_rope_layers', 'no_rope_layer_interval', 'rope_local_base_freq',
+  'layer_types',
+  'sliding_window',
+  'use_sliding_window',
+  'sliding_window_pattern',
+  'max_window_layers',
+  'attention_chunk_size',
+  'no_rope_layers',
+  'no_rope_layer_interval',
+  'rope_local_base_freq',
 ];
 
 function dropWindow(plan: LayerPlanDraft): LayerPlanDraft {
@@ -166,8 +238,17 @@ function readWindowSize(r: FieldReader, modelType: string | null): number | null
   if (!r.has(['sliding_window'])) return null;
   const use = r.flag(null, ['use_sliding_window']);
   if (use === false) return null;
-  if (use === undefined && !r.has(['use_sliding_window']) && modelType !== null && WINDOW_OFF_FAMILIES.has(modelType)) {
-    r.report('key-ignored', ['sliding_window'], `${r.key(['sliding_window'])} has no effect: use_sliding_window is not stated, and model_type "${modelType}" turns the window off unless it is true; add "use_sliding_window": true, or remove sliding_window`);
+  if (
+    use === undefined &&
+    !r.has(['use_sliding_window']) &&
+    modelType !== null &&
+    WINDOW_OFF_FAMILIES.has(modelType)
+  ) {
+    r.report(
+      'key-ignored',
+      ['sliding_window'],
+      `${r.key(['sliding_window'])} has no effect: use_sliding_window is not stated, and model_type "${modelType}" turns the window off unless it is true; add "use_sliding_window": true, or remove sliding_window`,
+    );
     return null;
   }
   return r.count('slidingWindow', ['sliding_window'], 'tokens') ?? null;
@@ -179,18 +260,30 @@ function readLayerTypes(r: FieldReader, n: number | null): LayerAttention[] | nu
   const value = r.get(path);
   r.locate('layerTypes', path);
   if (!Array.isArray(value)) {
-    r.report('value-invalid', path, `${r.key(path)} ${r.is(path)}; expected a list with one entry per layer (${Object.keys(LAYER_TYPE_NAMES).join(', ')})`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} ${r.is(path)}; expected a list with one entry per layer (${Object.keys(LAYER_TYPE_NAMES).join(', ')})`,
+    );
     return null;
   }
   if (n !== null && value.length !== n) {
-    r.report('value-invalid', path, `${r.key(path)} has ${value.length} entries, but there are ${n} layers; expected one entry per layer`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} has ${value.length} entries, but there are ${n} layers; expected one entry per layer`,
+    );
     return null;
   }
   const types: LayerAttention[] = [];
   for (const [i, entry] of value.entries()) {
     const kind = typeof entry === 'string' ? LAYER_TYPE_NAMES[entry] : undefined;
     if (kind === undefined) {
-      r.report('key-ignored', [...path, i], `${r.key([...path, i])} is ${r.quote([...path, i])}, not a layer kind the reader models (${Object.keys(LAYER_TYPE_NAMES).join(', ')}); the layer pattern is not read, and every layer is taken as full attention, so the cache may be overstated — describe the model in the context-reach format`);
+      r.report(
+        'key-ignored',
+        [...path, i],
+        `${r.key([...path, i])} is ${r.quote([...path, i])}, not a layer kind the reader models (${Object.keys(LAYER_TYPE_NAMES).join(', ')}); the layer pattern is not read, and every layer is taken as full attention, so the cache may be overstated — describe the model in the context-reach format`,
+      );
       return null;
     }
     types.push(kind);
@@ -199,18 +292,32 @@ function readLayerTypes(r: FieldReader, n: number | null): LayerAttention[] | nu
 }
 
 /** Layers without a position code, from `no_rope_layers` (1 = rotary, 0 = none) or the family interval. */
-function readPositionFree(r: FieldReader, modelType: string | null, n: number | null): number[] | null {
+function readPositionFree(
+  r: FieldReader,
+  modelType: string | null,
+  n: number | null,
+): number[] | null {
   const listPath = ['no_rope_layers'];
   // An empty list is "not stated": the Llama-4-style class then fills in its interval default.
   const stated = r.get(listPath);
   if (r.has(listPath) && !(Array.isArray(stated) && stated.length === 0)) {
     const list = r.get(listPath);
     r.locate('positionFreeLayers', listPath);
-    if (!Array.isArray(list) || list.some((x) => x !== 0 && x !== 1) || (n !== null && list.length < n)) {
-      r.report('value-invalid', listPath, `${r.key(listPath)} ${Array.isArray(list) ? `has ${list.length} entries` : r.is(listPath)}; expected a list of 0 and 1 with one entry per layer${n !== null ? ` (${n})` : ''}, 1 where the layer has the rotary code`);
+    if (
+      !Array.isArray(list) ||
+      list.some((x) => x !== 0 && x !== 1) ||
+      (n !== null && list.length < n)
+    ) {
+      r.report(
+        'value-invalid',
+        listPath,
+        `${r.key(listPath)} ${Array.isArray(list) ? `has ${list.length} entries` : r.is(listPath)}; expected a list of 0 and 1 with one entry per layer${n !== null ? ` (${n})` : ''}, 1 where the layer has the rotary code`,
+      );
       return null;
     }
-    const free = (list as number[]).slice(0, n ?? list.length).flatMap((x, i) => (x === 0 ? [i] : []));
+    const free = (list as number[])
+      .slice(0, n ?? list.length)
+      .flatMap((x, i) => (x === 0 ? [i] : []));
     return free.length > 0 ? free : null;
   }
   const intervalPath = ['no_rope_layer_interval'];
@@ -218,33 +325,61 @@ function readPositionFree(r: FieldReader, modelType: string | null, n: number | 
   if (!r.has(intervalPath) && familyInterval === undefined) return null;
   let every = familyInterval;
   if (r.has(intervalPath)) {
-    const stated = r.count('positionFreeLayers', intervalPath, 'every Nth layer has no position code');
+    const stated = r.count(
+      'positionFreeLayers',
+      intervalPath,
+      'every Nth layer has no position code',
+    );
     if (stated === undefined || !isCount(stated)) {
-      if (stated !== undefined && !Number.isNaN(stated)) r.report('value-invalid', intervalPath, `${r.key(intervalPath)} is ${r.quote(intervalPath)}; expected a whole number of at least 1`);
+      if (stated !== undefined && !Number.isNaN(stated))
+        r.report(
+          'value-invalid',
+          intervalPath,
+          `${r.key(intervalPath)} is ${r.quote(intervalPath)}; expected a whole number of at least 1`,
+        );
       return null;
     }
     every = stated;
   } else r.locate('positionFreeLayers', ['model_type']);
   if (n === null || every === undefined) return null;
-  const free = Array.from({ length: n }, (_, i) => i).filter((i) => (i + 1) % (every as number) === 0);
+  const free = Array.from({ length: n }, (_, i) => i).filter(
+    (i) => (i + 1) % (every as number) === 0,
+  );
   return free.length > 0 ? free : null;
 }
 
 /** The local layers' rotary base; reported as having no effect when no layer is local. */
 function readLocalBase(r: FieldReader, plan: LayerPlanDraft): void {
   const nested = r.get(['rope_parameters', 'sliding_attention']);
-  const path = r.has(['rope_local_base_freq']) ? ['rope_local_base_freq'] : isMapping(nested) && r.has(['rope_parameters', 'sliding_attention', 'rope_theta']) ? ['rope_parameters', 'sliding_attention', 'rope_theta'] : null;
+  const path = r.has(['rope_local_base_freq'])
+    ? ['rope_local_base_freq']
+    : isMapping(nested) && r.has(['rope_parameters', 'sliding_attention', 'rope_theta'])
+      ? ['rope_parameters', 'sliding_attention', 'rope_theta']
+      : null;
   if (path === null) return;
-  const base = r.real('localBase', path, 'rotary base', { test: (x) => x > 1, expected: 'a rotary base above 1 (commonly 10000)' });
-  const local = (plan.layerTypes ?? []).some((t) => t !== 'full') || (plan.layerTypes === null && plan.slidingWindow !== null);
+  const base = r.real('localBase', path, 'rotary base', {
+    test: (x) => x > 1,
+    expected: 'a rotary base above 1 (commonly 10000)',
+  });
+  const local =
+    (plan.layerTypes ?? []).some((t) => t !== 'full') ||
+    (plan.layerTypes === null && plan.slidingWindow !== null);
   if (!local) {
-    r.report('key-ignored', path, `${r.key(path)} has no effect: no layer is local (sliding or chunked), so every layer uses the model's rotary base`);
+    r.report(
+      'key-ignored',
+      path,
+      `${r.key(path)} has no effect: no layer is local (sliding or chunked), so every layer uses the model's rotary base`,
+    );
     return;
   }
   if (isMapping(nested)) {
     const type = nested['rope_type'];
     if (typeof type === 'string' && type !== 'default') {
-      r.report('key-ignored', ['rope_parameters', 'sliding_attention', 'rope_type'], `${r.key(['rope_parameters', 'sliding_attention', 'rope_type'])} is "${type}": a scaled code on the local layers is not modelled; they are read unscaled at base ${base}`);
+      r.report(
+        'key-ignored',
+        ['rope_parameters', 'sliding_attention', 'rope_type'],
+        `${r.key(['rope_parameters', 'sliding_attention', 'rope_type'])} is "${type}": a scaled code on the local layers is not modelled; they are read unscaled at base ${base}`,
+      );
     }
   }
   plan.localBase = base ?? null;

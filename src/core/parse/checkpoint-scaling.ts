@@ -30,16 +30,27 @@ export function rotaryPairs(headDim: number, fraction: number | undefined): numb
 function factorList(r: FieldReader, path: PathSegment[], ctx: RotaryContext): number[] | undefined {
   const v = r.get(path);
   if (v === undefined) {
-    r.missing(path, `a list of ${Number.isNaN(ctx.pairs) ? 'per-pair' : ctx.pairs} factors, one per rotary pair`);
+    r.missing(
+      path,
+      `a list of ${Number.isNaN(ctx.pairs) ? 'per-pair' : ctx.pairs} factors, one per rotary pair`,
+    );
     return undefined;
   }
   if (!Array.isArray(v) || !v.every((x) => typeof x === 'number' && Number.isFinite(x) && x > 0)) {
-    r.report('value-invalid', path, `${r.key(path)} ${r.is(path)}; expected a list of factors above 0, one per rotary pair`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} ${r.is(path)}; expected a list of factors above 0, one per rotary pair`,
+    );
     return undefined;
   }
   const list = v as number[];
   if (!Number.isNaN(ctx.pairs) && list.length !== ctx.pairs) {
-    r.report('value-invalid', path, `${r.key(path)} has ${list.length} factors, but the rotary code has ${ctx.pairs} pairs (head width × rotary share / 2); expected one factor per pair, ${ctx.pairs} in all`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} has ${list.length} factors, but the rotary code has ${ctx.pairs} pairs (head width × rotary share / 2); expected one factor per pair, ${ctx.pairs} in all`,
+    );
     return undefined;
   }
   return list;
@@ -51,18 +62,32 @@ function factorList(r: FieldReader, path: PathSegment[], ctx: RotaryContext): nu
  * the stated `factor`, else the declared span over the original span (as Phi-3 configs imply it).
  * The attention factor is read when stated; otherwise the published default applies in the metrics.
  */
-export function readPairwise(r: FieldReader, at: PathSegment[], ctx: RotaryContext, originalSpan: number | null | undefined): ScalingDraft {
+export function readPairwise(
+  r: FieldReader,
+  at: PathSegment[],
+  ctx: RotaryContext,
+  originalSpan: number | null | undefined,
+): ScalingDraft {
   const short = factorList(r, [...at, 'short_factor'], ctx);
   const long = factorList(r, [...at, 'long_factor'], ctx);
-  const attention = r.real('position.scaling.attentionFactor', [...at, 'attention_factor'], 'attention factor', {
-    test: (n) => n > 0,
-    expected: 'an attention factor above 0',
-  });
+  const attention = r.real(
+    'position.scaling.attentionFactor',
+    [...at, 'attention_factor'],
+    'attention factor',
+    {
+      test: (n) => n > 0,
+      expected: 'an attention factor above 0',
+    },
+  );
   let factor = r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor');
   if (factor === undefined) {
-    if (isCount(originalSpan ?? NaN) && isCount(ctx.declaredSpan)) factor = ctx.declaredSpan / (originalSpan as number);
+    if (isCount(originalSpan ?? NaN) && isCount(ctx.declaredSpan))
+      factor = ctx.declaredSpan / (originalSpan as number);
     else if (originalSpan === undefined || originalSpan === null) {
-      factor = r.missing([...at, 'original_max_position_embeddings'], 'the span the model was trained at before scaling (original_max_position_embeddings, in the block or at the top level), or a factor in the block');
+      factor = r.missing(
+        [...at, 'original_max_position_embeddings'],
+        'the span the model was trained at before scaling (original_max_position_embeddings, in the block or at the top level), or a factor in the block',
+      );
     } else factor = NaN;
   }
   return {
@@ -83,12 +108,23 @@ export function readPairwise(r: FieldReader, at: PathSegment[], ctx: RotaryConte
 export function checkSections(r: FieldReader, path: PathSegment[], ctx: RotaryContext): void {
   const v = r.get(path);
   if (v === undefined) return;
-  if (!Array.isArray(v) || !v.every((x) => typeof x === 'number' && Number.isInteger(x) && x >= 0)) {
-    r.report('value-invalid', path, `${r.key(path)} ${r.is(path)}; expected a list of whole numbers of rotary pairs, one per position axis`);
+  if (
+    !Array.isArray(v) ||
+    !v.every((x) => typeof x === 'number' && Number.isInteger(x) && x >= 0)
+  ) {
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} ${r.is(path)}; expected a list of whole numbers of rotary pairs, one per position axis`,
+    );
     return;
   }
   const sum = (v as number[]).reduce((a, b) => a + b, 0);
   if (!Number.isNaN(ctx.pairs) && sum !== ctx.pairs) {
-    r.report('value-invalid', path, `${r.key(path)} adds up to ${sum} pairs, but the rotary code has ${ctx.pairs} pairs (head width × rotary share / 2); expected sections that add up to ${ctx.pairs}`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} adds up to ${sum} pairs, but the rotary code has ${ctx.pairs} pairs (head width × rotary share / 2); expected sections that add up to ${ctx.pairs}`,
+    );
   }
 }

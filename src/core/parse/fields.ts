@@ -60,16 +60,27 @@ export class FieldReader {
   /** The value at `path` under the root; undefined when absent (or null, where null means absent). */
   get(path: readonly PathSegment[]): SourceValue | undefined {
     this.consulted.add(FieldReader.pathId(path));
-    if (path.length === 1 && typeof path[0] === 'string' && !Object.prototype.hasOwnProperty.call(this.root, path[0])
-      && Object.prototype.hasOwnProperty.call(this.defaults, path[0])) {
+    if (
+      path.length === 1 &&
+      typeof path[0] === 'string' &&
+      !Object.prototype.hasOwnProperty.call(this.root, path[0]) &&
+      Object.prototype.hasOwnProperty.call(this.defaults, path[0])
+    ) {
       if (!this.defaultsUsed.includes(path[0])) this.defaultsUsed.push(path[0]);
       return this.defaults[path[0]];
     }
     let current: SourceValue | undefined = this.root;
     for (const segment of path) {
       if (Array.isArray(current) && typeof segment === 'number') current = current[segment];
-      else if (current !== null && typeof current === 'object' && !Array.isArray(current) && typeof segment === 'string') {
-        current = Object.prototype.hasOwnProperty.call(current, segment) ? current[segment] : undefined;
+      else if (
+        current !== null &&
+        typeof current === 'object' &&
+        !Array.isArray(current) &&
+        typeof segment === 'string'
+      ) {
+        current = Object.prototype.hasOwnProperty.call(current, segment)
+          ? current[segment]
+          : undefined;
       } else return undefined;
     }
     if (current === null && this.nullIsAbsent) return undefined;
@@ -91,7 +102,13 @@ export class FieldReader {
   stated(path: readonly PathSegment[]): boolean {
     let current: SourceValue | undefined = this.root;
     for (const segment of path) {
-      if (current === null || typeof current !== 'object' || Array.isArray(current) || typeof segment !== 'string') return false;
+      if (
+        current === null ||
+        typeof current !== 'object' ||
+        Array.isArray(current) ||
+        typeof segment !== 'string'
+      )
+        return false;
       if (!Object.prototype.hasOwnProperty.call(current, segment)) return false;
       current = current[segment];
     }
@@ -134,14 +151,26 @@ export class FieldReader {
    */
   report(rule: RuleId, path: readonly PathSegment[] | null, message: string): void {
     const key = path === null ? null : this.key(path);
-    if (key !== null && this.findings.some((f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)))) return;
-    this.findings.push({ rule, severity: RULES[rule].severity, message, key, line: path === null ? null : this.line(path) });
+    if (
+      key !== null &&
+      this.findings.some((f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)))
+    )
+      return;
+    this.findings.push({
+      rule,
+      severity: RULES[rule].severity,
+      message,
+      key,
+      line: path === null ? null : this.line(path),
+    });
   }
 
   /** Whether a finding about `path` (or a key containing it) has been made. */
   reported(path: readonly PathSegment[]): boolean {
     const key = this.key(path);
-    return this.findings.some((f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)));
+    return this.findings.some(
+      (f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)),
+    );
   }
 
   /** Reports `path` as missing; `what` completes "expected …". Returns NaN for the spec. */
@@ -160,10 +189,19 @@ export class FieldReader {
   }
 
   /** A real number; `check` adds a range. Undefined when absent; NaN, reported, when unusable. */
-  real(field: string, path: readonly PathSegment[], what: string, check?: NumberCheck): number | undefined {
+  real(
+    field: string,
+    path: readonly PathSegment[],
+    what: string,
+    check?: NumberCheck,
+  ): number | undefined {
     const n = this.number(field, path, check ? check.expected : `a number (${what})`, false);
     if (n === undefined || Number.isNaN(n) || !check || check.test(n)) return n;
-    this.report('value-invalid', path, `${this.key(path)} is ${this.quote(path)}; expected ${check.expected}`);
+    this.report(
+      'value-invalid',
+      path,
+      `${this.key(path)} is ${this.quote(path)}; expected ${check.expected}`,
+    );
     return NaN;
   }
 
@@ -173,7 +211,11 @@ export class FieldReader {
     if (v === undefined) return undefined;
     if (field !== null) this.locate(field, path);
     if (typeof v === 'boolean') return v;
-    this.report('value-invalid', path, `${this.key(path)} ${this.is(path)}; expected true or false`);
+    this.report(
+      'value-invalid',
+      path,
+      `${this.key(path)} ${this.is(path)}; expected true or false`,
+    );
     return undefined;
   }
 
@@ -183,7 +225,11 @@ export class FieldReader {
     if (v === undefined) return undefined;
     if (field !== null) this.locate(field, path);
     if (typeof v === 'string') return v;
-    this.report('value-invalid', path, `${this.key(path)} ${this.is(path)}; expected text (${what})`);
+    this.report(
+      'value-invalid',
+      path,
+      `${this.key(path)} ${this.is(path)}; expected text (${what})`,
+    );
     return undefined;
   }
 
@@ -191,15 +237,29 @@ export class FieldReader {
    * One of the names in `choices` (compared exactly), mapped to its spec value. Undefined when
    * absent; null, reported, when not one of them.
    */
-  choice<T>(field: string, path: readonly PathSegment[], choices: Readonly<Record<string, T>>, what: string): T | null | undefined {
+  choice<T>(
+    field: string,
+    path: readonly PathSegment[],
+    choices: Readonly<Record<string, T>>,
+    what: string,
+  ): T | null | undefined {
     const v = this.text(field, path, what);
     if (v === undefined) return this.has(path) ? null : undefined;
     if (Object.prototype.hasOwnProperty.call(choices, v)) return choices[v];
-    this.report('value-invalid', path, `${this.key(path)} is ${this.quote(path)}; expected one of ${Object.keys(choices).join(', ')} (${what})`);
+    this.report(
+      'value-invalid',
+      path,
+      `${this.key(path)} is ${this.quote(path)}; expected one of ${Object.keys(choices).join(', ')} (${what})`,
+    );
     return null;
   }
 
-  private number(field: string, path: readonly PathSegment[], expected: string, whole: boolean): number | undefined {
+  private number(
+    field: string,
+    path: readonly PathSegment[],
+    expected: string,
+    whole: boolean,
+  ): number | undefined {
     const v = this.get(path);
     if (v === undefined) return undefined;
     this.locate(field, path);
@@ -209,12 +269,18 @@ export class FieldReader {
       return NaN;
     }
     if (Number.isNaN(v)) {
-      this.report('value-invalid', path, `${key} is ${this.quote(path)}, which is not a number; expected ${expected}`);
+      this.report(
+        'value-invalid',
+        path,
+        `${key} is ${this.quote(path)}, which is not a number; expected ${expected}`,
+      );
       return NaN;
     }
     if (!Number.isFinite(v)) {
       const written = this.quote(path);
-      const overflow = /inf/i.test(written) ? ', which is not finite' : `, which overflows to ${v > 0 ? '' : '-'}Infinity in a double`;
+      const overflow = /inf/i.test(written)
+        ? ', which is not finite'
+        : `, which overflows to ${v > 0 ? '' : '-'}Infinity in a double`;
       this.report('value-invalid', path, `${key} is ${written}${overflow}; expected ${expected}`);
       return NaN;
     }
@@ -234,11 +300,24 @@ export class FieldReader {
  * Ramp ends must be ordered (defaults standing in for an unstated end), or the ramp divides by
  * zero or runs backwards. Shared by both dialects' scaling readers.
  */
-export function orderedRamp(r: FieldReader, at: PathSegment[], lowKey: string, low: number | undefined, lowDefault: number, highKey: string, high: number | undefined, highDefault: number): void {
+export function orderedRamp(
+  r: FieldReader,
+  at: PathSegment[],
+  lowKey: string,
+  low: number | undefined,
+  lowDefault: number,
+  highKey: string,
+  high: number | undefined,
+  highDefault: number,
+): void {
   if (low === undefined && high === undefined) return;
   low ??= lowDefault;
   high ??= highDefault;
   if (Number.isNaN(low) || Number.isNaN(high) || high > low) return;
   const path = r.has([...at, highKey]) ? [...at, highKey] : [...at, lowKey];
-  r.report('value-invalid', path, `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards; raise ${highKey} or lower ${lowKey}`);
+  r.report(
+    'value-invalid',
+    path,
+    `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards; raise ${highKey} or lower ${lowKey}`,
+  );
 }

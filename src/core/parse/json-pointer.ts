@@ -45,12 +45,19 @@ export function parsePointer(pointer: string): string[] {
   if (!text.startsWith('/')) {
     throw new PointerError(pointer, [], `must start with "/" (for example "/${text}")`);
   }
-  return text.slice(1).split('/').map((token) => {
-    if (/~(?![01])/.test(token)) {
-      throw new PointerError(pointer, [], `has "~" not followed by 0 or 1 in ${JSON.stringify(token)}; write "~0" for "~" and "~1" for "/"`);
-    }
-    return token.replace(/~1/g, '/').replace(/~0/g, '~');
-  });
+  return text
+    .slice(1)
+    .split('/')
+    .map((token) => {
+      if (/~(?![01])/.test(token)) {
+        throw new PointerError(
+          pointer,
+          [],
+          `has "~" not followed by 0 or 1 in ${JSON.stringify(token)}; write "~0" for "~" and "~1" for "/"`,
+        );
+      }
+      return token.replace(/~1/g, '/').replace(/~0/g, '~');
+    });
 }
 
 /** The string form of a pointer to `tokens` (RFC 6901 section 5). */
@@ -63,32 +70,59 @@ export function formatPointer(tokens: readonly string[]): string {
  * (list indexes as numbers). Only own keys are followed. Throws `PointerError` saying where the
  * walk stopped and why.
  */
-export function resolvePointer(root: unknown, pointer: string): { value: unknown; path: PathSegment[] } {
+export function resolvePointer(
+  root: unknown,
+  pointer: string,
+): { value: unknown; path: PathSegment[] } {
   const tokens = parsePointer(pointer);
   let current: unknown = root;
   const path: PathSegment[] = [];
   for (const token of tokens) {
     if (Array.isArray(current)) {
-      if (token === '-') throw new PointerError(pointer, path, `stops at ${where(path)}: "-" names the position after the last item, which holds no value`);
+      if (token === '-')
+        throw new PointerError(
+          pointer,
+          path,
+          `stops at ${where(path)}: "-" names the position after the last item, which holds no value`,
+        );
       if (!/^(0|[1-9][0-9]*)$/.test(token)) {
-        throw new PointerError(pointer, path, `stops at ${where(path)}: that is a list, and ${JSON.stringify(token)} is not an index (0, 1, 2, … without leading zeros)`);
+        throw new PointerError(
+          pointer,
+          path,
+          `stops at ${where(path)}: that is a list, and ${JSON.stringify(token)} is not an index (0, 1, 2, … without leading zeros)`,
+        );
       }
       const index = Number(token);
       if (index >= current.length) {
-        throw new PointerError(pointer, path, `stops at ${where(path)}: index ${index} is past the end of a list of ${current.length}`);
+        throw new PointerError(
+          pointer,
+          path,
+          `stops at ${where(path)}: index ${index} is past the end of a list of ${current.length}`,
+        );
       }
       current = current[index];
       path.push(index);
     } else if (current !== null && typeof current === 'object') {
       if (!Object.prototype.hasOwnProperty.call(current, token)) {
         const keys = Object.keys(current);
-        const some = keys.slice(0, 8).map((k) => quoteText(k)).join(', ');
-        throw new PointerError(pointer, path, `stops at ${where(path)}: no key ${JSON.stringify(token)} there${keys.length ? ` (keys: ${some}${keys.length > 8 ? ', …' : ''})` : ' (the mapping is empty)'}`);
+        const some = keys
+          .slice(0, 8)
+          .map((k) => quoteText(k))
+          .join(', ');
+        throw new PointerError(
+          pointer,
+          path,
+          `stops at ${where(path)}: no key ${JSON.stringify(token)} there${keys.length ? ` (keys: ${some}${keys.length > 8 ? ', …' : ''})` : ' (the mapping is empty)'}`,
+        );
       }
       current = (current as Record<string, unknown>)[token];
       path.push(token);
     } else {
-      throw new PointerError(pointer, path, `stops at ${where(path)}: that is ${current === null ? 'empty' : `a ${typeof current}`}, not a mapping or a list`);
+      throw new PointerError(
+        pointer,
+        path,
+        `stops at ${where(path)}: that is ${current === null ? 'empty' : `a ${typeof current}`}, not a mapping or a list`,
+      );
     }
   }
   return { value: current, path };

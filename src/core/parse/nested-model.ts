@@ -13,7 +13,13 @@ import type { PathSegment } from './quote.js';
 import type { SourceDocument, SourceMapping, SourceValue } from './source.js';
 
 /** Keys published multimodal configs keep the language model under, in the order tried. */
-export const NESTED_MODEL_KEYS: readonly string[] = ['text_config', 'language_config', 'llm_config', 'language_model', 'text_model'];
+export const NESTED_MODEL_KEYS: readonly string[] = [
+  'text_config',
+  'language_config',
+  'llm_config',
+  'language_model',
+  'text_model',
+];
 
 /** Keys of vision (and other non-text) towers: never read as the language model. */
 export const TOWER_KEY = /vision|visual|image|audio|speech/i;
@@ -29,7 +35,10 @@ function isMapping(v: SourceValue | undefined): v is SourceMapping {
 export function isLanguageModelBlock(block: SourceMapping): boolean {
   if (isCheckpointConfig(block)) return true;
   const type = block.model_type;
-  return typeof type === 'string' && Object.prototype.hasOwnProperty.call(FAMILY_DEFAULTS, type.toLowerCase());
+  return (
+    typeof type === 'string' &&
+    Object.prototype.hasOwnProperty.call(FAMILY_DEFAULTS, type.toLowerCase())
+  );
 }
 
 /** The key of the nested language model in `root`, or null. */
@@ -46,23 +55,48 @@ export function nestedModelKey(root: SourceMapping): string | null {
  * the model block, or the model block itself for flat files), read ViT style. Returns the tower
  * when every size is stated, and the findings (a `vision-not-counted` info otherwise).
  */
-export function readVisionTower(doc: SourceDocument, parent: SourceMapping, prefix: readonly PathSegment[]): { tower: VisionTower | null; findings: Finding[] } {
+export function readVisionTower(
+  doc: SourceDocument,
+  parent: SourceMapping,
+  prefix: readonly PathSegment[],
+): { tower: VisionTower | null; findings: Finding[] } {
   const block = parent.vision_config;
   if (!isMapping(block)) return { tower: null, findings: [] };
   const r = new FieldReader(doc, block, [...prefix, 'vision_config'], true);
-  const keys = ['hidden_size', 'num_hidden_layers', 'intermediate_size', 'patch_size', 'image_size'] as const;
+  const keys = [
+    'hidden_size',
+    'num_hidden_layers',
+    'intermediate_size',
+    'patch_size',
+    'image_size',
+  ] as const;
   const missing = keys.filter((k) => !r.has([k]));
   if (missing.length > 0) {
-    r.report('vision-not-counted', [], `${r.key([])} does not state ${missing.join(', ')}, which a ViT-style count needs, so the vision tower's parameters are not counted: params, weights and memory cover the language model only`);
+    r.report(
+      'vision-not-counted',
+      [],
+      `${r.key([])} does not state ${missing.join(', ')}, which a ViT-style count needs, so the vision tower's parameters are not counted: params, weights and memory cover the language model only`,
+    );
     return { tower: null, findings: r.findings };
   }
   const n = (k: string): number => r.count(`vision.${k}`, [k], 'a size') ?? NaN;
   const channels = r.has(['num_channels']) ? n('num_channels') : DEFAULT_VISION_CHANNELS;
   if (!r.has(['num_channels'])) {
-    r.report('family-default-taken', [], `${r.key(['num_channels'])} is not stated; the vision tower is counted with ${DEFAULT_VISION_CHANNELS} image channels (RGB, the ViT-style config classes' default)`);
+    r.report(
+      'family-default-taken',
+      [],
+      `${r.key(['num_channels'])} is not stated; the vision tower is counted with ${DEFAULT_VISION_CHANNELS} image channels (RGB, the ViT-style config classes' default)`,
+    );
   }
   return {
-    tower: { hidden: n('hidden_size'), layers: n('num_hidden_layers'), ffn: n('intermediate_size'), patch: n('patch_size'), image: n('image_size'), channels },
+    tower: {
+      hidden: n('hidden_size'),
+      layers: n('num_hidden_layers'),
+      ffn: n('intermediate_size'),
+      patch: n('patch_size'),
+      image: n('image_size'),
+      channels,
+    },
     findings: r.findings,
   };
 }

@@ -49,7 +49,8 @@ export function readQuantization(r: FieldReader, hidden: number): WeightQuantiza
   r.locate('quantization', AT);
   const methodPath = [...AT, 'quant_method'];
   let method = r.text(null, methodPath, 'a quantization method')?.toLowerCase();
-  if (method === undefined && (r.has([...AT, 'load_in_4bit']) || r.has([...AT, 'load_in_8bit']))) method = 'bitsandbytes';
+  if (method === undefined && (r.has([...AT, 'load_in_4bit']) || r.has([...AT, 'load_in_8bit'])))
+    method = 'bitsandbytes';
   if (method === undefined) {
     if (!r.reported(methodPath)) unknown(r, AT, `${r.key(AT)} states no quant_method`);
     return null;
@@ -61,25 +62,53 @@ export function readQuantization(r: FieldReader, hidden: number): WeightQuantiza
       const group = readGroup(r, [per(['group_size'])], hidden);
       if (bits === null || group === undefined) return null;
       for (const key of ['dynamic', 'modules_in_block_to_quantize']) {
-        if (r.has(per([key]))) r.report('key-ignored', per([key]), `${r.key(per([key]))} is not modelled: every matrix of the layers is counted at ${bits} bits in groups of ${group ?? 'a row'}`);
+        if (r.has(per([key])))
+          r.report(
+            'key-ignored',
+            per([key]),
+            `${r.key(per([key]))} is not modelled: every matrix of the layers is counted at ${bits} bits in groups of ${group ?? 'a row'}`,
+          );
       }
       skipped(r, [per(['modules_to_not_convert'])]);
-      return { method, bits, groupSize: group, scaleBits: 16, zeroPoint: true, output: r.flag(null, per(['lm_head'])) === true };
+      return {
+        method,
+        bits,
+        groupSize: group,
+        scaleBits: 16,
+        zeroPoint: true,
+        output: r.flag(null, per(['lm_head'])) === true,
+      };
     }
     case 'awq': {
       const bits = readBits(r, [per(['bits']), per(['w_bit'])]);
       const group = readGroup(r, [per(['group_size']), per(['q_group_size'])], hidden);
       if (bits === null || group === undefined) return null;
       skipped(r, [per(['modules_to_not_convert'])]);
-      return { method, bits, groupSize: group, scaleBits: 16, zeroPoint: r.flag(null, per(['zero_point'])) !== false, output: false };
+      return {
+        method,
+        bits,
+        groupSize: group,
+        scaleBits: 16,
+        zeroPoint: r.flag(null, per(['zero_point'])) !== false,
+        output: false,
+      };
     }
     case 'fp8': {
       const sizePath = per(['weight_block_size']);
       let groupSize: number | null = null;
       if (r.has(sizePath)) {
         const size = r.get(sizePath);
-        if (!Array.isArray(size) || size.length === 0 || size.length > 2 || !size.every((n) => isCount(n as number))) {
-          r.report('value-invalid', sizePath, `${r.key(sizePath)} ${r.is(sizePath)}; expected one or two whole numbers, the block of weights sharing one scale, e.g. [128, 128]`);
+        if (
+          !Array.isArray(size) ||
+          size.length === 0 ||
+          size.length > 2 ||
+          !size.every((n) => isCount(n as number))
+        ) {
+          r.report(
+            'value-invalid',
+            sizePath,
+            `${r.key(sizePath)} ${r.is(sizePath)}; expected one or two whole numbers, the block of weights sharing one scale, e.g. [128, 128]`,
+          );
           return null;
         }
         groupSize = (size as number[]).reduce((a, b) => a * b, 1);
@@ -91,22 +120,48 @@ export function readQuantization(r: FieldReader, hidden: number): WeightQuantiza
       skipped(r, [per(['llm_int8_skip_modules']), per(['modules_to_not_convert'])]);
       if (r.flag(null, per(['load_in_4bit'])) === true) {
         const double = r.flag(null, per(['bnb_4bit_use_double_quant'])) === true;
-        return { method, bits: 4, groupSize: BNB4_BLOCK, scaleBits: double ? BNB4_DOUBLE_SCALE_BITS : BNB4_SCALE_BITS, zeroPoint: false, output: false };
+        return {
+          method,
+          bits: 4,
+          groupSize: BNB4_BLOCK,
+          scaleBits: double ? BNB4_DOUBLE_SCALE_BITS : BNB4_SCALE_BITS,
+          zeroPoint: false,
+          output: false,
+        };
       }
       if (r.flag(null, per(['load_in_8bit'])) === true) {
-        return { method, bits: 8, groupSize: isCount(hidden) ? hidden : null, scaleBits: 32, zeroPoint: false, output: false };
+        return {
+          method,
+          bits: 8,
+          groupSize: isCount(hidden) ? hidden : null,
+          scaleBits: 32,
+          zeroPoint: false,
+          output: false,
+        };
       }
-      r.report('key-ignored', AT, `${r.key(AT)} names bitsandbytes but neither load_in_4bit nor load_in_8bit is true, so the weights are counted unquantized`);
+      r.report(
+        'key-ignored',
+        AT,
+        `${r.key(AT)} names bitsandbytes but neither load_in_4bit nor load_in_8bit is true, so the weights are counted unquantized`,
+      );
       return null;
     }
     default:
-      unknown(r, methodPath, `${r.key(methodPath)} is ${r.quote(methodPath)}, not a method the reader counts (${COUNTED_METHODS.join(', ')})`);
+      unknown(
+        r,
+        methodPath,
+        `${r.key(methodPath)} is ${r.quote(methodPath)}, not a method the reader counts (${COUNTED_METHODS.join(', ')})`,
+      );
       return null;
   }
 }
 
 function unknown(r: FieldReader, path: PathSegment[], what: string): void {
-  r.report('quantization-unknown', path, `${what}; the weights are counted unquantized at the weight dtype, an upper bound of their bytes. Describe the model in the context-reach format with weights int4, int8 or fp8 and a weight-group-size to count it`);
+  r.report(
+    'quantization-unknown',
+    path,
+    `${what}; the weights are counted unquantized at the weight dtype, an upper bound of their bytes. Describe the model in the context-reach format with weights int4, int8 or fp8 and a weight-group-size to count it`,
+  );
 }
 
 /** `bits`: a whole number from 1 to 16; null (reported) otherwise or when missing. */
@@ -119,7 +174,11 @@ function readBits(r: FieldReader, candidates: PathSegment[][]): number | null {
   const bits = r.count('quantization.bits', path, 'bits per weight');
   if (bits === undefined || Number.isNaN(bits)) return null;
   if (!(Number.isInteger(bits) && bits >= 1 && bits <= 16)) {
-    r.report('value-invalid', path, `${r.key(path)} is ${r.quote(path)}; expected the bits per quantized weight, a whole number from 1 to 16 (commonly 4 or 8)`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} is ${r.quote(path)}; expected the bits per quantized weight, a whole number from 1 to 16 (commonly 4 or 8)`,
+    );
     return null;
   }
   return bits;
@@ -129,14 +188,22 @@ function readBits(r: FieldReader, candidates: PathSegment[][]): number | null {
  * Weights per scale: the stated group size, 128 when none is stated, `hidden` for -1 (one scale
  * per row); undefined (reported) for anything else.
  */
-function readGroup(r: FieldReader, candidates: PathSegment[][], hidden: number): number | null | undefined {
+function readGroup(
+  r: FieldReader,
+  candidates: PathSegment[][],
+  hidden: number,
+): number | null | undefined {
   const path = r.first(candidates);
   if (path === null) return DEFAULT_METHOD_GROUP;
   const size = r.count('quantization.groupSize', path, 'weights per scale');
   if (size === undefined || Number.isNaN(size)) return undefined;
   if (size === -1) return isCount(hidden) ? hidden : null;
   if (!isCount(size)) {
-    r.report('value-invalid', path, `${r.key(path)} is ${r.quote(path)}; expected the weights sharing one scale, a whole number of at least 1 (commonly 128), or -1 for one scale per row`);
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} is ${r.quote(path)}; expected the weights sharing one scale, a whole number of at least 1 (commonly 128), or -1 for one scale per row`,
+    );
     return undefined;
   }
   return size;
@@ -148,12 +215,20 @@ function skipped(r: FieldReader, candidates: PathSegment[][]): void {
     const list = r.get(path);
     if (list === undefined) continue;
     if (!Array.isArray(list)) {
-      r.report('value-invalid', path, `${r.key(path)} ${r.is(path)}; expected a list of module names`);
+      r.report(
+        'value-invalid',
+        path,
+        `${r.key(path)} ${r.is(path)}; expected a list of module names`,
+      );
       continue;
     }
     const others = list.filter((name) => name !== 'lm_head');
     if (others.length > 0) {
-      r.report('key-ignored', path, `${r.key(path)} keeps ${others.length} module name${others.length === 1 ? '' : 's'} besides lm_head unquantized, which is not modelled: the matrices of every layer are counted quantized (an under-count of what those modules hold)`);
+      r.report(
+        'key-ignored',
+        path,
+        `${r.key(path)} keeps ${others.length} module name${others.length === 1 ? '' : 's'} besides lm_head unquantized, which is not modelled: the matrices of every layer are counted quantized (an under-count of what those modules hold)`,
+      );
     }
   }
 }

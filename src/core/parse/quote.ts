@@ -21,7 +21,8 @@ export function truncate(s: string, max = MAX_QUOTED): string {
  */
 export function formatNumber(n: number): string {
   if (Object.is(n, -0)) return '-0';
-  if (Number.isInteger(n) && !Number.isSafeInteger(n) && Math.abs(n) < 1e21) return BigInt(n).toString();
+  if (Number.isInteger(n) && !Number.isSafeInteger(n) && Math.abs(n) < 1e21)
+    return BigInt(n).toString();
   return String(n);
 }
 

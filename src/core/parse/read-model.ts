@@ -13,7 +13,12 @@ import { kindOf, quoteValue, truncate } from './quote.js';
 import type { PathSegment } from './quote.js';
 import { completeSpec } from './spec-defaults.js';
 import { FAMILY_DEFAULTS } from './checkpoint-families.js';
-import { TOWER_KEY, isLanguageModelBlock, nestedModelKey, readVisionTower } from './nested-model.js';
+import {
+  TOWER_KEY,
+  isLanguageModelBlock,
+  nestedModelKey,
+  readVisionTower,
+} from './nested-model.js';
 import { reportUnreadKeys } from './unread-keys.js';
 import { RULES } from '../rules/catalog.js';
 import { parseSource } from './source.js';
@@ -54,9 +59,18 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
   let { root, prefix } = selectBlock(doc, path, options.at);
 
   const format = root.format;
-  if (typeof format === 'string' && format.startsWith(MODEL_FORMAT_FAMILY) && format !== MODEL_FORMAT) {
+  if (
+    typeof format === 'string' &&
+    format.startsWith(MODEL_FORMAT_FAMILY) &&
+    format !== MODEL_FORMAT
+  ) {
     const formatPath = [...prefix, 'format'];
-    throw new ReadError(path, doc.lineOf(formatPath), `format ${quoteValue(format)} is not supported; this version reads ${MODEL_FORMAT}`, 'format');
+    throw new ReadError(
+      path,
+      doc.lineOf(formatPath),
+      `format ${quoteValue(format)} is not supported; this version reads ${MODEL_FORMAT}`,
+      'format',
+    );
   }
   let dialect = detectDialect(root);
   // A multimodal file: the language model is nested (text_config, language_config, …), never the vision tower.
@@ -72,7 +86,10 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
   } else if (dialect === 'checkpoint' && prefix.length > 0) {
     // Read with --at: the block's parent holds the vision tower.
     const up = prefix.slice(0, -1);
-    const holder = up.reduce<SourceValue | undefined>((v, k) => (isMapping(v ?? null) ? (v as SourceMapping)[k as string] : undefined), doc.value);
+    const holder = up.reduce<SourceValue | undefined>(
+      (v, k) => (isMapping(v ?? null) ? (v as SourceMapping)[k as string] : undefined),
+      doc.value,
+    );
     if (isMapping(holder) && !isMapping(root.vision_config)) parent = { value: holder, prefix: up };
   }
   if (dialect === null) throw notAModel(doc, root, prefix, path);
@@ -107,7 +124,11 @@ function defaultsTaken(r: FieldReader): void {
   });
 }
 
-function selectBlock(doc: SourceDocument, file: string, at: string | undefined): { root: SourceMapping; prefix: PathSegment[] } {
+function selectBlock(
+  doc: SourceDocument,
+  file: string,
+  at: string | undefined,
+): { root: SourceMapping; prefix: PathSegment[] } {
   if (at === undefined || at === '') return { root: doc.value, prefix: [] };
   let selected: { value: unknown; path: PathSegment[] };
   try {
@@ -118,19 +139,43 @@ function selectBlock(doc: SourceDocument, file: string, at: string | undefined):
     throw new ReadError(file, line, `--at ${error.message}`);
   }
   if (!isMapping(selected.value as SourceValue)) {
-    throw new ReadError(file, doc.lineOf(selected.path), `--at ${JSON.stringify(at)} selects ${kindOf(selected.value)}; expected a mapping holding a model`);
+    throw new ReadError(
+      file,
+      doc.lineOf(selected.path),
+      `--at ${JSON.stringify(at)} selects ${kindOf(selected.value)}; expected a mapping holding a model`,
+    );
   }
   return { root: selected.value as SourceMapping, prefix: selected.path };
 }
 
-function notAModel(doc: SourceDocument, root: SourceMapping, prefix: PathSegment[], file: string): NotAModelError {
-  const where = prefix.length === 0 ? 'at the top level' : `under ${JSON.stringify(formatPointer(prefix.map(String)))}`;
-  const line = prefix.length === 0 ? (Object.keys(root).length > 0 ? doc.lineOf([Object.keys(root)[0]]) : null) : doc.lineOf(prefix);
+function notAModel(
+  doc: SourceDocument,
+  root: SourceMapping,
+  prefix: PathSegment[],
+  file: string,
+): NotAModelError {
+  const where =
+    prefix.length === 0
+      ? 'at the top level'
+      : `under ${JSON.stringify(formatPointer(prefix.map(String)))}`;
+  const line =
+    prefix.length === 0
+      ? Object.keys(root).length > 0
+        ? doc.lineOf([Object.keys(root)[0]])
+        : null
+      : doc.lineOf(prefix);
   // A model nested one level down (multimodal configs keep it under text_config) is worth naming.
-  const nested = Object.keys(root).find((k) => !TOWER_KEY.test(k) && isMapping(root[k]) && (detectDialect(root[k] as SourceMapping) !== null || isLanguageModelBlock(root[k] as SourceMapping)));
-  const hint = nested === undefined
-    ? ''
-    : `; ${truncate(nested)} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;
+  const nested = Object.keys(root).find(
+    (k) =>
+      !TOWER_KEY.test(k) &&
+      isMapping(root[k]) &&
+      (detectDialect(root[k] as SourceMapping) !== null ||
+        isLanguageModelBlock(root[k] as SourceMapping)),
+  );
+  const hint =
+    nested === undefined
+      ? ''
+      : `; ${truncate(nested)} (line ${doc.lineOf([...prefix, nested]) ?? '?'}) holds one: read it with --at ${formatPointer([...prefix.map(String), nested])}`;
   return new NotAModelError(
     file,
     line,

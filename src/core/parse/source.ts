@@ -62,7 +62,11 @@ const BOM = '\uFEFF';
  */
 export function decodeText(bytes: Uint8Array, path: string): string {
   if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) {
-    throw new ReadError(path, 1, 'starts with a UTF-16 byte-order mark; expected UTF-8 text (save the file as UTF-8)');
+    throw new ReadError(
+      path,
+      1,
+      'starts with a UTF-16 byte-order mark; expected UTF-8 text (save the file as UTF-8)',
+    );
   }
   let text: string;
   try {
@@ -70,8 +74,14 @@ export function decodeText(bytes: Uint8Array, path: string): string {
   } catch {
     const at = firstInvalidUtf8(bytes);
     const line = lineAtByte(bytes, at);
-    const hex = Array.from(bytes.subarray(at, at + 4), (b) => b.toString(16).padStart(2, '0')).join(' ');
-    throw new ReadError(path, line, `is not UTF-8 text: bytes ${hex} at byte offset ${at} do not form a UTF-8 character (save the file as UTF-8)`);
+    const hex = Array.from(bytes.subarray(at, at + 4), (b) => b.toString(16).padStart(2, '0')).join(
+      ' ',
+    );
+    throw new ReadError(
+      path,
+      line,
+      `is not UTF-8 text: bytes ${hex} at byte offset ${at} do not form a UTF-8 character (save the file as UTF-8)`,
+    );
   }
   // A decoder with ignoreBOM false drops the mark itself; this covers a doubled one.
   if (text.startsWith(BOM)) text = text.slice(1);
@@ -96,7 +106,11 @@ export function parseSource(text: string, file: string): SourceDocument {
   for (const lexeme of new Lexer().lex(text)) {
     void lexeme;
     if (++lexemes > MAX_TOKENS) {
-      throw new ReadError(file, null, `holds more than ${MAX_TOKENS} syntax tokens (keys, values and punctuation); a model file holds a few thousand, label maps a few hundred thousand at most`);
+      throw new ReadError(
+        file,
+        null,
+        `holds more than ${MAX_TOKENS} syntax tokens (keys, values and punctuation); a model file holds a few thousand, label maps a few hundred thousand at most`,
+      );
     }
   }
 
@@ -108,17 +122,29 @@ export function parseSource(text: string, file: string): SourceDocument {
   let documents = 0;
   for (const token of new Parser(lineCounter.addNewLine).parse(text)) {
     if (token.type === 'document' && ++documents > 1) {
-      throw new ReadError(file, lineAt(token.offset), 'holds more than one YAML document; a model file holds one');
+      throw new ReadError(
+        file,
+        lineAt(token.offset),
+        'holds more than one YAML document; a model file holds one',
+      );
     }
     tokens.push(token);
   }
   // The composer recurses once per level; refusing deep input before it runs keeps the stack safe.
   const shape = measureTree(tokens);
   if (shape.tooDeep !== null) {
-    throw new ReadError(file, lineAt(shape.tooDeep), `nesting is deeper than ${MAX_NESTING} levels of mappings and lists; a model file needs a handful`);
+    throw new ReadError(
+      file,
+      lineAt(shape.tooDeep),
+      `nesting is deeper than ${MAX_NESTING} levels of mappings and lists; a model file needs a handful`,
+    );
   }
   if (shape.tooMany !== null) {
-    throw new ReadError(file, lineAt(shape.tooMany), `holds more than ${MAX_ENTRIES} keys and list items; a model file holds a few hundred (label maps a few ten thousand)`);
+    throw new ReadError(
+      file,
+      lineAt(shape.tooMany),
+      `holds more than ${MAX_ENTRIES} keys and list items; a model file holds a few hundred (label maps a few ten thousand)`,
+    );
   }
 
   const composer = new Composer({
@@ -136,7 +162,11 @@ export function parseSource(text: string, file: string): SourceDocument {
     if (problem) throw syntaxError(problem, text, file, lineAt);
   }
   if (docs.length > 1) {
-    throw new ReadError(file, lineAt(docs[1].range[0]), 'holds more than one YAML document; a model file holds one');
+    throw new ReadError(
+      file,
+      lineAt(docs[1].range[0]),
+      'holds more than one YAML document; a model file holds one',
+    );
   }
   const doc = docs[0];
   const root = doc?.contents ?? null;
@@ -145,7 +175,11 @@ export function parseSource(text: string, file: string): SourceDocument {
   }
   if (!isMap(root)) {
     const what = isSeq(root) ? 'a list' : isScalar(root) ? quoteValue(root.value) : 'not a mapping';
-    throw new ReadError(file, lineAt(root.range?.[0] ?? 0), `top level is ${what}; expected a mapping of keys`);
+    throw new ReadError(
+      file,
+      lineAt(root.range?.[0] ?? 0),
+      `top level is ${what}; expected a mapping of keys`,
+    );
   }
 
   const builder = new Builder(doc, text, file, lineAt, json);
@@ -165,7 +199,11 @@ interface EntryNotes {
 
 function checkText(text: string, file: string): void {
   if (text.length > MAX_TEXT_LENGTH) {
-    throw new ReadError(file, null, `is ${text.length} characters long; model files are limited to ${MAX_TEXT_LENGTH}`);
+    throw new ReadError(
+      file,
+      null,
+      `is ${text.length} characters long; model files are limited to ${MAX_TEXT_LENGTH}`,
+    );
   }
   const lineOfIndex = (i: number): number => {
     let line = 1;
@@ -174,7 +212,11 @@ function checkText(text: string, file: string): void {
   };
   const nul = text.indexOf('\0');
   if (nul !== -1) {
-    throw new ReadError(file, lineOfIndex(nul), 'contains a NUL character, so it is binary data or UTF-16 text; expected UTF-8 text');
+    throw new ReadError(
+      file,
+      lineOfIndex(nul),
+      'contains a NUL character, so it is binary data or UTF-16 text; expected UTF-8 text',
+    );
   }
   const replacement = text.indexOf('\uFFFD');
   if (replacement !== -1) {
@@ -186,7 +228,11 @@ function checkText(text: string, file: string): void {
   }
   const lone = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/.exec(text);
   if (lone) {
-    throw new ReadError(file, lineOfIndex(lone.index), 'contains a lone UTF-16 surrogate, which no UTF-8 file can hold; save the file as UTF-8');
+    throw new ReadError(
+      file,
+      lineOfIndex(lone.index),
+      'contains a lone UTF-16 surrogate, which no UTF-8 file can hold; save the file as UTF-8',
+    );
   }
 }
 
@@ -196,7 +242,9 @@ function checkText(text: string, file: string): void {
  */
 function checkJson(text: string, file: string): void {
   // Same-length stand-ins keep error positions true to the file.
-  const standIn = text.replace(/"(?:[^"\\]|\\.)*"|-?Infinity|NaN/g, (m) => (m.startsWith('"') ? m : `0${' '.repeat(m.length - 1)}`));
+  const standIn = text.replace(/"(?:[^"\\]|\\.)*"|-?Infinity|NaN/g, (m) =>
+    m.startsWith('"') ? m : `0${' '.repeat(m.length - 1)}`,
+  );
   try {
     JSON.parse(standIn);
   } catch (error) {
@@ -251,7 +299,8 @@ export function jsonSyntaxErrorOffset(text: string): number {
     return -(n + 1);
   };
   for (;;) {
-    while (i < n && (text[i] === ' ' || text[i] === '\t' || text[i] === '\n' || text[i] === '\r')) i += 1;
+    while (i < n && (text[i] === ' ' || text[i] === '\t' || text[i] === '\n' || text[i] === '\r'))
+      i += 1;
     if (i >= n) return expect === 'done' ? -1 : n;
     const c = text[i];
     if (expect === 'done') return i;
@@ -299,13 +348,22 @@ export function jsonSyntaxErrorOffset(text: string): number {
  * Offsets of the first collection nested deeper than `MAX_NESTING` and of the entry past
  * `MAX_ENTRIES`, or null; walks the syntax tree without recursion, before anything is composed.
  */
-function measureTree(tokens: readonly CST.Token[]): { tooDeep: number | null; tooMany: number | null } {
+function measureTree(tokens: readonly CST.Token[]): {
+  tooDeep: number | null;
+  tooMany: number | null;
+} {
   const stack: Array<[CST.Token, number]> = [];
-  for (const token of tokens) if (token.type === 'document' && token.value) stack.push([token.value, 0]);
+  for (const token of tokens)
+    if (token.type === 'document' && token.value) stack.push([token.value, 0]);
   let entries = 0;
   while (stack.length > 0) {
     const [token, depth] = stack.pop()!;
-    if (token.type !== 'block-map' && token.type !== 'block-seq' && token.type !== 'flow-collection') continue;
+    if (
+      token.type !== 'block-map' &&
+      token.type !== 'block-seq' &&
+      token.type !== 'flow-collection'
+    )
+      continue;
     const level = depth + 1;
     if (level > MAX_NESTING) return { tooDeep: token.offset, tooMany: null };
     entries += token.items.length;
@@ -318,17 +376,27 @@ function measureTree(tokens: readonly CST.Token[]): { tooDeep: number | null; to
   return { tooDeep: null, tooMany: null };
 }
 
-function syntaxError(problem: YAMLError, text: string, file: string, lineAt: (offset: number) => number): ReadError {
+function syntaxError(
+  problem: YAMLError,
+  text: string,
+  file: string,
+  lineAt: (offset: number) => number,
+): ReadError {
   const start = problem.pos[0];
   const line = lineAt(start);
   if (problem.code === 'DUPLICATE_KEY') {
-    const written = /^("(?:[^"\\\n]|\\.)*"|'(?:[^'\n]|'')*'|[^:,{}[\]\n]+)/.exec(text.slice(start, start + 1024));
+    const written = /^("(?:[^"\\\n]|\\.)*"|'(?:[^'\n]|'')*'|[^:,{}[\]\n]+)/.exec(
+      text.slice(start, start + 1024),
+    );
     const key = written ? truncate(written[1].trim()) : 'here';
     return new ReadError(file, line, `duplicate key ${key}; each key may appear once in a mapping`);
   }
   const reason = problem.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
   // JSON readers meet YAML's wording for JSON's commonest slip; say what it usually means.
-  const jsonHint = text.trimStart().startsWith('{') && problem.code !== 'BAD_DQ_ESCAPE' ? ' (in JSON: a missing comma or colon at or just before this line?)' : '';
+  const jsonHint =
+    text.trimStart().startsWith('{') && problem.code !== 'BAD_DQ_ESCAPE'
+      ? ' (in JSON: a missing comma or colon at or just before this line?)'
+      : '';
   return new ReadError(file, line, `is not valid JSON or YAML: ${reason}${jsonHint}`);
 }
 
@@ -350,12 +418,20 @@ class Builder {
 
   build(node: unknown, path: PathSegment[], level: number): SourceValue {
     if (this.insideAlias > 0 && ++this.aliasValues > MAX_ALIAS_VALUES) {
-      throw new ReadError(this.file, this.nodeLine(node), `aliases expand to more than ${MAX_ALIAS_VALUES} values; a model file needs far fewer`);
+      throw new ReadError(
+        this.file,
+        this.nodeLine(node),
+        `aliases expand to more than ${MAX_ALIAS_VALUES} values; a model file needs far fewer`,
+      );
     }
     if (isAlias(node)) return this.expand(node, path, level);
     if (isScalar(node)) return this.scalar(node, path);
     if (level > MAX_NESTING) {
-      throw new ReadError(this.file, this.nodeLine(node), `nesting is deeper than ${MAX_NESTING} levels of mappings and lists once aliases are expanded`);
+      throw new ReadError(
+        this.file,
+        this.nodeLine(node),
+        `nesting is deeper than ${MAX_NESTING} levels of mappings and lists once aliases are expanded`,
+      );
     }
     if (isMap(node)) {
       const out: SourceMapping = Object.create(null);
@@ -364,7 +440,10 @@ class Builder {
       for (const pair of node.items) {
         const key = this.key(pair.key, path, notes);
         notes.set(key, { line: this.nodeLine(pair.key), literal: this.literal(pair.value) });
-        out[key] = pair.value === null || pair.value === undefined ? null : this.build(pair.value, [...path, key], level + 1);
+        out[key] =
+          pair.value === null || pair.value === undefined
+            ? null
+            : this.build(pair.value, [...path, key], level + 1);
       }
       return out;
     }
@@ -374,7 +453,9 @@ class Builder {
       this.notes.set(out, notes);
       node.items.forEach((item, i) => {
         notes.set(i, { line: this.nodeLine(item), literal: this.literal(item) });
-        out.push(item === null || item === undefined ? null : this.build(item, [...path, i], level + 1));
+        out.push(
+          item === null || item === undefined ? null : this.build(item, [...path, i], level + 1),
+        );
       });
       return out;
     }
@@ -397,7 +478,9 @@ class Builder {
   }
 
   private has(container: object, segment: PathSegment): boolean {
-    return Array.isArray(container) ? Number.isInteger(Number(segment)) && Number(segment) < container.length : Object.prototype.hasOwnProperty.call(container, String(segment));
+    return Array.isArray(container)
+      ? Number.isInteger(Number(segment)) && Number(segment) < container.length
+      : Object.prototype.hasOwnProperty.call(container, String(segment));
   }
 
   /** A scalar's source text (quotes included); null for collections, aliases and empty values. */
@@ -409,11 +492,22 @@ class Builder {
   private key(keyNode: unknown, path: PathSegment[], seen: Map<PathSegment, EntryNotes>): string {
     const line = this.nodeLine(keyNode);
     if (!isScalar(keyNode)) {
-      throw new ReadError(this.file, line, `has a ${isAlias(keyNode) ? 'alias' : 'list or mapping'} as a key under ${this.where(path)}; keys must be plain text`);
+      throw new ReadError(
+        this.file,
+        line,
+        `has a ${isAlias(keyNode) ? 'alias' : 'list or mapping'} as a key under ${this.where(path)}; keys must be plain text`,
+      );
     }
     const raw = keyNode.value;
-    if (raw === null || (typeof raw !== 'string' && typeof raw !== 'number' && typeof raw !== 'boolean')) {
-      throw new ReadError(this.file, line, `has an empty or non-text key under ${this.where(path)}; keys must be plain text`);
+    if (
+      raw === null ||
+      (typeof raw !== 'string' && typeof raw !== 'number' && typeof raw !== 'boolean')
+    ) {
+      throw new ReadError(
+        this.file,
+        line,
+        `has an empty or non-text key under ${this.where(path)}; keys must be plain text`,
+      );
     }
     const key = String(raw);
     if (FORBIDDEN_KEYS.includes(key)) {
@@ -426,27 +520,66 @@ class Builder {
     }
     // Keys that differ only in type (1 and "1") are distinct to YAML but collide as object keys.
     if (seen.has(key)) {
-      throw new ReadError(this.file, line, `duplicate key ${quoteText(key)} under ${this.where(path)}; each key may appear once in a mapping`, dottedKey([...path, key]));
+      throw new ReadError(
+        this.file,
+        line,
+        `duplicate key ${quoteText(key)} under ${this.where(path)}; each key may appear once in a mapping`,
+        dottedKey([...path, key]),
+      );
     }
     return key;
   }
 
-  private scalar(node: { value: unknown; type?: string; range?: [number, number, number] | null }, path: PathSegment[]): SourceValue {
+  private scalar(
+    node: { value: unknown; type?: string; range?: [number, number, number] | null },
+    path: PathSegment[],
+  ): SourceValue {
     const v = node.value;
-    if (this.json && node.type === 'PLAIN' && (v === 'NaN' || v === 'Infinity' || v === '-Infinity')) return Number(v);
-    if (v === null || typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean') return v;
-    throw new ReadError(this.file, this.nodeLine(node), `${this.where(path)} holds a value of an unsupported kind; expected text, a number, a boolean or empty`);
+    if (
+      this.json &&
+      node.type === 'PLAIN' &&
+      (v === 'NaN' || v === 'Infinity' || v === '-Infinity')
+    )
+      return Number(v);
+    if (v === null || typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean')
+      return v;
+    throw new ReadError(
+      this.file,
+      this.nodeLine(node),
+      `${this.where(path)} holds a value of an unsupported kind; expected text, a number, a boolean or empty`,
+    );
   }
 
-  private expand(alias: { source: string; resolve(doc: Document): unknown; range?: [number, number, number] | null }, path: PathSegment[], level: number): SourceValue {
+  private expand(
+    alias: {
+      source: string;
+      resolve(doc: Document): unknown;
+      range?: [number, number, number] | null;
+    },
+    path: PathSegment[],
+    level: number,
+  ): SourceValue {
     const line = this.nodeLine(alias);
     if (++this.aliases > MAX_ALIASES) {
-      throw new ReadError(this.file, line, `expands more than ${MAX_ALIASES} aliases; a model file needs few, and many suggest an expansion attack`);
+      throw new ReadError(
+        this.file,
+        line,
+        `expands more than ${MAX_ALIASES} aliases; a model file needs few, and many suggest an expansion attack`,
+      );
     }
     const target = alias.resolve(this.doc) as YamlNode | undefined;
-    if (!target) throw new ReadError(this.file, line, `alias *${truncate(alias.source)} has no anchor &${truncate(alias.source)} before it`);
+    if (!target)
+      throw new ReadError(
+        this.file,
+        line,
+        `alias *${truncate(alias.source)} has no anchor &${truncate(alias.source)} before it`,
+      );
     if (this.expanding.has(target)) {
-      throw new ReadError(this.file, line, `alias *${truncate(alias.source)} refers to a value that contains it`);
+      throw new ReadError(
+        this.file,
+        line,
+        `alias *${truncate(alias.source)} refers to a value that contains it`,
+      );
     }
     this.expanding.add(target);
     this.insideAlias++;
@@ -474,7 +607,16 @@ function firstInvalidUtf8(bytes: Uint8Array): number {
   let i = 0;
   while (i < bytes.length) {
     const b = bytes[i];
-    const size = b < 0x80 ? 1 : b >= 0xc2 && b < 0xe0 ? 2 : b >= 0xe0 && b < 0xf0 ? 3 : b >= 0xf0 && b < 0xf5 ? 4 : 0;
+    const size =
+      b < 0x80
+        ? 1
+        : b >= 0xc2 && b < 0xe0
+          ? 2
+          : b >= 0xe0 && b < 0xf0
+            ? 3
+            : b >= 0xf0 && b < 0xf5
+              ? 4
+              : 0;
     if (size === 0) return i;
     try {
       decoder.decode(bytes.subarray(i, i + size));

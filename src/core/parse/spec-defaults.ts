@@ -4,8 +4,19 @@
  * values derived from them stay NaN, so one bad key gives one finding and metrics return null.
  */
 import type {
-  EncoderStack, Experts, FloatFormat, LatentAttention, LayerAttention, ModelSpec, PositionCode, Scaling, ScalingKind, Serving, StorageDType,
-  VisionTower, WeightQuantization,
+  EncoderStack,
+  Experts,
+  FloatFormat,
+  LatentAttention,
+  LayerAttention,
+  ModelSpec,
+  PositionCode,
+  Scaling,
+  ScalingKind,
+  Serving,
+  StorageDType,
+  VisionTower,
+  WeightQuantization,
 } from '../model.js';
 
 /** A scaling block as stated: missing values take the defaults below. */
@@ -41,14 +52,24 @@ export interface SpecDraft {
   tied?: boolean;
   bias?: boolean;
   experts?: Experts | null;
-  encoder?: { layers: number; heads: number; kvHeads?: number; headDim?: number; ffn?: number } | null;
+  encoder?: {
+    layers: number;
+    heads: number;
+    kvHeads?: number;
+    headDim?: number;
+    ffn?: number;
+  } | null;
   position: PositionDraft;
   declaredSpan: number;
   trainedSpan?: number | null;
   vision?: VisionTower | null;
   slidingWindow?: number | null;
   windowLayers?: number | null;
-  dtypes?: { weights?: StorageDType | null; cache?: StorageDType | null; positions?: FloatFormat | null };
+  dtypes?: {
+    weights?: StorageDType | null;
+    cache?: StorageDType | null;
+    positions?: FloatFormat | null;
+  };
   // Experts, latent attention, layers that differ, encoder-only (see ModelSpec).
   latent?: LatentAttention | null;
   layerTypes?: LayerAttention[] | null;
@@ -144,10 +165,12 @@ function completeShapes(draft: SpecDraft): Partial<ModelSpec> {
   const out: Partial<ModelSpec> = {};
   if (draft.latent) out.latent = draft.latent;
   if (draft.layerTypes) out.layerTypes = draft.layerTypes;
-  if (draft.positionFreeLayers && draft.positionFreeLayers.length > 0) out.positionFreeLayers = draft.positionFreeLayers;
+  if (draft.positionFreeLayers && draft.positionFreeLayers.length > 0)
+    out.positionFreeLayers = draft.positionFreeLayers;
   if (draft.chunkSize !== undefined && draft.chunkSize !== null) out.chunkSize = draft.chunkSize;
   if (draft.localBase !== undefined && draft.localBase !== null) out.localBase = draft.localBase;
-  if (draft.layerNorms !== undefined && draft.layerNorms !== null) out.layerNorms = draft.layerNorms;
+  if (draft.layerNorms !== undefined && draft.layerNorms !== null)
+    out.layerNorms = draft.layerNorms;
   if (draft.qkNorms) out.qkNorms = true;
   if (draft.encoderOnly) out.encoderOnly = true;
   return out;
@@ -165,7 +188,11 @@ function completeEncoder(e: NonNullable<SpecDraft['encoder']>, hidden: number): 
 
 function completePosition(p: PositionDraft): PositionCode {
   if (p.kind === 'relative') {
-    return { kind: 'relative', buckets: p.buckets ?? DEFAULT_RELATIVE_BUCKETS, maxDistance: p.maxDistance ?? DEFAULT_RELATIVE_MAX_DISTANCE };
+    return {
+      kind: 'relative',
+      buckets: p.buckets ?? DEFAULT_RELATIVE_BUCKETS,
+      maxDistance: p.maxDistance ?? DEFAULT_RELATIVE_MAX_DISTANCE,
+    };
   }
   if (p.kind !== 'rotary') return { kind: p.kind };
   return {
@@ -186,7 +213,11 @@ function completeScaling(s: ScalingDraft): Scaling {
     low: s.low ?? DEFAULT_BANDED_LOW,
     high: s.high ?? DEFAULT_BANDED_HIGH,
     ...(s.kind === 'pairwise'
-      ? { shortFactors: s.shortFactors ?? null, longFactors: s.longFactors ?? null, attentionFactor: s.attentionFactor ?? null }
+      ? {
+          shortFactors: s.shortFactors ?? null,
+          longFactors: s.longFactors ?? null,
+          attentionFactor: s.attentionFactor ?? null,
+        }
       : {}),
   };
 }

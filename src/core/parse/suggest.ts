@@ -40,7 +40,9 @@ function normalise(name: string): string {
 /** The known key closest to `name`, or null when none is close enough to be a likely typo. */
 export function suggestKey(name: string, known: readonly string[]): string | null {
   if (known.length === 0) return null;
-  const synonym = Object.prototype.hasOwnProperty.call(CHECKPOINT_SYNONYMS, name) ? CHECKPOINT_SYNONYMS[name] : undefined;
+  const synonym = Object.prototype.hasOwnProperty.call(CHECKPOINT_SYNONYMS, name)
+    ? CHECKPOINT_SYNONYMS[name]
+    : undefined;
   if (synonym !== undefined && known.includes(synonym)) return synonym;
   const probe = normalise(name.slice(0, 100));
   let best: string | null = null;

@@ -5,11 +5,19 @@
  */
 import type { LimitSetting, LimitTable, Policy } from './types.js';
 
-const BOUND_KEYS: [keyof LimitSetting, string][] = [['min', 'min'], ['max', 'max'], ['maxIncreasePct', 'max-increase-pct'], ['severity', 'severity']];
+const BOUND_KEYS: [keyof LimitSetting, string][] = [
+  ['min', 'min'],
+  ['max', 'max'],
+  ['maxIncreasePct', 'max-increase-pct'],
+  ['severity', 'severity'],
+];
 
 function show(value: unknown): string {
   if (value === undefined || value === null) return 'none';
-  if (typeof value === 'number') return Number.isInteger(value) && Math.abs(value) >= 10_000 ? value.toLocaleString('en-US') : String(value);
+  if (typeof value === 'number')
+    return Number.isInteger(value) && Math.abs(value) >= 10_000
+      ? value.toLocaleString('en-US')
+      : String(value);
   return typeof value === 'string' ? value : JSON.stringify(value);
 }
 
@@ -19,8 +27,20 @@ function limitLines(prefix: string, before: LimitTable, after: LimitTable): stri
   for (const name of names) {
     const a = before[name] ?? null;
     const b = after[name] ?? null;
-    if (a === null && b !== null) { out.push(`${prefix}limits.${name} added (${BOUND_KEYS.filter(([k]) => b[k] !== undefined && b[k] !== null).map(([k, w]) => `${w} ${show(b[k])}`).join(', ')})`); continue; }
-    if (a !== null && b === null) { out.push(`${prefix}limits.${name} removed`); continue; }
+    if (a === null && b !== null) {
+      out.push(
+        `${prefix}limits.${name} added (${BOUND_KEYS.filter(
+          ([k]) => b[k] !== undefined && b[k] !== null,
+        )
+          .map(([k, w]) => `${w} ${show(b[k])}`)
+          .join(', ')})`,
+      );
+      continue;
+    }
+    if (a !== null && b === null) {
+      out.push(`${prefix}limits.${name} removed`);
+      continue;
+    }
     for (const [k, w] of BOUND_KEYS) {
       const x = a?.[k] ?? null;
       const y = b?.[k] ?? null;
@@ -30,9 +50,14 @@ function limitLines(prefix: string, before: LimitTable, after: LimitTable): stri
   return out;
 }
 
-function recordLines(prefix: string, before: Readonly<Record<string, unknown>>, after: Readonly<Record<string, unknown>>): string[] {
+function recordLines(
+  prefix: string,
+  before: Readonly<Record<string, unknown>>,
+  after: Readonly<Record<string, unknown>>,
+): string[] {
   const names = [...new Set([...Object.keys(before), ...Object.keys(after)])].sort();
-  return names.filter((n) => JSON.stringify(before[n]) !== JSON.stringify(after[n]))
+  return names
+    .filter((n) => JSON.stringify(before[n]) !== JSON.stringify(after[n]))
     .map((n) => `${prefix}${n} ${show(before[n])} → ${show(after[n])}`);
 }
 
@@ -40,21 +65,40 @@ function recordLines(prefix: string, before: Readonly<Record<string, unknown>>, 
 export function policyChanges(base: Policy, head: Policy): string[] {
   const out = [
     ...limitLines('', base.limits, head.limits),
-    ...recordLines('serving.', base.serving as Record<string, unknown>, head.serving as Record<string, unknown>),
+    ...recordLines(
+      'serving.',
+      base.serving as Record<string, unknown>,
+      head.serving as Record<string, unknown>,
+    ),
     ...recordLines('rules.', base.rules, head.rules),
   ];
-  if (JSON.stringify(base.files) !== JSON.stringify(head.files)) out.push(`files ${base.files.join(', ')} → ${head.files.join(', ')}`);
-  if (JSON.stringify(base.exclude) !== JSON.stringify(head.exclude)) out.push(`exclude ${base.exclude.join(', ') || 'none'} → ${head.exclude.join(', ') || 'none'}`);
+  if (JSON.stringify(base.files) !== JSON.stringify(head.files))
+    out.push(`files ${base.files.join(', ')} → ${head.files.join(', ')}`);
+  if (JSON.stringify(base.exclude) !== JSON.stringify(head.exclude))
+    out.push(`exclude ${base.exclude.join(', ') || 'none'} → ${head.exclude.join(', ') || 'none'}`);
   if (base.standing !== head.standing) out.push(`standing ${base.standing} → ${head.standing}`);
-  if (base.waiverLabel !== head.waiverLabel) out.push(`waiver-label ${show(base.waiverLabel)} → ${show(head.waiverLabel)}`);
+  if (base.waiverLabel !== head.waiverLabel)
+    out.push(`waiver-label ${show(base.waiverLabel)} → ${show(head.waiverLabel)}`);
   const n = Math.max(base.overrides.length, head.overrides.length);
   for (let i = 0; i < n; i++) {
     const a = base.overrides[i];
     const b = head.overrides[i];
     const prefix = `overrides[${i}].`;
-    if (!a || !b) { out.push(`${prefix.slice(0, -1)} ${a ? 'removed' : 'added'}`); continue; }
-    if (JSON.stringify(a.files) !== JSON.stringify(b.files)) out.push(`${prefix}files ${a.files.join(', ')} → ${b.files.join(', ')}`);
-    out.push(...limitLines(prefix, a.limits, b.limits), ...recordLines(`${prefix}serving.`, a.serving as Record<string, unknown>, b.serving as Record<string, unknown>), ...recordLines(`${prefix}rules.`, a.rules, b.rules));
+    if (!a || !b) {
+      out.push(`${prefix.slice(0, -1)} ${a ? 'removed' : 'added'}`);
+      continue;
+    }
+    if (JSON.stringify(a.files) !== JSON.stringify(b.files))
+      out.push(`${prefix}files ${a.files.join(', ')} → ${b.files.join(', ')}`);
+    out.push(
+      ...limitLines(prefix, a.limits, b.limits),
+      ...recordLines(
+        `${prefix}serving.`,
+        a.serving as Record<string, unknown>,
+        b.serving as Record<string, unknown>,
+      ),
+      ...recordLines(`${prefix}rules.`, a.rules, b.rules),
+    );
   }
   return out;
 }

@@ -15,7 +15,8 @@ export function editDistance(a: string, b: string): number {
     for (let j = 1; j <= t.length; j += 1) {
       const cost = s[i - 1] === t[j - 1] ? 0 : 1;
       let best = Math.min(previous[j] + 1, row[j - 1] + 1, previous[j - 1] + cost);
-      if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1]) best = Math.min(best, before[j - 2] + 1);
+      if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1])
+        best = Math.min(best, before[j - 2] + 1);
       row[j] = best;
     }
     before = previous;
@@ -44,8 +45,13 @@ export function nearestName(name: string, candidates: readonly string[]): string
   }
   if (best !== null && bestDistance <= allowed) return best;
   const lower = probe.toLowerCase();
-  return candidates.find((candidate) => {
-    const other = candidate.toLowerCase();
-    return Math.min(other.length, lower.length) >= 3 && (lower.startsWith(other) || other.startsWith(lower));
-  }) ?? null;
+  return (
+    candidates.find((candidate) => {
+      const other = candidate.toLowerCase();
+      return (
+        Math.min(other.length, lower.length) >= 3 &&
+        (lower.startsWith(other) || other.startsWith(lower))
+      );
+    }) ?? null
+  );
 }

@@ -45,13 +45,20 @@ function matcherFor(globs: readonly string[]): Matcher {
  */
 function normalise(path: string): string {
   if (path.length > MAX_MATCH_PATH) {
-    throw new Error(`${path.slice(0, 80)}… is ${path.length} characters long, longer than ${MAX_MATCH_PATH} characters; the policy's globs are not matched against it, so the change cannot be judged`);
+    throw new Error(
+      `${path.slice(0, 80)}… is ${path.length} characters long, longer than ${MAX_MATCH_PATH} characters; the policy's globs are not matched against it, so the change cannot be judged`,
+    );
   }
   const long = path.split('/').find((segment) => segment.length > MAX_MATCH_SEGMENT);
   if (long !== undefined) {
-    throw new Error(`${path.slice(0, 80)}… has a name of ${long.length} characters, longer than ${MAX_MATCH_SEGMENT}; the policy's globs are not matched against it, so the change cannot be judged`);
+    throw new Error(
+      `${path.slice(0, 80)}… has a name of ${long.length} characters, longer than ${MAX_MATCH_SEGMENT}; the policy's globs are not matched against it, so the change cannot be judged`,
+    );
   }
-  return path.replace(/\\/g, '/').replace(/^(\.\/)+/, '').replace(/[\n\r\u2028\u2029]/g, '\u001f');
+  return path
+    .replace(/\\/g, '/')
+    .replace(/^(\.\/)+/, '')
+    .replace(/[\n\r\u2028\u2029]/g, '\u001f');
 }
 
 /** Whether the policy's `files` globs pick `path` and its `exclude` globs leave it in. */
@@ -78,9 +85,13 @@ export function resolvePolicy(policy: Policy, filePath: string): FilePolicy {
   const rules: Record<string, RuleLevel> = Object.create(null);
   const limits = new Map<string, LimitState>();
   const origins: Record<string, SourceLocation> = Object.create(null);
-  const where = (name: string): SourceLocation => policy.locations[name] ?? { key: name, line: null };
+  const where = (name: string): SourceLocation =>
+    policy.locations[name] ?? { key: name, line: null };
 
-  const layer = (block: Pick<PolicyOverride, 'serving' | 'limits' | 'rules'>, prefix: string): void => {
+  const layer = (
+    block: Pick<PolicyOverride, 'serving' | 'limits' | 'rules'>,
+    prefix: string,
+  ): void => {
     for (const [field, value] of Object.entries(block.serving)) {
       if (value === undefined) continue;
       serving[field] = value;
@@ -121,7 +132,8 @@ export function resolvePolicy(policy: Policy, filePath: string): FilePolicy {
     if (typeof state.max === 'number') limit.max = state.max;
     if (typeof state.min === 'number') limit.min = state.min;
     if (typeof state.maxIncreasePct === 'number') limit.maxIncreasePct = state.maxIncreasePct;
-    if (limit.max !== undefined || limit.min !== undefined || limit.maxIncreasePct !== undefined) resolved[metric] = limit;
+    if (limit.max !== undefined || limit.min !== undefined || limit.maxIncreasePct !== undefined)
+      resolved[metric] = limit;
   }
   return {
     limits: resolved,
@@ -134,6 +146,12 @@ export function resolvePolicy(policy: Policy, filePath: string): FilePolicy {
 }
 
 /** The level a rule runs at for one config: the policy's choice, else the rule's own severity. */
-export function ruleLevel(filePolicy: Pick<FilePolicy, 'rules'>, ruleId: string, ownSeverity: Severity): RuleLevel {
-  return Object.prototype.hasOwnProperty.call(filePolicy.rules, ruleId) ? filePolicy.rules[ruleId] : ownSeverity;
+export function ruleLevel(
+  filePolicy: Pick<FilePolicy, 'rules'>,
+  ruleId: string,
+  ownSeverity: Severity,
+): RuleLevel {
+  return Object.prototype.hasOwnProperty.call(filePolicy.rules, ruleId)
+    ? filePolicy.rules[ruleId]
+    : ownSeverity;
 }

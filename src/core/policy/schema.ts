@@ -15,7 +15,13 @@ let compiled: ValidateFunction | null = null;
 export function validatePolicyValue(value: unknown): ErrorObject[] {
   if (compiled === null) {
     // allowUnionTypes: limits admit `null` to remove a bound in an override.
-    const ajv = new Ajv({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true, ...SCHEMA_COMPILE_OPTIONS });
+    const ajv = new Ajv({
+      allErrors: true,
+      verbose: true,
+      strict: true,
+      allowUnionTypes: true,
+      ...SCHEMA_COMPILE_OPTIONS,
+    });
     compiled = ajv.compile(policySchema);
   }
   return compiled(value) ? [] : [...(compiled.errors ?? [])];

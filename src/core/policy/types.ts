@@ -4,7 +4,13 @@
  * the overrides.
  */
 import type { Judging, Limit } from '../compare/judging.js';
-import type { FloatFormat, ServingPatch, Severity, SourceLocation, StorageDType } from '../model.js';
+import type {
+  FloatFormat,
+  ServingPatch,
+  Severity,
+  SourceLocation,
+  StorageDType,
+} from '../model.js';
 
 export type RuleLevel = Severity | 'off';
 export type Standing = 'report' | 'block';

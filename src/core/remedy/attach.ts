@@ -24,7 +24,10 @@ const UNREADABLE: RemedyFields = {
  * than two remedies (one is already shown), when two remedies set one field differently, or when
  * the file's proof budget is spent.
  */
-export function combineRemedies(ctx: RemedyContext, findings: readonly Partial<RemedyFields>[]): CombinedRemedy | null {
+export function combineRemedies(
+  ctx: RemedyContext,
+  findings: readonly Partial<RemedyFields>[],
+): CombinedRemedy | null {
   const remedies = findings.map((f) => f.remedy).filter((r) => r !== null && r !== undefined);
   if (remedies.length < 2) return null;
   const change: Change = {};
@@ -41,18 +44,28 @@ export function combineRemedies(ctx: RemedyContext, findings: readonly Partial<R
   const proof = prove(ctx, null, change);
   const metrics: Record<string, number | null> = {};
   for (const remedy of remedies) {
-    for (const name of Object.keys(remedy.metrics)) if (isMetricPath(name)) metrics[name] = metricValue(proof.metrics, name);
+    for (const name of Object.keys(remedy.metrics))
+      if (isMetricPath(name)) metrics[name] = metricValue(proof.metrics, name);
   }
   return { change, metrics, passes: proof.passes, stillBlocking: proof.blockers };
 }
 
-function withRemedies(file: FileDecision, config: ChangedConfig | undefined, memo: ScanMemo | undefined): FileDecision {
+function withRemedies(
+  file: FileDecision,
+  config: ChangedConfig | undefined,
+  memo: ScanMemo | undefined,
+): FileDecision {
   if (!file.findings.some((f) => f.severity === 'block')) return file;
   if (!file.head || !config) {
-    return { ...file, findings: file.findings.map((f) => (f.severity === 'block' ? { ...f, ...UNREADABLE } : f)) };
+    return {
+      ...file,
+      findings: file.findings.map((f) => (f.severity === 'block' ? { ...f, ...UNREADABLE } : f)),
+    };
   }
   const ctx = remedyContext(file.head, file.base, config.judging, config.change, memo);
-  const findings: JudgedFinding[] = file.findings.map((f) => (f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f));
+  const findings: JudgedFinding[] = file.findings.map((f) =>
+    f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f,
+  );
   return { ...file, findings, remedyTogether: combineRemedies(ctx, findings) };
 }
 
@@ -60,9 +73,16 @@ function withRemedies(file: FileDecision, config: ChangedConfig | undefined, mem
  * The gate's report with a remedy (or the reason there is none) on every blocking finding; with
  * a `memo`, proofs reuse the positional computations of the run.
  */
-export function attachRemedies(report: GateReport, configs: readonly ChangedConfig[], memo?: ScanMemo): GateReport {
+export function attachRemedies(
+  report: GateReport,
+  configs: readonly ChangedConfig[],
+  memo?: ScanMemo,
+): GateReport {
   const byPath = new Map(configs.map((c) => [c.change.path, c]));
-  return { ...report, files: report.files.map((file) => withRemedies(file, byPath.get(file.path), memo)) };
+  return {
+    ...report,
+    files: report.files.map((file) => withRemedies(file, byPath.get(file.path), memo)),
+  };
 }
 
 /** A finding of `inspect`, with its remedy when it blocks. */
@@ -72,10 +92,21 @@ export type RemediedFinding = Finding & Partial<RemedyFields>;
  * One inspected file with a remedy on every blocking finding, judged with the built-in rules and
  * no base version; `remedyTogether` when two or more remedies apply at once.
  */
-export function remedyFileReport(report: FileReport, memo?: ScanMemo): FileReport & { findings: RemediedFinding[]; remedyTogether: CombinedRemedy | null } {
-  if (!report.findings.some((f) => f.severity === 'block')) return { ...report, remedyTogether: null };
-  const ctx = remedyContext(report, null, BUILT_IN_JUDGING, { status: 'added', path: report.path, previousPath: null }, memo);
-  const findings: RemediedFinding[] = report.findings.map((f) => (f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f));
+export function remedyFileReport(
+  report: FileReport,
+  memo?: ScanMemo,
+): FileReport & { findings: RemediedFinding[]; remedyTogether: CombinedRemedy | null } {
+  if (!report.findings.some((f) => f.severity === 'block'))
+    return { ...report, remedyTogether: null };
+  const ctx = remedyContext(
+    report,
+    null,
+    BUILT_IN_JUDGING,
+    { status: 'added', path: report.path, previousPath: null },
+    memo,
+  );
+  const findings: RemediedFinding[] = report.findings.map((f) =>
+    f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f,
+  );
   return { ...report, findings, remedyTogether: combineRemedies(ctx, findings) };
 }
-

@@ -54,22 +54,34 @@ const OWN_KEYS: Partial<Record<ChangeKey, string>> = {
 
 /** Policy `serving` keys, kebab-case as the policy file spells them. */
 const POLICY_SERVING_KEYS: Partial<Record<ChangeKey, string>> = {
-  'serving.span': 'span', 'serving.sequences': 'sequences', 'dtypes.cache': 'cache', 'dtypes.positions': 'positions',
-  'serving.tensorParallel': 'tensor-parallel', 'serving.pipelineParallel': 'pipeline-parallel', 'dtypes.weights': 'weights',
+  'serving.span': 'span',
+  'serving.sequences': 'sequences',
+  'dtypes.cache': 'cache',
+  'dtypes.positions': 'positions',
+  'serving.tensorParallel': 'tensor-parallel',
+  'serving.pipelineParallel': 'pipeline-parallel',
+  'dtypes.weights': 'weights',
   'quantization.groupSize': 'weight-group-size',
 };
 
 /** Fields a checkpoint config cannot state: they are serving settings, set in the policy. */
 const SERVING_ONLY = new Set<ChangeKey>([
-  'serving.span', 'serving.sequences', 'dtypes.cache', 'dtypes.positions', 'serving.tensorParallel', 'serving.pipelineParallel',
+  'serving.span',
+  'serving.sequences',
+  'dtypes.cache',
+  'dtypes.positions',
+  'serving.tensorParallel',
+  'serving.pipelineParallel',
   // A quantized checkpoint is another checkpoint: for this one, the policy states the format it is served in.
-  'dtypes.weights', 'quantization.groupSize',
+  'dtypes.weights',
+  'quantization.groupSize',
 ]);
 
 /** A JSON value as published configs write it: factors and bases as floats (`4.0`), spans and counts as integers. */
 export function jsonValue(field: ChangeKey, value: ChangeValue): string {
   if (typeof value === 'string') return JSON.stringify(value);
-  if ((field === 'position.scaling.factor' || field === 'position.base') && Number.isInteger(value)) return `${value}.0`;
+  if ((field === 'position.scaling.factor' || field === 'position.base') && Number.isInteger(value))
+    return `${value}.0`;
   return String(value);
 }
 
@@ -79,7 +91,11 @@ export function yamlValue(value: ChangeValue): string {
 }
 
 function scalingPrefix(locations: LocationMap): string {
-  for (const field of ['position.scaling', 'position.scaling.factor', 'position.scaling.originalSpan']) {
+  for (const field of [
+    'position.scaling',
+    'position.scaling.factor',
+    'position.scaling.originalSpan',
+  ]) {
     const key = locations[field]?.key;
     if (key && key.includes('.')) return key.slice(0, key.lastIndexOf('.'));
   }
@@ -99,10 +115,12 @@ function inFile(locations: LocationMap, field: string): boolean {
 }
 
 function keyFor(dialect: Dialect, locations: LocationMap, field: ChangeKey): string {
-  const stated = field === 'position.scaling.kind' ? locations['position.scaling'] : locations[field];
+  const stated =
+    field === 'position.scaling.kind' ? locations['position.scaling'] : locations[field];
   if (stated && stated.line !== null) return stated.key;
   if (dialect === 'checkpoint') {
-    if (field.startsWith('position.scaling.')) return `${scalingPrefix(locations)}.${CHECKPOINT_KEYS[field]}`;
+    if (field.startsWith('position.scaling.'))
+      return `${scalingPrefix(locations)}.${CHECKPOINT_KEYS[field]}`;
     return CHECKPOINT_KEYS[field] ?? field;
   }
   return `${ownRoot(locations)}${OWN_KEYS[field] ?? field}`;
@@ -122,8 +140,12 @@ function jsonSnippet(edits: KeyEdit[], spec: ModelSpec): string {
   }
   for (const [block, inner] of blocks) {
     // A new scaling block names its kind first, as published configs do.
-    const ordered = [...inner].sort((a, b) => (a.field === 'position.scaling.kind' ? -1 : b.field === 'position.scaling.kind' ? 1 : 0));
-    const body = ordered.map((e) => `"${e.key.split('.').pop()}": ${jsonValue(e.field, e.value)}`).join(', ');
+    const ordered = [...inner].sort((a, b) =>
+      a.field === 'position.scaling.kind' ? -1 : b.field === 'position.scaling.kind' ? 1 : 0,
+    );
+    const body = ordered
+      .map((e) => `"${e.key.split('.').pop()}": ${jsonValue(e.field, e.value)}`)
+      .join(', ');
     lines.push(`"${block.split('.').pop()}": {${body}}`);
   }
   void spec;
@@ -147,7 +169,9 @@ function yamlSnippet(edits: KeyEdit[]): string {
       lines.push(`${'  '.repeat(i)}${parts[i]}:`);
       opened.push(parts[i]!);
     }
-    lines.push(`${'  '.repeat(parts.length - 1)}${parts[parts.length - 1]}: ${yamlValue(edit.value)}`);
+    lines.push(
+      `${'  '.repeat(parts.length - 1)}${parts[parts.length - 1]}: ${yamlValue(edit.value)}`,
+    );
   }
   return lines.join('\n');
 }
@@ -156,7 +180,13 @@ function yamlSnippet(edits: KeyEdit[]): string {
  * The change as edits of the model file and, for serving values a checkpoint config cannot hold
  * or that the policy set, of the policy's serving block: one patch per file touched.
  */
-export function filePatches(change: Change, dialect: Dialect, spec: ModelSpec, locations: LocationMap, path: string): FilePatch[] {
+export function filePatches(
+  change: Change,
+  dialect: Dialect,
+  spec: ModelSpec,
+  locations: LocationMap,
+  path: string,
+): FilePatch[] {
   const model: KeyEdit[] = [];
   const policy: KeyEdit[] = [];
   let policyWhere = 'the policy';
@@ -165,18 +195,41 @@ export function filePatches(change: Change, dialect: Dialect, spec: ModelSpec, l
     const fromPolicy = loc !== undefined && loc.line === null && !inFile(locations, field);
     if ((dialect === 'checkpoint' && SERVING_ONLY.has(field)) || fromPolicy) {
       if (loc?.key) policyWhere = loc.key.replace(/ serving$/, '');
-      policy.push({ field, key: `serving.${POLICY_SERVING_KEYS[field] ?? field}`, value, line: null });
+      policy.push({
+        field,
+        key: `serving.${POLICY_SERVING_KEYS[field] ?? field}`,
+        value,
+        line: null,
+      });
       continue;
     }
-    model.push({ field, key: keyFor(dialect, locations, field), value, line: (field === 'position.scaling.kind' ? locations['position.scaling'] : loc)?.line ?? null });
+    model.push({
+      field,
+      key: keyFor(dialect, locations, field),
+      value,
+      line: (field === 'position.scaling.kind' ? locations['position.scaling'] : loc)?.line ?? null,
+    });
   }
   const patches: FilePatch[] = [];
   if (model.length > 0) {
-    const format = dialect === 'checkpoint' || path.toLowerCase().endsWith('.json') ? 'json' : 'yaml';
-    patches.push({ target: 'model', where: path, format, edits: model, snippet: format === 'json' ? jsonSnippet(model, spec) : yamlSnippet(model) });
+    const format =
+      dialect === 'checkpoint' || path.toLowerCase().endsWith('.json') ? 'json' : 'yaml';
+    patches.push({
+      target: 'model',
+      where: path,
+      format,
+      edits: model,
+      snippet: format === 'json' ? jsonSnippet(model, spec) : yamlSnippet(model),
+    });
   }
   if (policy.length > 0) {
-    patches.push({ target: 'policy', where: policyWhere, format: 'yaml', edits: policy, snippet: yamlSnippet(policy) });
+    patches.push({
+      target: 'policy',
+      where: policyWhere,
+      format: 'yaml',
+      edits: policy,
+      snippet: yamlSnippet(policy),
+    });
   }
   return patches;
 }

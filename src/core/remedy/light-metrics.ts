@@ -8,8 +8,13 @@ import { cacheBytesAtSpan, cachePerTokenBytes, servedSequences } from '../metric
 import { memoryBytes } from '../metrics/memory-fit.js';
 import { usableDeviceBytes } from '../metrics/memory-curve.js';
 import {
-  cachePerSequencePerDevice, cachePerTokenBytesPerDevice, deviceCount, fitSequencesPerDevice, kvHeadsPerDevice,
-  memoryBytesPerDevice, weightBytesPerDevice,
+  cachePerSequencePerDevice,
+  cachePerTokenBytesPerDevice,
+  deviceCount,
+  fitSequencesPerDevice,
+  kvHeadsPerDevice,
+  memoryBytesPerDevice,
+  weightBytesPerDevice,
 } from '../metrics/per-device.js';
 import { storedWeightBytes } from '../metrics/quantized-weights.js';
 import { frequencyPlan } from '../metrics/compute.js';
@@ -69,8 +74,13 @@ export function rangeMetrics(spec: ModelSpec): RangeMetrics {
   const span = evaluationSpan(spec);
   const r = reach(spec, trained, declared);
   return {
-    declaredSpan: declared, trainedSpan: trained, evaluationSpan: span, reach: r,
-    scalingCover: scalingCover(spec, trained), headroom: headroom(r, span), extensionRatio: extensionRatio(span, trained),
+    declaredSpan: declared,
+    trainedSpan: trained,
+    evaluationSpan: span,
+    reach: r,
+    scalingCover: scalingCover(spec, trained),
+    headroom: headroom(r, span),
+    extensionRatio: extensionRatio(span, trained),
   };
 }
 
@@ -92,7 +102,23 @@ export function lightMetric(spec: ModelSpec, metric: string): number | null | un
 }
 
 const BUDGET_NAMES = {
-  weightBytes: 1, cachePerTokenBytes: 1, cacheBytesAtSpan: 1, memoryBytes: 1, fitSequences: 1,
-  devices: 1, kvHeadsPerDevice: 1, weightBytesPerDevice: 1, cachePerTokenBytesPerDevice: 1, memoryBytesPerDevice: 1,
+  weightBytes: 1,
+  cachePerTokenBytes: 1,
+  cacheBytesAtSpan: 1,
+  memoryBytes: 1,
+  fitSequences: 1,
+  devices: 1,
+  kvHeadsPerDevice: 1,
+  weightBytesPerDevice: 1,
+  cachePerTokenBytesPerDevice: 1,
+  memoryBytesPerDevice: 1,
 };
-const RANGE_NAMES = { declaredSpan: 1, trainedSpan: 1, evaluationSpan: 1, reach: 1, scalingCover: 1, headroom: 1, extensionRatio: 1 };
+const RANGE_NAMES = {
+  declaredSpan: 1,
+  trainedSpan: 1,
+  evaluationSpan: 1,
+  reach: 1,
+  scalingCover: 1,
+  headroom: 1,
+  extensionRatio: 1,
+};

@@ -31,7 +31,13 @@ import { formatInteger, formatNumber, formatTokens } from '../units.js';
 import { applyChange } from './apply-change.js';
 import { lightMetric, rangeMetrics, budgetMetrics } from './light-metrics.js';
 import { uncomputedScanMetrics } from '../rules/metric-rules.js';
-import { MAX_FILE_PROOF_WORK, prove, type FindingIdentity, type Proof, type RemedyContext } from './prove.js';
+import {
+  MAX_FILE_PROOF_WORK,
+  prove,
+  type FindingIdentity,
+  type Proof,
+  type RemedyContext,
+} from './prove.js';
 import { searchRotaryBase, type BaseDirection, type BaseTrial } from './rotary-base.js';
 import { coveringFactor } from './scaling-factor.js';
 import type { Change, Remedy, RemedyFields } from './types.js';
@@ -83,12 +89,17 @@ function valueOf(spec: ModelSpec, metric: string, memo: ScanMemo | undefined): n
 function resolver(ctx: RemedyContext, target: Target): Resolves | null {
   switch (target.rule) {
     case 'span-past-reach':
-      return (spec) => { const h = rangeMetrics(spec).headroom; return h !== null && h >= 0; };
+      return (spec) => {
+        const h = rangeMetrics(spec).headroom;
+        return h !== null && h >= 0;
+      };
     case 'span-beyond-scaling-cover':
     case 'span-grew-code-unchanged':
       return (spec) => {
         const r = rangeMetrics(spec);
-        return r.scalingCover !== null && r.declaredSpan !== null && r.scalingCover >= r.declaredSpan;
+        return (
+          r.scalingCover !== null && r.declaredSpan !== null && r.scalingCover >= r.declaredSpan
+        );
       };
     case 'memory-over-budget':
       return (spec) => {
@@ -99,18 +110,26 @@ function resolver(ctx: RemedyContext, target: Target): Resolves | null {
     case 'layout-unshardable':
       return (spec) => {
         const d = parallelDegrees(spec);
-        return d !== null && shards(spec.heads, spec.kvHeads, d.t) && d.p <= spec.layers
-          && (!spec.encoder || shards(spec.encoder.heads, spec.encoder.kvHeads, d.t));
+        return (
+          d !== null &&
+          shards(spec.heads, spec.kvHeads, d.t) &&
+          d.p <= spec.layers &&
+          (!spec.encoder || shards(spec.encoder.heads, spec.encoder.kvHeads, d.t))
+        );
       };
     case 'positions-collide':
       return (spec) => {
-        const colliding = lightMetric(spec, `precision.${spec.dtypes.positions ?? 'fp32'}.collidingPositions`);
+        const colliding = lightMetric(
+          spec,
+          `precision.${spec.dtypes.positions ?? 'fp32'}.collidingPositions`,
+        );
         return !(typeof colliding === 'number' && colliding > 0);
       };
     case 'limit-crossed': {
       const { limit, metric } = target;
       if (!limit || !metric) return null;
-      return (spec) => checkLimit(limit, target.baseValue, valueOf(spec, metric, ctx.memo)).crossed.length === 0;
+      return (spec) =>
+        checkLimit(limit, target.baseValue, valueOf(spec, metric, ctx.memo)).crossed.length === 0;
     }
     default:
       return null;
@@ -129,7 +148,11 @@ function describeBlockers(proof: Proof): string {
 const RULE_METRICS: Record<string, string[]> = {
   'span-past-reach': ['headroom', 'reach', 'scalingCover'],
   'memory-over-budget': ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'],
-  'positions-collide': ['precision.fp32.collidingPositions', 'precision.bf16.collidingPositions', 'precision.fp16.collidingPositions'],
+  'positions-collide': [
+    'precision.fp32.collidingPositions',
+    'precision.bf16.collidingPositions',
+    'precision.fp16.collidingPositions',
+  ],
 };
 
 /**
@@ -140,8 +163,13 @@ const RULE_METRICS: Record<string, string[]> = {
 export function ownBreaks(proof: Proof, shown: readonly string[]): string[] {
   const out = new Set<string>();
   for (const finding of proof.decision.findings) {
-    if (finding.rule === 'limit-crossed' && finding.metric && shown.includes(finding.metric)) out.add(`the ${finding.metric} limit`);
-    if (finding.severity === 'block' && (RULE_METRICS[finding.rule] ?? []).some((m) => shown.includes(m))) out.add(finding.rule);
+    if (finding.rule === 'limit-crossed' && finding.metric && shown.includes(finding.metric))
+      out.add(`the ${finding.metric} limit`);
+    if (
+      finding.severity === 'block' &&
+      (RULE_METRICS[finding.rule] ?? []).some((m) => shown.includes(m))
+    )
+      out.add(finding.rule);
   }
   return [...out];
 }
@@ -150,12 +178,14 @@ export function ownBreaks(proof: Proof, shown: readonly string[]): string[] {
 function withOwnLimits(ctx: RemedyContext, resolves: Resolves, shown: readonly string[]): Resolves {
   const limited = shown.filter((m) => ctx.judging.limits[m] !== undefined && isMetricPath(m));
   if (limited.length === 0) return resolves;
-  return (spec) => resolves(spec) && limited.every((m) => {
-    const value = lightMetric(spec, m);
-    if (value === undefined) return true; // scanned metrics are judged by the proof
-    const base = ctx.base && isMetricPath(m) ? metricValue(ctx.base.metrics, m) : null;
-    return checkLimit(ctx.judging.limits[m]!, base, value).crossed.length === 0;
-  });
+  return (spec) =>
+    resolves(spec) &&
+    limited.every((m) => {
+      const value = lightMetric(spec, m);
+      if (value === undefined) return true; // scanned metrics are judged by the proof
+      const base = ctx.base && isMetricPath(m) ? metricValue(ctx.base.metrics, m) : null;
+      return checkLimit(ctx.judging.limits[m]!, base, value).crossed.length === 0;
+    });
 }
 
 /** ` within the limits` when a policy limit bears on a shown metric, for the reasons a kind gives. */
@@ -163,7 +193,13 @@ function withinWords(ctx: RemedyContext, shown: readonly string[]): string {
   return shown.some((m) => ctx.judging.limits[m] !== undefined) ? ' within the limits' : '';
 }
 
-function remedyOf(change: Change, proof: Proof, shown: string[], target: Target, cost?: (change: Change) => string): Remedy {
+function remedyOf(
+  change: Change,
+  proof: Proof,
+  shown: string[],
+  target: Target,
+  cost?: (change: Change) => string,
+): Remedy {
   const metrics: Record<string, number | null> = {};
   for (const name of [...(target.metric ? [target.metric] : []), ...shown]) {
     if (isMetricPath(name) && !(name in metrics)) metrics[name] = metricValue(proof.metrics, name);
@@ -175,28 +211,41 @@ function remedyOf(change: Change, proof: Proof, shown: string[], target: Target,
  * Proves candidate changes in order (at most `MAX_PROOFS_PER_KIND`), returning the first that
  * passes; `what` names the kind in reasons.
  */
-function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], shown: string[], what: string, costOf?: (change: Change) => string): KindOutcome {
+function proveFirst(
+  ctx: RemedyContext,
+  target: Target,
+  candidates: Change[],
+  shown: string[],
+  what: string,
+  costOf?: (change: Change) => string,
+): KindOutcome {
   let last: Proof | null = null;
   let lastBreaks: string[] = [];
   let proofs = 0;
   for (const change of candidates.slice(0, MAX_PROOFS_PER_KIND)) {
     const cost = proofCost(applyChange(ctx.head.spec, change));
     if (cost > target.work.left || cost > ctx.work.left) {
-      return none(`${what} was not proven: its proof would scan ${formatInteger(cost)} pair·offsets, past what is left of the search's budget (${formatInteger(MAX_PROOF_WORK)} per finding, ${formatInteger(MAX_FILE_PROOF_WORK)} per file)`);
+      return none(
+        `${what} was not proven: its proof would scan ${formatInteger(cost)} pair·offsets, past what is left of the search's budget (${formatInteger(MAX_PROOF_WORK)} per finding, ${formatInteger(MAX_FILE_PROOF_WORK)} per file)`,
+      );
     }
     target.work.left -= cost;
     ctx.work.left -= cost;
     proofs += 1;
     const proof = prove(ctx, target, change);
     const breaks = proof.passes ? ownBreaks(proof, shown) : [];
-    if (proof.passes && breaks.length === 0) return { remedy: remedyOf(change, proof, shown, target, costOf), whyNot: null };
+    if (proof.passes && breaks.length === 0)
+      return { remedy: remedyOf(change, proof, shown, target, costOf), whyNot: null };
     if (breaks.length > 0) lastBreaks = breaks;
     last = proof;
   }
   if (last === null) return none(`no ${what} to try`);
-  if (lastBreaks.length > 0 && last.passes) return none(`${what} clears it but still breaks ${lastBreaks.join(', ')}`);
+  if (lastBreaks.length > 0 && last.passes)
+    return none(`${what} clears it but still breaks ${lastBreaks.join(', ')}`);
   const capped = candidates.length > proofs ? ` (stopped after ${proofs} proofs)` : '';
-  return none(`${what} ${proofs === 1 ? 'clears it but still blocks' : 'cleared it but each still blocked'} on ${describeBlockers(last)}${capped}`);
+  return none(
+    `${what} ${proofs === 1 ? 'clears it but still blocks' : 'cleared it but each still blocked'} on ${describeBlockers(last)}${capped}`,
+  );
 }
 
 // ---- kinds of change -------------------------------------------------------------------------
@@ -207,27 +256,46 @@ function proveFirst(ctx: RemedyContext, target: Target, candidates: Change[], sh
  */
 function factorChange(spec: ModelSpec, factor: number, trained: number): Change {
   const code = spec.position;
-  const change: Change = code.kind === 'rotary' && code.scaling
-    ? { 'position.scaling.factor': factor }
-    : { 'position.scaling.kind': 'linear', 'position.scaling.factor': factor };
-  if (trainedSpan(applyChange(spec, change)) !== trained) change['position.scaling.originalSpan'] = trained;
+  const change: Change =
+    code.kind === 'rotary' && code.scaling
+      ? { 'position.scaling.factor': factor }
+      : { 'position.scaling.kind': 'linear', 'position.scaling.factor': factor };
+  if (trainedSpan(applyChange(spec, change)) !== trained)
+    change['position.scaling.originalSpan'] = trained;
   return change;
 }
 
 /** The smallest whole scaling factor (of the kind in use, else linear) with `L0 · f` covering `need`. */
-function factorKind(ctx: RemedyContext, target: Target, resolves: Resolves, trained: number | null, need: number | null): KindOutcome {
+function factorKind(
+  ctx: RemedyContext,
+  target: Target,
+  resolves: Resolves,
+  trained: number | null,
+  need: number | null,
+): KindOutcome {
   const spec = ctx.head.spec;
   const code = spec.position;
   if (code.kind !== 'rotary') return none(`a ${code.kind} position code has no scaling factor`);
-  if (trained === null || need === null) return none('the trained span or the span to cover is unknown');
+  if (trained === null || need === null)
+    return none('the trained span or the span to cover is unknown');
   const f0 = coveringFactor(need, trained);
-  if (f0 === null) return none(`no whole factor covers ${formatTokens(need)} from ${formatTokens(trained)}`);
+  if (f0 === null)
+    return none(`no whole factor covers ${formatTokens(need)} from ${formatTokens(trained)}`);
   const current = code.scaling ? code.scaling.factor : 1;
   if (f0 <= current) {
-    return none(`the ${code.scaling ? `${code.scaling.kind} factor ${formatNumber(current)}` : 'code'} already covers ${formatTokens(need)}; state the trained span if the model was tuned at it`);
+    return none(
+      `the ${code.scaling ? `${code.scaling.kind} factor ${formatNumber(current)}` : 'code'} already covers ${formatTokens(need)}; state the trained span if the model was tuned at it`,
+    );
   }
-  const shown = ['reach', 'scalingCover', 'headroom', 'trainedSpan', 'discriminationSpan', 'exposedPairs',
-    ...(code.scaling?.kind === 'yarn' ? ['attentionScale'] : [])];
+  const shown = [
+    'reach',
+    'scalingCover',
+    'headroom',
+    'trainedSpan',
+    'discriminationSpan',
+    'exposedPairs',
+    ...(code.scaling?.kind === 'yarn' ? ['attentionScale'] : []),
+  ];
   const ok = withOwnLimits(ctx, resolves, shown);
   const candidates: Change[] = [];
   for (let f = f0; f < f0 + MAX_PROOFS_PER_KIND; f++) {
@@ -235,7 +303,13 @@ function factorKind(ctx: RemedyContext, target: Target, resolves: Resolves, trai
     if (ok(applyChange(spec, change))) candidates.push(change);
   }
   const kind = code.scaling ? code.scaling.kind : 'linear';
-  return proveFirst(ctx, target, candidates, shown, `a ${kind} factor of ${f0}${candidates.length > 1 ? ' or more' : ''}`);
+  return proveFirst(
+    ctx,
+    target,
+    candidates,
+    shown,
+    `a ${kind} factor of ${f0}${candidates.length > 1 ? ' or more' : ''}`,
+  );
 }
 
 /** The longest served span that clears the finding. */
@@ -247,11 +321,25 @@ function spanKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindO
   const ok = withOwnLimits(ctx, resolves, shown);
   // Headroom is monotone in the span too: the longest span that clears the finding and keeps
   // the served span within reach, so the remedy never trades one blocking finding for another.
-  const within = (spec2: ModelSpec) => { const h = rangeMetrics(spec2).headroom; return h === null || h >= 0; };
-  const found = largestPassing(1, T - 1, (t) => { const next = applyChange(spec, { 'serving.span': t }); return ok(next) && within(next); });
-  if (found.value === null) return none(`no served span from 1 to ${formatInteger(T - 1)} tokens clears it${withinWords(ctx, shown)}`);
-  return proveFirst(ctx, target, [{ 'serving.span': found.value }], shown,
-    `serving at most ${formatTokens(found.value)} tokens`);
+  const within = (spec2: ModelSpec) => {
+    const h = rangeMetrics(spec2).headroom;
+    return h === null || h >= 0;
+  };
+  const found = largestPassing(1, T - 1, (t) => {
+    const next = applyChange(spec, { 'serving.span': t });
+    return ok(next) && within(next);
+  });
+  if (found.value === null)
+    return none(
+      `no served span from 1 to ${formatInteger(T - 1)} tokens clears it${withinWords(ctx, shown)}`,
+    );
+  return proveFirst(
+    ctx,
+    target,
+    [{ 'serving.span': found.value }],
+    shown,
+    `serving at most ${formatTokens(found.value)} tokens`,
+  );
 }
 
 /** The most concurrent sequences that clear the finding. */
@@ -262,10 +350,20 @@ function sequencesKind(ctx: RemedyContext, target: Target, resolves: Resolves): 
   if (current <= 1) return none('the service already holds one sequence');
   const shown = ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'];
   const ok = withOwnLimits(ctx, resolves, shown);
-  const found = largestPassing(1, current - 1, (n) => ok(applyChange(spec, { 'serving.sequences': n })));
-  if (found.value === null) return none(`not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it${withinWords(ctx, shown)}`);
-  return proveFirst(ctx, target, [{ 'serving.sequences': found.value }], shown,
-    `${found.value} sequence${found.value === 1 ? '' : 's'}`);
+  const found = largestPassing(1, current - 1, (n) =>
+    ok(applyChange(spec, { 'serving.sequences': n })),
+  );
+  if (found.value === null)
+    return none(
+      `not even one sequence of ${formatTokens(evaluationSpan(spec))} tokens clears it${withinWords(ctx, shown)}`,
+    );
+  return proveFirst(
+    ctx,
+    target,
+    [{ 'serving.sequences': found.value }],
+    shown,
+    `${found.value} sequence${found.value === 1 ? '' : 's'}`,
+  );
 }
 
 /** The widest cache dtype narrower than the current one that clears the finding. */
@@ -278,11 +376,14 @@ function cacheDtypeKind(ctx: RemedyContext, target: Target, resolves: Resolves):
   if (narrower.length === 0) return none(`the cache is already in ${current}, the narrowest dtype`);
   const shown = ['cachePerTokenBytes', 'memoryBytes', 'fitSequences'];
   const ok = withOwnLimits(ctx, resolves, shown);
-  const candidates = narrower.filter((d) => ok(applyChange(spec, { 'dtypes.cache': d })))
+  const candidates = narrower
+    .filter((d) => ok(applyChange(spec, { 'dtypes.cache': d })))
     .map((d): Change => ({ 'dtypes.cache': d }));
-  if (candidates.length === 0) return none(`even a ${narrower[narrower.length - 1]} cache does not clear it${withinWords(ctx, shown)}`);
-  return proveFirst(ctx, target, candidates, shown,
-    `a ${candidates[0]!['dtypes.cache']} cache`);
+  if (candidates.length === 0)
+    return none(
+      `even a ${narrower[narrower.length - 1]} cache does not clear it${withinWords(ctx, shown)}`,
+    );
+  return proveFirst(ctx, target, candidates, shown, `a ${candidates[0]!['dtypes.cache']} cache`);
 }
 
 /**
@@ -304,20 +405,33 @@ function divisorsBelow(n: number, below: number): number[] {
 function kvHeadsKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
   const spec = ctx.head.spec;
   // The stored weights of a checkpoint fix its shapes: no remedy reshapes its network.
-  if (ctx.head.dialect === 'checkpoint') return none('the key/value heads of a checkpoint are fixed by its stored weights, so no remedy changes them');
+  if (ctx.head.dialect === 'checkpoint')
+    return none(
+      'the key/value heads of a checkpoint are fixed by its stored weights, so no remedy changes them',
+    );
   const heads = positiveCount(spec.heads);
   const kv = positiveCount(spec.kvHeads);
-  if (spec.latent) return none('latent attention caches one shared latent per token and layer, whatever the key/value heads');
+  if (spec.latent)
+    return none(
+      'latent attention caches one shared latent per token and layer, whatever the key/value heads',
+    );
   if (spec.encoderOnly) return none('an encoder-only model keeps no decoding cache');
   if (heads === null || kv === null) return none('heads or key/value heads are not whole numbers');
   if (kv <= 1) return none('the model already has one key/value head');
   const shown = ['cachePerTokenBytes', 'weightBytes', 'memoryBytes', 'fitSequences'];
   const ok = withOwnLimits(ctx, resolves, shown);
-  const candidates = divisorsBelow(heads, kv).filter((d) => ok(applyChange(spec, { kvHeads: d })))
+  const candidates = divisorsBelow(heads, kv)
+    .filter((d) => ok(applyChange(spec, { kvHeads: d })))
     .map((d): Change => ({ kvHeads: d }));
-  if (candidates.length === 0) return none(`even one key/value head does not clear it${withinWords(ctx, shown)}`);
-  return proveFirst(ctx, target, candidates, shown,
-    `${candidates[0]!.kvHeads} key/value heads (a retraining-level change)`);
+  if (candidates.length === 0)
+    return none(`even one key/value head does not clear it${withinWords(ctx, shown)}`);
+  return proveFirst(
+    ctx,
+    target,
+    candidates,
+    shown,
+    `${candidates[0]!.kvHeads} key/value heads (a retraining-level change)`,
+  );
 }
 
 /** The narrowest position format with every position in the span distinct. */
@@ -325,14 +439,22 @@ function formatKind(ctx: RemedyContext, target: Target, resolves: Resolves): Kin
   const spec = ctx.head.spec;
   const current = spec.dtypes.positions ?? 'fp32';
   const order = [...FLOAT_FORMATS].sort((a, b) => positionExactLimit(a) - positionExactLimit(b));
-  const candidates = order.filter((f) => f !== current && resolves(applyChange(spec, { 'dtypes.positions': f })))
+  const candidates = order
+    .filter((f) => f !== current && resolves(applyChange(spec, { 'dtypes.positions': f })))
     .map((f): Change => ({ 'dtypes.positions': f }));
   if (candidates.length === 0) {
-    return none(`no format keeps every position of ${formatTokens(evaluationSpan(spec))} distinct (fp32 holds every whole number up to ${formatInteger(positionExactLimit('fp32'))})`);
+    return none(
+      `no format keeps every position of ${formatTokens(evaluationSpan(spec))} distinct (fp32 holds every whole number up to ${formatInteger(positionExactLimit('fp32'))})`,
+    );
   }
   const format = candidates[0]!['dtypes.positions'] as FloatFormat;
-  return proveFirst(ctx, target, candidates, [`precision.${format}.collidingPositions`, `precision.${format}.angleErrorMax`],
-    `positions in ${format}`);
+  return proveFirst(
+    ctx,
+    target,
+    candidates,
+    [`precision.${format}.collidingPositions`, `precision.${format}.angleErrorMax`],
+    `positions in ${format}`,
+  );
 }
 
 /** Which way the base must move for the crossed bound of a discrimination or separation limit. */
@@ -354,31 +476,57 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
   if (!metric || !limit) return none('no limit to meet');
   const T = evaluationSpan(spec);
   const L0 = trainedSpan(spec);
-  const direction = baseDirection(metric, limit, metricValue(ctx.head.metrics, metric as 'discriminationSpan'));
+  const direction = baseDirection(
+    metric,
+    limit,
+    metricValue(ctx.head.metrics, metric as 'discriminationSpan'),
+  );
   if (T === null || direction === null) return none('the span or the current value is unknown');
-  const scaledAt = (base: number) => frequencyPlan(applyChange(spec, { 'position.base': base }), T, L0)?.scaled ?? null;
+  const scaledAt = (base: number) =>
+    frequencyPlan(applyChange(spec, { 'position.base': base }), T, L0)?.scaled ?? null;
   // discriminationSpan >= min: no negative sum before min(T, min), found by a scan that stops at the first one.
-  const onlyMin = metric === 'discriminationSpan' && direction === 'up' && limit.max === undefined && limit.maxIncreasePct === undefined;
+  const onlyMin =
+    metric === 'discriminationSpan' &&
+    direction === 'up' &&
+    limit.max === undefined &&
+    limit.maxIncreasePct === undefined;
   const criterion = (base: number): BaseTrial => {
     const theta = scaledAt(base);
     if (theta === null) return { passes: false, cost: 1 };
     if (onlyMin) {
-      const found = viaMemo(ctx.memo, 'firstNegativeOffset', firstNegativeOffset, theta, 1, Math.min(T, Math.ceil(limit.min as number)));
+      const found = viaMemo(
+        ctx.memo,
+        'firstNegativeOffset',
+        firstNegativeOffset,
+        theta,
+        1,
+        Math.min(T, Math.ceil(limit.min as number)),
+      );
       return { passes: found.offset === null, cost: found.elements };
     }
     const scan = viaMemo(ctx.memo, 'similarityScan', similarityScan, theta, T);
     // A scan stopped at its work limit proves nothing: the base does not pass on it.
     if (!scan.complete) return { passes: false, cost: theta.length * T };
     const value = scan[metric as 'discriminationSpan' | 'separationFloor'];
-    return { passes: checkLimit(limit, target.baseValue, value).crossed.length === 0, cost: theta.length * T };
+    return {
+      passes: checkLimit(limit, target.baseValue, value).crossed.length === 0,
+      cost: theta.length * T,
+    };
   };
   const search = searchRotaryBase(code.base, direction, criterion);
   if (search.base === null) {
-    return none(`no rotary base ${direction === 'up' ? 'above' : 'below'} ${formatNumber(code.base, 6)} meets the ${metric} limit within the search's caps (${search.evaluations} scans)`);
+    return none(
+      `no rotary base ${direction === 'up' ? 'above' : 'below'} ${formatNumber(code.base, 6)} meets the ${metric} limit within the search's caps (${search.evaluations} scans)`,
+    );
   }
   const capped = search.capped ? ', the nearest found after the grid walk ran out of budget' : '';
-  return proveFirst(ctx, target, [{ 'position.base': search.base }], ['discriminationSpan', 'separationFloor', 'unturnedPairs', 'slowestWavelength'],
-    `a rotary base of ${formatNumber(search.base, 6)} (a retraining-level change${capped})`);
+  return proveFirst(
+    ctx,
+    target,
+    [{ 'position.base': search.base }],
+    ['discriminationSpan', 'separationFloor', 'unturnedPairs', 'slowestWavelength'],
+    `a rotary base of ${formatNumber(search.base, 6)} (a retraining-level change${capped})`,
+  );
 }
 
 /** Metrics a change of the serving layout or the weight format is shown with. */
@@ -390,7 +538,8 @@ function deviceCost(before: ModelSpec): (change: Change) => string {
   return (change) => {
     const after = applyChange(before, change);
     const d = parallelDegrees(after);
-    return d === null ? 'more devices per replica'
+    return d === null
+      ? 'more devices per replica'
       : `${formatInteger(d.t * d.p)} devices per replica (tensor-parallel ${d.t} × pipeline-parallel ${d.p}), was ${formatInteger(was)}`;
   };
 }
@@ -404,14 +553,26 @@ function tensorKind(ctx: RemedyContext, target: Target, resolves: Resolves): Kin
   const d = parallelDegrees(spec);
   const heads = positiveCount(spec.heads);
   const kv = positiveCount(spec.kvHeads);
-  if (d === null || heads === null || kv === null) return none('the parallel degrees or head counts are not whole numbers');
+  if (d === null || heads === null || kv === null)
+    return none('the parallel degrees or head counts are not whole numbers');
   const higher = shardingDegrees(heads, kv, 64).filter((t) => t > d.t);
-  if (higher.length === 0) return none(`no tensor-parallel degree above ${d.t} shards ${heads} heads and ${kv} key/value heads`);
-  const candidates = higher.filter((t) => resolves(applyChange(spec, { 'serving.tensorParallel': t })))
+  if (higher.length === 0)
+    return none(
+      `no tensor-parallel degree above ${d.t} shards ${heads} heads and ${kv} key/value heads`,
+    );
+  const candidates = higher
+    .filter((t) => resolves(applyChange(spec, { 'serving.tensorParallel': t })))
     .map((t): Change => ({ 'serving.tensorParallel': t }));
-  if (candidates.length === 0) return none(`even a tensor-parallel degree of ${higher[higher.length - 1]} does not clear it`);
-  return proveFirst(ctx, target, candidates, [...DEVICE_SHOWN, 'kvHeadsPerDevice'],
-    `a tensor-parallel degree of ${candidates[0]!['serving.tensorParallel']}`, deviceCost(spec));
+  if (candidates.length === 0)
+    return none(`even a tensor-parallel degree of ${higher[higher.length - 1]} does not clear it`);
+  return proveFirst(
+    ctx,
+    target,
+    candidates,
+    [...DEVICE_SHOWN, 'kvHeadsPerDevice'],
+    `a tensor-parallel degree of ${candidates[0]!['serving.tensorParallel']}`,
+    deviceCost(spec),
+  );
 }
 
 /** The fewest pipeline stages above the current count (at most the layers) that clear the finding; costs devices. */
@@ -419,19 +580,29 @@ function pipelineKind(ctx: RemedyContext, target: Target, resolves: Resolves): K
   const spec = ctx.head.spec;
   const d = parallelDegrees(spec);
   const layers = positiveCount(spec.layers);
-  if (d === null || layers === null) return none('the parallel degrees or the layers are not whole numbers');
+  if (d === null || layers === null)
+    return none('the parallel degrees or the layers are not whole numbers');
   if (d.p >= layers) return none(`the pipeline already has one stage per layer (${layers})`);
   const at = (p: number) => resolves(applyChange(spec, { 'serving.pipelineParallel': p }));
   if (!at(layers)) return none(`even ${layers} pipeline stages (one per layer) do not clear it`);
   // Memory per device only falls as stages are added: the last failing count, plus one.
   const failing = largestPassing(d.p, layers, (p) => !at(p));
   const stages = failing.value === null ? d.p : failing.value + 1;
-  return proveFirst(ctx, target, [{ 'serving.pipelineParallel': stages }], ['cachePerTokenBytesPerDevice', ...DEVICE_SHOWN],
-    `${stages} pipeline stages`, deviceCost(spec));
+  return proveFirst(
+    ctx,
+    target,
+    [{ 'serving.pipelineParallel': stages }],
+    ['cachePerTokenBytesPerDevice', ...DEVICE_SHOWN],
+    `${stages} pipeline stages`,
+    deviceCost(spec),
+  );
 }
 
 /** Quantized formats a remedy proposes, widest first, with the group size of common practice. */
-const QUANTIZED_CHOICES: readonly { dtype: StorageDType; bits: number }[] = [{ dtype: 'int8', bits: 8 }, { dtype: 'int4', bits: 4 }];
+const QUANTIZED_CHOICES: readonly { dtype: StorageDType; bits: number }[] = [
+  { dtype: 'int8', bits: 8 },
+  { dtype: 'int4', bits: 4 },
+];
 
 /** The widest quantized weight format (int8, then int4, groups of 128) that clears the finding; cautions on accuracy. */
 function quantizeKind(ctx: RemedyContext, target: Target, resolves: Resolves): KindOutcome {
@@ -440,12 +611,22 @@ function quantizeKind(ctx: RemedyContext, target: Target, resolves: Resolves): K
   const narrower = QUANTIZED_CHOICES.filter((c) => c.bits < now);
   if (narrower.length === 0) return none(`the weights are already stored at ${now} bits`);
   const candidates = narrower
-    .map((c): Change => ({ 'dtypes.weights': c.dtype, 'quantization.groupSize': DEFAULT_GROUP_SIZE }))
+    .map((c): Change => ({
+      'dtypes.weights': c.dtype,
+      'quantization.groupSize': DEFAULT_GROUP_SIZE,
+    }))
     .filter((change) => resolves(applyChange(spec, change)));
   if (candidates.length === 0) return none('even int4 weights in groups of 128 do not clear it');
-  const cost = (change: Change) => `accuracy risk: ${String(change['dtypes.weights'])} weights change the model's outputs; evaluate the quantized checkpoint before serving it`;
-  return proveFirst(ctx, target, candidates, ['weightBytes', ...DEVICE_SHOWN],
-    `${String(candidates[0]!['dtypes.weights'])} weights in groups of ${DEFAULT_GROUP_SIZE}`, cost);
+  const cost = (change: Change) =>
+    `accuracy risk: ${String(change['dtypes.weights'])} weights change the model's outputs; evaluate the quantized checkpoint before serving it`;
+  return proveFirst(
+    ctx,
+    target,
+    candidates,
+    ['weightBytes', ...DEVICE_SHOWN],
+    `${String(candidates[0]!['dtypes.weights'])} weights in groups of ${DEFAULT_GROUP_SIZE}`,
+    cost,
+  );
 }
 
 /** The sharding degree nearest the stated one (above first) and a pipeline within the layers, for `layout-unshardable`. */
@@ -455,18 +636,27 @@ function layoutKind(ctx: RemedyContext, target: Target, resolves: Resolves): Kin
   const heads = positiveCount(spec.heads);
   const kv = positiveCount(spec.kvHeads);
   const layers = positiveCount(spec.layers);
-  if (d === null || heads === null || kv === null || layers === null) return none('the parallel degrees or head counts are not whole numbers');
+  if (d === null || heads === null || kv === null || layers === null)
+    return none('the parallel degrees or head counts are not whole numbers');
   const degrees = shardingDegrees(heads, kv, 64);
   const ordered = [...degrees.filter((t) => t >= d.t), ...degrees.filter((t) => t < d.t).reverse()];
-  const candidates = ordered.map((t): Change => {
-    const change: Change = {};
-    if (t !== d.t) change['serving.tensorParallel'] = t;
-    if (d.p > layers) change['serving.pipelineParallel'] = layers;
-    return change;
-  }).filter((change) => Object.keys(change).length > 0 && resolves(applyChange(spec, change)));
+  const candidates = ordered
+    .map((t): Change => {
+      const change: Change = {};
+      if (t !== d.t) change['serving.tensorParallel'] = t;
+      if (d.p > layers) change['serving.pipelineParallel'] = layers;
+      return change;
+    })
+    .filter((change) => Object.keys(change).length > 0 && resolves(applyChange(spec, change)));
   if (candidates.length === 0) return none('no tensor-parallel degree shards these heads');
-  return proveFirst(ctx, target, candidates, ['devices', 'memoryBytesPerDevice', 'fitSequences', 'kvHeadsPerDevice'],
-    'a degree that shards the heads', deviceCost(spec));
+  return proveFirst(
+    ctx,
+    target,
+    candidates,
+    ['devices', 'memoryBytesPerDevice', 'fitSequences', 'kvHeadsPerDevice'],
+    'a degree that shards the heads',
+    deviceCost(spec),
+  );
 }
 
 // ---- which kinds for which finding -----------------------------------------------------------
@@ -477,7 +667,15 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
   const spec = ctx.head.spec;
   const range = rangeMetrics(spec);
   const T = range.evaluationSpan;
-  const memory = [sequencesKind, cacheDtypeKind, kvHeadsKind, spanKind, tensorKind, pipelineKind, quantizeKind];
+  const memory = [
+    sequencesKind,
+    cacheDtypeKind,
+    kvHeadsKind,
+    spanKind,
+    tensorKind,
+    pipelineKind,
+    quantizeKind,
+  ];
   switch (target.rule) {
     case 'span-past-reach':
       return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T), spanKind];
@@ -485,7 +683,9 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
       return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, range.declaredSpan)];
     case 'span-grew-code-unchanged':
       // The trained span is the base's: the head's own is only its (grown) declared span.
-      return [(c, t, r) => factorKind(c, t, r, ctx.base?.metrics.trainedSpan ?? null, range.declaredSpan)];
+      return [
+        (c, t, r) => factorKind(c, t, r, ctx.base?.metrics.trainedSpan ?? null, range.declaredSpan),
+      ];
     case 'memory-over-budget':
       return memory;
     case 'positions-collide':
@@ -496,21 +696,33 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
       const metric = target.metric ?? '';
       const limit = target.limit;
       if (!limit) return `the policy has no limit on ${metric}`;
-      if (isMetricPath(metric) && metricValue(ctx.head.metrics, metric) === null && uncomputedScanMetrics(ctx.head.metrics).includes(metric)) {
+      if (
+        isMetricPath(metric) &&
+        metricValue(ctx.head.metrics, metric) === null &&
+        uncomputedScanMetrics(ctx.head.metrics).includes(metric)
+      ) {
         return `no remedy is searched for ${metric}: the scans stopped at their bound at this span (scan-incomplete), so no change can be proven against it; serve a shorter span`;
       }
-      if (metric === 'discriminationSpan' || metric === 'separationFloor') return [(c, t) => baseKind(c, t)];
+      if (metric === 'discriminationSpan' || metric === 'separationFloor')
+        return [(c, t) => baseKind(c, t)];
       if (metric === 'memoryBytes' || metric === 'cacheBytesAtSpan') return memory;
       if (metric === 'memoryBytesPerDevice') return memory;
-      if (metric === 'fitSequences') return [cacheDtypeKind, kvHeadsKind, spanKind, tensorKind, pipelineKind, quantizeKind];
+      if (metric === 'fitSequences')
+        return [cacheDtypeKind, kvHeadsKind, spanKind, tensorKind, pipelineKind, quantizeKind];
       if (metric === 'weightBytesPerDevice') return [tensorKind, pipelineKind, quantizeKind];
       if (metric === 'weightBytes') return [quantizeKind];
       if (metric === 'cachePerTokenBytes') return [cacheDtypeKind, kvHeadsKind];
       if (metric === 'headroom' && limit.min !== undefined && T !== null) {
-        return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T + Math.max(0, Math.ceil(limit.min as number))), spanKind];
+        return [
+          (c, t, r) =>
+            factorKind(c, t, r, range.trainedSpan, T + Math.max(0, Math.ceil(limit.min as number))),
+          spanKind,
+        ];
       }
       if (metric === 'reach' && limit.min !== undefined) {
-        return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, Math.ceil(limit.min as number))];
+        return [
+          (c, t, r) => factorKind(c, t, r, range.trainedSpan, Math.ceil(limit.min as number)),
+        ];
       }
       if (/^precision\.(fp32|bf16|fp16)\.collidingPositions$/.test(metric)) return [spanKind];
       return `no remedy is searched for a limit on ${metric}: remedies cover spans and reach, rotary discrimination and separation, memory, and colliding positions`;
@@ -526,19 +738,40 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
  * The remedy of one blocking finding of `ctx`'s head: the first kind of change that proves, the
  * other kinds that prove as alternatives, or why none does.
  */
-export function proposeRemedy(ctx: RemedyContext, finding: Finding & { metric?: string }): RemedyFields {
+export function proposeRemedy(
+  ctx: RemedyContext,
+  finding: Finding & { metric?: string },
+): RemedyFields {
   const metric = finding.metric;
-  const limit = finding.rule === 'limit-crossed' && metric ? ctx.judging.limits[metric] ?? null : null;
-  const baseValue = metric && ctx.base && isMetricPath(metric) ? metricValue(ctx.base.metrics, metric) : null;
-  const target: Target = { rule: finding.rule, ...(metric ? { metric } : {}), limit, baseValue, work: { left: MAX_PROOF_WORK } };
+  const limit =
+    finding.rule === 'limit-crossed' && metric ? (ctx.judging.limits[metric] ?? null) : null;
+  const baseValue =
+    metric && ctx.base && isMetricPath(metric) ? metricValue(ctx.base.metrics, metric) : null;
+  const target: Target = {
+    rule: finding.rule,
+    ...(metric ? { metric } : {}),
+    limit,
+    baseValue,
+    work: { left: MAX_PROOF_WORK },
+  };
   const kinds = kindsFor(ctx, target);
-  if (typeof kinds === 'string') return { remedy: null, remedyWhyNot: kinds, remedyAlternatives: [] };
+  if (typeof kinds === 'string')
+    return { remedy: null, remedyWhyNot: kinds, remedyAlternatives: [] };
   const resolves = resolver(ctx, target);
-  if (resolves === null) return { remedy: null, remedyWhyNot: `no remedy is searched for ${finding.rule}`, remedyAlternatives: [] };
+  if (resolves === null)
+    return {
+      remedy: null,
+      remedyWhyNot: `no remedy is searched for ${finding.rule}`,
+      remedyAlternatives: [],
+    };
   const outcomes = kinds.map((kind) => kind(ctx, target, resolves));
   const proven = outcomes.filter((o) => o.remedy !== null).map((o) => o.remedy as Remedy);
   if (proven.length === 0) {
-    return { remedy: null, remedyWhyNot: `No change found that passes: ${outcomes.map((o) => o.whyNot).join('; ')}.`, remedyAlternatives: [] };
+    return {
+      remedy: null,
+      remedyWhyNot: `No change found that passes: ${outcomes.map((o) => o.whyNot).join('; ')}.`,
+      remedyAlternatives: [],
+    };
   }
   return { remedy: proven[0]!, remedyWhyNot: null, remedyAlternatives: proven.slice(1) };
 }

@@ -65,10 +65,19 @@ function blockingCounts(decision: FileDecision): Map<string, number> {
 }
 
 /** The context of one file: judged once as it is, so proofs compare like with like. */
-export function remedyContext(head: FileReport, base: FileReport | null, judging: Judging, change: ChangedFile, memo?: ScanMemo): RemedyContext {
+export function remedyContext(
+  head: FileReport,
+  base: FileReport | null,
+  judging: Judging,
+  change: ChangedFile,
+  memo?: ScanMemo,
+): RemedyContext {
   const decision = decideFile({ change, base, head, judging }, false);
   return {
-    head, base, judging, change,
+    head,
+    base,
+    judging,
+    change,
     readFindings: readerFindings(head),
     blockingBefore: blockingCounts(decision),
     findingsBefore: new Set(decision.findings.map(identityOf)),
@@ -91,13 +100,21 @@ export interface Proof {
 }
 
 /** A spec measured and judged as the gate would judge the head (waivers do not apply: the proof is of the severity). */
-export function judgeSpec(ctx: RemedyContext, spec: ModelSpec): { metrics: Metrics; decision: FileDecision } {
+export function judgeSpec(
+  ctx: RemedyContext,
+  spec: ModelSpec,
+): { metrics: Metrics; decision: FileDecision } {
   const metrics = computeMetrics(spec, ctx.memo);
   const findings = sortFindings([
-    ...ctx.readFindings, ...specFindings(spec, ctx.head.locations), ...metricFindings(spec, metrics, ctx.head.locations),
+    ...ctx.readFindings,
+    ...specFindings(spec, ctx.head.locations),
+    ...metricFindings(spec, metrics, ctx.head.locations),
   ]);
   const head: FileReport = { ...ctx.head, spec, metrics, findings };
-  return { metrics, decision: decideFile({ change: ctx.change, base: ctx.base, head, judging: ctx.judging }, false) };
+  return {
+    metrics,
+    decision: decideFile({ change: ctx.change, base: ctx.base, head, judging: ctx.judging }, false),
+  };
 }
 
 /**
@@ -112,10 +129,15 @@ export function prove(ctx: RemedyContext, target: FindingIdentity | null, change
   const blockers: string[] = [];
   const targetId = target ? identityOf(target) : null;
   for (const [id, count] of after) {
-    if (target === null || id === targetId || count > (ctx.blockingBefore.get(id) ?? 0)) blockers.push(id);
+    if (target === null || id === targetId || count > (ctx.blockingBefore.get(id) ?? 0))
+      blockers.push(id);
   }
-  const raises = [...new Set(decision.findings
-    .filter((f) => f.severity !== 'block' && !ctx.findingsBefore.has(identityOf(f)))
-    .map(identityOf))];
+  const raises = [
+    ...new Set(
+      decision.findings
+        .filter((f) => f.severity !== 'block' && !ctx.findingsBefore.has(identityOf(f)))
+        .map(identityOf),
+    ),
+  ];
   return { spec, metrics, decision, passes: blockers.length === 0, blockers, raises };
 }

@@ -43,7 +43,14 @@ export interface BaseSearchCaps {
   gridSteps: number;
 }
 
-export const DEFAULT_BASE_CAPS: BaseSearchCaps = { walkCost: 2 ** 29, totalCost: 2 ** 31, evaluations: 4000, doublings: 30, bisections: 40, gridSteps: 30 };
+export const DEFAULT_BASE_CAPS: BaseSearchCaps = {
+  walkCost: 2 ** 29,
+  totalCost: 2 ** 31,
+  evaluations: 4000,
+  doublings: 30,
+  bisections: 40,
+  gridSteps: 30,
+};
 
 export interface BaseSearch {
   /** The base found; null when none passed within the caps. */
@@ -73,7 +80,9 @@ export function nextGridBase(g: number, direction: BaseDirection): number {
   const m = Math.round(g / 10 ** e);
   if (direction === 'up') return Number(((m + 1) * 10 ** e).toPrecision(2));
   // 10 × 10^e steps down to 99 × 10^(e-1).
-  return m <= 10 ? Number((99 * 10 ** (e - 1)).toPrecision(2)) : Number(((m - 1) * 10 ** e).toPrecision(2));
+  return m <= 10
+    ? Number((99 * 10 ** (e - 1)).toPrecision(2))
+    : Number(((m - 1) * 10 ** e).toPrecision(2));
 }
 
 /** A base above 1 and finite: at 1 or below every pair turns at the same rate or faster ones slow down. */
@@ -126,12 +135,19 @@ export function searchRotaryBase(
   for (let i = 0; i < caps.doublings && spent < caps.totalCost; i++) {
     const b = failing * step;
     if (!usable(b)) break;
-    if (test(b)) { passing = b; break; }
+    if (test(b)) {
+      passing = b;
+      break;
+    }
     failing = b;
   }
   if (passing === null) return { base: null, evaluations, capped: true };
   let bisected = 0;
-  while (Math.max(passing, failing) / Math.min(passing, failing) > 1.001 && bisected < caps.bisections && spent < caps.totalCost) {
+  while (
+    Math.max(passing, failing) / Math.min(passing, failing) > 1.001 &&
+    bisected < caps.bisections &&
+    spent < caps.totalCost
+  ) {
     const mid = Math.sqrt(passing * failing);
     if (test(mid)) passing = mid;
     else failing = mid;

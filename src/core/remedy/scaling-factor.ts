@@ -10,6 +10,7 @@
  * a positive whole number.
  */
 export function coveringFactor(span: number, trained: number): number | null {
-  if (!Number.isSafeInteger(span) || span < 1 || !Number.isSafeInteger(trained) || trained < 1) return null;
+  if (!Number.isSafeInteger(span) || span < 1 || !Number.isSafeInteger(trained) || trained < 1)
+    return null;
   return Math.max(1, Math.ceil(span / trained));
 }

@@ -22,13 +22,27 @@ const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&
 /** A JSON scalar (string, number, literal) after `"key":` on one line. */
 const JSON_SCALAR = String.raw`("(?:[^"\\]|\\.)*"|[-+]?[0-9][0-9.eE+-]*|true|false|null)`;
 
-function setOnLine(line: string, key: string, value: string, format: 'json' | 'yaml'): string | null {
+function setOnLine(
+  line: string,
+  key: string,
+  value: string,
+  format: 'json' | 'yaml',
+): string | null {
   if (format === 'json') {
     const pattern = new RegExp(`("${escapeRegExp(key)}"\\s*:\\s*)${JSON_SCALAR}`);
-    return pattern.test(line) ? line.replace(pattern, (_, lead: string) => `${lead}${value}`) : null;
+    return pattern.test(line)
+      ? line.replace(pattern, (_, lead: string) => `${lead}${value}`)
+      : null;
   }
-  const pattern = new RegExp(`^(\\s*(?:-\\s+)?${escapeRegExp(key)}\\s*:\\s*)([^#\\s][^#]*?)(\\s*(?:#.*)?)$`);
-  return pattern.test(line) ? line.replace(pattern, (_, lead: string, _old: string, tail: string) => `${lead}${value}${tail}`) : null;
+  const pattern = new RegExp(
+    `^(\\s*(?:-\\s+)?${escapeRegExp(key)}\\s*:\\s*)([^#\\s][^#]*?)(\\s*(?:#.*)?)$`,
+  );
+  return pattern.test(line)
+    ? line.replace(
+        pattern,
+        (_, lead: string, _old: string, tail: string) => `${lead}${value}${tail}`,
+      )
+    : null;
 }
 
 /** New keys of a JSON patch as one line after `anchor` (a `"key": scalar` line), fixing the commas. */
@@ -40,7 +54,9 @@ function insertAfter(anchor: string, patch: FilePatch): [string, string] | null 
   if (!match) return null;
   const [, indent, comma] = match as unknown as [string, string, string];
   const [block] = [...blocks] as [string];
-  const ordered = [...fresh].sort((a, b) => (a.field === 'position.scaling.kind' ? -1 : b.field === 'position.scaling.kind' ? 1 : 0));
+  const ordered = [...fresh].sort((a, b) =>
+    a.field === 'position.scaling.kind' ? -1 : b.field === 'position.scaling.kind' ? 1 : 0,
+  );
   const body = ordered.map((e) => `"${e.key.split('.').pop()}": ${jsonValue(e.field, e.value)}`);
   const text = block === '' ? body.join(`, `) : `"${block.split('.').pop()}": {${body.join(', ')}}`;
   if (block.includes('.')) return null;
@@ -53,7 +69,13 @@ function insertAfter(anchor: string, patch: FilePatch): [string, string] | null 
  * `anchorLine` for keys the file does not have yet; null when the edit cannot be made on whole
  * lines or the edited file does not read back with the remedy's values.
  */
-export function lineEdit(text: string, path: string, patch: FilePatch, change: Change, anchorLine: number | null): LineEdit | null {
+export function lineEdit(
+  text: string,
+  path: string,
+  patch: FilePatch,
+  change: Change,
+  anchorLine: number | null,
+): LineEdit | null {
   if (patch.target !== 'model') return null;
   const eol = text.includes('\r\n') ? '\r\n' : '\n';
   const lines = text.split(eol);
@@ -62,15 +84,18 @@ export function lineEdit(text: string, path: string, patch: FilePatch, change: C
   for (const edit of patch.edits.filter((e) => e.line !== null)) {
     const index = (edit.line as number) - 1;
     const key = edit.key.split('.').pop() as string;
-    const value = patch.format === 'json' ? jsonValue(edit.field, edit.value) : yamlValue(edit.value);
-    const next = edited[index] === undefined ? null : setOnLine(edited[index]!, key, value, patch.format);
+    const value =
+      patch.format === 'json' ? jsonValue(edit.field, edit.value) : yamlValue(edit.value);
+    const next =
+      edited[index] === undefined ? null : setOnLine(edited[index]!, key, value, patch.format);
     if (next === null) return null;
     edited[index] = next;
     touched.add(index);
   }
   let inserted: string | null = null;
   if (patch.edits.some((e) => e.line === null)) {
-    if (patch.format !== 'json' || anchorLine === null || edited[anchorLine - 1] === undefined) return null;
+    if (patch.format !== 'json' || anchorLine === null || edited[anchorLine - 1] === undefined)
+      return null;
     const pair = insertAfter(edited[anchorLine - 1]!, patch);
     if (pair === null) return null;
     edited[anchorLine - 1] = pair[0];

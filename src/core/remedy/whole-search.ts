@@ -14,10 +14,18 @@ export interface WholeSearch {
  * count: the largest whole n in [lo, hi] with `passes(n)`, for a `passes` that is true on
  * [lo, n*] and false above; null when `passes(lo)` is false or the range is empty.
  */
-export function largestPassing(lo: number, hi: number, passes: (n: number) => boolean): WholeSearch {
+export function largestPassing(
+  lo: number,
+  hi: number,
+  passes: (n: number) => boolean,
+): WholeSearch {
   let evaluations = 0;
-  const test = (n: number) => { evaluations += 1; return passes(n); };
-  if (!(Number.isSafeInteger(lo) && Number.isSafeInteger(hi)) || hi < lo || !test(lo)) return { value: null, evaluations };
+  const test = (n: number) => {
+    evaluations += 1;
+    return passes(n);
+  };
+  if (!(Number.isSafeInteger(lo) && Number.isSafeInteger(hi)) || hi < lo || !test(lo))
+    return { value: null, evaluations };
   if (test(hi)) return { value: hi, evaluations };
   let good = lo;
   let bad = hi;

@@ -16,14 +16,21 @@ export interface Annotation {
   line: number | null;
 }
 
-const LEVEL: Record<Severity, AnnotationLevel> = { block: 'error', warn: 'warning', info: 'notice' };
+const LEVEL: Record<Severity, AnnotationLevel> = {
+  block: 'error',
+  warn: 'warning',
+  info: 'notice',
+};
 
 /**
  * The annotations to write, most severe first and at most 10 per level (GitHub drops the rest),
  * and how many findings were left out. Annotations carry the severity the verdict counted, so a
  * waived or standing block does not show as an error.
  */
-export function planAnnotations(report: GateReport): { annotations: Annotation[]; omitted: number } {
+export function planAnnotations(report: GateReport): {
+  annotations: Annotation[];
+  omitted: number;
+} {
   const all = report.files
     .flatMap((file) => file.findings.map((f) => ({ file, f })))
     .filter(({ f }) => f.counts !== null)
@@ -33,9 +40,14 @@ export function planAnnotations(report: GateReport): { annotations: Annotation[]
   let omitted = 0;
   for (const { file, f } of all) {
     const level = LEVEL[f.counts!];
-    if (used[level] >= ANNOTATIONS_PER_LEVEL) { omitted += 1; continue; }
+    if (used[level] >= ANNOTATIONS_PER_LEVEL) {
+      omitted += 1;
+      continue;
+    }
     used[level] += 1;
-    const flags = [f.standing ? 'standing' : null, f.waived ? 'waived' : null].filter(Boolean).join(', ');
+    const flags = [f.standing ? 'standing' : null, f.waived ? 'waived' : null]
+      .filter(Boolean)
+      .join(', ');
     annotations.push({
       level,
       title: `context-reach ${f.rule}${flags ? ` (${flags})` : ''}`,

@@ -7,9 +7,26 @@ import { filePatches, type FilePatch } from '../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
 import type { Remedy } from '../remedy/types.js';
 import { formatInteger, formatNumber } from '../units.js';
-import { codeBlock, codeId, codeSpan, encodePath, escapeMarkdown, htmlCode, linkablePath } from './escape.js';
+import {
+  codeBlock,
+  codeId,
+  codeSpan,
+  encodePath,
+  escapeMarkdown,
+  htmlCode,
+  linkablePath,
+} from './escape.js';
 import { fitText, perDeviceText } from './device-text.js';
-import { limitStateMark, limitStateWord, MEMORY_CAUTION, MEMORY_METRICS, SEVERITY_MARK, SEVERITY_WORD, VERDICT_MARK, VERDICT_WORD } from './marks.js';
+import {
+  limitStateMark,
+  limitStateWord,
+  MEMORY_CAUTION,
+  MEMORY_METRICS,
+  SEVERITY_MARK,
+  SEVERITY_WORD,
+  VERDICT_MARK,
+  VERDICT_WORD,
+} from './marks.js';
 import { memoryChart } from './memory-chart.js';
 import { formatDeltaChange, formatMetric } from './metric-format.js';
 import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
@@ -36,7 +53,11 @@ export interface MarkdownContext {
 /** Compact tables: GitHub renders them the same without the padding, and the comment stays short. */
 const TABLE = { padding: false, alignDelimiters: false } as const;
 
-function where(file: FileDecision, finding: Pick<JudgedFinding, 'line' | 'key'>, ctx: MarkdownContext): string {
+function where(
+  file: FileDecision,
+  finding: Pick<JudgedFinding, 'line' | 'key'>,
+  ctx: MarkdownContext,
+): string {
   const label = finding.line !== null ? `line ${finding.line}` : 'file';
   const key = finding.key ? ` ${codeSpan(finding.key)}` : '';
   // A path git would never list (a `..` segment in a tampered report) is named, never linked.
@@ -58,7 +79,8 @@ function limitText(delta: MetricDelta): string {
   const parts: string[] = [];
   if (limit.min !== undefined) parts.push(`≥ ${formatMetric(delta.metric, limit.min)}`);
   if (limit.max !== undefined) parts.push(`≤ ${formatMetric(delta.metric, limit.max)}`);
-  if (limit.maxIncreasePct !== undefined) parts.push(`≤ +${formatNumber(limit.maxIncreasePct, 3)} %`);
+  if (limit.maxIncreasePct !== undefined)
+    parts.push(`≤ +${formatNumber(limit.maxIncreasePct, 3)} %`);
   return parts.join(', ');
 }
 
@@ -71,15 +93,25 @@ function usedFormat(file: FileDecision): string {
 function shownDeltas(file: FileDecision): MetricDelta[] {
   const format = usedFormat(file);
   const one = oneDevice(file);
-  return file.deltas.filter((d) => d.limit !== null || ((!d.metric.startsWith('precision.') || d.metric.startsWith(`precision.${format}.`))
-    && !(one && PER_DEVICE.has(d.metric))));
+  return file.deltas.filter(
+    (d) =>
+      d.limit !== null ||
+      ((!d.metric.startsWith('precision.') || d.metric.startsWith(`precision.${format}.`)) &&
+        !(one && PER_DEVICE.has(d.metric))),
+  );
 }
 
 /** Fixes besides the first listed per file in the comment. */
 const MAX_ALTERNATIVES = 2;
 
 /** Per-device metrics: on one device each equals its single-device figure, so they are not shown twice. */
-const PER_DEVICE = new Set<string>(['devices', 'kvHeadsPerDevice', 'weightBytesPerDevice', 'cachePerTokenBytesPerDevice', 'memoryBytesPerDevice']);
+const PER_DEVICE = new Set<string>([
+  'devices',
+  'kvHeadsPerDevice',
+  'weightBytesPerDevice',
+  'cachePerTokenBytesPerDevice',
+  'memoryBytesPerDevice',
+]);
 
 /** Whether base and head each run on one device (a missing version counts as one). */
 function oneDevice(file: FileDecision): boolean {
@@ -87,10 +119,18 @@ function oneDevice(file: FileDecision): boolean {
 }
 
 /** A value cell, with the assumption mark when the value rests on one and the memory mark beside memory figures. */
-function valueCell(file: FileDecision, metric: MetricPath, value: number | null, side: 'base' | 'head'): string {
-  const text = metric === 'discriminationSpan' && value === null && (side === 'head' ? file.head : file.base)?.metrics.fastestWavelength != null
-    ? `none within ${formatInteger((side === 'head' ? file.head : file.base)?.metrics.evaluationSpan ?? null)}`
-    : formatMetric(metric, value);
+function valueCell(
+  file: FileDecision,
+  metric: MetricPath,
+  value: number | null,
+  side: 'base' | 'head',
+): string {
+  const text =
+    metric === 'discriminationSpan' &&
+    value === null &&
+    (side === 'head' ? file.head : file.base)?.metrics.fastestWavelength != null
+      ? `none within ${formatInteger((side === 'head' ? file.head : file.base)?.metrics.evaluationSpan ?? null)}`
+      : formatMetric(metric, value);
   const assumed = side === 'head' && file.assumed?.metrics.includes(metric) ? ' *assumed*' : '';
   const memory = MEMORY_METRICS.has(metric) && value !== null ? ' †' : '';
   return `${text}${memory}${assumed}`;
@@ -100,9 +140,16 @@ function valueCell(file: FileDecision, metric: MetricPath, value: number | null,
  * The two metric tables depend on the file alone, and `renderComment` builds every section again
  * for each trimming attempt: each table is built once per file.
  */
-const tableMemo = { delta: new WeakMap<FileDecision, string>(), full: new WeakMap<FileDecision, string>() };
+const tableMemo = {
+  delta: new WeakMap<FileDecision, string>(),
+  full: new WeakMap<FileDecision, string>(),
+};
 
-function memo(cache: WeakMap<FileDecision, string>, file: FileDecision, build: (file: FileDecision) => string): string {
+function memo(
+  cache: WeakMap<FileDecision, string>,
+  file: FileDecision,
+  build: (file: FileDecision) => string,
+): string {
   let text = cache.get(file);
   if (text === undefined) {
     text = build(file);
@@ -118,13 +165,20 @@ function deltaTable(file: FileDecision): string {
 function buildDeltaTable(file: FileDecision): string {
   const rows = shownDeltas(file);
   if (rows.length === 0) return '_No metric changed and none is limited by the policy._';
-  return markdownTable([
-    ['metric', 'base', 'head', 'change', 'limit', 'state'],
-    ...rows.map((d) => [
-      codeId(d.metric), valueCell(file, d.metric, d.base, 'base'), valueCell(file, d.metric, d.head, 'head'),
-      formatDeltaChange(d), limitText(d), `${limitStateMark(d)} ${escapeMarkdown(limitStateWord(d))}`.trim(),
-    ]),
-  ], { ...TABLE, align: ['l', 'r', 'r', 'r', 'l', 'l'] });
+  return markdownTable(
+    [
+      ['metric', 'base', 'head', 'change', 'limit', 'state'],
+      ...rows.map((d) => [
+        codeId(d.metric),
+        valueCell(file, d.metric, d.base, 'base'),
+        valueCell(file, d.metric, d.head, 'head'),
+        formatDeltaChange(d),
+        limitText(d),
+        `${limitStateMark(d)} ${escapeMarkdown(limitStateWord(d))}`.trim(),
+      ]),
+    ],
+    { ...TABLE, align: ['l', 'r', 'r', 'r', 'l', 'l'] },
+  );
 }
 
 function otherMetrics(file: FileDecision): string {
@@ -135,11 +189,15 @@ function otherMetrics(file: FileDecision): string {
 function buildOtherMetrics(file: FileDecision): string {
   const shown = new Set(shownDeltas(file).map((d) => d.metric));
   const one = oneDevice(file);
-  const rows = METRIC_PATHS.filter((metric) => !shown.has(metric) && !(one && PER_DEVICE.has(metric))).map((metric) => {
-    const b = file.base ? metricOf(file.base.metrics, metric) : null;
-    const h = file.head ? metricOf(file.head.metrics, metric) : null;
-    return { metric, b, h };
-  }).filter((r) => r.b !== null || r.h !== null)
+  const rows = METRIC_PATHS.filter(
+    (metric) => !shown.has(metric) && !(one && PER_DEVICE.has(metric)),
+  )
+    .map((metric) => {
+      const b = file.base ? metricOf(file.base.metrics, metric) : null;
+      const h = file.head ? metricOf(file.head.metrics, metric) : null;
+      return { metric, b, h };
+    })
+    .filter((r) => r.b !== null || r.h !== null)
     .map((r) => {
       const head = valueCell(file, r.metric, r.h, 'head');
       const base = file.base ? valueCell(file, r.metric, r.b, 'base') : '—';
@@ -158,7 +216,8 @@ function lineWords(lines: number[]): string {
 
 /** Where a patch goes, in words: `Set on line 20 of the file:`, `Add to the policy's serving block for this file (…):`. */
 function patchLead(patch: FilePatch, finding: JudgedFinding): string {
-  if (patch.target === 'policy') return `In the serving block of ${codeSpan(patch.where)} that applies to this file:`;
+  if (patch.target === 'policy')
+    return `In the serving block of ${codeSpan(patch.where)} that applies to this file:`;
   const existing = patch.edits.filter((e) => e.line !== null).map((e) => e.line as number);
   const added = patch.edits.some((e) => e.line === null);
   const parts: string[] = [];
@@ -179,32 +238,58 @@ function locationsOf(file: FileDecision): LocationMap {
 /** The patches of a remedy for this file (a report read back from JSON has no locations: default keys then). */
 export function remedyPatches(file: FileDecision, remedy: Remedy): FilePatch[] {
   if (!file.head) return [];
-  return filePatches(remedy.change, file.dialect ?? 'checkpoint', file.head.spec, locationsOf(file), file.path);
+  return filePatches(
+    remedy.change,
+    file.dialect ?? 'checkpoint',
+    file.head.spec,
+    locationsOf(file),
+    file.path,
+  );
 }
 
 function metricsShort(remedy: Remedy, max: number): string {
-  return metricParts(remedy.metrics).slice(0, max).map((m) => `${escapeMarkdown(m.metric)} ${escapeMarkdown(m.value)}`).join(', ');
+  return metricParts(remedy.metrics)
+    .slice(0, max)
+    .map((m) => `${escapeMarkdown(m.metric)} ${escapeMarkdown(m.value)}`)
+    .join(', ');
 }
 
 /** The fix under a blocking finding: what it gives, what it still needs, and the change ready to paste. */
 function fixLines(file: FileDecision, finding: JudgedFinding): string[] {
   if (finding.remedy === undefined) return [];
-  if (finding.remedy === null) return [`⛔ No fix found that passes these rules: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`];
+  if (finding.remedy === null)
+    return [
+      `⛔ No fix found that passes these rules: ${escapeMarkdown(finding.remedyWhyNot ?? 'none found')}`,
+    ];
   const spec = file.head?.spec as ModelSpec;
   const remedy = finding.remedy;
   const cost = remedy.cost ? `; costs ${escapeMarkdown(remedy.cost)}` : '';
-  const lines = [`✓ **Fix**, passes these rules (${metricsShort(remedy, 3)})${cost}; still needs ${escapeMarkdown(needsText(remedyNeeds(remedy.change, spec)))}.`];
-  for (const patch of remedyPatches(file, remedy)) lines.push(patchLead(patch, finding), patchBlock(patch));
+  const lines = [
+    `✓ **Fix**, passes these rules (${metricsShort(remedy, 3)})${cost}; still needs ${escapeMarkdown(needsText(remedyNeeds(remedy.change, spec)))}.`,
+  ];
+  for (const patch of remedyPatches(file, remedy))
+    lines.push(patchLead(patch, finding), patchBlock(patch));
   return lines;
 }
 
 /** One-line alternatives, in the file's own keys. */
 function alternativeLine(file: FileDecision, remedy: Remedy): string {
   const spec = file.head?.spec as ModelSpec;
-  const keys = remedyPatches(file, remedy).map((patch) => patch.edits.map((e) => {
-    const at = patch.target === 'policy' ? ` (policy ${codeSpan(patch.where)} serving)` : e.line !== null ? ` (line ${e.line})` : '';
-    return `${codeSpan(`${e.key.split('.').pop()}: ${typeof e.value === 'string' ? e.value : String(e.value)}`)}${at}`;
-  }).join(', ')).join(', ');
+  const keys = remedyPatches(file, remedy)
+    .map((patch) =>
+      patch.edits
+        .map((e) => {
+          const at =
+            patch.target === 'policy'
+              ? ` (policy ${codeSpan(patch.where)} serving)`
+              : e.line !== null
+                ? ` (line ${e.line})`
+                : '';
+          return `${codeSpan(`${e.key.split('.').pop()}: ${typeof e.value === 'string' ? e.value : String(e.value)}`)}${at}`;
+        })
+        .join(', '),
+    )
+    .join(', ');
   const cost = remedy.cost ? `; costs ${escapeMarkdown(remedy.cost)}` : '';
   const needs = remedyNeeds(remedy.change, spec);
   // A serving setting needs nothing else: said once, under the first fix, not again for each alternative.
@@ -222,39 +307,57 @@ function headline(report: GateReport): string {
 export const BLOCKERS_LISTED = 20;
 
 function blockers(report: GateReport, ctx: MarkdownContext): string[] {
-  const all = report.files.flatMap((file) => file.findings.filter((f) => f.counts === 'block').map((f) => ({ file, f })));
+  const all = report.files.flatMap((file) =>
+    file.findings.filter((f) => f.counts === 'block').map((f) => ({ file, f })),
+  );
   if (all.length === 0) return [];
   const rows = all.slice(0, BLOCKERS_LISTED);
   const more = all.length - rows.length;
   const out = ['### What blocks, and the fix', ''];
   for (const [i, { file, f }] of rows.entries()) {
     const metric = f.metric ? ` (${codeSpan(f.metric)})` : '';
-    out.push(`**${i + 1}.** ${codeSpan(file.path)} ${where(file, f, ctx)} · ${codeId(f.rule)}${metric}  `, escapeMarkdown(f.message), '');
+    out.push(
+      `**${i + 1}.** ${codeSpan(file.path)} ${where(file, f, ctx)} · ${codeId(f.rule)}${metric}  `,
+      escapeMarkdown(f.message),
+      '',
+    );
     const fix = fixLines(file, f);
     if (fix.length > 0) out.push(...fix, '');
   }
   for (const file of report.files) {
     const together = file.remedyTogether;
     if (!together) continue;
-    out.push(together.passes
-      ? `All first fixes of ${codeSpan(file.path)} applied together pass these rules: nothing blocks.`
-      : `All first fixes of ${codeSpan(file.path)} applied together still block on ${together.stillBlocking.map((b) => escapeMarkdown(b)).join(', ')}.`, '');
+    out.push(
+      together.passes
+        ? `All first fixes of ${codeSpan(file.path)} applied together pass these rules: nothing blocks.`
+        : `All first fixes of ${codeSpan(file.path)} applied together still block on ${together.stillBlocking.map((b) => escapeMarkdown(b)).join(', ')}.`,
+      '',
+    );
   }
-  if (more > 0) out.push(`… and ${more} more blocking finding${more === 1 ? '' : 's'}, listed under their files below.`, '');
+  if (more > 0)
+    out.push(
+      `… and ${more} more blocking finding${more === 1 ? '' : 's'}, listed under their files below.`,
+      '',
+    );
   if (rows.some(({ f }) => f.remedy)) out.push(`<sub>${escapeMarkdown(PASSES_NOTE)}</sub>`, '');
   return out;
 }
 
 function fileSummary(file: FileDecision): string {
-  const count = (s: 'block' | 'warn' | 'info') => file.findings.filter((f) => f.severity === s).length;
+  const count = (s: 'block' | 'warn' | 'info') =>
+    file.findings.filter((f) => f.severity === s).length;
   const parts = [
     count('block') && `${count('block')} blocking`,
     count('warn') && `${count('warn')} warning${count('warn') === 1 ? '' : 's'}`,
     count('info') && `${count('info')} note${count('info') === 1 ? '' : 's'}`,
   ].filter(Boolean);
   // A <summary> line is an HTML block: no markdown escapes there, HTML entities only.
-  const status = file.status === 'renamed' && file.previousPath ? `, renamed from ${htmlCode(file.previousPath)}`
-    : file.status === 'added' ? ', new file, judged on its own' : '';
+  const status =
+    file.status === 'renamed' && file.previousPath
+      ? `, renamed from ${htmlCode(file.previousPath)}`
+      : file.status === 'added'
+        ? ', new file, judged on its own'
+        : '';
   return `${VERDICT_MARK[file.verdict]} ${htmlCode(file.path)}${status}: ${parts.length > 0 ? parts.join(', ') : 'no findings'}`;
 }
 
@@ -265,14 +368,29 @@ export interface FileSectionParts {
 }
 
 function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectionParts): string {
-  const lines = [`<details${file.verdict === 'ok' ? '' : ''}><summary>${fileSummary(file)}</summary>`, ''];
-  if (file.headError) lines.push(`Could not be read at head: ${escapeMarkdown(file.headError.message)}`, '');
-  if (file.baseError) lines.push(`_The base version could not be read (${escapeMarkdown(file.baseError.message)}); the head is judged on its own._`, '');
-  if (file.assumed) lines.push(`*Assumed:* ${escapeMarkdown(file.assumed.reason)} Values marked *assumed* rest on it.`, '');
+  const lines = [
+    `<details${file.verdict === 'ok' ? '' : ''}><summary>${fileSummary(file)}</summary>`,
+    '',
+  ];
+  if (file.headError)
+    lines.push(`Could not be read at head: ${escapeMarkdown(file.headError.message)}`, '');
+  if (file.baseError)
+    lines.push(
+      `_The base version could not be read (${escapeMarkdown(file.baseError.message)}); the head is judged on its own._`,
+      '',
+    );
+  if (file.assumed)
+    lines.push(
+      `*Assumed:* ${escapeMarkdown(file.assumed.reason)} Values marked *assumed* rest on it.`,
+      '',
+    );
   if (file.head) {
     lines.push(deltaTable(file), '');
     // The reserve is said once, in the memory footnote (†) the fit points to.
-    const fit = [perDeviceText(file.head.spec, file.head.metrics), fitText(file.head.spec, file.head.metrics, false)].filter((t): t is string => t !== null);
+    const fit = [
+      perDeviceText(file.head.spec, file.head.metrics),
+      fitText(file.head.spec, file.head.metrics, false),
+    ].filter((t): t is string => t !== null);
     if (fit.length > 0) lines.push(`Head: ${fit.map((t) => escapeMarkdown(t)).join('; ')} †.`, '');
   }
   // Blocking findings are at the top with their fixes; the others are listed here once.
@@ -280,9 +398,14 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
   const listed = others.slice(0, parts.maxFindings);
   for (const f of listed) {
     const metric = f.metric ? ` (${codeSpan(f.metric)})` : '';
-    lines.push(`- ${severityTag(f)} ${codeId(f.rule)}${metric} ${where(file, f, ctx)}: ${escapeMarkdown(f.message)}`);
+    lines.push(
+      `- ${severityTag(f)} ${codeId(f.rule)}${metric} ${where(file, f, ctx)}: ${escapeMarkdown(f.message)}`,
+    );
   }
-  if (listed.length < others.length) lines.push(`- … ${others.length - listed.length} more findings are in the job summary and the JSON report.`);
+  if (listed.length < others.length)
+    lines.push(
+      `- … ${others.length - listed.length} more findings are in the job summary and the JSON report.`,
+    );
   if (listed.length > 0) lines.push('');
   // One line per distinct change, naming every finding it fixes: the same fix is never listed twice.
   const alternatives = new Map<string, { rules: string[]; remedy: Remedy }>();
@@ -298,12 +421,18 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
     lines.push('Other fixes that pass these rules:');
     // Two at most here: the HTML and JSON reports list every one.
     const listed = [...alternatives.values()];
-    for (const { rules, remedy } of listed.slice(0, MAX_ALTERNATIVES)) lines.push(`- for ${rules.join(', ')}: ${alternativeLine(file, remedy)}`);
-    if (listed.length > MAX_ALTERNATIVES) lines.push(`- ${listed.length - MAX_ALTERNATIVES} more in the HTML and JSON reports.`);
+    for (const { rules, remedy } of listed.slice(0, MAX_ALTERNATIVES))
+      lines.push(`- for ${rules.join(', ')}: ${alternativeLine(file, remedy)}`);
+    if (listed.length > MAX_ALTERNATIVES)
+      lines.push(`- ${listed.length - MAX_ALTERNATIVES} more in the HTML and JSON reports.`);
     lines.push('');
   }
   // The chart where memory is at issue (a memory finding or a memory limit crossed); the HTML report draws every file's.
-  const memoryAtIssue = file.findings.some((f) => f.rule === 'memory-over-budget' || (f.metric !== undefined && f.metric !== null && MEMORY_METRICS.has(f.metric)));
+  const memoryAtIssue = file.findings.some(
+    (f) =>
+      f.rule === 'memory-over-budget' ||
+      (f.metric !== undefined && f.metric !== null && MEMORY_METRICS.has(f.metric)),
+  );
   if (parts.chart && file.head && memoryAtIssue) {
     const chart = memoryChart(file);
     if (chart) lines.push(chart, '');
@@ -322,7 +451,8 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
  */
 function cutToLimit(body: string, limit: number): string {
   if (body.length <= limit) return body;
-  const note = '\n\n_Cut at GitHub\'s comment limit; the job summary and the JSON report have everything._\n';
+  const note =
+    "\n\n_Cut at GitHub's comment limit; the job summary and the JSON report have everything._\n";
   let kept = body.slice(0, Math.max(0, limit - note.length - 200));
   kept = kept.slice(0, kept.lastIndexOf('\n') + 1);
   const fences = (kept.match(/^```/gm) ?? []).length;
@@ -334,15 +464,27 @@ function cutToLimit(body: string, limit: number): string {
 function preamble(report: GateReport, ctx: MarkdownContext): string[] {
   const lines: string[] = [];
   const judged = report.files.length;
-  lines.push(`Judged ${judged} changed model config${judged === 1 ? '' : 's'} between \`${report.base.slice(0, 12)}\` (base) and \`${report.head.slice(0, 12)}\` (head).`, '');
+  lines.push(
+    `Judged ${judged} changed model config${judged === 1 ? '' : 's'} between \`${report.base.slice(0, 12)}\` (base) and \`${report.head.slice(0, 12)}\` (head).`,
+    '',
+  );
   if (report.policy.source === 'built-in') {
-    lines.push(`> [!NOTE]\n> No policy file at ${codeSpan(report.policy.path)} on the base commit: built-in rules only, no numeric limits.`, '');
+    lines.push(
+      `> [!NOTE]\n> No policy file at ${codeSpan(report.policy.path)} on the base commit: built-in rules only, no numeric limits.`,
+      '',
+    );
   }
   if (report.waiver.applied && report.waiver.label) {
-    lines.push(`> [!WARNING]\n> The waiver label ${codeSpan(report.waiver.label)} is on this pull request: ${report.waiver.waivedBlocks} blocking finding${report.waiver.waivedBlocks === 1 ? '' : 's'} counted as warnings.`, '');
+    lines.push(
+      `> [!WARNING]\n> The waiver label ${codeSpan(report.waiver.label)} is on this pull request: ${report.waiver.waivedBlocks} blocking finding${report.waiver.waivedBlocks === 1 ? '' : 's'} counted as warnings.`,
+      '',
+    );
   }
   if (ctx.unannotated && ctx.unannotated > 0) {
-    lines.push(`_${ctx.unannotated} findings were not shown as line annotations (GitHub shows at most 10 errors and 10 warnings per step); all are listed below._`, '');
+    lines.push(
+      `_${ctx.unannotated} findings were not shown as line annotations (GitHub shows at most 10 errors and 10 warnings per step); all are listed below._`,
+      '',
+    );
   }
   return lines;
 }
@@ -352,8 +494,14 @@ function notes(report: GateReport): string[] {
   const lines: string[] = [];
   if (report.policy.changedInHead) {
     const changes = report.policy.limitChanges ?? [];
-    const what = changes.length > 0 ? ` After merge: ${changes.map((c) => codeSpan(c)).join(', ')}.` : ' It judges alike after merge.';
-    lines.push(`> [!NOTE]\n> This pull request changes the policy ${codeSpan(report.policy.path)}; this run judged by the base commit's policy.${what}`, '');
+    const what =
+      changes.length > 0
+        ? ` After merge: ${changes.map((c) => codeSpan(c)).join(', ')}.`
+        : ' It judges alike after merge.';
+    lines.push(
+      `> [!NOTE]\n> This pull request changes the policy ${codeSpan(report.policy.path)}; this run judged by the base commit's policy.${what}`,
+      '',
+    );
   }
   for (const notice of report.notices) lines.push(`> [!NOTE]\n> ${escapeMarkdown(notice)}`, '');
   return lines;
@@ -362,14 +510,24 @@ function notes(report: GateReport): string[] {
 function footer(report: GateReport, ctx: MarkdownContext): string[] {
   const lines: string[] = [];
   if (report.deleted.length > 0) {
-    lines.push(`Deleted, not judged: ${report.deleted.map((d) => codeSpan(d.path)).join(', ')}.`, '');
+    lines.push(
+      `Deleted, not judged: ${report.deleted.map((d) => codeSpan(d.path)).join(', ')}.`,
+      '',
+    );
   }
   if (ctx.htmlReportUrl) {
     const at = ctx.htmlReportWhere ? ` ${escapeMarkdown(ctx.htmlReportWhere)}` : '';
-    lines.push(`Charts, findings and fixes: [the HTML report](${encodeURI(ctx.htmlReportUrl).replace(/[()]/g, (c) => (c === '(' ? '%28' : '%29'))})${at}.`, '');
+    lines.push(
+      `Charts, findings and fixes: [the HTML report](${encodeURI(ctx.htmlReportUrl).replace(/[()]/g, (c) => (c === '(' ? '%28' : '%29'))})${at}.`,
+      '',
+    );
   }
-  const memory = report.files.some((f) => f.head && (f.head.metrics.memoryBytes !== null || f.head.metrics.fitSequences !== null));
-  lines.push(`<sub>${memory ? `† Memory: ${escapeMarkdown(MEMORY_CAUTION)}. ` : ''}${escapeMarkdown(ESTIMATE_NOTICE)}</sub>`);
+  const memory = report.files.some(
+    (f) => f.head && (f.head.metrics.memoryBytes !== null || f.head.metrics.fitSequences !== null),
+  );
+  lines.push(
+    `<sub>${memory ? `† Memory: ${escapeMarkdown(MEMORY_CAUTION)}. ` : ''}${escapeMarkdown(ESTIMATE_NOTICE)}</sub>`,
+  );
   return lines;
 }
 
@@ -388,12 +546,29 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
     { chart: false, details: false, maxFindings: Infinity },
     { chart: false, details: false, maxFindings: 5 },
   ];
-  const head = [COMMENT_MARKER, headline(report), '', ...preamble(report, ctx), ...blockers(report, ctx), ...notes(report)].join('\n');
+  const head = [
+    COMMENT_MARKER,
+    headline(report),
+    '',
+    ...preamble(report, ctx),
+    ...blockers(report, ctx),
+    ...notes(report),
+  ].join('\n');
   const tail = footer(report, ctx).join('\n');
   for (const [index, parts] of attempts.entries()) {
-    const trimNote = index === 0 ? '' : `\n_Trimmed to fit GitHub's comment limit: ${[
-      !parts.details && 'other metrics', !parts.chart && 'charts', parts.maxFindings !== Infinity && `findings past the first ${parts.maxFindings} per file`,
-    ].filter(Boolean).join(', ')} are left out here; the job summary and the JSON report have everything._\n`;
+    const trimNote =
+      index === 0
+        ? ''
+        : `\n_Trimmed to fit GitHub's comment limit: ${[
+            !parts.details && 'other metrics',
+            !parts.chart && 'charts',
+            parts.maxFindings !== Infinity &&
+              `findings past the first ${parts.maxFindings} per file`,
+          ]
+            .filter(Boolean)
+            .join(
+              ', ',
+            )} are left out here; the job summary and the JSON report have everything._\n`;
     const body = `${head}\n${trimNote}\n${report.files.map((f) => fileSection(f, ctx, parts)).join('\n')}\n${tail}\n`;
     if (body.length <= limit) return body;
   }
@@ -421,5 +596,8 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
     used += line.length + 1;
   }
   const note = `\n_Trimmed to fit GitHub's comment limit: ${rest.length} of ${report.files.length} files are listed by name only; the job summary and the JSON report have everything._\n`;
-  return cutToLimit(`${head}\n${note}\n${sections.join('\n')}\n${restLines.join('\n')}\n\n${tail}\n`, limit);
+  return cutToLimit(
+    `${head}\n${note}\n${sections.join('\n')}\n${restLines.join('\n')}\n\n${tail}\n`,
+    limit,
+  );
 }

@@ -14,9 +14,15 @@ export function perDeviceText(spec: ModelSpec, metrics: Metrics): string | null 
   const devices = metrics.devices;
   if (devices === null || devices <= 1 || metrics.weightBytesPerDevice === null) return null;
   const sequences = spec.serving.sequences ?? 1;
-  const cache = metrics.memoryBytesPerDevice === null ? null : metrics.memoryBytesPerDevice - metrics.weightBytesPerDevice;
+  const cache =
+    metrics.memoryBytesPerDevice === null
+      ? null
+      : metrics.memoryBytesPerDevice - metrics.weightBytesPerDevice;
   const layout = `tensor-parallel ${formatInteger(spec.serving.tensorParallel ?? 1)} × pipeline-parallel ${formatInteger(spec.serving.pipelineParallel ?? 1)}`;
-  const at = metrics.evaluationSpan === null ? '' : ` at ${formatInteger(metrics.evaluationSpan)} tokens × ${formatInteger(sequences)} sequence${sequences === 1 ? '' : 's'}`;
+  const at =
+    metrics.evaluationSpan === null
+      ? ''
+      : ` at ${formatInteger(metrics.evaluationSpan)} tokens × ${formatInteger(sequences)} sequence${sequences === 1 ? '' : 's'}`;
   return `per device, ${formatInteger(devices)} devices (${layout}): weights ${formatBytes(metrics.weightBytesPerDevice)}, cache ${formatBytes(cache)}${at}`;
 }
 
@@ -29,8 +35,10 @@ export function fitText(spec: ModelSpec, metrics: Metrics, withReserve = true): 
   if (usable === null || metrics.fitSequences === null) return null;
   const devices = metrics.devices ?? 1;
   const n = metrics.fitSequences;
-  const fit = n > 0 ? `${formatInteger(n)} sequence${n === 1 ? '' : 's'} of ${formatInteger(metrics.evaluationSpan)} tokens fit${devices > 1 ? ' per replica' : ''}`
-    : `no sequence of ${formatInteger(metrics.evaluationSpan)} tokens fits${devices > 1 ? ' a replica' : ''}`;
+  const fit =
+    n > 0
+      ? `${formatInteger(n)} sequence${n === 1 ? '' : 's'} of ${formatInteger(metrics.evaluationSpan)} tokens fit${devices > 1 ? ' per replica' : ''}`
+      : `no sequence of ${formatInteger(metrics.evaluationSpan)} tokens fits${devices > 1 ? ' a replica' : ''}`;
   const reserve = withReserve ? ` (${reserveWords(spec)})` : '';
   return `${fit} in ${formatBytes(usable)} usable of ${formatNumber(spec.serving.deviceGiB ?? null)} GiB${devices > 1 ? ' per device' : ''}${reserve}`;
 }

@@ -8,7 +8,11 @@
 const ZERO_WIDTH_SPACE = '\u200b';
 
 const HTML_ENTITIES: Record<string, string> = {
-  '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;',
+  '&': '&amp;',
+  '<': '&lt;',
+  '>': '&gt;',
+  '"': '&quot;',
+  "'": '&#39;',
 };
 
 /**
@@ -21,7 +25,10 @@ const BIDI_CONTROLS = /[\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
 
 /** `text` with every bidirectional control shown as `<U+XXXX>`, so the order a reader sees is the order of the characters. */
 export function showBidiControls(text: string): string {
-  return text.replace(BIDI_CONTROLS, (c) => `<U+${c.charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}>`);
+  return text.replace(
+    BIDI_CONTROLS,
+    (c) => `<U+${c.charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}>`,
+  );
 }
 
 /** Text for HTML element content or a quoted attribute value. */
@@ -35,16 +42,18 @@ export function escapeHtml(text: string): string {
  * One pass over the characters, so no entity is escaped twice.
  */
 export function escapeMarkdown(text: string): string {
-  return showBidiControls(text)
-    .replace(/\r\n|[\r\n\u2028\u2029]|[\u0000-\u0008\u000b-\u001f\u007f]/g, ' ')
-    .replace(/[&<>"|#\\`*_{}[\]()!~+=-]/g, (c) => MARKDOWN_ESCAPES[c] ?? `\\${c}`)
-    // Mentions, team mentions and issue references are linked from text nodes, after entities
-    // are decoded; a zero-width space after the sign stops the link and reads the same.
-    .replace(/(@|&#35;)(?=[\p{L}\p{N}_])/gu, `$1${ZERO_WIDTH_SPACE}`)
-    // Bare URLs and www. hosts are autolinked; break the scheme separator and the www. prefix.
-    .replace(/:\/\//g, `:${ZERO_WIDTH_SPACE}//`)
-    .replace(/\b(www)\./gi, `$1${ZERO_WIDTH_SPACE}.`)
-    .replace(/ {2,}/g, ' ');
+  return (
+    showBidiControls(text)
+      .replace(/\r\n|[\r\n\u2028\u2029]|[\u0000-\u0008\u000b-\u001f\u007f]/g, ' ')
+      .replace(/[&<>"|#\\`*_{}[\]()!~+=-]/g, (c) => MARKDOWN_ESCAPES[c] ?? `\\${c}`)
+      // Mentions, team mentions and issue references are linked from text nodes, after entities
+      // are decoded; a zero-width space after the sign stops the link and reads the same.
+      .replace(/(@|&#35;)(?=[\p{L}\p{N}_])/gu, `$1${ZERO_WIDTH_SPACE}`)
+      // Bare URLs and www. hosts are autolinked; break the scheme separator and the www. prefix.
+      .replace(/:\/\//g, `:${ZERO_WIDTH_SPACE}//`)
+      .replace(/\b(www)\./gi, `$1${ZERO_WIDTH_SPACE}.`)
+      .replace(/ {2,}/g, ' ')
+  );
 }
 
 /**
@@ -52,7 +61,12 @@ export function escapeMarkdown(text: string): string {
  * reference; other GFM punctuation is backslash-escaped so it prints as itself.
  */
 const MARKDOWN_ESCAPES: Record<string, string> = {
-  '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', '|': '&#124;', '#': '&#35;',
+  '&': '&amp;',
+  '<': '&lt;',
+  '>': '&gt;',
+  '"': '&quot;',
+  '|': '&#124;',
+  '#': '&#35;',
 };
 
 /** Untrusted text shown as code: `<code>` with escaped content (backticks cannot be nested safely). */
@@ -75,7 +89,11 @@ export function codeId(text: string): string {
  * (browsers resolve `..`, also written `%2e%2e`, before requesting).
  */
 export function linkablePath(path: string): boolean {
-  return path !== '' && !path.startsWith('/') && !path.split('/').some((segment) => segment === '' || segment === '.' || segment === '..');
+  return (
+    path !== '' &&
+    !path.startsWith('/') &&
+    !path.split('/').some((segment) => segment === '' || segment === '.' || segment === '..')
+  );
 }
 
 /**
@@ -84,8 +102,14 @@ export function linkablePath(path: string): boolean {
  * let the rest be read as markdown, e.g. an autolinked `www.` host) and `!` `'` `*` `~`.
  */
 export function encodePath(path: string): string {
-  return path.split('/')
-    .map((segment) => encodeURIComponent(segment).replace(/[!'()*~]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`))
+  return path
+    .split('/')
+    .map((segment) =>
+      encodeURIComponent(segment).replace(
+        /[!'()*~]/g,
+        (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`,
+      ),
+    )
     .join('/');
 }
 

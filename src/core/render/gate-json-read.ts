@@ -11,7 +11,14 @@ import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
 import type { GateReport, JudgedFinding, Verdict } from '../compare/decide.js';
 import { METRIC_PATHS } from '../compare/metric-path.js';
-import { FLOAT_FORMATS, LAYER_ATTENTIONS, POSITION_KINDS, SCALING_KINDS, SEVERITIES, STORAGE_DTYPES } from '../model.js';
+import {
+  FLOAT_FORMATS,
+  LAYER_ATTENTIONS,
+  POSITION_KINDS,
+  SCALING_KINDS,
+  SEVERITIES,
+  STORAGE_DTYPES,
+} from '../model.js';
 import type { ModelSpec } from '../model.js';
 import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 import type { Metrics } from '../metrics/types.js';
@@ -48,11 +55,20 @@ const commitId: Schema = { type: 'string', pattern: '^([0-9a-f]{40}|[0-9a-f]{64}
  * A repository path as git lists it: no `.` or `..` segment, no leading `/`, no NUL (a link built
  * from `a/../../x` would leave the blob page for another page of the same host).
  */
-const repoPath: Schema = { type: 'string', minLength: 1, maxLength: 4096, pattern: '^(?!/)(?![\\s\\S]*(^|/)\\.{1,2}(/|$))[^\\u0000]+$' };
+const repoPath: Schema = {
+  type: 'string',
+  minLength: 1,
+  maxLength: 4096,
+  pattern: '^(?!/)(?![\\s\\S]*(^|/)\\.{1,2}(/|$))[^\\u0000]+$',
+};
 const repoPathOrNull: Schema = { anyOf: [repoPath, { type: 'null' }] };
 
 /** An object whose listed properties are all required (mapped from name to schema). */
-function record(properties: Record<string, Schema>, nullable = false, optional: string[] = []): Schema {
+function record(
+  properties: Record<string, Schema>,
+  nullable = false,
+  optional: string[] = [],
+): Schema {
   return {
     type: nullable ? ['object', 'null'] : 'object',
     properties,
@@ -63,142 +79,304 @@ function record(properties: Record<string, Schema>, nullable = false, optional: 
 }
 
 /** A mapping of dotted names (no prototype keys) to values of `value`. */
-function map(value: Schema, names: Schema = { pattern: '^[A-Za-z][A-Za-z0-9]*(\\.[A-Za-z0-9]+)*$', maxLength: 80 }): Schema {
-  return { type: 'object', propertyNames: { ...names, not: { enum: ['__proto__', 'constructor', 'prototype'] } }, additionalProperties: value };
+function map(
+  value: Schema,
+  names: Schema = { pattern: '^[A-Za-z][A-Za-z0-9]*(\\.[A-Za-z0-9]+)*$', maxLength: 80 },
+): Schema {
+  return {
+    type: 'object',
+    propertyNames: { ...names, not: { enum: ['__proto__', 'constructor', 'prototype'] } },
+    additionalProperties: value,
+  };
 }
 
-const numbers = (names: readonly string[]): Record<string, Schema> => Object.fromEntries(names.map((name) => [name, numberOrNull]));
+const numbers = (names: readonly string[]): Record<string, Schema> =>
+  Object.fromEntries(names.map((name) => [name, numberOrNull]));
 
 const precision = record(numbers(PRECISION_METRICS));
 
-const precisionByFormat = record(Object.fromEntries(FLOAT_FORMATS.map((format) => [format, precision])));
+const precisionByFormat = record(
+  Object.fromEntries(FLOAT_FORMATS.map((format) => [format, precision])),
+);
 
 /** Per layer kind (`LayerKindMetrics`). */
 const layerKind = record({
   attention: { enum: [...LAYER_ATTENTIONS] },
   positionCode: { enum: [...POSITION_KINDS] },
   scaled: { type: 'boolean' },
-  ...numbers(['layers', 'window', 'rotaryBase', 'visibleSpan', 'fastestWavelength', 'slowestWavelength', 'unturnedPairs',
-    'exposedPairs', 'separationFloor', 'separationFloorOffset', 'discriminationSpan']),
+  ...numbers([
+    'layers',
+    'window',
+    'rotaryBase',
+    'visibleSpan',
+    'fastestWavelength',
+    'slowestWavelength',
+    'unturnedPairs',
+    'exposedPairs',
+    'separationFloor',
+    'separationFloorOffset',
+    'discriminationSpan',
+  ]),
   precision: precisionByFormat,
 });
 
-const metrics = record({
-  ...numbers(SCALAR_METRICS),
-  alibiSlopes: { type: ['array', 'null'], items: { type: 'number' } },
-  visionParams: numberOrNull,
-  precision: precisionByFormat,
-  layerKinds: { type: ['array', 'null'], items: layerKind },
-}, false, ['layerKinds', 'visionParams']);
+const metrics = record(
+  {
+    ...numbers(SCALAR_METRICS),
+    alibiSlopes: { type: ['array', 'null'], items: { type: 'number' } },
+    visionParams: numberOrNull,
+    precision: precisionByFormat,
+    layerKinds: { type: ['array', 'null'], items: layerKind },
+  },
+  false,
+  ['layerKinds', 'visionParams'],
+);
 
 const booleanOrNull: Schema = { type: ['boolean', 'null'] };
 
-const spec = record({
-  name: textOrNull,
-  ...numbers(['layers', 'hidden', 'heads', 'kvHeads', 'headDim', 'ffn', 'vocab', 'declaredSpan', 'trainedSpan',
-    'slidingWindow', 'windowLayers', 'embeddingInitStd', 'embeddingMultiplier']),
-  gated: { type: 'boolean' },
-  tied: { type: 'boolean' },
-  bias: { type: 'boolean' },
-  experts: record({ ...numbers(['total', 'active', 'width', 'shared', 'sharedWidth', 'denseLayers']), sharedGate: booleanOrNull }, true,
-    ['width', 'shared', 'sharedWidth', 'denseLayers', 'sharedGate']),
-  latent: record(numbers(['kvRank', 'qRank', 'ropeDim', 'nopeDim', 'valueDim']), true),
-  layerTypes: { type: ['array', 'null'], items: { enum: [...LAYER_ATTENTIONS] } },
-  positionFreeLayers: { type: ['array', 'null'], items: { type: 'number' } },
-  ...numbers(['chunkSize', 'localBase', 'layerNorms']),
-  qkNorms: booleanOrNull,
-  encoderOnly: booleanOrNull,
-  encoder: record(numbers(['layers', 'heads', 'kvHeads', 'headDim', 'ffn']), true),
-  vision: record(numbers(['layers', 'hidden', 'ffn', 'patch', 'image', 'channels']), true),
-  position: {
-    ...record({
-      kind: { enum: [...POSITION_KINDS] },
-      base: numberOrNull,
-      fraction: numberOrNull,
-      scaling: record({
-        kind: { enum: [...SCALING_KINDS] }, ...numbers(['factor', 'originalSpan', 'alpha', 'beta', 'low', 'high', 'attentionFactor']),
-        shortFactors: { type: ['array', 'null'], items: { type: 'number' } },
-        longFactors: { type: ['array', 'null'], items: { type: 'number' } },
-      }, true, ['shortFactors', 'longFactors', 'attentionFactor']),
-      buckets: numberOrNull,
-      maxDistance: numberOrNull,
-    }, false, ['base', 'fraction', 'scaling', 'buckets', 'maxDistance']),
-    if: { properties: { kind: { const: 'rotary' } } },
-    then: { required: ['base', 'fraction', 'scaling'] },
+const spec = record(
+  {
+    name: textOrNull,
+    ...numbers([
+      'layers',
+      'hidden',
+      'heads',
+      'kvHeads',
+      'headDim',
+      'ffn',
+      'vocab',
+      'declaredSpan',
+      'trainedSpan',
+      'slidingWindow',
+      'windowLayers',
+      'embeddingInitStd',
+      'embeddingMultiplier',
+    ]),
+    gated: { type: 'boolean' },
+    tied: { type: 'boolean' },
+    bias: { type: 'boolean' },
+    experts: record(
+      {
+        ...numbers(['total', 'active', 'width', 'shared', 'sharedWidth', 'denseLayers']),
+        sharedGate: booleanOrNull,
+      },
+      true,
+      ['width', 'shared', 'sharedWidth', 'denseLayers', 'sharedGate'],
+    ),
+    latent: record(numbers(['kvRank', 'qRank', 'ropeDim', 'nopeDim', 'valueDim']), true),
+    layerTypes: { type: ['array', 'null'], items: { enum: [...LAYER_ATTENTIONS] } },
+    positionFreeLayers: { type: ['array', 'null'], items: { type: 'number' } },
+    ...numbers(['chunkSize', 'localBase', 'layerNorms']),
+    qkNorms: booleanOrNull,
+    encoderOnly: booleanOrNull,
+    encoder: record(numbers(['layers', 'heads', 'kvHeads', 'headDim', 'ffn']), true),
+    vision: record(numbers(['layers', 'hidden', 'ffn', 'patch', 'image', 'channels']), true),
+    position: {
+      ...record(
+        {
+          kind: { enum: [...POSITION_KINDS] },
+          base: numberOrNull,
+          fraction: numberOrNull,
+          scaling: record(
+            {
+              kind: { enum: [...SCALING_KINDS] },
+              ...numbers([
+                'factor',
+                'originalSpan',
+                'alpha',
+                'beta',
+                'low',
+                'high',
+                'attentionFactor',
+              ]),
+              shortFactors: { type: ['array', 'null'], items: { type: 'number' } },
+              longFactors: { type: ['array', 'null'], items: { type: 'number' } },
+            },
+            true,
+            ['shortFactors', 'longFactors', 'attentionFactor'],
+          ),
+          buckets: numberOrNull,
+          maxDistance: numberOrNull,
+        },
+        false,
+        ['base', 'fraction', 'scaling', 'buckets', 'maxDistance'],
+      ),
+      if: { properties: { kind: { const: 'rotary' } } },
+      then: { required: ['base', 'fraction', 'scaling'] },
+    },
+    dtypes: record({
+      weights: { enum: [...STORAGE_DTYPES, null] },
+      cache: { enum: [...STORAGE_DTYPES, null] },
+      positions: { enum: [...FLOAT_FORMATS, null] },
+    }),
+    serving: record(
+      numbers([
+        'span',
+        'sequences',
+        'deviceGiB',
+        'reserve',
+        'outputTokens',
+        'promptTokens',
+        'tensorParallel',
+        'pipelineParallel',
+        'activationReserveGiB',
+      ]),
+      false,
+      ['tensorParallel', 'pipelineParallel', 'activationReserveGiB'],
+    ),
+    quantization: record(
+      {
+        method: text,
+        ...numbers(['bits', 'groupSize', 'scaleBits']),
+        zeroPoint: { type: 'boolean' },
+        output: { type: 'boolean' },
+      },
+      true,
+    ),
   },
-  dtypes: record({
-    weights: { enum: [...STORAGE_DTYPES, null] },
-    cache: { enum: [...STORAGE_DTYPES, null] },
-    positions: { enum: [...FLOAT_FORMATS, null] },
-  }),
-  serving: record(numbers(['span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens', 'tensorParallel',
-    'pipelineParallel', 'activationReserveGiB']), false, ['tensorParallel', 'pipelineParallel', 'activationReserveGiB']),
-  quantization: record({
-    method: text, ...numbers(['bits', 'groupSize', 'scaleBits']), zeroPoint: { type: 'boolean' }, output: { type: 'boolean' },
-  }, true),
-}, false, ['latent', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly', 'quantization', 'vision']);
+  false,
+  [
+    'latent',
+    'layerTypes',
+    'positionFreeLayers',
+    'chunkSize',
+    'localBase',
+    'layerNorms',
+    'qkNorms',
+    'encoderOnly',
+    'quantization',
+    'vision',
+  ],
+);
 
 const location = record({ key: text, line: lineOrNull });
 const version = record({ spec, metrics }, true);
 /** The head also carries where each field was stated (optional: reports written before it lack it). */
 const headVersion = record({ spec, metrics, locations: map(location) }, true, ['locations']);
 
-const failure = record({ path: text, line: lineOrNull, message: text, notAModel: { type: 'boolean' } }, true, ['notAModel']);
+const failure = record(
+  { path: text, line: lineOrNull, message: text, notAModel: { type: 'boolean' } },
+  true,
+  ['notAModel'],
+);
 
-const limit = record({ max: { type: 'number' }, min: { type: 'number' }, maxIncreasePct: { type: 'number' }, severity }, true, ['max', 'min', 'maxIncreasePct']);
+const limit = record(
+  {
+    max: { type: 'number' },
+    min: { type: 'number' },
+    maxIncreasePct: { type: 'number' },
+    severity,
+  },
+  true,
+  ['max', 'min', 'maxIncreasePct'],
+);
 
-const delta = record({
-  metric: { enum: [...METRIC_PATHS] },
-  base: numberOrNull, head: numberOrNull, change: numberOrNull, changePct: numberOrNull,
-  limit,
-  state: { enum: ['ok', 'crossed', 'unjudged'] },
-  note: text,
-}, false, ['note']);
+const delta = record(
+  {
+    metric: { enum: [...METRIC_PATHS] },
+    base: numberOrNull,
+    head: numberOrNull,
+    change: numberOrNull,
+    changePct: numberOrNull,
+    limit,
+    state: { enum: ['ok', 'crossed', 'unjudged'] },
+    note: text,
+  },
+  false,
+  ['note'],
+);
 
 /** A remedy (`src/core/remedy/types.ts`): the change, the metrics it gives, the findings it raises. */
-const remedy = record({
-  change: map({ type: ['number', 'string'] }),
-  metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
-  raises: { type: 'array', items: identity },
-  cost: text,
-}, false, ['cost']);
+const remedy = record(
+  {
+    change: map({ type: ['number', 'string'] }),
+    metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
+    raises: { type: 'array', items: identity },
+    cost: text,
+  },
+  false,
+  ['cost'],
+);
 
-const finding = record({
-  rule: ruleId, severity, message: text, key: textOrNull, line: lineOrNull,
-  standing: { type: 'boolean' }, counts: { enum: [...SEVERITIES, null] }, waived: { type: 'boolean' }, file: repoPath,
-  metric: { enum: [...METRIC_PATHS] },
-  remedy: { ...remedy, type: ['object', 'null'] },
-  remedyWhyNot: textOrNull,
-  remedyAlternatives: { type: 'array', items: remedy },
-}, false, ['metric', 'remedy', 'remedyWhyNot', 'remedyAlternatives']);
+const finding = record(
+  {
+    rule: ruleId,
+    severity,
+    message: text,
+    key: textOrNull,
+    line: lineOrNull,
+    standing: { type: 'boolean' },
+    counts: { enum: [...SEVERITIES, null] },
+    waived: { type: 'boolean' },
+    file: repoPath,
+    metric: { enum: [...METRIC_PATHS] },
+    remedy: { ...remedy, type: ['object', 'null'] },
+    remedyWhyNot: textOrNull,
+    remedyAlternatives: { type: 'array', items: remedy },
+  },
+  false,
+  ['metric', 'remedy', 'remedyWhyNot', 'remedyAlternatives'],
+);
 
 const verdict: Schema = { enum: ['ok', 'warn', 'block'] };
 const status: Schema = { enum: ['added', 'modified', 'renamed', 'deleted'] };
 
-const file = record({
-  path: repoPath, previousPath: repoPathOrNull, status, dialect: { enum: ['context-reach', 'checkpoint', null] }, verdict,
-  deltas: { type: 'array', items: delta },
-  findings: { type: 'array', items: finding },
-  base: version, head: headVersion, baseError: failure, headError: failure,
-  remedyTogether: record({
-    change: map({ type: ['number', 'string'] }),
-    metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
-    passes: { type: 'boolean' },
-    stillBlocking: { type: 'array', items: identity },
-  }, true),
-  assumed: record({ metrics: { type: 'array', items: { enum: [...METRIC_PATHS] } }, reason: text }, true),
-}, false, ['remedyTogether', 'assumed']);
+const file = record(
+  {
+    path: repoPath,
+    previousPath: repoPathOrNull,
+    status,
+    dialect: { enum: ['context-reach', 'checkpoint', null] },
+    verdict,
+    deltas: { type: 'array', items: delta },
+    findings: { type: 'array', items: finding },
+    base: version,
+    head: headVersion,
+    baseError: failure,
+    headError: failure,
+    remedyTogether: record(
+      {
+        change: map({ type: ['number', 'string'] }),
+        metrics: map(numberOrNull, { enum: [...METRIC_PATHS] }),
+        passes: { type: 'boolean' },
+        stillBlocking: { type: 'array', items: identity },
+      },
+      true,
+    ),
+    assumed: record(
+      { metrics: { type: 'array', items: { enum: [...METRIC_PATHS] } }, reason: text },
+      true,
+    ),
+  },
+  false,
+  ['remedyTogether', 'assumed'],
+);
 
 /** The JSON Schema of the report `renderGateJson` writes (version 1). */
 export const GATE_JSON_SCHEMA: Readonly<Schema> = {
   ...record({
     version: { const: 1 },
-    verdict, blocking: count, warnings: count,
-    base: commitId, head: commitId,
-    policy: record({ source: { enum: ['file', 'built-in'] }, path: text, changedInHead: { type: 'boolean' }, limitChanges: { type: 'array', items: text } }, false, ['limitChanges']),
+    verdict,
+    blocking: count,
+    warnings: count,
+    base: commitId,
+    head: commitId,
+    policy: record(
+      {
+        source: { enum: ['file', 'built-in'] },
+        path: text,
+        changedInHead: { type: 'boolean' },
+        limitChanges: { type: 'array', items: text },
+      },
+      false,
+      ['limitChanges'],
+    ),
     waiver: record({ label: textOrNull, applied: { type: 'boolean' }, waivedBlocks: count }),
     notices: { type: 'array', items: text },
-    deleted: { type: 'array', items: record({ status, path: repoPath, previousPath: repoPathOrNull }) },
+    deleted: {
+      type: 'array',
+      items: record({ status, path: repoPath, previousPath: repoPathOrNull }),
+    },
     files: { type: 'array', items: file },
   }),
 };
@@ -207,22 +385,38 @@ let compiled: ValidateFunction | null = null;
 
 function validator(): ValidateFunction {
   // removeAdditional drops what `additionalProperties: false` does not admit instead of failing.
-  compiled ??= new Ajv({ strict: true, strictRequired: false, allowUnionTypes: true, removeAdditional: true, allErrors: false }).compile(GATE_JSON_SCHEMA);
+  compiled ??= new Ajv({
+    strict: true,
+    strictRequired: false,
+    allowUnionTypes: true,
+    removeAdditional: true,
+    allErrors: false,
+  }).compile(GATE_JSON_SCHEMA);
   return compiled;
 }
 
 function describe(error: ErrorObject, root: unknown): string {
   let value: unknown = root;
   for (const part of error.instancePath.split('/').slice(1)) {
-    value = value !== null && typeof value === 'object' ? (value as Record<string, unknown>)[part.replace(/~1/g, '/').replace(/~0/g, '~')] : undefined;
+    value =
+      value !== null && typeof value === 'object'
+        ? (value as Record<string, unknown>)[part.replace(/~1/g, '/').replace(/~0/g, '~')]
+        : undefined;
   }
   // Collections are named, not printed: a tampered report may nest them without end.
-  const shown = Array.isArray(value) ? 'a list' : value !== null && typeof value === 'object' ? 'a mapping' : JSON.stringify(value) ?? 'nothing';
+  const shown = Array.isArray(value)
+    ? 'a list'
+    : value !== null && typeof value === 'object'
+      ? 'a mapping'
+      : (JSON.stringify(value) ?? 'nothing');
   const quoted = shown.length > 60 ? `${shown.slice(0, 57)}...` : shown;
   const where = error.instancePath === '' ? 'the top level' : error.instancePath;
-  const expected = error.keyword === 'required' ? `a field ${JSON.stringify((error.params as { missingProperty: string }).missingProperty)}`
-    : error.keyword === 'enum' ? `one of ${(error.params as { allowedValues: unknown[] }).allowedValues.map((v) => JSON.stringify(v)).join(', ')}`
-      : error.message ?? error.keyword;
+  const expected =
+    error.keyword === 'required'
+      ? `a field ${JSON.stringify((error.params as { missingProperty: string }).missingProperty)}`
+      : error.keyword === 'enum'
+        ? `one of ${(error.params as { allowedValues: unknown[] }).allowedValues.map((v) => JSON.stringify(v)).join(', ')}`
+        : (error.message ?? error.keyword);
   return `${where} is ${quoted}; expected ${expected}`;
 }
 
@@ -244,12 +438,48 @@ function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
 
 /** Spec fields that are null by design ("not stated"); every other null was a NaN. */
 const NULLABLE_SPEC_FIELDS = new Set([
-  'name', 'experts', 'encoder', 'vision', 'scaling', 'originalSpan', 'shortFactors', 'longFactors', 'attentionFactor', 'trainedSpan', 'slidingWindow', 'windowLayers',
-  'weights', 'cache', 'positions', 'embeddingInitStd', 'embeddingMultiplier',
-  'span', 'sequences', 'deviceGiB', 'reserve', 'outputTokens', 'promptTokens', 'tensorParallel', 'pipelineParallel',
-  'activationReserveGiB', 'quantization', 'groupSize',
-  'latent', 'qRank', 'layerTypes', 'positionFreeLayers', 'chunkSize', 'localBase', 'layerNorms', 'qkNorms', 'encoderOnly',
-  'width', 'shared', 'sharedWidth', 'sharedGate', 'denseLayers',
+  'name',
+  'experts',
+  'encoder',
+  'vision',
+  'scaling',
+  'originalSpan',
+  'shortFactors',
+  'longFactors',
+  'attentionFactor',
+  'trainedSpan',
+  'slidingWindow',
+  'windowLayers',
+  'weights',
+  'cache',
+  'positions',
+  'embeddingInitStd',
+  'embeddingMultiplier',
+  'span',
+  'sequences',
+  'deviceGiB',
+  'reserve',
+  'outputTokens',
+  'promptTokens',
+  'tensorParallel',
+  'pipelineParallel',
+  'activationReserveGiB',
+  'quantization',
+  'groupSize',
+  'latent',
+  'qRank',
+  'layerTypes',
+  'positionFreeLayers',
+  'chunkSize',
+  'localBase',
+  'layerNorms',
+  'qkNorms',
+  'encoderOnly',
+  'width',
+  'shared',
+  'sharedWidth',
+  'sharedGate',
+  'denseLayers',
 ]);
 
 /**
@@ -259,7 +489,11 @@ const NULLABLE_SPEC_FIELDS = new Set([
  */
 export function readGateJson(text: string, file: string): GateReport {
   if (text.length > MAX_REPORT_CHARS) {
-    throw new ReadError(file, null, `is ${text.length} characters long; a report is read up to ${MAX_REPORT_CHARS}`);
+    throw new ReadError(
+      file,
+      null,
+      `is ${text.length} characters long; a report is read up to ${MAX_REPORT_CHARS}`,
+    );
   }
   let value: unknown;
   try {
@@ -268,35 +502,61 @@ export function readGateJson(text: string, file: string): GateReport {
     const message = error instanceof Error ? error.message : String(error);
     const at = /position (\d+)/.exec(message);
     const line = at ? text.slice(0, Number(at[1])).split('\n').length : null;
-    throw new ReadError(file, line, `is not a JSON report: ${message.replace(/ in JSON at position \d+.*$/s, '')}`);
+    throw new ReadError(
+      file,
+      line,
+      `is not a JSON report: ${message.replace(/ in JSON at position \d+.*$/s, '')}`,
+    );
   }
   const validate = validator();
   if (!validate(value)) {
-    throw new ReadError(file, null, `is not a context-reach report of version 1: ${describe(validate.errors![0]!, value)}`);
+    throw new ReadError(
+      file,
+      null,
+      `is not a context-reach report of version 1: ${describe(validate.errors![0]!, value)}`,
+    );
   }
   const report = value as GateReport;
   for (const [index, decision] of report.files.entries()) {
     for (const side of ['base', 'head'] as const) {
       const read = decision[side] as unknown as { spec: unknown; metrics: Metrics } | null;
-      decision[side] = read === null ? null : {
-        path: decision.path, dialect: decision.dialect ?? 'checkpoint', locations: {}, findings: [],
-        spec: restoreNaN(read.spec, NULLABLE_SPEC_FIELDS) as ModelSpec, metrics: read.metrics,
-      };
+      decision[side] =
+        read === null
+          ? null
+          : {
+              path: decision.path,
+              dialect: decision.dialect ?? 'checkpoint',
+              locations: {},
+              findings: [],
+              spec: restoreNaN(read.spec, NULLABLE_SPEC_FIELDS) as ModelSpec,
+              metrics: read.metrics,
+            };
     }
     if (decision.verdict !== verdictOf(decision.findings)) {
-      throw new ReadError(file, null, `/files/${index}/verdict is "${decision.verdict}" but its findings make it "${verdictOf(decision.findings)}"; the report was altered`);
+      throw new ReadError(
+        file,
+        null,
+        `/files/${index}/verdict is "${decision.verdict}" but its findings make it "${verdictOf(decision.findings)}"; the report was altered`,
+      );
     }
   }
   const all = report.files.flatMap((decision) => decision.findings);
   const expected: Record<'verdict' | 'blocking' | 'warnings' | 'waivedBlocks', string | number> = {
-    verdict: verdictOf(all), blocking: all.filter((f) => f.counts === 'block').length, warnings: all.filter((f) => f.counts === 'warn').length, waivedBlocks: 0,
+    verdict: verdictOf(all),
+    blocking: all.filter((f) => f.counts === 'block').length,
+    warnings: all.filter((f) => f.counts === 'warn').length,
+    waivedBlocks: 0,
   };
   expected.waivedBlocks = all.filter((f) => f.waived).length;
   for (const key of ['verdict', 'blocking', 'warnings', 'waivedBlocks'] as const) {
     const stated = key === 'waivedBlocks' ? report.waiver.waivedBlocks : report[key];
     const path = key === 'waivedBlocks' ? '/waiver/waivedBlocks' : `/${key}`;
     if (stated !== expected[key]) {
-      throw new ReadError(file, null, `${path} is ${JSON.stringify(stated)} but the findings make it ${JSON.stringify(expected[key])}; the report was altered`);
+      throw new ReadError(
+        file,
+        null,
+        `${path} is ${JSON.stringify(stated)} but the findings make it ${JSON.stringify(expected[key])}; the report was altered`,
+      );
     }
   }
   return report;

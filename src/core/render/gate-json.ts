@@ -20,25 +20,31 @@ export function renderGateJson(report: GateReport): string {
     findings: file.findings,
     base: file.base ? { spec: file.base.spec, metrics: file.base.metrics } : null,
     // Where each field was stated: the fixes are shown in the file's own keys from it.
-    head: file.head ? { spec: file.head.spec, metrics: file.head.metrics, locations: file.head.locations } : null,
+    head: file.head
+      ? { spec: file.head.spec, metrics: file.head.metrics, locations: file.head.locations }
+      : null,
     baseError: file.baseError,
     headError: file.headError,
     ...(file.remedyTogether ? { remedyTogether: file.remedyTogether } : {}),
     ...(file.assumed ? { assumed: file.assumed } : {}),
   }));
-  return `${JSON.stringify({
-    version: report.version,
-    toolVersion: VERSION,
-    notice: ESTIMATE_NOTICE,
-    verdict: report.verdict,
-    blocking: report.blocking,
-    warnings: report.warnings,
-    base: report.base,
-    head: report.head,
-    policy: report.policy,
-    waiver: report.waiver,
-    notices: report.notices,
-    deleted: report.deleted,
-    files,
-  }, null, 2)}\n`;
+  return `${JSON.stringify(
+    {
+      version: report.version,
+      toolVersion: VERSION,
+      notice: ESTIMATE_NOTICE,
+      verdict: report.verdict,
+      blocking: report.blocking,
+      warnings: report.warnings,
+      base: report.base,
+      head: report.head,
+      policy: report.policy,
+      waiver: report.waiver,
+      notices: report.notices,
+      deleted: report.deleted,
+      files,
+    },
+    null,
+    2,
+  )}\n`;
 }

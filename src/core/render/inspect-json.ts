@@ -14,11 +14,29 @@ export function renderInspectJson(reports: FileReport[], failures: FileFailure[]
   const files = [
     ...reports.map((r) => {
       const together = (r as { remedyTogether?: unknown }).remedyTogether;
-      return { path: r.path, dialect: r.dialect, spec: r.spec, metrics: r.metrics, findings: r.findings, ...(together ? { remedyTogether: together } : {}) };
+      return {
+        path: r.path,
+        dialect: r.dialect,
+        spec: r.spec,
+        metrics: r.metrics,
+        findings: r.findings,
+        ...(together ? { remedyTogether: together } : {}),
+      };
     }),
     ...failures.map((f) => ({
-      path: f.path, dialect: null, spec: null, metrics: null,
-      findings: [{ rule: 'config-unreadable', severity: 'block', message: f.message, key: null, line: f.line }],
+      path: f.path,
+      dialect: null,
+      spec: null,
+      metrics: null,
+      findings: [
+        {
+          rule: 'config-unreadable',
+          severity: 'block',
+          message: f.message,
+          key: null,
+          line: f.line,
+        },
+      ],
       error: { message: f.message, line: f.line },
     })),
   ];

@@ -9,10 +9,18 @@ import type { LimitState, MetricDelta, Verdict } from '../compare/decide.js';
 import type { Severity } from '../model.js';
 
 export const SEVERITY_MARK: Record<Severity, string> = { block: '■', warn: '▲', info: '●' };
-export const SEVERITY_WORD: Record<Severity, string> = { block: 'blocks', warn: 'warning', info: 'note' };
+export const SEVERITY_WORD: Record<Severity, string> = {
+  block: 'blocks',
+  warn: 'warning',
+  info: 'note',
+};
 
 export const VERDICT_MARK: Record<Verdict, string> = { block: '■', warn: '▲', ok: '✓' };
-export const VERDICT_WORD: Record<Verdict, string> = { block: 'Blocked', warn: 'Passes with warnings', ok: 'Passes' };
+export const VERDICT_WORD: Record<Verdict, string> = {
+  block: 'Blocked',
+  warn: 'Passes with warnings',
+  ok: 'Passes',
+};
 
 /** The state cell of a limited metric, in words: `within`, `crossed (warning)`, `not judged: …`. */
 export function limitStateWord(delta: Pick<MetricDelta, 'state' | 'limit' | 'note'>): string {
@@ -31,10 +39,15 @@ export function limitStateMark(delta: Pick<MetricDelta, 'state' | 'limit'>): str
 }
 
 /** Said beside every memory figure: what it counts. */
-export const MEMORY_CAUTION = 'weights and key/value cache only; the usable memory leaves out the reserve (10 % unless the policy says otherwise) kept for activations, workspace and fragmentation';
+export const MEMORY_CAUTION =
+  'weights and key/value cache only; the usable memory leaves out the reserve (10 % unless the policy says otherwise) kept for activations, workspace and fragmentation';
 
 /** Memory figures the caution goes beside. */
-export const MEMORY_METRICS: ReadonlySet<string> = new Set(['memoryBytes', 'fitSequences', 'cacheBytesAtSpan']);
+export const MEMORY_METRICS: ReadonlySet<string> = new Set([
+  'memoryBytes',
+  'fitSequences',
+  'cacheBytesAtSpan',
+]);
 
 /** The same caution, short enough for a card or a chart label. */
 export const MEMORY_CAUTION_SHORT = 'weights and cache only, plus the reserve';

@@ -41,16 +41,22 @@ export function memoryChart(file: FileDecision): string | null {
   const spans = chartSpans(base?.metrics.evaluationSpan ?? null, head.metrics.evaluationSpan);
   if (spans.length < 2) return null;
   const series: { name: string; values: number[] }[] = [];
-  for (const [name, report] of [['base', base], ['head', head]] as const) {
+  for (const [name, report] of [
+    ['base', base],
+    ['head', head],
+  ] as const) {
     if (!report) continue;
     const values = spans.map((s) => memoryAtSpan(report.spec, s));
-    if (values.every((v): v is number => v !== null)) series.push({ name, values: values.map((v) => v / GIB) });
+    if (values.every((v): v is number => v !== null))
+      series.push({ name, values: values.map((v) => v / GIB) });
   }
   if (series.length === 0) return null;
-  const several = (head.metrics.devices ?? 1) > 1 || (base !== null && (base.metrics.devices ?? 1) > 1);
+  const several =
+    (head.metrics.devices ?? 1) > 1 || (base !== null && (base.metrics.devices ?? 1) > 1);
   const each = several ? ' per device' : '';
   const budget = usableDeviceBytes(head.spec);
-  if (budget !== null) series.push({ name: `usable memory${each}`, values: spans.map(() => budget / GIB) });
+  if (budget !== null)
+    series.push({ name: `usable memory${each}`, values: spans.map(() => budget / GIB) });
   const top = Math.max(...series.flatMap((s) => s.values));
   const round = (v: number) => formatNumber(v, 4).replace(/,/g, '');
   const lines = [
@@ -63,8 +69,13 @@ export function memoryChart(file: FileDecision): string | null {
     '```',
   ];
   const legend = series.map((s, i) => `${i + 1}. ${s.name}`).join(' · ');
-  const same = base && series.length >= 3 && series[0]!.values.every((v, i) => Math.abs(v - series[1]!.values[i]!) <= 1e-9 * v);
-  const words = same ? ` Base and head draw the same line: ${sameCurveWords(base.spec, head.spec)}.` : '';
+  const same =
+    base &&
+    series.length >= 3 &&
+    series[0]!.values.every((v, i) => Math.abs(v - series[1]!.values[i]!) <= 1e-9 * v);
+  const words = same
+    ? ` Base and head draw the same line: ${sameCurveWords(base.spec, head.spec)}.`
+    : '';
   const served = `The head serves ${formatInteger(head.metrics.evaluationSpan)} tokens; usable memory ${budget !== null ? `${formatNumber(budget / GIB, 3)} GiB` : 'is not given'}.`;
   return `<details><summary>Memory against span</summary>\n\n${lines.join('\n')}\n\nLines, in order: ${legend}.${words} ${served}\n\n</details>`;
 }

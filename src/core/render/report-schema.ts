@@ -17,14 +17,30 @@ export function publishedReportSchema(): Schema {
     $schema: 'http://json-schema.org/draft-07/schema#',
     $id: schemaUrl('report.schema.json'),
     title: 'context-reach report',
-    description: 'The JSON report of the context-reach gate (`context-reach diff --format json`, the action\'s `report-json`): the verdict, and per changed model config both versions\' spec, metrics, deltas and findings with their remedies. Numbers are estimates from the config alone.',
+    description:
+      "The JSON report of the context-reach gate (`context-reach diff --format json`, the action's `report-json`): the verdict, and per changed model config both versions' spec, metrics, deltas and findings with their remedies. Numbers are estimates from the config alone.",
     ...GATE_JSON_SCHEMA,
     properties: {
-      version: { ...version, description: 'Version of the report\'s shape; bumped on any incompatible change.' },
-      toolVersion: { type: 'string', pattern: '^\\d+\\.\\d+\\.\\d+(?:[-+][0-9A-Za-z.-]+)?$', description: 'The context-reach release that wrote the report.' },
-      notice: { type: 'string', description: 'What the numbers are: estimates from the config alone.' },
+      version: {
+        ...version,
+        description: "Version of the report's shape; bumped on any incompatible change.",
+      },
+      toolVersion: {
+        type: 'string',
+        pattern: '^\\d+\\.\\d+\\.\\d+(?:[-+][0-9A-Za-z.-]+)?$',
+        description: 'The context-reach release that wrote the report.',
+      },
+      notice: {
+        type: 'string',
+        description: 'What the numbers are: estimates from the config alone.',
+      },
       ...rest,
     },
-    required: ['version', 'toolVersion', 'notice', ...required.filter((name) => name !== 'version')],
+    required: [
+      'version',
+      'toolVersion',
+      'notice',
+      ...required.filter((name) => name !== 'version'),
+    ],
   };
 }

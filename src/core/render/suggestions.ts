@@ -56,7 +56,11 @@ export function suggestionIdOf(body: string): string | null {
  * is a whole-line edit of lines in the diff. `texts` holds each model file at head; `diffLines`
  * the lines of each path that are part of the diff (right side).
  */
-export function planSuggestions(report: GateReport, texts: ReadonlyMap<string, string>, diffLines: ReadonlyMap<string, ReadonlySet<number>>): PlannedSuggestion[] {
+export function planSuggestions(
+  report: GateReport,
+  texts: ReadonlyMap<string, string>,
+  diffLines: ReadonlyMap<string, ReadonlySet<number>>,
+): PlannedSuggestion[] {
   const planned: PlannedSuggestion[] = [];
   for (const file of report.files) {
     const text = texts.get(file.path);
@@ -72,10 +76,16 @@ export function planSuggestions(report: GateReport, texts: ReadonlyMap<string, s
         let inDiff = true;
         for (let n = edit.startLine; n <= edit.endLine; n++) if (!lines.has(n)) inDiff = false;
         if (!inDiff) continue;
-        const values = metricParts(remedy.metrics).slice(0, 3).map((m) => `${m.metric} ${m.value}`).join(', ');
+        const values = metricParts(remedy.metrics)
+          .slice(0, 3)
+          .map((m) => `${m.metric} ${m.value}`)
+          .join(', ');
         const needs = needsText(remedyNeeds(remedy.change, file.head.spec));
         planned.push({
-          id: suggestionId(file, finding), path: file.path, startLine: edit.startLine, line: edit.endLine,
+          id: suggestionId(file, finding),
+          path: file.path,
+          startLine: edit.startLine,
+          line: edit.endLine,
           body: [
             `${SUGGESTION_MARKER}${suggestionId(file, finding)} -->`,
             `**context-reach** · \`${finding.rule}\`${finding.metric ? ` (\`${finding.metric}\`)` : ''}: this fix passes these rules (${escapeMarkdown(values)}); it still needs ${escapeMarkdown(needs)}.`,

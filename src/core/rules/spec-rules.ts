@@ -34,20 +34,55 @@ const SIZE_FIELDS: readonly SizeField[] = [
   { field: 'declaredSpan', get: (s) => s.declaredSpan, what: 'the maximum positions in tokens' },
   { field: 'trainedSpan', get: (s) => s.trainedSpan, what: 'the span trained at, in tokens' },
   { field: 'experts.total', get: (s) => s.experts?.total, what: 'the number of experts' },
-  { field: 'experts.active', get: (s) => s.experts?.active, what: 'the number of experts each token uses' },
+  {
+    field: 'experts.active',
+    get: (s) => s.experts?.active,
+    what: 'the number of experts each token uses',
+  },
   { field: 'encoder.layers', get: (s) => s.encoder?.layers, what: 'the number of encoder layers' },
   { field: 'encoder.heads', get: (s) => s.encoder?.heads, what: 'the number of encoder heads' },
-  { field: 'encoder.kvHeads', get: (s) => s.encoder?.kvHeads, what: 'the number of encoder key/value heads' },
-  { field: 'encoder.headDim', get: (s) => s.encoder?.headDim, what: 'the width of one encoder head' },
+  {
+    field: 'encoder.kvHeads',
+    get: (s) => s.encoder?.kvHeads,
+    what: 'the number of encoder key/value heads',
+  },
+  {
+    field: 'encoder.headDim',
+    get: (s) => s.encoder?.headDim,
+    what: 'the width of one encoder head',
+  },
   { field: 'encoder.ffn', get: (s) => s.encoder?.ffn, what: 'the encoder feed-forward width' },
   { field: 'experts.width', get: (s) => s.experts?.width, what: 'the width of one routed expert' },
-  { field: 'experts.shared', get: (s) => s.experts?.shared, what: 'the number of shared experts', min: 0 },
-  { field: 'experts.sharedWidth', get: (s) => s.experts?.sharedWidth, what: 'the width of one shared expert' },
-  { field: 'experts.denseLayers', get: (s) => s.experts?.denseLayers, what: 'the number of dense layers', min: 0 },
+  {
+    field: 'experts.shared',
+    get: (s) => s.experts?.shared,
+    what: 'the number of shared experts',
+    min: 0,
+  },
+  {
+    field: 'experts.sharedWidth',
+    get: (s) => s.experts?.sharedWidth,
+    what: 'the width of one shared expert',
+  },
+  {
+    field: 'experts.denseLayers',
+    get: (s) => s.experts?.denseLayers,
+    what: 'the number of dense layers',
+    min: 0,
+  },
   { field: 'latent.kvRank', get: (s) => s.latent?.kvRank, what: 'the compressed key/value width' },
   { field: 'latent.qRank', get: (s) => s.latent?.qRank, what: 'the compressed query width' },
-  { field: 'latent.ropeDim', get: (s) => s.latent?.ropeDim, what: 'the decoupled rotary width per head' },
-  { field: 'latent.nopeDim', get: (s) => s.latent?.nopeDim, what: 'the query/key width without position code per head', min: 0 },
+  {
+    field: 'latent.ropeDim',
+    get: (s) => s.latent?.ropeDim,
+    what: 'the decoupled rotary width per head',
+  },
+  {
+    field: 'latent.nopeDim',
+    get: (s) => s.latent?.nopeDim,
+    what: 'the query/key width without position code per head',
+    min: 0,
+  },
   { field: 'latent.valueDim', get: (s) => s.latent?.valueDim, what: 'the value width per head' },
   { field: 'chunkSize', get: (s) => s.chunkSize, what: 'the tokens per chunk' },
   { field: 'layerNorms', get: (s) => s.layerNorms, what: 'the norms per layer', min: 0 },
@@ -59,12 +94,39 @@ const SIZE_FIELDS: readonly SizeField[] = [
     what: 'the span trained at before scaling, in tokens',
   },
   { field: 'serving.span', get: (s) => s.serving.span, what: 'the served span in tokens' },
-  { field: 'serving.sequences', get: (s) => s.serving.sequences, what: 'the number of concurrent sequences' },
-  { field: 'serving.deviceGiB', get: (s) => s.serving.deviceGiB, what: 'the device memory in GiB', real: true },
-  { field: 'serving.outputTokens', get: (s) => s.serving.outputTokens, what: 'the tokens kept for output', min: 0 },
-  { field: 'serving.promptTokens', get: (s) => s.serving.promptTokens, what: 'the tokens taken by a fixed prompt', min: 0 },
-  { field: 'serving.tensorParallel', get: (s) => s.serving.tensorParallel, what: 'the devices each layer is split over' },
-  { field: 'serving.pipelineParallel', get: (s) => s.serving.pipelineParallel, what: 'the pipeline stages' },
+  {
+    field: 'serving.sequences',
+    get: (s) => s.serving.sequences,
+    what: 'the number of concurrent sequences',
+  },
+  {
+    field: 'serving.deviceGiB',
+    get: (s) => s.serving.deviceGiB,
+    what: 'the device memory in GiB',
+    real: true,
+  },
+  {
+    field: 'serving.outputTokens',
+    get: (s) => s.serving.outputTokens,
+    what: 'the tokens kept for output',
+    min: 0,
+  },
+  {
+    field: 'serving.promptTokens',
+    get: (s) => s.serving.promptTokens,
+    what: 'the tokens taken by a fixed prompt',
+    min: 0,
+  },
+  {
+    field: 'serving.tensorParallel',
+    get: (s) => s.serving.tensorParallel,
+    what: 'the devices each layer is split over',
+  },
+  {
+    field: 'serving.pipelineParallel',
+    get: (s) => s.serving.pipelineParallel,
+    what: 'the pipeline stages',
+  },
 ];
 
 /** A whole number of at least 1 that a double holds exactly. */
@@ -82,7 +144,13 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
   const out: Finding[] = [];
   const push = (rule: RuleId, field: string | null, message: string): void => {
     const at = field === null ? undefined : locations[field];
-    out.push({ rule, severity: RULES[rule].severity, message, key: at?.key ?? null, line: at?.line ?? null });
+    out.push({
+      rule,
+      severity: RULES[rule].severity,
+      message,
+      key: at?.key ?? null,
+      line: at?.line ?? null,
+    });
   };
   const name = (field: string): string => locations[field]?.key ?? field;
 
@@ -96,54 +164,120 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
     const message = derived
       ? `${derived.subject}${problem}; ${derived.advice}`
       : `${name(size.field)} is ${formatNumber(v)}${problem}; set it to ${size.what}: ${kind}`;
-    push('size-invalid', locations[size.field] ? size.field : derivedFrom(size.field, locations), message);
+    push(
+      'size-invalid',
+      locations[size.field] ? size.field : derivedFrom(size.field, locations),
+      message,
+    );
   }
 
   // Latent attention caches one shared latent, not grouped key/value heads.
   if (!spec.latent) headGrouping(spec.heads, spec.kvHeads, 'heads', 'kvHeads', name, push);
-  if (spec.encoder) headGrouping(spec.encoder.heads, spec.encoder.kvHeads, 'encoder.heads', 'encoder.kvHeads', name, push);
+  if (spec.encoder)
+    headGrouping(
+      spec.encoder.heads,
+      spec.encoder.kvHeads,
+      'encoder.heads',
+      'encoder.kvHeads',
+      name,
+      push,
+    );
 
   parallelLayout(spec, name, push);
 
-  if (spec.experts && isCount(spec.experts.total) && isCount(spec.experts.active) && spec.experts.active > spec.experts.total) {
-    push('value-invalid', 'experts.active', `${name('experts.active')} is ${spec.experts.active}, more than ${name('experts.total')} ${spec.experts.total}; a token cannot use more experts than there are: set it to at most ${spec.experts.total}`);
+  if (
+    spec.experts &&
+    isCount(spec.experts.total) &&
+    isCount(spec.experts.active) &&
+    spec.experts.active > spec.experts.total
+  ) {
+    push(
+      'value-invalid',
+      'experts.active',
+      `${name('experts.active')} is ${spec.experts.active}, more than ${name('experts.total')} ${spec.experts.total}; a token cannot use more experts than there are: set it to at most ${spec.experts.total}`,
+    );
   }
   const dense = spec.experts?.denseLayers;
   if (isCount(dense) && isCount(spec.layers) && dense > spec.layers) {
-    push('value-invalid', 'experts.denseLayers', `${name('experts.denseLayers')} makes ${dense} dense layers, more than the ${spec.layers} layers (${name('layers')}); set it to at most ${spec.layers}`);
+    push(
+      'value-invalid',
+      'experts.denseLayers',
+      `${name('experts.denseLayers')} makes ${dense} dense layers, more than the ${spec.layers} layers (${name('layers')}); set it to at most ${spec.layers}`,
+    );
   }
   if (spec.layerTypes && isCount(spec.layers) && spec.layerTypes.length !== spec.layers) {
-    push('value-invalid', 'layerTypes', `${name('layerTypes')} has ${spec.layerTypes.length} entries, but there are ${spec.layers} layers (${name('layers')}); give one entry per layer`);
+    push(
+      'value-invalid',
+      'layerTypes',
+      `${name('layerTypes')} has ${spec.layerTypes.length} entries, but there are ${spec.layers} layers (${name('layers')}); give one entry per layer`,
+    );
   }
-  const outside = (spec.positionFreeLayers ?? []).filter((i) => !(Number.isSafeInteger(i) && i >= 0 && (!isCount(spec.layers) || i < spec.layers)));
+  const outside = (spec.positionFreeLayers ?? []).filter(
+    (i) => !(Number.isSafeInteger(i) && i >= 0 && (!isCount(spec.layers) || i < spec.layers)),
+  );
   if (outside.length > 0) {
-    push('value-invalid', 'positionFreeLayers', `${name('positionFreeLayers')} lists ${outside.join(', ')}, not a 0-based layer index below ${spec.layers}; list layers that exist`);
+    push(
+      'value-invalid',
+      'positionFreeLayers',
+      `${name('positionFreeLayers')} lists ${outside.join(', ')}, not a 0-based layer index below ${spec.layers}; list layers that exist`,
+    );
   }
   if (isCount(spec.windowLayers) && isCount(spec.layers) && spec.windowLayers > spec.layers) {
-    push('value-invalid', 'windowLayers', `${name('windowLayers')} makes ${spec.windowLayers} windowed layers, more than the ${spec.layers} layers (${name('layers')}); set it to at most ${spec.layers}`);
+    push(
+      'value-invalid',
+      'windowLayers',
+      `${name('windowLayers')} makes ${spec.windowLayers} windowed layers, more than the ${spec.layers} layers (${name('layers')}); set it to at most ${spec.layers}`,
+    );
   }
 
   if (spec.position.kind === 'rotary') {
     rotaryWidth(spec, locations, name, push);
     const scaling = spec.position.scaling;
     if (scaling && Number.isFinite(scaling.factor) && scaling.factor < 1) {
-      const hint = isCount(scaling.originalSpan) && isCount(spec.declaredSpan) && spec.declaredSpan > scaling.originalSpan
-        ? ` such as ${formatNumber(spec.declaredSpan / scaling.originalSpan)} (${name('declaredSpan')} ${spec.declaredSpan} / ${name('position.scaling.originalSpan')} ${scaling.originalSpan})`
-        : '';
-      push('scaling-factor-below-one', 'position.scaling.factor', `${name('position.scaling.factor')} is ${formatNumber(scaling.factor)}; a scaling factor below 1 shrinks the trained span instead of extending it: set it to the extended span over the original span, at least 1${hint}, or remove the scaling block`);
+      const hint =
+        isCount(scaling.originalSpan) &&
+        isCount(spec.declaredSpan) &&
+        spec.declaredSpan > scaling.originalSpan
+          ? ` such as ${formatNumber(spec.declaredSpan / scaling.originalSpan)} (${name('declaredSpan')} ${spec.declaredSpan} / ${name('position.scaling.originalSpan')} ${scaling.originalSpan})`
+          : '';
+      push(
+        'scaling-factor-below-one',
+        'position.scaling.factor',
+        `${name('position.scaling.factor')} is ${formatNumber(scaling.factor)}; a scaling factor below 1 shrinks the trained span instead of extending it: set it to the extended span over the original span, at least 1${hint}, or remove the scaling block`,
+      );
     }
     if (scaling && scaling.kind === 'pairwise' && isCount(spec.headDim)) {
       const f = spec.position.fraction;
-      const pairs = Number.isFinite(f) && f > 0 && f <= 1 ? Math.floor((spec.headDim * f + 1e-9) / 2) : NaN;
-      for (const [list, which] of [[scaling.shortFactors, 'short'], [scaling.longFactors, 'long']] as const) {
+      const pairs =
+        Number.isFinite(f) && f > 0 && f <= 1 ? Math.floor((spec.headDim * f + 1e-9) / 2) : NaN;
+      for (const [list, which] of [
+        [scaling.shortFactors, 'short'],
+        [scaling.longFactors, 'long'],
+      ] as const) {
         if (list && !Number.isNaN(pairs) && list.length !== pairs) {
-          push('value-invalid', 'position.scaling', `the ${which} factors of ${name('position.scaling')} number ${list.length}, but the rotary code has ${pairs} pairs (head width × rotary share / 2); give one factor per pair`);
+          push(
+            'value-invalid',
+            'position.scaling',
+            `the ${which} factors of ${name('position.scaling')} number ${list.length}, but the rotary code has ${pairs} pairs (head width × rotary share / 2); give one factor per pair`,
+          );
         }
       }
     }
-    if (scaling && isCount(scaling.originalSpan) && isCount(spec.declaredSpan) && scaling.originalSpan > spec.declaredSpan) {
-      const extended = Number.isFinite(scaling.factor) && scaling.factor >= 1 ? ` (${scaling.originalSpan} × ${formatNumber(scaling.factor)} = ${formatNumber(scaling.originalSpan * scaling.factor)})` : '';
-      push('original-span-above-declared', 'position.scaling.originalSpan', `${name('position.scaling.originalSpan')} is ${scaling.originalSpan}, above ${name('declaredSpan')} ${spec.declaredSpan}; the original span is the span trained before scaling and cannot exceed the declared span: set ${name('declaredSpan')} to the extended span${extended}, or ${name('position.scaling.originalSpan')} to the span the model was trained at`);
+    if (
+      scaling &&
+      isCount(scaling.originalSpan) &&
+      isCount(spec.declaredSpan) &&
+      scaling.originalSpan > spec.declaredSpan
+    ) {
+      const extended =
+        Number.isFinite(scaling.factor) && scaling.factor >= 1
+          ? ` (${scaling.originalSpan} × ${formatNumber(scaling.factor)} = ${formatNumber(scaling.originalSpan * scaling.factor)})`
+          : '';
+      push(
+        'original-span-above-declared',
+        'position.scaling.originalSpan',
+        `${name('position.scaling.originalSpan')} is ${scaling.originalSpan}, above ${name('declaredSpan')} ${spec.declaredSpan}; the original span is the span trained before scaling and cannot exceed the declared span: set ${name('declaredSpan')} to the extended span${extended}, or ${name('position.scaling.originalSpan')} to the span the model was trained at`,
+      );
     }
   }
   return out;
@@ -151,7 +285,9 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
 
 /** `a, b or c`. */
 function orList(items: readonly (string | number)[]): string {
-  return items.length <= 1 ? items.join('') : `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
+  return items.length <= 1
+    ? items.join('')
+    : `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
 }
 
 /**
@@ -172,22 +308,37 @@ function parallelLayout(
     const problems: string[] = [];
     for (const [stack, heads, kv] of stacks) {
       if (!isCount(heads) || !isCount(kv) || shards(heads, kv, t)) continue;
-      if (heads % t !== 0) problems.push(`${t} does not divide the ${heads} ${stack}attention heads`);
+      if (heads % t !== 0)
+        problems.push(`${t} does not divide the ${heads} ${stack}attention heads`);
       else problems.push(`${t} and the ${kv} ${stack}key/value heads do not divide one another`);
     }
     if (problems.length > 0) {
-      let working = isCount(spec.heads) && isCount(spec.kvHeads) ? shardingDegrees(spec.heads, spec.kvHeads, 64) : [];
+      let working =
+        isCount(spec.heads) && isCount(spec.kvHeads)
+          ? shardingDegrees(spec.heads, spec.kvHeads, 64)
+          : [];
       if (spec.encoder && isCount(spec.encoder.heads) && isCount(spec.encoder.kvHeads)) {
         const encoder = spec.encoder;
         working = working.filter((d) => shards(encoder.heads, encoder.kvHeads, d));
       }
-      const advice = working.length > 0 ? `use a tensor-parallel degree of ${orList(working)}` : 'no tensor-parallel degree splits these heads';
-      push('layout-unshardable', 'serving.tensorParallel', `The tensor-parallel degree ${t} (${name('serving.tensorParallel')}) cannot shard the attention: ${problems.join('; ')}; ${advice}.`);
+      const advice =
+        working.length > 0
+          ? `use a tensor-parallel degree of ${orList(working)}`
+          : 'no tensor-parallel degree splits these heads';
+      push(
+        'layout-unshardable',
+        'serving.tensorParallel',
+        `The tensor-parallel degree ${t} (${name('serving.tensorParallel')}) cannot shard the attention: ${problems.join('; ')}; ${advice}.`,
+      );
     }
   }
   const p = spec.serving.pipelineParallel;
   if (isCount(p) && isCount(spec.layers) && p > spec.layers) {
-    push('layout-unshardable', 'serving.pipelineParallel', `The pipeline-parallel degree ${p} (${name('serving.pipelineParallel')}) is more than the ${spec.layers} layers, so a stage would hold none; use at most ${spec.layers} stages.`);
+    push(
+      'layout-unshardable',
+      'serving.pipelineParallel',
+      `The pipeline-parallel degree ${p} (${name('serving.pipelineParallel')}) is more than the ${spec.layers} layers, so a stage would hold none; use at most ${spec.layers} stages.`,
+    );
   }
 }
 
@@ -201,7 +352,11 @@ function sizeProblem(v: number, min: number, real: boolean): string | null {
 }
 
 /** For a size the defaults derived (no location), how it was derived and what to change; null when it was stated. */
-function derivation(spec: ModelSpec, locations: LocationMap, field: string): { subject: string; advice: string } | null {
+function derivation(
+  spec: ModelSpec,
+  locations: LocationMap,
+  field: string,
+): { subject: string; advice: string } | null {
   if (locations[field]) return null;
   const key = (f: string): string => locations[f]?.key ?? f;
   if (field === 'headDim' && isCount(spec.hidden) && isCount(spec.heads)) {
@@ -210,7 +365,12 @@ function derivation(spec: ModelSpec, locations: LocationMap, field: string): { s
       advice: `state the width of one head, or use a head count that divides ${spec.hidden}`,
     };
   }
-  if (field === 'encoder.headDim' && spec.encoder && isCount(spec.hidden) && isCount(spec.encoder.heads)) {
+  if (
+    field === 'encoder.headDim' &&
+    spec.encoder &&
+    isCount(spec.hidden) &&
+    isCount(spec.encoder.heads)
+  ) {
     return {
       subject: `the encoder head width is not stated, and ${key('hidden')} / ${key('encoder.heads')} = ${spec.hidden} / ${spec.encoder.heads} = ${formatNumber(Number(spec.encoder.headDim.toPrecision(6)))}`,
       advice: `state the width of one encoder head, or use an encoder head count that divides ${spec.hidden}`,
@@ -221,7 +381,14 @@ function derivation(spec: ModelSpec, locations: LocationMap, field: string): { s
 
 /** Where a derived size's finding points: the key it is derived from. */
 function derivedFrom(field: string, locations: LocationMap): string | null {
-  const from: Record<string, string> = { headDim: 'heads', kvHeads: 'heads', ffn: 'hidden', 'encoder.headDim': 'encoder.heads', 'encoder.kvHeads': 'encoder.heads', 'encoder.ffn': 'hidden' };
+  const from: Record<string, string> = {
+    headDim: 'heads',
+    kvHeads: 'heads',
+    ffn: 'hidden',
+    'encoder.headDim': 'encoder.heads',
+    'encoder.kvHeads': 'encoder.heads',
+    'encoder.ffn': 'hidden',
+  };
   const source = from[field];
   return source !== undefined && locations[source] ? source : null;
 }
@@ -240,7 +407,11 @@ function headGrouping(
   const above = divisors.find((d) => d > kvHeads);
   const choices = [below, above].filter((d): d is number => d !== undefined);
   const examples = choices.length > 0 ? ` such as ${choices.join(' or ')}` : '';
-  push('kv-heads-indivisible', kvField, `${name(kvField)} is ${kvHeads}, which does not divide ${name(headsField)} ${heads}; use a divisor of ${heads}${examples}`);
+  push(
+    'kv-heads-indivisible',
+    kvField,
+    `${name(kvField)} is ${kvHeads}, which does not divide ${name(headsField)} ${heads}; use a divisor of ${heads}${examples}`,
+  );
 }
 
 /** Divisors of `n` in ascending order, by trial up to sqrt(n); none past 2^32, where the trial would take too long for a message. */
@@ -277,18 +448,34 @@ function rotaryWidth(
   const whole = Math.abs(width - nearest) <= 1e-9 * Math.max(1, width);
   if (whole && nearest % 2 === 0 && nearest >= 2) return;
 
-  const headName = spec.latent ? `${name('latent.ropeDim')} ${headDim}` : locations.headDim ? `${name('headDim')} ${headDim}` : `the head width ${headDim} (${name('hidden')} / ${name('heads')})`;
+  const headName = spec.latent
+    ? `${name('latent.ropeDim')} ${headDim}`
+    : locations.headDim
+      ? `${name('headDim')} ${headDim}`
+      : `the head width ${headDim} (${name('hidden')} / ${name('heads')})`;
   const used = 2 * Math.floor((whole ? nearest : width) / 2);
   const metricsNote = `the metrics use ${used} channel${used === 1 ? '' : 's'}`;
   if (fraction === 1) {
     const evens = [headDim - 1, headDim + 1].filter((d) => d >= 2);
-    push('rotary-width-odd', spec.latent ? 'latent.ropeDim' : locations.headDim ? 'headDim' : locations.heads ? 'heads' : null, `${headName} is odd, so the rotary width ${headDim} leaves one channel without a partner (${metricsNote}); use an even head width such as ${evens.join(' or ')}`);
+    push(
+      'rotary-width-odd',
+      spec.latent
+        ? 'latent.ropeDim'
+        : locations.headDim
+          ? 'headDim'
+          : locations.heads
+            ? 'heads'
+            : null,
+      `${headName} is odd, so the rotary width ${headDim} leaves one channel without a partner (${metricsNote}); use an even head width such as ${evens.join(' or ')}`,
+    );
     return;
   }
   const widthText = whole ? String(nearest) : formatNumber(Number(width.toPrecision(6)));
   const lo = 2 * Math.floor(width / 2);
   const candidates = [lo, lo + 2].filter((w) => w >= 2 && w <= headDim);
-  const suggestions = candidates.map((w) => `${formatNumber(Number((w / headDim).toPrecision(6)))} (${w} channels)`);
+  const suggestions = candidates.map(
+    (w) => `${formatNumber(Number((w / headDim).toPrecision(6)))} (${w} channels)`,
+  );
   push(
     'rotary-width-odd',
     locations['position.fraction'] ? 'position.fraction' : 'headDim',

@@ -33,10 +33,12 @@ function attributes(attrs: Attrs | null | undefined): string {
   let out = '';
   for (const [name, value] of Object.entries(attrs)) {
     // Names come from this code, never from a pull request; refuse anything else loudly.
-    if (!NAME.test(name)) throw new Error(`attribute name ${JSON.stringify(name)} is not a plain name`);
+    if (!NAME.test(name))
+      throw new Error(`attribute name ${JSON.stringify(name)} is not a plain name`);
     if (value === null || value === undefined || value === false) continue;
     if (value === true) out += ` ${name}`;
-    else out += ` ${name}="${escapeHtml(typeof value === 'number' ? (Number.isFinite(value) ? String(round(value)) : '') : value)}"`;
+    else
+      out += ` ${name}="${escapeHtml(typeof value === 'number' ? (Number.isFinite(value) ? String(round(value)) : '') : value)}"`;
   }
   return out;
 }
@@ -46,13 +48,29 @@ export function round(value: number): number {
   return Math.round(value * 100) / 100;
 }
 
-const VOID = new Set(['meta', 'br', 'hr', 'img', 'link', 'circle', 'line', 'path', 'rect', 'polyline', 'stop', 'use']);
+const VOID = new Set([
+  'meta',
+  'br',
+  'hr',
+  'img',
+  'link',
+  'circle',
+  'line',
+  'path',
+  'rect',
+  'polyline',
+  'stop',
+  'use',
+]);
 
 /** An element: `h('p', { class: 'x' }, 'text', h('b', null, 'bold'))`. */
 export function h(tag: string, attrs: Attrs | null, ...children: Child[]): Markup {
   if (!NAME.test(tag)) throw new Error(`tag ${JSON.stringify(tag)} is not a plain name`);
   const inner = children.map(render).join('');
-  if (inner === '' && VOID.has(tag)) return new Markup(`<${tag}${attributes(attrs)}${tag === 'meta' || tag === 'br' || tag === 'hr' || tag === 'img' || tag === 'link' ? '>' : '/>'}`);
+  if (inner === '' && VOID.has(tag))
+    return new Markup(
+      `<${tag}${attributes(attrs)}${tag === 'meta' || tag === 'br' || tag === 'hr' || tag === 'img' || tag === 'link' ? '>' : '/>'}`,
+    );
   return new Markup(`<${tag}${attributes(attrs)}>${inner}</${tag}>`);
 }
 
