@@ -6,7 +6,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 const root = new URL('..', import.meta.url);
 const source = readFileSync(new URL('src/core/rules/catalog.ts', root), 'utf8');
 const body = source.slice(source.indexOf('export const RULES'));
-const entry = /\n {2}'([a-z0-9-]+)': \{[\s\S]*?title: (['"])((?:\\.|(?!\2).)*)\2/g;
+const entry = /\n {2}'([a-z0-9-]+)': \{[\s\S]*?title:\s*(['"])((?:\\.|(?!\2).)*)\2/g;
 const rules = Object.fromEntries(
   [...body.matchAll(entry)].map((match) => [match[1], match[3].replace(/\\(['"])/g, '$1')]),
 );

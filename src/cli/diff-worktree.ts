@@ -44,7 +44,11 @@ export async function diffWorktree(
   const start = (await git.mergeBase(base, head)) ?? base;
   const changes = await worktree.changedSince(start);
   const report = await runGate(
-    { read: (ref, path) => (ref === WORKTREE ? files.read(path) : git.show(ref, path)) },
+    {
+      read: (ref, path) => (ref === WORKTREE ? files.read(path) : git.show(ref, path)),
+      // Only committed versions are looked up (the policy, a base that reads as absent).
+      exists: async (ref, path) => ref !== WORKTREE && (await git.entry(ref, path)) !== null,
+    },
     {
       base: start,
       policyRef: base,

@@ -70,6 +70,21 @@ export class PolicyUnreadableError extends Error {}
  */
 export class BaseUnreadableError extends Error {}
 
+/**
+ * Whether something that is not a regular file is at `path` in `ref`, for a base version that read
+ * as absent (false where the source cannot tell). A failed look is a failed read of the base.
+ */
+async function existsAtBase(source: ContentSource, ref: string, path: string): Promise<boolean> {
+  if (!source.exists) return false;
+  try {
+    return await source.exists(ref, path);
+  } catch (error) {
+    throw new BaseUnreadableError(
+      `${path} could not be looked up at base ${ref}: ${error instanceof Error ? error.message : String(error)}. Its head cannot be judged against it, so the check fails until it can be read (re-run the job)`,
+    );
+  }
+}
+
 /** The measured version of one file from its bytes (or the error reading them); null when absent. */
 function inspectVersion(
   bytes: Uint8Array | null | Error,
@@ -237,7 +252,14 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
         policyPath,
         memo,
       );
-      // A base version that is not there (a 404, a shallow history) is an added file.
+      // A base version that is not there (a 404, a shallow history) is an added file; a symlink,
+      // a submodule or a directory there is not "nothing": it fails closed (`base-unreadable`).
+      if (baseVersion === null && (await existsAtBase(source, base, basePath)))
+        baseVersion = {
+          path: basePath,
+          line: null,
+          message: `${basePath} is not a regular file at base (a symbolic link, a submodule or a directory), so it was not read`,
+        };
       if (baseVersion === null) status = 'added';
     }
     configs.push({ change: { ...change, status }, base: baseVersion, head: headVersion, judging });

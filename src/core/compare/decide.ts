@@ -344,6 +344,17 @@ function deltasAndLimitFindings(
   return { deltas, findings };
 }
 
+/** The blocking finding for a base version that exists but could not be read or parsed. */
+function baseUnreadable(failure: FileFailure): Finding {
+  return {
+    rule: 'base-unreadable',
+    severity: RULES['base-unreadable'].severity,
+    message: `The base version does not read: ${failure.message}. The change is not judged against the base (a grown span with the code unchanged, changed frequencies, shape or cache per token, a limit's max-increase-pct), so it blocks; a pull request that repairs the base can be merged deliberately with the policy's waiver label.`,
+    key: null,
+    line: null,
+  };
+}
+
 const findingKey = (f: Finding) => `${f.rule}\u0000${f.key ?? ''}`;
 
 /** Judge one changed config: its findings with policy, standing and waiver applied, and its deltas. */
@@ -372,6 +383,11 @@ export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileD
       },
     ];
   }
+  const baseError = isFailure(config.base) ? config.base : null;
+  // Fail closed: a base that exists but does not read leaves every base-against-head rule
+  // unjudged, so the change blocks rather than pass on its head alone. A base that reads but
+  // describes no model has nothing to compare with: the head is a new model.
+  if (head && baseError && baseError.notAModel !== true) raw.push(baseUnreadable(baseError));
   const baseKeys = new Set((base?.findings ?? []).map(findingKey));
   const findings: JudgedFinding[] = [];
   for (const finding of raw) {
@@ -404,7 +420,7 @@ export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileD
     findings: sorted,
     base,
     head,
-    baseError: isFailure(config.base) ? config.base : null,
+    baseError,
     headError,
     assumed: inherited?.assumption ?? null,
   };

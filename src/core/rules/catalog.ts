@@ -19,6 +19,13 @@ export const RULES = {
     title: 'The model config cannot be read or parsed',
     help: "Fix the syntax error, or exclude the file from the policy's `files` globs if it is not a model config.",
   },
+  'base-unreadable': {
+    severity: 'block',
+    scope: 'read',
+    title:
+      'The base version of a changed model config cannot be read or parsed, or is not a regular file, so the change cannot be judged against it',
+    help: "The rules that compare base and head (a grown span, changed frequencies, a changed shape or cache, a limit's max-increase-pct) cannot be checked, so this blocks. A pull request that repairs the base can be merged deliberately with the policy's waiver label, or the rule can be set to warn in the base branch's policy.",
+  },
   'value-invalid': {
     severity: 'block',
     scope: 'file',
