@@ -69,6 +69,29 @@ export interface PullRequestFiles {
   truncated: boolean;
 }
 
+/** One entry of a commit's recursive git tree, as the trees API lists it. */
+export interface GitTreeEntry {
+  /** Octal mode as git writes it: `100644`, `100755`, `120000`, `160000`, `040000`. */
+  mode: string;
+  /** `blob`, `tree` or `commit` (a submodule). */
+  type: string;
+  sha: string;
+  /** Bytes of a blob; null for trees and submodules. */
+  size: number | null;
+}
+
+/** A commit's whole tree by path; `truncated` when GitHub cut the listing short. */
+export interface GitTree {
+  truncated: boolean;
+  entries: Map<string, GitTreeEntry>;
+}
+
+/** A GraphQL answer as GitHub sends it: data, and errors with the path of the field that failed. */
+export interface GraphqlAnswer {
+  data?: unknown;
+  errors?: { message?: unknown; type?: unknown; path?: unknown }[];
+}
+
 export interface GitHubClient {
   /** Every file of a pull request, paginated. */
   listPullRequestFiles(owner: string, repo: string, number: number): Promise<PullRequestFiles>;
@@ -120,6 +143,17 @@ export interface GitHubClient {
     base: string,
     head: string,
   ): Promise<ChangedFile[]>;
+  /** A commit's recursive tree (one request; GitHub cuts it past 100,000 entries or 7 MB). */
+  readTree?(owner: string, repo: string, ref: string): Promise<GitTree>;
+  /**
+   * One GraphQL query with its variables; the answer as sent, partial errors included (they are
+   * the caller's to judge). Refused past `maxBytes` of answer, without holding more.
+   */
+  graphql?(
+    query: string,
+    variables: Record<string, unknown>,
+    maxBytes: number,
+  ): Promise<GraphqlAnswer>;
   /** A comment by id, null when it was deleted. */
   getComment(owner: string, repo: string, commentId: number): Promise<Comment | null>;
   /**
@@ -404,8 +438,8 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
       return found.sort((a, b) => a.id - b.id);
     });
 
-  type TreeItem = { path?: string; mode?: string; type?: string; sha?: string };
-  const treeOf = (owner: string, repo: string, commit: string) =>
+  type TreeItem = { path?: string; mode?: string; type?: string; sha?: string; size?: number };
+  const readTree = (owner: string, repo: string, commit: string): Promise<GitTree> =>
     call(`read the tree of ${commit}`, async () => {
       const { data } = await octokit.rest.git.getTree({
         owner,
@@ -413,20 +447,32 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
         tree_sha: commit,
         recursive: 'true',
       });
-      if (data.truncated) {
-        throw new ApiError(
-          0,
-          `GitHub cut the file tree of ${commit} short (over its 100,000 entries or 7 MB), so the changed files cannot all be listed; check out with fetch-depth: 0 so the action reads the whole change from git`,
-          'read a tree',
-        );
-      }
-      const entries = new Map<string, string>();
+      const entries = new Map<string, GitTreeEntry>();
       for (const item of data.tree as TreeItem[]) {
-        if (item.type === 'tree' || typeof item.path !== 'string') continue;
-        entries.set(item.path, `${item.mode ?? ''} ${item.sha ?? ''}`);
+        if (typeof item.path !== 'string') continue;
+        entries.set(item.path, {
+          mode: item.mode ?? '',
+          type: item.type ?? '',
+          sha: item.sha ?? '',
+          size: typeof item.size === 'number' ? item.size : null,
+        });
       }
-      return entries;
+      return { truncated: data.truncated, entries };
     });
+  const treeOf = async (owner: string, repo: string, commit: string) => {
+    const tree = await readTree(owner, repo, commit);
+    if (tree.truncated) {
+      throw new ApiError(
+        0,
+        `GitHub cut the file tree of ${commit} short (over its 100,000 entries or 7 MB), so the changed files cannot all be listed; check out with fetch-depth: 0 so the action reads the whole change from git`,
+        'read a tree',
+      );
+    }
+    const entries = new Map<string, string>();
+    for (const [path, item] of tree.entries)
+      if (item.type !== 'tree') entries.set(path, `${item.mode} ${item.sha}`);
+    return entries;
+  };
 
   return {
     listPullRequestFiles(owner, repo, number) {
@@ -526,6 +572,30 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
           per_page: 1,
         });
         return data.merge_base_commit.sha;
+      });
+    },
+
+    readTree,
+
+    graphql(query, variables, maxBytes) {
+      return call('run a GraphQL query', async () => {
+        // The answer is read as a stream, so a bound holds however much GitHub sends.
+        const response = await octokit.request('POST /graphql', {
+          query,
+          variables,
+          request: { parseSuccessResponseBody: false },
+        });
+        const bytes = await readBounded(response.data, 'the GraphQL answer', maxBytes).catch(
+          (error: unknown) => {
+            if (!(error instanceof ContentTooLargeError)) throw error;
+            throw new ApiError(
+              0,
+              `GitHub API run a GraphQL query failed: the answer passed ${maxBytes} bytes, more than the query can need`,
+              'run a GraphQL query',
+            );
+          },
+        );
+        return JSON.parse(new TextDecoder().decode(bytes)) as GraphqlAnswer;
       });
     },
 

@@ -11,6 +11,7 @@ import { renderSarif } from '../core/render/sarif.js';
 import { VERSION } from '../core/version.js';
 import { parseEvent, type EventInfo } from './event.js';
 import type { GitReader } from './git.js';
+import { createApiContentSource } from './graphql-contents.js';
 import {
   isPermissionError,
   publishComment,
@@ -81,14 +82,16 @@ async function localChanges(
 /**
  * Base and head, the changed files and a way to read them: local git when it has both commits;
  * else a shallow fetch of the merge base, base and head into the checkout (one request for every
- * file); else the REST API, where a file list GitHub cuts short is completed from the two
- * commits' trees, or the run fails closed.
+ * file); else the API: the file list through REST (a list GitHub cuts short is completed from the
+ * two commits' trees, or the run fails closed), the contents through trees and GraphQL
+ * (`graphql-contents.ts`).
  */
 async function gatherChanges(
   event: EventInfo,
   base: string,
   git: GitReader,
   api: GitHubClient | null,
+  warn: (message: string) => void,
 ): Promise<Changes> {
   // A checkout without the history (or without git at all) falls back to the API.
   const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
@@ -132,10 +135,8 @@ async function gatherChanges(
     policyRef: base,
     head: event.head,
     changes,
-    source: {
-      read: (ref, path) => api.getFileContent(event.owner, event.repo, path, ref),
-      exists: (ref, path) => api.pathExists(event.owner, event.repo, path, ref),
-    },
+    // Every version in a few requests (trees and GraphQL), not one contents request each.
+    source: createApiContentSource(api, { owner: event.owner, repo: event.repo, warn }),
     notices: [],
   };
 }
@@ -189,7 +190,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   }
   const api = connect();
   const git = deps.createGit(env.GITHUB_WORKSPACE ?? '.');
-  const gathered = await gatherChanges(event, event.base, git, api);
+  const gathered = await gatherChanges(event, event.base, git, api, (m) => out.warning(m));
 
   let labels = event.labels;
   if (api && event.pullNumber !== null) {

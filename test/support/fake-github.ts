@@ -5,10 +5,23 @@
  * fake builds; tests assert both lists of mismatches are empty. Faults are queued per operation.
  */
 import { createHash } from 'node:crypto';
+import { existsSync, readFileSync } from 'node:fs';
 import { createServer } from 'node:http';
+import { createRequire } from 'node:module';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { posix } from 'node:path';
+import { join, posix } from 'node:path';
+import {
+  buildClientSchema,
+  execute as executeGraphql,
+  Kind,
+  parse as parseGraphql,
+  validate as validateGraphql,
+  type DocumentNode,
+  type GraphQLError,
+  type GraphQLSchema,
+  type IntrospectionQuery,
+} from 'graphql';
 import { checkRequest, checkResponse, sampleOf } from './openapi.js';
 import type { Operation } from './openapi.js';
 
@@ -216,9 +229,16 @@ function rightLines(patch: string): Set<number> {
   return out;
 }
 
+const blobShas = new WeakMap<Uint8Array, string>();
+
 /** Git's blob id of some bytes (SHA-1 over `blob <size>\0<bytes>`), so `sha` fields look real. */
 function blobSha(bytes: Uint8Array): string {
-  return createHash('sha1').update(`blob ${bytes.byteLength}\u0000`).update(bytes).digest('hex');
+  let sha = blobShas.get(bytes);
+  if (sha === undefined) {
+    sha = createHash('sha1').update(`blob ${bytes.byteLength}\u0000`).update(bytes).digest('hex');
+    blobShas.set(bytes, sha);
+  }
+  return sha;
 }
 
 /** GitHub wraps base64 content at 60 characters a line. */
@@ -240,6 +260,33 @@ function deepMerge(target: unknown, patch: unknown): unknown {
   for (const [key, value] of Object.entries(patch)) out[key] = deepMerge(out[key], value);
   return out;
 }
+
+let githubSchema: GraphQLSchema | null = null;
+const checkedQueries = new Map<
+  string,
+  { document: DocumentNode | null; errors: readonly GraphQLError[] }
+>();
+
+/**
+ * GitHub's published GraphQL schema (npm `@octokit/graphql-schema`, its introspection JSON):
+ * every GraphQL request the fake answers is validated and executed against it by the reference
+ * implementation (npm `graphql`), so a query GitHub would refuse is a mismatch here too.
+ */
+function graphqlSchema(): GraphQLSchema {
+  if (githubSchema) return githubSchema;
+  const file = (createRequire(import.meta.url).resolve.paths('@octokit/graphql-schema') ?? [])
+    .map((dir) => join(dir, '@octokit', 'graphql-schema', 'schema.json'))
+    .find((candidate) => existsSync(candidate));
+  if (!file) throw new Error('@octokit/graphql-schema is not installed (npm ci)');
+  githubSchema = buildClientSchema(JSON.parse(readFileSync(file, 'utf8')) as IntrospectionQuery);
+  return githubSchema;
+}
+
+/**
+ * How much of a blob's text the fake's GraphQL `Blob.text` gives before `isTruncated`. GitHub
+ * documents no figure; a bound makes the adapter's fallback for cut texts run in tests.
+ */
+export const FAKE_BLOB_TEXT_LIMIT = 512 * 1024;
 
 /** Largest file the contents API returns inline; larger files come with encoding "none" (from memory: 1 MB). */
 const INLINE_LIMIT = 1024 * 1024;
@@ -855,6 +902,142 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     }
   }
 
+  /** A blob as GraphQL's `Blob` gives it: no text for binary bytes (a NUL), the text cut past a bound. */
+  const blobValue = (bytes: Uint8Array) => {
+    const isBinary = bytes.includes(0);
+    return {
+      __typename: 'Blob',
+      oid: blobSha(bytes),
+      byteSize: bytes.byteLength,
+      isBinary,
+      isTruncated: bytes.byteLength > FAKE_BLOB_TEXT_LIMIT,
+      // Decoded leniently (bad bytes become U+FFFD, a byte-order mark is dropped): the adapter
+      // must notice that such a text is not the blob.
+      text: isBinary ? null : new TextDecoder().decode(bytes.subarray(0, FAKE_BLOB_TEXT_LIMIT)),
+    };
+  };
+
+  /** GraphQL's `TreeEntry` for an entry of the fake's trees (modes as git's octal, as integers). */
+  const treeEntryValue = (path: string, entry: FakeEntry | 'dir') => {
+    const name = posix.basename(path);
+    if (entry === 'dir')
+      return {
+        name,
+        path,
+        mode: 0o040000,
+        type: 'tree',
+        oid: blobSha(new TextEncoder().encode(path)),
+        size: 0,
+        object: { __typename: 'Tree' },
+      };
+    if (entry.type === 'submodule')
+      return {
+        name,
+        path,
+        mode: 0o160000,
+        type: 'commit',
+        oid: '0'.repeat(40),
+        size: 0,
+        object: null,
+      };
+    const bytes = entry.type === 'symlink' ? new TextEncoder().encode(entry.target) : entry.bytes;
+    return {
+      name,
+      path,
+      mode: entry.type === 'symlink' ? 0o120000 : 0o100644,
+      type: 'blob',
+      oid: blobSha(bytes),
+      size: bytes.byteLength,
+      object: blobValue(bytes),
+    };
+  };
+
+  /** Runs one GraphQL request: validated against GitHub's schema, executed over the fake's state. */
+  async function answerGraphql(body: string): Promise<unknown> {
+    const { query = '', variables = {} } = JSON.parse(body || '{}') as {
+      query?: string;
+      variables?: Record<string, unknown>;
+    };
+    const mismatch = (problem: string) =>
+      mismatches.push({ method: 'POST', url: '/graphql', operationId: 'graphql', problem });
+    // Parsed and validated once per query text (a run repeats the same generated text).
+    let checked = checkedQueries.get(query);
+    if (!checked) {
+      try {
+        const document = parseGraphql(query);
+        checked = { document, errors: validateGraphql(graphqlSchema(), document) };
+      } catch (error) {
+        checked = { document: null, errors: [error as GraphQLError] };
+      }
+      checkedQueries.set(query, checked);
+    }
+    if (checked.errors.length > 0 || !checked.document) {
+      for (const error of checked.errors) mismatch(`GraphQL: ${error.message}`);
+      return { errors: checked.errors.map((error) => ({ message: error.message })) };
+    }
+    for (const definition of checked.document.definitions) {
+      if (definition.kind !== Kind.OPERATION_DEFINITION) continue;
+      for (const selection of definition.selectionSet.selections) {
+        if (
+          selection.kind !== Kind.FIELD ||
+          !['viewer', 'repository'].includes(selection.name.value)
+        )
+          mismatch(`the fake answers viewer and repository, not ${query.slice(0, 200)}`);
+      }
+    }
+    // Blobs by object id, and the ids of contents the fault list says fail.
+    const blobs = new Map<string, Uint8Array>();
+    const failing = new Set<string>();
+    for (const [ref, tree] of state.trees) {
+      for (const [path, entry] of tree) {
+        if (entry.type === 'submodule') continue;
+        const bytes =
+          entry.type === 'symlink' ? new TextEncoder().encode(entry.target) : entry.bytes;
+        const oid = blobSha(bytes);
+        blobs.set(oid, bytes);
+        if (state.failingReads?.has(`${ref}:${path}`)) failing.add(oid);
+      }
+    }
+    const commit = (sha: string) => ({
+      __typename: 'Commit',
+      oid: sha,
+      file: ({ path }: { path: string }) => {
+        const tree = state.trees.get(sha)!;
+        const entry = tree.get(path);
+        if (entry) return treeEntryValue(path, entry);
+        for (const key of tree.keys())
+          if (key.startsWith(`${path}/`)) return treeEntryValue(path, 'dir');
+        return null;
+      },
+    });
+    const repository = {
+      object: ({ oid, expression }: { oid?: string; expression?: string }) => {
+        const id = oid ?? expression ?? '';
+        if (state.trees.has(id)) return commit(id);
+        if (failing.has(id)) throw new Error('Something went wrong while executing your query.');
+        const bytes = blobs.get(id);
+        return bytes ? blobValue(bytes) : null;
+      },
+    };
+    const result = await executeGraphql({
+      schema: graphqlSchema(),
+      document: checked.document,
+      variableValues: variables,
+      rootValue: {
+        viewer: { login: state.tokenUser.login },
+        repository: ({ owner, name }: { owner: string; name: string }) => {
+          if (owner !== state.owner || name !== state.repo)
+            throw new Error(`Could not resolve to a Repository with the name '${owner}/${name}'.`);
+          return repository;
+        },
+      },
+    });
+    // Errors without data are the query's own (its variables): GitHub refuses it whole.
+    if (result.errors && !result.data)
+      for (const error of result.errors) mismatch(`GraphQL: ${error.message}`);
+    return JSON.parse(JSON.stringify(result));
+  }
+
   async function onRequest(req: IncomingMessage, res: ServerResponse): Promise<void> {
     const chunks: Buffer[] = [];
     for await (const chunk of req) chunks.push(chunk as Buffer);
@@ -862,11 +1045,12 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     const method = req.method ?? 'GET';
     const parsed = new URL(req.url ?? '/', 'http://fake.invalid');
     if (method === 'POST' && parsed.pathname === '/graphql') {
-      // GraphQL is not in the REST description; the one query the action sends is answered here.
+      // GraphQL is not in the REST description: its queries are checked against GitHub's
+      // GraphQL schema and executed by the reference implementation over the fake's state.
       const authorized =
         req.headers.authorization === `token ${state.token}` ||
         req.headers.authorization === `Bearer ${state.token}`;
-      requests.push({
+      const entry: LoggedRequest = {
         method,
         path: '/graphql',
         query: '',
@@ -874,26 +1058,20 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         status: authorized ? 200 : 401,
         authorized,
         fault: false,
-      });
+      };
+      requests.push(entry);
       const queued = faults.get('graphql')?.shift();
-      const query = (JSON.parse(body || '{}') as { query?: string }).query ?? '';
-      if (!/^query \{ viewer \{ login \} \}$/.test(query))
-        mismatches.push({
-          method,
-          url: '/graphql',
-          operationId: 'graphql',
-          problem: `unexpected GraphQL query ${JSON.stringify(query)}`,
-        });
       if (queued && queued.kind === 'status') {
-        send(res, { status: queued.status, json: queued.body });
+        entry.fault = true;
+        entry.status = queued.status;
+        send(res, { status: queued.status, headers: queued.headers, json: queued.body });
         return;
       }
-      send(
-        res,
-        authorized
-          ? { status: 200, json: { data: { viewer: { login: state.tokenUser.login } } } }
-          : { status: 401, json: { message: 'Bad credentials' } },
-      );
+      if (!authorized) {
+        send(res, { status: 401, json: { message: 'Bad credentials' } });
+        return;
+      }
+      send(res, { status: 200, json: await answerGraphql(body) });
       return;
     }
     const check = checkRequest(
