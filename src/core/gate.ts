@@ -239,7 +239,8 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
       const baseAnswer = answers[nextBase]!;
       answers[nextBase++] = null;
       const basePath = change.previousPath ?? change.path;
-      if (baseAnswer instanceof Error) {
+      // A base over the size limit will not read on a re-run either: a broken base, not a failed read.
+      if (baseAnswer instanceof Error && baseAnswer.name !== 'ContentTooLargeError') {
         throw new BaseUnreadableError(
           `${basePath} could not be read at base ${base}: ${baseAnswer.message}. Its head cannot be judged against it, so the check fails until it can be read (re-run the job)`,
         );

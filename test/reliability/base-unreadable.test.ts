@@ -110,6 +110,29 @@ describe('a base version that reads but does not parse fails closed', () => {
   }
 });
 
+describe('a base version over the size limit fails closed, and can be passed deliberately', () => {
+  // 4 MiB + 1 byte of spaces after a valid config: refused from its size, never read.
+  const huge = `${checkpointConfig()}${' '.repeat(4 * 1024 * 1024 + 1)}`;
+  const policy = 'waiver-label: repair-base\n';
+
+  it.each([[false], [true]])(
+    'no history: %s: base-unreadable with the size, the waiver label turns it into a warning',
+    async (noHistory) => {
+      const base = { [POLICY_PATH]: policy, [MODEL]: huge };
+      const head = { [POLICY_PATH]: policy, [MODEL]: HEAD };
+      const blocked = await run(base, head, { noHistory });
+      expect(blocked.result.out.outputs.verdict).toBe('block');
+      const finding = blocked.report.files[0]!.findings.find((f) => f.rule === 'base-unreadable')!;
+      expect(finding.message).toMatch(
+        /models\/a\/config\.json is 4194\d{3} bytes; expected at most 4194304 bytes/,
+      );
+      const waived = await run(base, head, { noHistory, labels: ['repair-base'] });
+      expect(waived.result.out.outputs.verdict).toBe('warn');
+    },
+    60_000,
+  );
+});
+
 describe('a base version that is not a regular file fails closed', () => {
   it.each([[false], [true]])(
     'a symbolic link at base, a regular file at head (no history: %s): verdict block, the path named',
