@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
-import { createFileSource } from '../cli/files.js';
-import { createGitReader } from './git.js';
-import { createGitHubClient } from './github.js';
+import { createFileSource } from '../adapters/file-source.js';
+import { createGitReader } from '../adapters/git.js';
+import { createGitHubClient } from '../adapters/github-rest.js';
 import { runAction } from './run-action.js';
 import { writeReportFile } from './write-report.js';
 import { createRunnerOutput } from './runner-output.js';
