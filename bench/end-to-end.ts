@@ -19,7 +19,7 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Console } from '../src/cli/console.js';
-import type { FileSource } from '../src/cli/files.js';
+import type { FileSource } from '../src/adapters/file-source.js';
 import { runInspect } from '../src/cli/inspect.js';
 import { startFakeGitHub } from '../test/support/fake-github.js';
 import { pullRequestEvent, runBundle } from '../test/support/run-bundle.js';

@@ -12,7 +12,8 @@ import { renderComment } from '../core/render/comment.js';
 import { readGateJson } from '../core/render/gate-json-read.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
 import { parseWorkflowRun, type WorkflowRunInfo } from './event.js';
-import { publishComment, type GitHubClient } from './github.js';
+import type { GitHubClient } from '../adapters/github-rest.js';
+import { publishComment } from './report-comment.js';
 import type { Settings } from './inputs.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
 

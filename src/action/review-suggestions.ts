@@ -1,44 +1,18 @@
 /**
- * The adapter for review suggestions (GitHub REST: "List review comments on a pull request",
- * "Create a review comment for a pull request", "Update a review comment for a pull request",
- * "Delete a review comment for a pull request", and the pull request's file list for the diff).
- * It keeps exactly the planned suggestions on the pull request: creates the missing ones, updates
- * or moves changed ones, leaves equal ones alone, and deletes ours whose finding is gone. Only
- * review comments written by a bot account and starting with our marker are ever touched.
+ * Review suggestions on the pull request: keeps exactly the planned suggestions, creates the
+ * missing ones, updates or moves changed ones, leaves equal ones alone, and deletes ours whose
+ * finding is gone. Only review comments written by a bot account and starting with our marker
+ * are ever touched. The calls are the REST adapter's (`createReviewApi` in
+ * `src/adapters/github-rest.ts`).
  */
-import type { getOctokit } from '@actions/github';
+import {
+  isWriteRefused,
+  type ReviewApi,
+  type ReviewComment,
+  type ReviewTarget,
+} from '../adapters/github-rest.js';
 import type { PlannedSuggestion } from '../core/render/suggestions.js';
 import { suggestionIdOf } from '../core/render/suggestions.js';
-
-/** One review comment as the adapter needs it. */
-export interface ReviewComment {
-  id: number;
-  path: string;
-  /** Line it is on now at head; null once the line is outdated. */
-  line: number | null;
-  startLine: number | null;
-  body: string;
-  /** The author is a bot account (the workflow token writes as `github-actions[bot]`). */
-  byBot: boolean;
-}
-
-export interface ReviewTarget {
-  owner: string;
-  repo: string;
-  pull: number;
-  /** The head commit the suggestions are written against. */
-  headSha: string;
-}
-
-export interface ReviewApi {
-  /** Every review comment of the pull request, paginated. */
-  listReviewComments(target: ReviewTarget): Promise<ReviewComment[]>;
-  createReviewComment(target: ReviewTarget, suggestion: PlannedSuggestion): Promise<void>;
-  updateReviewComment(target: ReviewTarget, id: number, body: string): Promise<void>;
-  deleteReviewComment(target: ReviewTarget, id: number): Promise<void>;
-  /** Each changed file's unified diff (`patch`), absent for binary or very large files. */
-  listPatches(target: ReviewTarget): Promise<Map<string, string>>;
-}
 
 /** Lines of the head version a unified diff shows (added or context lines): where review comments may go. */
 export function diffRightLines(patch: string): Set<number> {
@@ -125,91 +99,6 @@ export async function syncSuggestions(
     }
   }
   return outcome;
-}
-
-type Octokit = ReturnType<typeof getOctokit>;
-
-/** The REST calls, with the runner's request defaults and the retry plugin; the Octokit stack loads on first use. */
-export function createReviewApi(token: string, options: { baseUrl?: string }): ReviewApi {
-  let octokit: Octokit | null = null;
-  const client = async (): Promise<Octokit> => {
-    if (octokit) return octokit;
-    const { getOctokit, actionsDefaults, retry } = await import('./octokit.js');
-    octokit = getOctokit(
-      token,
-      {
-        baseUrl: options.baseUrl ?? 'https://api.github.com',
-        request: { ...actionsDefaults.request },
-        retry: { retries: 2 },
-      },
-      retry,
-    );
-    return octokit;
-  };
-  return {
-    async listReviewComments({ owner, repo, pull }) {
-      const kit = await client();
-      const entries = await kit.paginate(kit.rest.pulls.listReviewComments, {
-        owner,
-        repo,
-        pull_number: pull,
-        per_page: 100,
-      });
-      return entries.map((c) => ({
-        id: c.id,
-        path: c.path,
-        line: c.line ?? null,
-        startLine: c.start_line ?? null,
-        body: c.body,
-        byBot: c.user?.type === 'Bot',
-      }));
-    },
-    async createReviewComment({ owner, repo, pull, headSha }, s) {
-      const kit = await client();
-      await kit.rest.pulls.createReviewComment({
-        owner,
-        repo,
-        pull_number: pull,
-        commit_id: headSha,
-        path: s.path,
-        body: s.body,
-        line: s.line,
-        side: 'RIGHT',
-        ...(s.startLine < s.line ? { start_line: s.startLine, start_side: 'RIGHT' as const } : {}),
-        request: { retries: 0 },
-      });
-    },
-    async updateReviewComment({ owner, repo }, id, body) {
-      const kit = await client();
-      await kit.rest.pulls.updateReviewComment({ owner, repo, comment_id: id, body });
-    },
-    async deleteReviewComment({ owner, repo }, id) {
-      const kit = await client();
-      await kit.rest.pulls.deleteReviewComment({ owner, repo, comment_id: id });
-    },
-    async listPatches({ owner, repo, pull }) {
-      const kit = await client();
-      const entries = await kit.paginate(kit.rest.pulls.listFiles, {
-        owner,
-        repo,
-        pull_number: pull,
-        per_page: 100,
-      });
-      return new Map(
-        entries
-          .filter((e) => typeof e.patch === 'string')
-          .map((e) => [e.filename, e.patch as string]),
-      );
-    },
-  };
-}
-
-/** Whether an error from the API is a refusal to write (a read-only token, as forks get). */
-export function isWriteRefused(error: unknown): boolean {
-  const status = (error as { status?: unknown } | null)?.status;
-  return (
-    status === 403 || (status === 404 && /not accessible/i.test(String((error as Error).message)))
-  );
 }
 
 /** Said when suggestions are skipped because the token may not write them. */

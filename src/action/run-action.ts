@@ -10,17 +10,19 @@ import { COMMENT_MARKER } from '../core/render/notice.js';
 import { renderSarif } from '../core/render/sarif.js';
 import { VERSION } from '../core/version.js';
 import { parseEvent, type EventInfo } from './event.js';
-import type { GitReader } from './git.js';
-import { createApiContentSource } from './graphql-contents.js';
+import type { GitReader } from '../adapters/git.js';
+import { createApiContentSource } from '../adapters/graphql-contents.js';
 import {
+  createReviewApi,
   isPermissionError,
-  publishComment,
   type GitHubClient,
   type GitHubClientOptions,
-} from './github.js';
+  type ReviewApi,
+} from '../adapters/github-rest.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { runPublish } from './publish.js';
-import { createReviewApi, publishSuggestions, type ReviewApi } from './review-suggestions.js';
+import { publishComment } from './report-comment.js';
+import { publishSuggestions } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
@@ -34,7 +36,7 @@ export interface ActionDeps {
   writeFile(path: string, text: string): Promise<void>;
   createGit(cwd: string): GitReader;
   createGitHub(token: string, options: GitHubClientOptions): GitHubClient;
-  /** Review-comment calls for suggestions (default: the REST adapter of `review-suggestions.ts`). */
+  /** Review-comment calls for suggestions (default: the REST adapter's `createReviewApi`). */
   createReviews?(token: string, options: { baseUrl?: string }): ReviewApi;
 }
 

@@ -1,8 +1,21 @@
+/**
+ * The action's one adapter for what the runner shows, over the toolkit's `@actions/core`: workflow
+ * commands on standard output (annotations, `add-mask`, errors; `%`, CR and LF escaped, and in
+ * properties also `:` and `,`), outputs appended to the file at `GITHUB_OUTPUT`, the job summary
+ * appended to the file at `GITHUB_STEP_SUMMARY` (GitHub's "Workflow commands for GitHub Actions").
+ * The entry loads the toolkit and passes it in; tests pass the same module.
+ */
+import type * as ActionsCore from '@actions/core';
 import type { Annotation } from '../core/render/annotations.js';
 import { showBidiControls } from '../core/render/escape.js';
-import { appendSummary, issueCommand, setOutput, writeLine } from './workflow-commands.js';
 
-/** The action's one adapter for what the runner shows: summary, annotations, outputs, log. */
+/** The parts of `@actions/core` the action uses. */
+export type Toolkit = Pick<
+  typeof ActionsCore,
+  'setSecret' | 'setOutput' | 'summary' | 'error' | 'warning' | 'notice' | 'info' | 'setFailed'
+>;
+
+/** What the runner shows: summary, annotations, outputs, log. */
 export interface RunnerOutput {
   secret(value: string): void;
   output(name: string, value: string): void;
@@ -54,30 +67,31 @@ export function fitSummary(
   return render(limit);
 }
 
-export function createRunnerOutput(
-  env: Readonly<Record<string, string | undefined>> = process.env,
-): RunnerOutput {
+export function createRunnerOutput(core: Toolkit): RunnerOutput {
   return {
-    secret: (value) => issueCommand('add-mask', {}, value),
-    output: (name, value) => setOutput(env, name, value),
+    secret: (value) => core.setSecret(value),
+    output: (name, value) => core.setOutput(name, value),
     async summary(markdown) {
       // Bytes, as the runner counts them: 1 MiB of characters can be 3 MiB of UTF-8.
       const text =
         Buffer.byteLength(markdown, 'utf8') > SUMMARY_BYTES
           ? `${cutUtf8(markdown, SUMMARY_BYTES - Buffer.byteLength(CUT_NOTE, 'utf8'))}${CUT_NOTE}`
           : markdown;
-      appendSummary(env, text);
+      try {
+        await core.summary.addRaw(text, true).write();
+      } catch (error) {
+        // The toolkit keeps its buffer when a write fails; the next summary must not carry this one.
+        core.summary.emptyBuffer();
+        throw error;
+      }
     },
     annotate(a) {
-      issueCommand(a.level, { title: a.title, file: a.file, line: a.line ?? undefined }, a.message);
+      core[a.level](a.message, { title: a.title, file: a.file, startLine: a.line ?? undefined });
     },
     // Names from a pull request may hold bidirectional controls: the log shows them, never obeys them.
-    info: (message) => writeLine(showBidiControls(message)),
-    notice: (message) => issueCommand('notice', {}, showBidiControls(message)),
-    warning: (message) => issueCommand('warning', {}, showBidiControls(message)),
-    fail: (message) => {
-      process.exitCode = 1;
-      issueCommand('error', {}, showBidiControls(message));
-    },
+    info: (message) => core.info(showBidiControls(message)),
+    notice: (message) => core.notice(showBidiControls(message)),
+    warning: (message) => core.warning(showBidiControls(message)),
+    fail: (message) => core.setFailed(showBidiControls(message)),
   };
 }

@@ -3,10 +3,11 @@ import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parseArgs } from 'node:util';
-import { createGitReader, createScratchRepository, gitContentSource } from '../action/git.js';
+import { createGitReader, gitContentSource } from '../adapters/git.js';
 import { runGate } from '../core/gate.js';
 import type { Console } from './console.js';
 import { renderReport, writeHtmlReport } from './diff.js';
+import { createScratchRepository } from './scratch-repository.js';
 
 /** The bundled demo: `fixtures/demo` above this file, found from the source tree or from `dist/`. */
 async function findDemo(): Promise<string> {

@@ -1,4 +1,4 @@
-import { createWorktreeGit, type GitReader } from '../action/git.js';
+import { createWorktreeGit, type GitReader } from '../adapters/git.js';
 import { runGate } from '../core/gate.js';
 import type { Console } from './console.js';
 import { commitOf, defaultBase, exitStatus, renderReport, writeHtmlReport } from './diff.js';

@@ -7,7 +7,7 @@ import { renderDiffText } from '../core/render/diff-text.js';
 import { renderGateJson } from '../core/render/gate-json.js';
 import { renderHtmlReport } from '../core/render/html-report.js';
 import type { GateReport } from '../core/compare/decide.js';
-import { createGitReader, gitContentSource, type GitReader } from '../action/git.js';
+import { createGitReader, gitContentSource, type GitReader } from '../adapters/git.js';
 import type { Console } from './console.js';
 import { optionLines, SERVING_FLAGS, SERVING_HELP, UsageError, servingPatch } from './options.js';
 import { diffWorktree } from './diff-worktree.js';

@@ -1,7 +1,7 @@
 import { lstat, mkdir, rm, writeFile } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import { parseArgs } from 'node:util';
-import { createWorktreeGit } from '../action/git.js';
+import { createWorktreeGit } from '../adapters/git.js';
 import { runGate } from '../core/gate.js';
 import { ACTION_REPOSITORY } from '../core/home.js';
 import { inspectModel } from '../core/inspect.js';

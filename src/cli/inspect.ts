@@ -4,7 +4,7 @@ import { remedyFileReport } from '../core/remedy/attach.js';
 import { decodeText } from '../core/parse/source.js';
 import { renderInspectJson } from '../core/render/inspect-json.js';
 import { renderInspectText } from '../core/render/inspect-text.js';
-import type { FileSource } from './files.js';
+import type { FileSource } from '../adapters/file-source.js';
 import { optionLines, SERVING_FLAGS, SERVING_HELP, servingPatch } from './options.js';
 import { terminalStyle } from './terminal.js';
 import type { Console } from './console.js';

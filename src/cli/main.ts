@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-import { createFileSource } from './files.js';
+import { createFileSource } from '../adapters/file-source.js';
 import { createConsole } from './console.js';
 import { run } from './run.js';
 

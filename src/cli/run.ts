@@ -1,6 +1,6 @@
 import { INSPECT_USAGE, runInspect } from './inspect.js';
 import type { Console } from './console.js';
-import type { FileSource } from './files.js';
+import type { FileSource } from '../adapters/file-source.js';
 import { optionLines, UsageError } from './options.js';
 import { VERSION } from '../core/version.js';
 

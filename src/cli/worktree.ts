@@ -1,6 +1,7 @@
 import { lstat } from 'node:fs/promises';
 import { join } from 'node:path';
-import { createFileSource, MAX_FILE_BYTES } from './files.js';
+import { MAX_CONFIG_BYTES } from '../adapters/content-limit.js';
+import { createFileSource } from '../adapters/file-source.js';
 
 /** The working tree's bytes of repository-relative paths, for local runs before a push or commit. */
 export interface WorktreeFiles {
@@ -9,7 +10,7 @@ export interface WorktreeFiles {
 }
 
 /** Reads files of the working tree under `topLevel`, as git would see them: no symlinks, the size limit of a model config. */
-export function createWorktreeFiles(topLevel: string, maxBytes = MAX_FILE_BYTES): WorktreeFiles {
+export function createWorktreeFiles(topLevel: string, maxBytes = MAX_CONFIG_BYTES): WorktreeFiles {
   const files = createFileSource(maxBytes);
   return {
     async read(path) {

@@ -60,9 +60,6 @@ export interface GateRequest {
   memo?: ScanMemo;
 }
 
-/** Thrown when the policy file on the base commit cannot be read: the gate fails closed. */
-export class PolicyUnreadableError extends Error {}
-
 /**
  * Thrown when a file's base version exists but could not be read (the API kept failing, git
  * failed, it is too large): judging the head alone would drop every base-against-head rule, so
@@ -182,7 +179,7 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     policy = parsePolicy(decodeText(basePolicyBytes, policyPath), policyPath);
   } else if (source.exists && (await source.exists(request.policyRef ?? base, policyPath))) {
     // A symlink, a directory or a submodule where the policy belongs is not "no policy".
-    throw new PolicyUnreadableError(
+    throw new Error(
       `${policyPath} exists on the base commit but is not a regular file (a symbolic link, a directory or a submodule); expected the policy as a regular file, or nothing at that path`,
     );
   }

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createGitReader } from '../../src/action/git.js';
+import { createGitReader } from '../../src/adapters/git.js';
 import type { GateReport } from '../../src/core/compare/decide.js';
 import { runGate, type ContentRequest, type ContentSource } from '../../src/core/gate.js';
 import { renderGateJson } from '../../src/core/render/gate-json.js';

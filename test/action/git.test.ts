@@ -12,15 +12,10 @@ import {
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import {
-  ContentTooLargeError,
-  GitError,
-  MAX_CONFIG_BYTES,
-  createGitReader,
-  createScratchRepository,
-  parseNameStatus,
-} from '../../src/action/git.js';
-import type { GitReader } from '../../src/action/git.js';
+import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/adapters/content-limit.js';
+import { GitError, createGitReader, parseNameStatus } from '../../src/adapters/git.js';
+import type { GitReader } from '../../src/adapters/git.js';
+import { createScratchRepository } from '../../src/cli/scratch-repository.js';
 
 let root: string;
 let repo: string;

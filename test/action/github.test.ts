@@ -5,10 +5,10 @@ import {
   createGitHubClient,
   isNotFoundError,
   isPermissionError,
-  publishComment,
-} from '../../src/action/github.js';
-import type { GitHubClient, GitHubClientOptions } from '../../src/action/github.js';
-import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/action/git.js';
+} from '../../src/adapters/github-rest.js';
+import type { GitHubClient, GitHubClientOptions } from '../../src/adapters/github-rest.js';
+import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/adapters/content-limit.js';
+import { publishComment } from '../../src/action/report-comment.js';
 import {
   COMMENT_BODY_LIMIT,
   connectionReset,

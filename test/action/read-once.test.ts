@@ -8,7 +8,7 @@ import {
   gitContentSource,
   parseNameStatus,
   parseRawDiff,
-} from '../../src/action/git.js';
+} from '../../src/adapters/git.js';
 import { runDiff } from '../../src/cli/diff.js';
 import { runGate } from '../../src/core/gate.js';
 import { stableKey, type ScanMemo } from '../../src/core/metrics/scan-memo.js';
@@ -85,9 +85,7 @@ afterAll(() => {
 });
 
 /** `context-reach diff --format json` in `repo` with git found through the counting wrapper; the report and the git starts. */
-async function diffCounting(
-  repo: ScenarioRepo,
-): Promise<{
+async function diffCounting(repo: ScenarioRepo): Promise<{
   report: { blocking: number; files: { findings: { severity: string; remedy?: unknown }[] }[] };
   starts: string[];
 }> {

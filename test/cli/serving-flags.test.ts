@@ -2,7 +2,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { createFileSource } from '../../src/cli/files.js';
+import { createFileSource } from '../../src/adapters/file-source.js';
 import { run } from '../../src/cli/run.js';
 
 // The serving flags of `inspect` and `diff` (issue 11), run in-process on the CLI's own code. The

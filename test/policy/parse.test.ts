@@ -1,11 +1,13 @@
 import { describe, expect, test } from 'vitest';
+import { runGate } from '../../src/core/gate.js';
+import { ReadError } from '../../src/core/parse/errors.js';
+import { decodeText } from '../../src/core/parse/source.js';
 import {
   DEFAULT_EXCLUDE,
   DEFAULT_FILES,
   MAX_POLICY_CHARS,
   PolicyError,
   parsePolicy,
-  parsePolicyBytes,
 } from '../../src/core/policy/index.js';
 
 const FILE = '.github/context-reach.yml';
@@ -417,44 +419,56 @@ describe('parsePolicy(text, path)', () => {
   });
 });
 
-describe('parsePolicyBytes(bytes, path)', () => {
+describe('a policy file from its bytes, as the gate reads it: parsePolicy(decodeText(bytes, path), path)', () => {
   const encode = (text: string): Uint8Array => new TextEncoder().encode(text);
+  /** The gate's path from the policy file's bytes to a policy (`runGate` in gate.ts). */
+  const fromBytes = (bytes: Uint8Array) => parsePolicy(decodeText(bytes, FILE), FILE);
+  /** The whole gate over a change of nothing, with these bytes as the base commit's policy file. */
+  const gateWith = (bytes: Uint8Array) =>
+    runGate(
+      { read: async (_ref, path) => (path === FILE ? bytes : null) },
+      { base: 'base', head: 'head', changes: [], policyPath: FILE },
+    );
 
-  test('reads UTF-8 text, with or without a byte-order mark', () => {
-    expect(parsePolicyBytes(encode('standing: block\n'), FILE).standing).toBe('block');
+  test('reads UTF-8 text, with or without a byte-order mark', async () => {
+    expect(fromBytes(encode('standing: block\n')).standing).toBe('block');
     expect(
-      parsePolicyBytes(new Uint8Array([0xef, 0xbb, 0xbf, ...encode('standing: block\n')]), FILE)
-        .standing,
+      fromBytes(new Uint8Array([0xef, 0xbb, 0xbf, ...encode('standing: block\n')])).standing,
     ).toBe('block');
+    expect((await gateWith(encode('standing: block\n'))).policy.source).toBe('file');
   });
 
-  test('refuses bytes that are not UTF-8, naming the line of the first bad byte', () => {
+  test('refuses bytes that are not UTF-8, naming the line of the first bad byte', async () => {
     // 0xFF never occurs in UTF-8 (RFC 3629, section 1).
     const bytes = new Uint8Array([
       ...encode('standing: report\nwaiver-label: a'),
       0xff,
       ...encode('\n'),
     ]);
-    expect(() => parsePolicyBytes(bytes, FILE)).toThrow(
-      `${FILE}:2: is not UTF-8 text; expected a YAML file saved as UTF-8`,
-    );
+    const message = `${FILE}, line 2: is not UTF-8 text: bytes ff 0a at byte offset 32 do not form a UTF-8 character (save the file as UTF-8)`;
+    expect(() => fromBytes(bytes)).toThrow(message);
+    await expect(gateWith(bytes)).rejects.toThrow(message);
   });
 
-  test('refuses more than MAX_POLICY_CHARS bytes without decoding them', () => {
+  test('refuses more than MAX_POLICY_CHARS characters', () => {
     const error = (() => {
       try {
-        parsePolicyBytes(new Uint8Array(MAX_POLICY_CHARS + 1), FILE);
+        fromBytes(encode('#'.repeat(MAX_POLICY_CHARS + 1)));
       } catch (e) {
         return e as PolicyError;
       }
       return null;
     })();
+    expect(error).toBeInstanceOf(PolicyError);
     expect(error?.message).toBe(
-      `${FILE}: is ${MAX_POLICY_CHARS + 1} bytes long; expected at most ${MAX_POLICY_CHARS} (a policy is a short file)`,
+      `${FILE}: is ${MAX_POLICY_CHARS + 1} characters long; expected at most ${MAX_POLICY_CHARS} (a policy is a short file)`,
     );
   });
 
   test('binary content (NUL bytes) is an error with a line, not a crash', () => {
-    expect(() => parsePolicyBytes(new Uint8Array([0, 1, 2, 3, 10, 0]), FILE)).toThrow(PolicyError);
+    expect(() => fromBytes(new Uint8Array([0, 1, 2, 3, 10, 0]))).toThrow(ReadError);
+    expect(() => fromBytes(new Uint8Array([0, 1, 2, 3, 10, 0]))).toThrow(
+      `${FILE}, line 1: contains a NUL character`,
+    );
   });
 });

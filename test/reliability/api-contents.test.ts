@@ -1,12 +1,12 @@
 import { execFileSync } from 'node:child_process';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/action/git.js';
+import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/adapters/content-limit.js';
 import {
   createGitHubClient,
   type GitHubClient,
   type GraphqlAnswer,
-} from '../../src/action/github.js';
-import { createApiContentSource, gitBlobId } from '../../src/action/graphql-contents.js';
+} from '../../src/adapters/github-rest.js';
+import { createApiContentSource, gitBlobId } from '../../src/adapters/graphql-contents.js';
 import type { ContentRequest } from '../../src/core/gate.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { runScenario } from '../support/action-harness.js';

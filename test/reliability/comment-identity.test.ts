@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { createGitHubClient, publishComment } from '../../src/action/github.js';
+import { publishComment } from '../../src/action/report-comment.js';
+import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import {
   runScenario,

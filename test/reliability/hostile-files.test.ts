@@ -3,7 +3,7 @@ import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node
 import { tmpdir } from 'node:os';
 import { dirname, join, relative, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createGitReader } from '../../src/action/git.js';
+import { createGitReader } from '../../src/adapters/git.js';
 import type { FileDecision, GateReport } from '../../src/core/compare/decide.js';
 import { runGate, type ContentSource } from '../../src/core/gate.js';
 import { renderComment } from '../../src/core/render/comment.js';

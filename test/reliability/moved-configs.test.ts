@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { createGitReader } from '../../src/action/git.js';
+import { createGitReader } from '../../src/adapters/git.js';
 import { runScenario, type ScenarioResult } from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';
 import { checkpointConfig, scenarioRepo } from '../support/scenario-repo.js';

@@ -1,12 +1,13 @@
 import { mkdtempSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createGitReader } from '../../src/action/git.js';
-import { createGitHubClient } from '../../src/action/github.js';
+import * as core from '@actions/core';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { createGitReader } from '../../src/adapters/git.js';
+import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { runAction } from '../../src/action/run-action.js';
 import { createRunnerOutput, fitSummary, SUMMARY_LIMIT } from '../../src/action/runner-output.js';
-import { createFileSource } from '../../src/cli/files.js';
+import { createFileSource } from '../../src/adapters/file-source.js';
 import type { GateReport } from '../../src/core/compare/decide.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderComment } from '../../src/core/render/comment.js';
@@ -316,7 +317,7 @@ describe('names from a pull request in links, SARIF and text (point 11)', () => 
       return true;
     };
     try {
-      const out = createRunnerOutput({});
+      const out = createRunnerOutput(core);
       out.warning('models/abc\u202enosj.gifnoc/config.json is not a model');
       out.info('read \u2067x\u2069');
     } finally {
@@ -359,11 +360,15 @@ describe("the job summary fits GitHub's 1 MiB in bytes (point 9)", () => {
     ).toBeGreaterThan(SUMMARY_LIMIT);
   });
 
-  it('the summary writer cuts any longer text by bytes, at a character boundary', () => {
+  it('the summary writer cuts any longer text by bytes, at a character boundary', async () => {
     const path = join(mkdtempSync(join(tmpdir(), 'context-reach-summary-')), 'summary.md');
     writeFileSync(path, '');
-    const out = createRunnerOutput({ GITHUB_STEP_SUMMARY: path });
-    void out.summary('é模'.repeat(400_000));
+    vi.stubEnv('GITHUB_STEP_SUMMARY', path);
+    try {
+      await createRunnerOutput(core).summary('é模'.repeat(400_000));
+    } finally {
+      vi.unstubAllEnvs();
+    }
     const written = readFileSync(path);
     expect(statSync(path).size).toBeLessThanOrEqual(SUMMARY_LIMIT);
     expect(new TextDecoder('utf-8', { fatal: true }).decode(written)).toContain('cut at GitHub');

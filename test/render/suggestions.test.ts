@@ -1,10 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import {
-  diffRightLines,
-  syncSuggestions,
-  type ReviewApi,
-  type ReviewComment,
-} from '../../src/action/review-suggestions.js';
+import { diffRightLines, syncSuggestions } from '../../src/action/review-suggestions.js';
+import type { ReviewApi, ReviewComment } from '../../src/adapters/github-rest.js';
 import { codeBlock } from '../../src/core/render/escape.js';
 import { planSuggestions, suggestionIdOf } from '../../src/core/render/suggestions.js';
 import { demoTrees, gateOver } from '../support/demo-gate.js';

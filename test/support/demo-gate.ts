@@ -1,6 +1,6 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
-import { createGitReader } from '../../src/action/git.js';
+import { createGitReader } from '../../src/adapters/git.js';
 import type { GateReport } from '../../src/core/compare/decide.js';
 import { runGate } from '../../src/core/gate.js';
 import type { ServingPatch } from '../../src/core/model.js';

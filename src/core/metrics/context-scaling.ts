@@ -5,11 +5,6 @@ import type { Scaling } from '../model.js';
 import { allPositiveFinite } from './frequencies.js';
 import { positiveFinite } from './sizes.js';
 
-/** yarn ramp start `α` for the Llama family (Peng et al. 2023, YaRN, §3.2). */
-export const YARN_ALPHA = 1;
-/** yarn ramp end `β` for the Llama family (Peng et al. 2023, YaRN, §3.2). */
-export const YARN_BETA = 32;
-
 /**
  * base: NTK-aware base `b' = b s^(r/(r-2))` (Peng et al. 2023, YaRN, §3.1, Eq. 16); null when
  * `r <= 2` or the result is not finite.

@@ -20,6 +20,7 @@ const SHAPES: Record<FloatFormat, FormatShape> = {
   bf16: { bits: 8, minExponent: -126, maxExponent: 127 },
 };
 
+/** value: largest finite number `(2 - 2^(1-p)) 2^emax` (binary16 65504, bfloat16 ≈ 3.3895e38). */
 const MAX_FINITE: Record<FloatFormat, number> = {
   fp32: (2 - 2 ** -23) * 2 ** 127,
   fp16: (2 - 2 ** -10) * 2 ** 15,
@@ -39,11 +40,6 @@ export function minNormalExponent(format: FloatFormat): number {
 /** tokens: `2^p`, the largest n with every integer in [0, n] exact (IEEE 754-2008: 2^24, 2^11; bfloat16 2^8). */
 export function positionExactLimit(format: FloatFormat): number {
   return 2 ** SHAPES[format].bits;
-}
-
-/** value: largest finite number `(2 - 2^(1-p)) 2^emax` (binary16 65504, bfloat16 ≈ 3.3895e38). */
-export function maxFinite(format: FloatFormat): number {
-  return MAX_FINITE[format];
 }
 
 /**

@@ -63,11 +63,6 @@ export function layerAttentions(spec: ModelSpec): LayerAttention[] | null {
   return kinds;
 }
 
-/** Whether decoder layer `i` has the model's position code (false where the spec lists it as position-free). */
-export function hasPositionCode(spec: ModelSpec, i: number): boolean {
-  return !(spec.positionFreeLayers ?? []).includes(i);
-}
-
 /**
  * The layers grouped by attention and position code, in first-seen order; null when degenerate
  * (see `layerAttentions`) or when a position-free index is not a layer.

@@ -54,11 +54,6 @@ export function cosineSum(theta: Float64Array, k: number): number {
   return s;
 }
 
-/** 0..2: `sqrt(2 (1 - S(k)))` with `S(k) = cosineSum / P` (METRICS.md, separationFloor). */
-export function separationAt(theta: Float64Array, k: number): number {
-  return Math.sqrt(2 * (1 - cosineSum(theta, k) / theta.length));
-}
-
 /** The scan over one range of offsets: floor, its smallest offset, first negative sum. */
 export interface SimilarityPartial {
   floor: number;

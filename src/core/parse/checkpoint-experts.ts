@@ -24,29 +24,6 @@ type SizeReader = (
   required: boolean,
 ) => number | undefined;
 
-/** Keys these readers consume (for checks that every metric-changing key is read). */
-export const EXPERT_KEYS: readonly string[] = [
-  'num_local_experts',
-  'num_experts',
-  'n_routed_experts',
-  'num_experts_per_tok',
-  'moe_intermediate_size',
-  'n_shared_experts',
-  'shared_expert_intermediate_size',
-  'first_k_dense_replace',
-  'moe_layer_freq',
-  'mlp_only_layers',
-  'decoder_sparse_step',
-  'intermediate_size_mlp',
-  'moe_layers',
-  'interleave_moe_layer_step',
-  'kv_lora_rank',
-  'q_lora_rank',
-  'qk_rope_head_dim',
-  'qk_nope_head_dim',
-  'v_head_dim',
-];
-
 /** Families whose mixture layers always add one shared expert as wide as a routed one (Llama-4 style). */
 const ONE_SHARED_FAMILIES = new Set(['llama4', 'llama4_text']);
 

@@ -213,19 +213,6 @@ function hasList(r: FieldReader, path: string[]): boolean {
   return Array.isArray(v) && v.length > 0;
 }
 
-/** Keys this reader consumes (for checks that every metric-changing key is read). */
-export const LAYER_KEYS: readonly string[] = [
-  'layer_types',
-  'sliding_window',
-  'use_sliding_window',
-  'sliding_window_pattern',
-  'max_window_layers',
-  'attention_chunk_size',
-  'no_rope_layers',
-  'no_rope_layer_interval',
-  'rope_local_base_freq',
-];
-
 function dropWindow(plan: LayerPlanDraft): LayerPlanDraft {
   plan.slidingWindow = null;
   plan.windowLayers = null;

@@ -6,7 +6,7 @@ export {
   DEFAULT_POLICY_PATH,
   MAX_POLICY_CHARS,
 } from './defaults.js';
-export { PolicyError, parsePolicy, parsePolicyBytes, servingPatchOf } from './parse.js';
+export { PolicyError, parsePolicy, servingPatchOf } from './parse.js';
 export { isModelConfig, matchingOverrides, resolvePolicy, ruleLevel } from './resolve.js';
 export { POLICY_SCHEMA } from './schema.js';
 export { editDistance, nearestName } from './nearest.js';

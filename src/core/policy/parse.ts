@@ -557,37 +557,3 @@ export function parsePolicy(text: string, path: string): Policy {
     locations,
   };
 }
-
-/**
- * Parses a policy file from its bytes: refuses more than `MAX_POLICY_CHARS` bytes unread and
- * anything that is not UTF-8 text (a byte-order mark is allowed), then `parsePolicy`.
- */
-export function parsePolicyBytes(bytes: Uint8Array, path: string): Policy {
-  if (bytes.byteLength > MAX_POLICY_CHARS) {
-    throw new PolicyError([
-      {
-        file: path,
-        line: null,
-        key: null,
-        message: `is ${bytes.byteLength} bytes long; expected at most ${MAX_POLICY_CHARS} (a policy is a short file)`,
-      },
-    ]);
-  }
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: false }).decode(bytes);
-  } catch {
-    // The lossy decoding marks the first bad sequence with U+FFFD: its line is the place to look.
-    const lossy = new TextDecoder('utf-8').decode(bytes);
-    const line = lossy.slice(0, Math.max(lossy.indexOf('\uFFFD'), 0)).split('\n').length;
-    throw new PolicyError([
-      {
-        file: path,
-        line,
-        key: null,
-        message: 'is not UTF-8 text; expected a YAML file saved as UTF-8',
-      },
-    ]);
-  }
-  return parsePolicy(text, path);
-}

@@ -161,10 +161,6 @@ export function togetherText(
   return `All first fixes together (${changeText(together.change, spec, naming)}) ${verdict} ⇒ ${metricsText(together.metrics)}`;
 }
 
-/** Said once wherever remedies are shown. */
-export const REMEDY_NOTE =
-  'Each remedy was applied to the description, measured and judged again by the same rules and limits before it is shown.';
-
 /** Said once wherever remedies are shown: what "passes" means and what it does not. */
 export const PASSES_NOTE =
   'A fix "passes these rules" when the changed file, measured and judged again by the same rules and limits, no longer blocks; it does not show the model keeps its quality.';

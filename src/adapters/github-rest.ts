@@ -1,12 +1,15 @@
 /**
- * The one adapter for the GitHub REST API. Octokit with the retry plugin (5xx and connection
- * failures, with growing waits) and the throttling plugin (primary and secondary rate limits,
- * waiting as long as GitHub asks, within a bound). Errors leave as `ApiError`; the token never
- * reaches a log line or an error message.
+ * The one adapter for the GitHub REST API: what each call sends and what its answer means, never
+ * what the action makes of it (the living report comment is `src/action/report-comment.ts`, the
+ * review suggestions `src/action/review-suggestions.ts`). Octokit with the retry plugin (5xx and
+ * connection failures, with growing waits) and the throttling plugin (primary and secondary rate
+ * limits, waiting as long as GitHub asks, within a bound). Errors leave as `ApiError`; the token
+ * never reaches a log line or an error message.
  */
 import type { getOctokit } from '@actions/github';
 import type { ChangedFile } from '../core/changes.js';
-import { ContentTooLargeError, MAX_CONFIG_BYTES } from './git.js';
+import type { PlannedSuggestion } from '../core/render/suggestions.js';
+import { ContentTooLargeError, MAX_CONFIG_BYTES } from './content-limit.js';
 
 /** GitHub lists at most this many files of a pull request (REST API documentation, "List pull requests files"). */
 export const PULL_REQUEST_FILE_CAP = 3000;
@@ -269,6 +272,124 @@ async function readBounded(body: unknown, path: string, limit: number): Promise<
   return bytes;
 }
 
+/** One review comment as the adapter needs it. */
+export interface ReviewComment {
+  id: number;
+  path: string;
+  /** Line it is on now at head; null once the line is outdated. */
+  line: number | null;
+  startLine: number | null;
+  body: string;
+  /** The author is a bot account (the workflow token writes as `github-actions[bot]`). */
+  byBot: boolean;
+}
+
+export interface ReviewTarget {
+  owner: string;
+  repo: string;
+  pull: number;
+  /** The head commit the suggestions are written against. */
+  headSha: string;
+}
+
+/**
+ * Review comments, for the review suggestions (REST: "List review comments on a pull request",
+ * "Create a review comment for a pull request", "Update a review comment for a pull request",
+ * "Delete a review comment for a pull request", and the pull request's file list for the diff).
+ */
+export interface ReviewApi {
+  /** Every review comment of the pull request, paginated. */
+  listReviewComments(target: ReviewTarget): Promise<ReviewComment[]>;
+  createReviewComment(target: ReviewTarget, suggestion: PlannedSuggestion): Promise<void>;
+  updateReviewComment(target: ReviewTarget, id: number, body: string): Promise<void>;
+  deleteReviewComment(target: ReviewTarget, id: number): Promise<void>;
+  /** Each changed file's unified diff (`patch`), absent for binary or very large files. */
+  listPatches(target: ReviewTarget): Promise<Map<string, string>>;
+}
+
+/** The REST calls, with the runner's request defaults and the retry plugin; the Octokit stack loads on first use. */
+export function createReviewApi(token: string, options: { baseUrl?: string }): ReviewApi {
+  let octokit: Octokit | null = null;
+  const client = async (): Promise<Octokit> => {
+    if (octokit) return octokit;
+    const { getOctokit, actionsDefaults, retry } = await import('./octokit.js');
+    octokit = getOctokit(
+      token,
+      {
+        baseUrl: options.baseUrl ?? 'https://api.github.com',
+        request: { ...actionsDefaults.request },
+        retry: { retries: 2 },
+      },
+      retry,
+    );
+    return octokit;
+  };
+  return {
+    async listReviewComments({ owner, repo, pull }) {
+      const kit = await client();
+      const entries = await kit.paginate(kit.rest.pulls.listReviewComments, {
+        owner,
+        repo,
+        pull_number: pull,
+        per_page: 100,
+      });
+      return entries.map((c) => ({
+        id: c.id,
+        path: c.path,
+        line: c.line ?? null,
+        startLine: c.start_line ?? null,
+        body: c.body,
+        byBot: c.user?.type === 'Bot',
+      }));
+    },
+    async createReviewComment({ owner, repo, pull, headSha }, s) {
+      const kit = await client();
+      await kit.rest.pulls.createReviewComment({
+        owner,
+        repo,
+        pull_number: pull,
+        commit_id: headSha,
+        path: s.path,
+        body: s.body,
+        line: s.line,
+        side: 'RIGHT',
+        ...(s.startLine < s.line ? { start_line: s.startLine, start_side: 'RIGHT' as const } : {}),
+        request: { retries: 0 },
+      });
+    },
+    async updateReviewComment({ owner, repo }, id, body) {
+      const kit = await client();
+      await kit.rest.pulls.updateReviewComment({ owner, repo, comment_id: id, body });
+    },
+    async deleteReviewComment({ owner, repo }, id) {
+      const kit = await client();
+      await kit.rest.pulls.deleteReviewComment({ owner, repo, comment_id: id });
+    },
+    async listPatches({ owner, repo, pull }) {
+      const kit = await client();
+      const entries = await kit.paginate(kit.rest.pulls.listFiles, {
+        owner,
+        repo,
+        pull_number: pull,
+        per_page: 100,
+      });
+      return new Map(
+        entries
+          .filter((e) => typeof e.patch === 'string')
+          .map((e) => [e.filename, e.patch as string]),
+      );
+    },
+  };
+}
+
+/** Whether an error from the API is a refusal to write (a read-only token, as forks get). */
+export function isWriteRefused(error: unknown): boolean {
+  const status = (error as { status?: unknown } | null)?.status;
+  return (
+    status === 403 || (status === 404 && /not accessible/i.test(String((error as Error).message)))
+  );
+}
+
 export function createGitHubClient(token: string, options: GitHubClientOptions): GitHubClient {
   const msPerSecond = options.msPerSecond ?? 1000;
   const rateLimitRetries = options.rateLimitRetries ?? 2;
@@ -318,7 +439,7 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
   const limiterId = `context-reach-${clientCount}`;
   let octokit!: Octokit;
   let loading: Promise<void> | null = null;
-  // The Octokit stack is loaded and built on the first call (see octokit.ts for why).
+  // The Octokit stack is loaded and built on the first call (see `octokit.ts` for why).
   const connect = () =>
     (loading ??= import('./octokit.js').then(
       ({ getOctokit, actionsDefaults, retry, throttling }) => {
@@ -685,91 +806,4 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
       });
     },
   };
-}
-
-/** Whether a failed call may still have taken effect: no answer, or a server error. */
-function outcomeUnknown(error: unknown): boolean {
-  return error instanceof ApiError && (error.status === 0 || error.status >= 500);
-}
-
-/** Tries to create a comment at most this many times when the answers are lost, as the retry plugin would (1 + 3 retries). */
-const CREATE_ATTEMPTS = 4;
-
-/** What a duplicate report comment becomes when it cannot be deleted: no marker, so no run takes it for the report. */
-export function supersededBody(url: string): string {
-  return `_This report was replaced by [the current context-reach report](${url}); runs at the same time wrote two._`;
-}
-
-/**
- * Keeps exactly one report comment: updates the one found by `marker`, creates one when there
- * is none or the found one is gone (404, or 422 when a fresh read confirms it is gone). Then it
- * converges: two runs at once may each have created one, so every marked comment of the same
- * author is listed, the oldest is kept with this run's body and the others are deleted (or,
- * when deleting is refused, lose the marker and point to the one kept).
- */
-export async function publishComment(
-  client: GitHubClient,
-  target: { owner: string; repo: string; issueNumber: number; marker: string; body: string },
-): Promise<{ comment: Comment; action: 'created' | 'updated' }> {
-  const written = await writeComment(client, target);
-  const { owner, repo, issueNumber, marker, body } = target;
-  const login = (await client.identity()) ?? written.comment.author;
-  if (login === null) return written;
-  const all = await client.listMarkedComments(owner, repo, issueNumber, marker, login);
-  if (all.length <= 1) return written;
-  const [oldest, ...others] = all as [Comment, ...Comment[]];
-  const kept =
-    oldest.id === written.comment.id
-      ? written.comment
-      : await client.updateComment(owner, repo, oldest.id, body);
-  for (const other of others) {
-    try {
-      await client.deleteComment(owner, repo, other.id);
-    } catch {
-      await client
-        .updateComment(owner, repo, other.id, supersededBody(kept.url))
-        .catch(() => undefined);
-    }
-  }
-  return { comment: kept, action: written.action };
-}
-
-async function writeComment(
-  client: GitHubClient,
-  target: { owner: string; repo: string; issueNumber: number; marker: string; body: string },
-): Promise<{ comment: Comment; action: 'created' | 'updated' }> {
-  const { owner, repo, issueNumber, marker, body } = target;
-  const existing = await client.findComment(owner, repo, issueNumber, marker);
-  if (existing) {
-    try {
-      return {
-        comment: await client.updateComment(owner, repo, existing.id, body),
-        action: 'updated',
-      };
-    } catch (error) {
-      if (!(error instanceof ApiError)) throw error;
-      const gone =
-        isNotFoundError(error) ||
-        (error.status === 422 && (await client.getComment(owner, repo, existing.id)) === null);
-      if (!gone) throw error;
-    }
-  }
-  // A create whose answer was lost may have landed: look for it before trying again, so a
-  // dropped connection never leaves two report comments.
-  for (let attempt = 1; ; attempt += 1) {
-    try {
-      return {
-        comment: await client.createComment(owner, repo, issueNumber, body),
-        action: 'created',
-      };
-    } catch (error) {
-      if (!outcomeUnknown(error) || attempt >= CREATE_ATTEMPTS) throw error;
-    }
-    const landed = await client.findComment(owner, repo, issueNumber, marker);
-    if (landed) {
-      const comment =
-        landed.body === body ? landed : await client.updateComment(owner, repo, landed.id, body);
-      return { comment, action: 'created' };
-    }
-  }
 }

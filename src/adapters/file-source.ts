@@ -1,15 +1,13 @@
 import { open, stat } from 'node:fs/promises';
+import { MAX_CONFIG_BYTES } from './content-limit.js';
 
-/** Largest model config read (4 MiB): real configs are a few KiB; anything larger is refused unread. */
-export const MAX_FILE_BYTES = 4 * 1024 * 1024;
-
-/** The CLI's one adapter for reading local files. */
+/** The one adapter for reading local files: the CLI's named files, the action's report files. */
 export interface FileSource {
   read(path: string): Promise<Uint8Array>;
 }
 
 /** Reads a local file the user named, refusing directories and anything over the size limit unread. */
-export function createFileSource(maxBytes = MAX_FILE_BYTES): FileSource {
+export function createFileSource(maxBytes = MAX_CONFIG_BYTES): FileSource {
   return {
     async read(path) {
       const info = await stat(path).catch((error: NodeJS.ErrnoException) => {

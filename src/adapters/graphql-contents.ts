@@ -25,8 +25,8 @@
  */
 import { createHash } from 'node:crypto';
 import type { ContentRequest, ContentSource } from '../core/gate.js';
-import { MAX_CONFIG_BYTES } from './git.js';
-import type { GitHubClient, GitTree, GraphqlAnswer } from './github.js';
+import { MAX_CONFIG_BYTES } from './content-limit.js';
+import type { GitHubClient, GitTree, GraphqlAnswer } from './github-rest.js';
 
 /** Aliased fields in one GraphQL query, paths or blobs. */
 export const FIELDS_PER_QUERY = 100;

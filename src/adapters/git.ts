@@ -7,23 +7,7 @@
 import { execFile } from 'node:child_process';
 import type { ChangedFile } from '../core/changes.js';
 import type { ContentSource } from '../core/gate.js';
-
-/** Largest model config read, in bytes; larger blobs are refused unread (default: `4 MiB`). */
-export const MAX_CONFIG_BYTES = 4 * 1024 * 1024;
-
-/** A file refused because it is larger than `limit` bytes. */
-export class ContentTooLargeError extends Error {
-  constructor(
-    readonly path: string,
-    readonly size: number,
-    readonly limit: number,
-  ) {
-    super(
-      `${path} is ${size} bytes; expected at most ${limit} bytes for a model config (the file was not read)`,
-    );
-    this.name = 'ContentTooLargeError';
-  }
-}
+import { ContentTooLargeError, MAX_CONFIG_BYTES } from './content-limit.js';
 
 /** A git call that failed: exit status, signal, or output past its bound. */
 export class GitError extends Error {
@@ -147,12 +131,12 @@ const KINDS: Record<string, TreeEntryKind> = {
 
 type Run = (args: string[], maxBuffer: number, input?: string) => Promise<RunResult>;
 
-/** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
 /** The git command of an argument list (`commit` in `-c user.name=x commit -m y`), for messages. */
 function verb(args: readonly string[]): string {
   return args.find((arg, i) => !arg.startsWith('-') && args[i - 1] !== '-c') ?? 'command';
 }
 
+/** Runs git; resolves with any exit status, rejects on timeout, output overflow or spawn failure. */
 function runner(cwd: string, git: string, timeout: number): Run {
   return function run(args, maxBuffer, input) {
     // The checkout's own settings stay, but nothing may prompt or run a file-system monitor.
@@ -633,53 +617,22 @@ export function gitContentSource(git: GitReader): ContentSource {
   };
 }
 
-/** A throwaway repository the demo and tests commit trees into. */
-export interface ScratchRepository {
-  /** `git init` with `main` as the branch. */
-  init(): Promise<void>;
-  /** Stages everything in the working tree and commits it; resolves with the new commit id. */
-  commitAll(message: string): Promise<string>;
-}
+/**
+ * A git command that must succeed, for callers with their own recipe of calls (the CLI's demo
+ * repository): the same child process, bounds and settings as every other call here. Resolves
+ * with standard output trimmed; throws `GitError` on a non-zero exit status.
+ */
+export type GitCommand = (args: string[]) => Promise<string>;
 
-/** Identity of scratch commits: invented, so no one's global git settings are needed or used. */
-const SCRATCH_IDENTITY = [
-  '-c',
-  'user.name=context-reach demo',
-  '-c',
-  'user.email=demo@example.invalid',
-  '-c',
-  'commit.gpgsign=false',
-];
-
-export function createScratchRepository(
+export function createGitCommand(
   cwd: string,
   options: Pick<GitReaderOptions, 'git' | 'timeoutMs'> = {},
-): ScratchRepository {
+): GitCommand {
   const run = runner(cwd, options.git ?? 'git', options.timeoutMs ?? 30_000);
-  const must = async (args: string[]): Promise<string> => {
+  return async (args) => {
     const result = await run(args, 1024 * 1024);
     if (result.code !== 0) throw failed(args, result);
     return result.stdout.toString('utf8').trim();
-  };
-  return {
-    async init() {
-      await must(['init', '-q']);
-      // `init -b` needs git 2.28; pointing HEAD works on any git.
-      await must(['symbolic-ref', 'HEAD', 'refs/heads/main']);
-    },
-    async commitAll(message) {
-      await must(['add', '-A']);
-      await must([
-        ...SCRATCH_IDENTITY,
-        'commit',
-        '-q',
-        '--allow-empty',
-        '--no-verify',
-        '-m',
-        message,
-      ]);
-      return must(['rev-parse', 'HEAD']);
-    },
   };
 }
 
