@@ -5,7 +5,7 @@ import {
   decideFile,
   type ChangedConfig,
 } from '../../src/core/compare/decide.js';
-import { BUILT_IN_JUDGING, type Judging } from '../../src/core/compare/judging.js';
+import { BUILT_IN_JUDGING, type Judging } from '../../src/core/policy/judging.js';
 import { inspectModel } from '../../src/core/inspect.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 

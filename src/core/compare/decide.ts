@@ -6,16 +6,23 @@ import type { MetricPath } from '../metrics/types.js';
 import { RULES, isRuleId } from '../rules/catalog.js';
 import { uncomputedScanMetrics } from '../rules/metric-rules.js';
 import { SEVERITY_ORDER } from '../severity.js';
-import { formatInteger, formatNumber, percentChange } from '../units.js';
-import { formatMetric } from '../render/metric-format.js';
+import { formatInteger, formatNumber, percentChange } from '../format/units.js';
+import { formatMetric } from '../format/metric-format.js';
 import { rotaryHeadDim } from '../metrics/frequencies.js';
-import type { Judging, Limit } from './judging.js';
-import { METRIC_PATHS, METRIC_SOURCES, metricValue } from './metric-path.js';
-import type { CombinedRemedy, RemedyFields } from '../remedy/types.js';
-import { inheritTrainedSpan, type Assumption } from './assumed.js';
+import type { Judging, Limit } from '../policy/judging.js';
+import { METRIC_PATHS, METRIC_SOURCES, metricValue } from '../metrics/metric-path.js';
+import type {
+  FileDecision,
+  GateReport,
+  JudgedFinding,
+  LimitState,
+  MetricDelta,
+  PolicyInfo,
+  Verdict,
+} from '../report/types.js';
+import { inheritTrainedSpan } from './assumed.js';
 import { shapeChangeFinding } from './shape-change.js';
-
-export type Verdict = 'ok' | 'warn' | 'block';
+import { type Assumption } from '../report/types.js';
 
 /** One changed model config with both of its versions read (null where a side has none). */
 export interface ChangedConfig {
@@ -23,67 +30,6 @@ export interface ChangedConfig {
   base: FileReport | FileFailure | null;
   head: FileReport | FileFailure | null;
   judging: Judging;
-}
-
-/** A finding of the head version, as the gate judged it. */
-export interface JudgedFinding extends Finding, Partial<RemedyFields> {
-  /** The metric a `limit-crossed` finding is about (default: absent for other rules). */
-  metric?: MetricPath;
-  /** The base version already had it (same rule and key). */
-  standing: boolean;
-  /** The severity the verdict counts, after policy, standing and waiver (null: counts for nothing). */
-  counts: Severity | null;
-  /** A blocking finding the waiver label turned into a warning. */
-  waived: boolean;
-  /** Path of the file at head. */
-  file: string;
-}
-
-export type LimitState = 'ok' | 'crossed' | 'unjudged';
-
-/** One metric row: base, head, change, and the limit it was judged by. */
-export interface MetricDelta {
-  metric: MetricPath;
-  base: number | null;
-  head: number | null;
-  /** head − base, null when either is missing. */
-  change: number | null;
-  /** Percent change, null when undefined (base missing or zero). */
-  changePct: number | null;
-  limit: Limit | null;
-  state: LimitState;
-  /** Why a limited row was not judged, e.g. the span is shorter than the limit (default: absent). */
-  note?: string;
-}
-
-export interface FileDecision {
-  path: string;
-  previousPath: string | null;
-  status: ChangedFile['status'];
-  dialect: FileReport['dialect'] | null;
-  verdict: Verdict;
-  /** Rows that changed or are judged by a limit, in contract order. */
-  deltas: MetricDelta[];
-  findings: JudgedFinding[];
-  base: FileReport | null;
-  head: FileReport | null;
-  /** Set when a version could not be read. */
-  baseError: FileFailure | null;
-  headError: FileFailure | null;
-  /** Every blocking finding's first remedy applied at once, and whether that passes (default: absent). */
-  remedyTogether?: CombinedRemedy | null;
-  /** What the head's values take on assumption (the base's trained span), null when nothing (default: absent). */
-  assumed?: Assumption | null;
-}
-
-export interface PolicyInfo {
-  /** Where the judging came from: the base commit's policy file, or built-in rules only. */
-  source: 'file' | 'built-in';
-  path: string;
-  /** The pull request changes the policy file: the change applies after merge. */
-  changedInHead: boolean;
-  /** What the head's policy would change, `key old → new` (default: absent, none or unchanged). */
-  limitChanges?: string[];
 }
 
 export interface GateInput {
@@ -94,20 +40,6 @@ export interface GateInput {
   /** The waiver label and whether the pull request carries it (default: none). */
   waiver: { label: string | null; applied: boolean };
   /** Notices for the report (not-judged files, truncated file lists, read-only tokens). */
-  notices: string[];
-  base: string;
-  head: string;
-}
-
-export interface GateReport {
-  version: 1;
-  verdict: Verdict;
-  blocking: number;
-  warnings: number;
-  files: FileDecision[];
-  deleted: ChangedFile[];
-  policy: PolicyInfo;
-  waiver: { label: string | null; applied: boolean; waivedBlocks: number };
   notices: string[];
   base: string;
   head: string;

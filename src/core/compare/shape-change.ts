@@ -8,7 +8,7 @@
 import type { FileReport } from '../inspect.js';
 import type { Finding, ModelSpec } from '../model.js';
 import { RULES } from '../rules/catalog.js';
-import { formatCount, formatInteger } from '../units.js';
+import { formatCount, formatInteger } from '../format/units.js';
 
 /** Spec fields that fix the shapes of stored weights, with the words for them. */
 export const SHAPE_FIELDS: readonly {

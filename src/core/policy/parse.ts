@@ -11,7 +11,7 @@ import { DEFAULT_EXCLUDE, DEFAULT_FILES, MAX_POLICY_CHARS } from './defaults.js'
 import { GLOB_OPTIONS, MAX_GLOB_LENGTH, MAX_GLOB_STARS } from './resolve.js';
 import { formatKeyPath, lineOf, nodeAt } from './locate.js';
 import type { KeyPath } from './locate.js';
-import { nearestName } from './nearest.js';
+import { nearestName } from '../parse/nearest.js';
 import { validatePolicyValue } from './schema.js';
 import type {
   LimitSetting,

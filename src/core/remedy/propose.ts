@@ -9,8 +9,8 @@
  * capped stages of the base search (`rotary-base.ts`).
  */
 import { checkLimit } from '../compare/decide.js';
-import type { Limit } from '../compare/judging.js';
-import { isMetricPath, metricValue } from '../compare/metric-path.js';
+import type { Limit } from '../policy/judging.js';
+import { isMetricPath, metricValue } from '../metrics/metric-path.js';
 import { computeMetrics, frequencyPlan } from '../metrics/compute.js';
 import { positionExactLimit } from '../metrics/float-format.js';
 import { servedSequences } from '../metrics/kv-cache.js';
@@ -27,7 +27,7 @@ import { DEFAULT_GROUP_SIZE } from '../metrics/quantized-weights.js';
 import type { Finding, FloatFormat, ModelSpec, StorageDType } from '../model.js';
 import { FLOAT_FORMATS, STORAGE_DTYPES } from '../model.js';
 import { isRuleId, RULES } from '../rules/catalog.js';
-import { formatInteger, formatNumber, formatTokens } from '../units.js';
+import { formatInteger, formatNumber, formatTokens } from '../format/units.js';
 import { applyChange } from './apply-change.js';
 import { lightMetric, rangeMetrics, budgetMetrics } from './light-metrics.js';
 import { uncomputedScanMetrics } from '../rules/metric-rules.js';
@@ -40,7 +40,7 @@ import {
 } from './prove.js';
 import { searchRotaryBase, type BaseDirection, type BaseTrial } from './rotary-base.js';
 import { coveringFactor } from './scaling-factor.js';
-import type { Change, Remedy, RemedyFields } from './types.js';
+import type { Change, Remedy, RemedyFields } from '../report/types.js';
 import { largestPassing } from './whole-search.js';
 
 /** Full proofs one kind of change may run before it gives up (default: `4`). */

@@ -2,7 +2,7 @@ import type { Finding, LocationMap, ModelSpec } from '../model.js';
 import type { MetricPath, Metrics } from '../metrics/types.js';
 import { MAX_SCAN_ELEMENTS, MAX_SCAN_SPAN, MAX_SCAN_WORK } from '../metrics/scan-limits.js';
 import { reserveWords, usableDeviceBytes } from '../metrics/memory-curve.js';
-import { formatBytes, formatInteger, formatNumber, formatTokens } from '../units.js';
+import { formatBytes, formatInteger, formatNumber, formatTokens } from '../format/units.js';
 import { RULES, type RuleId } from './catalog.js';
 
 function at(

@@ -9,8 +9,8 @@
  */
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
-import type { GateReport, JudgedFinding, Verdict } from '../compare/decide.js';
-import { METRIC_PATHS } from '../compare/metric-path.js';
+
+import { METRIC_PATHS } from '../metrics/metric-path.js';
 import {
   FLOAT_FORMATS,
   LAYER_ATTENTIONS,
@@ -24,6 +24,7 @@ import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 import type { Metrics } from '../metrics/types.js';
 import { ReadError } from '../parse/errors.js';
 import { RULES } from '../rules/catalog.js';
+import type { GateReport, JudgedFinding, Verdict } from './types.js';
 
 /** Longest report read back, in UTF-16 code units (default: `67108864`, 64 Mi). */
 export const MAX_REPORT_CHARS = 64 * 1024 * 1024;
