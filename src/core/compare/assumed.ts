@@ -13,6 +13,7 @@ import type { MetricPath } from '../metrics/types.js';
 import type { Finding, ModelSpec } from '../model.js';
 import { metricFindings } from '../rules/metric-rules.js';
 import { specFindings } from '../rules/spec-rules.js';
+import { samePositionCode } from '../rules/change-rules.js';
 import { formatTokens } from '../format/units.js';
 import { METRIC_PATHS, metricValue } from '../metrics/metric-path.js';
 
@@ -36,11 +37,6 @@ export function readerFindings(report: FileReport): Finding[] {
     else out.push(finding);
   }
   return out;
-}
-
-/** The position codes are the same (kind, base, width share, scaling block). */
-export function samePositionCode(a: ModelSpec, b: ModelSpec): boolean {
-  return JSON.stringify(a.position) === JSON.stringify(b.position);
 }
 
 /**

@@ -24,7 +24,8 @@ import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 import type { Metrics } from '../metrics/types.js';
 import { ReadError } from '../parse/errors.js';
 import { RULES } from '../rules/catalog.js';
-import type { GateReport, JudgedFinding, Verdict } from './types.js';
+import type { GateReport } from './types.js';
+import { tally, verdictOf } from './verdict.js';
 
 /** Longest report read back, in UTF-16 code units (default: `67108864`, 64 Mi). */
 export const MAX_REPORT_CHARS = 64 * 1024 * 1024;
@@ -421,12 +422,6 @@ function describe(error: ErrorObject, root: unknown): string {
   return `${where} is ${quoted}; expected ${expected}`;
 }
 
-function verdictOf(findings: readonly JudgedFinding[]): Verdict {
-  if (findings.some((f) => f.counts === 'block')) return 'block';
-  if (findings.some((f) => f.counts === 'warn')) return 'warn';
-  return 'ok';
-}
-
 /** Numbers the spec types as always present were NaN when written; JSON wrote them as null. */
 function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
   if (value === null || typeof value !== 'object' || Array.isArray(value)) return value;
@@ -542,13 +537,8 @@ export function readGateJson(text: string, file: string): GateReport {
     }
   }
   const all = report.files.flatMap((decision) => decision.findings);
-  const expected: Record<'verdict' | 'blocking' | 'warnings' | 'waivedBlocks', string | number> = {
-    verdict: verdictOf(all),
-    blocking: all.filter((f) => f.counts === 'block').length,
-    warnings: all.filter((f) => f.counts === 'warn').length,
-    waivedBlocks: 0,
-  };
-  expected.waivedBlocks = all.filter((f) => f.waived).length;
+  const expected: Record<'verdict' | 'blocking' | 'warnings' | 'waivedBlocks', string | number> =
+    tally(all);
   for (const key of ['verdict', 'blocking', 'warnings', 'waivedBlocks'] as const) {
     const stated = key === 'waivedBlocks' ? report.waiver.waivedBlocks : report[key];
     const path = key === 'waivedBlocks' ? '/waiver/waivedBlocks' : `/${key}`;
