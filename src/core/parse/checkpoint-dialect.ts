@@ -45,7 +45,6 @@ import {
   DEFAULT_YARN_ALPHA,
   DEFAULT_YARN_BETA,
   defaultHeadDim,
-  isCount,
 } from './spec-defaults.js';
 import type { SourceMapping, SourceValue } from './source.js';
 import { readLatent, readMixture } from './checkpoint-experts.js';
@@ -58,6 +57,7 @@ import {
   type RotaryContext,
 } from './checkpoint-scaling.js';
 import { readMptAttention } from './checkpoint-mpt.js';
+import { isCount } from '../metrics/sizes.js';
 
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
 export const CHECKPOINT_MARKERS: readonly string[] = [

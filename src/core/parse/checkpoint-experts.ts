@@ -16,7 +16,7 @@
 import type { Experts, LatentAttention } from '../model.js';
 import type { FieldReader } from './fields.js';
 import { familyOf } from './checkpoint-families.js';
-import { isCount } from './spec-defaults.js';
+import { isCount } from '../metrics/sizes.js';
 
 type SizeReader = (
   field: string,

@@ -22,8 +22,9 @@
 import type { LayerAttention } from '../model.js';
 import type { FieldReader } from './fields.js';
 import { familyOf } from './checkpoint-families.js';
-import { isCount } from './spec-defaults.js';
+
 import type { SourceMapping, SourceValue } from './source.js';
+import { isCount } from '../metrics/sizes.js';
 
 const LAYER_TYPE_NAMES: Readonly<Record<string, LayerAttention>> = {
   full_attention: 'full',

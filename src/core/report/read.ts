@@ -23,6 +23,7 @@ import type { ModelSpec } from '../model.js';
 import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 import type { Metrics } from '../metrics/types.js';
 import { ReadError } from '../parse/errors.js';
+import { truncate } from '../parse/quote.js';
 import { RULES } from '../rules/catalog.js';
 import type { GateReport } from './types.js';
 import { tally, verdictOf } from './verdict.js';
@@ -411,7 +412,7 @@ function describe(error: ErrorObject, root: unknown): string {
     : value !== null && typeof value === 'object'
       ? 'a mapping'
       : (JSON.stringify(value) ?? 'nothing');
-  const quoted = shown.length > 60 ? `${shown.slice(0, 57)}...` : shown;
+  const quoted = truncate(shown);
   const where = error.instancePath === '' ? 'the top level' : error.instancePath;
   const expected =
     error.keyword === 'required'
