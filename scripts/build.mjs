@@ -89,7 +89,7 @@ console.log('copied fixtures/demo to dist/fixtures/demo (the demo of an installe
 {
   const dir = await mkdtemp(join(tmpdir(), 'context-reach-schema-'));
   try {
-    const { code } = await ncc(join(root, 'src/core/render/report-schema.ts'), {
+    const { code } = await ncc(join(root, 'src/core/report/schema.ts'), {
       minify: false,
       sourceMap: false,
       quiet: true,

@@ -113,7 +113,7 @@ export const SUGGESTIONS_SKIPPED =
 export async function publishSuggestions(
   api: ReviewApi,
   target: ReviewTarget & { isFork: boolean },
-  report: import('../core/compare/decide.js').GateReport,
+  report: import('../core/report/types.js').GateReport,
   readHead: (path: string) => Promise<Uint8Array | null>,
 ): Promise<{ outcome: SuggestionOutcome | null; notice: string | null }> {
   if (target.isFork) return { outcome: null, notice: SUGGESTIONS_SKIPPED };

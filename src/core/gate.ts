@@ -1,6 +1,6 @@
 import type { ChangedFile } from './changes.js';
-import { decide, type ChangedConfig, type GateReport } from './compare/decide.js';
-import type { Judging } from './compare/judging.js';
+import { decide, type ChangedConfig } from './compare/decide.js';
+import type { Judging } from './policy/judging.js';
 import { inspectModel, toFailure, type FileFailure, type FileReport } from './inspect.js';
 import type { ServingPatch } from './model.js';
 import { decodeText } from './parse/source.js';
@@ -15,6 +15,7 @@ import { attachRemedies } from './remedy/attach.js';
 import { createScanMemo, type ScanMemo } from './metrics/scan-memo.js';
 import { pairMoves } from './pair-moves.js';
 import { policyChanges } from './policy/diff.js';
+import { type GateReport } from './report/types.js';
 
 /** Reads a file's bytes at a commit; null when the file does not exist there. */
 export interface ContentSource {

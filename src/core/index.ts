@@ -36,14 +36,18 @@ export {
 } from './policy/index.js';
 export type { Policy, FilePolicy } from './policy/index.js';
 export { runGate, type ContentSource, type GateRequest } from './gate.js';
-export {
-  decide,
-  type GateReport,
-  type FileDecision,
-  type JudgedFinding,
-  type Verdict,
-} from './compare/decide.js';
-export { METRIC_PATHS, metricValue } from './compare/metric-path.js';
+export { decide } from './compare/decide.js';
+export type {
+  Change,
+  CombinedRemedy,
+  FileDecision,
+  GateReport,
+  JudgedFinding,
+  Remedy,
+  RemedyFields,
+  Verdict,
+} from './report/types.js';
+export { METRIC_PATHS, metricValue } from './metrics/metric-path.js';
 export { RULES, type RuleId } from './rules/catalog.js';
 export { renderComment, COMMENT_LIMIT, type MarkdownContext } from './render/comment.js';
 export { COMMENT_MARKER, ESTIMATE_NOTICE } from './render/notice.js';
@@ -56,5 +60,4 @@ export { planAnnotations, ANNOTATIONS_PER_LEVEL, type Annotation } from './rende
 export { escapeHtml, escapeMarkdown } from './render/escape.js';
 export { renderHtmlReport, type HtmlReportOptions } from './render/html-report.js';
 export { attachRemedies, remedyFileReport } from './remedy/attach.js';
-export type { Change, CombinedRemedy, Remedy, RemedyFields } from './remedy/types.js';
 export { VERSION } from './version.js';

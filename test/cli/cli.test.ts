@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { promisify } from 'node:util';
 import { describe, expect, it } from 'vitest';
-import { METRIC_PATHS } from '../../src/core/compare/metric-path.js';
+import { METRIC_PATHS } from '../../src/core/metrics/metric-path.js';
 import { checkpointConfig, scenarioRepo } from '../support/scenario-repo.js';
 
 // The committed bundle, run as a user would: `node dist/cli.js …`.

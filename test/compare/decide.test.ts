@@ -1,13 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import {
-  changeFindings,
-  decide,
-  decideFile,
-  type ChangedConfig,
-} from '../../src/core/compare/decide.js';
-import { BUILT_IN_JUDGING, type Judging } from '../../src/core/compare/judging.js';
+import { decide, decideFile, type ChangedConfig } from '../../src/core/compare/decide.js';
+import { BUILT_IN_JUDGING, type Judging } from '../../src/core/policy/judging.js';
 import { inspectModel } from '../../src/core/inspect.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
+import { changeFindings } from '../../src/core/rules/change-rules.js';
 
 const report = (overrides: Record<string, unknown> = {}, path = 'models/a/config.json') =>
   inspectModel(checkpointConfig(overrides), path);

@@ -1,4 +1,4 @@
-import type { GateReport } from '../../src/core/compare/decide.js';
+import type { GateReport } from '../../src/core/report/types.js';
 
 /** Text a pull request could put in a path, a key, a value or a message. */
 export const HOSTILE = [

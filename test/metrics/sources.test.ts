@@ -11,7 +11,11 @@ import {
   scaleFrequencies,
   yarnAttentionScale,
 } from '../../src/core/metrics/context-scaling.js';
-import { geometricFrequencies } from '../../src/core/metrics/frequencies.js';
+import {
+  geometricFrequencies,
+  rotaryWidth,
+  rotatedChannels,
+} from '../../src/core/metrics/frequencies.js';
 import type { EncoderStack, ModelSpec } from '../../src/core/model.js';
 import { makeSpec } from './spec-fixtures.js';
 
@@ -321,6 +325,18 @@ describe('Su et al. 2021, RoFormer', () => {
     expect(relativeError(m.slowestWavelength, 2 * Math.PI * Math.pow(10000, 30 / 32))).toBeLessThan(
       1e-12,
     );
+  });
+
+  it('rotaryWidth(100, 0.58) is 58: the share means 58 channels, though 100 × 0.58 rounds to 57.99999999999999 in binary64', () => {
+    // IEEE 754 binary64, round to nearest: 0.58 is stored as 0.57999999999999996003197111349436454474925994873046875,
+    // and the product with 100 rounds to the double just below 58.
+    expect(100 * 0.58).toBe(57.99999999999999);
+    expect(rotatedChannels(100, 0.58)).toBe(58);
+    expect(rotaryWidth(100, 0.58)).toBe(58);
+    // Not whole within 1e-9: the product stays, and r = 2 floor(r / 2) drops the odd channel.
+    expect(rotatedChannels(100, 0.575)).toBe(57.49999999999999);
+    expect(rotaryWidth(100, 0.575)).toBe(56);
+    expect(rotaryWidth(128, 0.25)).toBe(32);
   });
 });
 

@@ -817,3 +817,44 @@ describe('readModel(checkpoint) invalid values', () => {
     expect(findings[0].message).toContain('.nan, which is not a number');
   });
 });
+
+describe('the rotary width, read one way by the reader, the rules and the metrics', () => {
+  const config = (extra: Record<string, unknown> = {}) =>
+    configText({
+      hidden_size: 800,
+      num_attention_heads: 8,
+      head_dim: 100,
+      num_hidden_layers: 2,
+      vocab_size: 1000,
+      max_position_embeddings: 4096,
+      rope_theta: 10000,
+      partial_rotary_factor: 0.58,
+      ...extra,
+    });
+
+  test('head 100 × share 0.58 is 58 channels (29 pairs) everywhere, though 100 × 0.58 is 57.99999999999999 in binary64', async () => {
+    const { inspectModel } = await import('../../src/core/inspect.js');
+    const report = inspectModel(config(), 'c.json');
+    expect(report.findings.map((f) => f.rule)).not.toContain('rotary-width-odd');
+    // Slowest pair i = 28 of r = 58: wavelength 2π·10000^(56/58) (Su et al. 2021, RoFormer, eq. 15);
+    // relative 1e-12 for the rounding of pow and the product.
+    const expected = 2 * Math.PI * Math.pow(10000, 56 / 58);
+    expect(Math.abs(report.metrics.slowestWavelength! - expected) / expected).toBeLessThan(1e-12);
+    // LongRoPE wants one factor per pair: 29 are accepted, 28 are not.
+    const longrope = (n: number) => ({
+      rope_scaling: {
+        type: 'longrope',
+        short_factor: Array(n).fill(1),
+        long_factor: Array(n).fill(2),
+        original_max_position_embeddings: 2048,
+      },
+    });
+    expect(readModel(config(longrope(29)), 'c.json').findings.map((f) => f.rule)).not.toContain(
+      'value-invalid',
+    );
+    expect(
+      readModel(config(longrope(28)), 'c.json').findings.find((f) => f.rule === 'value-invalid')
+        ?.message,
+    ).toMatch(/has 28 factors, but the rotary code has 29 pairs/);
+  });
+});

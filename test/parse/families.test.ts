@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { inspectModel } from '../../src/core/inspect.js';
 import type { ModelSpec } from '../../src/core/model.js';
-import { FAMILY_DEFAULTS } from '../../src/core/parse/checkpoint-families.js';
+import { CHECKPOINT_FAMILIES } from '../../src/core/parse/checkpoint-families.js';
 import { readModel } from '../../src/core/parse/read-model.js';
 import { visionParams } from '../../src/core/metrics/vision-params.js';
 import { configText, fixture, lineOf } from './helpers.js';
@@ -233,14 +233,18 @@ describe('sparse and nested configs', () => {
   });
 
   test('every family default table names its published config class', () => {
-    for (const [type, family] of Object.entries(FAMILY_DEFAULTS)) {
+    const published = Object.entries(CHECKPOINT_FAMILIES).flatMap(([type, row]) =>
+      row.published ? [[type, row.published] as const] : [],
+    );
+    expect(published.length).toBeGreaterThan(0);
+    for (const [type, family] of published) {
       expect(family.source, type).toMatch(
         /^from the published config class [A-Z][A-Za-z0-9]+Config$/,
       );
       expect(Object.keys(family.values).length, type).toBeGreaterThan(0);
     }
     // LlamaConfig: 4096 wide, 11008 feed-forward, 32 layers and heads, 2048 positions, untied (from the published config class).
-    expect(FAMILY_DEFAULTS.llama.values).toMatchObject({
+    expect(CHECKPOINT_FAMILIES.llama?.published?.values).toMatchObject({
       hidden_size: 4096,
       intermediate_size: 11008,
       num_hidden_layers: 32,
@@ -352,5 +356,42 @@ model:
       expect.stringContaining('number 2, but the rotary code has 64 pairs'),
       expect.stringContaining('number 2, but the rotary code has 64 pairs'),
     ]);
+  });
+});
+
+describe('the family table (checkpoint-families.ts)', () => {
+  test.each(['__proto__', 'constructor', 'toString', 'hasOwnProperty'])(
+    'model_type %j names no family: read as an unknown one, with the code assumed none',
+    (type) => {
+      const { spec, findings } = readModel(
+        configText({
+          model_type: type,
+          hidden_size: 64,
+          num_hidden_layers: 2,
+          num_attention_heads: 4,
+          vocab_size: 100,
+          max_position_embeddings: 128,
+          sliding_window: 16,
+        }),
+        'c.json',
+      );
+      expect(spec.position.kind).toBe('none');
+      expect(spec.gated).toBe(false);
+      expect(spec.layerTypes ?? null).toBeNull();
+      expect(findings.find((f) => f.rule === 'position-code-assumed')?.message).toContain(
+        `model_type ${JSON.stringify(type.toLowerCase())} is not a known family`,
+      );
+    },
+  );
+
+  test('a family row carries every trait: gemma3_text is rotary, gated, scaled, four norms, per-head norms, every 6th layer global', () => {
+    expect(CHECKPOINT_FAMILIES.gemma3_text).toMatchObject({
+      position: 'rotary',
+      gated: true,
+      scaledEmbedding: true,
+      fourNorms: true,
+      qkNorms: true,
+      globalEvery: 6,
+    });
   });
 });

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { Ajv } from 'ajv';
 import { describe, expect, test } from 'vitest';
-import { METRIC_PATHS } from '../../src/core/compare/metric-path.js';
+import { METRIC_PATHS } from '../../src/core/metrics/metric-path.js';
 import { FLOAT_FORMATS, STORAGE_DTYPES } from '../../src/core/model.js';
 import { PRECISION_METRICS, SCALAR_METRICS } from '../../src/core/metrics/types.js';
 import { RULES } from '../../src/core/rules/catalog.js';

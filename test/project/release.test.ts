@@ -14,7 +14,7 @@ import {
 import { forkWorkflows, simpleWorkflow } from '../../src/core/init/workflows.js';
 import { inspectModel } from '../../src/core/inspect.js';
 import { parsePolicy } from '../../src/core/policy/index.js';
-import { publishedReportSchema } from '../../src/core/render/report-schema.js';
+import { publishedReportSchema } from '../../src/core/report/schema.js';
 import { VERSION } from '../../src/core/version.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 // @ts-expect-error: a plain ES module script without types

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import * as core from '../../src/core/index.js';
-import { METRIC_PATHS } from '../../src/core/compare/metric-path.js';
+import { METRIC_PATHS } from '../../src/core/metrics/metric-path.js';
 import { SCALAR_METRICS } from '../../src/core/metrics/types.js';
 
 const ROOT = resolve(import.meta.dirname, '../..');

@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import type { GateReport } from '../../src/core/compare/decide.js';
+import type { GateReport } from '../../src/core/report/types.js';
 import { BaseUnreadableError, runGate, type ContentSource } from '../../src/core/gate.js';
 import { runScenario, type ScenarioResult } from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';

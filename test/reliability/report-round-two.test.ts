@@ -8,10 +8,9 @@ import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { runAction } from '../../src/action/run-action.js';
 import { createRunnerOutput, fitSummary, SUMMARY_LIMIT } from '../../src/action/runner-output.js';
 import { createFileSource } from '../../src/adapters/file-source.js';
-import type { GateReport } from '../../src/core/compare/decide.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderComment } from '../../src/core/render/comment.js';
-import { readGateJson } from '../../src/core/render/gate-json-read.js';
+import { readGateJson } from '../../src/core/report/read.js';
 import { renderGateJson } from '../../src/core/render/gate-json.js';
 import { renderHtmlReport } from '../../src/core/render/html-report.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
@@ -22,6 +21,7 @@ import type { FakeGitHub } from '../support/fake-github.js';
 import { createRecordingOutput, type RecordingOutput } from '../support/recording-output.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 import { renderGfm } from './report-checks.js';
+import type { GateReport } from '../../src/core/report/types.js';
 
 // Round two of the report as an attack surface (issue 13, points 1, 9 and 11): every field a
 // publish run reads back is checked to its type and range, a closed pull request gets nothing,

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { parseDocument } from 'yaml';
-import type { FileDecision, GateReport } from '../../src/core/compare/decide.js';
-import { metricValue } from '../../src/core/compare/metric-path.js';
+
+import { metricValue } from '../../src/core/metrics/metric-path.js';
 import type { MetricPath } from '../../src/core/metrics/types.js';
 import type { ServingPatch } from '../../src/core/model.js';
-import type { Change } from '../../src/core/remedy/types.js';
+import type { Change, FileDecision, GateReport } from '../../src/core/report/types.js';
 import { demoTrees, gateOver } from '../support/demo-gate.js';
 
 // "Every remedy shown in the demo passes when applied": each proposed change is written into the

@@ -1,10 +1,10 @@
 import type { ChangedFile } from '../../src/core/changes.js';
-import { BUILT_IN_JUDGING, type Judging } from '../../src/core/compare/judging.js';
+import { BUILT_IN_JUDGING, type Judging } from '../../src/core/policy/judging.js';
 import { inspectModel, type FileReport } from '../../src/core/inspect.js';
 import { parsePolicy, resolvePolicy } from '../../src/core/policy/index.js';
 import { proposeRemedy } from '../../src/core/remedy/propose.js';
 import { remedyContext, type RemedyContext } from '../../src/core/remedy/prove.js';
-import type { RemedyFields } from '../../src/core/remedy/types.js';
+import type { RemedyFields } from '../../src/core/report/types.js';
 import { decideFile } from '../../src/core/compare/decide.js';
 
 /** Fields of a context-reach model description, each overridable. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { marked } from 'marked';
 import { decide, type ChangedConfig } from '../../src/core/compare/decide.js';
-import { BUILT_IN_JUDGING } from '../../src/core/compare/judging.js';
+import { BUILT_IN_JUDGING } from '../../src/core/policy/judging.js';
 import { inspectModel } from '../../src/core/inspect.js';
 import { COMMENT_LIMIT, renderComment } from '../../src/core/render/comment.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';

@@ -6,25 +6,19 @@
  * code unchanged would read as trained at the new length, and contradict its own finding.
  */
 import type { FileReport } from '../inspect.js';
+import type { Assumption } from '../report/types.js';
 import { sortFindings } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
 import type { MetricPath } from '../metrics/types.js';
 import type { Finding, ModelSpec } from '../model.js';
 import { metricFindings } from '../rules/metric-rules.js';
 import { specFindings } from '../rules/spec-rules.js';
-import { formatTokens } from '../units.js';
-import { METRIC_PATHS, metricValue } from './metric-path.js';
+import { samePositionCode } from '../rules/change-rules.js';
+import { formatTokens } from '../format/units.js';
+import { METRIC_PATHS, metricValue } from '../metrics/metric-path.js';
 
 /** Rules about the span against the reach, which a grown span with an unchanged code raises anyway. */
 const SPAN_RULES = new Set(['span-past-reach', 'span-beyond-scaling-cover']);
-
-/** What the gate took on assumption for one file's head. */
-export interface Assumption {
-  /** Metrics of the head whose value rests on the assumption (they differ from the face-value reading). */
-  metrics: MetricPath[];
-  /** One sentence: what was assumed and why. */
-  reason: string;
-}
 
 function sameFinding(a: Finding, b: Finding): boolean {
   return a.rule === b.rule && a.message === b.message && a.key === b.key && a.line === b.line;
@@ -43,11 +37,6 @@ export function readerFindings(report: FileReport): Finding[] {
     else out.push(finding);
   }
   return out;
-}
-
-/** The position codes are the same (kind, base, width share, scaling block). */
-export function samePositionCode(a: ModelSpec, b: ModelSpec): boolean {
-  return JSON.stringify(a.position) === JSON.stringify(b.position);
 }
 
 /**

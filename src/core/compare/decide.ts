@@ -1,21 +1,27 @@
+/**
+ * The gate's decision: each changed model config judged (its findings, the change rules between
+ * base and head, the policy's limits, standing and waiver), and the pull request's verdict.
+ */
 import type { ChangedFile } from '../changes.js';
 import type { FileFailure, FileReport } from '../inspect.js';
 import { sortFindings } from '../inspect.js';
-import type { Finding, LocationMap, ModelSpec, Severity } from '../model.js';
+import type { Finding } from '../model.js';
 import type { MetricPath } from '../metrics/types.js';
-import { RULES, isRuleId } from '../rules/catalog.js';
-import { uncomputedScanMetrics } from '../rules/metric-rules.js';
+import type { Judging } from '../policy/judging.js';
+import type {
+  FileDecision,
+  GateReport,
+  JudgedFinding,
+  MetricDelta,
+  PolicyInfo,
+} from '../report/types.js';
+import { tally, verdictOf } from '../report/verdict.js';
+import { RULES } from '../rules/catalog.js';
+import { changeFindings } from '../rules/change-rules.js';
 import { SEVERITY_ORDER } from '../severity.js';
-import { formatInteger, formatNumber, percentChange } from '../units.js';
-import { formatMetric } from '../render/metric-format.js';
-import { rotaryHeadDim } from '../metrics/frequencies.js';
-import type { Judging, Limit } from './judging.js';
-import { METRIC_PATHS, METRIC_SOURCES, metricValue } from './metric-path.js';
-import type { CombinedRemedy, RemedyFields } from '../remedy/types.js';
-import { inheritTrainedSpan, type Assumption } from './assumed.js';
-import { shapeChangeFinding } from './shape-change.js';
-
-export type Verdict = 'ok' | 'warn' | 'block';
+import { inheritTrainedSpan } from './assumed.js';
+import { metricRows } from './limits.js';
+import { judgeFindings } from './standing.js';
 
 /** One changed model config with both of its versions read (null where a side has none). */
 export interface ChangedConfig {
@@ -25,67 +31,7 @@ export interface ChangedConfig {
   judging: Judging;
 }
 
-/** A finding of the head version, as the gate judged it. */
-export interface JudgedFinding extends Finding, Partial<RemedyFields> {
-  /** The metric a `limit-crossed` finding is about (default: absent for other rules). */
-  metric?: MetricPath;
-  /** The base version already had it (same rule and key). */
-  standing: boolean;
-  /** The severity the verdict counts, after policy, standing and waiver (null: counts for nothing). */
-  counts: Severity | null;
-  /** A blocking finding the waiver label turned into a warning. */
-  waived: boolean;
-  /** Path of the file at head. */
-  file: string;
-}
-
-export type LimitState = 'ok' | 'crossed' | 'unjudged';
-
-/** One metric row: base, head, change, and the limit it was judged by. */
-export interface MetricDelta {
-  metric: MetricPath;
-  base: number | null;
-  head: number | null;
-  /** head − base, null when either is missing. */
-  change: number | null;
-  /** Percent change, null when undefined (base missing or zero). */
-  changePct: number | null;
-  limit: Limit | null;
-  state: LimitState;
-  /** Why a limited row was not judged, e.g. the span is shorter than the limit (default: absent). */
-  note?: string;
-}
-
-export interface FileDecision {
-  path: string;
-  previousPath: string | null;
-  status: ChangedFile['status'];
-  dialect: FileReport['dialect'] | null;
-  verdict: Verdict;
-  /** Rows that changed or are judged by a limit, in contract order. */
-  deltas: MetricDelta[];
-  findings: JudgedFinding[];
-  base: FileReport | null;
-  head: FileReport | null;
-  /** Set when a version could not be read. */
-  baseError: FileFailure | null;
-  headError: FileFailure | null;
-  /** Every blocking finding's first remedy applied at once, and whether that passes (default: absent). */
-  remedyTogether?: CombinedRemedy | null;
-  /** What the head's values take on assumption (the base's trained span), null when nothing (default: absent). */
-  assumed?: Assumption | null;
-}
-
-export interface PolicyInfo {
-  /** Where the judging came from: the base commit's policy file, or built-in rules only. */
-  source: 'file' | 'built-in';
-  path: string;
-  /** The pull request changes the policy file: the change applies after merge. */
-  changedInHead: boolean;
-  /** What the head's policy would change, `key old → new` (default: absent, none or unchanged). */
-  limitChanges?: string[];
-}
-
+/** What the decision reads: the changed configs, the policy's source, the waiver, notices, commits. */
 export interface GateInput {
   configs: ChangedConfig[];
   /** Deleted configs: listed, not judged. */
@@ -99,249 +45,12 @@ export interface GateInput {
   head: string;
 }
 
-export interface GateReport {
-  version: 1;
-  verdict: Verdict;
-  blocking: number;
-  warnings: number;
-  files: FileDecision[];
-  deleted: ChangedFile[];
-  policy: PolicyInfo;
-  waiver: { label: string | null; applied: boolean; waivedBlocks: number };
-  notices: string[];
-  base: string;
-  head: string;
-}
-
 function isReport(version: FileReport | FileFailure | null): version is FileReport {
   return version !== null && 'metrics' in version;
 }
 
 function isFailure(version: FileReport | FileFailure | null): version is FileFailure {
   return version !== null && !('metrics' in version);
-}
-
-function locate(
-  locations: LocationMap,
-  paths: string[] | undefined,
-): { key: string | null; line: number | null } {
-  for (const path of paths ?? []) {
-    const found = locations[path];
-    if (found) return { key: found.key, line: found.line };
-  }
-  return { key: null, line: null };
-}
-
-export function sameCode(a: ModelSpec, b: ModelSpec): boolean {
-  return (
-    JSON.stringify(a.position) === JSON.stringify(b.position) && a.trainedSpan === b.trainedSpan
-  );
-}
-
-/** Frequencies before scaling: they follow from the code kind, the rotary base and width, or d_model. */
-function frequencyKey(spec: ModelSpec): string {
-  const code = spec.position;
-  if (code.kind === 'rotary')
-    return `rotary:${code.base}:${2 * Math.floor((rotaryHeadDim(spec) * code.fraction) / 2)}:${spec.localBase ?? ''}`;
-  if (code.kind === 'sinusoidal') return `sinusoidal:${spec.hidden}`;
-  return code.kind;
-}
-
-/** Findings that only make sense as a change between base and head. */
-export function changeFindings(base: FileReport, head: FileReport): Finding[] {
-  const findings: Finding[] = [];
-  const b = base.metrics;
-  const h = head.metrics;
-  const at = (...paths: string[]) => locate(head.locations, paths);
-  if (
-    b.declaredSpan !== null &&
-    h.declaredSpan !== null &&
-    h.declaredSpan > b.declaredSpan &&
-    sameCode(base.spec, head.spec)
-  ) {
-    findings.push({
-      rule: 'span-grew-code-unchanged',
-      severity: RULES['span-grew-code-unchanged'].severity,
-      message: `The declared span grew from ${formatInteger(b.declaredSpan)} to ${formatInteger(h.declaredSpan)} tokens while the position code (${head.spec.position.kind}${head.spec.position.kind === 'rotary' ? `, base ${formatNumber(head.spec.position.base, 6)}, ${head.spec.position.scaling ? `${head.spec.position.scaling.kind} × ${head.spec.position.scaling.factor}` : 'no scaling'}` : ''}) stayed the same; add or raise context scaling so the code reaches ${formatInteger(h.declaredSpan)}, or state the trained span if the model was trained that long.`,
-      ...at('declaredSpan'),
-    });
-  }
-  const before = frequencyKey(base.spec);
-  const after = frequencyKey(head.spec);
-  if (before !== after) {
-    const describe = (spec: ModelSpec) =>
-      spec.position.kind === 'rotary'
-        ? `rotary base ${formatNumber(spec.position.base, 6)}${spec.localBase ? ` (local layers ${formatNumber(spec.localBase, 6)})` : ''} over ${2 * Math.floor((rotaryHeadDim(spec) * spec.position.fraction) / 2)} channels`
-        : spec.position.kind === 'sinusoidal'
-          ? `sinusoidal over ${spec.hidden} channels`
-          : `${spec.position.kind} code`;
-    findings.push({
-      rule: 'frequencies-changed',
-      severity: RULES['frequencies-changed'].severity,
-      message: `The position frequencies changed from ${describe(base.spec)} to ${describe(head.spec)}: the checkpoint was trained with the old ones, so this needs retraining or tuning at the new frequencies.`,
-      ...at(
-        'position.base',
-        'localBase',
-        'position.fraction',
-        'headDim',
-        'latent.ropeDim',
-        'position',
-      ),
-    });
-  }
-  if (
-    b.cachePerTokenBytes !== null &&
-    h.cachePerTokenBytes !== null &&
-    b.cachePerTokenBytes !== h.cachePerTokenBytes
-  ) {
-    const pct = percentChange(b.cachePerTokenBytes, h.cachePerTokenBytes);
-    const cacheOf = (spec: ModelSpec) => spec.dtypes.cache ?? spec.dtypes.weights ?? 'bf16';
-    const causes = [
-      base.spec.kvHeads !== head.spec.kvHeads &&
-        `key/value heads ${base.spec.kvHeads} → ${head.spec.kvHeads}`,
-      base.spec.headDim !== head.spec.headDim &&
-        `head size ${base.spec.headDim} → ${head.spec.headDim}`,
-      cacheOf(base.spec) !== cacheOf(head.spec) &&
-        `cache dtype ${cacheOf(base.spec)} → ${cacheOf(head.spec)}`,
-      base.spec.layers !== head.spec.layers && `layers ${base.spec.layers} → ${head.spec.layers}`,
-      JSON.stringify([
-        base.spec.slidingWindow,
-        base.spec.windowLayers,
-        base.spec.layerTypes ?? null,
-        base.spec.chunkSize ?? null,
-      ]) !==
-        JSON.stringify([
-          head.spec.slidingWindow,
-          head.spec.windowLayers,
-          head.spec.layerTypes ?? null,
-          head.spec.chunkSize ?? null,
-        ]) && 'layer pattern',
-      JSON.stringify(base.spec.latent ?? null) !== JSON.stringify(head.spec.latent ?? null) &&
-        'latent attention',
-      Boolean(base.spec.encoderOnly) !== Boolean(head.spec.encoderOnly) && 'encoder-only',
-    ]
-      .filter(Boolean)
-      .join(', ');
-    findings.push({
-      rule: 'cache-per-token-changed',
-      severity: RULES['cache-per-token-changed'].severity,
-      message: `Key/value cache per token changed from ${formatInteger(b.cachePerTokenBytes)} to ${formatInteger(h.cachePerTokenBytes)} bytes (${pct === null ? 'n/a' : `${pct > 0 ? '+' : '−'}${formatNumber(Math.abs(pct), 3)} %`})${causes ? `: ${causes}` : ''}.`,
-      ...at('kvHeads', 'latent.kvRank', 'dtypes.cache', 'headDim'),
-    });
-  }
-  const shape = shapeChangeFinding(base, head);
-  if (shape) findings.push(shape);
-  return findings;
-}
-
-/** Which bounds of `limit` the head value (and its change over base) crosses, and whether any was judged. */
-export function checkLimit(
-  limit: Limit,
-  base: number | null,
-  head: number | null,
-  metric: MetricPath | null = null,
-): { crossed: string[]; judged: boolean } {
-  const crossed: string[] = [];
-  let judged = false;
-  if (head !== null) {
-    if (limit.max !== undefined) {
-      judged = true;
-      if (head > limit.max)
-        crossed.push(
-          `above the maximum ${metric ? formatMetric(metric, limit.max) : formatNumber(limit.max, 6)}`,
-        );
-    }
-    if (limit.min !== undefined) {
-      judged = true;
-      if (head < limit.min)
-        crossed.push(
-          `below the minimum ${metric ? formatMetric(metric, limit.min) : formatNumber(limit.min, 6)}`,
-        );
-    }
-  }
-  if (limit.maxIncreasePct !== undefined && base !== null && head !== null) {
-    const pct = percentChange(base, head);
-    judged = true;
-    if (pct === null ? head > base : pct > limit.maxIncreasePct) {
-      crossed.push(
-        `${pct === null ? 'up from 0' : `up ${formatNumber(pct, 3)} %`} over base, more than the ${formatNumber(limit.maxIncreasePct, 3)} % allowed`,
-      );
-    }
-  }
-  return { crossed, judged };
-}
-
-function deltasAndLimitFindings(
-  base: FileReport | null,
-  head: FileReport,
-  judging: Judging,
-): { deltas: MetricDelta[]; findings: (Finding & { metric?: MetricPath })[] } {
-  const deltas: MetricDelta[] = [];
-  const findings: (Finding & { metric?: MetricPath })[] = [];
-  const uncomputed = new Set(uncomputedScanMetrics(head.metrics));
-  for (const metric of METRIC_PATHS) {
-    const b = base ? metricValue(base.metrics, metric) : null;
-    const h = metricValue(head.metrics, metric);
-    const limit = judging.limits[metric] ?? null;
-    const change = b !== null && h !== null ? h - b : null;
-    let state: LimitState = 'unjudged';
-    let note: string | undefined;
-    if (limit && h === null && uncomputed.has(metric)) {
-      // Fail closed: the scan stopped at its bound, so nothing shows the limit holds.
-      state = 'crossed';
-      findings.push({
-        rule: 'limit-crossed',
-        severity: limit.severity,
-        message: `${metric} is not computed (the positional scans stopped at their bound, see scan-incomplete), so its limit cannot be shown to hold.`,
-        ...locate(head.locations, ['serving.span', 'declaredSpan']),
-        metric,
-      });
-    } else if (limit && metric === 'discriminationSpan' && h === null) {
-      // No negative sum within the span: the span itself is the least the metric can be.
-      const T = head.metrics.evaluationSpan;
-      const bound = limit.min ?? null;
-      if (T !== null && head.metrics.fastestWavelength !== null && (bound === null || T >= bound))
-        state = 'ok';
-      else
-        note =
-          T !== null && bound !== null
-            ? `not judged: the span ${formatInteger(T)} is shorter than the limit`
-            : 'not judged: no value';
-    } else if (limit) {
-      const { crossed, judged } = checkLimit(limit, b, h, metric);
-      state = crossed.length > 0 ? 'crossed' : judged ? 'ok' : 'unjudged';
-      if (!judged) note = 'not judged: no value';
-      if (crossed.length > 0) {
-        findings.push({
-          rule: 'limit-crossed',
-          severity: limit.severity,
-          message: `${metric} is ${formatMetric(metric, h)}${b !== null && b !== h ? ` (base ${formatMetric(metric, b)})` : ''}: ${crossed.join('; ')}.`,
-          ...locate(
-            head.locations,
-            METRIC_SOURCES[metric.startsWith('precision.') ? 'collidingPositions' : metric] ?? [
-              'serving.span',
-              'declaredSpan',
-            ],
-          ),
-          metric,
-        });
-      }
-    }
-    const changed = base !== null && b !== h;
-    if (changed || limit) {
-      deltas.push({
-        metric,
-        base: b,
-        head: h,
-        change,
-        changePct: percentChange(b, h),
-        limit,
-        state,
-        ...(note ? { note } : {}),
-      });
-    }
-  }
-  return { deltas, findings };
 }
 
 /** The blocking finding for a base version that exists but could not be read or parsed. */
@@ -355,8 +64,6 @@ function baseUnreadable(failure: FileFailure): Finding {
   };
 }
 
-const findingKey = (f: Finding) => `${f.rule}\u0000${f.key ?? ''}`;
-
 /** Judge one changed config: its findings with policy, standing and waiver applied, and its deltas. */
 export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileDecision {
   const { change, judging } = config;
@@ -369,7 +76,7 @@ export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileD
   let raw: (Finding & { metric?: MetricPath })[] = [];
   let deltas: MetricDelta[] = [];
   if (head) {
-    const limits = deltasAndLimitFindings(base, head, judging);
+    const limits = metricRows(base, head, judging);
     deltas = limits.deltas;
     raw = [...head.findings, ...(base ? changeFindings(base, head) : []), ...limits.findings];
   } else if (headError) {
@@ -388,27 +95,7 @@ export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileD
   // unjudged, so the change blocks rather than pass on its head alone. A base that reads but
   // describes no model has nothing to compare with: the head is a new model.
   if (head && baseError && baseError.notAModel !== true) raw.push(baseUnreadable(baseError));
-  const baseKeys = new Set((base?.findings ?? []).map(findingKey));
-  const findings: JudgedFinding[] = [];
-  for (const finding of raw) {
-    const configured =
-      isRuleId(finding.rule) && RULES[finding.rule].scope !== 'limit'
-        ? judging.rules[finding.rule]
-        : undefined;
-    if (configured === 'off') continue;
-    const severity: Severity = configured ?? finding.severity;
-    const standing =
-      baseKeys.has(findingKey(finding)) &&
-      RULES[finding.rule as keyof typeof RULES]?.scope === 'file';
-    let counts: Severity | null = severity;
-    if (standing && severity === 'block' && judging.standing === 'report') counts = 'info';
-    let waived = false;
-    if (counts === 'block' && waiverApplied) {
-      counts = 'warn';
-      waived = true;
-    }
-    findings.push({ ...finding, severity, standing, counts, waived, file: change.path });
-  }
+  const findings = judgeFindings(raw, base?.findings ?? [], judging, waiverApplied, change.path);
   const sorted = sortFindings(findings) as JudgedFinding[];
   return {
     path: change.path,
@@ -426,26 +113,15 @@ export function decideFile(config: ChangedConfig, waiverApplied: boolean): FileD
   };
 }
 
-function verdictOf(findings: JudgedFinding[]): Verdict {
-  if (findings.some((f) => f.counts === 'block')) return 'block';
-  if (findings.some((f) => f.counts === 'warn')) return 'warn';
-  return 'ok';
-}
-
 /** The gate's one decision for a pull request. */
 export function decide(input: GateInput): GateReport {
   const files = input.configs.map((config) => decideFile(config, input.waiver.applied));
-  const all = files.flatMap((f) => f.findings);
-  const verdict: Verdict = files.some((f) => f.verdict === 'block')
-    ? 'block'
-    : files.some((f) => f.verdict === 'warn')
-      ? 'warn'
-      : 'ok';
+  const { verdict, blocking, warnings, waivedBlocks } = tally(files.flatMap((f) => f.findings));
   return {
     version: 1,
     verdict,
-    blocking: all.filter((f) => f.counts === 'block').length,
-    warnings: all.filter((f) => f.counts === 'warn').length,
+    blocking,
+    warnings,
     files: [...files].sort(
       (a, b) =>
         SEVERITY_ORDER[a.verdict === 'ok' ? 'info' : a.verdict] -
@@ -453,7 +129,7 @@ export function decide(input: GateInput): GateReport {
     ),
     deleted: input.deleted,
     policy: input.policy,
-    waiver: { ...input.waiver, waivedBlocks: all.filter((f) => f.waived).length },
+    waiver: { ...input.waiver, waivedBlocks },
     notices: input.notices,
     base: input.base,
     head: input.head,

@@ -15,13 +15,25 @@ export const MAX_PAIRS = 65536;
 export const SINUSOIDAL_BASE = 10000;
 
 /**
+ * channels: `headDim * fraction` read as the whole number it stands for when it is one within
+ * 1e-9 relative, else as it is. A decimal share is inexact in binary: `100 * 0.58` is
+ * `57.99999999999999` in binary64 (IEEE 754 round to nearest), though the config means 58.
+ */
+export function rotatedChannels(headDim: number, fraction: number): number {
+  const width = headDim * fraction;
+  const nearest = Math.round(width);
+  return Math.abs(width - nearest) <= 1e-9 * Math.max(1, width) ? nearest : width;
+}
+
+/**
  * dimensions: rotated width `r = 2 floor(headDim * fraction / 2)` (Su et al. 2021, RoFormer,
- * §3.2.2, with the partial-rotation fraction of common practice); null for degenerate input.
+ * §3.2.2, with the partial-rotation fraction of common practice), the product as
+ * `rotatedChannels` reads it; null for degenerate input.
  */
 export function rotaryWidth(headDim: number, fraction: number): number | null {
   const width = positiveCount(headDim);
   if (width === null || !(fraction > 0 && fraction <= 1)) return null;
-  const r = 2 * Math.floor((width * fraction) / 2);
+  const r = 2 * Math.floor(rotatedChannels(width, fraction) / 2);
   return r >= 2 && r / 2 <= MAX_PAIRS ? r : null;
 }
 

@@ -8,6 +8,7 @@ import { angleErrorMax, blurredPairs, overflowPosition } from './angle-rounding.
 import { positionExactLimit } from './float-format.js';
 import { collidingPositions } from './position-rounding.js';
 import { scanAllowed } from './scan-limits.js';
+import { isCount } from './sizes.js';
 
 /** The block with every metric null (learned, ALiBi and position-free codes, METRICS.md). */
 export const NULL_PRECISION: Readonly<PrecisionMetrics> = Object.freeze({
@@ -30,7 +31,7 @@ export function numberFormatMetrics(
 ): PrecisionMetrics {
   if (theta === null) return { ...NULL_PRECISION };
   const limit = positionExactLimit(format);
-  if (span === null || !Number.isSafeInteger(span) || span < 1) {
+  if (!isCount(span)) {
     return { ...NULL_PRECISION, positionExactLimit: limit };
   }
   const overflow = overflowPosition(format, theta, span);

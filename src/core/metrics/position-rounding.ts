@@ -4,6 +4,7 @@
  */
 import type { FloatFormat } from '../model.js';
 import { overflowThreshold, roundToFormat, significantBits } from './float-format.js';
+import { isCount } from './sizes.js';
 
 /** token: first position `p` with `fl_D(p)` infinite, `ceil((2 - 2^-p) 2^emax)` (binary16: 65520). */
 export function positionOverflowStart(format: FloatFormat): number {
@@ -36,7 +37,7 @@ export function representableIntegersUpTo(x: number, format: FloatFormat): numbe
  * whole number.
  */
 export function collidingPositions(format: FloatFormat, span: number): number | null {
-  if (!Number.isSafeInteger(span) || span < 1) return null;
+  if (!isCount(span)) return null;
   const start = positionOverflowStart(format);
   const n = Math.min(span, start);
   const distinct =

@@ -10,21 +10,21 @@
  *   alibi, none; relative_key / relative_key_query → none, reported as assumed); `alibi: true` (also
  *   under `attn_config`); `sinusoidal_pos_embds: true`; any rotary key (`rope_theta`,
  *   `rotary_emb_base`, `rope_parameters`, `rope_scaling`, `partial_rotary_factor`, `rotary_pct`,
- *   `rotary_dim`) → rotary; otherwise the code of the `model_type` family in the tables below
+ *   `rotary_dim`) → rotary; otherwise the code of the `model_type` family (the family table, `checkpoint-families.ts`)
  *   (rotary families without `rope_theta` get base 10000, reported as assumed); otherwise GPT-2
  *   compact keys → learned; otherwise none, reported as assumed.
  * - Gated feed-forward: the activation (`hidden_act`, `hidden_activation`, `activation_function`,
  *   `dense_act_fn`) is one that gated models are configured with: silu, swish, swiglu, geglu,
  *   reglu; or T5's `feed_forward_proj` starts with `gated-`; or the `model_type` is one whose
- *   block is always gated (GATED_FAMILIES: Llama, Mistral, Qwen, Gemma, … — Gemma writes
+ *   block is always gated (`gated` in the family table: Llama, Mistral, Qwen, Gemma, … — Gemma writes
  *   `gelu_pytorch_tanh`, which non-gated models use too, so the name alone is not enough).
  * - Output matrix tied unless `tie_word_embeddings` is false (the checkpoint libraries' default).
  * - Biases: `attention_bias`, `mlp_bias`, `bias` or `use_bias` when stated; otherwise on for the
- *   families listed in BIAS_FAMILIES and for GPT-2 style configs, off for the rest.
+ *   families with `bias` in the family table and for GPT-2 style configs, off for the rest.
  * - Layers that differ (sliding windows, layer patterns, chunked attention, layers without a
  *   position code, the local layers' rotary base): see `checkpoint-layers.ts`.
  * - Experts and latent attention: see `checkpoint-experts.ts`.
- * - Encoder-only families (ENCODER_ONLY_FAMILIES, unless `is_decoder: true`) keep no decoding
+ * - Encoder-only families (`encoderOnly`, unless `is_decoder: true`) keep no decoding
  *   cache; Gemma-2/3 families have four norms per layer; Qwen3 and Gemma-3 families per-head
  *   query/key norms.
  * - Weight format: `dtype` or `torch_dtype` (float32 → fp32, bfloat16 → bf16, float16 → fp16).
@@ -45,12 +45,11 @@ import {
   DEFAULT_YARN_ALPHA,
   DEFAULT_YARN_BETA,
   defaultHeadDim,
-  isCount,
 } from './spec-defaults.js';
 import type { SourceMapping, SourceValue } from './source.js';
 import { readLatent, readMixture } from './checkpoint-experts.js';
 import { readLayerPlan } from './checkpoint-layers.js';
-import { FAMILY_DEFAULTS } from './checkpoint-families.js';
+import { familyOf, type CheckpointFamily } from './checkpoint-families.js';
 import {
   checkSections,
   readPairwise,
@@ -58,6 +57,7 @@ import {
   type RotaryContext,
 } from './checkpoint-scaling.js';
 import { readMptAttention } from './checkpoint-mpt.js';
+import { isCount } from '../metrics/sizes.js';
 
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
 export const CHECKPOINT_MARKERS: readonly string[] = [
@@ -77,158 +77,7 @@ export const CHECKPOINT_MARKERS: readonly string[] = [
 /** Activations gated feed-forward configs are written with. */
 export const GATED_ACTIVATIONS: readonly string[] = ['silu', 'swish', 'swiglu', 'geglu', 'reglu'];
 
-const ROTARY_FAMILIES = new Set([
-  'llama',
-  'mistral',
-  'mixtral',
-  'qwen2',
-  'qwen2_moe',
-  'qwen3',
-  'qwen3_moe',
-  'gemma',
-  'gemma2',
-  'gemma3_text',
-  'phi',
-  'phi3',
-  'gpt_neox',
-  'gptj',
-  'stablelm',
-  'starcoder2',
-  'olmo',
-  'olmo2',
-  'cohere',
-  'internlm2',
-  'deepseek_v2',
-  'deepseek_v3',
-  'granite',
-  'falcon',
-  'llama4',
-  'llama4_text',
-  'qwen3_next',
-  'cohere2',
-]);
-const LEARNED_FAMILIES = new Set([
-  'gpt2',
-  'gpt_bigcode',
-  'gpt_neo',
-  'opt',
-  'bert',
-  'roberta',
-  'xlm-roberta',
-  'camembert',
-  'distilbert',
-  'electra',
-  'bart',
-  'mbart',
-  'biogpt',
-  'blenderbot',
-  'whisper',
-]);
-const SINUSOIDAL_FAMILIES = new Set([
-  'marian',
-  'fsmt',
-  'pegasus',
-  'm2m_100',
-  'xglm',
-  'speech_to_text',
-]);
-const ALIBI_FAMILIES = new Set(['bloom', 'mpt']);
-/** Families with relative position biases, which no modelled code describes. */
-const RELATIVE_FAMILIES = new Set([
-  't5',
-  'mt5',
-  'umt5',
-  'longt5',
-  'switch_transformers',
-  'deberta',
-  'deberta-v2',
-]);
-/** Relative-bucket families (T5 style, Raffel et al. 2020, section 2.1): a code of their own. */
-const BUCKET_FAMILIES = new Set(['t5', 'mt5', 'umt5', 'longt5', 'switch_transformers']);
 const BUCKET_KEYS = ['relative_attention_num_buckets', 'relative_attention_max_distance'];
-const BIAS_FAMILIES = new Set([
-  'gpt2',
-  'gpt_bigcode',
-  'gpt_neo',
-  'opt',
-  'bert',
-  'roberta',
-  'xlm-roberta',
-  'camembert',
-  'distilbert',
-  'electra',
-  'bart',
-  'mbart',
-  'biogpt',
-  'blenderbot',
-  'whisper',
-  'marian',
-  'fsmt',
-  'pegasus',
-  'm2m_100',
-  'xglm',
-  'bloom',
-  'gpt_neox',
-  'phi',
-]);
-const ENCODER_DECODER_FAMILIES = new Set([
-  't5',
-  'mt5',
-  'umt5',
-  'longt5',
-  'switch_transformers',
-  'bart',
-  'mbart',
-  'marian',
-  'pegasus',
-  'm2m_100',
-  'fsmt',
-  'blenderbot',
-  'whisper',
-  'speech_to_text',
-]);
-const GEMMA_FAMILIES = new Set(['gemma', 'gemma2', 'gemma3_text']);
-/** Families whose feed-forward block is always gated (three matrices), whatever activation the file names. */
-const GATED_FAMILIES = new Set([
-  'llama',
-  'mistral',
-  'mixtral',
-  'qwen2',
-  'qwen2_moe',
-  'qwen3',
-  'qwen3_moe',
-  'gemma',
-  'gemma2',
-  'gemma3_text',
-  'phi3',
-  'olmo',
-  'olmo2',
-  'cohere',
-  'internlm2',
-  'deepseek_v2',
-  'deepseek_v3',
-  'granite',
-  'llama4',
-  'llama4_text',
-  'cohere2',
-]);
-/** Encoder-only families (no decoding cache) unless the file says `is_decoder: true`. */
-const ENCODER_ONLY_FAMILIES = new Set([
-  'bert',
-  'roberta',
-  'xlm-roberta',
-  'camembert',
-  'distilbert',
-  'electra',
-  'albert',
-  'deberta',
-  'deberta-v2',
-  'modernbert',
-]);
-/** Families with four norms per decoder layer (before and after attention and feed-forward; Gemma 2 report, §2). */
-const FOUR_NORM_FAMILIES = new Set(['gemma2', 'gemma3', 'gemma3_text']);
-/** Families with per-head RMS norms on queries and keys (`q_norm`, `k_norm` of the head width in the published code). */
-const QK_NORM_FAMILIES = new Set(['qwen3', 'qwen3_moe', 'gemma3', 'gemma3_text']);
 
 const POSITION_TYPES: Readonly<Record<string, PositionDraft['kind']>> = {
   absolute: 'learned',
@@ -285,14 +134,14 @@ export function isCheckpointConfig(value: SourceMapping): boolean {
 export function readCheckpoint(r: FieldReader): SpecDraft {
   const modelType =
     typeof r.get(['model_type']) === 'string' ? String(r.get(['model_type'])).toLowerCase() : null;
-  const family = modelType !== null ? FAMILY_DEFAULTS[modelType] : undefined;
-  if (family !== undefined) r.useDefaults(family.values);
+  const family = familyOf(modelType);
+  if (family?.published !== undefined) r.useDefaults(family.published.values);
   const gpt2Style = r.has(['n_embd']) || r.has(['n_layer']);
   const encoderDecoder =
     r.get(['is_encoder_decoder']) === true ||
     r.has(['encoder_layers']) ||
     r.has(['num_decoder_layers']) ||
-    (modelType !== null && ENCODER_DECODER_FAMILIES.has(modelType));
+    family?.encoderDecoder === true;
 
   const size = (
     field: string,
@@ -403,10 +252,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   r.get(['use_sliding_window']);
   const plan = readLayerPlan(r, modelType, layers);
   const encoderOnly =
-    !encoderDecoder &&
-    modelType !== null &&
-    ENCODER_ONLY_FAMILIES.has(modelType) &&
-    r.get(['is_decoder']) !== true;
+    !encoderDecoder && family?.encoderOnly === true && r.get(['is_decoder']) !== true;
 
   return {
     name: null,
@@ -432,8 +278,8 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     positionFreeLayers: plan.positionFreeLayers,
     chunkSize: plan.chunkSize,
     localBase: plan.localBase,
-    layerNorms: modelType !== null && FOUR_NORM_FAMILIES.has(modelType) ? 4 : null,
-    qkNorms: modelType !== null && QK_NORM_FAMILIES.has(modelType),
+    layerNorms: family?.fourNorms === true ? 4 : null,
+    qkNorms: family?.qkNorms === true,
     encoderOnly,
     dtypes: { weights: readWeights(r), cache: null, positions: null },
     embeddingInitStd:
@@ -479,7 +325,7 @@ function readGated(r: FieldReader, modelType: string | null): boolean | undefine
   const act = path === null ? undefined : r.text('gated', path, 'an activation name');
   if (act !== undefined && GATED_ACTIVATIONS.includes(act.toLowerCase())) return true;
   // The architecture decides, whatever activation it is configured with.
-  if (modelType !== null && GATED_FAMILIES.has(modelType)) {
+  if (familyOf(modelType)?.gated === true) {
     r.locate('gated', ['model_type']);
     return true;
   }
@@ -501,7 +347,7 @@ function readBias(
     else r.locate('bias', values[0].p);
     return on ? true : values.some((x) => x.v === false) ? false : undefined;
   }
-  if ((modelType !== null && BIAS_FAMILIES.has(modelType)) || (modelType === null && gpt2Style)) {
+  if (familyOf(modelType)?.bias === true || (modelType === null && gpt2Style)) {
     r.locate(
       'bias',
       modelType !== null ? ['model_type'] : r.has(['n_embd']) ? ['n_embd'] : ['n_layer'],
@@ -540,7 +386,7 @@ function readMultiplier(r: FieldReader, modelType: string | null, hidden: number
   const scale = r.flag('embeddingMultiplier', ['scale_embedding']);
   const root = isCount(hidden) ? Math.sqrt(hidden) : NaN;
   if (scale !== undefined) return scale ? root : 1;
-  if (modelType !== null && GEMMA_FAMILIES.has(modelType)) {
+  if (familyOf(modelType)?.scaledEmbedding === true) {
     r.locate('embeddingMultiplier', ['model_type']);
     return root;
   }
@@ -565,7 +411,7 @@ function readPosition(
   if (
     !r.has(typePath) &&
     alibiPath === null &&
-    (bucketKeys.length > 0 || (modelType !== null && BUCKET_FAMILIES.has(modelType)))
+    (bucketKeys.length > 0 || familyOf(modelType)?.position === 'buckets')
   ) {
     return readBuckets(r, modelType, bucketKeys);
   }
@@ -576,6 +422,7 @@ function readPosition(
   );
   let kind: PositionDraft['kind'];
   let assumed: string | null = null;
+  const familyCode = familyOf(modelType)?.position;
 
   const stated = r.text('position', typePath, 'a position embedding type');
   if (stated !== undefined) {
@@ -616,27 +463,16 @@ function readPosition(
       r.has(['learned_pos_emb']) ? ['learned_pos_emb'] : ['attn_config', 'alibi'],
     );
     kind = 'learned';
-  } else if (
-    modelType !== null &&
-    (ROTARY_FAMILIES.has(modelType) ||
-      LEARNED_FAMILIES.has(modelType) ||
-      SINUSOIDAL_FAMILIES.has(modelType) ||
-      ALIBI_FAMILIES.has(modelType) ||
-      RELATIVE_FAMILIES.has(modelType))
-  ) {
+  } else if (modelType !== null && familyCode !== undefined) {
     r.locate('position', ['model_type']);
-    if (ROTARY_FAMILIES.has(modelType)) {
+    if (familyCode === 'rotary') {
       kind = 'rotary';
       assumed = `model_type "${modelType}" uses a rotary code, but no rotary key (rope_theta, rope_parameters) is stated, so the base is read as ${DEFAULT_ROTARY_BASE}; state rope_theta`;
-    } else if (RELATIVE_FAMILIES.has(modelType)) {
+    } else if (familyCode === 'relative' || familyCode === 'buckets') {
       kind = 'none';
       assumed = `model_type "${modelType}" uses relative position biases, which are not one of the modelled codes (learned, sinusoidal, rotary, alibi), so the code is read as none and positional-range metrics are not computed`;
     } else {
-      kind = LEARNED_FAMILIES.has(modelType)
-        ? 'learned'
-        : SINUSOIDAL_FAMILIES.has(modelType)
-          ? 'sinusoidal'
-          : 'alibi';
+      kind = familyCode;
     }
   } else if (gpt2Style) {
     r.locate('position', r.has(['n_positions']) ? ['n_positions'] : ['n_embd']);

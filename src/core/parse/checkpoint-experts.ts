@@ -15,7 +15,8 @@
  */
 import type { Experts, LatentAttention } from '../model.js';
 import type { FieldReader } from './fields.js';
-import { isCount } from './spec-defaults.js';
+import { familyOf } from './checkpoint-families.js';
+import { isCount } from '../metrics/sizes.js';
 
 type SizeReader = (
   field: string,
@@ -24,11 +25,9 @@ type SizeReader = (
   required: boolean,
 ) => number | undefined;
 
-/** Families whose mixture layers always add one shared expert as wide as a routed one (Llama-4 style). */
-const ONE_SHARED_FAMILIES = new Set(['llama4', 'llama4_text']);
 
 /**
- * Reads the experts block; null for a dense model. Llama-4-style configs (ONE_SHARED_FAMILIES)
+ * Reads the experts block; null for a dense model. Llama-4-style configs (families with `oneSharedExpert`)
  * write the expert width as `intermediate_size` and the dense layers' width as
  * `intermediate_size_mlp`; their mixture layers are `moe_layers`, else every
  * `interleave_moe_layer_step`th layer; `denseFfn` then replaces the feed-forward width.
@@ -40,7 +39,7 @@ export function readMixture(
   modelType: string | null,
 ): { experts: Experts | null; denseFfn?: number } {
   const experts = readExperts(r, size, layers);
-  if (experts === null || modelType === null || !ONE_SHARED_FAMILIES.has(modelType)) {
+  if (experts === null || familyOf(modelType)?.oneSharedExpert !== true) {
     for (const key of ['intermediate_size_mlp', 'moe_layers', 'interleave_moe_layer_step']) {
       if (r.has([key]))
         r.report(

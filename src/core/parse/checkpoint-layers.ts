@@ -6,7 +6,7 @@
  * - `sliding_window` (unless `use_sliding_window` is false; Qwen families turn it off unless it
  *   is true), with, first match: `sliding_window_pattern` N (every Nth layer is global: layer i
  *   slides when `(i + 1) % N != 0`, as the Gemma-3-style config classes expand it); the family
- *   patterns FAMILY_PATTERNS (gemma2: local and global alternate, starting with a local layer;
+ *   patterns (`globalEvery` in the family table, checkpoint-families.ts; gemma2: local and global alternate, starting with a local layer;
  *   gemma3 / gemma3_text: N = 6; cohere2: N = 4 — each class's default); `max_window_layers`
  *   (layers from that index on slide, as the Qwen code does); otherwise every layer slides.
  * - `attention_chunk_size` with `no_rope_layers` (one entry per layer, 1 = the layer has the
@@ -21,23 +21,10 @@
  */
 import type { LayerAttention } from '../model.js';
 import type { FieldReader } from './fields.js';
-import { isCount } from './spec-defaults.js';
-import type { SourceMapping, SourceValue } from './source.js';
+import { familyOf } from './checkpoint-families.js';
 
-/** Window patterns a family's config class fills in when the file states none: every Nth layer is global. */
-export const FAMILY_PATTERNS: Readonly<Record<string, number>> = {
-  gemma2: 2,
-  gemma3: 6,
-  gemma3_text: 6,
-  cohere2: 4,
-};
-/** Families whose config class makes every Nth layer position-free when `no_rope_layers` is absent (default N: `4`). */
-export const NO_ROPE_INTERVAL_FAMILIES: Readonly<Record<string, number>> = {
-  llama4: 4,
-  llama4_text: 4,
-};
-/** Families whose config class turns the window off unless `use_sliding_window` is true. */
-const WINDOW_OFF_FAMILIES = new Set(['qwen2', 'qwen2_moe', 'qwen3', 'qwen3_moe']);
+import type { SourceMapping, SourceValue } from './source.js';
+import { isCount } from '../metrics/sizes.js';
 
 const LAYER_TYPE_NAMES: Readonly<Record<string, LayerAttention>> = {
   full_attention: 'full',
@@ -90,7 +77,7 @@ export function readLayerPlan(
     const free = new Set(plan.positionFreeLayers ?? []);
     if (
       !hasList(r, ['no_rope_layers']) &&
-      !(modelType !== null && NO_ROPE_INTERVAL_FAMILIES[modelType] !== undefined) &&
+      familyOf(modelType)?.noRopeEvery === undefined &&
       !r.has(['no_rope_layer_interval'])
     ) {
       r.report(
@@ -152,7 +139,7 @@ export function readLayerPlan(
     return plan;
   }
   const patternPath = ['sliding_window_pattern'];
-  const family = modelType !== null ? FAMILY_PATTERNS[modelType] : undefined;
+  const family = familyOf(modelType)?.globalEvery;
   if (r.has(patternPath) || family !== undefined) {
     let every: number | undefined = family;
     if (r.has(patternPath)) {
@@ -228,8 +215,7 @@ function readWindowSize(r: FieldReader, modelType: string | null): number | null
   if (
     use === undefined &&
     !r.has(['use_sliding_window']) &&
-    modelType !== null &&
-    WINDOW_OFF_FAMILIES.has(modelType)
+    familyOf(modelType)?.windowOff === true
   ) {
     r.report(
       'key-ignored',
@@ -308,7 +294,7 @@ function readPositionFree(
     return free.length > 0 ? free : null;
   }
   const intervalPath = ['no_rope_layer_interval'];
-  const familyInterval = modelType !== null ? NO_ROPE_INTERVAL_FAMILIES[modelType] : undefined;
+  const familyInterval = familyOf(modelType)?.noRopeEvery;
   if (!r.has(intervalPath) && familyInterval === undefined) return null;
   let every = familyInterval;
   if (r.has(intervalPath)) {

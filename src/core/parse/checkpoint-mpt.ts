@@ -5,7 +5,7 @@
  * from `ffn_config` or `expansion_ratio · d_model`, and a gated block from `ffn_config.ffn_type`.
  */
 import type { FieldReader } from './fields.js';
-import { isCount } from './spec-defaults.js';
+import { isCount } from '../metrics/sizes.js';
 
 export interface MptAttention {
   /** Key/value heads implied by `attn_config.attn_type`, when it says. */

@@ -6,7 +6,8 @@
 import type { FieldReader } from './fields.js';
 import type { PathSegment } from './quote.js';
 import type { ScalingDraft } from './spec-defaults.js';
-import { isCount } from './spec-defaults.js';
+import { rotaryWidth } from '../metrics/frequencies.js';
+import { isCount } from '../metrics/sizes.js';
 
 /** What the scaling readers need from the rest of the config. */
 export interface RotaryContext {
@@ -16,11 +17,10 @@ export interface RotaryContext {
   declaredSpan: number;
 }
 
-/** Rotary pairs of a head of `headDim` channels rotating `fraction` of them: `floor(headDim·fraction/2)`. */
+/** Rotary pairs `r/2` of a head of `headDim` channels rotating `fraction` of them (NaN when unusable). */
 export function rotaryPairs(headDim: number, fraction: number | undefined): number {
-  const f = fraction ?? 1;
-  if (!isCount(headDim) || !Number.isFinite(f) || f <= 0 || f > 1) return NaN;
-  return Math.floor((headDim * f + 1e-9) / 2);
+  const r = rotaryWidth(headDim, fraction ?? 1);
+  return r === null ? NaN : r / 2;
 }
 
 /**

@@ -6,7 +6,7 @@
  * its config gives the ViT-style sizes.
  */
 import type { Finding, VisionTower } from '../model.js';
-import { FAMILY_DEFAULTS } from './checkpoint-families.js';
+import { familyOf } from './checkpoint-families.js';
 import { isCheckpointConfig } from './checkpoint-dialect.js';
 import { FieldReader } from './fields.js';
 import type { PathSegment } from './quote.js';
@@ -35,10 +35,8 @@ function isMapping(v: SourceValue | undefined): v is SourceMapping {
 export function isLanguageModelBlock(block: SourceMapping): boolean {
   if (isCheckpointConfig(block)) return true;
   const type = block.model_type;
-  return (
-    typeof type === 'string' &&
-    Object.prototype.hasOwnProperty.call(FAMILY_DEFAULTS, type.toLowerCase())
-  );
+  // A family with published defaults fills in what a sparse block leaves out.
+  return typeof type === 'string' && familyOf(type.toLowerCase())?.published !== undefined;
 }
 
 /** The key of the nested language model in `root`, or null. */

@@ -16,6 +16,7 @@ import type {
   WeightQuantization,
 } from '../model.js';
 import { dtypeQuantization } from '../metrics/quantized-weights.js';
+import { isCount } from '../metrics/sizes.js';
 import {
   FLOAT_FORMATS,
   LAYER_ATTENTIONS,
@@ -419,8 +420,7 @@ function readWeightGroups(r: FieldReader, at: string[]): WeightQuantization | nu
     return null;
   }
   const group = r.count('quantization', groupPath, 'weights per scale');
-  if (group === undefined || Number.isNaN(group) || !(Number.isSafeInteger(group) && group >= 1))
-    return null;
+  if (group === undefined || Number.isNaN(group) || !isCount(group)) return null;
   const weights = r.get([...at, 'weights']);
   const q =
     typeof weights === 'string' && Object.hasOwn(STORAGE, weights)

@@ -20,7 +20,7 @@
 import type { WeightQuantization } from '../model.js';
 import type { FieldReader } from './fields.js';
 import type { PathSegment } from './quote.js';
-import { isCount } from './spec-defaults.js';
+import { isCount } from '../metrics/sizes.js';
 
 const AT: PathSegment[] = ['quantization_config'];
 

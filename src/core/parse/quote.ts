@@ -19,7 +19,7 @@ export function truncate(s: string, max = MAX_QUOTED): string {
  * exact value of the double, not JavaScript's shortest form `1152921504606847000`), others as
  * JavaScript prints them.
  */
-export function formatNumber(n: number): string {
+export function literalNumber(n: number): string {
   if (Object.is(n, -0)) return '-0';
   if (Number.isInteger(n) && !Number.isSafeInteger(n) && Math.abs(n) < 1e21)
     return BigInt(n).toString();
@@ -72,6 +72,6 @@ export function quoteValue(v: unknown, literal: string | null = null): string {
   if (typeof v === 'string') return quoteText(v);
   if (literal !== null && literal.trim() !== '') return truncate(literal.trim());
   if (v === null || v === undefined) return 'empty';
-  if (typeof v === 'number') return formatNumber(v);
+  if (typeof v === 'number') return literalNumber(v);
   return String(v);
 }

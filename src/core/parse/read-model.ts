@@ -12,7 +12,7 @@ import { MODEL_FORMAT, MODEL_FORMAT_FAMILY, readOwnDialect } from './own-dialect
 import { kindOf, quoteValue, truncate } from './quote.js';
 import type { PathSegment } from './quote.js';
 import { completeSpec } from './spec-defaults.js';
-import { FAMILY_DEFAULTS } from './checkpoint-families.js';
+import { familyOf } from './checkpoint-families.js';
 import {
   TOWER_KEY,
   isLanguageModelBlock,
@@ -111,7 +111,7 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
 function defaultsTaken(r: FieldReader): void {
   if (r.defaultsUsed.length === 0) return;
   const type = String(r.get(['model_type'])).toLowerCase();
-  const family = FAMILY_DEFAULTS[type];
+  const family = familyOf(type)?.published;
   if (family === undefined) return;
   const values = r.defaultsUsed.map((k) => `${k} ${JSON.stringify(family.values[k])}`).join(', ');
   const at = ['model_type'];

@@ -18,6 +18,7 @@ import type {
   VisionTower,
   WeightQuantization,
 } from '../model.js';
+import { isCount } from '../metrics/sizes.js';
 
 /** A scaling block as stated: missing values take the defaults below. */
 export interface ScalingDraft {
@@ -101,17 +102,12 @@ export const DEFAULT_RELATIVE_MAX_DISTANCE = 128;
 /** Feed-forward width over model width (default: `4`; Vaswani et al. 2017, Table 3: 2048 = 4 × 512). */
 export const DEFAULT_FFN_RATIO = 4;
 
-/** A size the defaults can be derived from: a whole number of at least 1 a double holds exactly. */
-export function isCount(n: number | null | undefined): n is number {
-  return typeof n === 'number' && Number.isSafeInteger(n) && n >= 1;
-}
-
-/** The spec with every documented default applied; derived values are NaN when their inputs are unusable. */
 /** Width of one head when a config states none: `hidden / heads` (NaN when either is unusable). */
 export function defaultHeadDim(hidden: number, heads: number): number {
   return isCount(hidden) && isCount(heads) ? hidden / heads : NaN;
 }
 
+/** The spec with every documented default applied; derived values are NaN when their inputs are unusable. */
 export function completeSpec(draft: SpecDraft): ModelSpec {
   const { layers, hidden, heads } = draft;
   const kvHeads = draft.kvHeads ?? (isCount(heads) ? heads : NaN);

@@ -2,7 +2,7 @@
  * The known key an unknown one was most likely meant to be: a close spelling (after reading
  * `_` as `-`), or the context-reach name of a checkpoint key written in the wrong dialect.
  */
-import { editDistance } from '../policy/nearest.js';
+import { editDistance } from './nearest.js';
 
 /** Checkpoint key names people carry over into the own dialect, and the key that replaces them. */
 const CHECKPOINT_SYNONYMS: Readonly<Record<string, string>> = {

@@ -9,7 +9,6 @@ export {
 export { PolicyError, parsePolicy, servingPatchOf } from './parse.js';
 export { isModelConfig, matchingOverrides, resolvePolicy, ruleLevel } from './resolve.js';
 export { POLICY_SCHEMA } from './schema.js';
-export { editDistance, nearestName } from './nearest.js';
 export type {
   FilePolicy,
   LimitSetting,

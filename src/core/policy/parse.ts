@@ -11,7 +11,8 @@ import { DEFAULT_EXCLUDE, DEFAULT_FILES, MAX_POLICY_CHARS } from './defaults.js'
 import { GLOB_OPTIONS, MAX_GLOB_LENGTH, MAX_GLOB_STARS } from './resolve.js';
 import { formatKeyPath, lineOf, nodeAt } from './locate.js';
 import type { KeyPath } from './locate.js';
-import { nearestName } from './nearest.js';
+import { nearestName } from '../parse/nearest.js';
+import { literalNumber, quoteText } from '../parse/quote.js';
 import { validatePolicyValue } from './schema.js';
 import type {
   LimitSetting,
@@ -78,14 +79,13 @@ export class PolicyError extends Error {
   }
 }
 
-/** A value quoted for a message: strings in quotes, long ones cut. */
+/** A value of the policy quoted for a message: text as the model reader quotes it, collections named. */
 function quote(value: unknown): string {
   if (value === null) return 'null';
   if (Array.isArray(value)) return 'a list';
   if (typeof value === 'object') return 'a mapping';
-  if (typeof value === 'number') return Object.is(value, -0) ? '-0' : String(value);
-  const text = typeof value === 'string' ? JSON.stringify(value) : String(value);
-  return text.length > 80 ? `${text.slice(0, 77)}..."` : text;
+  if (typeof value === 'number') return literalNumber(value);
+  return typeof value === 'string' ? quoteText(value) : String(value);
 }
 
 const TYPE_WORDS: Record<string, string> = {

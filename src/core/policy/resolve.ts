@@ -3,8 +3,8 @@
  * matching override laid over it.
  */
 import picomatch from 'picomatch';
-import type { Limit } from '../compare/judging.js';
-import { METRIC_PATHS } from '../compare/metric-path.js';
+import type { Limit } from './judging.js';
+import { METRIC_PATHS } from '../metrics/metric-path.js';
 import type { ServingPatch, Severity, SourceLocation } from '../model.js';
 import type { FilePolicy, LimitSetting, Policy, PolicyOverride, RuleLevel } from './types.js';
 

@@ -3,7 +3,7 @@
  * checked. `Policy` is the whole file; `FilePolicy` is what applies to one model config after
  * the overrides.
  */
-import type { Judging, Limit } from '../compare/judging.js';
+import type { Judging, Limit } from './judging.js';
 import type {
   FloatFormat,
   ServingPatch,

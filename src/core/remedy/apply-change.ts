@@ -12,7 +12,7 @@ import {
   DEFAULT_YARN_ALPHA,
   DEFAULT_YARN_BETA,
 } from '../parse/spec-defaults.js';
-import type { Change, ChangeValue } from './types.js';
+import type { Change, ChangeValue } from '../report/types.js';
 
 /** Every field path a remedy may change, in the order reports list them. */
 export const CHANGE_KEYS = [

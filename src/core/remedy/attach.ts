@@ -2,16 +2,23 @@
  * Remedies attached to reports: every blocking finding of the gate's report (and of a single
  * inspected file, judged with the built-in rules) carries its remedy, or why there is none.
  */
-import type { ChangedConfig, FileDecision, GateReport, JudgedFinding } from '../compare/decide.js';
-import { BUILT_IN_JUDGING } from '../compare/judging.js';
-import { isMetricPath, metricValue } from '../compare/metric-path.js';
+import type { ChangedConfig } from '../compare/decide.js';
+import { BUILT_IN_JUDGING } from '../policy/judging.js';
+import { isMetricPath, metricValue } from '../metrics/metric-path.js';
 import type { FileReport } from '../inspect.js';
 import type { Finding } from '../model.js';
 import type { ScanMemo } from '../metrics/scan-memo.js';
 import { applyChange, changeEntries } from './apply-change.js';
 import { proofCost, proposeRemedy } from './propose.js';
 import { prove, remedyContext, type RemedyContext } from './prove.js';
-import type { Change, CombinedRemedy, RemedyFields } from './types.js';
+import type {
+  Change,
+  CombinedRemedy,
+  RemedyFields,
+  FileDecision,
+  GateReport,
+  JudgedFinding,
+} from '../report/types.js';
 
 const UNREADABLE: RemedyFields = {
   remedy: null,

@@ -7,7 +7,7 @@
  */
 import type { Dialect, LocationMap, ModelSpec } from '../model.js';
 import { changeEntries, type ChangeKey } from './apply-change.js';
-import type { Change, ChangeValue } from './types.js';
+import type { Change, ChangeValue } from '../report/types.js';
 
 /** One key to set: its dotted path in the file (as the reader names it), the value, and the line it is on now. */
 export interface KeyEdit {

@@ -7,7 +7,7 @@
  */
 import type { ModelSpec, ScalingKind } from '../model.js';
 import { changeEntries, currentValue } from './apply-change.js';
-import type { Change } from './types.js';
+import type { Change } from '../report/types.js';
 
 /** Scaling kinds that are used after fine-tuning at the new factor (as published); the others are applied at inference. */
 const TUNED_KINDS: readonly ScalingKind[] = ['linear', 'yarn', 'banded'];

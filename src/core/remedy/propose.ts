@@ -8,9 +8,9 @@
  * bisection (at most 54 steps), at most `MAX_PROOFS_PER_KIND` full proofs per kind, and the
  * capped stages of the base search (`rotary-base.ts`).
  */
-import { checkLimit } from '../compare/decide.js';
-import type { Limit } from '../compare/judging.js';
-import { isMetricPath, metricValue } from '../compare/metric-path.js';
+
+import type { Limit } from '../policy/judging.js';
+import { isMetricPath, metricValue } from '../metrics/metric-path.js';
 import { computeMetrics, frequencyPlan } from '../metrics/compute.js';
 import { positionExactLimit } from '../metrics/float-format.js';
 import { servedSequences } from '../metrics/kv-cache.js';
@@ -26,8 +26,8 @@ import { deviceCount, parallelDegrees, shardingDegrees, shards } from '../metric
 import { DEFAULT_GROUP_SIZE } from '../metrics/quantized-weights.js';
 import type { Finding, FloatFormat, ModelSpec, StorageDType } from '../model.js';
 import { FLOAT_FORMATS, STORAGE_DTYPES } from '../model.js';
-import { isRuleId, RULES } from '../rules/catalog.js';
-import { formatInteger, formatNumber, formatTokens } from '../units.js';
+import { isRuleId, RULES, type RuleId } from '../rules/catalog.js';
+import { formatInteger, formatNumber, formatTokens } from '../format/units.js';
 import { applyChange } from './apply-change.js';
 import { lightMetric, rangeMetrics, budgetMetrics } from './light-metrics.js';
 import { uncomputedScanMetrics } from '../rules/metric-rules.js';
@@ -40,8 +40,9 @@ import {
 } from './prove.js';
 import { searchRotaryBase, type BaseDirection, type BaseTrial } from './rotary-base.js';
 import { coveringFactor } from './scaling-factor.js';
-import type { Change, Remedy, RemedyFields } from './types.js';
+import type { Change, Remedy, RemedyFields } from '../report/types.js';
 import { largestPassing } from './whole-search.js';
+import { checkLimit } from '../policy/limit-check.js';
 
 /** Full proofs one kind of change may run before it gives up (default: `4`). */
 export const MAX_PROOFS_PER_KIND = 4;
@@ -85,57 +86,6 @@ function valueOf(spec: ModelSpec, metric: string, memo: ScanMemo | undefined): n
   return isMetricPath(metric) ? metricValue(computeMetrics(spec, memo), metric) : null;
 }
 
-/** Whether a changed spec clears the target finding, judged on the metrics it depends on. */
-function resolver(ctx: RemedyContext, target: Target): Resolves | null {
-  switch (target.rule) {
-    case 'span-past-reach':
-      return (spec) => {
-        const h = rangeMetrics(spec).headroom;
-        return h !== null && h >= 0;
-      };
-    case 'span-beyond-scaling-cover':
-    case 'span-grew-code-unchanged':
-      return (spec) => {
-        const r = rangeMetrics(spec);
-        return (
-          r.scalingCover !== null && r.declaredSpan !== null && r.scalingCover >= r.declaredSpan
-        );
-      };
-    case 'memory-over-budget':
-      return (spec) => {
-        const usable = usableDeviceBytes(spec);
-        const memory = budgetMetrics(spec).memoryBytesPerDevice;
-        return usable === null || (memory !== null && memory <= usable);
-      };
-    case 'layout-unshardable':
-      return (spec) => {
-        const d = parallelDegrees(spec);
-        return (
-          d !== null &&
-          shards(spec.heads, spec.kvHeads, d.t) &&
-          d.p <= spec.layers &&
-          (!spec.encoder || shards(spec.encoder.heads, spec.encoder.kvHeads, d.t))
-        );
-      };
-    case 'positions-collide':
-      return (spec) => {
-        const colliding = lightMetric(
-          spec,
-          `precision.${spec.dtypes.positions ?? 'fp32'}.collidingPositions`,
-        );
-        return !(typeof colliding === 'number' && colliding > 0);
-      };
-    case 'limit-crossed': {
-      const { limit, metric } = target;
-      if (!limit || !metric) return null;
-      return (spec) =>
-        checkLimit(limit, target.baseValue, valueOf(spec, metric, ctx.memo)).crossed.length === 0;
-    }
-    default:
-      return null;
-  }
-}
-
 function blockerText(id: string): string {
   return id.startsWith('limit-crossed:') ? `the ${id.slice('limit-crossed:'.length)} limit` : id;
 }
@@ -143,17 +93,6 @@ function blockerText(id: string): string {
 function describeBlockers(proof: Proof): string {
   return proof.blockers.map(blockerText).join(', ');
 }
-
-/** Metrics each blocking rule is about: a remedy showing one of them must not leave that rule standing. */
-const RULE_METRICS: Record<string, string[]> = {
-  'span-past-reach': ['headroom', 'reach', 'scalingCover'],
-  'memory-over-budget': ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'],
-  'positions-collide': [
-    'precision.fp32.collidingPositions',
-    'precision.bf16.collidingPositions',
-    'precision.fp16.collidingPositions',
-  ],
-};
 
 /**
  * What the changed description still breaks among the metrics the remedy shows: a blocking
@@ -167,7 +106,7 @@ export function ownBreaks(proof: Proof, shown: readonly string[]): string[] {
       out.add(`the ${finding.metric} limit`);
     if (
       finding.severity === 'block' &&
-      (RULE_METRICS[finding.rule] ?? []).some((m) => shown.includes(m))
+      (remedyRule(finding.rule)?.metrics ?? []).some((m) => shown.includes(m))
     )
       out.add(finding.rule);
   }
@@ -663,75 +602,158 @@ function layoutKind(ctx: RemedyContext, target: Target, resolves: Resolves): Kin
 
 type Kind = (ctx: RemedyContext, target: Target, resolves: Resolves) => KindOutcome;
 
-function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
-  const spec = ctx.head.spec;
-  const range = rangeMetrics(spec);
+/** How one blocking rule is remedied. */
+interface RuleRemedy {
+  /** The kinds of change to try, in order (the first that proves is the remedy), or why none is searched. */
+  kinds(ctx: RemedyContext, target: Target): Kind[] | string;
+  /** Whether a changed spec clears the finding, judged on the metrics it depends on; null: no search. */
+  resolves(ctx: RemedyContext, target: Target): Resolves | null;
+  /** Metrics the rule is about: a remedy showing one of them must not leave the rule standing (default: none). */
+  metrics?: readonly string[];
+}
+
+/** Kinds of change that lower the memory a replica needs, in the order they are tried. */
+const MEMORY_KINDS: readonly Kind[] = [
+  sequencesKind,
+  cacheDtypeKind,
+  kvHeadsKind,
+  spanKind,
+  tensorKind,
+  pipelineKind,
+  quantizeKind,
+];
+
+/** The scaling factor covers the declared span. */
+const coversDeclared: Resolves = (spec) => {
+  const r = rangeMetrics(spec);
+  return r.scalingCover !== null && r.declaredSpan !== null && r.scalingCover >= r.declaredSpan;
+};
+
+/** The kinds for a crossed limit: by the limited metric. */
+function limitKinds(ctx: RemedyContext, target: Target): Kind[] | string {
+  const range = rangeMetrics(ctx.head.spec);
   const T = range.evaluationSpan;
-  const memory = [
-    sequencesKind,
-    cacheDtypeKind,
-    kvHeadsKind,
-    spanKind,
-    tensorKind,
-    pipelineKind,
-    quantizeKind,
-  ];
-  switch (target.rule) {
-    case 'span-past-reach':
-      return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, T), spanKind];
-    case 'span-beyond-scaling-cover':
+  const metric = target.metric ?? '';
+  const limit = target.limit;
+  if (!limit) return `the policy has no limit on ${metric}`;
+  if (
+    isMetricPath(metric) &&
+    metricValue(ctx.head.metrics, metric) === null &&
+    uncomputedScanMetrics(ctx.head.metrics).includes(metric)
+  ) {
+    return `no remedy is searched for ${metric}: the scans stopped at their bound at this span (scan-incomplete), so no change can be proven against it; serve a shorter span`;
+  }
+  if (metric === 'discriminationSpan' || metric === 'separationFloor')
+    return [(c, t) => baseKind(c, t)];
+  if (metric === 'memoryBytes' || metric === 'cacheBytesAtSpan') return [...MEMORY_KINDS];
+  if (metric === 'memoryBytesPerDevice') return [...MEMORY_KINDS];
+  if (metric === 'fitSequences')
+    return [cacheDtypeKind, kvHeadsKind, spanKind, tensorKind, pipelineKind, quantizeKind];
+  if (metric === 'weightBytesPerDevice') return [tensorKind, pipelineKind, quantizeKind];
+  if (metric === 'weightBytes') return [quantizeKind];
+  if (metric === 'cachePerTokenBytes') return [cacheDtypeKind, kvHeadsKind];
+  if (metric === 'headroom' && limit.min !== undefined && T !== null) {
+    return [
+      (c, t, r) =>
+        factorKind(c, t, r, range.trainedSpan, T + Math.max(0, Math.ceil(limit.min as number))),
+      spanKind,
+    ];
+  }
+  if (metric === 'reach' && limit.min !== undefined) {
+    return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, Math.ceil(limit.min as number))];
+  }
+  if (/^precision\.(fp32|bf16|fp16)\.collidingPositions$/.test(metric)) return [spanKind];
+  return `no remedy is searched for a limit on ${metric}: remedies cover spans and reach, rotary discrimination and separation, memory, and colliding positions`;
+}
+
+/** Every rule a remedy is searched for; the others need the value itself corrected. */
+const RULE_REMEDIES: Readonly<Partial<Record<RuleId, RuleRemedy>>> = {
+  'span-past-reach': {
+    kinds: (ctx) => {
+      const range = rangeMetrics(ctx.head.spec);
+      return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, range.evaluationSpan), spanKind];
+    },
+    resolves: () => (spec) => {
+      const h = rangeMetrics(spec).headroom;
+      return h !== null && h >= 0;
+    },
+    metrics: ['headroom', 'reach', 'scalingCover'],
+  },
+  'span-beyond-scaling-cover': {
+    kinds: (ctx) => {
+      const range = rangeMetrics(ctx.head.spec);
       return [(c, t, r) => factorKind(c, t, r, range.trainedSpan, range.declaredSpan)];
-    case 'span-grew-code-unchanged':
-      // The trained span is the base's: the head's own is only its (grown) declared span.
+    },
+    resolves: () => coversDeclared,
+  },
+  'span-grew-code-unchanged': {
+    // The trained span is the base's: the head's own is only its (grown) declared span.
+    kinds: (ctx) => {
+      const range = rangeMetrics(ctx.head.spec);
       return [
         (c, t, r) => factorKind(c, t, r, ctx.base?.metrics.trainedSpan ?? null, range.declaredSpan),
       ];
-    case 'memory-over-budget':
-      return memory;
-    case 'positions-collide':
-      return [formatKind, spanKind];
-    case 'layout-unshardable':
-      return [layoutKind];
-    case 'limit-crossed': {
-      const metric = target.metric ?? '';
-      const limit = target.limit;
-      if (!limit) return `the policy has no limit on ${metric}`;
-      if (
-        isMetricPath(metric) &&
-        metricValue(ctx.head.metrics, metric) === null &&
-        uncomputedScanMetrics(ctx.head.metrics).includes(metric)
-      ) {
-        return `no remedy is searched for ${metric}: the scans stopped at their bound at this span (scan-incomplete), so no change can be proven against it; serve a shorter span`;
-      }
-      if (metric === 'discriminationSpan' || metric === 'separationFloor')
-        return [(c, t) => baseKind(c, t)];
-      if (metric === 'memoryBytes' || metric === 'cacheBytesAtSpan') return memory;
-      if (metric === 'memoryBytesPerDevice') return memory;
-      if (metric === 'fitSequences')
-        return [cacheDtypeKind, kvHeadsKind, spanKind, tensorKind, pipelineKind, quantizeKind];
-      if (metric === 'weightBytesPerDevice') return [tensorKind, pipelineKind, quantizeKind];
-      if (metric === 'weightBytes') return [quantizeKind];
-      if (metric === 'cachePerTokenBytes') return [cacheDtypeKind, kvHeadsKind];
-      if (metric === 'headroom' && limit.min !== undefined && T !== null) {
-        return [
-          (c, t, r) =>
-            factorKind(c, t, r, range.trainedSpan, T + Math.max(0, Math.ceil(limit.min as number))),
-          spanKind,
-        ];
-      }
-      if (metric === 'reach' && limit.min !== undefined) {
-        return [
-          (c, t, r) => factorKind(c, t, r, range.trainedSpan, Math.ceil(limit.min as number)),
-        ];
-      }
-      if (/^precision\.(fp32|bf16|fp16)\.collidingPositions$/.test(metric)) return [spanKind];
-      return `no remedy is searched for a limit on ${metric}: remedies cover spans and reach, rotary discrimination and separation, memory, and colliding positions`;
-    }
-    default: {
-      const help = isRuleId(target.rule) ? ` ${RULES[target.rule].help}` : '';
-      return `no remedy is searched for ${target.rule}: the value itself must be corrected, as the message says.${help}`;
-    }
-  }
+    },
+    resolves: () => coversDeclared,
+  },
+  'memory-over-budget': {
+    kinds: () => [...MEMORY_KINDS],
+    resolves: () => (spec) => {
+      const usable = usableDeviceBytes(spec);
+      const memory = budgetMetrics(spec).memoryBytesPerDevice;
+      return usable === null || (memory !== null && memory <= usable);
+    },
+    metrics: ['memoryBytes', 'cacheBytesAtSpan', 'fitSequences'],
+  },
+  'positions-collide': {
+    kinds: () => [formatKind, spanKind],
+    resolves: () => (spec) => {
+      const colliding = lightMetric(
+        spec,
+        `precision.${spec.dtypes.positions ?? 'fp32'}.collidingPositions`,
+      );
+      return !(typeof colliding === 'number' && colliding > 0);
+    },
+    metrics: [
+      'precision.fp32.collidingPositions',
+      'precision.bf16.collidingPositions',
+      'precision.fp16.collidingPositions',
+    ],
+  },
+  'layout-unshardable': {
+    kinds: () => [layoutKind],
+    resolves: () => (spec) => {
+      const d = parallelDegrees(spec);
+      return (
+        d !== null &&
+        shards(spec.heads, spec.kvHeads, d.t) &&
+        d.p <= spec.layers &&
+        (!spec.encoder || shards(spec.encoder.heads, spec.encoder.kvHeads, d.t))
+      );
+    },
+  },
+  'limit-crossed': {
+    kinds: limitKinds,
+    resolves: (ctx, target) => {
+      const { limit, metric } = target;
+      if (!limit || !metric) return null;
+      return (spec) =>
+        checkLimit(limit, target.baseValue, valueOf(spec, metric, ctx.memo)).crossed.length === 0;
+    },
+  },
+};
+
+/** The remedy entry of `rule`, or undefined when no remedy is searched for it. */
+function remedyRule(rule: string): RuleRemedy | undefined {
+  return isRuleId(rule) ? RULE_REMEDIES[rule] : undefined;
+}
+
+/** The kinds for `target`, or why none is searched. */
+function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
+  const entry = remedyRule(target.rule);
+  if (entry !== undefined) return entry.kinds(ctx, target);
+  const help = isRuleId(target.rule) ? ` ${RULES[target.rule].help}` : '';
+  return `no remedy is searched for ${target.rule}: the value itself must be corrected, as the message says.${help}`;
 }
 
 /**
@@ -757,7 +779,7 @@ export function proposeRemedy(
   const kinds = kindsFor(ctx, target);
   if (typeof kinds === 'string')
     return { remedy: null, remedyWhyNot: kinds, remedyAlternatives: [] };
-  const resolves = resolver(ctx, target);
+  const resolves = remedyRule(finding.rule)?.resolves(ctx, target) ?? null;
   if (resolves === null)
     return {
       remedy: null,

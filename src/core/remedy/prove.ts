@@ -5,8 +5,8 @@
  * that did not block before.
  */
 import type { ChangedFile } from '../changes.js';
-import { decideFile, type FileDecision } from '../compare/decide.js';
-import type { Judging } from '../compare/judging.js';
+import { decideFile } from '../compare/decide.js';
+import type { Judging } from '../policy/judging.js';
 import { readerFindings } from '../compare/assumed.js';
 import { sortFindings, type FileReport } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
@@ -16,7 +16,8 @@ import type { Finding, ModelSpec } from '../model.js';
 import { metricFindings } from '../rules/metric-rules.js';
 import { specFindings } from '../rules/spec-rules.js';
 import { applyChange } from './apply-change.js';
-import type { Change } from './types.js';
+import type { Change } from '../report/types.js';
+import { type FileDecision } from '../report/types.js';
 
 /** What a finding is, for telling findings before and after a change apart: the rule, and the metric of a limit. */
 export interface FindingIdentity {

@@ -1,6 +1,7 @@
 /**
  * The scaling factor that makes a rotary code reach a span.
  */
+import { isCount } from '../metrics/sizes.js';
 
 /**
  * factor: `ceil(span / L0)`, the smallest whole factor `s` with `L0 · s >= span`. Position
@@ -10,7 +11,6 @@
  * a positive whole number.
  */
 export function coveringFactor(span: number, trained: number): number | null {
-  if (!Number.isSafeInteger(span) || span < 1 || !Number.isSafeInteger(trained) || trained < 1)
-    return null;
+  if (!isCount(span) || !isCount(trained)) return null;
   return Math.max(1, Math.ceil(span / trained));
 }

@@ -7,7 +7,7 @@
 import { readModel } from '../parse/read-model.js';
 import { changeEntries, currentValue } from './apply-change.js';
 import { jsonValue, yamlValue, type FilePatch } from './file-patch.js';
-import type { Change } from './types.js';
+import type { Change } from '../report/types.js';
 
 /** Lines `startLine`..`endLine` (1-based, inclusive) of the file at head, replaced by `replacement`. */
 export interface LineEdit {

@@ -1,7 +1,7 @@
-import type { GateReport } from '../compare/decide.js';
 import type { Severity } from '../model.js';
 import { SEVERITY_ORDER } from '../severity.js';
 import { showBidiControls } from './escape.js';
+import type { GateReport } from '../report/types.js';
 
 /** GitHub shows at most this many annotations of each level per step. */
 export const ANNOTATIONS_PER_LEVEL = 10;

@@ -1,12 +1,18 @@
 import { markdownTable } from 'markdown-table';
-import type { FileDecision, GateReport, JudgedFinding, MetricDelta } from '../compare/decide.js';
-import { METRIC_PATHS, metricValue as metricOf } from '../compare/metric-path.js';
+
+import { METRIC_PATHS, metricValue as metricOf } from '../metrics/metric-path.js';
 import type { MetricPath } from '../metrics/types.js';
 import type { LocationMap, ModelSpec } from '../model.js';
 import { filePatches, type FilePatch } from '../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
-import type { Remedy } from '../remedy/types.js';
-import { formatInteger, formatNumber } from '../units.js';
+import type {
+  Remedy,
+  FileDecision,
+  GateReport,
+  JudgedFinding,
+  MetricDelta,
+} from '../report/types.js';
+import { formatInteger, formatNumber } from '../format/units.js';
 import {
   codeBlock,
   codeId,
@@ -28,7 +34,7 @@ import {
   VERDICT_WORD,
 } from './marks.js';
 import { memoryChart } from './memory-chart.js';
-import { formatDeltaChange, formatMetric } from './metric-format.js';
+import { formatDeltaChange, formatMetric } from '../format/metric-format.js';
 import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
 import { metricParts, PASSES_NOTE } from './remedy-text.js';
 

@@ -7,7 +7,7 @@
 import { reserveWords, usableDeviceBytes } from '../metrics/memory-curve.js';
 import type { Metrics } from '../metrics/types.js';
 import type { ModelSpec } from '../model.js';
-import { formatBytes, formatInteger, formatNumber } from '../units.js';
+import { formatBytes, formatInteger, formatNumber } from '../format/units.js';
 
 /** `per device, 8 devices (tensor-parallel 8 × pipeline-parallel 1): weights 16.1 GiB, cache 10 GiB at 4,096 tokens × 64 sequences`; null on one device. */
 export function perDeviceText(spec: ModelSpec, metrics: Metrics): string | null {

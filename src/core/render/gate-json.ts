@@ -1,6 +1,6 @@
-import type { GateReport } from '../compare/decide.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { VERSION } from '../version.js';
+import type { GateReport } from '../report/types.js';
 
 /**
  * The versioned JSON report of the gate: the decision, and per file both versions' spec, metrics

@@ -6,13 +6,13 @@
  * with their proven remedies and the table of changed metrics. Every path, key, value and
  * message from the pull request is escaped (`html/markup.ts` escapes by default).
  */
-import type { FileDecision, GateReport, MetricDelta } from '../compare/decide.js';
+
 import type { FileReport } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
 import type { LocationMap, ModelSpec } from '../model.js';
 import { filePatches } from '../remedy/file-patch.js';
 import { applyChange, changeEntries } from '../remedy/apply-change.js';
-import type { Change } from '../remedy/types.js';
+import type { Change, FileDecision, GateReport, MetricDelta } from '../report/types.js';
 import { VERSION } from '../version.js';
 import { changeCards } from './html/change-cards.js';
 import { findingsSection, fixSummary } from './html/findings-html.js';
@@ -22,11 +22,11 @@ import { fitText, perDeviceText } from './device-text.js';
 import { similarityChart, similarityOf } from './html/similarity-chart.js';
 import { spectrumChart, spectrumOf } from './html/spectrum-chart.js';
 import { REPORT_CSS } from './html/style.js';
-import { formatDeltaChange, formatMetric } from './metric-format.js';
+import { formatDeltaChange, formatMetric } from '../format/metric-format.js';
 import { limitStateWord, MEMORY_CAUTION, MEMORY_METRICS, VERDICT_WORD } from './marks.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { changeParts } from './remedy-text.js';
-import { formatInteger, formatNumber } from '../units.js';
+import { formatInteger, formatNumber } from '../format/units.js';
 
 export interface HtmlReportOptions {
   /** Page title (default: `context-reach report`). */

@@ -2,10 +2,16 @@ import type { Finding, Severity } from '../model.js';
 import { FLOAT_FORMATS } from '../model.js';
 import type { FileFailure, FileReport } from '../inspect.js';
 import type { Metrics } from '../metrics/types.js';
-import { formatBytes, formatCount, formatInteger, formatNumber, formatTokens } from '../units.js';
+import {
+  formatBytes,
+  formatCount,
+  formatInteger,
+  formatNumber,
+  formatTokens,
+} from '../format/units.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { reachAssumed } from '../metrics/reach.js';
-import type { RemedyFields, CombinedRemedy } from '../remedy/types.js';
+import type { RemedyFields, CombinedRemedy } from '../report/types.js';
 import { remedyLines, togetherText } from './remedy-text.js';
 import { fitText, perDeviceText } from './device-text.js';
 

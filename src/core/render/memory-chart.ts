@@ -1,7 +1,7 @@
-import type { FileDecision } from '../compare/decide.js';
 import { memoryAtSpan, usableDeviceBytes } from '../metrics/memory-curve.js';
-import { formatInteger, formatNumber } from '../units.js';
+import { formatInteger, formatNumber } from '../format/units.js';
 import { sameCurveWords } from './html/memory-span-chart.js';
+import type { FileDecision } from '../report/types.js';
 
 const GIB = 1024 ** 3;
 

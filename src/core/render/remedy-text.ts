@@ -7,9 +7,9 @@ import type { Dialect, LocationMap, ModelSpec } from '../model.js';
 import { filePatches as patchesOf } from '../remedy/file-patch.js';
 import { needsText as needsOf, remedyNeeds as needsFor } from '../remedy/needs.js';
 import { changeEntries, currentValue } from '../remedy/apply-change.js';
-import type { ChangeValue, CombinedRemedy, Remedy, RemedyFields } from '../remedy/types.js';
-import { formatInteger, formatNumber, formatTokens } from '../units.js';
-import { formatMetric } from './metric-format.js';
+import type { ChangeValue, CombinedRemedy, Remedy, RemedyFields } from '../report/types.js';
+import { formatInteger, formatNumber, formatTokens } from '../format/units.js';
+import { formatMetric } from '../format/metric-format.js';
 
 export { remedyNeeds, needsText } from '../remedy/needs.js';
 export { filePatches, type FilePatch } from '../remedy/file-patch.js';

@@ -1,7 +1,7 @@
-import type { GateReport } from '../compare/decide.js';
 import type { Severity } from '../model.js';
 import { RULES, type RuleId } from '../rules/catalog.js';
 import { encodePath, showBidiControls } from './escape.js';
+import type { GateReport } from '../report/types.js';
 
 const SARIF_LEVEL: Record<Severity, 'error' | 'warning' | 'note'> = {
   block: 'error',

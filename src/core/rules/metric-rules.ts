@@ -2,19 +2,11 @@ import type { Finding, LocationMap, ModelSpec } from '../model.js';
 import type { MetricPath, Metrics } from '../metrics/types.js';
 import { MAX_SCAN_ELEMENTS, MAX_SCAN_SPAN, MAX_SCAN_WORK } from '../metrics/scan-limits.js';
 import { reserveWords, usableDeviceBytes } from '../metrics/memory-curve.js';
-import { formatBytes, formatInteger, formatNumber, formatTokens } from '../units.js';
+import { formatBytes, formatInteger, formatNumber, formatTokens } from '../format/units.js';
 import { RULES, type RuleId } from './catalog.js';
+import { firstStated } from './first-stated.js';
 
-function at(
-  locations: LocationMap,
-  ...paths: string[]
-): { key: string | null; line: number | null } {
-  for (const path of paths) {
-    const found = locations[path];
-    if (found) return { key: found.key, line: found.line };
-  }
-  return { key: null, line: null };
-}
+const at = (locations: LocationMap, ...paths: string[]) => firstStated(locations, paths);
 
 function finding(
   rule: RuleId,

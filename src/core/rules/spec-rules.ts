@@ -5,8 +5,10 @@
  * problem, one finding.
  */
 import type { Finding, LocationMap, ModelSpec } from '../model.js';
-import { formatNumber } from '../parse/quote.js';
+import { literalNumber } from '../parse/quote.js';
+import { isCount } from '../metrics/sizes.js';
 import { shardingDegrees, shards } from '../metrics/per-device.js';
+import { rotaryWidth, rotatedChannels } from '../metrics/frequencies.js';
 import { RULES } from './catalog.js';
 import type { RuleId } from './catalog.js';
 
@@ -129,11 +131,6 @@ const SIZE_FIELDS: readonly SizeField[] = [
   },
 ];
 
-/** A whole number of at least 1 that a double holds exactly. */
-function isCount(n: number | null | undefined): n is number {
-  return typeof n === 'number' && Number.isSafeInteger(n) && n >= 1;
-}
-
 /**
  * Findings of `spec` on its own (all `block`): `size-invalid`, `kv-heads-indivisible`,
  * `rotary-width-odd`, `scaling-factor-below-one`, `original-span-above-declared`, and
@@ -163,7 +160,7 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
     const derived = derivation(spec, locations, size.field);
     const message = derived
       ? `${derived.subject}${problem}; ${derived.advice}`
-      : `${name(size.field)} is ${formatNumber(v)}${problem}; set it to ${size.what}: ${kind}`;
+      : `${name(size.field)} is ${literalNumber(v)}${problem}; set it to ${size.what}: ${kind}`;
     push(
       'size-invalid',
       locations[size.field] ? size.field : derivedFrom(size.field, locations),
@@ -231,19 +228,19 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
   }
 
   if (spec.position.kind === 'rotary') {
-    rotaryWidth(spec, locations, name, push);
+    checkRotaryWidth(spec, locations, name, push);
     const scaling = spec.position.scaling;
     if (scaling && Number.isFinite(scaling.factor) && scaling.factor < 1) {
       const hint =
         isCount(scaling.originalSpan) &&
         isCount(spec.declaredSpan) &&
         spec.declaredSpan > scaling.originalSpan
-          ? ` such as ${formatNumber(spec.declaredSpan / scaling.originalSpan)} (${name('declaredSpan')} ${spec.declaredSpan} / ${name('position.scaling.originalSpan')} ${scaling.originalSpan})`
+          ? ` such as ${literalNumber(spec.declaredSpan / scaling.originalSpan)} (${name('declaredSpan')} ${spec.declaredSpan} / ${name('position.scaling.originalSpan')} ${scaling.originalSpan})`
           : '';
       push(
         'scaling-factor-below-one',
         'position.scaling.factor',
-        `${name('position.scaling.factor')} is ${formatNumber(scaling.factor)}; a scaling factor below 1 shrinks the trained span instead of extending it: set it to the extended span over the original span, at least 1${hint}, or remove the scaling block`,
+        `${name('position.scaling.factor')} is ${literalNumber(scaling.factor)}; a scaling factor below 1 shrinks the trained span instead of extending it: set it to the extended span over the original span, at least 1${hint}, or remove the scaling block`,
       );
     }
     if (scaling && scaling.kind === 'pairwise' && isCount(spec.headDim)) {
@@ -271,7 +268,7 @@ export function specFindings(spec: ModelSpec, locations: LocationMap): Finding[]
     ) {
       const extended =
         Number.isFinite(scaling.factor) && scaling.factor >= 1
-          ? ` (${scaling.originalSpan} × ${formatNumber(scaling.factor)} = ${formatNumber(scaling.originalSpan * scaling.factor)})`
+          ? ` (${scaling.originalSpan} × ${literalNumber(scaling.factor)} = ${literalNumber(scaling.originalSpan * scaling.factor)})`
           : '';
       push(
         'original-span-above-declared',
@@ -361,7 +358,7 @@ function derivation(
   const key = (f: string): string => locations[f]?.key ?? f;
   if (field === 'headDim' && isCount(spec.hidden) && isCount(spec.heads)) {
     return {
-      subject: `the head width is not stated, and ${key('hidden')} / ${key('heads')} = ${spec.hidden} / ${spec.heads} = ${formatNumber(Number(spec.headDim.toPrecision(6)))}`,
+      subject: `the head width is not stated, and ${key('hidden')} / ${key('heads')} = ${spec.hidden} / ${spec.heads} = ${literalNumber(Number(spec.headDim.toPrecision(6)))}`,
       advice: `state the width of one head, or use a head count that divides ${spec.hidden}`,
     };
   }
@@ -372,7 +369,7 @@ function derivation(
     isCount(spec.encoder.heads)
   ) {
     return {
-      subject: `the encoder head width is not stated, and ${key('hidden')} / ${key('encoder.heads')} = ${spec.hidden} / ${spec.encoder.heads} = ${formatNumber(Number(spec.encoder.headDim.toPrecision(6)))}`,
+      subject: `the encoder head width is not stated, and ${key('hidden')} / ${key('encoder.heads')} = ${spec.hidden} / ${spec.encoder.heads} = ${literalNumber(Number(spec.encoder.headDim.toPrecision(6)))}`,
       advice: `state the width of one encoder head, or use an encoder head count that divides ${spec.hidden}`,
     };
   }
@@ -431,7 +428,7 @@ function divisorsOf(n: number): number[] {
  * Rotary codes turn channel pairs, so `headDim * fraction` must be an even whole number
  * (`r = 2 floor(headDim * fraction / 2)` in the metric contract silently drops the rest).
  */
-function rotaryWidth(
+function checkRotaryWidth(
   spec: ModelSpec,
   locations: LocationMap,
   name: (field: string) => string,
@@ -444,16 +441,16 @@ function rotaryWidth(
   if (!isCount(headDim) || !Number.isFinite(fraction) || fraction <= 0 || fraction > 1) return;
   const width = headDim * fraction;
   // A decimal fraction is inexact in binary; the product lands within a few ulps of the decimal one.
-  const nearest = Math.round(width);
-  const whole = Math.abs(width - nearest) <= 1e-9 * Math.max(1, width);
-  if (whole && nearest % 2 === 0 && nearest >= 2) return;
+  const channels = rotatedChannels(headDim, fraction);
+  const whole = Number.isInteger(channels);
+  if (whole && channels % 2 === 0 && channels >= 2) return;
 
   const headName = spec.latent
     ? `${name('latent.ropeDim')} ${headDim}`
     : locations.headDim
       ? `${name('headDim')} ${headDim}`
       : `the head width ${headDim} (${name('hidden')} / ${name('heads')})`;
-  const used = 2 * Math.floor((whole ? nearest : width) / 2);
+  const used = rotaryWidth(headDim, fraction) ?? 0;
   const metricsNote = `the metrics use ${used} channel${used === 1 ? '' : 's'}`;
   if (fraction === 1) {
     const evens = [headDim - 1, headDim + 1].filter((d) => d >= 2);
@@ -470,15 +467,15 @@ function rotaryWidth(
     );
     return;
   }
-  const widthText = whole ? String(nearest) : formatNumber(Number(width.toPrecision(6)));
+  const widthText = whole ? String(channels) : literalNumber(Number(width.toPrecision(6)));
   const lo = 2 * Math.floor(width / 2);
   const candidates = [lo, lo + 2].filter((w) => w >= 2 && w <= headDim);
   const suggestions = candidates.map(
-    (w) => `${formatNumber(Number((w / headDim).toPrecision(6)))} (${w} channels)`,
+    (w) => `${literalNumber(Number((w / headDim).toPrecision(6)))} (${w} channels)`,
   );
   push(
     'rotary-width-odd',
     locations['position.fraction'] ? 'position.fraction' : 'headDim',
-    `${headName} × ${name('position.fraction')} ${formatNumber(fraction)} = ${widthText}, which is not an even whole number, so the rotary channels do not pair up (${metricsNote}); use a fraction giving an even width${suggestions.length ? `, such as ${suggestions.join(' or ')}` : ''}`,
+    `${headName} × ${name('position.fraction')} ${literalNumber(fraction)} = ${widthText}, which is not an even whole number, so the rotary channels do not pair up (${metricsNote}); use a fraction giving an even width${suggestions.length ? `, such as ${suggestions.join(' or ')}` : ''}`,
   );
 }

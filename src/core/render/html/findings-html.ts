@@ -3,9 +3,9 @@
  * and under a blocking one the proven change (field, value before, value after) with the metric
  * values it would produce, the alternatives, or why there is none.
  */
-import type { FileDecision, JudgedFinding } from '../../compare/decide.js';
+
 import type { LocationMap, ModelSpec } from '../../model.js';
-import type { CombinedRemedy, Remedy } from '../../remedy/types.js';
+import type { CombinedRemedy, Remedy, FileDecision, JudgedFinding } from '../../report/types.js';
 import { filePatches } from '../../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../../remedy/needs.js';
 import { SEVERITY_WORD } from '../marks.js';

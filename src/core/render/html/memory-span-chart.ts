@@ -10,7 +10,7 @@ import type { FileReport } from '../../inspect.js';
 import { servedSequences } from '../../metrics/kv-cache.js';
 import { memoryAtSpan, reserveWords, usableDeviceBytes } from '../../metrics/memory-curve.js';
 import type { ModelSpec } from '../../model.js';
-import { formatBytes, formatInteger } from '../../units.js';
+import { formatBytes, formatInteger } from '../../format/units.js';
 import { cacheDType } from '../../metrics/storage-bytes.js';
 import {
   axisBottom,

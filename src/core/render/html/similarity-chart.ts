@@ -9,7 +9,7 @@ import { area, line } from 'd3-shape';
 import type { FileReport } from '../../inspect.js';
 import { frequencyPlan } from '../../metrics/compute.js';
 import { similarityCurve, type SimilarityBucket } from '../../metrics/similarity-curve.js';
-import { formatInteger, formatNumber } from '../../units.js';
+import { formatInteger, formatNumber } from '../../format/units.js';
 import {
   axisBottom,
   axisLeft,

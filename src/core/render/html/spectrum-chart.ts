@@ -9,7 +9,7 @@ import { line } from 'd3-shape';
 import type { FileReport } from '../../inspect.js';
 import { frequencyPlan } from '../../metrics/compute.js';
 import { pairStatuses, type PairInfo } from '../../metrics/pair-status.js';
-import { formatInteger } from '../../units.js';
+import { formatInteger } from '../../format/units.js';
 import {
   axisBottom,
   axisLeft,

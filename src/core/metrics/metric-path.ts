@@ -1,6 +1,6 @@
 import { FLOAT_FORMATS } from '../model.js';
-import type { Metrics, MetricPath } from '../metrics/types.js';
-import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
+import type { Metrics, MetricPath } from './types.js';
+import { PRECISION_METRICS, SCALAR_METRICS } from './types.js';
 
 /** Every name a policy limit or a report row can use, scalar metrics first. */
 export const METRIC_PATHS: readonly MetricPath[] = [

@@ -9,8 +9,8 @@
  */
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
-import type { GateReport, JudgedFinding, Verdict } from '../compare/decide.js';
-import { METRIC_PATHS } from '../compare/metric-path.js';
+
+import { METRIC_PATHS } from '../metrics/metric-path.js';
 import {
   FLOAT_FORMATS,
   LAYER_ATTENTIONS,
@@ -23,7 +23,10 @@ import type { ModelSpec } from '../model.js';
 import { PRECISION_METRICS, SCALAR_METRICS } from '../metrics/types.js';
 import type { Metrics } from '../metrics/types.js';
 import { ReadError } from '../parse/errors.js';
+import { truncate } from '../parse/quote.js';
 import { RULES } from '../rules/catalog.js';
+import type { GateReport } from './types.js';
+import { tally, verdictOf } from './verdict.js';
 
 /** Longest report read back, in UTF-16 code units (default: `67108864`, 64 Mi). */
 export const MAX_REPORT_CHARS = 64 * 1024 * 1024;
@@ -409,7 +412,7 @@ function describe(error: ErrorObject, root: unknown): string {
     : value !== null && typeof value === 'object'
       ? 'a mapping'
       : (JSON.stringify(value) ?? 'nothing');
-  const quoted = shown.length > 60 ? `${shown.slice(0, 57)}...` : shown;
+  const quoted = truncate(shown);
   const where = error.instancePath === '' ? 'the top level' : error.instancePath;
   const expected =
     error.keyword === 'required'
@@ -418,12 +421,6 @@ function describe(error: ErrorObject, root: unknown): string {
         ? `one of ${(error.params as { allowedValues: unknown[] }).allowedValues.map((v) => JSON.stringify(v)).join(', ')}`
         : (error.message ?? error.keyword);
   return `${where} is ${quoted}; expected ${expected}`;
-}
-
-function verdictOf(findings: readonly JudgedFinding[]): Verdict {
-  if (findings.some((f) => f.counts === 'block')) return 'block';
-  if (findings.some((f) => f.counts === 'warn')) return 'warn';
-  return 'ok';
 }
 
 /** Numbers the spec types as always present were NaN when written; JSON wrote them as null. */
@@ -541,13 +538,8 @@ export function readGateJson(text: string, file: string): GateReport {
     }
   }
   const all = report.files.flatMap((decision) => decision.findings);
-  const expected: Record<'verdict' | 'blocking' | 'warnings' | 'waivedBlocks', string | number> = {
-    verdict: verdictOf(all),
-    blocking: all.filter((f) => f.counts === 'block').length,
-    warnings: all.filter((f) => f.counts === 'warn').length,
-    waivedBlocks: 0,
-  };
-  expected.waivedBlocks = all.filter((f) => f.waived).length;
+  const expected: Record<'verdict' | 'blocking' | 'warnings' | 'waivedBlocks', string | number> =
+    tally(all);
   for (const key of ['verdict', 'blocking', 'warnings', 'waivedBlocks'] as const) {
     const stated = key === 'waivedBlocks' ? report.waiver.waivedBlocks : report[key];
     const path = key === 'waivedBlocks' ? '/waiver/waivedBlocks' : `/${key}`;

@@ -1,5 +1,5 @@
 import { schemaUrl } from '../home.js';
-import { GATE_JSON_SCHEMA } from './gate-json-read.js';
+import { GATE_JSON_SCHEMA } from './read.js';
 
 type Schema = Record<string, unknown>;
 

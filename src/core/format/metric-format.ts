@@ -1,5 +1,5 @@
 import type { MetricPath } from '../metrics/types.js';
-import { formatBytes, formatCount, formatInteger, formatNumber, formatTokens } from '../units.js';
+import { formatBytes, formatCount, formatInteger, formatNumber, formatTokens } from './units.js';
 
 type Kind = 'tokens' | 'bytes' | 'count' | 'large' | 'ratio' | 'radians' | 'share' | 'flop';
 

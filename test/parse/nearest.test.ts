@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { editDistance, nearestName } from '../../src/core/policy/index.js';
+import { editDistance, nearestName } from '../../src/core/parse/nearest.js';
 
 describe('editDistance(a, b)', () => {
   test('kitten → sitting is 3, the textbook Levenshtein example (from memory)', () => {
