@@ -9,6 +9,7 @@
 import type { getOctokit } from '@actions/github';
 import type { PlannedSuggestion } from '../core/render/suggestions.js';
 import { suggestionIdOf } from '../core/render/suggestions.js';
+import { decodeUtf8Lenient } from '../core/parse/utf8.js';
 
 /** One review comment as the adapter needs it. */
 export interface ReviewComment {
@@ -235,11 +236,7 @@ export async function publishSuggestions(
   const texts = new Map<string, string>();
   for (const file of blocking) {
     const bytes = await readHead(file.path).catch(() => null);
-    if (bytes)
-      texts.set(
-        file.path,
-        new TextDecoder('utf-8', { fatal: false }).decode(bytes).replace(/^\uFEFF/, ''),
-      );
+    if (bytes) texts.set(file.path, decodeUtf8Lenient(bytes).replace(/^\uFEFF/, ''));
   }
   try {
     const patches = blocking.length > 0 ? await api.listPatches(target) : new Map<string, string>();
