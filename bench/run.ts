@@ -14,7 +14,7 @@
  *   W6  the whole gate (`diff --format json` and the action) on a generated repository of 50, 500
  *       and 3,000 changed configs with blocking findings, each paired with the I/O floor
  *       (bench/gate-workload.ts, bench/gate-repo.ts; the 500-config report is held to the
- *       digest of the report before issue 16)
+ *       digest of the report captured at commit 4b26037)
  *
  * All results must agree (counts identical, floats within 1e-9 relative; W3's two ways
  * byte-identical; W4's runs the same decision) before any ratio is printed; then
@@ -229,7 +229,7 @@ async function mainW6(): Promise<void> {
     return;
   }
   line(
-    'W6 reports agree between runs and with the action; the 500-config report matches the digest from before issue 16',
+    'W6 reports agree between runs and with the action; the 500-config report matches the digest captured at commit 4b26037',
   );
   const targets = w6Targets(rows);
   for (const [name, ok] of Object.entries(targets)) line(`${ok ? 'met   ' : 'MISSED'} ${name}`);

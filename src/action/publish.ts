@@ -11,6 +11,7 @@
 import { renderComment } from '../core/render/comment.js';
 import { readGateJson } from '../core/report/read.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
+import { decodeUtf8 } from '../core/parse/utf8.js';
 import { parseWorkflowRun, type WorkflowRunInfo } from './event.js';
 import type { GitHubClient } from '../adapters/github-rest.js';
 import { publishComment } from './report-comment.js';
@@ -68,16 +69,14 @@ async function readReport(deps: PublishDeps, path: string): Promise<GateReport> 
       `The report to publish could not be read: ${error instanceof Error ? error.message : String(error)}; expected the JSON report the first workflow uploaded (input publish-report).`,
     );
   }
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-  } catch {
+  const decoded = decodeUtf8(bytes);
+  if (!decoded.ok) {
     throw new PublishError(
       `${path} is not UTF-8 text; expected the JSON report the first workflow uploaded (input publish-report).`,
     );
   }
   try {
-    return readGateJson(text, path);
+    return readGateJson(decoded.text, path);
   } catch (error) {
     throw new PublishError(
       `Refusing to publish: ${error instanceof Error ? error.message : String(error)}.`,

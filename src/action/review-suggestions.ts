@@ -13,6 +13,7 @@ import {
 } from '../adapters/github-rest.js';
 import type { PlannedSuggestion } from '../core/render/suggestions.js';
 import { suggestionIdOf } from '../core/render/suggestions.js';
+import { decodeUtf8Lenient } from '../core/parse/utf8.js';
 
 /** Lines of the head version a unified diff shows (added or context lines): where review comments may go. */
 export function diffRightLines(patch: string): Set<number> {
@@ -124,11 +125,7 @@ export async function publishSuggestions(
   const texts = new Map<string, string>();
   for (const file of blocking) {
     const bytes = await readHead(file.path).catch(() => null);
-    if (bytes)
-      texts.set(
-        file.path,
-        new TextDecoder('utf-8', { fatal: false }).decode(bytes).replace(/^\uFEFF/, ''),
-      );
+    if (bytes) texts.set(file.path, decodeUtf8Lenient(bytes).replace(/^\uFEFF/, ''));
   }
   try {
     const patches = blocking.length > 0 ? await api.listPatches(target) : new Map<string, string>();

@@ -1,6 +1,7 @@
 import { parseArgs } from 'node:util';
 import { inspectModel, toFailure, type FileFailure, type FileReport } from '../core/inspect.js';
 import { remedyFileReport } from '../core/remedy/attach.js';
+import { createScanMemo } from '../core/metrics/scan-memo.js';
 import { decodeText } from '../core/parse/source.js';
 import { renderInspectJson } from '../core/render/inspect-json.js';
 import { renderInspectText } from '../core/render/inspect-text.js';
@@ -42,6 +43,7 @@ export async function runInspect(args: string[], files: FileSource, io: Console)
     return 2;
   }
   const overrides = servingPatch(values);
+  const memo = createScanMemo();
   const reports: FileReport[] = [];
   const failures: FileFailure[] = [];
   // Reading runs ahead of measuring by a few files, so the disk waits overlap the computing.
@@ -56,8 +58,11 @@ export async function runInspect(args: string[], files: FileSource, io: Console)
     pending[i] = undefined; // the bytes are released once measured
     try {
       const text = decodeText(await reading, path);
-      // Blocking findings get their remedies, judged with the built-in rules.
-      reports.push(remedyFileReport(inspectModel(text, path, { at: values.at, overrides })));
+      // Blocking findings get their remedies, judged with the built-in rules; one memo for the
+      // run, so a scan the file and its proofs (or several files) share is done once.
+      reports.push(
+        remedyFileReport(inspectModel(text, path, { at: values.at, overrides, memo }), memo),
+      );
     } catch (error) {
       failures.push(toFailure(path, error));
     }

@@ -200,13 +200,17 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
   let deleted = relevant.filter((c) => c.status === 'deleted');
   const judged = relevant.filter((c) => c.status !== 'deleted');
 
-  // Head of every file, then base of every file not added: one read for the whole run.
+  // Head of every file, then base of every file not added, then base of every deleted file (a
+  // move shows as one deleted and one added file: they are paired below): one read for the run.
   const requests: ContentRequest[] = [
     ...judged.map((change) => ({ ref: head, path: change.path })),
     ...judged
       .filter((change) => change.status !== 'added')
       .map((change) => ({ ref: base, path: change.previousPath ?? change.path })),
   ];
+  const deletedFrom = requests.length;
+  if (judged.length > 0)
+    requests.push(...deleted.map((change) => ({ ref: base, path: change.path })));
   const answers: (Uint8Array | null | Error)[] =
     requests.length === 0 ? [] : await readAll(source, requests, request.concurrency ?? 8);
   const configs: ChangedConfig[] = [];
@@ -270,14 +274,10 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     (c) => c.change.status === 'added' && c.head !== null && 'spec' in c.head,
   );
   if (arrived.length > 0 && deleted.length > 0) {
-    const answers = await readAll(
-      source,
-      deleted.map((change) => ({ ref: base, path: change.path })),
-      request.concurrency ?? 8,
-    );
     const gone = new Map<string, FileReport>();
     deleted.forEach((change, i) => {
-      const answer = answers[i]!;
+      const answer = answers[deletedFrom + i]!;
+      answers[deletedFrom + i] = null;
       if (answer instanceof Error) {
         throw new BaseUnreadableError(
           `${change.path} (deleted) could not be read at base ${base}: ${answer.message}. It may have moved to an added file, which cannot be judged against it, so the check fails until it can be read (re-run the job)`,

@@ -91,3 +91,59 @@ describe('runGate(source, request) with a source that offers readMany', () => {
     ).rejects.toThrow(/could not be read at base [0-9a-f]{40}: the batch broke/);
   });
 });
+
+describe('runGate(source, request) on a move git does not see as one (issue 13, point 8)', () => {
+  it('reads the deleted file in the same readMany call as every other version, and pairs the move', async () => {
+    const FROM = 'models/chat/config.json';
+    const TO = 'archive/chat-long/config.json';
+    // The same keys on one line, in reverse order: git's similarity score does not pair them.
+    const minified = JSON.stringify(
+      Object.fromEntries(
+        Object.entries(
+          JSON.parse(checkpointConfig({ max_position_embeddings: 16384 })) as Record<
+            string,
+            unknown
+          >,
+        ).reverse(),
+      ),
+    );
+    const moved = scenarioRepo(
+      { [FROM]: checkpointConfig(), 'models/other/config.json': checkpointConfig() },
+      { [TO]: minified, 'models/other/config.json': checkpointConfig({ rope_theta: 20000 }) },
+    );
+    try {
+      const git = createGitReader(moved.dir);
+      const changes = await git.changedFiles(moved.base, moved.head);
+      expect(changes.map((c) => c.status).sort()).toEqual(['added', 'deleted', 'modified']);
+      const batches: string[][] = [];
+      const report = await runGate(
+        {
+          read: (ref, path) => git.show(ref, path),
+          readMany: (requests: readonly ContentRequest[]) => {
+            batches.push(
+              requests.map((r) => `${r.ref === moved.base ? 'base' : 'head'}:${r.path}`),
+            );
+            return git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path })));
+          },
+        },
+        { base: moved.base, head: moved.head, changes, policyPath: '.github/context-reach.yml' },
+      );
+      // One batch: both heads, the modified file's base and the deleted file's base.
+      expect(batches).toEqual([
+        [
+          `head:${TO}`,
+          'head:models/other/config.json',
+          'base:models/other/config.json',
+          `base:${FROM}`,
+        ],
+      ]);
+      expect(report.files.find((f) => f.path === TO)).toMatchObject({
+        status: 'renamed',
+        previousPath: FROM,
+      });
+      expect(report.deleted).toEqual([]);
+    } finally {
+      moved.remove();
+    }
+  });
+});

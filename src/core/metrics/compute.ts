@@ -47,6 +47,7 @@ import { visionParams } from './vision-params.js';
 import { tokenBudget } from './token-budget.js';
 import { exposedPairs, unturnedPairs, wavelengthRange } from './wavelengths.js';
 import { viaMemo, type ScanMemo } from './scan-memo.js';
+import { MAX_SCAN_WORK } from './scan-limits.js';
 
 export { evaluationSpan, trainedSpan, tunedSpan } from './spans.js';
 
@@ -108,21 +109,23 @@ export interface PositionalMetrics {
 
 /**
  * The positional metrics of a frequency plan (null: no rotary frequencies) over evaluation span
- * `span` and trained span `trained`, both in tokens: a pure function of exactly these inputs, so
- * a run computes it once per distinct code and span (see `scan-memo.ts`).
+ * `span` and trained span `trained`, both in tokens, the similarity scan within `workLimit`
+ * (default: `MAX_SCAN_WORK`): a pure function of exactly these inputs, so a run computes it once
+ * per distinct code and span (see `scan-memo.ts`).
  */
 export function positionalMetrics(
   theta: Float64Array | null,
   scaled: Float64Array | null,
   span: number | null,
   trained: number | null,
+  workLimit: number = MAX_SCAN_WORK,
 ): PositionalMetrics {
   const precision = {} as Record<FloatFormat, PrecisionMetrics>;
   for (const format of ['fp32', 'bf16', 'fp16'] as const)
     precision[format] = numberFormatMetrics(format, scaled, span);
   return {
     range: scaled ? wavelengthRange(scaled) : null,
-    similarity: similarityScan(scaled, span),
+    similarity: similarityScan(scaled, span, workLimit),
     precision,
     unturnedPairs: scaled && trained !== null ? unturnedPairs(scaled, trained) : null,
     exposedPairs:
@@ -133,11 +136,69 @@ export function positionalMetrics(
 }
 
 /**
+ * Similarity-scan work (units of `SCAN_WORK`, `scan-limits.ts`) a caller lets its scans spend in
+ * all: each scan runs within what is left (and `MAX_SCAN_WORK`) and its work is taken off.
+ * `cut` turns true when a scan stopped because the budget, not `MAX_SCAN_WORK`, ran out.
+ */
+export interface ScanBudget {
+  left: number;
+  cut: boolean;
+  /**
+   * Positional metrics already paid for (the judged file's own, from the run's memo): handing
+   * them out again costs nothing, so they are not charged (default: none).
+   */
+  free?: PositionalMetrics;
+}
+
+/**
+ * The positional metrics of `spec` through `memo` (the similarity scan within `limit`, default
+ * `MAX_SCAN_WORK`): what `computeMetrics` hands out, the same object for the same inputs.
+ */
+export function positionalMetricsOf(spec: ModelSpec, memo?: ScanMemo): PositionalMetrics {
+  const span = evaluationSpan(spec);
+  const trained = trainedSpan(spec);
+  return positionalOf(frequencyPlan(spec, span, trained), span, trained, memo, undefined);
+}
+
+function positionalOf(
+  plan: FrequencyPlan | null,
+  span: number | null,
+  trained: number | null,
+  memo: ScanMemo | undefined,
+  limit: number | undefined,
+): PositionalMetrics {
+  const theta = plan ? plan.theta : null;
+  const scaled = plan ? plan.scaled : null;
+  // The limit is an argument only when it is not the default, so full scans share memo keys.
+  return limit === undefined
+    ? viaMemo(memo, 'positionalMetrics', positionalMetrics, theta, scaled, span, trained)
+    : viaMemo(memo, 'positionalMetrics', positionalMetrics, theta, scaled, span, trained, limit);
+}
+
+/** The work limit a scan gets under `budget`: undefined (the default, `MAX_SCAN_WORK`) when it has that much. */
+function budgetLimit(budget: ScanBudget | undefined): number | undefined {
+  return budget === undefined || budget.left >= MAX_SCAN_WORK
+    ? undefined
+    : Math.max(0, budget.left);
+}
+
+/** Takes a scan's work off `budget`, noting a stop the budget caused. */
+function charge(
+  budget: ScanBudget | undefined,
+  limit: number | undefined,
+  similarity: { work: number; complete: boolean },
+): void {
+  if (budget === undefined) return;
+  budget.left -= similarity.work;
+  if (limit !== undefined && !similarity.complete) budget.cut = true;
+}
+
+/**
  * Every metric of METRICS.md for one spec; null where a metric does not apply or its inputs are
  * degenerate. With a `memo`, the positional metrics are computed once per distinct input within
- * the memo's run.
+ * the memo's run; with a `budget`, the similarity scans spend at most what is left of it.
  */
-export function computeMetrics(spec: ModelSpec, memo?: ScanMemo): Metrics {
+export function computeMetrics(spec: ModelSpec, memo?: ScanMemo, budget?: ScanBudget): Metrics {
   const declared = declaredSpan(spec);
   const served = servedSpan(spec);
   const span = evaluationSpan(spec);
@@ -145,15 +206,9 @@ export function computeMetrics(spec: ModelSpec, memo?: ScanMemo): Metrics {
   const reachTokens = reach(spec, trained, declared);
 
   const plan = frequencyPlan(spec, span, trained);
-  const positional = viaMemo(
-    memo,
-    'positionalMetrics',
-    positionalMetrics,
-    plan ? plan.theta : null,
-    plan ? plan.scaled : null,
-    span,
-    trained,
-  );
+  const limit = budgetLimit(budget);
+  const positional = positionalOf(plan, span, trained, memo, limit);
+  if (positional !== budget?.free) charge(budget, limit, positional.similarity);
   const { range, similarity } = positional;
   // A copy per report, so no two reports share (and could change) one object.
   const precision = {} as Record<FloatFormat, PrecisionMetrics>;
@@ -208,7 +263,13 @@ export function computeMetrics(spec: ModelSpec, memo?: ScanMemo): Metrics {
     weightBytesPerDevice: deviceWeights,
     cachePerTokenBytesPerDevice: cachePerTokenBytesPerDevice(spec),
     memoryBytesPerDevice: memoryBytesPerDevice(deviceWeights, perSequence, servedSequences(spec)),
-    layerKinds: layerKindMetrics(spec, span, trained, { plan, range, similarity, precision }),
+    layerKinds: layerKindMetrics(
+      spec,
+      span,
+      trained,
+      { plan, range, similarity, precision },
+      budget,
+    ),
   };
 }
 
@@ -230,6 +291,7 @@ export function layerKindMetrics(
   span: number | null,
   trained: number | null,
   top: TopLevel,
+  budget?: ScanBudget,
 ): LayerKindMetrics[] | null {
   const groups = layerGroups(spec);
   if (groups === null) return null;
@@ -265,12 +327,13 @@ export function layerKindMetrics(
       }
     }
     const range = plan === null ? null : setting ? wavelengthRange(plan.scaled) : top.range;
-    const similarity =
-      plan === null
-        ? similarityScan(null, null)
-        : !setting && visible === span
-          ? top.similarity
-          : similarityScan(plan.scaled, visible);
+    let similarity = top.similarity;
+    if (plan === null) similarity = similarityScan(null, null);
+    else if (setting || visible !== span) {
+      const limit = budgetLimit(budget);
+      similarity = similarityScan(plan.scaled, visible, limit);
+      charge(budget, limit, similarity);
+    }
     return {
       attention: g.attention,
       positionCode: ownCode,

@@ -36,10 +36,27 @@ export function scanAllowed(pairs: number, span: number): boolean {
 export const SCAN_WORK = { offset: 16, exactPair: 200, boundPair: 40 } as const;
 
 /**
- * Work units one similarity scan may spend: `2^30`, about 0.6–1.2 s on one core of the
- * development machine. The costliest plausible config of a measured grid (head size 64–256,
- * rotary fraction 1/4–1, base 1e4–1e9, scaling factor 1–64, spans 2^17–2^27) needs 0.83 of it
- * (128 pairs, base 1e8, factor 16, 2^27 tokens); few pairs at spans near 2^31 can need a hundred times more,
- * so past it the scan stops and says so (`scan-incomplete`) instead of running for minutes.
+ * Work units one similarity scan may spend: `2^28`, about 0.15–0.3 s on one core of the
+ * development machine, so that one file with its remedy search stays within half a second of
+ * CPU (issue 16; `MAX_REMEDY_SCAN_WORK` bounds the search). Of a measured grid of 1,260
+ * plausible configs (head size 64–256, rotary fraction 1/4–1, base 1e4–1e9, linear factor 1–64,
+ * spans 2^17–2^27), 12 need more (all 128 pairs at bases 1e8–1e9, up to 0.83 × 2^30: the slow
+ * pairs keep every interval bound above the floor near k = 1); few pairs at spans near 2^31
+ * can need a hundred times more. Past it the scan stops and says so (`scan-incomplete`, a limit
+ * on the missing metric counting as crossed) instead of running for seconds.
  */
-export const MAX_SCAN_WORK = 2 ** 30;
+export const MAX_SCAN_WORK = 2 ** 28;
+
+/**
+ * Work units the similarity scans of one file's remedy search may spend in all (proofs, the
+ * values a search compares, the rotary-base criterion), charged as they run: `2^28`. With
+ * `MAX_SCAN_WORK` for the file's own scan, a judgement with its remedies scans at most `2^29`
+ * units (about 0.3–0.5 s); a search that runs out says its remedy was not proven.
+ */
+export const MAX_REMEDY_SCAN_WORK = 2 ** 28;
+
+/**
+ * Work units the plotted similarity curve of the HTML report may spend (`similarity-curve.ts`):
+ * `2^30`, about a second, 13 million tokens at 64 pairs; the page says when it is not drawn.
+ */
+export const MAX_CURVE_WORK = 2 ** 30;

@@ -19,12 +19,28 @@ export interface ScanMemo {
   readonly misses: number;
 }
 
-/** A typed array's bytes as 32-bit words: exact, NaN payloads and the sign of zero included. */
+/**
+ * A typed array's bytes, exactly (NaN payloads and the sign of zero included), as a string of
+ * one UTF-16 code unit per 16-bit word (per byte when the view is not 2-byte aligned), after its
+ * length: the length makes the key unambiguous inside a longer one, and no number is printed.
+ */
 function bytesKey(view: ArrayBufferView): string {
-  if (view.byteLength % 4 === 0 && view.byteOffset % 4 === 0)
-    return `w${new Uint32Array(view.buffer, view.byteOffset, view.byteLength / 4).join(',')}`;
-  return `b${new Uint8Array(view.buffer, view.byteOffset, view.byteLength).join(',')}`;
+  const aligned = view.byteLength % 2 === 0 && view.byteOffset % 2 === 0;
+  const units = aligned
+    ? new Uint16Array(view.buffer, view.byteOffset, view.byteLength / 2)
+    : new Uint8Array(view.buffer, view.byteOffset, view.byteLength);
+  let out = '';
+  for (let i = 0; i < units.length; i += BYTES_KEY_CHUNK) {
+    out += String.fromCharCode.apply(
+      null,
+      units.subarray(i, i + BYTES_KEY_CHUNK) as unknown as number[],
+    );
+  }
+  return `${aligned ? 'h' : 'b'}${view.byteLength}:${out}`;
 }
+
+/** Code units turned into a string per call (well under engines' argument limits). */
+const BYTES_KEY_CHUNK = 8192;
 
 /**
  * A string naming `value` exactly: equal strings for equal inputs of a pure computation. Numbers

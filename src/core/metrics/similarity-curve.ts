@@ -18,7 +18,7 @@ import {
   fillCosineSums,
   planCosineSums,
 } from './cosine-sum-blocks.js';
-import { MAX_SCAN_WORK, SCAN_WORK, scanAllowed } from './scan-limits.js';
+import { MAX_CURVE_WORK, SCAN_WORK, scanAllowed } from './scan-limits.js';
 import { cosineSum } from './similarity-scan.js';
 
 /** Buckets of a curve when the caller asks for none in particular (default: `480`, about one per pixel). */
@@ -65,7 +65,7 @@ export function bucketEdges(
 /**
  * ratio per bucket: min and max of `S(k)` over each bucket of k in [1, T) (see the file doc);
  * null when `T < 2`, there are no pairs, or the scan is past the bounds of `scan-limits.ts`:
- * the span and pair bounds, or `MAX_SCAN_WORK` counted as the similarity scan counts it (every
+ * the span and pair bounds, or `MAX_CURVE_WORK` counted as the similarity scan counts it (every
  * offset filled, so known before starting, plus each exact re-evaluation).
  * (buckets default: `DEFAULT_CURVE_BUCKETS`; spacing default: `log`)
  */
@@ -74,7 +74,7 @@ export function similarityCurve(
   span: number | null,
   buckets: number = DEFAULT_CURVE_BUCKETS,
   spacing: BucketSpacing = 'log',
-  workLimit: number = MAX_SCAN_WORK,
+  workLimit: number = MAX_CURVE_WORK,
 ): SimilarityBucket[] | null {
   if (theta === null || theta.length === 0 || span === null || !scanAllowed(theta.length, span))
     return null;

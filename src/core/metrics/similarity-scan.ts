@@ -69,8 +69,10 @@ export interface SimilarityResult {
   separationFloor: number | null;
   separationFloorOffset: number | null;
   discriminationSpan: number | null;
-  /** False when the scan stopped at `MAX_SCAN_WORK` before the end of the span. */
+  /** False when the scan stopped at its work limit (`MAX_SCAN_WORK`) before the end of the span. */
   complete: boolean;
+  /** Work spent, in the units of `SCAN_WORK` (0 when nothing was scanned). */
+  work: number;
 }
 
 /**
@@ -159,25 +161,33 @@ export function scanSimilarityRange(
 /**
  * 0..2, tokens, tokens: `separationFloor`, `separationFloorOffset`, `discriminationSpan` over
  * k in [1, T) (METRICS.md); all null when `T < 2`, there are no pairs, or the scan is past
- * `MAX_SCAN_SPAN` / `MAX_SCAN_ELEMENTS`. When the scan stops at `MAX_SCAN_WORK` the floor and
+ * `MAX_SCAN_SPAN` / `MAX_SCAN_ELEMENTS`. When the scan stops at `workLimit` (default:
+ * `MAX_SCAN_WORK`) the floor and
  * its offset are null and `complete` is false; a first negative sum found before the stop is
  * still exact (offsets are decided in order), otherwise it is null too.
  */
-export function similarityScan(theta: Float64Array | null, span: number | null): SimilarityResult {
+export function similarityScan(
+  theta: Float64Array | null,
+  span: number | null,
+  workLimit: number = MAX_SCAN_WORK,
+): SimilarityResult {
   const none: SimilarityResult = {
     separationFloor: null,
     separationFloorOffset: null,
     discriminationSpan: null,
     complete: true,
+    work: 0,
   };
   if (theta === null || span === null || span < 2 || !scanAllowed(theta.length, span)) return none;
-  const r = scanSimilarityRange(theta, 1, span);
+  const r = scanSimilarityRange(theta, 1, span, workLimit);
   if (r === null) return none;
-  if (!r.complete) return { ...none, discriminationSpan: r.negative, complete: false };
+  if (!r.complete)
+    return { ...none, discriminationSpan: r.negative, complete: false, work: r.work };
   return {
     separationFloor: r.floor,
     separationFloorOffset: r.offset,
     discriminationSpan: r.negative,
     complete: true,
+    work: r.work,
   };
 }

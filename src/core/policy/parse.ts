@@ -3,8 +3,8 @@
  * key and line of every problem. The gate fails closed on the error, so nothing here guesses.
  */
 import picomatch from 'picomatch';
-import { LineCounter, isScalar, parseDocument, visit } from 'yaml';
-import type { Document } from 'yaml';
+import { isScalar, visit } from 'yaml';
+import type { Document, LineCounter } from 'yaml';
 import type { ErrorObject } from 'ajv';
 import type { ServingPatch, SourceLocation } from '../model.js';
 import { DEFAULT_EXCLUDE, DEFAULT_FILES, MAX_POLICY_CHARS } from './defaults.js';
@@ -13,6 +13,13 @@ import { formatKeyPath, lineOf, nodeAt } from './locate.js';
 import type { KeyPath } from './locate.js';
 import { nearestName } from '../parse/nearest.js';
 import { literalNumber, quoteText } from '../parse/quote.js';
+import {
+  MAX_ALIASES,
+  MAX_ENTRIES,
+  MAX_TOKENS,
+  YamlLimitError,
+  composeYaml,
+} from '../parse/yaml.js';
 import { validatePolicyValue } from './schema.js';
 import type {
   LimitSetting,
@@ -28,9 +35,6 @@ import type {
 
 /** Problems listed in one error at most; the rest are counted. */
 const MAX_PROBLEMS = 20;
-
-/** Aliases one policy may expand; a real policy needs a handful, an expansion bomb needs thousands. */
-const MAX_ALIASES = 100;
 
 /** Offset of the document's first alias and the top-level key that holds it, or null without aliases. */
 function firstAlias(doc: Document): { offset: number; key: string | null } | null {
@@ -419,6 +423,20 @@ function recordLocations(
     record(named(`rules.${id}`), [...prefix, 'rules', id]);
 }
 
+/** What a policy past one of the YAML pipeline's bounds is told. */
+function limitMessage(error: YamlLimitError): string {
+  switch (error.limit) {
+    case 'nesting':
+      return 'nested too deeply; expected a policy a few levels deep';
+    case 'documents':
+      return 'not valid YAML: holds more than one YAML document; a policy holds one';
+    case 'tokens':
+      return `cannot be read as YAML: holds more than ${MAX_TOKENS} syntax tokens; a policy is a short file`;
+    case 'entries':
+      return `cannot be read as YAML: holds more than ${MAX_ENTRIES} keys and list items; a policy is a short file`;
+  }
+}
+
 /**
  * Parses and checks a policy file (YAML; JSON is YAML too). Pure: the caller reads the file.
  * Throws `PolicyError` listing every problem with file, key and line.
@@ -437,16 +455,19 @@ export function parsePolicy(text: string, path: string): Policy {
       },
     ]);
   }
-  const lines = new LineCounter();
+  let lines: LineCounter;
   let doc: Document;
   let data: unknown;
   try {
-    doc = parseDocument(text, {
-      lineCounter: lines,
-      prettyErrors: false,
-      uniqueKeys: true,
-      strict: true,
-    });
+    // The project's one YAML pipeline, with its bounds; aliases within MAX_ALIASES (toJS below).
+    try {
+      ({ doc, lineCounter: lines } = composeYaml(text, { uniqueKeys: true }));
+    } catch (error) {
+      if (error instanceof YamlLimitError) {
+        return fail([{ file: path, line: error.line, key: null, message: limitMessage(error) }]);
+      }
+      throw error;
+    }
     if (doc.errors.length > 0) {
       const seen = new Set<string>();
       fail(
@@ -470,7 +491,7 @@ export function parsePolicy(text: string, path: string): Policy {
     return fail([
       {
         file: path,
-        line: alias ? lines.linePos(alias.offset).line : null,
+        line: alias ? lines!.linePos(alias.offset).line : null,
         key: alias?.key ?? null,
         message: `cannot be read as YAML: ${reason}${alias ? ` (expanding aliases from here; at most ${MAX_ALIASES} are followed)` : ''}`,
       },

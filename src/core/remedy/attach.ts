@@ -7,7 +7,7 @@ import { BUILT_IN_JUDGING } from '../policy/judging.js';
 import { isMetricPath, metricValue } from '../metrics/metric-path.js';
 import type { FileReport } from '../inspect.js';
 import type { Finding } from '../model.js';
-import type { ScanMemo } from '../metrics/scan-memo.js';
+import { createScanMemo, type ScanMemo } from '../metrics/scan-memo.js';
 import { applyChange, changeEntries } from './apply-change.js';
 import { proofCost, proposeRemedy } from './propose.js';
 import { prove, remedyContext, type RemedyContext } from './prove.js';
@@ -110,7 +110,9 @@ export function remedyFileReport(
     null,
     BUILT_IN_JUDGING,
     { status: 'added', path: report.path, previousPath: null },
-    memo,
+    // A memo of its own when none is given: proofs that keep the file's positional inputs reuse
+    // one scan instead of repeating it.
+    memo ?? createScanMemo(),
   );
   const findings: RemediedFinding[] = report.findings.map((f) =>
     f.severity === 'block' ? { ...f, ...proposeRemedy(ctx, f) } : f,

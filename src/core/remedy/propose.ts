@@ -18,6 +18,7 @@ import { usableDeviceBytes } from '../metrics/memory-curve.js';
 import { firstNegativeOffset } from '../metrics/first-negative.js';
 import { baseFrequencies } from '../metrics/frequencies.js';
 import { similarityScan } from '../metrics/similarity-scan.js';
+import { MAX_REMEDY_SCAN_WORK, MAX_SCAN_WORK } from '../metrics/scan-limits.js';
 import { viaMemo, type ScanMemo } from '../metrics/scan-memo.js';
 import { positiveCount } from '../metrics/sizes.js';
 import { evaluationSpan, trainedSpan } from '../metrics/spans.js';
@@ -79,11 +80,20 @@ type Resolves = (spec: ModelSpec) => boolean;
 
 const none = (whyNot: string): KindOutcome => ({ remedy: null, whyNot });
 
-/** The value of a metric for a changed spec: cheaply when it needs no scan, else measured in full. */
-function valueOf(spec: ModelSpec, metric: string, memo: ScanMemo | undefined): number | null {
+/** The value of a metric for a changed spec: cheaply when it needs no scan, else measured in full (within the search's scan budget). */
+function valueOf(spec: ModelSpec, metric: string, ctx: RemedyContext): number | null {
   const light = lightMetric(spec, metric);
   if (light !== undefined) return light;
-  return isMetricPath(metric) ? metricValue(computeMetrics(spec, memo), metric) : null;
+  return isMetricPath(metric)
+    ? metricValue(computeMetrics(spec, ctx.memo, ctx.scans), metric)
+    : null;
+}
+
+/** Why a kind stops once the file's scan budget is spent (`MAX_REMEDY_SCAN_WORK`). */
+function budgetSpent(what: string): KindOutcome {
+  return none(
+    `${what} was not proven: the remedy search of this file spent its ${formatInteger(MAX_REMEDY_SCAN_WORK)} units of similarity-scan work`,
+  );
 }
 
 function blockerText(id: string): string {
@@ -162,6 +172,7 @@ function proveFirst(
   let lastBreaks: string[] = [];
   let proofs = 0;
   for (const change of candidates.slice(0, MAX_PROOFS_PER_KIND)) {
+    if (ctx.scans.cut || ctx.scans.left <= 0) return budgetSpent(what);
     const cost = proofCost(applyChange(ctx.head.spec, change));
     if (cost > target.work.left || cost > ctx.work.left) {
       return none(
@@ -172,6 +183,8 @@ function proveFirst(
     ctx.work.left -= cost;
     proofs += 1;
     const proof = prove(ctx, target, change);
+    // A proof whose scan the budget cut short proves nothing either way.
+    if (ctx.scans.cut) return budgetSpent(what);
     const breaks = proof.passes ? ownBreaks(proof, shown) : [];
     if (proof.passes && breaks.length === 0)
       return { remedy: remedyOf(change, proof, shown, target, costOf), whyNot: null };
@@ -432,6 +445,11 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
   const criterion = (base: number): BaseTrial => {
     const theta = scaledAt(base);
     if (theta === null) return { passes: false, cost: 1 };
+    // The file's scan budget spent: no more trials (the search then stops at its caps).
+    if (ctx.scans.cut || ctx.scans.left <= 0) {
+      ctx.scans.cut = true;
+      return { passes: false, cost: Infinity };
+    }
     if (onlyMin) {
       const found = viaMemo(
         ctx.memo,
@@ -441,9 +459,17 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
         1,
         Math.min(T, Math.ceil(limit.min as number)),
       );
+      ctx.scans.left -= found.elements;
       return { passes: found.offset === null, cost: found.elements };
     }
-    const scan = viaMemo(ctx.memo, 'similarityScan', similarityScan, theta, T);
+    // Within what is left of the budget (the limit an argument only when it is not the default).
+    const workLimit = ctx.scans.left >= MAX_SCAN_WORK ? undefined : ctx.scans.left;
+    const scan =
+      workLimit === undefined
+        ? viaMemo(ctx.memo, 'similarityScan', similarityScan, theta, T)
+        : viaMemo(ctx.memo, 'similarityScan', similarityScan, theta, T, workLimit);
+    ctx.scans.left -= scan.work;
+    if (workLimit !== undefined && !scan.complete) ctx.scans.cut = true;
     // A scan stopped at its work limit proves nothing: the base does not pass on it.
     if (!scan.complete) return { passes: false, cost: theta.length * T };
     const value = scan[metric as 'discriminationSpan' | 'separationFloor'];
@@ -453,6 +479,10 @@ function baseKind(ctx: RemedyContext, target: Target): KindOutcome {
     };
   };
   const search = searchRotaryBase(code.base, direction, criterion);
+  if (ctx.scans.cut)
+    return budgetSpent(
+      `a rotary base ${direction === 'up' ? 'above' : 'below'} ${formatNumber(code.base, 6)}`,
+    );
   if (search.base === null) {
     return none(
       `no rotary base ${direction === 'up' ? 'above' : 'below'} ${formatNumber(code.base, 6)} meets the ${metric} limit within the search's caps (${search.evaluations} scans)`,
@@ -738,7 +768,7 @@ const RULE_REMEDIES: Readonly<Partial<Record<RuleId, RuleRemedy>>> = {
       const { limit, metric } = target;
       if (!limit || !metric) return null;
       return (spec) =>
-        checkLimit(limit, target.baseValue, valueOf(spec, metric, ctx.memo)).crossed.length === 0;
+        checkLimit(limit, target.baseValue, valueOf(spec, metric, ctx)).crossed.length === 0;
     },
   },
 };

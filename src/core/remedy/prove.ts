@@ -9,7 +9,8 @@ import { decideFile } from '../compare/decide.js';
 import type { Judging } from '../policy/judging.js';
 import { readerFindings } from '../compare/assumed.js';
 import { sortFindings, type FileReport } from '../inspect.js';
-import { computeMetrics } from '../metrics/compute.js';
+import { computeMetrics, positionalMetricsOf, type ScanBudget } from '../metrics/compute.js';
+import { MAX_REMEDY_SCAN_WORK } from '../metrics/scan-limits.js';
 import type { Metrics } from '../metrics/types.js';
 import type { ScanMemo } from '../metrics/scan-memo.js';
 import type { Finding, ModelSpec } from '../model.js';
@@ -44,6 +45,12 @@ export interface RemedyContext {
   findingsBefore: Set<string>;
   /** pair·offsets the proofs of this file may still scan (see `MAX_FILE_PROOF_WORK`). */
   work: { left: number };
+  /**
+   * Similarity-scan work the whole search of this file may still spend, charged as scans run
+   * (`MAX_REMEDY_SCAN_WORK`): it bounds what the estimate above cannot see, few fast pairs whose
+   * scans cost far more than their pairs times their span.
+   */
+  scans: ScanBudget;
   /** The run's memory of positional computations, shared with the gate (default: none). */
   memo?: ScanMemo;
 }
@@ -83,6 +90,13 @@ export function remedyContext(
     blockingBefore: blockingCounts(decision),
     findingsBefore: new Set(decision.findings.map(identityOf)),
     work: { left: MAX_FILE_PROOF_WORK },
+    // The head's own positional metrics are paid for (the run's memo holds them): proofs that
+    // leave them as they are do not spend the budget.
+    scans: {
+      left: MAX_REMEDY_SCAN_WORK,
+      cut: false,
+      ...(memo ? { free: positionalMetricsOf(head.spec, memo) } : {}),
+    },
     ...(memo ? { memo } : {}),
   };
 }
@@ -105,7 +119,7 @@ export function judgeSpec(
   ctx: RemedyContext,
   spec: ModelSpec,
 ): { metrics: Metrics; decision: FileDecision } {
-  const metrics = computeMetrics(spec, ctx.memo);
+  const metrics = computeMetrics(spec, ctx.memo, ctx.scans);
   const findings = sortFindings([
     ...ctx.readFindings,
     ...specFindings(spec, ctx.head.locations),

@@ -35,7 +35,7 @@ export interface SimilaritySeries {
 
 /**
  * The curve of one version; null without frequencies, a span of at least 2, or past the scan
- * bounds (the curve visits every offset: `MAX_SCAN_WORK` of `scan-limits.ts`, about a second, is
+ * bounds (the curve visits every offset: `MAX_CURVE_WORK` of `scan-limits.ts`, about a second, is
  * 13 million tokens at 64 pairs); the page then says it is not drawn.
  */
 export function similarityOf(report: FileReport | null): SimilaritySeries | null {
