@@ -6,6 +6,7 @@ import picomatch from 'picomatch';
 import { LineCounter, isScalar, parseDocument, visit } from 'yaml';
 import type { Document } from 'yaml';
 import type { ErrorObject } from 'ajv';
+import { nullRecord } from '../null-record.js';
 import type { ServingPatch, SourceLocation } from '../model.js';
 import { DEFAULT_EXCLUDE, DEFAULT_FILES, MAX_POLICY_CHARS } from './defaults.js';
 import { GLOB_OPTIONS, MAX_GLOB_LENGTH, MAX_GLOB_STARS } from './resolve.js';
@@ -64,7 +65,8 @@ export class PolicyError extends Error {
   readonly problems: readonly PolicyProblem[];
 
   constructor(problems: readonly PolicyProblem[]) {
-    const first = problems[0];
+    const [first] = problems;
+    if (first === undefined) throw new TypeError('a PolicyError needs at least one problem');
     const more =
       problems.length > 1
         ? ` (and ${problems.length - 1} more: ${problems.slice(1).map(formatProblem).join('; ')})`
@@ -84,7 +86,12 @@ function quote(value: unknown): string {
   if (Array.isArray(value)) return 'a list';
   if (typeof value === 'object') return 'a mapping';
   if (typeof value === 'number') return Object.is(value, -0) ? '-0' : String(value);
-  const text = typeof value === 'string' ? JSON.stringify(value) : String(value);
+  const text =
+    typeof value === 'string'
+      ? JSON.stringify(value)
+      : typeof value === 'boolean' || typeof value === 'bigint' || value === undefined
+        ? String(value)
+        : typeof value;
   return text.length > 80 ? `${text.slice(0, 77)}..."` : text;
 }
 
@@ -241,15 +248,12 @@ function yamlMessage(
   offsets: [number, number],
 ): string {
   if (code === 'DUPLICATE_KEY') {
-    const key = text
-      .slice(offsets[0], offsets[0] + 200)
-      .split(/[:\n]/)[0]
-      .trim();
-    return `duplicate key ${quote(key)}; expected each key once per mapping`;
+    const [key = ''] = text.slice(offsets[0], offsets[0] + 200).split(/[:\n]/);
+    return `duplicate key ${quote(key.trim())}; expected each key once per mapping`;
   }
   if (/call stack/i.test(message)) return 'nested too deeply; expected a policy a few levels deep';
-  const first = message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
-  return `not valid YAML: ${first}`;
+  const [first = ''] = message.split('\n');
+  return `not valid YAML: ${first.replace(/ at line \d+, column \d+:?$/, '')}`;
 }
 
 /** Problems the schema cannot express: limits without a bound, min above max, unusable globs. */
@@ -357,13 +361,13 @@ export function servingPatchOf(block: PolicyServingBlock): ServingPatch {
   for (const [written, field] of SERVING_FIELDS) {
     if (block[written] !== undefined) patch[field] = block[written];
   }
-  return patch as ServingPatch;
+  return patch;
 }
 
 function limitTable(
   limits: Record<string, Record<string, unknown> | null> | undefined,
 ): LimitTable {
-  const table: Record<string, LimitSetting | null> = Object.create(null);
+  const table = nullRecord<LimitSetting | null>();
   for (const [metric, entry] of Object.entries(limits ?? {})) {
     if (entry === null) {
       table[metric] = null;
@@ -381,7 +385,7 @@ function limitTable(
 }
 
 function ruleTable(rules: Record<string, RuleLevel> | undefined): RuleTable {
-  const table: Record<string, RuleLevel> = Object.create(null);
+  const table = nullRecord<RuleLevel>();
   for (const [id, level] of Object.entries(rules ?? {})) table[id] = level;
   return table;
 }
@@ -522,7 +526,7 @@ export function parsePolicy(text: string, path: string): Policy {
     standing?: Standing;
     'waiver-label'?: string;
   };
-  const locations: Record<string, SourceLocation> = Object.create(null);
+  const locations = nullRecord<SourceLocation>();
   for (const key of ['files', 'exclude', 'standing', 'waiver-label']) {
     if (checked[key as keyof typeof checked] !== undefined) {
       const located = nodeAt(doc, [key]);
