@@ -110,7 +110,10 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
 /** One `family-default-taken` finding listing every default a sparse config relied on. */
 function defaultsTaken(r: FieldReader): void {
   if (r.defaultsUsed.length === 0) return;
-  const type = String(r.get(['model_type'])).toLowerCase();
+  // Family defaults are only taken for a model_type that is a string (checkpoint-dialect.ts).
+  const stated = r.get(['model_type']);
+  if (typeof stated !== 'string') return;
+  const type = stated.toLowerCase();
   const family = FAMILY_DEFAULTS[type];
   if (family === undefined) return;
   const values = r.defaultsUsed.map((k) => `${k} ${JSON.stringify(family.values[k])}`).join(', ');
@@ -158,19 +161,15 @@ function notAModel(
     prefix.length === 0
       ? 'at the top level'
       : `under ${JSON.stringify(formatPointer(prefix.map(String)))}`;
+  const [firstKey] = Object.keys(root);
   const line =
-    prefix.length === 0
-      ? Object.keys(root).length > 0
-        ? doc.lineOf([Object.keys(root)[0]])
-        : null
-      : doc.lineOf(prefix);
+    prefix.length > 0 ? doc.lineOf(prefix) : firstKey === undefined ? null : doc.lineOf([firstKey]);
   // A model nested one level down (multimodal configs keep it under text_config) is worth naming.
   const nested = Object.keys(root).find(
     (k) =>
       !TOWER_KEY.test(k) &&
       isMapping(root[k]) &&
-      (detectDialect(root[k] as SourceMapping) !== null ||
-        isLanguageModelBlock(root[k] as SourceMapping)),
+      (detectDialect(root[k]) !== null || isLanguageModelBlock(root[k])),
   );
   const hint =
     nested === undefined
