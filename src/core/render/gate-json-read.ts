@@ -9,6 +9,7 @@
  */
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
+import { nullRecord } from '../null-record.js';
 import type { GateReport, JudgedFinding, Verdict } from '../compare/decide.js';
 import { METRIC_PATHS } from '../compare/metric-path.js';
 import {
@@ -429,7 +430,7 @@ function verdictOf(findings: readonly JudgedFinding[]): Verdict {
 /** Numbers the spec types as always present were NaN when written; JSON wrote them as null. */
 function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
   if (value === null || typeof value !== 'object' || Array.isArray(value)) return value;
-  const out: Record<string, unknown> = Object.create(null);
+  const out = nullRecord<unknown>();
   for (const [key, entry] of Object.entries(value)) {
     out[key] = entry === null && !nullable.has(key) ? NaN : restoreNaN(entry, nullable);
   }
