@@ -85,9 +85,7 @@ afterAll(() => {
 });
 
 /** `context-reach diff --format json` in `repo` with git found through the counting wrapper; the report and the git starts. */
-async function diffCounting(
-  repo: ScenarioRepo,
-): Promise<{
+async function diffCounting(repo: ScenarioRepo): Promise<{
   report: { blocking: number; files: { findings: { severity: string; remedy?: unknown }[] }[] };
   starts: string[];
 }> {

@@ -1,4 +1,5 @@
 import { describe, expect, test } from 'vitest';
+import { elementAt } from '../../src/core/element-at.js';
 import { inspectModel } from '../../src/core/inspect.js';
 import type { ModelSpec } from '../../src/core/model.js';
 import { FAMILY_DEFAULTS } from '../../src/core/parse/checkpoint-families.js';
@@ -47,12 +48,12 @@ describe('long-context scalings published configs ship', () => {
     const code = rotary(at4k.spec);
     // Fastest pair (i = 0): θ_0 = 1, so the wavelength is 2π · factor_0 of the chosen list.
     expect(at4k.metrics.fastestWavelength).toBeCloseTo(
-      2 * Math.PI * code.scaling!.shortFactors![0],
+      2 * Math.PI * elementAt(code.scaling!.shortFactors!, 0),
       9,
     );
     // Slowest pair (i = 47): θ_47 = 10000^(-94/96) (Su et al. 2021, eq. 15), divided by the long factor.
     expect(at8k.metrics.slowestWavelength).toBeCloseTo(
-      ((2 * Math.PI) / Math.pow(10000, -94 / 96)) * code.scaling!.longFactors![47],
+      ((2 * Math.PI) / Math.pow(10000, -94 / 96)) * elementAt(code.scaling!.longFactors!, 47),
       3,
     );
   });
@@ -240,7 +241,7 @@ describe('sparse and nested configs', () => {
       expect(Object.keys(family.values).length, type).toBeGreaterThan(0);
     }
     // LlamaConfig: 4096 wide, 11008 feed-forward, 32 layers and heads, 2048 positions, untied (from the published config class).
-    expect(FAMILY_DEFAULTS.llama.values).toMatchObject({
+    expect(FAMILY_DEFAULTS.llama?.values).toMatchObject({
       hidden_size: 4096,
       intermediate_size: 11008,
       num_hidden_layers: 32,

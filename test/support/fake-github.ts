@@ -9,6 +9,7 @@ import { createServer } from 'node:http';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { posix } from 'node:path';
+import { elementAt } from '../../src/core/element-at.js';
 import { checkRequest, checkResponse, sampleOf } from './openapi.js';
 import type { Operation } from './openapi.js';
 
@@ -235,7 +236,7 @@ function wrappedBase64(bytes: Uint8Array): string {
 function deepMerge(target: unknown, patch: unknown): unknown {
   if (patch === null || typeof patch !== 'object' || Array.isArray(patch)) return patch;
   const out: Record<string, unknown> = {
-    ...(target && typeof target === 'object' && !Array.isArray(target) ? (target as object) : {}),
+    ...(target && typeof target === 'object' && !Array.isArray(target) ? target : {}),
   };
   for (const [key, value] of Object.entries(patch)) out[key] = deepMerge(out[key], value);
   return out;
@@ -332,8 +333,9 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       },
     });
 
+  const ownerOf = (fullName: string): string => elementAt(fullName.split('/'), 0);
   const repoObject = (fullName: string): unknown => {
-    const [owner, name] = fullName.split('/');
+    const [owner = '', name = ''] = fullName.split('/');
     return deepMerge(sampleOf('repository'), {
       name,
       full_name: fullName,
@@ -370,9 +372,9 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       head: {
         sha: pull.headSha,
         ref: pull.headRef,
-        label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
+        label: `${ownerOf(pull.headRepo)}:${pull.headRef}`,
         repo: repoObject(pull.headRepo),
-        user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }),
+        user: userObject({ login: ownerOf(pull.headRepo), type: 'User', id: 8 }),
       },
     });
   };
@@ -491,6 +493,12 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
   ): Answer {
     if (params.owner !== undefined && (params.owner !== state.owner || params.repo !== state.repo))
       return notFound();
+    // A path parameter the matched operation's path names, so the router always filled it.
+    const param = (name: string): string => {
+      const value = params[name];
+      if (value === undefined) throw new Error(`${operation.operationId} has no {${name}}`);
+      return value;
+    };
     const write = operation.method !== 'GET';
     if (write && state.readOnly) return forbidden();
     switch (operation.operationId) {
@@ -523,9 +531,9 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
             head: {
               sha: pull.headSha,
               ref: pull.headRef,
-              label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
+              label: `${ownerOf(pull.headRepo)}:${pull.headRef}`,
               repo: repoObject(pull.headRepo),
-              user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }),
+              user: userObject({ login: ownerOf(pull.headRepo), type: 'User', id: 8 }),
             },
             changed_files: pull.files.length,
           }),
@@ -568,9 +576,10 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       }
       case 'repos/get-content': {
         const ref = query.get('ref') ?? 'main';
-        if (state.failingReads?.has(`${ref}:${params.path}`))
+        const path = param('path');
+        if (state.failingReads?.has(`${ref}:${path}`))
           return { status: 502, json: { message: 'Server Error' } };
-        const found = lookup(ref, params.path);
+        const found = lookup(ref, path);
         if (!found)
           return notFound('https://docs.github.com/rest/repos/contents#get-repository-content');
         if (
@@ -611,7 +620,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         };
       }
       case 'repos/compare-commits-with-basehead': {
-        const [base, head] = params.basehead.split('...');
+        const [base, head] = param('basehead').split('...');
         if (!base || !head || !state.trees.has(base) || !state.trees.has(head)) return notFound();
         // The fake keeps no commit graph: its pull requests' bases are their heads' ancestors.
         const commit = (sha: string) => deepMerge(sampleOf('commit'), { sha, node_id: `C_${sha}` });
@@ -630,7 +639,8 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         };
       }
       case 'git/get-tree': {
-        const tree = state.trees.get(params.tree_sha);
+        const treeSha = param('tree_sha');
+        const tree = state.trees.get(treeSha);
         if (!tree) return notFound();
         const entries = [...tree].map(([path, entry]) => {
           if (entry.type === 'symlink')
@@ -654,9 +664,9 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         return {
           status: 200,
           json: {
-            sha: blobSha(new TextEncoder().encode(params.tree_sha)),
-            url: `${url}/repos/${state.owner}/${state.repo}/git/trees/${params.tree_sha}`,
-            truncated: state.truncatedTrees?.has(params.tree_sha) ?? false,
+            sha: blobSha(new TextEncoder().encode(treeSha)),
+            url: `${url}/repos/${state.owner}/${state.repo}/git/trees/${treeSha}`,
+            truncated: state.truncatedTrees?.has(treeSha) ?? false,
             tree: entries,
           },
         };
