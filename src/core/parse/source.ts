@@ -6,6 +6,8 @@
  */
 import { Composer, Lexer, LineCounter, Parser, isAlias, isMap, isScalar, isSeq } from 'yaml';
 import type { CST, Document, Node as YamlNode, YAMLError } from 'yaml';
+import { elementAt } from '../element-at.js';
+import { nullRecord } from '../null-record.js';
 import { ReadError } from './errors.js';
 import { dottedKey, quoteText, quoteValue, truncate } from './quote.js';
 import type { PathSegment } from './quote.js';
@@ -164,13 +166,13 @@ export function parseSource(text: string, file: string): SourceDocument {
   if (docs.length > 1) {
     throw new ReadError(
       file,
-      lineAt(docs[1].range[0]),
+      lineAt(elementAt(docs, 1).range[0]),
       'holds more than one YAML document; a model file holds one',
     );
   }
-  const doc = docs[0];
+  const [doc] = docs;
   const root = doc?.contents ?? null;
-  if (root === null || (isScalar(root) && root.value === null)) {
+  if (doc === undefined || root === null || (isScalar(root) && root.value === null)) {
     throw new ReadError(file, null, 'is empty; expected a mapping of keys');
   }
   if (!isMap(root)) {
@@ -388,10 +390,11 @@ function syntaxError(
     const written = /^("(?:[^"\\\n]|\\.)*"|'(?:[^'\n]|'')*'|[^:,{}[\]\n]+)/.exec(
       text.slice(start, start + 1024),
     );
-    const key = written ? truncate(written[1].trim()) : 'here';
+    const key = written ? truncate(elementAt(written, 1).trim()) : 'here';
     return new ReadError(file, line, `duplicate key ${key}; each key may appear once in a mapping`);
   }
-  const reason = problem.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
+  const [firstLine = ''] = problem.message.split('\n');
+  const reason = firstLine.replace(/ at line \d+, column \d+:?$/, '');
   // JSON readers meet YAML's wording for JSON's commonest slip; say what it usually means.
   const jsonHint =
     text.trimStart().startsWith('{') && problem.code !== 'BAD_DQ_ESCAPE'
@@ -434,7 +437,7 @@ class Builder {
       );
     }
     if (isMap(node)) {
-      const out: SourceMapping = Object.create(null);
+      const out: SourceMapping = nullRecord<SourceValue>();
       const notes = new Map<PathSegment, EntryNotes>();
       this.notes.set(out, notes);
       for (const pair of node.items) {
@@ -468,8 +471,9 @@ class Builder {
     let container: unknown = root;
     for (let i = 0; i < path.length - 1; i++) {
       if (container === null || typeof container !== 'object') return undefined;
-      const step: unknown = (container as Record<string, unknown>)[String(path[i])];
-      if (!this.has(container, path[i])) return undefined;
+      const segment = elementAt(path, i);
+      const step: unknown = (container as Record<string, unknown>)[String(segment)];
+      if (!this.has(container, segment)) return undefined;
       container = step;
     }
     if (container === null || typeof container !== 'object') return undefined;
@@ -606,7 +610,7 @@ function firstInvalidUtf8(bytes: Uint8Array): number {
   // Binary search on prefixes would split characters; walk the encoding instead.
   let i = 0;
   while (i < bytes.length) {
-    const b = bytes[i];
+    const b = elementAt(bytes, i);
     const size =
       b < 0x80
         ? 1
