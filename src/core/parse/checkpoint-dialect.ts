@@ -32,6 +32,7 @@
  * - Declared span: `max_position_embeddings`, else `n_positions`, `n_ctx`, `max_seq_len`,
  *   `seq_length`, or the decoder's `max_target_positions`.
  */
+import { elementAt } from '../element-at.js';
 import type { StorageDType } from '../model.js';
 import { orderedRamp, type FieldReader } from './fields.js';
 import { quoteText } from './quote.js';
@@ -283,8 +284,8 @@ export function isCheckpointConfig(value: SourceMapping): boolean {
 
 /** Reads a checkpoint-style config from `r.root` into a draft; every problem becomes a finding on `r`. */
 export function readCheckpoint(r: FieldReader): SpecDraft {
-  const modelType =
-    typeof r.get(['model_type']) === 'string' ? String(r.get(['model_type'])).toLowerCase() : null;
+  const statedType = r.get(['model_type']);
+  const modelType = typeof statedType === 'string' ? statedType.toLowerCase() : null;
   const family = modelType !== null ? FAMILY_DEFAULTS[modelType] : undefined;
   if (family !== undefined) r.useDefaults(family.values);
   const gpt2Style = r.has(['n_embd']) || r.has(['n_layer']);
@@ -305,7 +306,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     if (!required) return undefined;
     const also =
       candidates.length > 1 ? ` (read from ${candidates.join(', ')}, the first present)` : '';
-    return r.missing([candidates[0]], `${what}${also}`);
+    return r.missing([elementAt(candidates, 0)], `${what}${also}`);
   };
 
   const hidden = size('hidden', ['hidden_size', 'n_embd', 'd_model'], 'the model width', true)!;
@@ -498,7 +499,7 @@ function readBias(
     const values = stated.map((p) => ({ p, v: r.flag('bias', p) }));
     const on = values.find((x) => x.v === true);
     if (on) r.locate('bias', on.p);
-    else r.locate('bias', values[0].p);
+    else r.locate('bias', elementAt(values, 0).p);
     return on ? true : values.some((x) => x.v === false) ? false : undefined;
   }
   if ((modelType !== null && BIAS_FAMILIES.has(modelType)) || (modelType === null && gpt2Style)) {
@@ -603,7 +604,10 @@ function readPosition(
     r.locate('position', ['sinusoidal_pos_embds']);
     kind = 'sinusoidal';
   } else if (rotaryKeys.length > 0 || mptRotary) {
-    r.locate('position', rotaryKeys.length > 0 ? [rotaryKeys[0]] : ['attn_config', 'rope']);
+    r.locate(
+      'position',
+      rotaryKeys.length > 0 ? [elementAt(rotaryKeys, 0)] : ['attn_config', 'rope'],
+    );
     kind = 'rotary';
   } else if (
     modelType === 'mpt' &&
@@ -674,7 +678,7 @@ function readPosition(
 
 /** T5-style relative position buckets: `relative_attention_num_buckets` and `relative_attention_max_distance`. */
 function readBuckets(r: FieldReader, modelType: string | null, stated: string[]): PositionDraft {
-  r.locate('position', stated.length > 0 ? [stated[0]] : ['model_type']);
+  r.locate('position', stated.length > 0 ? [elementAt(stated, 0)] : ['model_type']);
   const buckets = r.count('position.buckets', ['relative_attention_num_buckets'], 'buckets');
   const maxDistance = r.count(
     'position.maxDistance',
@@ -699,7 +703,7 @@ function readRotary(r: FieldReader, headDim: number, declaredSpan: number): Posi
   if (isMapping(rp)) {
     const nested = Object.keys(rp).filter((k) => isMapping(rp[k]));
     if (nested.length > 0 && !('rope_type' in rp) && !('rope_theta' in rp)) {
-      const chosen = nested.includes('full_attention') ? 'full_attention' : nested[0];
+      const chosen = nested.includes('full_attention') ? 'full_attention' : elementAt(nested, 0);
       params = ['rope_parameters', chosen];
       // The local layers' block is read by the layer reader (checkpoint-layers.ts).
       for (const other of nested.filter(
