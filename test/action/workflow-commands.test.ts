@@ -57,9 +57,7 @@ describe('commandLine(name, properties, message)', () => {
   it('is what @actions/core prints for annotations, for any message, title and file', () => {
     fc.assert(
       fc.property(
-        fc.constantFrom('error', 'warning', 'notice') as fc.Arbitrary<
-          'error' | 'warning' | 'notice'
-        >,
+        fc.constantFrom<'error' | 'warning' | 'notice'>('error', 'warning', 'notice'),
         text,
         text,
         text,
