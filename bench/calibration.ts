@@ -7,8 +7,7 @@
 /** sum: `Σ_i Σ_p p θ_i`, returned so the work cannot be optimised away. */
 export function calibrationLoop(theta: Float64Array, span: number): number {
   let total = 0;
-  for (let i = 0; i < theta.length; i++) {
-    const x = theta[i];
+  for (const x of theta) {
     let acc = 0;
     for (let p = 0; p < span; p++) acc += p * x;
     total += acc;

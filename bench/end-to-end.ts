@@ -110,8 +110,8 @@ export async function actionScenario(count = CONFIG_COUNT) {
   const { base, head } = pullRequestConfigs(count);
   const tree = (files: ConfigFile[]): Tree =>
     Object.fromEntries([
-      ['.github/context-reach.yml', POLICY],
-      ...files.map((f) => [f.path, f.text]),
+      ['.github/context-reach.yml', POLICY] as const,
+      ...files.map((f): [string, string] => [f.path, f.text]),
     ]);
   const repo = scenarioRepo(tree(base), tree(head));
   const fake = await startFakeGitHub({ owner: OWNER, repo: REPO });

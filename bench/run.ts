@@ -28,6 +28,7 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { elementAt } from '../src/core/element-at.js';
 import { computeMetrics, frequencyPlan } from '../src/core/metrics/compute.js';
 import type { Metrics } from '../src/core/metrics/types.js';
 import type { FloatFormat } from '../src/core/model.js';
@@ -70,7 +71,7 @@ function flag(name: string, fallback: number): number {
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
+  return elementAt(s, Math.floor(s.length / 2));
 }
 
 function timeRuns<T>(runs: number, f: () => T): { ms: number[]; result: T } {
@@ -154,7 +155,7 @@ function child(name: string): void {
 }
 
 function runChild(name: 'W1' | 'W2'): ChildReport {
-  const script = process.argv[1];
+  const script = elementAt(process.argv, 1);
   const r = spawnSync(process.execPath, [...process.execArgv, script, `--child=${name}`], {
     encoding: 'utf8',
     maxBuffer: 1 << 24,
@@ -360,7 +361,9 @@ async function main(): Promise<void> {
   const problems = [
     ...disagreements(fastResult, straight.result, 'engine vs straightforward'),
     ...w1Cold.flatMap((c) => disagreements(c.result, fastResult, 'cold child vs warm engine')),
-    ...w2.slice(1).flatMap((c) => disagreements(c.result, w2[0].result, 'W2 run vs W2 run')),
+    ...w2
+      .slice(1)
+      .flatMap((c) => disagreements(c.result, elementAt(w2, 0).result, 'W2 run vs W2 run')),
     ...w6.problems,
   ];
   const w3Json = w3Warm[0]!.json;
@@ -471,7 +474,7 @@ async function main(): Promise<void> {
     ratios,
     targetsMet: targets,
     w1Result: fastResult,
-    w2Result: w2[0].result,
+    w2Result: elementAt(w2, 0).result,
   };
   writeFileSync(
     path.join(process.cwd(), 'bench', 'results.json'),

@@ -11,7 +11,7 @@ const audit = spawnSync(npm, ['audit', '--omit=dev', '--json'], {
   encoding: 'utf8',
   timeout: 120_000,
 });
-let report = null;
+let report;
 try {
   report = JSON.parse(audit.stdout);
 } catch {
@@ -63,7 +63,7 @@ const rows = [];
 for (const { name, version } of [...found.values()].sort((a, b) =>
   `${a.name}@${a.version}`.localeCompare(`${b.name}@${b.version}`),
 )) {
-  let latest = '?';
+  let latest;
   let deprecated = '';
   try {
     const response = await fetch(`${registry}${name.replace('/', '%2f')}`, {

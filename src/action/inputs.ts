@@ -82,7 +82,7 @@ function outputPath(name: string, raw: string): string {
 
 /** A link for the comment: an absolute http(s) URL without spaces or control characters. */
 function webLink(name: string, raw: string): string {
-  let url: URL | null = null;
+  let url: URL | null;
   try {
     url = new URL(raw);
   } catch {

@@ -31,9 +31,9 @@ export interface ActionDeps {
   env: Readonly<Record<string, string | undefined>>;
   getInput: GetInput;
   out: RunnerOutput;
-  readJson(path: string): Promise<unknown>;
+  readJson: (path: string) => Promise<unknown>;
   /** Bytes of a local file, refused past `maxBytes` without reading it whole (publish mode's report). */
-  readFile(path: string, maxBytes: number): Promise<Uint8Array>;
+  readFile: (path: string, maxBytes: number) => Promise<Uint8Array>;
   writeFile(path: string, text: string): Promise<void>;
   createGit(cwd: string): GitReader;
   createGitHub(token: string, options: GitHubClientOptions): GitHubClient;
@@ -129,6 +129,7 @@ async function gatherChanges(
     } catch (error) {
       throw new Error(
         `GitHub lists only the first ${listed.files.length.toLocaleString('en-US')} files of this pull request, and the full list could not be read (${error instanceof Error ? error.message : String(error)}); files past that would go unjudged, so nothing is judged. Check out with fetch-depth: 0 so the action reads the whole change from git.`,
+        { cause: error },
       );
     }
     start = from;

@@ -6,6 +6,7 @@
  */
 import { execFile } from 'node:child_process';
 import type { ChangedFile } from '../core/changes.js';
+import { elementAt } from '../core/element-at.js';
 import type { ContentSource } from '../core/gate.js';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from './content-limit.js';
 
@@ -715,7 +716,7 @@ export function parseNameStatus(output: string): ChangedFile[] {
   if (fields[fields.length - 1] === '') fields.pop();
   const files: ChangedFile[] = [];
   for (let i = 0; i < fields.length;) {
-    const status = fields[i];
+    const status = elementAt(fields, i);
     const letter = status.charAt(0);
     if (letter === 'R' || letter === 'C') {
       const previous = fields[i + 1];

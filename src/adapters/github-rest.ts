@@ -249,7 +249,7 @@ async function readBounded(body: unknown, path: string, limit: number): Promise<
     return new Uint8Array(body);
   }
   if (typeof body === 'string')
-    return readBounded(new TextEncoder().encode(body).buffer as ArrayBuffer, path, limit);
+    return readBounded(new TextEncoder().encode(body).buffer, path, limit);
   const reader = (body as ReadableStream<Uint8Array>).getReader();
   const chunks: Uint8Array[] = [];
   let total = 0;

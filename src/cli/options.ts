@@ -57,8 +57,7 @@ export const SERVING_FLAGS = {
 /** The serving patch the flags describe (only the flags given). */
 export function servingPatch(values: Record<string, unknown>): ServingPatch {
   const patch: ServingPatch = {};
-  const text = (name: string) =>
-    typeof values[name] === 'string' ? (values[name] as string) : undefined;
+  const text = (name: string) => (typeof values[name] === 'string' ? values[name] : undefined);
   let v: string | undefined;
   if ((v = text('served-span')) !== undefined) patch.span = positiveInteger('served-span', v);
   if ((v = text('trained-span')) !== undefined)

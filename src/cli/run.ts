@@ -79,9 +79,10 @@ export async function run(argv: string[], deps: CliDeps): Promise<number> {
     }
     return await entry.run(rest, deps);
   } catch (error) {
+    const code = (error as { code?: unknown } | null)?.code;
     if (
       error instanceof UsageError ||
-      String((error as { code?: unknown })?.code ?? '').startsWith('ERR_PARSE_ARGS')
+      (typeof code === 'string' && code.startsWith('ERR_PARSE_ARGS'))
     ) {
       deps.io.error(
         `context-reach: ${(error as Error).message}\n${entry?.usage ?? (await usage())}`,

@@ -354,7 +354,7 @@ describe('comments', () => {
     }
     expect(actions).toEqual(['created', 'updated', 'updated', 'updated', 'updated']);
     expect(fake.state.comments).toHaveLength(1);
-    expect(fake.state.comments[0].body).toBe(`${MARKER}\nrun 5`);
+    expect(fake.state.comments[0]?.body).toBe(`${MARKER}\nrun 5`);
   });
 
   test('publishComment(…) creates a new comment when the old one is gone (404 on update)', async () => {

@@ -85,9 +85,7 @@ describe('createRunnerOutput(core).annotate(annotation)', () => {
   it('is the documented command for any message, title and file', () => {
     fc.assert(
       fc.property(
-        fc.constantFrom('error', 'warning', 'notice') as fc.Arbitrary<
-          'error' | 'warning' | 'notice'
-        >,
+        fc.constantFrom<'error' | 'warning' | 'notice'>('error', 'warning', 'notice'),
         text,
         text,
         text,

@@ -13,7 +13,7 @@ function options(usage: string): Map<string, string> {
       .split('\n')
       .map((line) => /^ {2}(--[a-z-]+|\S+)(?: \S+)?\s{2,}(.*)$/.exec(line))
       .filter((m) => m !== null)
-      .map((m) => [m![1]!, m![2]!]),
+      .map((m) => [m[1]!, m[2]!]),
   );
 }
 

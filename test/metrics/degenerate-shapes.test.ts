@@ -24,10 +24,10 @@ function expectSane(m: Metrics, label: string): void {
           if (name === 'precision') {
             for (const block of Object.values(v as Record<string, Record<string, unknown>>)) {
               for (const [p, x] of Object.entries(block))
-                if (!sane(x)) throw new Error(`${label}: layerKinds ${p} = ${x}`);
+                if (!sane(x)) throw new Error(`${label}: layerKinds ${p} = ${String(x)}`);
             }
           } else if (typeof v !== 'string' && typeof v !== 'boolean' && !sane(v))
-            throw new Error(`${label}: layerKinds ${name} = ${v}`);
+            throw new Error(`${label}: layerKinds ${name} = ${String(v)}`);
         }
       }
     } else if (!sane(value)) throw new Error(`${label}: ${key} = ${value}`);

@@ -136,7 +136,7 @@ describe('computeMetrics(spec) on degenerate input', () => {
           try {
             m = computeMetrics(spec);
           } catch (e) {
-            throw new Error(`${label} threw: ${String(e)}`);
+            throw new Error(`${label} threw: ${String(e)}`, { cause: e });
           }
           expectSane(m, label);
           // a generous per-call budget: nothing here may scan a degenerate span

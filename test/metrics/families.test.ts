@@ -208,7 +208,7 @@ describe('layers that differ', () => {
   it('Gemma 2 alternates local and global layers starting with a local one: cache at 8192 holds 21 layers at 4096 and 21 at 8192 (Gemma 2 report, §2)', () => {
     const { spec, locations } = read('gemma2-alternating.json');
     expect(spec.layerTypes!.slice(0, 4)).toEqual(['sliding', 'full', 'sliding', 'full']);
-    expect(locations.layerTypes.key).toBe('model_type');
+    expect(locations.layerTypes?.key).toBe('model_type');
     const m = computeMetrics(spec);
     const perLayerToken = 2 * 8 * 256 * 4;
     expect(m.cacheBytesAtSpan).toBe(perLayerToken * (21 * 4096 + 21 * 8192));

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { f16round } from '@petamoriken/float16';
+import { elementAt } from '../../src/core/element-at.js';
 import {
   binaryExponent,
   overflowThreshold,
@@ -26,7 +27,7 @@ const float32 = new Float32Array(bits32.buffer);
 /** A binary32 value from its bit pattern. */
 function fromBits32(u: number): number {
   bits32[0] = u >>> 0;
-  return float32[0];
+  return elementAt(float32, 0);
 }
 
 /**
@@ -35,7 +36,7 @@ function fromBits32(u: number): number {
  */
 function bf16FromBinary32(x: number): number {
   float32[0] = x;
-  const u = bits32[0];
+  const u = elementAt(bits32, 0);
   if ((u & 0x7f800000) === 0x7f800000) return x; // Infinity, NaN
   const lsb = (u >>> 16) & 1;
   const rounded = ((u + 0x7fff + lsb) >>> 0) & 0xffff0000;

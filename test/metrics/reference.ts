@@ -3,6 +3,7 @@
  * position and pair, exactly as METRICS.md words the definitions. The fast scans in
  * src/core/metrics must agree with these (counts identical, floats within 1e-9 relative).
  */
+import { elementAt } from '../../src/core/element-at.js';
 import type { FloatFormat } from '../../src/core/model.js';
 import { roundToFormat } from '../../src/core/metrics/float-format.js';
 
@@ -20,7 +21,7 @@ export function referenceSimilarity(theta: Float64Array, span: number): Referenc
   let negative: number | null = null;
   for (let k = 1; k < span; k++) {
     let sum = 0;
-    for (let i = 0; i < P; i++) sum += Math.cos(k * theta[i]);
+    for (let i = 0; i < P; i++) sum += Math.cos(k * elementAt(theta, i));
     const f = Math.sqrt(2 * (1 - sum / P));
     if (floor === null || f < floor) {
       floor = f;
@@ -58,9 +59,9 @@ export function referencePrecision(
     if (p >= 1 && (!Number.isFinite(fp) || fp === previousPosition)) colliding++;
     let overflows = !Number.isFinite(fp);
     for (let i = 0; i < P; i++) {
-      const angle = fl(fp * t[i]);
+      const angle = fl(fp * elementAt(t, i));
       if (!Number.isFinite(angle)) overflows = true;
-      const e = Math.abs(angle - p * theta[i]);
+      const e = Math.abs(angle - p * elementAt(theta, i));
       if (e > errorMax) errorMax = e;
       if (p >= 1 && angle === previous[i]) blurred[i] = true;
       previous[i] = angle;
@@ -88,7 +89,7 @@ export function referenceAngleErrorMax(
   for (let p = 0; p < span; p++) {
     const fp = fl(p);
     for (let i = 0; i < theta.length; i++) {
-      const e = Math.abs(fl(fp * t[i]) - p * theta[i]);
+      const e = Math.abs(fl(fp * elementAt(t, i)) - p * elementAt(theta, i));
       if (e > errorMax) errorMax = e;
     }
   }

@@ -4,6 +4,7 @@
  * rounding or omissions allow, stated at each check.
  */
 import { describe, expect, it } from 'vitest';
+import { elementAt } from '../../src/core/element-at.js';
 import { computeMetrics } from '../../src/core/metrics/compute.js';
 import { alibiHorizon, alibiSlopes } from '../../src/core/metrics/alibi-slopes.js';
 import {
@@ -58,7 +59,9 @@ describe('Vaswani et al. 2017, "Attention Is All You Need"', () => {
     const ratio = Math.pow(10000, -2 / 512);
     // consecutive ratios agree to a few binary64 roundings
     for (let i = 1; i < theta.length; i++)
-      expect(Math.abs(theta[i] / theta[i - 1] / ratio - 1)).toBeLessThan(1e-13);
+      expect(Math.abs(elementAt(theta, i) / elementAt(theta, i - 1) / ratio - 1)).toBeLessThan(
+        1e-13,
+      );
   });
 
   it('params(spec) of the base model (N=6, d=512, ff=2048, h=8, shared 37,000 vocab) is 65M within 5% (Table 3)', () => {
@@ -196,7 +199,7 @@ describe("Press et al. 2022, ALiBi, §3 and the authors' code", () => {
     const exponents = alibiSlopes(12)!.map((m) => -Math.log2(m));
     const expected = [1, 2, 3, 4, 5, 6, 7, 8, 0.5, 1.5, 2.5, 3.5];
     // log2 of a rounded power: absolute 1e-12
-    exponents.forEach((e, j) => expect(Math.abs(e - expected[j])).toBeLessThan(1e-12));
+    exponents.forEach((e, j) => expect(Math.abs(e - elementAt(expected, j))).toBeLessThan(1e-12));
   });
 
   it('alibiHorizon(slopes) is where the slowest head (2^-8, §3) fades a key by 10^4: ceil(256 ln 10^4) = 2358', () => {
@@ -238,7 +241,7 @@ describe('Peng et al. 2023, YaRN', () => {
     for (const [L, inner, outer] of [
       [2048, 16.13, 40.21],
       [4096, 20.94, 45.03],
-    ]) {
+    ] as const) {
       const s = 4;
       const scaled = scaleFrequencies(
         theta,
@@ -249,7 +252,7 @@ describe('Peng et al. 2023, YaRN', () => {
         L,
       )!;
       for (let d = 0; d < 64; d++) {
-        const ratio = scaled[d] / theta[d];
+        const ratio = elementAt(scaled, d) / elementAt(theta, d);
         // γ = 1 keeps θ; γ = 0 divides by s; in between strictly between (relative 1e-12)
         if (d < inner) expect(Math.abs(ratio - 1)).toBeLessThan(1e-12);
         else if (d > outer) expect(Math.abs(ratio - 1 / s)).toBeLessThan(1e-12);
@@ -297,7 +300,9 @@ describe('Chen et al. 2023, Position Interpolation', () => {
     const m = 30000;
     // one division each side: relative 1e-15
     for (let i = 0; i < 64; i++)
-      expect(Math.abs((m * scaled[i]) / (((m * 2048) / 32768) * theta[i]) - 1)).toBeLessThan(1e-15);
+      expect(
+        Math.abs((m * elementAt(scaled, i)) / (((m * 2048) / 32768) * elementAt(theta, i)) - 1),
+      ).toBeLessThan(1e-15);
     const metrics = computeMetrics({ ...spec, serving: { ...spec.serving, span: 4096 } });
     expect(metrics.reach).toBe(32768);
     expect(metrics.scalingCover).toBe(32768);
@@ -353,7 +358,7 @@ describe('Men et al. 2024, "Base of RoPE Bounds Context Length" (criterion only,
       let L = 0;
       for (let m = 1; m < 60000; m++) {
         let B = 0;
-        for (let i = 0; i < theta.length; i++) B += Math.cos(m * theta[i]);
+        for (const t of theta) B += Math.cos(m * t);
         if (B < 0) break;
         L = m;
       }

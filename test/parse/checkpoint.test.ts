@@ -56,7 +56,7 @@ describe('readModel(checkpoint text) against published shapes', () => {
       512,
     ]);
     expect(spec.position).toEqual({ kind: 'learned' });
-    expect(locations.position.key).toBe('position_embedding_type');
+    expect(locations.position?.key).toBe('position_embedding_type');
     expect(spec.bias).toBe(true);
   });
 
@@ -76,8 +76,8 @@ describe('readModel(checkpoint text) against published shapes', () => {
     expect(findings.map((f) => [f.rule, f.severity, f.key])).toEqual([
       ['family-default-taken', 'info', 'model_type'],
     ]);
-    expect(findings[0].message).toContain('rope_theta 10000');
-    expect(findings[0].message).toContain('LlamaConfig');
+    expect(findings[0]?.message).toContain('rope_theta 10000');
+    expect(findings[0]?.message).toContain('LlamaConfig');
   });
 
   test('readModel(llama-rotary-llama3.json) reads llama3 scaling as banded, with its factors and every line', () => {
@@ -130,7 +130,7 @@ describe('readModel(checkpoint text) against published shapes', () => {
   test('readModel(mistral-sliding-window.json) reads a window on every layer', () => {
     const { spec, locations } = read('mistral-sliding-window.json');
     expect([spec.slidingWindow, spec.windowLayers]).toEqual([4096, null]);
-    expect(locations.slidingWindow.key).toBe('sliding_window');
+    expect(locations.slidingWindow?.key).toBe('sliding_window');
   });
 
   test('readModel(qwen-yarn.json) reads yarn with the Llama-family ramp α = 1, β = 32 (Peng et al. 2023, YaRN, section 3.2) and no window when use_sliding_window is false', () => {
@@ -152,13 +152,13 @@ describe('readModel(checkpoint text) against published shapes', () => {
   test('readModel(qwen-window-layers.json) counts layers from max_window_layers on as windowed (28 - 20 = 8)', () => {
     const { spec, locations } = read('qwen-window-layers.json');
     expect([spec.slidingWindow, spec.windowLayers]).toEqual([4096, 28 - 20]);
-    expect(locations.windowLayers.key).toBe('max_window_layers');
+    expect(locations.windowLayers?.key).toBe('max_window_layers');
   });
 
   test('readModel(bart-encoder-decoder.json) reads the decoder at the top and the encoder stack apart', () => {
     const { spec, locations } = read('bart-encoder-decoder.json');
     expect([spec.layers, spec.hidden, spec.heads, spec.ffn]).toEqual([12, 1024, 16, 4096]);
-    expect(locations.layers.key).toBe('decoder_layers');
+    expect(locations.layers?.key).toBe('decoder_layers');
     expect(spec.encoder).toEqual({
       layers: 12,
       heads: 16,
@@ -183,13 +183,13 @@ describe('readModel(checkpoint text) against published shapes', () => {
     expect(findings.map((f) => [f.rule, f.severity, f.key])).toEqual([
       ['family-default-taken', 'info', 'model_type'],
     ]);
-    expect(findings[0].message).toContain('relative_attention_max_distance');
+    expect(findings[0]?.message).toContain('relative_attention_max_distance');
   });
 
   test('readModel(mixtral-moe.json) reads 8 experts with 2 active', () => {
     const { spec, locations } = read('mixtral-moe.json');
     expect(spec.experts).toEqual({ total: 8, active: 2 });
-    expect(locations['experts.total'].key).toBe('num_local_experts');
+    expect(locations['experts.total']?.key).toBe('num_local_experts');
     expect(spec.slidingWindow).toBeNull();
   });
 
@@ -197,7 +197,7 @@ describe('readModel(checkpoint text) against published shapes', () => {
     const { spec, locations } = read('falcon-alibi.json');
     expect(spec.position).toEqual({ kind: 'alibi' });
     expect(spec.kvHeads).toBe(1);
-    expect(locations.kvHeads.key).toBe('multi_query');
+    expect(locations.kvHeads?.key).toBe('multi_query');
     expect(spec.bias).toBe(true);
   });
 
@@ -212,7 +212,7 @@ describe('readModel(checkpoint text) against published shapes', () => {
   test('readModel(gemma-gated.json) reads a Gemma block as gated and its embeddings scaled by sqrt(hidden) (from memory: Gemma normalises embeddings by sqrt(d_model))', () => {
     const { spec, locations } = read('gemma-gated.json');
     expect(spec.gated).toBe(true);
-    expect(locations.gated.key).toBe('model_type');
+    expect(locations.gated?.key).toBe('model_type');
     // sqrt(2048) = 32·sqrt(2); the two roundings differ by at most an ulp, so compare to 12 digits.
     expect(spec.embeddingMultiplier).toBeCloseTo(32 * Math.SQRT2, 12);
     expect([spec.kvHeads, spec.headDim]).toEqual([1, 256]);
@@ -231,7 +231,7 @@ describe('readModel(checkpoint text) against published shapes', () => {
       ['value-invalid', 'block', 'rope_scaling.short_factor', lineOf(text, '"short_factor"')],
       ['value-invalid', 'block', 'rope_scaling.long_factor', lineOf(text, '"long_factor"')],
     ]);
-    expect(findings[0].message).toContain('has 4 factors, but the rotary code has 48 pairs');
+    expect(findings[0]?.message).toContain('has 4 factors, but the rotary code has 48 pairs');
   });
 
   test('readModel(rope-parameters.json) reads the rope_parameters block newer checkpoint libraries write', () => {
@@ -250,9 +250,9 @@ describe('readModel(checkpoint text) against published shapes', () => {
         high: 4,
       },
     });
-    expect(locations['position.base'].key).toBe('rope_parameters.rope_theta');
+    expect(locations['position.base']?.key).toBe('rope_parameters.rope_theta');
     expect(spec.dtypes.weights).toBe('bf16');
-    expect(locations['dtypes.weights'].key).toBe('dtype');
+    expect(locations['dtypes.weights']?.key).toBe('dtype');
   });
 
   test('readModel(multimodal-nested.json, {at: "/text_config"}) reads the nested model and names keys from the top of the file', () => {
@@ -464,7 +464,7 @@ describe('readModel(checkpoint) defaults', () => {
     const types = ['sliding_attention', 'sliding_attention', 'sliding_attention', 'full_attention'];
     const { spec, locations } = readConfig({ ...BASE, sliding_window: 512, layer_types: types });
     expect([spec.slidingWindow, spec.windowLayers]).toEqual([512, 3]);
-    expect(locations.windowLayers.key).toBe('layer_types');
+    expect(locations.windowLayers?.key).toBe('layer_types');
   });
 });
 
@@ -482,7 +482,7 @@ describe('readModel(checkpoint) position codes by family and key', () => {
         rope_theta: undefined,
       });
       expect(spec.position).toEqual({ kind });
-      expect(locations.position.key).toBe('model_type');
+      expect(locations.position?.key).toBe('model_type');
       expect(findings.filter((f) => f.rule !== 'family-default-taken')).toEqual([]);
     },
   );
@@ -496,7 +496,7 @@ describe('readModel(checkpoint) position codes by family and key', () => {
       vocab_size: 100,
     });
     expect(spec.position).toEqual({ kind: 'learned' });
-    expect(locations.position.key).toBe('n_positions');
+    expect(locations.position?.key).toBe('n_positions');
     expect(spec.bias).toBe(true);
   });
 
@@ -566,11 +566,11 @@ describe('readModel(checkpoint) keys that do nothing', () => {
     });
     expect([spec.slidingWindow, spec.windowLayers]).toEqual([null, null]);
     expect(findings).toHaveLength(1);
-    expect([findings[0].rule, findings[0].line]).toEqual([
+    expect([findings[0]?.rule, findings[0]?.line]).toEqual([
       'key-ignored',
       lineOf(text, '"sliding_window"'),
     ]);
-    expect(findings[0].message).toContain('max_window_layers (4)');
+    expect(findings[0]?.message).toContain('max_window_layers (4)');
   });
 
   test('readModel warns about rotary keys on a learned code', () => {
@@ -647,7 +647,7 @@ describe('readModel(checkpoint) invalid values', () => {
         key: 'num_hidden_layers',
         line: lineOf(text, '"num_hidden_layers"'),
       });
-      expect(findings[0].message).toContain(`num_hidden_layers is ${quoted}`);
+      expect(findings[0]?.message).toContain(`num_hidden_layers is ${quoted}`);
       // NaN is the reader's mark: the spec rules do not report the same key again.
       expect(specFindings(spec, locations)).toEqual([]);
     },
@@ -689,7 +689,7 @@ describe('readModel(checkpoint) invalid values', () => {
     const { spec, findings } = readModel(text, 'c.json');
     expect(Number.isNaN(spec.vocab)).toBe(true);
     expect(findings).toHaveLength(1);
-    expect(findings[0].message).toContain(
+    expect(findings[0]?.message).toContain(
       'vocab_size is 1152921504606846976, beyond 2^53 − 1 = 9007199254740991',
     );
     expect(2 ** 53 - 1).toBe(Number.MAX_SAFE_INTEGER);
@@ -711,7 +711,7 @@ describe('readModel(checkpoint) invalid values', () => {
       expect(findings).toEqual([]);
       const rules = specFindings(spec, locations);
       expect(rules.map((f) => [f.rule, f.key])).toEqual([['size-invalid', 'num_hidden_layers']]);
-      expect(rules[0].message).toContain(`num_hidden_layers ${phrase}`);
+      expect(rules[0]?.message).toContain(`num_hidden_layers ${phrase}`);
     }
   });
 
@@ -727,7 +727,7 @@ describe('readModel(checkpoint) invalid values', () => {
     const { spec, findings, locations } = readConfig(config);
     expect(findings).toHaveLength(1);
     expect(findings[0]).toMatchObject({ rule: 'value-invalid', key, line: null });
-    expect(findings[0].message).toMatch(new RegExp(`^${key} is missing; expected ${what}`));
+    expect(findings[0]?.message).toMatch(new RegExp(`^${key} is missing; expected ${what}`));
     expect(specFindings(spec, locations)).toEqual([]);
     if (key === 'num_attention_heads')
       expect([spec.kvHeads, spec.headDim].every(Number.isNaN)).toBe(true);
@@ -814,7 +814,7 @@ describe('readModel(checkpoint) invalid values', () => {
     const { dialect, findings } = readModel(text, 'config.yaml');
     expect(dialect).toBe('checkpoint');
     expect(findings.map((f) => [f.key, f.line])).toEqual([['num_hidden_layers', 2]]);
-    expect(findings[0].message).toContain('.nan, which is not a number');
+    expect(findings[0]?.message).toContain('.nan, which is not a number');
   });
 });
 

@@ -47,12 +47,12 @@ describe('long-context scalings published configs ship', () => {
     const code = rotary(at4k.spec);
     // Fastest pair (i = 0): θ_0 = 1, so the wavelength is 2π · factor_0 of the chosen list.
     expect(at4k.metrics.fastestWavelength).toBeCloseTo(
-      2 * Math.PI * code.scaling!.shortFactors![0],
+      2 * Math.PI * code.scaling!.shortFactors![0]!,
       9,
     );
     // Slowest pair (i = 47): θ_47 = 10000^(-94/96) (Su et al. 2021, eq. 15), divided by the long factor.
     expect(at8k.metrics.slowestWavelength).toBeCloseTo(
-      ((2 * Math.PI) / Math.pow(10000, -94 / 96)) * code.scaling!.longFactors![47],
+      ((2 * Math.PI) / Math.pow(10000, -94 / 96)) * code.scaling!.longFactors![47]!,
       3,
     );
   });

@@ -26,7 +26,7 @@ describe('editDistance(a, b)', () => {
       ['memoryBytes', 'memorybites'],
       ['span-past-reach', 'span-past-rech'],
       ['x', 'yz'],
-    ]) {
+    ] as const) {
       expect(editDistance(a, b)).toBe(editDistance(b, a));
     }
   });

@@ -28,7 +28,7 @@ describe('readModel(own dialect) experts, latent attention and layer patterns', 
       nopeDim: 128,
       valueDim: 128,
     });
-    expect(own.locations['latent.kvRank'].key).toBe('model.latent-attention.kv-rank');
+    expect(own.locations['latent.kvRank']?.key).toBe('model.latent-attention.kv-rank');
     // Same shapes as the checkpoint-style fixture (Liu et al. 2024, DeepSeek-V2: 15.7B total).
     const checkpoint = read('deepseek-v2-lite-latent.json');
     expect(parameterBreakdown(own.spec)!.params).toBe(parameterBreakdown(checkpoint.spec)!.params);

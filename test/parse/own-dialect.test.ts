@@ -91,10 +91,10 @@ describe('the shipped schema, schema/model.schema.json', () => {
         >;
       }
     ).definitions;
-    expect(defs.position.properties.code.enum).toEqual([...POSITION_KINDS]);
-    expect(defs.scaling.properties.kind.enum).toEqual([...SCALING_KINDS]);
-    expect(defs.model.properties.dtypes.properties?.weights.enum).toEqual([...STORAGE_DTYPES]);
-    expect(defs.model.properties.dtypes.properties?.positions.enum).toEqual([...FLOAT_FORMATS]);
+    expect(defs.position?.properties.code?.enum).toEqual([...POSITION_KINDS]);
+    expect(defs.scaling?.properties.kind?.enum).toEqual([...SCALING_KINDS]);
+    expect(defs.model?.properties.dtypes?.properties?.weights?.enum).toEqual([...STORAGE_DTYPES]);
+    expect(defs.model?.properties.dtypes?.properties?.positions?.enum).toEqual([...FLOAT_FORMATS]);
   });
 });
 
@@ -252,14 +252,14 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
       key: 'model.kv_heads',
       line: lineOf(text, 'kv_heads'),
     });
-    expect(all[0].message).toMatch(
+    expect(all[0]?.message).toMatch(
       /^model\.kv_heads is not a known key under model; did you mean "kv-heads"\?/,
     );
   });
 
   test('a checkpoint key in the own dialect is pointed at its own-dialect name (max_position_embeddings → declared-span)', () => {
     const text = BASE.replace('  heads: 32\n', '  heads: 32\n  max_position_embeddings: 8\n');
-    expect(readText(text).all[0].message).toContain('did you mean "declared-span"?');
+    expect(readText(text).all[0]?.message).toContain('did you mean "declared-span"?');
   });
 
   test('an unknown key nothing resembles gets no guess, but the list of known keys', () => {
@@ -300,17 +300,17 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
     const { all, spec } = readText(text);
     expect(all).toHaveLength(1);
     expect(all[0]).toMatchObject({ rule: 'value-invalid', key, line: lineOf(text, replacement) });
-    expect(all[0].message).toContain(message);
+    expect(all[0]?.message).toContain(message);
     if (key === 'model.layers') expect(Number.isNaN(spec.layers)).toBe(true);
   });
 
   test('an unknown dtype gets the list of formats and the nearest one', () => {
     const text = `${BASE}  dtypes: {cache: fp4}\n`;
     const [f] = readText(text).all;
-    expect(f.message).toBe(
+    expect(f?.message).toBe(
       'model.dtypes.cache is "fp4"; expected one of fp32, bf16, fp16, fp8, int8, int4; did you mean "fp8"?',
     );
-    expect(f.line).toBe(lineOf(text, 'fp4'));
+    expect(f?.line).toBe(lineOf(text, 'fp4'));
   });
 
   test('an unknown scaling kind is scaling-kind-unknown, and the code is read unscaled', () => {
@@ -344,8 +344,8 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
   ])('a missing required key is named once (%j)', (removed, message, key) => {
     const { all } = readText(BASE.replace(removed, ''));
     expect(all).toHaveLength(1);
-    expect(all[0].key).toBe(key);
-    expect(all[0].message).toContain(message);
+    expect(all[0]?.key).toBe(key);
+    expect(all[0]?.message).toContain(message);
   });
 
   test('a missing model block is one finding, not one per key', () => {
@@ -363,7 +363,7 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
   test('serving.reserve of 1.5 is outside [0, 1)', () => {
     const text = `${BASE}serving:\n  reserve: 1.5\n`;
     const [f] = readText(text).all;
-    expect([f.rule, f.key, f.line]).toEqual([
+    expect([f?.rule, f?.key, f?.line]).toEqual([
       'value-invalid',
       'serving.reserve',
       lineOf(text, 'reserve'),
@@ -394,8 +394,8 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
       'code: rotary\n    scaling: {kind: yarn, factor: 4, alpha: 40}',
     );
     const [f] = readText(text).all;
-    expect([f.rule, f.key]).toEqual(['value-invalid', 'model.position.scaling.alpha']);
-    expect(f.message).toContain(
+    expect([f?.rule, f?.key]).toEqual(['value-invalid', 'model.position.scaling.alpha']);
+    expect(f?.message).toContain(
       'model.position.scaling.beta (32) must be above model.position.scaling.alpha (40)',
     );
   });
@@ -436,7 +436,7 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
   test('readModel(own JSON) names JSON lines too', () => {
     const text = fixture('own-minimal.reach.json').replace('"layers": 24', '"layers": "24"');
     const [f] = readModel(text, 'm.json').findings;
-    expect([f.key, f.line]).toEqual(['model.layers', lineOf(text, '"layers"')]);
+    expect([f?.key, f?.line]).toEqual(['model.layers', lineOf(text, '"layers"')]);
   });
 
   test('readModel(own dialect) with a __proto__ key throws and leaves prototypes alone', () => {

@@ -71,7 +71,7 @@ describe('kv-heads-indivisible: GQA splits the query heads into groups sharing o
   });
 
   test('more key/value heads than heads suggests the largest divisor', () => {
-    expect(specFindings(spec({ kvHeads: 24 }), {})[0].message).toBe(
+    expect(specFindings(spec({ kvHeads: 24 }), {})[0]?.message).toBe(
       'kvHeads is 24, which does not divide heads 16; use a divisor of 16 such as 16',
     );
   });
@@ -96,9 +96,9 @@ describe('kv-heads-indivisible: GQA splits the query heads into groups sharing o
   });
 
   test('36 heads and 5 key/value heads: the divisors of 36 next to 5 are 4 and 6', () => {
-    expect(specFindings(spec({ heads: 36, hidden: 36 * 64, kvHeads: 5 }), {})[0].message).toContain(
-      'such as 4 or 6',
-    );
+    expect(
+      specFindings(spec({ heads: 36, hidden: 36 * 64, kvHeads: 5 }), {})[0]?.message,
+    ).toContain('such as 4 or 6');
   });
 
   test('an encoder stack is checked too', () => {
@@ -139,7 +139,7 @@ describe('rotary-width-odd: rotary codes turn channel pairs (Su et al. 2021, RoF
     expect(findings.map((f) => [f.rule, f.key, f.line])).toEqual([
       ['rotary-width-odd', 'head_dim', lineOf(text, '"head_dim"')],
     ]);
-    expect(findings[0].message).toBe(
+    expect(findings[0]?.message).toBe(
       'head_dim 75 is odd, so the rotary width 75 leaves one channel without a partner (the metrics use 74 channels); use an even head width such as 74 or 76',
     );
   });
@@ -149,7 +149,7 @@ describe('rotary-width-odd: rotary codes turn channel pairs (Su et al. 2021, RoF
     expect(findings.map((f) => [f.rule, f.key])).toEqual([
       ['rotary-width-odd', 'partial_rotary_factor'],
     ]);
-    expect(findings[0].message).toBe(
+    expect(findings[0]?.message).toBe(
       'head_dim 64 × partial_rotary_factor 0.3 = 19.2, which is not an even whole number, so the rotary channels do not pair up (the metrics use 18 channels); use a fraction giving an even width, such as 0.28125 (18 channels) or 0.3125 (20 channels)',
     );
   });
@@ -160,7 +160,7 @@ describe('rotary-width-odd: rotary codes turn channel pairs (Su et al. 2021, RoF
       {},
     );
     expect(f.map((x) => x.rule)).toEqual(['rotary-width-odd']);
-    expect(f[0].message).toContain('= 31, which is not an even whole number');
+    expect(f[0]?.message).toContain('= 31, which is not an even whole number');
   });
 
   test('non-rotary codes and unusable widths raise no rotary finding', () => {
@@ -201,15 +201,15 @@ describe('size-invalid', () => {
     const findings = specFindings(spec(change), locations).filter((f) => f.rule === 'size-invalid');
     expect(findings).toHaveLength(1);
     expect(findings[0]).toMatchObject({ severity: 'block', key: `the.key.of.${field}`, line: 7 });
-    expect(findings[0].message).toMatch(
+    expect(findings[0]?.message).toMatch(
       new RegExp(`^the\\.key\\.of\\.${field.replace('.', '\\.')} is `),
     );
-    expect(findings[0].message).toMatch(/; set it to /);
+    expect(findings[0]?.message).toMatch(/; set it to /);
   });
 
   test('sizes past 2^53 - 1 are too large to hold exactly (IEEE 754 binary64)', () => {
     const [f] = specFindings(spec({ vocab: 2 ** 60 }), { vocab: { key: 'vocab_size', line: 3 } });
-    expect(f.message).toBe(
+    expect(f?.message).toBe(
       'vocab_size is 1152921504606846976, too large to hold exactly in a double (beyond 2^53 − 1); set it to the vocabulary size: a whole number of at least 1',
     );
   });
@@ -245,7 +245,7 @@ describe('size-invalid', () => {
       'serving.span': { key: 'command line', line: null },
     });
     expect(f).toMatchObject({ rule: 'size-invalid', key: 'command line', line: null });
-    expect(f.message).toBe(
+    expect(f?.message).toBe(
       'command line is -5; set it to the served span in tokens: a whole number of at least 1',
     );
   });
@@ -324,8 +324,8 @@ describe('sizes that contradict each other', () => {
     const [f] = specFindings(spec({ slidingWindow: 512, windowLayers: 30 }), {
       windowLayers: { key: 'model.sliding-window.layers', line: 9 },
     });
-    expect([f.rule, f.key, f.line]).toEqual(['value-invalid', 'model.sliding-window.layers', 9]);
-    expect(f.message).toBe(
+    expect([f?.rule, f?.key, f?.line]).toEqual(['value-invalid', 'model.sliding-window.layers', 9]);
+    expect(f?.message).toBe(
       'model.sliding-window.layers makes 30 windowed layers, more than the 24 layers (layers); set it to at most 24',
     );
   });

@@ -82,9 +82,9 @@ describe('parsePolicy(text, path)', () => {
     });
     expect({ ...policy.rules }).toEqual({ 'frequencies-changed': 'block', 'pairs-blurred': 'off' });
     expect(policy.overrides).toHaveLength(1);
-    expect(policy.overrides[0].files).toEqual(['models/experimental/**']);
-    expect(policy.overrides[0].serving).toEqual({ span: 131072 });
-    expect({ ...policy.overrides[0].limits }).toEqual({
+    expect(policy.overrides[0]?.files).toEqual(['models/experimental/**']);
+    expect(policy.overrides[0]?.serving).toEqual({ span: 131072 });
+    expect({ ...policy.overrides[0]?.limits }).toEqual({
       headroom: { severity: 'info' },
       memoryBytes: null,
     });

@@ -29,7 +29,7 @@ const PACKAGE = JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as 
   bin: Record<string, string>;
 };
 const { validateWorkflow } = createRequire(import.meta.url)('@action-validator/core') as {
-  validateWorkflow(src: string): { errors: unknown[] };
+  validateWorkflow: (src: string) => { errors: unknown[] };
 };
 
 /** The environment without npm's variables of the run that started the tests (they would steer the nested npm). */

@@ -25,8 +25,8 @@ const read = (path: string) => readFileSync(resolve(ROOT, path), 'utf8');
 const { validateAction, validateWorkflow } = createRequire(import.meta.url)(
   '@action-validator/core',
 ) as {
-  validateAction(src: string): { errors: unknown[] };
-  validateWorkflow(src: string): { errors: unknown[] };
+  validateAction: (src: string) => { errors: unknown[] };
+  validateWorkflow: (src: string) => { errors: unknown[] };
 };
 const MODELS = ['models/**', '.github/context-reach.yml'];
 

@@ -1,4 +1,5 @@
 import { execFileSync } from 'node:child_process';
+import { inspect } from 'node:util';
 import { afterEach, describe, expect, it } from 'vitest';
 import { COMMENT_FAILED_NOTICE } from '../../src/action/run-action.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
@@ -51,7 +52,11 @@ const reports = (r: ScenarioResult) =>
 /** Everything a run wrote: outputs, summary, annotations, log, files, comments, and its error. */
 function everything(r: ScenarioResult): string {
   const error =
-    r.error instanceof Error ? `${r.error.message}\n${r.error.stack}` : String(r.error ?? '');
+    r.error instanceof Error
+      ? `${r.error.message}\n${r.error.stack}`
+      : r.error === null || r.error === undefined
+        ? ''
+        : inspect(r.error);
   return [
     r.out.everything(),
     ...Object.values(r.written),

@@ -1,5 +1,5 @@
 import { spawnSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, relative, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -207,7 +207,7 @@ describe('the bundled action (dist/index.js) on a pull request with every hostil
   it('reports every hostile file with its finding, and still judges the good one', () => {
     for (const c of CASES) {
       const file = report.files.find((f) => f.path === c.path);
-      expectFinding(c, file as unknown as FileDecision);
+      expectFinding(c, file);
     }
     const good = report.files.find((f) => f.path === CONTROL)!;
     expect(good.head).not.toBeNull();

@@ -11,7 +11,7 @@ import type { GateReport } from '../../src/core/report/types.js';
 
 /** Markdown to HTML as GFM (marked, from npm), standing in for GitHub's renderer. */
 export function renderGfm(markdown: string): string {
-  return marked.parse(markdown, { gfm: true, async: false }) as string;
+  return marked.parse(markdown, { gfm: true, async: false });
 }
 
 /** Every non-finite number under `value`, with its path. */

@@ -11,7 +11,6 @@ import { createFileSource } from '../../src/adapters/file-source.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderComment } from '../../src/core/render/comment.js';
 import { readGateJson } from '../../src/core/report/read.js';
-import { renderGateJson } from '../../src/core/render/gate-json.js';
 import { renderHtmlReport } from '../../src/core/render/html-report.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { renderSarif } from '../../src/core/render/sarif.js';

@@ -17,7 +17,8 @@ interface Step {
   uses?: string;
   run?: string;
   if?: string;
-  with?: Record<string, unknown>;
+  // GitHub Actions gives a step's inputs as scalars.
+  with?: Record<string, string | number | boolean>;
 }
 interface Workflow {
   name: string;

@@ -79,7 +79,7 @@ describe('renderComment(report)', () => {
   });
 
   it('renders as GFM with no unbalanced HTML (the details blocks close)', () => {
-    const html = marked.parse(body, { gfm: true, async: false }) as string;
+    const html = marked.parse(body, { gfm: true, async: false });
     expect((html.match(/<details/g) ?? []).length).toBe((html.match(/<\/details>/g) ?? []).length);
   });
 
@@ -113,7 +113,7 @@ describe('renderComment(report) with hundreds of blocking files', () => {
     expect(body.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(body.split('\n')[0]).toBe(COMMENT_MARKER);
     expect(body).toContain('… and 280 more blocking findings, listed under their files below.');
-    const html = marked.parse(body, { gfm: true, async: false }) as string;
+    const html = marked.parse(body, { gfm: true, async: false });
     expect((html.match(/<details/g) ?? []).length).toBe((html.match(/<\/details>/g) ?? []).length);
   });
 });

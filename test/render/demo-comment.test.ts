@@ -15,7 +15,7 @@ const file = (path: string) => report.files.find((f) => f.path === path)!;
 
 /** Sentences of the visible text: markdown rendered, tags stripped, split at sentence ends. */
 function sentences(markdown: string): string[] {
-  const html = marked.parse(markdown, { gfm: true, async: false }) as string;
+  const html = marked.parse(markdown, { gfm: true, async: false });
   const text = html
     .replace(/<pre>[\s\S]*?<\/pre>/g, ' ')
     .replace(/<table>[\s\S]*?<\/table>/g, ' ')

@@ -7,7 +7,7 @@ import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 // Rendered with `marked` in GFM mode, a general-purpose GFM renderer from npm, standing in for
 // GitHub's renderer. Mentions and references are GitHub features marked does not have, so those
 // are checked on the text: no `@` or `#` directly followed by a word character may remain.
-const render = (md: string) => marked.parse(md, { gfm: true, async: false }) as string;
+const render = (md: string) => marked.parse(md, { gfm: true, async: false });
 
 const HOSTILE = [
   '<script>alert(1)</script>',

@@ -20,7 +20,7 @@ function textOf(name: string, span?: number): string {
     metrics: computeMetrics(spec),
     findings: r.findings,
     locations: r.locations,
-  } as never);
+  });
 }
 
 describe('renderFileText shows layer kinds and shapes', () => {

@@ -52,13 +52,22 @@ function emptyClone(source: string): string {
   return dir;
 }
 
+/** The same text, bytes or link target on both sides (a link's target is compared, not "[object Object]"). */
+function sameEntry(a: Tree[string], b: Tree[string]): boolean {
+  if (typeof a === 'string' || typeof b === 'string') return a === b;
+  if (a instanceof Uint8Array || b instanceof Uint8Array)
+    return a instanceof Uint8Array && b instanceof Uint8Array && Buffer.compare(a, b) === 0;
+  return a.symlink === b.symlink;
+}
+
 function pullFiles(base: Tree, head: Tree): FakePullFile[] {
   const files: FakePullFile[] = [];
   for (const path of new Set([...Object.keys(base), ...Object.keys(head)])) {
-    if (!(path in head)) files.push({ filename: path, status: 'removed' });
-    else if (!(path in base)) files.push({ filename: path, status: 'added' });
-    else if (String(base[path]) !== String(head[path]))
-      files.push({ filename: path, status: 'modified' });
+    const before = base[path];
+    const after = head[path];
+    if (after === undefined) files.push({ filename: path, status: 'removed' });
+    else if (before === undefined) files.push({ filename: path, status: 'added' });
+    else if (!sameEntry(before, after)) files.push({ filename: path, status: 'modified' });
   }
   return files;
 }

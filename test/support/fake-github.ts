@@ -255,7 +255,7 @@ function wrappedBase64(bytes: Uint8Array): string {
 function deepMerge(target: unknown, patch: unknown): unknown {
   if (patch === null || typeof patch !== 'object' || Array.isArray(patch)) return patch;
   const out: Record<string, unknown> = {
-    ...(target && typeof target === 'object' && !Array.isArray(target) ? (target as object) : {}),
+    ...(target && typeof target === 'object' && !Array.isArray(target) ? target : {}),
   };
   for (const [key, value] of Object.entries(patch)) out[key] = deepMerge(out[key], value);
   return out;
@@ -384,7 +384,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     return deepMerge(sampleOf('repository'), {
       name,
       full_name: fullName,
-      owner: userObject({ login: owner, type: 'User', id: 7 }),
+      owner: userObject({ login: owner ?? '', type: 'User', id: 7 }),
       fork: fullName !== `${state.owner}/${state.repo}`,
     });
   };
@@ -419,7 +419,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         ref: pull.headRef,
         label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
         repo: repoObject(pull.headRepo),
-        user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }),
+        user: userObject({ login: pull.headRepo.split('/')[0] ?? '', type: 'User', id: 8 }),
       },
     });
   };
@@ -572,7 +572,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
               ref: pull.headRef,
               label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
               repo: repoObject(pull.headRepo),
-              user: userObject({ login: pull.headRepo.split('/')[0], type: 'User', id: 8 }),
+              user: userObject({ login: pull.headRepo.split('/')[0] ?? '', type: 'User', id: 8 }),
             },
             changed_files: pull.files.length,
           }),
@@ -617,7 +617,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         const ref = query.get('ref') ?? 'main';
         if (state.failingReads?.has(`${ref}:${params.path}`))
           return { status: 502, json: { message: 'Server Error' } };
-        const found = lookup(ref, params.path);
+        const found = lookup(ref, params.path ?? '');
         if (!found)
           return notFound('https://docs.github.com/rest/repos/contents#get-repository-content');
         if (
@@ -658,7 +658,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         };
       }
       case 'repos/compare-commits-with-basehead': {
-        const [base, head] = params.basehead.split('...');
+        const [base, head] = (params.basehead ?? '').split('...');
         if (!base || !head || !state.trees.has(base) || !state.trees.has(head)) return notFound();
         // The fake keeps no commit graph: its pull requests' bases are their heads' ancestors.
         const commit = (sha: string) => deepMerge(sampleOf('commit'), { sha, node_id: `C_${sha}` });
@@ -677,7 +677,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         };
       }
       case 'git/get-tree': {
-        const tree = state.trees.get(params.tree_sha);
+        const tree = state.trees.get(params.tree_sha ?? '');
         if (!tree) return notFound();
         const entries = [...tree].map(([path, entry]) => {
           if (entry.type === 'symlink')
@@ -703,7 +703,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
           json: {
             sha: blobSha(new TextEncoder().encode(params.tree_sha)),
             url: `${url}/repos/${state.owner}/${state.repo}/git/trees/${params.tree_sha}`,
-            truncated: state.truncatedTrees?.has(params.tree_sha) ?? false,
+            truncated: state.truncatedTrees?.has(params.tree_sha ?? '') ?? false,
             tree: entries,
           },
         };

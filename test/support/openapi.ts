@@ -7,6 +7,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { Ajv } from 'ajv';
 import type { ValidateFunction } from 'ajv';
+import { elementAt } from '../../src/core/element-at.js';
 
 type Schema = Record<string, unknown>;
 
@@ -58,12 +59,19 @@ export function loadSpec(): Spec {
   return spec;
 }
 
+/** The schema a `#/components/<group>/<name>` reference names; throws for any other reference. */
+function componentAt(ref: string): Schema {
+  const match = /^#\/components\/([^/]+)\/([^/]+)$/.exec(ref);
+  const target = match && loadSpec().components[elementAt(match, 1)]?.[elementAt(match, 2)];
+  if (!target) throw new Error(`GitHub's REST description has no ${ref}`);
+  return target;
+}
+
 /** Follows `#/components/<group>/<name>` references. */
 export function resolveRef<T = Schema>(node: unknown): T {
   let current = node as Schema;
   for (let guard = 0; current && typeof current.$ref === 'string' && guard < 20; guard += 1) {
-    const [, , group, name] = (current.$ref as string).split('/');
-    current = loadSpec().components[group][name];
+    current = componentAt(current.$ref);
   }
   return current as T;
 }
@@ -86,8 +94,9 @@ function buildRoutes(): Route[] {
             literals += 1;
             return segment.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
           }
-          names.push(match[1]);
-          const multi = parameters.find((parameter) => parameter.name === match[1])?.[
+          const name = elementAt(match, 1);
+          names.push(name);
+          const multi = parameters.find((parameter) => parameter.name === name)?.[
             'x-multi-segment'
           ];
           return multi ? '(.+)' : '([^/]+)';
@@ -100,7 +109,7 @@ function buildRoutes(): Route[] {
           template,
           parameters,
           requestBody: raw.requestBody
-            ? (resolveRef(raw.requestBody) as Operation['requestBody'])
+            ? resolveRef<Operation['requestBody']>(raw.requestBody)
             : null,
           responses: raw.responses as Record<string, unknown>,
         },
@@ -124,7 +133,7 @@ function adapt(node: unknown, definitions: Record<string, unknown>): unknown {
     const key = `${group}__${name}`;
     if (!(key in definitions)) {
       definitions[key] = true;
-      definitions[key] = adapt(loadSpec().components[group][name], definitions);
+      definitions[key] = adapt(componentAt(source.$ref), definitions);
     }
     return { $ref: `#/definitions/${key}` };
   }
@@ -208,7 +217,7 @@ export function checkRequest(
   route.names.forEach((name, index) => {
     let value: string;
     try {
-      value = decodeURIComponent(match[index + 1]);
+      value = decodeURIComponent(elementAt(match, index + 1));
     } catch {
       problems.push(`path parameter ${name} is not valid percent-encoding: ${match[index + 1]}`);
       return;

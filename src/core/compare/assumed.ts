@@ -9,7 +9,6 @@ import type { FileReport } from '../inspect.js';
 import type { Assumption } from '../report/types.js';
 import { sortFindings } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
-import type { MetricPath } from '../metrics/types.js';
 import type { Finding, ModelSpec } from '../model.js';
 import { metricFindings } from '../rules/metric-rules.js';
 import { specFindings } from '../rules/spec-rules.js';

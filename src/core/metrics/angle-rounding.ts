@@ -54,8 +54,8 @@ export function overflowPosition(
 ): number | null {
   const start = positionOverflowStart(format);
   let first = start < span ? start : span;
-  for (let i = 0; i < theta.length; i++) {
-    const t = roundToFormat(theta[i], format);
+  for (const th of theta) {
+    const t = roundToFormat(th, format);
     if (!Number.isFinite(t)) return 0;
     if (first === 0 || !angleOverflows(first - 1, t, format)) continue;
     let lo = 0;
@@ -105,7 +105,7 @@ export function angleErrorMax(format: FloatFormat, theta: Float64Array, span: nu
   // Largest frequencies first: their errors are the largest, so their maximum prunes the others early.
   const order = Float64Array.from(theta).sort().reverse();
   let best = 0;
-  for (let i = 0; i < order.length; i++) best = pairAngleError(format, order[i], span, best);
+  for (const th of order) best = pairAngleError(format, th, span, best);
   return best;
 }
 
@@ -269,7 +269,7 @@ export function blurredPairs(format: FloatFormat, theta: Float64Array, span: num
   if (span < 2) return 0;
   if (span - 1 >= 2 ** significantBits(format) + 1) return theta.length;
   let n = 0;
-  for (let i = 0; i < theta.length; i++) if (pairBlurred(format, theta[i], span)) n++;
+  for (const th of theta) if (pairBlurred(format, th, span)) n++;
   return n;
 }
 

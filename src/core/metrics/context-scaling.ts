@@ -1,6 +1,7 @@
 /**
  * Context scaling of rotary frequencies, `θ_i → θ'_i` (METRICS.md, symbol `θ'_i`).
  */
+import { elementAt } from '../element-at.js';
 import type { Scaling } from '../model.js';
 import { allPositiveFinite } from './frequencies.js';
 import { positiveFinite } from './sizes.js';
@@ -102,7 +103,7 @@ export function scaleFrequencies(
   const out = new Float64Array(theta.length);
   switch (scaling.kind) {
     case 'linear':
-      for (let i = 0; i < theta.length; i++) out[i] = theta[i] / s;
+      for (const [i, t] of theta.entries()) out[i] = t / s;
       break;
     case 'ntk':
     case 'dynamic': {
@@ -113,11 +114,11 @@ export function scaleFrequencies(
     }
     case 'yarn': {
       if (trained === null) return null;
-      for (let i = 0; i < theta.length; i++) {
-        const rho = trained / ((2 * Math.PI) / theta[i]);
+      for (const [i, t] of theta.entries()) {
+        const rho = trained / ((2 * Math.PI) / t);
         const g = yarnRamp(rho, scaling.alpha, scaling.beta);
         if (g === null) return null;
-        out[i] = ((1 - g) * theta[i]) / s + g * theta[i];
+        out[i] = ((1 - g) * t) / s + g * t;
       }
       break;
     }
@@ -128,13 +129,13 @@ export function scaleFrequencies(
         !(Number.isFinite(low) && Number.isFinite(high) && low >= 0 && high > low)
       )
         return null;
-      for (let i = 0; i < theta.length; i++) {
-        const lambda = (2 * Math.PI) / theta[i];
-        if (lambda < trained / high) out[i] = theta[i];
-        else if (lambda > trained / low) out[i] = theta[i] / s;
+      for (const [i, t] of theta.entries()) {
+        const lambda = (2 * Math.PI) / t;
+        if (lambda < trained / high) out[i] = t;
+        else if (lambda > trained / low) out[i] = t / s;
         else {
           const g = (trained / lambda - low) / (high - low);
-          out[i] = ((1 - g) * theta[i]) / s + g * theta[i];
+          out[i] = ((1 - g) * t) / s + g * t;
         }
       }
       break;
@@ -142,7 +143,7 @@ export function scaleFrequencies(
     case 'pairwise': {
       const factors = pairwiseFactors(scaling, span, trained);
       if (factors === null || factors.length !== theta.length) return null;
-      for (let i = 0; i < theta.length; i++) out[i] = theta[i] / factors[i];
+      for (const [i, t] of theta.entries()) out[i] = t / elementAt(factors, i);
       break;
     }
     default:

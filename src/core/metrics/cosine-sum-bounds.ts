@@ -17,6 +17,8 @@
  * bounds, `16 ε (k1 Σθ + P² + 8P)`, covers all of it with room (about 3e-7 for P = 64, k1 = 2^24).
  */
 
+import { elementAt } from '../element-at.js';
+
 const EPS = 2 ** -53;
 const TWO_PI = 2 * Math.PI;
 
@@ -52,7 +54,7 @@ export function cosineSumBounds(theta: Float64Array, k0: number, k1: number): Co
   let lower = 0;
   let sumTheta = 0;
   for (let i = 0; i < P; i++) {
-    const th = theta[i];
+    const th = elementAt(theta, i);
     sumTheta += th;
     const width = (k1 - k0) * th;
     const delta = 8 * EPS * (k1 * th + 8);

@@ -9,6 +9,7 @@
  * above the margin positive for sure, and one within the margin is decided by the reference
  * expression (`cosineSum`). So the result is the first k with `cosineSum(θ, k) < 0`.
  */
+import { elementAt } from '../element-at.js';
 import {
   COSINE_BLOCK,
   cosineSumMargin,
@@ -43,7 +44,7 @@ export function firstNegativeOffset(
     elements += n * P;
     const margin = cosineSumMargin(plan, k0, n);
     for (let j = 0; j < n; j++) {
-      const v = buf[j];
+      const v = elementAt(buf, j);
       if (v >= margin) continue;
       if (v < -margin || cosineSum(theta, k0 + j) < 0) return { offset: k0 + j, elements };
     }

@@ -3,6 +3,7 @@
  * (`fp32`) and binary16 (`fp16`), and bfloat16 (`bf16`: 8 significant bits, binary32's exponent
  * range). Everything here is exact: no rounding through another format.
  */
+import { elementAt } from '../element-at.js';
 import type { FloatFormat } from '../model.js';
 
 interface FormatShape {
@@ -65,11 +66,11 @@ const HIGH = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
 /** exponent: `floor(log2 |x|)` exactly, for finite non-zero binary64 `x` (subnormals included). */
 export function binaryExponent(x: number): number {
   scratch[0] = x;
-  const biased = (words[HIGH] >>> 20) & 0x7ff;
+  const biased = (elementAt(words, HIGH) >>> 20) & 0x7ff;
   if (biased !== 0) return biased - 1023;
   // binary64 subnormal: scale into the normal range (exact) and read again
   scratch[0] = x * 2 ** 64;
-  return ((words[HIGH] >>> 20) & 0x7ff) - 1023 - 64;
+  return ((elementAt(words, HIGH) >>> 20) & 0x7ff) - 1023 - 64;
 }
 
 /**
@@ -79,7 +80,7 @@ export function binaryExponent(x: number): number {
 export function spacingAt(x: number, format: FloatFormat): number {
   const { bits, minExponent } = SHAPES[format];
   const e = x === 0 ? minExponent : binaryExponent(x);
-  return POW2[POW2_BIAS + Math.max(e, minExponent) - bits + 1]!;
+  return elementAt(POW2, POW2_BIAS + Math.max(e, minExponent) - bits + 1);
 }
 
 /**
@@ -95,11 +96,11 @@ export function roundToFormat(x: number, format: FloatFormat): number {
   const a = Math.abs(x);
   const q = Math.max(binaryExponent(a), minExponent) - bits + 1;
   // a / 2^q has at most `bits` integer bits; scaling by a power of two is exact here
-  const scaled = a * POW2[POW2_BIAS - q]!;
+  const scaled = a * elementAt(POW2, POW2_BIAS - q);
   let r = Math.floor(scaled);
   const rest = scaled - r;
   if (rest > 0.5 || (rest === 0.5 && r % 2 === 1)) r += 1;
-  let y = r * POW2[POW2_BIAS + q]!;
+  let y = r * elementAt(POW2, POW2_BIAS + q);
   if (y > MAX_FINITE[format]) y = Infinity;
   return x < 0 ? -y : y;
 }

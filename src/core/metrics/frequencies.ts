@@ -81,9 +81,6 @@ export function baseFrequencies(spec: ModelSpec, base?: number): Float64Array | 
 
 /** True when every entry is finite and above zero (a frequency of zero never turns). */
 export function allPositiveFinite(values: Float64Array): boolean {
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i];
-    if (!(v > 0 && v < Infinity)) return false;
-  }
+  for (const v of values) if (!(v > 0 && v < Infinity)) return false;
   return values.length > 0;
 }

@@ -3,6 +3,8 @@
  * per-pair form of `unturnedPairs` and `exposedPairs` (METRICS.md), for charts that colour them.
  */
 
+import { elementAt } from '../element-at.js';
+
 /**
  * `turning`: finishes a turn within `L0`. `unturned`: `2π/θ'_i > L0` (METRICS.md,
  * unturnedPairs). `exposed`: `θ_i L0 < 2π` and `θ'_i T > θ_i L0 (1 + 1e-9)`, reaching angles
@@ -33,12 +35,13 @@ export function pairStatuses(
 ): PairInfo[] | null {
   if (theta.length !== scaled.length || !(trained > 0) || !(span > 0)) return null;
   const out: PairInfo[] = [];
-  for (let i = 0; i < theta.length; i++) {
-    const seen = theta[i] * trained;
-    const exposed = seen < 2 * Math.PI && scaled[i] * span > seen * (1 + 1e-9);
-    const wavelength = (2 * Math.PI) / scaled[i];
+  for (const [i, th] of theta.entries()) {
+    const sc = elementAt(scaled, i);
+    const seen = th * trained;
+    const exposed = seen < 2 * Math.PI && sc * span > seen * (1 + 1e-9);
+    const wavelength = (2 * Math.PI) / sc;
     const status: PairStatus = exposed ? 'exposed' : wavelength > trained ? 'unturned' : 'turning';
-    out.push({ wavelength, unscaledWavelength: (2 * Math.PI) / theta[i], status });
+    out.push({ wavelength, unscaledWavelength: (2 * Math.PI) / th, status });
   }
   return out;
 }

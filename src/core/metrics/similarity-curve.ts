@@ -12,6 +12,7 @@
  * bucket's min and max equal, bit for bit, what the straightforward loop over k gives, and ties
  * go to the earlier offset. Memory is O(P + buckets + block), never O(T).
  */
+import { elementAt } from '../element-at.js';
 import {
   COSINE_BLOCK,
   cosineSumMargin,
@@ -52,11 +53,15 @@ export function bucketEdges(
   if (!Number.isSafeInteger(span) || span < 2 || !Number.isSafeInteger(buckets) || buckets < 1)
     return null;
   const edges = [1];
+  let last = 1;
   const logEnd = Math.log(span);
   for (let j = 1; j < buckets; j++) {
     const x = spacing === 'log' ? Math.exp((logEnd * j) / buckets) : 1 + ((span - 1) * j) / buckets;
     const edge = Math.min(span - 1, Math.round(x));
-    if (edge > edges[edges.length - 1]) edges.push(edge);
+    if (edge > last) {
+      edges.push(edge);
+      last = edge;
+    }
   }
   edges.push(span);
   return edges;
@@ -97,8 +102,8 @@ export function similarityCurve(
   let maxAt = 1;
   const close = () => {
     out.push({
-      start: edges[b],
-      end: edges[b + 1] - 1,
+      start: elementAt(edges, b),
+      end: elementAt(edges, b + 1) - 1,
       min: minSum / P,
       minAt,
       max: maxSum / P,
@@ -117,8 +122,8 @@ export function similarityCurve(
     const margin = cosineSumMargin(plan, k0, n);
     for (let j = 0; j < n; j++) {
       const k = k0 + j;
-      if (k >= edges[b + 1]) close();
-      const v = buf[j];
+      if (k >= elementAt(edges, b + 1)) close();
+      const v = elementAt(buf, j);
       const nearMin = v <= approxMin + margin;
       const nearMax = v >= approxMax - margin;
       if (!nearMin && !nearMax) continue;

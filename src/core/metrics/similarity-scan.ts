@@ -34,6 +34,7 @@
  * k) down to single blocks; for typical codes (fast pairs few next to the slow ones that keep the
  * sum high near k = 1) nearly every block is passed over, most of them inside a larger interval.
  */
+import { elementAt } from '../element-at.js';
 import { cosineSumBounds } from './cosine-sum-bounds.js';
 import {
   COSINE_BLOCK,
@@ -50,7 +51,7 @@ const FANOUT = 8;
 /** sum: `Σ_i cos(k θ'_i)` in pair order, the reference expression. */
 export function cosineSum(theta: Float64Array, k: number): number {
   let s = 0;
-  for (let i = 0; i < theta.length; i++) s += Math.cos(k * theta[i]);
+  for (let i = 0; i < theta.length; i++) s += Math.cos(k * elementAt(theta, i));
   return s;
 }
 
@@ -113,7 +114,7 @@ export function scanSimilarityRange(
     const margin = cosineSumMargin(plan, k0, n);
     let threshold = bestApprox - margin;
     for (let j = 0; j < n; j++) {
-      const v = buf[j];
+      const v = elementAt(buf, j);
       if (v >= threshold) {
         const k = k0 + j;
         const exact = exactSum(k);

@@ -3,13 +3,15 @@
  * YaRN, Eq. 13).
  */
 
+import { elementAt } from '../element-at.js';
+
 /** tokens: `min_i 2π/θ'_i` and `max_i 2π/θ'_i`; null for no pairs. */
 export function wavelengthRange(theta: Float64Array): { fastest: number; slowest: number } | null {
   if (theta.length === 0) return null;
   let fastest = Infinity;
   let slowest = 0;
-  for (let i = 0; i < theta.length; i++) {
-    const lambda = (2 * Math.PI) / theta[i];
+  for (const th of theta) {
+    const lambda = (2 * Math.PI) / th;
     if (lambda < fastest) fastest = lambda;
     if (lambda > slowest) slowest = lambda;
   }
@@ -19,7 +21,7 @@ export function wavelengthRange(theta: Float64Array): { fastest: number; slowest
 /** count: pairs with `2π/θ'_i > L0`: they never finish one turn over the trained span (METRICS.md). */
 export function unturnedPairs(theta: Float64Array, trained: number): number {
   let n = 0;
-  for (let i = 0; i < theta.length; i++) if ((2 * Math.PI) / theta[i] > trained) n++;
+  for (const th of theta) if ((2 * Math.PI) / th > trained) n++;
   return n;
 }
 
@@ -34,9 +36,9 @@ export function exposedPairs(
   span: number,
 ): number {
   let n = 0;
-  for (let i = 0; i < theta.length; i++) {
-    const seen = theta[i] * trained;
-    if (seen < 2 * Math.PI && scaled[i] * span > seen * (1 + 1e-9)) n++;
+  for (const [i, th] of theta.entries()) {
+    const seen = th * trained;
+    if (seen < 2 * Math.PI && elementAt(scaled, i) * span > seen * (1 + 1e-9)) n++;
   }
   return n;
 }

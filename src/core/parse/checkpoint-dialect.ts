@@ -49,7 +49,7 @@ import {
 import type { SourceMapping, SourceValue } from './source.js';
 import { readLatent, readMixture } from './checkpoint-experts.js';
 import { readLayerPlan } from './checkpoint-layers.js';
-import { familyOf, type CheckpointFamily } from './checkpoint-families.js';
+import { familyOf } from './checkpoint-families.js';
 import {
   checkSections,
   readPairwise,
@@ -58,6 +58,7 @@ import {
 } from './checkpoint-scaling.js';
 import { readMptAttention } from './checkpoint-mpt.js';
 import { isCount } from '../metrics/sizes.js';
+import { elementAt } from '../element-at.js';
 
 /** Keys whose presence marks a mapping as a checkpoint-style model config. */
 export const CHECKPOINT_MARKERS: readonly string[] = [
@@ -132,8 +133,9 @@ export function isCheckpointConfig(value: SourceMapping): boolean {
 
 /** Reads a checkpoint-style config from `r.root` into a draft; every problem becomes a finding on `r`. */
 export function readCheckpoint(r: FieldReader): SpecDraft {
-  const modelType =
-    typeof r.get(['model_type']) === 'string' ? String(r.get(['model_type'])).toLowerCase() : null;
+  const modelType = ((t) => (typeof t === 'string' ? t.toLowerCase() : null))(
+    r.get(['model_type']),
+  );
   const family = familyOf(modelType);
   if (family?.published !== undefined) r.useDefaults(family.published.values);
   const gpt2Style = r.has(['n_embd']) || r.has(['n_layer']);
@@ -154,7 +156,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     if (!required) return undefined;
     const also =
       candidates.length > 1 ? ` (read from ${candidates.join(', ')}, the first present)` : '';
-    return r.missing([candidates[0]], `${what}${also}`);
+    return r.missing([elementAt(candidates, 0)], `${what}${also}`);
   };
 
   const hidden = size('hidden', ['hidden_size', 'n_embd', 'd_model'], 'the model width', true)!;
@@ -344,7 +346,7 @@ function readBias(
     const values = stated.map((p) => ({ p, v: r.flag('bias', p) }));
     const on = values.find((x) => x.v === true);
     if (on) r.locate('bias', on.p);
-    else r.locate('bias', values[0].p);
+    else r.locate('bias', elementAt(values, 0).p);
     return on ? true : values.some((x) => x.v === false) ? false : undefined;
   }
   if (familyOf(modelType)?.bias === true || (modelType === null && gpt2Style)) {
@@ -450,7 +452,10 @@ function readPosition(
     r.locate('position', ['sinusoidal_pos_embds']);
     kind = 'sinusoidal';
   } else if (rotaryKeys.length > 0 || mptRotary) {
-    r.locate('position', rotaryKeys.length > 0 ? [rotaryKeys[0]] : ['attn_config', 'rope']);
+    r.locate(
+      'position',
+      rotaryKeys.length > 0 ? [elementAt(rotaryKeys, 0)] : ['attn_config', 'rope'],
+    );
     kind = 'rotary';
   } else if (
     modelType === 'mpt' &&
@@ -510,7 +515,7 @@ function readPosition(
 
 /** T5-style relative position buckets: `relative_attention_num_buckets` and `relative_attention_max_distance`. */
 function readBuckets(r: FieldReader, modelType: string | null, stated: string[]): PositionDraft {
-  r.locate('position', stated.length > 0 ? [stated[0]] : ['model_type']);
+  r.locate('position', stated.length > 0 ? [elementAt(stated, 0)] : ['model_type']);
   const buckets = r.count('position.buckets', ['relative_attention_num_buckets'], 'buckets');
   const maxDistance = r.count(
     'position.maxDistance',
@@ -535,8 +540,9 @@ function readRotary(r: FieldReader, headDim: number, declaredSpan: number): Posi
   if (isMapping(rp)) {
     const nested = Object.keys(rp).filter((k) => isMapping(rp[k]));
     if (nested.length > 0 && !('rope_type' in rp) && !('rope_theta' in rp)) {
-      const chosen = nested.includes('full_attention') ? 'full_attention' : nested[0];
-      params = ['rope_parameters', chosen];
+      const chosen = nested.includes('full_attention') ? 'full_attention' : elementAt(nested, 0);
+      const chosenPath: PathSegment[] = ['rope_parameters', chosen];
+      params = chosenPath;
       // The local layers' block is read by the layer reader (checkpoint-layers.ts).
       for (const other of nested.filter(
         (k) => k !== chosen && !(chosen === 'full_attention' && k === 'sliding_attention'),
@@ -544,7 +550,7 @@ function readRotary(r: FieldReader, headDim: number, declaredSpan: number): Posi
         r.report(
           'key-ignored',
           ['rope_parameters', other],
-          `${r.key(['rope_parameters', other])} is not read: one rotary code describes the model, taken from ${r.key(params)}`,
+          `${r.key(['rope_parameters', other])} is not read: one rotary code describes the model, taken from ${r.key(chosenPath)}`,
         );
       }
     } else params = ['rope_parameters'];

@@ -25,7 +25,6 @@ type SizeReader = (
   required: boolean,
 ) => number | undefined;
 
-
 /**
  * Reads the experts block; null for a dense model. Llama-4-style configs (families with `oneSharedExpert`)
  * write the expert width as `intermediate_size` and the dense layers' width as

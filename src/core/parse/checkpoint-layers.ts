@@ -315,9 +315,7 @@ function readPositionFree(
     every = stated;
   } else r.locate('positionFreeLayers', ['model_type']);
   if (n === null || every === undefined) return null;
-  const free = Array.from({ length: n }, (_, i) => i).filter(
-    (i) => (i + 1) % (every as number) === 0,
-  );
+  const free = Array.from({ length: n }, (_, i) => i).filter((i) => (i + 1) % every === 0);
   return free.length > 0 ? free : null;
 }
 

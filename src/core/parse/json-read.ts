@@ -25,6 +25,7 @@ import {
 } from './source-document.js';
 import { checkJson, jsonStandIn, jsonSyntaxErrorOffset } from './json-syntax.js';
 import { MAX_ENTRIES, MAX_NESTING } from './yaml.js';
+import { nullRecord } from '../null-record.js';
 
 const OPEN_OBJECT = 0x7b;
 const CLOSE_OBJECT = 0x7d;
@@ -192,7 +193,7 @@ class JsonBuilder {
 
   private mapping(path: PathLink): SourceMapping {
     const text = this.text;
-    const out: SourceMapping = Object.create(null);
+    const out: SourceMapping = nullRecord();
     const notes = this.notes.open(out);
     this.i++;
     this.skipSpace();

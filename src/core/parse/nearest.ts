@@ -1,3 +1,5 @@
+import { elementAt } from '../element-at.js';
+
 /**
  * Edit distance between two names: insertions, deletions, substitutions and swaps of two
  * neighbouring characters each cost 1 (optimal string alignment distance, Damerau 1964),
@@ -14,15 +16,19 @@ export function editDistance(a: string, b: string): number {
     row[0] = i;
     for (let j = 1; j <= t.length; j += 1) {
       const cost = s[i - 1] === t[j - 1] ? 0 : 1;
-      let best = Math.min(previous[j] + 1, row[j - 1] + 1, previous[j - 1] + cost);
+      let best = Math.min(
+        elementAt(previous, j) + 1,
+        elementAt(row, j - 1) + 1,
+        elementAt(previous, j - 1) + cost,
+      );
       if (i > 1 && j > 1 && s[i - 1] === t[j - 2] && s[i - 2] === t[j - 1])
-        best = Math.min(best, before[j - 2] + 1);
+        best = Math.min(best, elementAt(before, j - 2) + 1);
       row[j] = best;
     }
     before = previous;
     previous = row;
   }
-  return previous[t.length];
+  return elementAt(previous, t.length);
 }
 
 /**

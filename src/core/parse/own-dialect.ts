@@ -377,7 +377,7 @@ function readShapes(
   const free = r.get([...lp, 'position-free']);
   if (Array.isArray(free) && free.every((i) => typeof i === 'number')) {
     r.locate('positionFreeLayers', [...lp, 'position-free']);
-    if (free.length > 0) out.positionFreeLayers = free as number[];
+    if (free.length > 0) out.positionFreeLayers = free;
   }
   if (r.has(m('chunked-attention'))) {
     out.chunkSize = need(
@@ -508,7 +508,7 @@ function readScaling(r: FieldReader, at: string[]): ScalingDraft | null {
   if (kind === 'pairwise') {
     const list = (key: string): number[] | null => {
       const v = r.get([...at, key]);
-      return Array.isArray(v) && v.every((x) => typeof x === 'number') ? (v as number[]) : null;
+      return Array.isArray(v) && v.every((x) => typeof x === 'number') ? v : null;
     };
     draft.shortFactors = list('short-factors');
     draft.longFactors = list('long-factors');
@@ -553,7 +553,8 @@ function readScaling(r: FieldReader, at: string[]): ScalingDraft | null {
 function schemaFinding(r: FieldReader, error: ErrorObject): void {
   const pointer = error.instancePath;
   // Numbers of the wrong kind (1e400, 2.5 layers) are the readers' and the spec rules' to report.
-  const expects = String((error.params as { type?: unknown }).type ?? '');
+  // ajv's `type` parameter is the schema's type: one name, as model.schema.json never lists several.
+  const expects = (error.params as { type?: unknown }).type;
   if (
     error.keyword === 'type' &&
     typeof error.data === 'number' &&

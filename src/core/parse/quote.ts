@@ -73,5 +73,5 @@ export function quoteValue(v: unknown, literal: string | null = null): string {
   if (literal !== null && literal.trim() !== '') return truncate(literal.trim());
   if (v === null || v === undefined) return 'empty';
   if (typeof v === 'number') return literalNumber(v);
-  return String(v);
+  return typeof v === 'boolean' || typeof v === 'bigint' ? String(v) : 'a value';
 }

@@ -23,6 +23,7 @@ import { reportUnreadKeys } from './unread-keys.js';
 import { RULES } from '../rules/catalog.js';
 import { parseSource } from './source.js';
 import type { SourceDocument, SourceMapping, SourceValue } from './source.js';
+import { elementAt } from '../element-at.js';
 
 export interface ModelRead {
   dialect: Dialect;
@@ -110,7 +111,8 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
 /** One `family-default-taken` finding listing every default a sparse config relied on. */
 function defaultsTaken(r: FieldReader): void {
   if (r.defaultsUsed.length === 0) return;
-  const type = String(r.get(['model_type'])).toLowerCase();
+  const modelType = r.get(['model_type']);
+  const type = typeof modelType === 'string' ? modelType.toLowerCase() : '';
   const family = familyOf(type)?.published;
   if (family === undefined) return;
   const values = r.defaultsUsed.map((k) => `${k} ${JSON.stringify(family.values[k])}`).join(', ');
@@ -161,7 +163,7 @@ function notAModel(
   const line =
     prefix.length === 0
       ? Object.keys(root).length > 0
-        ? doc.lineOf([Object.keys(root)[0]])
+        ? doc.lineOf([elementAt(Object.keys(root), 0)])
         : null
       : doc.lineOf(prefix);
   // A model nested one level down (multimodal configs keep it under text_config) is worth naming.
@@ -169,8 +171,7 @@ function notAModel(
     (k) =>
       !TOWER_KEY.test(k) &&
       isMapping(root[k]) &&
-      (detectDialect(root[k] as SourceMapping) !== null ||
-        isLanguageModelBlock(root[k] as SourceMapping)),
+      (detectDialect(root[k]) !== null || isLanguageModelBlock(root[k])),
   );
   const hint =
     nested === undefined

@@ -71,7 +71,8 @@ export function readYamlSource(text: string, file: string, json: boolean): Sourc
     if (error instanceof YamlLimitError) throw limitError(error, file);
     throw error;
   }
-  const { doc, lineAt } = composed;
+  const doc = composed.doc;
+  const lineAt = (offset: number): number => composed.lineAt(offset);
   const problem = doc.errors[0] ?? doc.warnings[0];
   if (problem) throw syntaxError(problem, text, file, lineAt);
   const root = doc.contents ?? null;

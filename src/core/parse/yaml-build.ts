@@ -19,6 +19,7 @@ import {
   type SourceValue,
 } from './source-document.js';
 import { MAX_ALIASES, MAX_ALIAS_VALUES, MAX_NESTING } from './yaml.js';
+import { nullRecord } from '../null-record.js';
 
 type Ranged = { range?: [number, number, number] | null } | null | undefined;
 
@@ -56,7 +57,7 @@ export class YamlBuilder {
       );
     }
     if (isMap(node)) {
-      const out: SourceMapping = Object.create(null);
+      const out: SourceMapping = nullRecord();
       const notes = this.notes.open(out);
       for (const pair of node.items) {
         const key = this.key(pair.key, path, notes);

@@ -1,3 +1,4 @@
+import { nullRecord } from '../null-record.js';
 import type { Policy } from './types.js';
 
 /** Where a repository keeps its policy (default: `.github/context-reach.yml`). */
@@ -35,10 +36,10 @@ export const DEFAULT_POLICY: Policy = Object.freeze({
   files: DEFAULT_FILES,
   exclude: DEFAULT_EXCLUDE,
   serving: Object.freeze({}),
-  limits: Object.freeze(Object.create(null)),
-  rules: Object.freeze(Object.create(null)),
+  limits: Object.freeze(nullRecord<Policy['limits'][string]>()),
+  rules: Object.freeze(nullRecord<Policy['rules'][string]>()),
   overrides: Object.freeze([]),
   standing: 'report',
   waiverLabel: null,
-  locations: Object.freeze(Object.create(null)),
+  locations: Object.freeze(nullRecord<Policy['locations'][string]>()),
 });

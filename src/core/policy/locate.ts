@@ -21,12 +21,12 @@ function keyText(key: unknown): string | null {
 }
 
 export function nodeAt(doc: Document, path: KeyPath): Located {
-  let node = (doc.contents ?? null) as Node | null;
+  let node = doc.contents ?? null;
   let key: Node | null = null;
   let nearest: Node | null = node;
   for (const segment of path) {
     // Aliases stand for their anchor; the guard on alias count already ran in toJS.
-    if (node && isAlias(node)) node = (node.resolve(doc) ?? null) as Node | null;
+    if (node && isAlias(node)) node = node.resolve(doc) ?? null;
     if (node && isMap(node)) {
       const pair = node.items.find((item) => keyText(item.key) === String(segment));
       if (!pair) return { value: null, key: null, nearest };

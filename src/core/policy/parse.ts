@@ -32,6 +32,8 @@ import type {
   RuleTable,
   Standing,
 } from './types.js';
+import { elementAt } from '../element-at.js';
+import { nullRecord } from '../null-record.js';
 
 /** Problems listed in one error at most; the rest are counted. */
 const MAX_PROBLEMS = 20;
@@ -69,7 +71,7 @@ export class PolicyError extends Error {
   readonly problems: readonly PolicyProblem[];
 
   constructor(problems: readonly PolicyProblem[]) {
-    const first = problems[0];
+    const first = elementAt(problems, 0);
     const more =
       problems.length > 1
         ? ` (and ${problems.length - 1} more: ${problems.slice(1).map(formatProblem).join('; ')})`
@@ -89,7 +91,7 @@ function quote(value: unknown): string {
   if (Array.isArray(value)) return 'a list';
   if (typeof value === 'object') return 'a mapping';
   if (typeof value === 'number') return literalNumber(value);
-  return typeof value === 'string' ? quoteText(value) : String(value);
+  return typeof value === 'string' ? quoteText(value) : (JSON.stringify(value) ?? 'nothing');
 }
 
 const TYPE_WORDS: Record<string, string> = {
@@ -245,14 +247,15 @@ function yamlMessage(
   offsets: [number, number],
 ): string {
   if (code === 'DUPLICATE_KEY') {
-    const key = text
-      .slice(offsets[0], offsets[0] + 200)
-      .split(/[:\n]/)[0]
-      .trim();
+    const key =
+      text
+        .slice(elementAt(offsets, 0), elementAt(offsets, 0) + 200)
+        .split(/[:\n]/)[0]
+        ?.trim() ?? '';
     return `duplicate key ${quote(key)}; expected each key once per mapping`;
   }
   if (/call stack/i.test(message)) return 'nested too deeply; expected a policy a few levels deep';
-  const first = message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
+  const first = (message.split('\n')[0] ?? '').replace(/ at line \d+, column \d+:?$/, '');
   return `not valid YAML: ${first}`;
 }
 
@@ -361,13 +364,13 @@ export function servingPatchOf(block: PolicyServingBlock): ServingPatch {
   for (const [written, field] of SERVING_FIELDS) {
     if (block[written] !== undefined) patch[field] = block[written];
   }
-  return patch as ServingPatch;
+  return patch;
 }
 
 function limitTable(
   limits: Record<string, Record<string, unknown> | null> | undefined,
 ): LimitTable {
-  const table: Record<string, LimitSetting | null> = Object.create(null);
+  const table: Record<string, LimitSetting | null> = nullRecord();
   for (const [metric, entry] of Object.entries(limits ?? {})) {
     if (entry === null) {
       table[metric] = null;
@@ -385,7 +388,7 @@ function limitTable(
 }
 
 function ruleTable(rules: Record<string, RuleLevel> | undefined): RuleTable {
-  const table: Record<string, RuleLevel> = Object.create(null);
+  const table: Record<string, RuleLevel> = nullRecord();
   for (const [id, level] of Object.entries(rules ?? {})) table[id] = level;
   return table;
 }
@@ -543,7 +546,7 @@ export function parsePolicy(text: string, path: string): Policy {
     standing?: Standing;
     'waiver-label'?: string;
   };
-  const locations: Record<string, SourceLocation> = Object.create(null);
+  const locations: Record<string, SourceLocation> = nullRecord();
   for (const key of ['files', 'exclude', 'standing', 'waiver-label']) {
     if (checked[key as keyof typeof checked] !== undefined) {
       const located = nodeAt(doc, [key]);

@@ -5,8 +5,9 @@
 import picomatch from 'picomatch';
 import type { Limit } from './judging.js';
 import { METRIC_PATHS } from '../metrics/metric-path.js';
-import type { ServingPatch, Severity, SourceLocation } from '../model.js';
+import type { Severity, SourceLocation } from '../model.js';
 import type { FilePolicy, LimitSetting, Policy, PolicyOverride, RuleLevel } from './types.js';
+import { nullRecord } from '../null-record.js';
 
 type Matcher = (path: string) => boolean;
 
@@ -82,9 +83,9 @@ interface LimitState extends LimitSetting {
 export function resolvePolicy(policy: Policy, filePath: string): FilePolicy {
   const file = normalise(filePath);
   const serving: Record<string, unknown> = {};
-  const rules: Record<string, RuleLevel> = Object.create(null);
+  const rules: Record<string, RuleLevel> = nullRecord();
   const limits = new Map<string, LimitState>();
-  const origins: Record<string, SourceLocation> = Object.create(null);
+  const origins: Record<string, SourceLocation> = nullRecord();
   const where = (name: string): SourceLocation =>
     policy.locations[name] ?? { key: name, line: null };
 
@@ -123,7 +124,7 @@ export function resolvePolicy(policy: Policy, filePath: string): FilePolicy {
     if (matcherFor(override.files)(file)) layer(override, `overrides[${index}].`);
   });
 
-  const resolved: Record<string, Limit> = Object.create(null);
+  const resolved: Record<string, Limit> = nullRecord();
   // Contract order, so reports list limits the same way every time.
   for (const metric of METRIC_PATHS) {
     const state = limits.get(metric);
@@ -139,7 +140,7 @@ export function resolvePolicy(policy: Policy, filePath: string): FilePolicy {
     limits: resolved,
     rules,
     standing: policy.standing,
-    serving: serving as ServingPatch,
+    serving: serving,
     waiverLabel: policy.waiverLabel,
     origins,
   };
@@ -152,6 +153,6 @@ export function ruleLevel(
   ownSeverity: Severity,
 ): RuleLevel {
   return Object.prototype.hasOwnProperty.call(filePolicy.rules, ruleId)
-    ? filePolicy.rules[ruleId]
+    ? (filePolicy.rules[ruleId] ?? ownSeverity)
     : ownSeverity;
 }

@@ -19,7 +19,7 @@ import { firstNegativeOffset } from '../metrics/first-negative.js';
 import { baseFrequencies } from '../metrics/frequencies.js';
 import { similarityScan } from '../metrics/similarity-scan.js';
 import { MAX_REMEDY_SCAN_WORK, MAX_SCAN_WORK } from '../metrics/scan-limits.js';
-import { viaMemo, type ScanMemo } from '../metrics/scan-memo.js';
+import { viaMemo } from '../metrics/scan-memo.js';
 import { positiveCount } from '../metrics/sizes.js';
 import { evaluationSpan, trainedSpan } from '../metrics/spans.js';
 import { bytesPerElement, cacheDType, weightDType } from '../metrics/storage-bytes.js';

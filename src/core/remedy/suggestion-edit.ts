@@ -87,7 +87,7 @@ export function lineEdit(
     const value =
       patch.format === 'json' ? jsonValue(edit.field, edit.value) : yamlValue(edit.value);
     const next =
-      edited[index] === undefined ? null : setOnLine(edited[index]!, key, value, patch.format);
+      edited[index] === undefined ? null : setOnLine(edited[index], key, value, patch.format);
     if (next === null) return null;
     edited[index] = next;
     touched.add(index);

@@ -27,6 +27,7 @@ import { truncate } from '../parse/quote.js';
 import { RULES } from '../rules/catalog.js';
 import type { GateReport } from './types.js';
 import { tally, verdictOf } from './verdict.js';
+import { nullRecord } from '../null-record.js';
 
 /** Longest report read back, in UTF-16 code units (default: `67108864`, 64 Mi). */
 export const MAX_REPORT_CHARS = 64 * 1024 * 1024;
@@ -426,7 +427,7 @@ function describe(error: ErrorObject, root: unknown): string {
 /** Numbers the spec types as always present were NaN when written; JSON wrote them as null. */
 function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
   if (value === null || typeof value !== 'object' || Array.isArray(value)) return value;
-  const out: Record<string, unknown> = Object.create(null);
+  const out: Record<string, unknown> = nullRecord();
   for (const [key, entry] of Object.entries(value)) {
     out[key] = entry === null && !nullable.has(key) ? NaN : restoreNaN(entry, nullable);
   }

@@ -16,7 +16,6 @@ import {
   figure,
   frame,
   hRule,
-  innerHeight,
   powerOfTenLabel,
   powerOfTenTicks,
   tokenLabel,
