@@ -78,7 +78,7 @@ describe('float-format: IEEE 754 limits', () => {
     }
   });
 
-  it('maxFinite(format) is 65504 for binary16 and ≈3.3895e38 for bfloat16 (SOURCES.md §13)', () => {
+  it('maxFinite(format) is 65504 for binary16 and ≈3.3895e38 for bfloat16 (IEEE 754-2008 binary16; bfloat16: 8 exponent bits, 8-bit precision)', () => {
     expect(maxFinite('fp16')).toBe(65504);
     // (2 - 2^-7) 2^127 = 3.3895313892515355e38; relative 1e-4 because the source prints 5 digits
     expect(Math.abs(maxFinite('bf16') / 3.3895e38 - 1)).toBeLessThan(1e-4);

@@ -1,6 +1,6 @@
 /**
  * Similarity of a code with itself at offset k, `S(k) = (1/P) Σ_i cos(k θ'_i)`, scanned over
- * every k in [1, T): `separationFloor`, `separationFloorOffset` (METRICS.md) and
+ * every k in [1, T): `separationFloor`, `separationFloorOffset` (docs/metrics.md) and
  * `discriminationSpan`, the first k with `Σ_i cos(k θ'_i) < 0` (Men et al. 2024, "Base of RoPE
  * Bounds Context Length", Thm 1, Eqs. 9–10).
  *
@@ -54,7 +54,7 @@ export function cosineSum(theta: Float64Array, k: number): number {
   return s;
 }
 
-/** 0..2: `sqrt(2 (1 - S(k)))` with `S(k) = cosineSum / P` (METRICS.md, separationFloor). */
+/** 0..2: `sqrt(2 (1 - S(k)))` with `S(k) = cosineSum / P` (docs/metrics.md, separationFloor). */
 export function separationAt(theta: Float64Array, k: number): number {
   return Math.sqrt(2 * (1 - cosineSum(theta, k) / theta.length));
 }
@@ -163,7 +163,7 @@ export function scanSimilarityRange(
 
 /**
  * 0..2, tokens, tokens: `separationFloor`, `separationFloorOffset`, `discriminationSpan` over
- * k in [1, T) (METRICS.md); all null when `T < 2`, there are no pairs, or the scan is past
+ * k in [1, T) (docs/metrics.md); all null when `T < 2`, there are no pairs, or the scan is past
  * `MAX_SCAN_SPAN` / `MAX_SCAN_ELEMENTS`. When the scan stops at `MAX_SCAN_WORK` the floor and
  * its offset are null and `complete` is false; a first negative sum found before the stop is
  * still exact (offsets are decided in order), otherwise it is null too.

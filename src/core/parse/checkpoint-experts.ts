@@ -1,5 +1,5 @@
 /**
- * Checkpoint-style configs: mixtures of experts and latent attention (METRICS.md, "Mixtures of
+ * Checkpoint-style configs: mixtures of experts and latent attention (docs/metrics.md, "Mixtures of
  * experts and latent attention"), keyed as the published configs write them:
  * - Experts: `num_local_experts`, `num_experts` or `n_routed_experts` (a stated 0 or 1 is a dense
  *   model) with `num_experts_per_tok`; routed width `moe_intermediate_size` (default: the

@@ -1,5 +1,5 @@
 /**
- * Checkpoint-style configs: which decoder layers attend how (METRICS.md, "Layers that differ"),
+ * Checkpoint-style configs: which decoder layers attend how (docs/metrics.md, "Layers that differ"),
  * keyed as the published configs write it:
  * - `layer_types`: one entry per layer, `sliding_attention`, `full_attention` or
  *   `chunked_attention`.
