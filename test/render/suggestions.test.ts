@@ -18,17 +18,16 @@ const texts = new Map([
   [Q8B, head[Q8B]!],
 ]);
 const all = (n: number) => new Set(Array.from({ length: n }, (_, i) => i + 1));
+/** Every line of both demo files in the diff. */
+const wholeDiff = () =>
+  new Map([
+    [MINI, all(40)],
+    [Q8B, all(20)],
+  ]);
 
 describe('planSuggestions(report, texts, diffLines)', () => {
   it("turns each blocking finding's first whole-line fix into a suggestion whose file still reads (JSON stays JSON)", () => {
-    const planned = planSuggestions(
-      report,
-      texts,
-      new Map([
-        [MINI, all(40)],
-        [Q8B, all(20)],
-      ]),
-    );
+    const planned = planSuggestions(report, texts, wholeDiff());
     expect(planned.map((p) => [p.path, p.startLine, p.line])).toEqual([
       [Q8B, 12, 12],
       [MINI, 20, 20],
@@ -138,14 +137,7 @@ describe('planSuggestions(report, …) on a report read back with tampered rule 
         if (finding.metric)
           finding.metric = `${finding.metric}\` [x](https://evil.example)` as never;
       }
-    const planned = planSuggestions(
-      tampered,
-      texts,
-      new Map([
-        [MINI, all(40)],
-        [Q8B, all(20)],
-      ]),
-    );
+    const planned = planSuggestions(tampered, texts, wholeDiff());
     expect(planned.length).toBeGreaterThan(0);
     for (const p of planned) {
       const lead = p.body.split('\n')[1]!;
