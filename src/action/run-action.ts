@@ -1,5 +1,5 @@
 import type { ChangedFile } from '../core/changes.js';
-
+import type { GateReport, Verdict } from '../core/report/types.js';
 import { runGate, type ContentSource } from '../core/gate.js';
 import { planAnnotations } from '../core/render/annotations.js';
 import { renderComment } from '../core/render/comment.js';
@@ -21,7 +21,6 @@ import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { runPublish } from './publish.js';
 import { createReviewApi, publishSuggestions, type ReviewApi } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
-import type { GateReport, Verdict } from '../core/report/types.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
 export interface ActionDeps {

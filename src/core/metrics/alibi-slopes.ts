@@ -15,9 +15,9 @@ function powerOfTwoSlopes(n: number): number[] {
 
 /**
  * per token: `alibiSlopes` for n heads: `2^(-8j/n)` for n a power of two (Press et al. 2022,
- * §3); otherwise the authors' published code (`get_slopes` in fairseq's `models/transformer.py`): the slopes for the
- * largest power of two `n0 < n`, then every other slope of the `2 n0` sequence from the first,
- * until n slopes. Null for n not a whole number in [1, MAX_ALIBI_HEADS].
+ * §3); otherwise the authors' published code (`get_slopes` in fairseq's
+ * `models/transformer.py`): the slopes for the largest power of two `n0 < n`, then every other
+ * slope of the `2 n0` sequence from the first, until n slopes. Null for n not a whole number in [1, MAX_ALIBI_HEADS].
  */
 export function alibiSlopes(heads: number): number[] | null {
   const n = positiveCount(heads);

@@ -1,5 +1,5 @@
 /**
- * The metric engine: every metric of the contract (shared docs/metrics.md) for one model spec. The
+ * The metric engine: every metric of the contract (docs/metrics.md) for one model spec. The
  * spec arrives with serving values from the CLI or policy merged in; documented defaults are
  * applied here; degenerate sizes give null metrics, never NaN, Infinity or an exception.
  */

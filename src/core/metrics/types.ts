@@ -1,5 +1,5 @@
 /**
- * Every metric of the contract (shared docs/metrics.md), under exactly its name there. `null` where a
+ * Every metric of the contract (docs/metrics.md), under exactly its name there. `null` where a
  * metric does not apply or its inputs are degenerate.
  */
 import type { FloatFormat, LayerAttention, PositionKind } from '../model.js';

@@ -49,8 +49,8 @@ export const EXPERT_KEYS: readonly string[] = [
 ];
 
 /**
- * Reads the experts block; null for a dense model. Llama-4-style configs (families with `oneSharedExpert`)
- * write the expert width as `intermediate_size` and the dense layers' width as
+ * Reads the experts block; null for a dense model. Llama-4-style configs (families with
+ * `oneSharedExpert`) write the expert width as `intermediate_size` and the dense layers' width as
  * `intermediate_size_mlp`; their mixture layers are `moe_layers`, else every
  * `interleave_moe_layer_step`th layer; `denseFfn` then replaces the feed-forward width.
  */

@@ -1,16 +1,15 @@
 import { markdownTable } from 'markdown-table';
-
 import { METRIC_PATHS, metricValue as metricOf } from '../metrics/metric-path.js';
 import type { MetricPath } from '../metrics/types.js';
 import type { LocationMap, ModelSpec } from '../model.js';
 import { filePatches, type FilePatch } from '../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
 import type {
-  Remedy,
   FileDecision,
   GateReport,
   JudgedFinding,
   MetricDelta,
+  Remedy,
 } from '../report/types.js';
 import { formatInteger, formatNumber } from '../format/units.js';
 import {
