@@ -7,7 +7,7 @@
  * request comes from GitHub, never from the report: the one open pull request whose head is the
  * triggering run's head commit, confirmed through the API.
  */
-
+import type { GateReport } from '../core/report/types.js';
 import { renderComment } from '../core/render/comment.js';
 import { readGateJson } from '../core/report/read.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
@@ -17,7 +17,6 @@ import type { GitHubClient } from '../adapters/github-rest.js';
 import { publishComment } from './report-comment.js';
 import type { Settings } from './inputs.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
-import type { GateReport } from '../core/report/types.js';
 
 /** Largest report file read, in bytes (default: `64 MiB`); a report that large is thousands of files. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;

@@ -1,5 +1,5 @@
 import type { ChangedFile } from '../core/changes.js';
-
+import type { GateReport, Verdict } from '../core/report/types.js';
 import { runGate, type ContentSource } from '../core/gate.js';
 import { planAnnotations } from '../core/render/annotations.js';
 import { renderComment } from '../core/render/comment.js';
@@ -24,7 +24,6 @@ import { runPublish } from './publish.js';
 import { publishComment } from './report-comment.js';
 import { publishSuggestions } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
-import type { GateReport, Verdict } from '../core/report/types.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
 export interface ActionDeps {

@@ -7,11 +7,11 @@ import { renderDiffText } from '../core/render/diff-text.js';
 import { renderGateJson } from '../core/render/gate-json.js';
 import { renderHtmlReport } from '../core/render/html-report.js';
 import { createGitReader, gitContentSource, type GitReader } from '../adapters/git.js';
+import type { GateReport } from '../core/report/types.js';
 import type { Console } from './console.js';
 import { optionLines, SERVING_FLAGS, SERVING_HELP, UsageError, servingPatch } from './options.js';
 import { diffWorktree } from './diff-worktree.js';
 import { terminalStyle } from './terminal.js';
-import type { GateReport } from '../core/report/types.js';
 
 export const DIFF_USAGE = `usage: context-reach diff [--base REF] [--head REF] [--policy FILE]
        [--format text|markdown|json] [--fail-on block|warn|never] [--label NAME]... [--html FILE]

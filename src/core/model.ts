@@ -21,7 +21,7 @@ export const STORAGE_DTYPES: readonly StorageDType[] = [
 ];
 
 /**
- * Context-extension schemes for rotary codes (METRICS.md, symbol θ'_i). `pairwise`: one factor
+ * Context-extension schemes for rotary codes (docs/metrics.md, symbol θ'_i). `pairwise`: one factor
  * per frequency pair, `θ'_i = θ_i / factor_i` (LongRoPE, Ding et al. 2024; the checkpoint key
  * `longrope`, formerly `su`).
  */
@@ -112,10 +112,10 @@ export interface EncoderStack {
   ffn: number;
 }
 
-// --- Experts, latent attention, layers that differ, encoder-only (METRICS.md, "Mixtures of experts
+// --- Experts, latent attention, layers that differ, encoder-only (docs/metrics.md, "Mixtures of experts
 // and latent attention", "Layers that differ"). Optional fields: absent is the documented default.
 
-/** A mixture-of-experts feed-forward (METRICS.md, "Mixtures of experts and latent attention"). */
+/** A mixture-of-experts feed-forward (docs/metrics.md, "Mixtures of experts and latent attention"). */
 export interface Experts {
   /** Routed experts `E`. */
   total: number;
@@ -173,7 +173,7 @@ export interface Serving {
 }
 
 /**
- * A weight quantization (METRICS.md, "Quantized weights"): the linear weight matrices of the
+ * A weight quantization (docs/metrics.md, "Quantized weights"): the linear weight matrices of the
  * layers stored at `bits` per weight plus a scale per group (and a zero point where the method
  * stores one); embeddings, norms and, unless `output` says so, the output matrix stay unquantized.
  */

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createGitReader } from '../../src/adapters/git.js';
+import type { GateReport } from '../../src/core/report/types.js';
 import { runGate, type ContentRequest, type ContentSource } from '../../src/core/gate.js';
 import { renderGateJson } from '../../src/core/render/gate-json.js';
 import {
@@ -8,7 +9,6 @@ import {
   type ScenarioRepo,
   type Tree,
 } from '../support/scenario-repo.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 // The gate reads the versions of all files with one batched call per run when the source
 // offers readMany (the git adapter does), and must judge exactly as it does reading file by file.

@@ -83,7 +83,7 @@ describe('similarityCurve(theta, span, buckets, spacing)', () => {
     const curve = similarityCurve(theta, 65536, 200)!;
     const scan = similarityScan(theta, 65536);
     const highest = Math.max(...curve.map((b) => b.max));
-    // separationFloor = min_k sqrt(2(1 - S(k))) (METRICS.md), so it is the largest S: the same number through the same expression.
+    // separationFloor = min_k sqrt(2(1 - S(k))) (docs/metrics.md), so it is the largest S: the same number through the same expression.
     expect(Math.sqrt(2 * (1 - highest))).toBe(scan.separationFloor);
     const first = curve.find((b) => b.min < 0)!;
     expect(scan.discriminationSpan).toBeGreaterThanOrEqual(first.start);
@@ -115,7 +115,7 @@ describe('similarityCurve(theta, span, buckets, spacing)', () => {
 });
 
 describe('pairStatuses(theta, scaled, trained, span)', () => {
-  it('tallies to exposedPairs and, by wavelength, to unturnedPairs (METRICS.md)', () => {
+  it('tallies to exposedPairs and, by wavelength, to unturnedPairs (docs/metrics.md)', () => {
     const theta = geometricFrequencies(1e6, 128)!;
     const scaling = {
       kind: 'yarn' as const,

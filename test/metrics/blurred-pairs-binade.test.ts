@@ -1,7 +1,7 @@
 /**
  * blurredPairs solves each binade where neighbouring angles are between half a spacing and one
  * spacing apart instead of walking it; these cases pick frequencies that land there, checked
- * against the definition walked position by position (METRICS.md, `blurredPairs`:
+ * against the definition walked position by position (docs/metrics.md, `blurredPairs`:
  * some p in [1, T) with fl(fl(p) t) = fl(fl(p-1) t), t = fl(θ)).
  */
 import { describe, expect, it } from 'vitest';

@@ -1,5 +1,5 @@
 /**
- * Behaviour of computeMetrics(spec) metric by metric (METRICS.md), on invented specs. Expected
+ * Behaviour of computeMetrics(spec) metric by metric (docs/metrics.md), on invented specs. Expected
  * values here come from the definitions worked by hand, each shown next to its check.
  */
 import { describe, expect, it } from 'vitest';
@@ -31,7 +31,7 @@ describe('spans', () => {
     expect(evaluationSpan(makeSpec({ serving: { span: 10.5 } }))).toBeNull();
   });
 
-  it("trainedSpan(spec) prefers the scaling block's original span, then the explicit span, then the declared span (METRICS.md, L0)", () => {
+  it("trainedSpan(spec) prefers the scaling block's original span, then the explicit span, then the declared span (docs/metrics.md, L0)", () => {
     const rotary = (s: Scaling | null) => ({
       kind: 'rotary' as const,
       base: 10000,

@@ -43,7 +43,7 @@ describe('mixtures of experts against the published totals', () => {
   it('DeepSeek-V2-Lite activates 2.4B per token (DeepSeek-V2, Appendix B) when the input embedding lookup is not counted', () => {
     const { spec } = read('deepseek-v2-lite-latent.json');
     const b = parameterBreakdown(spec)!;
-    // activeParams counts both embedding tables (METRICS.md): 2.661B. The paper's convention is
+    // activeParams counts both embedding tables (docs/metrics.md): 2.661B. The paper's convention is
     // not stated; the nearest is the count without the input lookup table, 2.451B, 2.14% above
     // the printed 2.4B (without either table 2.244B, 6.5% below). The tolerance, 2.5%, is wider
     // than the 2% the totals meet: no counting convention lands within 2% of this one figure.
@@ -253,7 +253,7 @@ describe('layers that differ', () => {
     expect(m.slowestWavelength! / (8 * 2 * Math.PI * 1e6 ** (254 / 256))).toBeCloseTo(1, 9);
     expect(kinds[0]!.slowestWavelength! / (2 * Math.PI * 1e4 ** (254 / 256))).toBeCloseTo(1, 9);
     expect(kinds[1]!.slowestWavelength).toBe(m.slowestWavelength);
-    // The cache sums each layer's own min(T, window) (METRICS.md).
+    // The cache sums each layer's own min(T, window) (docs/metrics.md).
     expect(m.cacheBytesAtSpan).toBe(2 * 4 * 256 * 2 * (29 * 1024 + 5 * 32768));
   });
 

@@ -82,7 +82,7 @@ describe('float-format: IEEE 754 limits', () => {
   const maxFinite = (format: 'fp32' | 'bf16' | 'fp16'): number =>
     roundToFormat(overflowThreshold(format) * (1 - 2 ** -52), format);
 
-  it('roundToFormat keeps 65504 for binary16 and ≈3.3895e38 for bfloat16 as the largest finite numbers (SOURCES.md §13)', () => {
+  it('roundToFormat keeps 65504 for binary16 and ≈3.3895e38 for bfloat16 as the largest finite numbers (IEEE 754-2008 binary16; bfloat16: 8 exponent bits, 8-bit precision)', () => {
     expect(maxFinite('fp16')).toBe(65504);
     // (2 - 2^-7) 2^127 = 3.3895313892515355e38; relative 1e-4 because the source prints 5 digits
     expect(Math.abs(maxFinite('bf16') / 3.3895e38 - 1)).toBeLessThan(1e-4);

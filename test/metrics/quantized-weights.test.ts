@@ -5,7 +5,7 @@ import { inspectModel } from '../../src/core/inspect.js';
 import { readModel } from '../../src/core/parse/read-model.js';
 import { parsePolicy, resolvePolicy } from '../../src/core/policy/index.js';
 
-// Quantized weights (METRICS.md, "Quantized weights"): group quantization stores `bits` per weight
+// Quantized weights (docs/metrics.md, "Quantized weights"): group quantization stores `bits` per weight
 // plus one 16-bit scale per group (and a zero point of `bits` bits where the method keeps one):
 // common practice. GPTQ (Frantar et al. 2022) quantizes to 4 bits in groups of 128. Every
 // expected byte count below is worked out by hand beside the check.

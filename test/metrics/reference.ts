@@ -1,6 +1,6 @@
 /**
  * Straightforward reference implementations of the positional scans: the obvious loops over every
- * position and pair, exactly as METRICS.md words the definitions. The fast scans in
+ * position and pair, exactly as docs/metrics.md words the definitions. The fast scans in
  * src/core/metrics must agree with these (counts identical, floats within 1e-9 relative).
  */
 import { elementAt } from '../../src/core/element-at.js';

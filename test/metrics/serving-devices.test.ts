@@ -8,7 +8,7 @@ import { readModel } from '../../src/core/parse/read-model.js';
 import type { ModelSpec } from '../../src/core/model.js';
 import { specFindings } from '../../src/core/rules/spec-rules.js';
 
-// Serving across devices (METRICS.md, "Serving across devices"). Expected values are worked out by
+// Serving across devices (docs/metrics.md, "Serving across devices"). Expected values are worked out by
 // hand beside each check from the contract's formulas; the shapes are published ones.
 
 const GIB = 2 ** 30;
@@ -48,7 +48,7 @@ function specWith(text: string, serving: Partial<ModelSpec['serving']>): ModelSp
 const PARAMS = 2 * 262_144_000 + 80 * 855_654_400 + 8_192;
 const WEIGHT_BYTES = PARAMS * 2;
 
-describe('per-device figures of a 70B-class shape (METRICS.md, serving across devices)', () => {
+describe('per-device figures of a 70B-class shape (docs/metrics.md, serving across devices)', () => {
   it('counts 68,976,648,192 parameters, 137,953,296,384 bytes in fp16, split into the parts a quantization needs', () => {
     const spec = specWith(seventyB(), {});
     expect(PARAMS).toBe(68_976_648_192);
@@ -243,7 +243,7 @@ describe('sharding degrees', () => {
   });
 });
 
-describe('layout-unshardable (METRICS.md: heads % t != 0, or kvHeads and t with neither dividing the other)', () => {
+describe('layout-unshardable (docs/metrics.md: heads % t != 0, or kvHeads and t with neither dividing the other)', () => {
   const findings = (heads: number, kv: number, t: number) => {
     const text = JSON.stringify({
       model_type: 'llama',

@@ -1,6 +1,6 @@
 /**
- * Checks against figures published outside the project (SOURCES.md names each; the paper, year
- * and place stand beside every check). Counts are compared with the tolerance the paper's own
+ * Checks against figures published outside the project: the paper, year and place stand beside
+ * every check. Counts are compared with the tolerance the paper's own
  * rounding or omissions allow, stated at each check.
  */
 import { describe, expect, it } from 'vitest';
@@ -44,7 +44,7 @@ describe('Vaswani et al. 2017, "Attention Is All You Need"', () => {
     });
   };
 
-  it('fastestWavelength/slowestWavelength(spec) run from 2π to 2π·10000^((d-2)/d) = 60611.5 for d = 512 (§3.5, SOURCES.md trap)', () => {
+  it('fastestWavelength/slowestWavelength(spec) run from 2π to 2π·10000^((d-2)/d) = 60611.5 for d = 512 (§3.5 says "to 10000·2π": that is the limit, not the last pair)', () => {
     const m = computeMetrics(base());
     // exact formula: relative 1e-12 covers Math.pow rounding
     expect(relativeError(m.fastestWavelength, 2 * Math.PI)).toBeLessThan(1e-12);
@@ -123,7 +123,7 @@ describe('Brown et al. 2020, GPT-3, Table 2.1', () => {
     'params(spec) of GPT-3 %s is the printed n_params within 3%%',
     (_name, layers, hidden, heads, printed) => {
       // 3%: Table 2.1 prints two or three significant digits (rows with the printed d_model/head
-      // inconsistencies named in SOURCES.md are left out)
+      // inconsistencies, 13B's d_model 5140 and XL's 24 heads × 128, are left out)
       expect(
         relativeError(computeMetrics(gpt3(layers, hidden, heads)).params, printed),
       ).toBeLessThan(0.03);
@@ -140,7 +140,7 @@ describe('Brown et al. 2020, GPT-3, Table 2.1', () => {
   it('flopsPerToken(spec) of 175B adds the context term 2·n_layer·n_ctx·d_attn = 4.83e9 to 2N (Kaplan et al. 2020, Table 1)', () => {
     const m = computeMetrics(gpt3(96, 12288, 96));
     const contextTerm = (m.flopsPerToken as number) - 2 * (m.nonEmbeddingParams as number);
-    // 0.5%: SOURCES.md prints three digits
+    // 0.5%: 4.83e9 and 3.48e11 are 2·96·2048·12288 and 2N to three digits
     expect(relativeError(contextTerm, 4.83e9)).toBeLessThan(0.005);
     expect(relativeError(2 * (m.nonEmbeddingParams as number), 3.48e11)).toBeLessThan(0.005);
   });
@@ -164,7 +164,7 @@ describe('Touvron et al. 2023, LLaMA, Table 2', () => {
       declaredSpan: 2048,
     });
 
-  it('the 2/3·4d rule with multiple_of = 256 gives 11008, 13824, 17920, 22016 (llama/model.py, SOURCES.md §5)', () => {
+  it('the 2/3·4d rule with multiple_of = 256 gives 11008, 13824, 17920, 22016 (Touvron et al. 2023, LLaMA §2.2 and llama/model.py)', () => {
     expect([4096, 5120, 6656, 8192].map(llamaFfn)).toEqual([11008, 13824, 17920, 22016]);
   });
 
@@ -195,7 +195,7 @@ describe("Press et al. 2022, ALiBi, §3 and the authors' code", () => {
     slopes.forEach((m, j) => expect(Math.abs(m / 2 ** (-(j + 1) / 2) - 1)).toBeLessThan(1e-15));
   });
 
-  it('alibiSlopes(12) follows get_slopes: -log2 m = 1..8, then 0.5, 1.5, 2.5, 3.5 (SOURCES.md §7)', () => {
+  it('alibiSlopes(12) follows get_slopes: -log2 m = 1..8, then 0.5, 1.5, 2.5, 3.5 (get_slopes in fairseq, models/transformer.py)', () => {
     const exponents = alibiSlopes(12)!.map((m) => -Math.log2(m));
     const expected = [1, 2, 3, 4, 5, 6, 7, 8, 0.5, 1.5, 2.5, 3.5];
     // log2 of a rounded power: absolute 1e-12
@@ -209,7 +209,7 @@ describe("Press et al. 2022, ALiBi, §3 and the authors' code", () => {
 });
 
 describe('Peng et al. 2023, YaRN', () => {
-  it('yarnAttentionScale(8) is 0.1 ln 8 + 1 (Eq. 22); worked values for s = 2..32 (SOURCES.md §9)', () => {
+  it('yarnAttentionScale(8) is 0.1 ln 8 + 1 (Eq. 22); worked values for s = 2..32 (derived from Eq. 22)', () => {
     expect(yarnAttentionScale(8)).toBe(0.1 * Math.log(8) + 1);
     const worked: [number, number][] = [
       [2, 1.0693],
@@ -261,7 +261,7 @@ describe('Peng et al. 2023, YaRN', () => {
     }
   });
 
-  it('attentionScale(spec) is 1 for every code but yarn (METRICS.md)', () => {
+  it('attentionScale(spec) is 1 for every code but yarn (docs/metrics.md)', () => {
     expect(computeMetrics(makeSpec()).attentionScale).toBe(1);
     expect(computeMetrics(makeSpec({ position: { kind: 'alibi' } })).attentionScale).toBe(1);
   });
@@ -345,7 +345,7 @@ describe('Su et al. 2021, RoFormer', () => {
   });
 });
 
-describe('Men et al. 2024, "Base of RoPE Bounds Context Length" (criterion only, SOURCES.md §12)', () => {
+describe('Men et al. 2024, "Base of RoPE Bounds Context Length" (criterion only: their table is solved numerically over a set of bases that is not monotone)', () => {
   it('discriminationSpan(spec) is L_θ + 1 with L_θ = sup{L : B_m = Σ cos(m θ_i) >= 0 for all m <= L} (Thm 1, Eqs. 9–10)', () => {
     for (const base of [500, 2000, 10000]) {
       const spec = makeSpec({
@@ -368,7 +368,7 @@ describe('Men et al. 2024, "Base of RoPE Bounds Context Length" (criterion only,
   });
 });
 
-describe('KV cache (common practice, SOURCES.md §11) and GQA (Ainslie et al. 2023)', () => {
+describe('KV cache (common practice, no paper states it) and GQA (Ainslie et al. 2023)', () => {
   const spec = (kvHeads: number): ModelSpec =>
     makeSpec({
       layers: 32,

@@ -137,17 +137,17 @@ describe('parsePolicy(text, path)', () => {
     [
       'unknown metric, nearest name suggested',
       'limits:\n  headroomm: {max: 3}\n',
-      `${FILE}:2: limits.headroomm: unknown metric "headroomm": limits are keyed by metric names exactly as in the metric contract (METRICS.md); did you mean "headroom"?`,
+      `${FILE}:2: limits.headroomm: unknown metric "headroomm": limits are keyed by metric names exactly as in the metric contract (docs/metrics.md of context-reach); did you mean "headroom"?`,
     ],
     [
       'metric name in the wrong case',
       'limits:\n  MemoryBytes: {max: 3}\n',
-      `${FILE}:2: limits.MemoryBytes: unknown metric "MemoryBytes": limits are keyed by metric names exactly as in the metric contract (METRICS.md); did you mean "memoryBytes"?`,
+      `${FILE}:2: limits.MemoryBytes: unknown metric "MemoryBytes": limits are keyed by metric names exactly as in the metric contract (docs/metrics.md of context-reach); did you mean "memoryBytes"?`,
     ],
     [
       'precision metric with a misspelt format',
       'limits:\n  precision.fp61.collidingPositions: {max: 0}\n',
-      `${FILE}:2: limits.precision.fp61.collidingPositions: unknown metric "precision.fp61.collidingPositions": limits are keyed by metric names exactly as in the metric contract (METRICS.md); did you mean "precision.fp16.collidingPositions"?`,
+      `${FILE}:2: limits.precision.fp61.collidingPositions: unknown metric "precision.fp61.collidingPositions": limits are keyed by metric names exactly as in the metric contract (docs/metrics.md of context-reach); did you mean "precision.fp16.collidingPositions"?`,
     ],
     [
       'unknown rule id',
@@ -227,7 +227,7 @@ describe('parsePolicy(text, path)', () => {
     [
       'far-off metric name gets no guess',
       'limits:\n  latency: {max: 3}\n',
-      `${FILE}:2: limits.latency: unknown metric "latency": limits are keyed by metric names exactly as in the metric contract (METRICS.md)`,
+      `${FILE}:2: limits.latency: unknown metric "latency": limits are keyed by metric names exactly as in the metric contract (docs/metrics.md of context-reach)`,
     ],
     [
       'rule level misspelt',

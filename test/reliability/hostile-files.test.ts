@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { dirname, join, relative, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createGitReader } from '../../src/adapters/git.js';
+import type { FileDecision, GateReport } from '../../src/core/report/types.js';
 import { runGate, type ContentSource } from '../../src/core/gate.js';
 import { renderComment } from '../../src/core/render/comment.js';
 import { runScenario } from '../support/action-harness.js';
@@ -22,7 +23,6 @@ import {
 } from '../support/scenario-repo.js';
 import { hostileCases, type HostileCase } from './hostile-files.js';
 import { findingProblems, markdownProblems, numberProblems } from './report-checks.js';
-import type { FileDecision, GateReport } from '../../src/core/report/types.js';
 
 // Hostile and broken files in a pull request, each through the whole gate with the real git
 // adapter (timed per file), then all at once through the bundled action in a child process (peak

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-
+import type { GateReport } from '../../src/core/report/types.js';
 import { runGate } from '../../src/core/gate.js';
 import { jsonSyntaxErrorOffset, parseSource } from '../../src/core/parse/source.js';
 import { ReadError } from '../../src/core/parse/errors.js';
@@ -8,7 +8,6 @@ import { renderComment } from '../../src/core/render/comment.js';
 import { readGateJson } from '../../src/core/report/read.js';
 import { renderGateJson } from '../../src/core/render/gate-json.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 // Two readers of untrusted JSON added for issue 5: the syntax-error locator behind every
 // "is not valid JSON" finding's line, checked against the engine's own JSON.parse as the

@@ -7,6 +7,7 @@ import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { MAX_REPORT_BYTES } from '../../src/action/publish.js';
 import { runAction } from '../../src/action/run-action.js';
 import { createFileSource } from '../../src/adapters/file-source.js';
+import type { GateReport } from '../../src/core/report/types.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { OWNER, REPO, runScenario, type ScenarioResult } from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';
@@ -14,7 +15,6 @@ import { createRecordingOutput, type RecordingOutput } from '../support/recordin
 import { runBundle } from '../support/run-bundle.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 import { markdownProblems, renderGfm } from './report-checks.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 // The fork-safe two-workflow recipe, end to end against the loopback API: a first workflow on a
 // fork's pull request judges with a read-only token and writes the JSON report (comment: off);

@@ -4,10 +4,9 @@
  * GFM renderer with no injected element, link, mention, reference or comment, tables intact.
  */
 import { marked } from 'marked';
-
+import type { GateReport } from '../../src/core/report/types.js';
 import { codeSpan, escapeMarkdown } from '../../src/core/render/escape.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 /** Markdown to HTML as GFM (marked, from npm), standing in for GitHub's renderer. */
 export function renderGfm(markdown: string): string {

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-
+import type { GateReport } from '../../src/core/report/types.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { runScenario, type ScenarioResult } from '../support/action-harness.js';
 import { startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
@@ -11,7 +11,6 @@ import {
   type Tree,
 } from '../support/scenario-repo.js';
 import { markdownProblems, renderGfm } from './report-checks.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 // The report as an attack surface: file names, keys, values, a waiver label and notices written
 // to inject markup, through the whole action (real git, the loopback API) into the full comment

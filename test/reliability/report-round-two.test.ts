@@ -8,6 +8,7 @@ import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { runAction } from '../../src/action/run-action.js';
 import { createRunnerOutput, fitSummary, SUMMARY_LIMIT } from '../../src/action/runner-output.js';
 import { createFileSource } from '../../src/adapters/file-source.js';
+import type { GateReport } from '../../src/core/report/types.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderComment } from '../../src/core/render/comment.js';
 import { readGateJson } from '../../src/core/report/read.js';
@@ -20,7 +21,6 @@ import type { FakeGitHub } from '../support/fake-github.js';
 import { createRecordingOutput, type RecordingOutput } from '../support/recording-output.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 import { renderGfm } from './report-checks.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 // Round two of the report as an attack surface (issue 13, points 1, 9 and 11): every field a
 // publish run reads back is checked to its type and range, a closed pull request gets nothing,

@@ -11,7 +11,7 @@
 import fc from 'fast-check';
 import { writeFileSync } from 'node:fs';
 import { afterAll, describe, expect, it } from 'vitest';
-
+import type { FileDecision, GateReport } from '../../src/core/report/types.js';
 import { runGate, type ContentSource } from '../../src/core/gate.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderComment } from '../../src/core/render/comment.js';
@@ -20,7 +20,6 @@ import { renderSarif } from '../../src/core/render/sarif.js';
 import { checkpointConfig as validCheckpoint } from '../support/scenario-repo.js';
 import { generatedPair, MAX_GENERATED_SPAN, type GeneratedPair } from './generators.js';
 import { findingProblems, markdownProblems, numberProblems } from './report-checks.js';
-import type { FileDecision, GateReport } from '../../src/core/report/types.js';
 
 const BASE = 'b'.repeat(40);
 const HEAD = 'c'.repeat(40);

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { parseDocument } from 'yaml';
-
 import { metricValue } from '../../src/core/metrics/metric-path.js';
 import type { MetricPath } from '../../src/core/metrics/types.js';
 import type { ServingPatch } from '../../src/core/model.js';

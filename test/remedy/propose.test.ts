@@ -80,7 +80,7 @@ describe('proposeRemedy(ctx, finding) for memory-over-budget', () => {
     expect(changes[0]).toEqual({ 'dtypes.cache': 'int4' });
     expect(changes[1]).toEqual({ kvHeads: 1 });
     expect(Object.keys(changes[2]!)).toEqual(['serving.span']);
-    // Across devices (METRICS.md, serving across devices): tensor degree 2 keeps ceil(4/2) = 2 kv heads per device,
+    // Across devices (docs/metrics.md, serving across devices): tensor degree 2 keeps ceil(4/2) = 2 kv heads per device,
     // 32 GiB of cache (no fit); 4 keeps 1, 16 GiB: fits. 3 pipeline stages hold ceil(16/3) = 6 layers, 24 GiB of
     // cache (no fit); 4 stages hold 4 layers, 16 GiB: fits.
     expect(changes[3]).toEqual({ 'serving.tensorParallel': 4 });
@@ -124,7 +124,7 @@ describe('proposeRemedy(ctx, finding) for a discrimination or separation limit',
       policy: limit(8192),
     });
     const base = r.remedy?.change['position.base'] as number;
-    // Men et al. 2024, Table 2 (arXiv v1): 8k needs a base of 8.4e4 (SOURCES.md §12).
+    // Men et al. 2024, Table 2 (arXiv v1): 8k needs a base of 8.4e4.
     expect(base).toBe(84000);
     expect(r.remedy?.metrics.discriminationSpan).toBeNull();
     // The grid step below fails: the remedy is the nearest passing base on the grid.

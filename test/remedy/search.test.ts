@@ -180,7 +180,7 @@ describe('searchRotaryBase(from, direction, criterion)', () => {
     expect(found.base).toBeNull();
   });
 
-  // Men et al. 2024, Table 2 (arXiv v1; SOURCES.md §12): lower-bound bases 2.7e4 (4k), 8.4e4 (8k),
+  // Men et al. 2024, Table 2 (arXiv v1; Table 1 in the NeurIPS version): lower-bound bases 2.7e4 (4k), 8.4e4 (8k),
   // 6.4e5 (32k). The table was solved numerically and the feasible set is not monotone, so the
   // check is the nearest passing two-digit base within 10 % of the published value.
   it.each([

@@ -1,9 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { marked } from 'marked';
-
+import type { GateReport } from '../../src/core/report/types.js';
 import { renderComment } from '../../src/core/render/comment.js';
 import { demoTrees, gateOver } from '../support/demo-gate.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 // The demo's comment read the way a reviewer reads it: short, nothing said twice, the answer on
 // the first screen, and no number that contradicts a finding.

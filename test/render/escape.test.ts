@@ -1,7 +1,14 @@
 import { marked } from 'marked';
 import { describe, expect, it } from 'vitest';
 import { markdownTable } from 'markdown-table';
-import { codeSpan, encodePath, escapeHtml, escapeMarkdown } from '../../src/core/render/escape.js';
+import {
+  codeId,
+  codeSpan,
+  encodePath,
+  escapeHtml,
+  escapeMarkdown,
+  linkUrl,
+} from '../../src/core/render/escape.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 
 // Rendered with `marked` in GFM mode, a general-purpose GFM renderer from npm, standing in for
@@ -78,6 +85,42 @@ describe('codeSpan(text)', () => {
     const html = render(`key ${codeSpan('a`b`<i>c</i>')} end`);
     expect(html).toContain('<code>');
     expect(html).not.toMatch(/<i>/);
+  });
+});
+
+describe('codeId(id)', () => {
+  it('writes a rule id or metric name of the catalogue as plain inline code', () => {
+    expect(codeId('span-past-reach')).toBe('`span-past-reach`');
+    expect(codeId('precision.bf16.collidingPositions')).toBe('`precision.bf16.collidingPositions`');
+  });
+
+  it.each([
+    'span-past-reach`<img src=x onerror=alert(1)>',
+    'limit-crossed` **bold** [x](https://evil.example)',
+    'rule\n## heading | cell',
+    '@someone #12',
+  ])(
+    'shows a rule id read back from a tampered report, %j, as one code element and nothing else',
+    (id) => {
+      const html = render(`before ${codeId(id)} after`);
+      expect(html.match(/<code>/g)).toHaveLength(1);
+      expect(html).not.toMatch(/<(img|a|strong|em|h2|table|script)\b/i);
+      expect(html.match(/<p>/g)).toHaveLength(1);
+    },
+  );
+});
+
+describe('linkUrl(url)', () => {
+  it('percent-encodes what a URL may not hold and the parentheses that would end a markdown link target', () => {
+    // encodeURI (ECMA-262 §19.2.6.5) leaves reserved characters such as / : # ? alone; ( ) are ours.
+    expect(linkUrl('https://ci.example/run/1 (retry)?a=b#x')).toBe(
+      'https://ci.example/run/1%20%28retry%29?a=b#x',
+    );
+    const html = render(
+      `[the HTML report](${linkUrl('https://ci.example/r)**x** www.evil.example')})`,
+    );
+    expect(html.match(/<a /g)).toHaveLength(1);
+    expect(html).not.toMatch(/<(strong|em)>/);
   });
 });
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-
+import type { GateReport } from '../../src/core/report/types.js';
 import { runGate } from '../../src/core/gate.js';
 import { computeMetrics } from '../../src/core/metrics/compute.js';
 import { readModel } from '../../src/core/parse/read-model.js';
@@ -8,7 +8,6 @@ import { renderGateJson } from '../../src/core/render/gate-json.js';
 import { renderFileText } from '../../src/core/render/inspect-text.js';
 import { fixture } from '../parse/helpers.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 function textOf(name: string, span?: number): string {
   const r = readModel(fixture(name), name);

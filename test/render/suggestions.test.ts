@@ -14,17 +14,16 @@ const texts = new Map([
   [Q8B, head[Q8B]!],
 ]);
 const all = (n: number) => new Set(Array.from({ length: n }, (_, i) => i + 1));
+/** Every line of both demo files in the diff. */
+const wholeDiff = () =>
+  new Map([
+    [MINI, all(40)],
+    [Q8B, all(20)],
+  ]);
 
 describe('planSuggestions(report, texts, diffLines)', () => {
   it("turns each blocking finding's first whole-line fix into a suggestion whose file still reads (JSON stays JSON)", () => {
-    const planned = planSuggestions(
-      report,
-      texts,
-      new Map([
-        [MINI, all(40)],
-        [Q8B, all(20)],
-      ]),
-    );
+    const planned = planSuggestions(report, texts, wholeDiff());
     expect(planned.map((p) => [p.path, p.startLine, p.line])).toEqual([
       [Q8B, 12, 12],
       [MINI, 20, 20],
@@ -121,5 +120,27 @@ describe('syncSuggestions(api, target, planned)', () => {
       removed: 2,
     });
     expect(api.calls).toEqual(['delete 2', 'delete 3']);
+  });
+});
+
+describe('planSuggestions(report, …) on a report read back with tampered rule ids', () => {
+  it('shows each rule id and metric name as one code element: nothing of them opens markdown', async () => {
+    const { marked } = await import('marked');
+    const tampered = structuredClone(report);
+    for (const file of tampered.files)
+      for (const finding of file.findings) {
+        finding.rule = `${finding.rule}\`<img src=x onerror=alert(1)> **b**`;
+        if (finding.metric)
+          finding.metric = `${finding.metric}\` [x](https://evil.example)` as never;
+      }
+    const planned = planSuggestions(tampered, texts, wholeDiff());
+    expect(planned.length).toBeGreaterThan(0);
+    for (const p of planned) {
+      const lead = p.body.split('\n')[1]!;
+      const html = marked.parse(lead, { gfm: true, async: false }) as string;
+      expect(html).not.toMatch(/<(img|a|em)\b/i);
+      expect(html.match(/<strong>/g)).toHaveLength(1); // the **context-reach** label only
+      expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;');
+    }
   });
 });

@@ -1,10 +1,10 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
 import { createGitReader } from '../../src/adapters/git.js';
+import type { GateReport } from '../../src/core/report/types.js';
 import { runGate } from '../../src/core/gate.js';
 import type { ServingPatch } from '../../src/core/model.js';
 import { scenarioRepo, type ScenarioRepo, type Tree } from './scenario-repo.js';
-import type { GateReport } from '../../src/core/report/types.js';
 
 export const DEMO = resolve(import.meta.dirname, '../../fixtures/demo');
 

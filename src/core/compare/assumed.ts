@@ -1,7 +1,7 @@
 /**
  * Values taken on assumption between base and head. A head whose position code did not change
  * and that states no trained span was trained no longer than the base: it inherits the base's
- * trained span `L0` (METRICS.md), and every metric that moves because of that is marked
+ * trained span `L0` (docs/metrics.md), and every metric that moves because of that is marked
  * *assumed* wherever it is shown. Without the inheritance a declared span that grows with the
  * code unchanged would read as trained at the new length, and contradict its own finding.
  */

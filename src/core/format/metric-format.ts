@@ -59,7 +59,7 @@ export const MINUS = '\u2212';
 /**
  * radians: an angle error as a phase. An error is only meaningful modulo 2π, and once it can
  * reach π the rounded angle can land anywhere on the circle: the phase is lost (IEEE 754 rounding
- * of p·θ, see METRICS.md `angleErrorMax`).
+ * of p·θ, see docs/metrics.md `angleErrorMax`).
  */
 export function phaseLost(error: number | null): boolean {
   return error !== null && error >= Math.PI;

@@ -15,9 +15,9 @@ function powerOfTwoSlopes(n: number): number[] {
 
 /**
  * per token: `alibiSlopes` for n heads: `2^(-8j/n)` for n a power of two (Press et al. 2022,
- * §3); otherwise the authors' published code (`get_slopes`, SOURCES.md §7): the slopes for the
- * largest power of two `n0 < n`, then every other slope of the `2 n0` sequence from the first,
- * until n slopes. Null for n not a whole number in [1, MAX_ALIBI_HEADS].
+ * §3); otherwise the authors' published code (`get_slopes` in fairseq's
+ * `models/transformer.py`): the slopes for the largest power of two `n0 < n`, then every other
+ * slope of the `2 n0` sequence from the first, until n slopes. Null for n not a whole number in [1, MAX_ALIBI_HEADS].
  */
 export function alibiSlopes(heads: number): number[] | null {
   const n = positiveCount(heads);
@@ -30,7 +30,7 @@ export function alibiSlopes(heads: number): number[] | null {
 
 /**
  * tokens: `alibiHorizon = ceil(ln(10^4) / min_j m_j)`, the distance at which even the slowest head
- * scales a key's weight down by 10^4 (METRICS.md; the bias `-m·distance` of Press et al. 2022, §3).
+ * scales a key's weight down by 10^4 (docs/metrics.md; the bias `-m·distance` of Press et al. 2022, §3).
  */
 export function alibiHorizon(slopes: readonly number[] | null): number | null {
   if (slopes === null || slopes.length === 0) return null;

@@ -1,7 +1,7 @@
 /**
  * Rotation angles rounded into a number format, `fl_D(fl_D(p) fl_D(θ'_i))`, the product formed
  * exactly in binary64 (both factors have at most 24 significant bits) and rounded once
- * (METRICS.md, number formats: `angleErrorMax`, `overflowPosition`, `blurredPairs`).
+ * (docs/metrics.md, number formats: `angleErrorMax`, `overflowPosition`, `blurredPairs`).
  *
  * Method, and why it is exact. The definitions visit every (p, i); these functions return what
  * that loop returns (counts identical, the maximum bit for bit) while skipping provably
@@ -45,7 +45,7 @@ function angleOverflows(p: number, t: number, format: FloatFormat): boolean {
 
 /**
  * token: `overflowPosition`, first p in [0, T) whose `fl_D(p)` or any angle is not finite;
- * null when none is (METRICS.md). Angles are monotone in p, so each pair is a binary search.
+ * null when none is (docs/metrics.md). Angles are monotone in p, so each pair is a binary search.
  */
 export function overflowPosition(
   format: FloatFormat,
@@ -98,7 +98,7 @@ function bitLength(n: number): number {
 
 /**
  * radians: `angleErrorMax`, `max |fl_D(fl_D(p) fl_D(θ'_i)) - p θ'_i|` over p in [0, T) and all
- * pairs (METRICS.md). The caller checks `overflowPosition` first: with any overflow the metric is
+ * pairs (docs/metrics.md). The caller checks `overflowPosition` first: with any overflow the metric is
  * null. Pairs are independent, so a caller may split `theta` and take the larger result.
  */
 export function angleErrorMax(format: FloatFormat, theta: Float64Array, span: number): number {
@@ -262,7 +262,7 @@ function binadeRuns(
 
 /**
  * count: `blurredPairs`, pairs i for which some p in [1, T) has
- * `fl_D(fl_D(p) t_i) == fl_D(fl_D(p-1) t_i)` with `t_i = fl_D(θ'_i)` (METRICS.md). Once T passes
+ * `fl_D(fl_D(p) t_i) == fl_D(fl_D(p-1) t_i)` with `t_i = fl_D(θ'_i)` (docs/metrics.md). Once T passes
  * `2^m + 1` (m significant bits) two positions share a rounded value and every pair is blurred.
  */
 export function blurredPairs(format: FloatFormat, theta: Float64Array, span: number): number {

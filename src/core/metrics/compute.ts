@@ -1,5 +1,5 @@
 /**
- * The metric engine: every metric of the contract (shared METRICS.md) for one model spec. The
+ * The metric engine: every metric of the contract (docs/metrics.md) for one model spec. The
  * spec arrives with serving values from the CLI or policy merged in; documented defaults are
  * applied here; degenerate sizes give null metrics, never NaN, Infinity or an exception.
  */
@@ -194,7 +194,7 @@ function charge(
 }
 
 /**
- * Every metric of METRICS.md for one spec; null where a metric does not apply or its inputs are
+ * Every metric of docs/metrics.md for one spec; null where a metric does not apply or its inputs are
  * degenerate. With a `memo`, the positional metrics are computed once per distinct input within
  * the memo's run; with a `budget`, the similarity scans spend at most what is left of it.
  */
@@ -281,7 +281,7 @@ interface TopLevel {
 }
 
 /**
- * The positional metrics of each kind of decoder layer (METRICS.md, "Layers that differ"); null
+ * The positional metrics of each kind of decoder layer (docs/metrics.md, "Layers that differ"); null
  * when every layer is of one kind with the model's own code (the top-level values then describe
  * it) or the layers are degenerate. Local (sliding, chunked) layers use `localBase` unscaled when
  * the spec states one; settings equal to the top level's reuse its scans.

@@ -1,5 +1,5 @@
 /**
- * Context scaling of rotary frequencies, `θ_i → θ'_i` (METRICS.md, symbol `θ'_i`).
+ * Context scaling of rotary frequencies, `θ_i → θ'_i` (docs/metrics.md, symbol `θ'_i`).
  */
 import { elementAt } from '../element-at.js';
 import type { Scaling } from '../model.js';
@@ -17,7 +17,7 @@ export function ntkBase(base: number, factor: number, r: number): number | null 
 
 /**
  * ratio: yarn ramp `γ = clamp((ρ - α)/(β - α), 0, 1)` of `ρ = L0/λ` (Peng et al. 2023, YaRN,
- * Eq. 18; METRICS.md takes `λ` from the unscaled frequencies); null when `α = β`.
+ * Eq. 18; docs/metrics.md takes `λ` from the unscaled frequencies); null when `α = β`.
  */
 export function yarnRamp(rho: number, alpha: number, beta: number): number | null {
   if (!Number.isFinite(alpha) || !Number.isFinite(beta) || alpha === beta || Number.isNaN(rho))
@@ -83,7 +83,7 @@ export function pairwiseAttentionFactor(scaling: Scaling, trained: number | null
 }
 
 /**
- * per token: scaled frequencies `θ'_i` (METRICS.md): linear `θ/s` (Chen et al. 2023, eq. 4);
+ * per token: scaled frequencies `θ'_i` (docs/metrics.md): linear `θ/s` (Chen et al. 2023, eq. 4);
  * ntk and dynamic `b'^(-2i/r)` (Peng et al. 2023, Eq. 16 and §3.3); yarn `(1-γ)θ/s + γθ`
  * (Peng et al. 2023, Eqs. 17–20); banded: common practice; pairwise `θ_i / factor_i` with the
  * factors `pairwiseFactors` chooses (LongRoPE, Ding et al. 2024). No scaling: `θ` itself.

@@ -1,6 +1,6 @@
 /**
  * The first offset at which a code's cosine sum turns negative, stopping there:
- * `discriminationSpan` (METRICS.md; Men et al. 2024, "Base of RoPE Bounds Context Length",
+ * `discriminationSpan` (docs/metrics.md; Men et al. 2024, "Base of RoPE Bounds Context Length",
  * Thm 1, Eqs. 9–10) without the floor scan that `similarity-scan.ts` also runs, so a search
  * over bases pays only up to each base's first negative offset.
  *

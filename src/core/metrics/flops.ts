@@ -28,7 +28,7 @@ export function attentionWidth(spec: ModelSpec): number | null {
 /**
  * FLOP: `flopsPerToken = 2·nonEmbeddingParams + 2·Σ_layers n_ctx(layer)·d_attn` (Kaplan et al.
  * 2020, Table 1, with `n_ctx = T` on full-attention layers and `min(T, window)` on sliding and
- * chunked layers, METRICS.md "Layers that differ"); with every layer full this is
+ * chunked layers, docs/metrics.md "Layers that differ"); with every layer full this is
  * `2·nonEmbeddingParams + 2·layers·T·heads·headDim`. Null for degenerate input.
  */
 export function flopsPerToken(

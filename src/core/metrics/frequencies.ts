@@ -1,5 +1,5 @@
 /**
- * Frequency pairs of a position code before any context scaling (METRICS.md, symbols `P`, `θ_i`).
+ * Frequency pairs of a position code before any context scaling (docs/metrics.md, symbols `P`, `θ_i`).
  */
 import type { ModelSpec } from '../model.js';
 import { positiveCount, positiveFinite } from './sizes.js';

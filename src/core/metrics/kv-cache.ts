@@ -1,6 +1,7 @@
 /**
- * Key/value cache size (METRICS.md: `cachePerTokenBytes`, `cacheBytesAtSpan`; common practice,
- * SOURCES.md §11: 524,288 bytes per token for 32 layers, 32 kv heads, head 128, fp16; latent
+ * Key/value cache size (docs/metrics.md: `cachePerTokenBytes`, `cacheBytesAtSpan`; common practice,
+ * no paper states it, the GQA paper, Ainslie et al. 2023, gives none: 524,288 bytes per token for
+ * 32 layers, 32 kv heads, head 128, fp16; latent
  * attention: Liu et al. 2024, DeepSeek-V2, Table 1, `(d_c + d_h^R)` elements per token and layer).
  */
 import type { ModelSpec } from '../model.js';
@@ -56,7 +57,7 @@ export function servedSequences(spec: ModelSpec): number | null {
 
 /**
  * bytes: `cacheBytesAtSpan = sequences · Σ_layers perLayerTokenBytes·min(T, window of that layer)`
- * (METRICS.md): sliding layers hold `min(T, w)` tokens, chunked layers `min(T, chunk)`, full
+ * (docs/metrics.md): sliding layers hold `min(T, w)` tokens, chunked layers `min(T, chunk)`, full
  * layers T. An encoder-only model: 0.
  */
 export function cacheBytesAtSpan(spec: ModelSpec, span: number | null): number | null {
@@ -85,7 +86,7 @@ export interface CacheLayerGroup {
  * bytes: the decoder layers' cache per token as one of `t` tensor ranks holds it, grouped by
  * layer kind (`layerGroups`): each layer `2·ceil(kvHeads/t)·headDim·bytes` (a rank with
  * `t > kvHeads` keeps a copy of one head: common practice); latent attention keeps its whole
- * `(d_c + d_h^R)` latent on every rank (METRICS.md, "Serving across devices"). With `t = 1` the
+ * `(d_c + d_h^R)` latent on every rank (docs/metrics.md, "Serving across devices"). With `t = 1` the
  * groups sum to `cachePerTokenBytes`. An encoder-only model holds none: no groups. Null when a
  * size is degenerate.
  */

@@ -1,5 +1,5 @@
 /**
- * Decoder layers grouped by kind (METRICS.md, "Layers that differ"): full attention, a sliding
+ * Decoder layers grouped by kind (docs/metrics.md, "Layers that differ"): full attention, a sliding
  * window (Beltagy et al. 2020, Longformer, §3.1; Jiang et al. 2023, Mistral 7B, §2), or chunked
  * local attention (each token sees the earlier tokens of its own fixed chunk), each with or
  * without a position code.

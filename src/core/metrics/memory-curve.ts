@@ -1,5 +1,5 @@
 /**
- * Device memory as a function of the span, for charts (the `memoryBytes` of METRICS.md at any span).
+ * Device memory as a function of the span, for charts (the `memoryBytes` of docs/metrics.md at any span).
  */
 import type { ModelSpec } from '../model.js';
 import { servedSequences } from './kv-cache.js';

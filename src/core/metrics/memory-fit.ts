@@ -1,5 +1,5 @@
 /**
- * Device memory: weights plus cache, and how many sequences fit (METRICS.md: `weightBytes`,
+ * Device memory: weights plus cache, and how many sequences fit (docs/metrics.md: `weightBytes`,
  * `memoryBytes`, `fitSequences`; common practice).
  */
 import type { ModelSpec } from '../model.js';
@@ -32,7 +32,7 @@ export function memoryBytes(weights: number | null, cache: number | null): numbe
 
 /**
  * count: `fitSequences = floor((deviceBytes (1 - reserve) - weightBytes) / (cacheBytesAtSpan /
- * sequences))` with `deviceBytes = deviceGiB · 2^30` (METRICS.md); negative when the weights alone
+ * sequences))` with `deviceBytes = deviceGiB · 2^30` (docs/metrics.md); negative when the weights alone
  * do not fit. Null without a device budget, with a reserve outside [0, 1), or an empty cache.
  */
 export function fitSequences(

@@ -1,5 +1,5 @@
 /**
- * The number-format block for one format D (METRICS.md, `precision.<D>`), assembled from the
+ * The number-format block for one format D (docs/metrics.md, `precision.<D>`), assembled from the
  * position and angle rounding scans.
  */
 import type { FloatFormat } from '../model.js';
@@ -10,7 +10,7 @@ import { collidingPositions } from './position-rounding.js';
 import { scanAllowed } from './scan-limits.js';
 import { isCount } from './sizes.js';
 
-/** The block with every metric null (learned, ALiBi and position-free codes, METRICS.md). */
+/** The block with every metric null (learned, ALiBi and position-free codes, docs/metrics.md). */
 export const NULL_PRECISION: Readonly<PrecisionMetrics> = Object.freeze({
   positionExactLimit: null,
   collidingPositions: null,

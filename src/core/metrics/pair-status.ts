@@ -1,14 +1,14 @@
 /**
  * What each frequency pair does over the trained and the evaluated span, pair by pair: the
- * per-pair form of `unturnedPairs` and `exposedPairs` (METRICS.md), for charts that colour them.
+ * per-pair form of `unturnedPairs` and `exposedPairs` (docs/metrics.md), for charts that colour them.
  */
 
 import { elementAt } from '../element-at.js';
 
 /**
- * `turning`: finishes a turn within `L0`. `unturned`: `2π/θ'_i > L0` (METRICS.md,
+ * `turning`: finishes a turn within `L0`. `unturned`: `2π/θ'_i > L0` (docs/metrics.md,
  * unturnedPairs). `exposed`: `θ_i L0 < 2π` and `θ'_i T > θ_i L0 (1 + 1e-9)`, reaching angles
- * never seen in training (METRICS.md, exposedPairs); a pair that is both is `exposed`.
+ * never seen in training (docs/metrics.md, exposedPairs); a pair that is both is `exposed`.
  */
 export type PairStatus = 'turning' | 'unturned' | 'exposed';
 

@@ -1,7 +1,7 @@
 /**
- * Parameter counts of a transformer (METRICS.md, context budget: `params`, `activeParams`,
+ * Parameter counts of a transformer (docs/metrics.md, context budget: `params`, `activeParams`,
  * `nonEmbeddingParams`; Kaplan et al. 2020, §2.1 and Table 1 for what "non-embedding" leaves out;
- * mixtures of experts and latent attention as METRICS.md, "Mixtures of experts and latent
+ * mixtures of experts and latent attention as docs/metrics.md, "Mixtures of experts and latent
  * attention", the latter after Liu et al. 2024, DeepSeek-V2, §2.1).
  */
 import type { ModelSpec } from '../model.js';
@@ -127,7 +127,7 @@ export function normParams(hidden: number, bias: boolean): number {
 export const DEFAULT_LAYER_NORMS = 2;
 
 /**
- * count: `params`, `activeParams`, `nonEmbeddingParams` and where they sit (METRICS.md). Per
+ * count: `params`, `activeParams`, `nonEmbeddingParams` and where they sit (docs/metrics.md). Per
  * decoder layer: attention (or latent attention), the feed-forward — dense layers `ffn` wide;
  * mixture layers `E` routed experts of width `moeFfn`, `shared` always-active experts, a router
  * `hidden·E` and, where stated, a `hidden → 1` gate on the shared experts; `k` routed experts for
@@ -287,7 +287,7 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
   };
 }
 
-/** count: `params`, `activeParams`, `nonEmbeddingParams` (METRICS.md); null as `parameterBreakdown`. */
+/** count: `params`, `activeParams`, `nonEmbeddingParams` (docs/metrics.md); null as `parameterBreakdown`. */
 export function parameterCounts(spec: ModelSpec): ParameterCounts | null {
   const b = parameterBreakdown(spec);
   return b === null

@@ -1,5 +1,5 @@
 /**
- * Serving across devices (METRICS.md, "Serving across devices"; common practice): one replica
+ * Serving across devices (docs/metrics.md, "Serving across devices"; common practice): one replica
  * spans `devices = t·p` devices, `t` tensor-parallel ranks each holding `ceil(kvHeads/t)` key/value
  * heads of every layer of its stage (Ainslie et al. 2023 for key/value heads shared by query
  * heads), `p` pipeline stages each holding `ceil(layers/p)` layers. Weights split evenly.

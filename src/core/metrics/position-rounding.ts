@@ -1,5 +1,5 @@
 /**
- * Integer positions rounded into a number format, `fl_D(p)` (METRICS.md, number formats).
+ * Integer positions rounded into a number format, `fl_D(p)` (docs/metrics.md, number formats).
  * Counted per binade in closed form: `fl_D` is monotone, so no position is visited.
  */
 import type { FloatFormat } from '../model.js';
@@ -31,7 +31,7 @@ export function representableIntegersUpTo(x: number, format: FloatFormat): numbe
 
 /**
  * count: `collidingPositions`, positions p in [1, T) with `fl_D(p) == fl_D(p-1)`, overflowing
- * positions counted as colliding (METRICS.md). Below the overflow start N positions take
+ * positions counted as colliding (docs/metrics.md). Below the overflow start N positions take
  * `representableIntegersUpTo(N-1)` distinct values, one more when `fl_D(N-1)` rounds up past
  * `N-1`; every other position repeats its predecessor's value. Null for `T` not a positive
  * whole number.

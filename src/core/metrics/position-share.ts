@@ -1,6 +1,6 @@
 /**
  * Share of the input energy that an additive position code carries at initialisation
- * (METRICS.md: `positionShare`).
+ * (docs/metrics.md: `positionShare`).
  */
 import type { ModelSpec } from '../model.js';
 import { finiteOrNull, positiveCount, positiveFinite } from './sizes.js';

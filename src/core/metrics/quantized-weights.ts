@@ -1,5 +1,5 @@
 /**
- * Weight storage with a quantization (METRICS.md, "Quantized weights"; common practice): the
+ * Weight storage with a quantization (docs/metrics.md, "Quantized weights"; common practice): the
  * linear weight matrices of the layers at `bits / 8` bytes per weight plus, per group of
  * `groupSize` weights, one scale of `scaleBits` and, where the method stores one, a zero point of
  * `bits` bits; embeddings, norms, biases and (unless stated) the output matrix stay in the
@@ -91,7 +91,7 @@ export function quantizedWeightBytes(
 }
 
 /**
- * bytes: `weightBytes` of `spec` (METRICS.md): with a quantization, `quantizedWeightBytes`;
+ * bytes: `weightBytes` of `spec` (docs/metrics.md): with a quantization, `quantizedWeightBytes`;
  * otherwise `params · bytes(weight dtype)`.
  */
 export function storedWeightBytes(spec: ModelSpec): number | null {

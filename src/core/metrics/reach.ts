@@ -1,5 +1,5 @@
 /**
- * How far a position scheme reaches and how the served span compares (METRICS.md: `reach`,
+ * How far a position scheme reaches and how the served span compares (docs/metrics.md: `reach`,
  * `scalingCover`, `headroom`, `extensionRatio`).
  */
 import type { ModelSpec } from '../model.js';
@@ -14,7 +14,7 @@ export function scalingFactor(spec: ModelSpec): number | null {
 }
 
 /**
- * tokens: `reach` (METRICS.md): a learned table's size; null for relative buckets (no hard
+ * tokens: `reach` (docs/metrics.md): a learned table's size; null for relative buckets (no hard
  * limit, see `bucketHorizon`); otherwise `max(L0·factor, tunedSpan)`, and at least
  * `declaredSpan` when neither a trained nor a tuned span was stated explicitly (the config's own
  * claim, taken on assumption: `reachAssumed`).

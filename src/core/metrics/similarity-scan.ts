@@ -1,6 +1,6 @@
 /**
  * Similarity of a code with itself at offset k, `S(k) = (1/P) Σ_i cos(k θ'_i)`, scanned over
- * every k in [1, T): `separationFloor`, `separationFloorOffset` (METRICS.md) and
+ * every k in [1, T): `separationFloor`, `separationFloorOffset` (docs/metrics.md) and
  * `discriminationSpan`, the first k with `Σ_i cos(k θ'_i) < 0` (Men et al. 2024, "Base of RoPE
  * Bounds Context Length", Thm 1, Eqs. 9–10).
  *
@@ -161,7 +161,7 @@ export function scanSimilarityRange(
 
 /**
  * 0..2, tokens, tokens: `separationFloor`, `separationFloorOffset`, `discriminationSpan` over
- * k in [1, T) (METRICS.md); all null when `T < 2`, there are no pairs, or the scan is past
+ * k in [1, T) (docs/metrics.md); all null when `T < 2`, there are no pairs, or the scan is past
  * `MAX_SCAN_SPAN` / `MAX_SCAN_ELEMENTS`. When the scan stops at `workLimit` (default:
  * `MAX_SCAN_WORK`) the floor and
  * its offset are null and `complete` is false; a first negative sum found before the stop is

@@ -1,5 +1,5 @@
 /**
- * The spans every positional metric is measured over (METRICS.md, symbols `T` and `L0`).
+ * The spans every positional metric is measured over (docs/metrics.md, symbols `T` and `L0`).
  */
 import type { ModelSpec } from '../model.js';
 import { positiveCount } from './sizes.js';
@@ -15,7 +15,7 @@ export function servedSpan(spec: ModelSpec): number | null {
 }
 
 /**
- * tokens: `T`, the served span when one is given, otherwise the declared span (METRICS.md).
+ * tokens: `T`, the served span when one is given, otherwise the declared span (docs/metrics.md).
  * A served span that is given but invalid gives null rather than silently falling back.
  */
 export function evaluationSpan(spec: ModelSpec): number | null {
@@ -27,7 +27,7 @@ export function evaluationSpan(spec: ModelSpec): number | null {
 /**
  * tokens: `L0`, the original span of a rotary scaling block (`original_max_position_embeddings`,
  * inside the block or at the top level), else an explicit trained span (model file, policy or
- * `--trained-span`), else the declared span (METRICS.md). A stated but invalid value gives null.
+ * `--trained-span`), else the declared span (docs/metrics.md). A stated but invalid value gives null.
  */
 export function trainedSpan(spec: ModelSpec): number | null {
   const code = spec.position;
@@ -46,7 +46,7 @@ export function trainedSpan(spec: ModelSpec): number | null {
 
 /**
  * tokens: `tunedSpan`: for a rotary code with a scaling block, the explicitly stated trained span,
- * which is the span the scaled model was trained or tuned at (METRICS.md); null when none is
+ * which is the span the scaled model was trained or tuned at (docs/metrics.md); null when none is
  * stated, when there is no scaling block, or when the stated value is invalid.
  */
 export function tunedSpan(spec: ModelSpec): number | null {

@@ -1,5 +1,5 @@
 /**
- * Tokens left for input once the serving block's reservations are taken (METRICS.md: `tokenBudget`).
+ * Tokens left for input once the serving block's reservations are taken (docs/metrics.md: `tokenBudget`).
  */
 import type { Serving } from '../model.js';
 import { nonNegativeCount } from './sizes.js';

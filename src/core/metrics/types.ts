@@ -1,5 +1,5 @@
 /**
- * Every metric of the contract (shared METRICS.md), under exactly its name there. `null` where a
+ * Every metric of the contract (docs/metrics.md), under exactly its name there. `null` where a
  * metric does not apply or its inputs are degenerate.
  */
 import type { FloatFormat, LayerAttention, PositionKind } from '../model.js';
@@ -18,7 +18,7 @@ export interface PrecisionMetrics {
 }
 
 /**
- * The positional metrics of one kind of decoder layer (METRICS.md, "Layers that differ"): its
+ * The positional metrics of one kind of decoder layer (docs/metrics.md, "Layers that differ"): its
  * attention, its position code and rotary setting. Scans over offsets (`exposedPairs`, the
  * similarity scan) run over the tokens the layer sees, `min(T, window)`; number formats over the
  * absolute positions `[0, T)`, which every layer's angles are computed at.

@@ -1,7 +1,7 @@
 /**
  * Parameters of a ViT-style vision tower (Dosovitskiy et al. 2021, "An Image is Worth 16x16
  * Words", section 3.1): patch embedding, class token and position table, encoder layers,
- * a final norm. Reported apart from the language model's `params` (METRICS.md leaves the tower
+ * a final norm. Reported apart from the language model's `params` (docs/metrics.md leaves the tower
  * out of `params`).
  */
 import type { VisionTower } from '../model.js';

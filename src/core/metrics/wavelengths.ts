@@ -18,7 +18,7 @@ export function wavelengthRange(theta: Float64Array): { fastest: number; slowest
   return Number.isFinite(fastest) && Number.isFinite(slowest) ? { fastest, slowest } : null;
 }
 
-/** count: pairs with `2π/θ'_i > L0`: they never finish one turn over the trained span (METRICS.md). */
+/** count: pairs with `2π/θ'_i > L0`: they never finish one turn over the trained span (docs/metrics.md). */
 export function unturnedPairs(theta: Float64Array, trained: number): number {
   let n = 0;
   for (const th of theta) if ((2 * Math.PI) / th > trained) n++;
@@ -27,7 +27,7 @@ export function unturnedPairs(theta: Float64Array, trained: number): number {
 
 /**
  * count: pairs with `θ_i L0 < 2π` and `θ'_i T > θ_i L0 (1 + 1e-9)`: at the span's end they reach
- * angles never seen in training (METRICS.md; the 1e-9 keeps rounding noise from counting).
+ * angles never seen in training (docs/metrics.md; the 1e-9 keeps rounding noise from counting).
  */
 export function exposedPairs(
   theta: Float64Array,

@@ -10,14 +10,15 @@
  *   alibi, none; relative_key / relative_key_query → none, reported as assumed); `alibi: true` (also
  *   under `attn_config`); `sinusoidal_pos_embds: true`; any rotary key (`rope_theta`,
  *   `rotary_emb_base`, `rope_parameters`, `rope_scaling`, `partial_rotary_factor`, `rotary_pct`,
- *   `rotary_dim`) → rotary; otherwise the code of the `model_type` family (the family table, `checkpoint-families.ts`)
- *   (rotary families without `rope_theta` get base 10000, reported as assumed); otherwise GPT-2
+ *   `rotary_dim`) → rotary; otherwise the code of the `model_type` family (the family table,
+ *   `checkpoint-families.ts`; rotary families without `rope_theta` get base 10000, reported as
+ *   assumed); otherwise GPT-2
  *   compact keys → learned; otherwise none, reported as assumed.
  * - Gated feed-forward: the activation (`hidden_act`, `hidden_activation`, `activation_function`,
  *   `dense_act_fn`) is one that gated models are configured with: silu, swish, swiglu, geglu,
  *   reglu; or T5's `feed_forward_proj` starts with `gated-`; or the `model_type` is one whose
- *   block is always gated (`gated` in the family table: Llama, Mistral, Qwen, Gemma, … — Gemma writes
- *   `gelu_pytorch_tanh`, which non-gated models use too, so the name alone is not enough).
+ *   block is always gated (`gated` in the family table: Llama, Mistral, Qwen, Gemma, … — Gemma
+ *   writes `gelu_pytorch_tanh`, which non-gated models use too, so the name alone is not enough).
  * - Output matrix tied unless `tie_word_embeddings` is false (the checkpoint libraries' default).
  * - Biases: `attention_bias`, `mlp_bias`, `bias` or `use_bias` when stated; otherwise on for the
  *   families with `bias` in the family table and for GPT-2 style configs, off for the rest.

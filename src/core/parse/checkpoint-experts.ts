@@ -1,5 +1,5 @@
 /**
- * Checkpoint-style configs: mixtures of experts and latent attention (METRICS.md, "Mixtures of
+ * Checkpoint-style configs: mixtures of experts and latent attention (docs/metrics.md, "Mixtures of
  * experts and latent attention"), keyed as the published configs write them:
  * - Experts: `num_local_experts`, `num_experts` or `n_routed_experts` (a stated 0 or 1 is a dense
  *   model) with `num_experts_per_tok`; routed width `moe_intermediate_size` (default: the
@@ -26,8 +26,8 @@ type SizeReader = (
 ) => number | undefined;
 
 /**
- * Reads the experts block; null for a dense model. Llama-4-style configs (families with `oneSharedExpert`)
- * write the expert width as `intermediate_size` and the dense layers' width as
+ * Reads the experts block; null for a dense model. Llama-4-style configs (families with
+ * `oneSharedExpert`) write the expert width as `intermediate_size` and the dense layers' width as
  * `intermediate_size_mlp`; their mixture layers are `moe_layers`, else every
  * `interleave_moe_layer_step`th layer; `denseFfn` then replaces the feed-forward width.
  */

@@ -1,13 +1,14 @@
 /**
- * Checkpoint-style configs: which decoder layers attend how (METRICS.md, "Layers that differ"),
+ * Checkpoint-style configs: which decoder layers attend how (docs/metrics.md, "Layers that differ"),
  * keyed as the published configs write it:
  * - `layer_types`: one entry per layer, `sliding_attention`, `full_attention` or
  *   `chunked_attention`.
  * - `sliding_window` (unless `use_sliding_window` is false; Qwen families turn it off unless it
  *   is true), with, first match: `sliding_window_pattern` N (every Nth layer is global: layer i
  *   slides when `(i + 1) % N != 0`, as the Gemma-3-style config classes expand it); the family
- *   patterns (`globalEvery` in the family table, checkpoint-families.ts; gemma2: local and global alternate, starting with a local layer;
- *   gemma3 / gemma3_text: N = 6; cohere2: N = 4 — each class's default); `max_window_layers`
+ *   patterns (`globalEvery` in `checkpoint-families.ts`; gemma2: local and global alternate,
+ *   starting with a local layer; gemma3 / gemma3_text: N = 6; cohere2: N = 4 — each class's
+ *   default); `max_window_layers`
  *   (layers from that index on slide, as the Qwen code does); otherwise every layer slides.
  * - `attention_chunk_size` with `no_rope_layers` (one entry per layer, 1 = the layer has the
  *   rotary code, 0 = none) or `no_rope_layer_interval` (every Nth layer has none; default 4 for
@@ -22,9 +23,8 @@
 import type { LayerAttention } from '../model.js';
 import type { FieldReader } from './fields.js';
 import { familyOf } from './checkpoint-families.js';
-
-import type { SourceMapping, SourceValue } from './source.js';
 import { isCount } from '../metrics/sizes.js';
+import type { SourceMapping, SourceValue } from './source.js';
 
 const LAYER_TYPE_NAMES: Readonly<Record<string, LayerAttention>> = {
   full_attention: 'full',

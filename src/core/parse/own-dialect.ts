@@ -267,7 +267,7 @@ export function readOwnDialect(r: FieldReader): SpecDraft {
 
 type Need = (n: number | undefined, path: string[], what: string) => number;
 
-/** Experts with their widths, shared experts and dense layers (METRICS.md, "Mixtures of experts and latent attention"). */
+/** Experts with their widths, shared experts and dense layers (docs/metrics.md, "Mixtures of experts and latent attention"). */
 function readExperts(r: FieldReader, at: string[], need: Need): Experts {
   const experts: Experts = {
     total: need(
@@ -404,7 +404,7 @@ function readShapes(
 
 /**
  * `dtypes.weight-group-size` (and `weight-zero-point`): with weights int4, int8 or fp8, the
- * layers' matrices are stored quantized with a scale per group (METRICS.md, "Quantized weights").
+ * layers' matrices are stored quantized with a scale per group (docs/metrics.md, "Quantized weights").
  */
 function readWeightGroups(r: FieldReader, at: string[]): WeightQuantization | null {
   const groupPath = [...at, 'weight-group-size'];

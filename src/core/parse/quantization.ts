@@ -1,5 +1,5 @@
 /**
- * `quantization_config` of checkpoint-style configs (METRICS.md, "Quantized weights"), as the
+ * `quantization_config` of checkpoint-style configs (docs/metrics.md, "Quantized weights"), as the
  * published checkpoints write it. Counted methods, by `quant_method`:
  * - `gptq` (Frantar et al. 2022): `bits`, `group_size` (default 128; -1 one scale per output row),
  *   a 16-bit scale per group and a packed zero point of `bits` bits per group (the GPTQ checkpoint

@@ -150,7 +150,7 @@ function unknownKeyMessage(
   const nearest = nearestName(name, allowed);
   const hint = nearest === null ? '' : `; did you mean "${nearest}"?`;
   if (parentKey === 'limits') {
-    return `unknown metric ${quote(name)}: limits are keyed by metric names exactly as in the metric contract (METRICS.md)${hint}`;
+    return `unknown metric ${quote(name)}: limits are keyed by metric names exactly as in the metric contract (docs/metrics.md of context-reach)${hint}`;
   }
   if (parentKey === 'rules')
     return `unknown rule id ${quote(name)}: expected a rule id of context-reach${hint}`;

@@ -23,7 +23,7 @@ import { extensionRatio, headroom, reach, scalingCover } from '../metrics/reach.
 import { declaredSpan, evaluationSpan, trainedSpan } from '../metrics/spans.js';
 import type { FloatFormat } from '../model.js';
 
-/** Context-budget metrics of METRICS.md for `spec`. */
+/** Context-budget metrics of docs/metrics.md for `spec`. */
 export interface BudgetMetrics {
   weightBytes: number | null;
   cachePerTokenBytes: number | null;
@@ -57,7 +57,7 @@ export function budgetMetrics(spec: ModelSpec): BudgetMetrics {
   };
 }
 
-/** Range metrics of METRICS.md that need no scan. */
+/** Range metrics of docs/metrics.md that need no scan. */
 export interface RangeMetrics {
   declaredSpan: number | null;
   trainedSpan: number | null;

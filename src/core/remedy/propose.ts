@@ -8,7 +8,7 @@
  * bisection (at most 54 steps), at most `MAX_PROOFS_PER_KIND` full proofs per kind, and the
  * capped stages of the base search (`rotary-base.ts`).
  */
-
+import { checkLimit } from '../policy/limit-check.js';
 import type { Limit } from '../policy/judging.js';
 import { isMetricPath, metricValue } from '../metrics/metric-path.js';
 import { computeMetrics, frequencyPlan } from '../metrics/compute.js';
@@ -43,7 +43,6 @@ import { searchRotaryBase, type BaseDirection, type BaseTrial } from './rotary-b
 import { coveringFactor } from './scaling-factor.js';
 import type { Change, Remedy, RemedyFields } from '../report/types.js';
 import { largestPassing } from './whole-search.js';
-import { checkLimit } from '../policy/limit-check.js';
 
 /** Full proofs one kind of change may run before it gives up (default: `4`). */
 export const MAX_PROOFS_PER_KIND = 4;

@@ -4,9 +4,10 @@
  * smallest base with `Σ_i cos(k θ_i) >= 0` for every k up to the span, solved numerically there
  * too).
  *
- * Method. Which bases pass is NOT monotone in the base (SOURCES.md §12: a larger base can fail
- * where a smaller one passes; for 8k offsets and 64 pairs, 84,000 passes, 113,000 fails, 160,000
- * passes), so a plain bisection can land on the far side of a pocket of failing bases.
+ * Method. Which bases pass is NOT monotone in the base (so Men et al. 2024, Table 2, cannot be
+ * reproduced exactly: a larger base can fail where a smaller one passes; for 8k offsets and 64
+ * pairs, 84,000 passes, 113,000 fails, 160,000 passes), so a plain bisection can land on the far
+ * side of a pocket of failing bases.
  * (1) Walk: the two-significant-digit grid (as published bases are written: 84,000, 500,000)
  * is walked from the current base in the search's direction, and the first grid base that
  * passes is the answer: the nearest passing base on that grid, exactly. The walk stops when its

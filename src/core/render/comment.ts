@@ -1,16 +1,15 @@
 import { markdownTable } from 'markdown-table';
-
 import { METRIC_PATHS, metricValue as metricOf } from '../metrics/metric-path.js';
 import type { MetricPath } from '../metrics/types.js';
 import type { LocationMap, ModelSpec } from '../model.js';
 import { filePatches, type FilePatch } from '../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
 import type {
-  Remedy,
   FileDecision,
   GateReport,
   JudgedFinding,
   MetricDelta,
+  Remedy,
 } from '../report/types.js';
 import { formatInteger, formatNumber } from '../format/units.js';
 import {
@@ -21,6 +20,7 @@ import {
   escapeMarkdown,
   htmlCode,
   linkablePath,
+  linkUrl,
 } from './escape.js';
 import { fitText, perDeviceText } from './device-text.js';
 import {
@@ -69,7 +69,7 @@ function where(
   // A path git would never list (a `..` segment in a tampered report) is named, never linked.
   if (!ctx.blobUrl || !linkablePath(file.path)) return `${label}${key}`;
   const anchor = finding.line !== null ? `#L${finding.line}` : '';
-  return `[${label}](${ctx.blobUrl}/${encodePath(file.path)}${anchor})${key}`;
+  return `[${label}](${linkUrl(ctx.blobUrl)}/${encodePath(file.path)}${anchor})${key}`;
 }
 
 function severityTag(finding: JudgedFinding): string {
@@ -471,7 +471,7 @@ function preamble(report: GateReport, ctx: MarkdownContext): string[] {
   const lines: string[] = [];
   const judged = report.files.length;
   lines.push(
-    `Judged ${judged} changed model config${judged === 1 ? '' : 's'} between \`${report.base.slice(0, 12)}\` (base) and \`${report.head.slice(0, 12)}\` (head).`,
+    `Judged ${judged} changed model config${judged === 1 ? '' : 's'} between ${codeId(report.base.slice(0, 12))} (base) and ${codeId(report.head.slice(0, 12))} (head).`,
     '',
   );
   if (report.policy.source === 'built-in') {
@@ -524,7 +524,7 @@ function footer(report: GateReport, ctx: MarkdownContext): string[] {
   if (ctx.htmlReportUrl) {
     const at = ctx.htmlReportWhere ? ` ${escapeMarkdown(ctx.htmlReportWhere)}` : '';
     lines.push(
-      `Charts, findings and fixes: [the HTML report](${encodeURI(ctx.htmlReportUrl).replace(/[()]/g, (c) => (c === '(' ? '%28' : '%29'))})${at}.`,
+      `Charts, findings and fixes: [the HTML report](${linkUrl(ctx.htmlReportUrl)})${at}.`,
       '',
     );
   }

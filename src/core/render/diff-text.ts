@@ -4,9 +4,8 @@ import { formatChange, formatMetric } from '../format/metric-format.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { PLAIN, type TextStyle } from './inspect-text.js';
 import { remedyLines, togetherText, type RemedyNaming } from './remedy-text.js';
-
-import type { LocationMap } from '../model.js';
 import type { GateReport, FileDecision } from '../report/types.js';
+import type { LocationMap } from '../model.js';
 
 /** The file's own key names for its fixes (a report read back from JSON has no locations: default keys then). */
 function naming(file: FileDecision): RemedyNaming | null {

@@ -114,6 +114,14 @@ export function encodePath(path: string): string {
 }
 
 /**
+ * A URL as a markdown link target: characters a URL may not hold percent-encoded (`encodeURI`),
+ * and `(` `)` too, which would end the target and let the rest be read as markdown.
+ */
+export function linkUrl(url: string): string {
+  return encodeURI(url).replace(/[()]/g, (c) => (c === '(' ? '%28' : '%29'));
+}
+
+/**
  * Untrusted text shown verbatim in a fenced code block (`lang` is ours: `json`, `yaml`,
  * `suggestion`): the fence is one backtick longer than the longest run inside, so no line of the
  * text can close it, and everything inside is literal (no element, link or mention).

@@ -6,7 +6,7 @@
  * with their proven remedies and the table of changed metrics. Every path, key, value and
  * message from the pull request is escaped (`html/markup.ts` escapes by default).
  */
-
+import { formatInteger, formatNumber } from '../format/units.js';
 import type { FileReport } from '../inspect.js';
 import { computeMetrics } from '../metrics/compute.js';
 import type { LocationMap, ModelSpec } from '../model.js';
@@ -26,7 +26,6 @@ import { formatDeltaChange, formatMetric } from '../format/metric-format.js';
 import { limitStateWord, MEMORY_CAUTION, MEMORY_METRICS, VERDICT_WORD } from './marks.js';
 import { ESTIMATE_NOTICE } from './notice.js';
 import { changeParts } from './remedy-text.js';
-import { formatInteger, formatNumber } from '../format/units.js';
 
 export interface HtmlReportOptions {
   /** Page title (default: `context-reach report`). */

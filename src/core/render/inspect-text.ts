@@ -67,7 +67,7 @@ function shapeLine(report: FileReport): string {
   return parts.join(' · ');
 }
 
-/** One row per kind of decoder layer (METRICS.md, "Layers that differ"). */
+/** One row per kind of decoder layer (docs/metrics.md, "Layers that differ"). */
 function layerKindRows(m: Metrics): string[] {
   const kinds = m.layerKinds;
   if (!kinds || kinds.length === 0) return [];

@@ -5,9 +5,8 @@
  * in grey print and for people who do not tell the colours apart; a warning never wears the
  * failure mark.
  */
-
-import type { Severity } from '../model.js';
 import type { LimitState, MetricDelta, Verdict } from '../report/types.js';
+import type { Severity } from '../model.js';
 
 export const SEVERITY_MARK: Record<Severity, string> = { block: '■', warn: '▲', info: '●' };
 export const SEVERITY_WORD: Record<Severity, string> = {

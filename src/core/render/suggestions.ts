@@ -6,13 +6,12 @@
  * starts with a hidden marker naming its finding, so a re-run finds its own suggestions: it keeps
  * or updates them and removes those whose finding is gone, never posting one twice.
  */
-
+import type { FileDecision, GateReport, JudgedFinding } from '../report/types.js';
 import { lineEdit } from '../remedy/suggestion-edit.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
 import { remedyPatches } from './comment.js';
-import { codeBlock, escapeMarkdown } from './escape.js';
+import { codeBlock, codeId, escapeMarkdown } from './escape.js';
 import { metricParts, allRemedies } from './remedy-text.js';
-import type { FileDecision, GateReport, JudgedFinding } from '../report/types.js';
 
 /** Start of every suggestion body; the finding's id and ` -->` follow. */
 export const SUGGESTION_MARKER = '<!-- context-reach:suggestion ';
@@ -89,7 +88,7 @@ export function planSuggestions(
           line: edit.endLine,
           body: [
             `${SUGGESTION_MARKER}${suggestionId(file, finding)} -->`,
-            `**context-reach** · \`${finding.rule}\`${finding.metric ? ` (\`${finding.metric}\`)` : ''}: this fix passes these rules (${escapeMarkdown(values)}); it still needs ${escapeMarkdown(needs)}.`,
+            `**context-reach** · ${codeId(finding.rule)}${finding.metric ? ` (${codeId(finding.metric)})` : ''}: this fix passes these rules (${escapeMarkdown(values)}); it still needs ${escapeMarkdown(needs)}.`,
             '',
             codeBlock(edit.replacement, 'suggestion'),
           ].join('\n'),

@@ -9,7 +9,6 @@
  */
 import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
-
 import { METRIC_PATHS } from '../metrics/metric-path.js';
 import {
   FLOAT_FORMATS,

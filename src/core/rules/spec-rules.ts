@@ -288,7 +288,7 @@ function orList(items: readonly (string | number)[]): string {
 }
 
 /**
- * `layout-unshardable` (METRICS.md, "Serving across devices"): a tensor degree `t` with
+ * `layout-unshardable` (docs/metrics.md, "Serving across devices"): a tensor degree `t` with
  * `heads % t != 0`, or with neither of `kvHeads` and `t` dividing the other, cannot split the
  * attention (decoder, and encoder where there is one); a pipeline degree above the layers leaves a
  * stage empty. The message names the degrees that work.

@@ -3,7 +3,7 @@
  * a glance: the metrics behind blocking findings first, then crossed limits, then other changes,
  * each with base → head and a tone (bad, warning, better, neutral).
  */
-
+import type { FileDecision } from '../../report/types.js';
 import { metricValue } from '../../metrics/metric-path.js';
 import { usableDeviceBytes } from '../../metrics/memory-curve.js';
 import type { MetricPath } from '../../metrics/types.js';
@@ -12,7 +12,6 @@ import { formatMetric } from '../../format/metric-format.js';
 import { MEMORY_CAUTION_SHORT as MEMORY_CAUTION } from '../marks.js';
 import { tokenLabel } from './chart-frame.js';
 import { h, type Markup } from './markup.js';
-import type { FileDecision } from '../../report/types.js';
 
 interface CardSpec {
   metric: MetricPath;

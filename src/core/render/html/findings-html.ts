@@ -3,7 +3,6 @@
  * and under a blocking one the proven change (field, value before, value after) with the metric
  * values it would produce, the alternatives, or why there is none.
  */
-
 import type { LocationMap, ModelSpec } from '../../model.js';
 import type { CombinedRemedy, Remedy, FileDecision, JudgedFinding } from '../../report/types.js';
 import { filePatches } from '../../remedy/file-patch.js';

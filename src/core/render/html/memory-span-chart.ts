@@ -1,6 +1,6 @@
 /**
  * Device memory against span, base and head: weights plus the key/value cache of the served
- * sequences on one device (`memoryBytesPerDevice` of METRICS.md at every span, `memoryBytes` on
+ * sequences on one device (`memoryBytesPerDevice` of docs/metrics.md at every span, `memoryBytes` on
  * one device), the weights alone, the usable memory per device, each version's evaluation span marked with how many sequences fit there, and, when a
  * remedy changes the memory, the head with that remedy applied.
  */

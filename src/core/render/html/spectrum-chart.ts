@@ -2,7 +2,7 @@
  * The frequency spectrum of the position code, base against head: each pair's wavelength
  * `2π/θ'_i` on a log scale against its index, the trained span `L0` and the evaluation span `T`
  * as horizontal rules, the band between them shaded, and each head pair coloured by what it does
- * over those spans (turning, unturned, exposed: METRICS.md).
+ * over those spans (turning, unturned, exposed: docs/metrics.md).
  */
 import { scaleLinear, scaleLog } from 'd3-scale';
 import { line } from 'd3-shape';
