@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -127,6 +127,7 @@ beforeAll(async () => {
 }, 60_000);
 
 afterAll(async () => {
+  if (folder) rmSync(folder, { recursive: true, force: true });
   expect(fake.mismatches).toEqual([]);
   expect(fake.unhandled).toEqual([]);
   await fake?.close();
@@ -360,12 +361,15 @@ describe("the job summary fits GitHub's 1 MiB in bytes (point 9)", () => {
   });
 
   it('the summary writer cuts any longer text by bytes, at a character boundary', () => {
-    const path = join(mkdtempSync(join(tmpdir(), 'context-reach-summary-')), 'summary.md');
+    const dir = mkdtempSync(join(tmpdir(), 'context-reach-summary-'));
+    const path = join(dir, 'summary.md');
     writeFileSync(path, '');
     const out = createRunnerOutput({ GITHUB_STEP_SUMMARY: path });
     void out.summary('é模'.repeat(400_000));
     const written = readFileSync(path);
-    expect(statSync(path).size).toBeLessThanOrEqual(SUMMARY_LIMIT);
+    const size = statSync(path).size;
+    rmSync(dir, { recursive: true, force: true });
+    expect(size).toBeLessThanOrEqual(SUMMARY_LIMIT);
     expect(new TextDecoder('utf-8', { fatal: true }).decode(written)).toContain('cut at GitHub');
   });
 });
