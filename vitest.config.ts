@@ -30,9 +30,10 @@ export default defineConfig({
   test: {
     testTimeout: 30_000,
     // vitest's default on a run is one worker fewer than the cores: one worker on a 2-core
-    // machine. Many tests wait on git, a child node or the loopback API rather than compute,
-    // so one worker per core keeps both cores busy.
-    maxWorkers: Math.max(2, availableParallelism()),
+    // machine. Much of a test's time is waiting, not computing: on git, and on octokit's
+    // throttling, which spaces one client's writes a second apart (95.7 s of such waits in
+    // `npm test`, measured 2026-12-02). Two workers per core keep the cores busy meanwhile.
+    maxWorkers: 2 * availableParallelism(),
     globalSetup: ['test/support/temp-root.ts'],
     coverage: {
       provider: 'v8',

@@ -1,6 +1,6 @@
 /**
  * Frequencies and the bit-for-bit check shared by angle-rounding-runs.test.ts and
- * angle-rounding-runs.slow.test.ts: \`angleErrorMax\` against the straightforward loop over every
+ * angle-rounding-runs.slow.test.ts: `angleErrorMax` against the straightforward loop over every
  * (p, i) of reference.ts.
  */
 import fc from 'fast-check';

@@ -1,7 +1,7 @@
 /**
- * \`angleErrorMax\` in fp32 just past the exact-integer limit 2^24, bit for bit against the loop
+ * `angleErrorMax` in fp32 just past the exact-integer limit 2^24, bit for bit against the loop
  * over every position (see angle-rounding-runs.test.ts): each case walks 2^24 positions or more,
- * so this runs in \`npm run test:full\`.
+ * so this runs in `npm run test:full`.
  */
 import { describe, it } from 'vitest';
 import fc from 'fast-check';

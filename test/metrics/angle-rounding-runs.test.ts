@@ -6,7 +6,7 @@
  * exactly but not a power of two (products round, no drift), θ within 2^-40 of a held value (drift
  * so small the bound prunes late), and ordinary θ. bf16 (m = 8) puts a dozen binades of runs
  * inside spans the reference loop covers in milliseconds; fp32 is checked just past 2^24 in
- * angle-rounding-runs.slow.test.ts (\`npm run test:full\`: the loop visits 2^24 positions a case).
+ * angle-rounding-runs.slow.test.ts (`npm run test:full`: the loop visits 2^24 positions a case).
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { startFakeGitHub, statusFault } from '../support/fake-github.js';
 import { pullRequestEvent, runBundle } from '../support/run-bundle.js';
 import { scenarioRepo } from '../support/scenario-repo.js';
-import { BLOCKING, checkedFakes, MODEL } from './api-faults-common.js';
+import { BLOCKING, checkedFakes, MODEL } from './checked-scenarios.js';
 
 // API faults as api-faults.test.ts injects them, met by the bundled action (dist/index.js) in a
 // child process as the runner starts it (`npm run test:full`: it needs a build of these sources).

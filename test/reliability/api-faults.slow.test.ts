@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { checkpointConfig } from '../support/scenario-repo.js';
-import { checkedFakes } from './api-faults-common.js';
+import { checkedFakes } from './checked-scenarios.js';
 
 // Pull requests of 3,500 files (more than GitHub's file list gives) through the action in-process,
 // as in api-faults.test.ts; thousands of files make them slow, so they run in `npm run test:full`.

@@ -11,7 +11,7 @@ import {
   statusFault,
   type FakeGitHub,
 } from '../support/fake-github.js';
-import { checkedFakes, MODEL } from './api-faults-common.js';
+import { checkedFakes, MODEL } from './checked-scenarios.js';
 
 // API faults against the loopback stand-in for GitHub's REST API (every request checked against
 // GitHub's OpenAPI description), the action in-process with the real adapters: each run ends

@@ -1,6 +1,6 @@
 /**
- * What the API-fault tests share (api-faults.test.ts, .bundle.test.ts, .slow.test.ts): the change
- * that blocks, and the fakes of a file's runs, each checked and closed after every test.
+ * What the API-fault and read-failure tests share (api-faults.*.ts, read-failures.slow.test.ts):
+ * the change that blocks, and the fakes of a file's runs, each checked and closed after every test.
  */
 import { afterEach, expect } from 'vitest';
 import {
