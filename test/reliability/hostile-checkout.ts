@@ -6,7 +6,7 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, relative } from 'node:path';
-import { expect } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { createGitReader } from '../../src/action/git.js';
 import type { FileDecision } from '../../src/core/compare/decide.js';
 import { runGate, type ContentSource } from '../../src/core/gate.js';
@@ -106,4 +106,20 @@ export function expectFinding(c: HostileCase, file: FileDecision | undefined): v
   expect(found!.line).toBe(c.finding.line);
   expect(found!.file).toBe(c.path);
   if (found!.rule === 'config-unreadable') expect(found!.message.startsWith(c.path)).toBe(true);
+}
+
+/**
+ * For the calling test file: the checkout, made before its tests and removed after them, when
+ * `figures` (the file's measurements) are printed. Returns the checkout once made.
+ */
+export function useHostileCheckout(figures: string[]): () => HostileCheckout {
+  let checkout: HostileCheckout | undefined;
+  beforeAll(async () => {
+    checkout = await hostileCheckout();
+  }, 120_000);
+  afterAll(() => {
+    checkout?.remove();
+    console.log(`hostile files:\n${figures.join('\n')}`);
+  });
+  return () => checkout!;
 }

@@ -18,10 +18,9 @@ import {
   CASES,
   CONTROL,
   expectFinding,
-  hostileCheckout,
   MEMORY_LIMIT_MIB,
   TIME_LIMIT_MS,
-  type HostileCheckout,
+  useHostileCheckout,
 } from './hostile-checkout.js';
 
 // The hostile files of hostile-files.test.ts all at once through the bundled action in a child
@@ -30,17 +29,8 @@ import {
 // run dist/ (which must be built from these sources).
 
 const CLI_BUNDLE = resolve(import.meta.dirname, '../../dist/cli.js');
-let checkout: HostileCheckout;
 const figures: string[] = [];
-
-beforeAll(async () => {
-  checkout = await hostileCheckout();
-}, 120_000);
-
-afterAll(() => {
-  checkout?.remove();
-  console.log(`hostile files:\n${figures.join('\n')}`);
-});
+const checkout = useHostileCheckout(figures);
 
 describe('the bundled action (dist/index.js) on a pull request with every hostile file at once', () => {
   let run: BundleRun;
@@ -53,10 +43,10 @@ describe('the bundled action (dist/index.js) on a pull request with every hostil
         owner: 'example-org',
         repo: 'model-zoo',
         number: 7,
-        base: checkout.repo.base,
-        head: checkout.repo.head,
+        base: checkout().repo.base,
+        head: checkout().repo.head,
       }),
-      workspace: checkout.repo.dir,
+      workspace: checkout().repo.dir,
       apiUrl: 'http://127.0.0.1:9',
       repository: 'example-org/model-zoo',
       inputs: { 'github-token': '', comment: 'off' },
@@ -87,7 +77,9 @@ describe('the bundled action (dist/index.js) on a pull request with every hostil
     }
     const good = report.files.find((f) => f.path === CONTROL)!;
     expect(good.head).not.toBeNull();
-    expect(good.findings.map((f) => f.rule)).toEqual(checkout.control.findings.map((f) => f.rule));
+    expect(good.findings.map((f) => f.rule)).toEqual(
+      checkout().control.findings.map((f) => f.rule),
+    );
   });
 
   it('annotates the unreadable files at their lines', () => {

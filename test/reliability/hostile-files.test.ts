@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { GateReport } from '../../src/core/compare/decide.js';
 import { runGate } from '../../src/core/gate.js';
 import { renderComment } from '../../src/core/render/comment.js';
@@ -7,10 +7,9 @@ import {
   CASES,
   CONTROL,
   expectFinding,
-  hostileCheckout,
   POLICY_PATH,
   TIME_LIMIT_MS,
-  type HostileCheckout,
+  useHostileCheckout,
 } from './hostile-checkout.js';
 import type { HostileCase } from './hostile-files.js';
 import { findingProblems, markdownProblems, numberProblems } from './report-checks.js';
@@ -22,14 +21,14 @@ import { findingProblems, markdownProblems, numberProblems } from './report-chec
 // reader in child processes are in hostile-files.bundle.test.ts, a 100 MiB file over the REST
 // API in hostile-files.slow.test.ts (both in `npm run test:full`).
 
-let checkout: HostileCheckout;
 const prototypeBefore = Object.getOwnPropertyNames(Object.prototype).sort();
 const figures: string[] = [];
+const checkout = useHostileCheckout(figures);
 
 function gate(c: HostileCase): Promise<GateReport> {
-  return runGate(checkout.source, {
-    base: checkout.repo.base,
-    head: checkout.repo.head,
+  return runGate(checkout().source, {
+    base: checkout().repo.base,
+    head: checkout().repo.head,
     policyPath: POLICY_PATH,
     changes: [
       { status: 'added', path: c.path, previousPath: null },
@@ -37,15 +36,6 @@ function gate(c: HostileCase): Promise<GateReport> {
     ],
   });
 }
-
-beforeAll(async () => {
-  checkout = await hostileCheckout();
-}, 120_000);
-
-afterAll(() => {
-  checkout?.remove();
-  console.log(`hostile files:\n${figures.join('\n')}`);
-});
 
 describe('runGate(git source, …) on a hostile file beside a good one', () => {
   it.each(CASES.map((c) => [c.name, c] as const))(
@@ -55,7 +45,7 @@ describe('runGate(git source, …) on a hostile file beside a good one', () => {
       const cpu = cpuClock();
       const report = await gate(c);
       const body = renderComment(report, {
-        blobUrl: `https://github.example/o/r/blob/${checkout.repo.head}`,
+        blobUrl: `https://github.example/o/r/blob/${checkout().repo.head}`,
       });
       // This process's CPU time (git's own is a few ms a call): what the wall clock adds is other work.
       const cpuMs = cpu();
@@ -71,7 +61,7 @@ describe('runGate(git source, …) on a hostile file beside a good one', () => {
         c,
         report.files.find((f) => f.path === c.path),
       );
-      expect(report.files.find((f) => f.path === CONTROL)).toEqual(checkout.control);
+      expect(report.files.find((f) => f.path === CONTROL)).toEqual(checkout().control);
       expect(numberProblems(report)).toEqual([]);
       expect(findingProblems(report)).toEqual([]);
       expect(
