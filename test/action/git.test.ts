@@ -3,6 +3,7 @@ import {
   chmodSync,
   mkdirSync,
   mkdtempSync,
+  readFileSync,
   rmSync,
   statSync,
   symlinkSync,
@@ -281,16 +282,22 @@ describe('hasCommit(rev), resolveCommit(rev), mergeBase(a, b)', () => {
 describe('bounds', () => {
   test('a git call that runs past the timeout is stopped', async () => {
     const slow = join(root, 'slow-git');
-    writeFileSync(slow, '#!/bin/sh\nsleep 5\n');
+    const pidFile = join(root, 'slow-git.pid');
+    // `exec`: the process git's runner starts is the sleep itself, so stopping it ends the sleep.
+    writeFileSync(slow, `#!/bin/sh\necho $$ > '${pidFile}'\nexec sleep 5\n`);
     chmodSync(slow, 0o755);
-    const started = Date.now();
     const error = await createGitReader(repo, { git: slow, timeoutMs: 200 })
       .hasCommit('HEAD')
       .catch((e: unknown) => e);
+    // A sleep that ran its 5 s would have exited 0: the error says it was stopped at 200 ms.
     expect(error).toBeInstanceOf(GitError);
     expect((error as Error).message).toMatch(/did not finish within 200 ms/);
-    expect(Date.now() - started).toBeLessThan(4000);
+    // And it is gone, not left running (signal 0 only checks that the process exists).
+    const pid = Number(readFileSync(pidFile, 'utf8'));
+    expect(pid).toBeGreaterThan(0);
+    expect(() => process.kill(pid, 0)).toThrow(expect.objectContaining({ code: 'ESRCH' }));
     unlinkSync(slow);
+    unlinkSync(pidFile);
   });
 
   test('listing output past its bound is refused', async () => {

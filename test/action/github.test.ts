@@ -1,12 +1,10 @@
-import { afterEach, beforeEach, describe, expect, test } from 'vitest';
+import { beforeEach, describe, expect, test } from 'vitest';
 import {
   ApiError,
-  PULL_REQUEST_FILE_CAP,
   createGitHubClient,
   isNotFoundError,
   isPermissionError,
 } from '../../src/adapters/github-rest.js';
-import type { GitHubClient, GitHubClientOptions } from '../../src/adapters/github-rest.js';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/adapters/content-limit.js';
 import { publishComment } from '../../src/action/report-comment.js';
 import {
@@ -16,47 +14,27 @@ import {
   primaryRateLimit,
   secondaryRateLimit,
   serverError,
-  startFakeGitHub,
   statusFault,
   tree,
 } from '../support/fake-github.js';
-import type { FakeGitHub, FakePullFile } from '../support/fake-github.js';
+import {
+  addPull,
+  BASE,
+  client,
+  fake,
+  HEAD,
+  logs,
+  OWNER,
+  REPO,
+  useFakeGitHub,
+} from './github-fixture.js';
 
-const OWNER = 'example-org';
-const REPO = 'model-zoo';
-const BASE = 'a'.repeat(40);
-const HEAD = 'b'.repeat(40);
+// The REST adapter against the loopback GitHub (github-fixture.ts). Its file list at GitHub's
+// 3,000-file cap is in github.slow.test.ts (`npm run test:full`).
+
 const MARKER = '<!-- context-reach:report -->';
 
-let fake: FakeGitHub;
-let logs: string[];
-
-function client(options: Partial<GitHubClientOptions> = {}): GitHubClient {
-  // 1 ms per requested second: waits keep their proportions and tests stay fast.
-  return createGitHubClient(fake.state.token, {
-    baseUrl: fake.url,
-    log: { debug: (m) => logs.push(m), info: (m) => logs.push(m), warn: (m) => logs.push(m) },
-    msPerSecond: 1,
-    ...options,
-  });
-}
-
-function addPull(
-  number: number,
-  files: FakePullFile[],
-  extra: { labels?: string[]; headRepo?: string } = {},
-): void {
-  fake.state.pulls.set(number, {
-    number,
-    baseSha: BASE,
-    headSha: HEAD,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: extra.labels ?? [],
-    headRepo: extra.headRepo ?? `${OWNER}/${REPO}`,
-    files,
-  });
-}
+useFakeGitHub();
 
 function addComment(issueNumber: number, body: string, user = fake.state.tokenUser): number {
   const id = fake.state.nextCommentId;
@@ -71,21 +49,6 @@ function addComment(issueNumber: number, body: string, user = fake.state.tokenUs
   });
   return id;
 }
-
-beforeEach(async () => {
-  fake = await startFakeGitHub();
-  logs = [];
-});
-
-afterEach(async () => {
-  // Every request the adapter made is one GitHub's REST description allows, and the fake's answers match it too.
-  expect(fake.mismatches).toEqual([]);
-  expect(fake.responseMismatches).toEqual([]);
-  expect(fake.unhandled).toEqual([]);
-  for (const line of logs) expect(line).not.toContain(fake.state.token);
-  expect(fake.requests.every((request) => request.authorized || request.fault)).toBe(true);
-  await fake.close();
-});
 
 describe('listPullRequestFiles(owner, repo, number)', () => {
   test('pages through 250 files, 100 a page, following the Link header', async () => {
@@ -131,34 +94,6 @@ describe('listPullRequestFiles(owner, repo, number)', () => {
       { status: 'modified', path: 'f.json', previousPath: null },
       { status: 'modified', path: 'g.json', previousPath: null },
     ]);
-  });
-
-  test('flags truncated when GitHub stops at its 3,000-file cap', async () => {
-    addPull(
-      9,
-      Array.from({ length: 3500 }, (_, i) => ({
-        filename: `f${i}.json`,
-        status: 'added' as const,
-      })),
-    );
-    const { files, truncated } = await client().listPullRequestFiles(OWNER, REPO, 9);
-    expect(PULL_REQUEST_FILE_CAP).toBe(3000);
-    expect(files).toHaveLength(3000);
-    expect(truncated).toBe(true);
-    expect(fake.calls('pulls/list-files')).toHaveLength(30);
-  });
-
-  test('is not truncated one file below the cap', async () => {
-    addPull(
-      10,
-      Array.from({ length: 2999 }, (_, i) => ({
-        filename: `f${i}.json`,
-        status: 'added' as const,
-      })),
-    );
-    const { files, truncated } = await client().listPullRequestFiles(OWNER, REPO, 10);
-    expect(files).toHaveLength(2999);
-    expect(truncated).toBe(false);
   });
 });
 

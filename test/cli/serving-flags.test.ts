@@ -1,4 +1,4 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -45,8 +45,12 @@ async function inspect(args: string[]): Promise<{ code: number; out: string; err
     env: { NO_COLOR: '1' },
     cwd: dir,
   };
-  const code = await run(['inspect', path, ...args], { files: createFileSource(), io });
-  return { code, out, err };
+  try {
+    const code = await run(['inspect', path, ...args], { files: createFileSource(), io });
+    return { code, out, err };
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
 }
 
 describe('inspect --tensor-parallel and --pipeline-parallel', () => {

@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -16,7 +16,8 @@ describe('context-reach diff --html FILE', () => {
     const { base, head } = demoTrees();
     const repo = scenarioRepo(base, head);
     const out: string[] = [];
-    const file = join(mkdtempSync(join(tmpdir(), 'context-reach-html-')), 'nested', 'report.html');
+    const dir = mkdtempSync(join(tmpdir(), 'context-reach-html-'));
+    const file = join(dir, 'nested', 'report.html');
     try {
       const status = await run(['diff', '--base', repo.base, '--head', repo.head, '--html', file], {
         files: { read: async () => new Uint8Array() },
@@ -35,6 +36,7 @@ describe('context-reach diff --html FILE', () => {
       expect(out.join('')).toContain('fix: model.position.scaling.factor 4 → 8');
     } finally {
       repo.remove();
+      rmSync(dir, { recursive: true, force: true });
     }
   });
 });

@@ -104,24 +104,6 @@ describe('h(tag, attrs, ...children)', () => {
 });
 
 describe('renderHtmlReport on a span the curve cannot afford', () => {
-  it('says the similarity curve is not drawn, and the gate plus page for one pair over 2^31 − 1 tokens take under 2 s of CPU', async () => {
-    const policy = { '.github/context-reach.yml': 'files: ["models/**"]\n' };
-    const cpu = process.cpuUsage();
-    const { report: long } = await gateOver(
-      { ...policy, 'models/x/config.json': checkpointConfig({ head_dim: 2 }) },
-      {
-        ...policy,
-        'models/x/config.json': checkpointConfig({
-          head_dim: 2,
-          max_position_embeddings: 2 ** 31 - 1,
-        }),
-      },
-    );
-    const page = renderHtmlReport(long);
-    const used = process.cpuUsage(cpu);
-    has(page, 'is not drawn: visiting every offset would take too long for a report');
-    expect((used.user + used.system) / 1000).toBeLessThan(2000);
-  }, 30_000);
   it('draws memory per device with the usable memory of one device, and says the fit per replica, when a replica spans 8 devices', async () => {
     // 70B-class shape (80 layers, 64 heads, 8 key/value heads of 128; Touvron et al. 2023, Llama 2): 137,953,296,384 fp16
     // weight bytes, 17,244,162,048 (16.1 GiB) per device over tensor-parallel 8.

@@ -106,8 +106,11 @@ describe("the project's documents", () => {
     expect(readme.slice(0, 1500)).toMatch(/pull request/);
   });
 
-  it("calls the README's test command from CI", () => {
+  it("calls the README's test command from CI, and the heavy tests after it", () => {
     expect(read('.ci/run')).toMatch(/^npm test( |$)/m);
-    expect(JSON.parse(read('package.json')).scripts.test).toBe('vitest run');
+    expect(read('.ci/run')).toMatch(/^npm run test:full( |$)/m);
+    const scripts = JSON.parse(read('package.json')).scripts;
+    expect(scripts.test).toBe('vitest run --project unit');
+    expect(scripts['test:full']).toBe('vitest run --project full');
   });
 });

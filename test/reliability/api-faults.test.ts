@@ -1,13 +1,8 @@
-import { execFileSync } from 'node:child_process';
+import { describe, expect, it } from 'vitest';
 import { inspect } from 'node:util';
-import { afterEach, describe, expect, it } from 'vitest';
 import { COMMENT_FAILED_NOTICE } from '../../src/action/run-action.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
-import {
-  runScenario,
-  type ScenarioOptions,
-  type ScenarioResult,
-} from '../support/action-harness.js';
+import type { ScenarioResult } from '../support/action-harness.js';
 import {
   connectionReset,
   connectionResetAfterEffect,
@@ -17,34 +12,15 @@ import {
   statusFault,
   type FakeGitHub,
 } from '../support/fake-github.js';
-import { pullRequestEvent, runBundle } from '../support/run-bundle.js';
-import { checkpointConfig, scenarioRepo } from '../support/scenario-repo.js';
+import { checkedFakes, MODEL } from './checked-scenarios.js';
 
 // API faults against the loopback stand-in for GitHub's REST API (every request checked against
 // GitHub's OpenAPI description), the action in-process with the real adapters: each run ends
-// with the right verdict and at most one report comment, however the API misbehaves.
+// with the right verdict and at most one report comment, however the API misbehaves. The bundled
+// action's runs are in api-faults.bundle.test.ts, pull requests of 3,500 files in
+// api-faults.slow.test.ts (both in `npm run test:full`).
 
-const MODEL = 'models/a/config.json';
-/** A change that blocks: the declared span quadruples and the position code stays. */
-const BLOCKING = {
-  base: { [MODEL]: checkpointConfig() },
-  head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) },
-};
-
-const fakes: FakeGitHub[] = [];
-afterEach(async () => {
-  for (const fake of fakes.splice(0)) {
-    expect(fake.mismatches).toEqual([]);
-    expect(fake.unhandled).toEqual([]);
-    await fake.close();
-  }
-});
-
-async function scenario(options: Partial<ScenarioOptions> = {}): Promise<ScenarioResult> {
-  const result = await runScenario({ ...BLOCKING, ...options });
-  if (!fakes.includes(result.fake)) fakes.push(result.fake);
-  return result;
-}
+const { scenario } = checkedFakes();
 
 const reports = (r: ScenarioResult) =>
   r.fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
@@ -258,98 +234,6 @@ describe('re-runs', () => {
   });
 });
 
-describe('pull requests from forks (read-only token)', () => {
-  it('the bundled action: no comment, the report in the summary and annotations, exit 1 on a block, no stack trace', async () => {
-    const repo = scenarioRepo(BLOCKING.base, BLOCKING.head);
-    const fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
-    fakes.push(fake);
-    fake.state.readOnly = true;
-    fake.state.pulls.set(7, {
-      number: 7,
-      baseSha: repo.base,
-      headSha: repo.head,
-      baseRef: 'main',
-      headRef: 'feature',
-      labels: [],
-      headRepo: 'someone-else/model-zoo',
-      files: [{ filename: MODEL, status: 'modified' }],
-    });
-    const run = await runBundle({
-      eventName: 'pull_request',
-      event: pullRequestEvent({
-        owner: 'example-org',
-        repo: 'model-zoo',
-        number: 7,
-        base: repo.base,
-        head: repo.head,
-        fork: true,
-      }),
-      workspace: repo.dir,
-      apiUrl: fake.url,
-      repository: 'example-org/model-zoo',
-      inputs: { 'github-token': fake.state.token },
-    });
-    repo.remove();
-    expect(run.code).toBe(1);
-    expect(fake.state.comments).toHaveLength(0);
-    expect(fake.calls('issues/create-comment').map((c) => c.status)).toEqual([403]);
-    expect(run.summary).toContain('span-grew-code-unchanged');
-    expect(run.summary).toContain('Pull requests from forks');
-    expect(run.annotations.some((a) => a.level === 'error' && a.properties.file === MODEL)).toBe(
-      true,
-    );
-    expect(run.outputs.verdict).toBe('block');
-    expect(run.outputs['comment-url']).toBe('');
-    expect(`${run.stdout}\n${run.stderr}`).not.toMatch(/\n\s+at .+:\d+:\d+/);
-  });
-});
-
-describe('pull requests with more files than the API lists (over 3,000)', () => {
-  const MANY = 3500;
-  /** 3,500 changed files: notes, and model configs at positions 10 and 3,200 of the list. */
-  function manyFiles(): { base: Record<string, string>; head: Record<string, string> } {
-    const base: Record<string, string> = {};
-    const head: Record<string, string> = {};
-    for (let i = 0; i < MANY; i += 1) {
-      const path =
-        i === 10 || i === 3200
-          ? `m${String(i).padStart(4, '0')}/config.json`
-          : `notes/n${String(i).padStart(4, '0')}.txt`;
-      base[path] = path.endsWith('.json') ? checkpointConfig() : 'a';
-      head[path] = path.endsWith('.json')
-        ? checkpointConfig({ max_position_embeddings: 16384 })
-        : 'b';
-    }
-    return { base, head };
-  }
-
-  it('with the history checked out, reads the change from git: every file judged, no file list asked for', async () => {
-    // Review suggestions list the diff on their own to place a suggestion on a changed line: off here, where the gate's reads are counted.
-    const result = await scenario({ ...manyFiles(), inputs: { suggestions: 'off' } });
-    expect(result.error).toBeNull();
-    const report = JSON.parse(Object.values(result.written)[0]!);
-    expect(report.files.map((f: { path: string }) => f.path).sort()).toEqual([
-      'm0010/config.json',
-      'm3200/config.json',
-    ]);
-    expect(result.fake.calls('pulls/list-files')).toHaveLength(0);
-    expect(report.notices).toEqual([]);
-  }, 60_000);
-
-  it("without the history, completes the cut list from the two commits' trees: every file judged, no notice", async () => {
-    const result = await scenario({ ...manyFiles(), noHistory: true });
-    expect(result.error).toBeNull();
-    const report = JSON.parse(Object.values(result.written)[0]!);
-    expect(report.files.map((f: { path: string }) => f.path).sort()).toEqual([
-      'm0010/config.json',
-      'm3200/config.json',
-    ]);
-    expect(report.notices).toEqual([]);
-    expect(result.fake.calls('git/get-tree')).toHaveLength(2);
-    expect(result.out.outputs.verdict).toBe('block');
-  }, 60_000);
-});
-
 describe('the token', () => {
   it('is registered as a secret first and appears in nothing a normal run writes', async () => {
     const result = await scenario({});
@@ -370,49 +254,5 @@ describe('the token', () => {
       /list files of pull request #7 failed with status 502/,
     );
     expect(everything(result)).not.toContain(fake.state.token);
-  });
-
-  it('the bundled action failing on the API prints one failure line, without the token or a stack trace', async () => {
-    const repo = scenarioRepo(BLOCKING.base, BLOCKING.head);
-    const fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
-    fakes.push(fake);
-    fake.state.pulls.set(7, {
-      number: 7,
-      baseSha: repo.base,
-      headSha: repo.head,
-      baseRef: 'main',
-      headRef: 'feature',
-      labels: [],
-      headRepo: 'example-org/model-zoo',
-      files: [{ filename: MODEL, status: 'modified' }],
-    });
-    // A 422 is not retried, so the failure comes at once; its message quotes the token back.
-    fake.fail('pulls/list-files', statusFault(422, `refused for ${fake.state.token}`));
-    const empty = execFileSync('mktemp', ['-d'], { encoding: 'utf8' }).trim();
-    const run = await runBundle({
-      eventName: 'pull_request',
-      event: pullRequestEvent({
-        owner: 'example-org',
-        repo: 'model-zoo',
-        number: 7,
-        base: repo.base,
-        head: repo.head,
-      }),
-      workspace: empty,
-      apiUrl: fake.url,
-      repository: 'example-org/model-zoo',
-      inputs: { 'github-token': fake.state.token },
-    });
-    repo.remove();
-    expect(run.code).toBe(1);
-    expect(run.stdout).toMatch(
-      /::error::context-reach failed: GitHub API list files of pull request #7 failed with status 422/,
-    );
-    const lines = `${run.stdout}\n${run.stderr}`
-      .split('\n')
-      .filter((line) => !line.startsWith('::add-mask::'));
-    for (const text of [...lines, run.summary, ...Object.values(run.files)])
-      expect(text).not.toContain(fake.state.token);
-    expect(run.stderr).not.toMatch(/\n\s+at .+:\d+:\d+/);
   });
 });

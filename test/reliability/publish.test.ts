@@ -1,4 +1,4 @@
-import { mkdtempSync, truncateSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -9,11 +9,14 @@ import { runAction } from '../../src/action/run-action.js';
 import { createFileSource } from '../../src/adapters/file-source.js';
 import type { GateReport } from '../../src/core/report/types.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
-import { OWNER, REPO, runScenario, type ScenarioResult } from '../support/action-harness.js';
+import type { ScenarioResult } from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';
 import { createRecordingOutput, type RecordingOutput } from '../support/recording-output.js';
-import { runBundle } from '../support/run-bundle.js';
-import { checkpointConfig } from '../support/scenario-repo.js';
+import {
+  firstWorkflow,
+  workflowRunFor,
+  type WorkflowRunOverrides,
+} from './publish-recipe.js';
 import { markdownProblems, renderGfm } from './report-checks.js';
 
 // The fork-safe two-workflow recipe, end to end against the loopback API: a first workflow on a
@@ -21,8 +24,8 @@ import { markdownProblems, renderGfm } from './report-checks.js';
 // a second, on workflow_run, publishes it (input publish-report). The report is untrusted: it is
 // checked, re-rendered with every text escaped, and posted only to the pull request whose head
 // is the triggering run's head commit, as the API confirms. A PR number never comes from it.
+// The bundled action's publish run is in publish.bundle.test.ts (`npm run test:full`).
 
-const MODEL = 'models/a/config.json';
 const LINK = /^https:\/\/github\.example\/example-org\/model-zoo\/blob\/[0-9a-f]{40}\/models\//;
 
 let first: ScenarioResult;
@@ -30,30 +33,8 @@ let fake: FakeGitHub;
 let reportText: string;
 let folder: string;
 
-/** The workflow_run payload GitHub sends the second workflow (the fields it reads, and a few more). */
-function workflowRun(
-  overrides: { headSha?: string; event?: string; headOwner?: string; pullNumbers?: number[] } = {},
-) {
-  return {
-    action: 'completed',
-    workflow_run: {
-      id: 4242,
-      name: 'context-reach',
-      event: overrides.event ?? 'pull_request',
-      status: 'completed',
-      conclusion: 'failure',
-      head_sha: overrides.headSha ?? first.head,
-      head_branch: 'feature',
-      head_repository: {
-        full_name: `${overrides.headOwner ?? 'someone-else'}/${REPO}`,
-        owner: { login: overrides.headOwner ?? 'someone-else' },
-      },
-      // GitHub leaves this empty for pull requests from forks.
-      pull_requests: (overrides.pullNumbers ?? []).map((number) => ({ number })),
-    },
-    repository: { name: REPO, full_name: `${OWNER}/${REPO}`, owner: { login: OWNER } },
-  };
-}
+/** The workflow_run payload after the first workflow (publish-recipe.ts). */
+const workflowRun = (overrides: WorkflowRunOverrides = {}) => workflowRunFor(first.head, overrides);
 
 interface Published {
   out: RecordingOutput;
@@ -108,43 +89,12 @@ function tampered(
 
 beforeAll(async () => {
   folder = mkdtempSync(join(tmpdir(), 'context-reach-publish-'));
-  // Workflow 1: a fork's pull request, read-only token, no comment; the report is the artifact.
-  first = await runScenario({
-    base: { [MODEL]: checkpointConfig() },
-    head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) },
-    fork: true,
-    readOnly: true,
-    inputs: { comment: 'off' },
-  });
+  ({ first, reportText } = await firstWorkflow());
   fake = first.fake;
-  reportText = Object.values(first.written)[0]!;
-  // Workflow 2 runs in the base repository with a token that may comment.
-  fake.state.readOnly = false;
-  // Another open pull request from another fork, and a closed one from the same branch label.
-  fake.state.pulls.set(8, {
-    number: 8,
-    baseSha: first.base,
-    headSha: 'd'.repeat(40),
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: [],
-    headRepo: `mallory/${REPO}`,
-    files: [],
-  });
-  fake.state.pulls.set(9, {
-    number: 9,
-    baseSha: first.base,
-    headSha: first.head,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: [],
-    headRepo: `someone-else/${REPO}`,
-    files: [],
-    state: 'closed',
-  });
 }, 60_000);
 
 afterAll(async () => {
+  if (folder) rmSync(folder, { recursive: true, force: true });
   expect(fake.mismatches).toEqual([]);
   expect(fake.responseMismatches).toEqual([]);
   expect(fake.unhandled).toEqual([]);
@@ -384,28 +334,5 @@ describe('publish mode (input publish-report) on a workflow_run', () => {
     expect(
       push.out.log.some((l) => l.level === 'notice' && l.message.includes('nothing to publish')),
     ).toBe(true);
-  });
-});
-
-describe('publish mode in the bundled action (dist/index.js)', () => {
-  it("posts the artifact's report from a workflow_run, exit 0, token nowhere", async () => {
-    const path = join(folder, 'artifact-report.json');
-    writeFileSync(path, reportText);
-    const run = await runBundle({
-      eventName: 'workflow_run',
-      event: workflowRun(),
-      workspace: folder,
-      apiUrl: fake.url,
-      repository: `${OWNER}/${REPO}`,
-      inputs: { 'github-token': fake.state.token, 'publish-report': path },
-    });
-    expect(run.code).toBe(0);
-    expect(run.outputs.verdict).toBe('block');
-    expect(run.outputs['comment-url']).toContain('/pull/7#issuecomment-');
-    expect(ours()).toHaveLength(1);
-    const lines = `${run.stdout}\n${run.stderr}`
-      .split('\n')
-      .filter((line) => !line.startsWith('::add-mask::'));
-    for (const text of [...lines, run.summary]) expect(text).not.toContain(fake.state.token);
   });
 });

@@ -2,20 +2,28 @@ import {
   mkdirSync,
   mkdtempSync,
   readFileSync,
+  rmSync,
   symlinkSync,
   writeFileSync,
   lstatSync,
 } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { writeReportFile } from '../../src/action/write-report.js';
 
 // Round two (issue 13, point 11): the report files are never written through a symbolic link a
 // pull request put in the checkout (a file named like the report, or a folder on its way).
 
+/** Folders `setup` made, removed after each test. */
+const roots: string[] = [];
+afterEach(() => {
+  for (const root of roots.splice(0)) rmSync(root, { recursive: true, force: true });
+});
+
 function setup() {
   const root = mkdtempSync(join(tmpdir(), 'context-reach-write-'));
+  roots.push(root);
   const workspace = join(root, 'checkout');
   const outside = join(root, 'outside');
   mkdirSync(workspace);

@@ -2,20 +2,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { GateReport } from '../../src/core/report/types.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { runScenario, type ScenarioResult } from '../support/action-harness.js';
-import { startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
-import { pullRequestEvent, runBundle, type BundleRun } from '../support/run-bundle.js';
-import {
-  checkpointConfig,
-  scenarioRepo,
-  type ScenarioRepo,
-  type Tree,
-} from '../support/scenario-repo.js';
+import { checkpointConfig, type Tree } from '../support/scenario-repo.js';
 import { markdownProblems, renderGfm } from './report-checks.js';
 
 // The report as an attack surface: file names, keys, values, a waiver label and notices written
 // to inject markup, through the whole action (real git, the loopback API) into the full comment
 // and the job summary, rendered by a GFM renderer (marked). No injected element, mention,
 // reference, link or comment survives, the hidden marker appears once, and tables keep their shape.
+// A file name that spells workflow commands, through the bundled action, is in
+// report-injection.bundle.test.ts (`npm run test:full`).
 
 /** Folder names a pull request can choose (anything but "/" and NUL). */
 const HOSTILE_NAMES = [
@@ -136,62 +131,5 @@ describe('renderComment(report) of a pull request written to inject markup, as t
     ]) {
       expect(text).toContain(name);
     }
-  });
-});
-
-describe('the bundled action: a file name that tries to inject workflow commands into the log', () => {
-  let repo: ScenarioRepo;
-  let fake: FakeGitHub;
-  let run: BundleRun;
-  const NAME =
-    'models/x\n::set-output name=verdict::ok\n::add-mask::nothing\n::error file=y::forged/config.json';
-
-  beforeAll(async () => {
-    repo = scenarioRepo(
-      { [NAME]: checkpointConfig() },
-      { [NAME]: checkpointConfig({ max_position_embeddings: 65536 }) },
-    );
-    fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
-    fake.state.pulls.set(7, {
-      number: 7,
-      baseSha: repo.base,
-      headSha: repo.head,
-      baseRef: 'main',
-      headRef: 'feature',
-      labels: [],
-      headRepo: 'example-org/model-zoo',
-      files: [{ filename: NAME, status: 'modified' }],
-    });
-    run = await runBundle({
-      eventName: 'pull_request',
-      event: pullRequestEvent({
-        owner: 'example-org',
-        repo: 'model-zoo',
-        number: 7,
-        base: repo.base,
-        head: repo.head,
-      }),
-      workspace: repo.dir,
-      apiUrl: fake.url,
-      repository: 'example-org/model-zoo',
-      inputs: { 'github-token': fake.state.token },
-    });
-  }, 60_000);
-
-  afterAll(async () => {
-    await fake?.close();
-    repo?.remove();
-  });
-
-  it('writes no workflow command the file name spells: its newlines are escaped in the annotation', () => {
-    expect(run.outputs.verdict).toBe('block');
-    const commands = run.stdout.split('\n').filter((line) => line.startsWith('::'));
-    expect(commands.filter((line) => line.startsWith('::add-mask::'))).toEqual([
-      `::add-mask::${fake.state.token}`,
-    ]);
-    expect(commands.some((line) => line.startsWith('::set-output'))).toBe(false);
-    expect(commands.some((line) => line.startsWith('::error file=y::'))).toBe(false);
-    const annotation = run.annotations.find((a) => a.level === 'error');
-    expect(annotation?.properties.file).toBe(NAME);
   });
 });

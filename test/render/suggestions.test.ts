@@ -137,7 +137,7 @@ describe('planSuggestions(report, …) on a report read back with tampered rule 
     expect(planned.length).toBeGreaterThan(0);
     for (const p of planned) {
       const lead = p.body.split('\n')[1]!;
-      const html = marked.parse(lead, { gfm: true, async: false }) as string;
+      const html = marked.parse(lead, { gfm: true, async: false });
       expect(html).not.toMatch(/<(img|a|em)\b/i);
       expect(html.match(/<strong>/g)).toHaveLength(1); // the **context-reach** label only
       expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;');

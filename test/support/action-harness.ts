@@ -1,5 +1,5 @@
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createGitReader } from '../../src/adapters/git.js';
@@ -47,8 +47,10 @@ export interface ScenarioResult {
 /** A repository with no commits whose `origin` is `source`. */
 function emptyClone(source: string): string {
   const dir = mkdtempSync(join(tmpdir(), 'context-reach-clone-'));
-  execFileSync('git', ['init', '-q'], { cwd: dir });
-  execFileSync('git', ['remote', 'add', 'origin', source], { cwd: dir });
+  // One shell for both git commands: one start of a process from this (large) one, not two.
+  execFileSync('sh', ['-c', 'git init -q && git remote add origin "$1"', 'sh', source], {
+    cwd: dir,
+  });
   return dir;
 }
 
@@ -108,6 +110,11 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
   const out = createRecordingOutput();
   const written: Record<string, string> = {};
   const temp = mkdtempSync(join(tmpdir(), 'context-reach-harness-'));
+  const workspace = options.emptyClone
+    ? emptyClone(repo.dir)
+    : options.noHistory
+      ? mkdtempSync(join(tmpdir(), 'context-reach-empty-'))
+      : repo.dir;
   const inputs: Record<string, string> = { 'github-token': fake.state.token, ...options.inputs };
   let error: unknown = null;
   try {
@@ -118,11 +125,7 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
         GITHUB_API_URL: fake.url,
         GITHUB_SERVER_URL: 'https://github.example',
         RUNNER_TEMP: temp,
-        GITHUB_WORKSPACE: options.emptyClone
-          ? emptyClone(repo.dir)
-          : options.noHistory
-            ? mkdtempSync(join(tmpdir(), 'context-reach-empty-'))
-            : repo.dir,
+        GITHUB_WORKSPACE: workspace,
       },
       getInput: (name) => inputs[name] ?? '',
       out,
@@ -147,6 +150,9 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
   } catch (caught) {
     error = caught;
   }
+  // What the run wrote is in `written` and `out`: its folders go.
   repo.remove();
+  for (const dir of [temp, workspace])
+    if (dir !== repo.dir) rmSync(dir, { recursive: true, force: true });
   return { out, fake, written, error, base: repo.base, head: repo.head };
 }

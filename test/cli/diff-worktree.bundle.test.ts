@@ -5,6 +5,7 @@ import { dirname, join, resolve } from 'node:path';
 import { promisify } from 'node:util';
 import { afterEach, describe, expect, it } from 'vitest';
 import { checkpointConfig } from '../support/scenario-repo.js';
+import { freshBundle } from '../support/fresh-bundle.js';
 
 // The bundle, run as a user would before a push: `context-reach diff` with no flags.
 const CLI = resolve(import.meta.dirname, '../../dist/cli.js');
@@ -15,7 +16,7 @@ async function diff(
   cwd: string,
 ): Promise<{ code: number; stdout: string; stderr: string }> {
   try {
-    const { stdout, stderr } = await run(process.execPath, [CLI, 'diff', ...args], {
+    const { stdout, stderr } = await run(process.execPath, [freshBundle(CLI), 'diff', ...args], {
       cwd,
       env: { ...process.env, NO_COLOR: '1' },
     });

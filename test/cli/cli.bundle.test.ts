@@ -1,11 +1,12 @@
 import { execFile } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { promisify } from 'node:util';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { METRIC_PATHS } from '../../src/core/metrics/metric-path.js';
 import { checkpointConfig, scenarioRepo } from '../support/scenario-repo.js';
+import { freshBundle } from '../support/fresh-bundle.js';
 
 // The committed bundle, run as a user would: `node dist/cli.js …`.
 const CLI = resolve(import.meta.dirname, '../../dist/cli.js');
@@ -17,7 +18,7 @@ async function cli(
   cwd = ROOT,
 ): Promise<{ code: number; stdout: string; stderr: string }> {
   try {
-    const { stdout, stderr } = await run(process.execPath, [CLI, ...args], {
+    const { stdout, stderr } = await run(process.execPath, [freshBundle(CLI), ...args], {
       cwd,
       env: { ...process.env, NO_COLOR: '1' },
     });
@@ -28,8 +29,15 @@ async function cli(
   }
 }
 
+/** Folders `tempFile` made, removed when the file's tests end. */
+const folders: string[] = [];
+afterAll(() => {
+  for (const folder of folders) rmSync(folder, { recursive: true, force: true });
+});
+
 function tempFile(name: string, text: string): string {
   const dir = mkdtempSync(join(tmpdir(), 'context-reach-cli-'));
+  folders.push(dir);
   const path = join(dir, name);
   writeFileSync(path, text);
   return path;

@@ -15,6 +15,7 @@ import { promisify } from 'node:util';
 import { afterEach, describe, expect, it } from 'vitest';
 import { forkWorkflows, simpleWorkflow } from '../../src/core/init/workflows.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
+import { freshBundle } from '../support/fresh-bundle.js';
 
 const CLI = resolve(import.meta.dirname, '../../dist/cli.js');
 const run = promisify(execFile);
@@ -28,7 +29,7 @@ async function init(
   cwd: string,
 ): Promise<{ code: number; stdout: string; stderr: string }> {
   try {
-    const { stdout, stderr } = await run(process.execPath, [CLI, 'init', ...args], {
+    const { stdout, stderr } = await run(process.execPath, [freshBundle(CLI), 'init', ...args], {
       cwd,
       env: { ...process.env, NO_COLOR: '1' },
     });
