@@ -12,11 +12,7 @@ import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import type { ScenarioResult } from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';
 import { createRecordingOutput, type RecordingOutput } from '../support/recording-output.js';
-import {
-  firstWorkflow,
-  workflowRunFor,
-  type WorkflowRunOverrides,
-} from './publish-recipe.js';
+import { firstWorkflow, workflowRunFor, type WorkflowRunOverrides } from './publish-recipe.js';
 import { markdownProblems, renderGfm } from './report-checks.js';
 
 // The fork-safe two-workflow recipe, end to end against the loopback API: a first workflow on a
