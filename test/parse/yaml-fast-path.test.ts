@@ -194,7 +194,9 @@ describe('the fast block-YAML reader gives what the YAML path gives', () => {
       },
       {
         weight: 1,
-        arbitrary: fc.constantFrom([''], ['# a comment'], ['   '], [`${pad}  # indented`]),
+        arbitrary: fc
+          .constantFrom([''], ['# a comment'], ['   '], [`${pad}  # indented`])
+          .map((lines) => [...lines]),
       },
     );
     return fc
