@@ -1,18 +1,10 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
-import { ReadError } from '../../src/core/parse/errors.js';
 import { readBlockYaml, coreScalar } from '../../src/core/parse/yaml-block.js';
-import {
-  MAX_ENTRIES,
-  MAX_TOKENS,
-  readYamlSource,
-  type PathSegment,
-  type SourceDocument,
-  type SourceValue,
-} from '../../src/core/parse/source.js';
-import { YamlLimitError } from '../../src/core/parse/yaml.js';
+import { MAX_ENTRIES, MAX_TOKENS, readYamlSource } from '../../src/core/parse/source.js';
 import { parseDocument } from 'yaml';
+import { outcome } from './helpers.js';
 
 // The fast block-YAML reader (`yaml-block.ts`) must give what the YAML path gives for the same
 // text: values, the line of every key and item, the literal of every scalar, and the same
@@ -34,51 +26,6 @@ const demoFixtures = ['base', 'head'].flatMap((side) => {
   walk(dir);
   return found;
 });
-
-function pathsOf(value: SourceValue, prefix: PathSegment[] = []): PathSegment[][] {
-  if (value === null || typeof value !== 'object') return [];
-  const keys: PathSegment[] = Array.isArray(value) ? value.map((_, i) => i) : Object.keys(value);
-  return keys.flatMap((key) => {
-    const path = [...prefix, key];
-    return [path, ...pathsOf((value as Record<string, SourceValue>)[String(key)]!, path)];
-  });
-}
-
-function reading(doc: SourceDocument) {
-  const exact = (v: SourceValue): unknown =>
-    typeof v === 'number'
-      ? Object.is(v, -0)
-        ? '-0'
-        : Number.isNaN(v)
-          ? 'NaN'
-          : v
-      : v === null || typeof v !== 'object'
-        ? v
-        : Array.isArray(v)
-          ? v.map(exact)
-          : Object.fromEntries(Object.entries(v).map(([k, x]) => [k, exact(x)]));
-  return {
-    value: exact(doc.value),
-    prototypeFree: Object.getPrototypeOf(doc.value) === null,
-    places: pathsOf(doc.value).map((path) => [
-      path.join('/'),
-      doc.lineOf(path),
-      doc.literalOf(path),
-    ]),
-  };
-}
-
-function outcome(read: () => SourceDocument | null) {
-  try {
-    const doc = read();
-    return doc === null ? 'left to the YAML path' : reading(doc);
-  } catch (error) {
-    if (error instanceof ReadError)
-      return { refused: error.message, line: error.line, key: error.key };
-    if (error instanceof YamlLimitError) return { limit: error.limit, line: error.line };
-    throw error;
-  }
-}
 
 const viaFast = (text: string) => outcome(() => readBlockYaml(text, 'model.reach.yaml'));
 const viaYaml = (text: string) => outcome(() => readYamlSource(text, 'model.reach.yaml', false));
