@@ -295,9 +295,17 @@ export async function runAction(deps: ActionDeps): Promise<void> {
       headSha: gathered.head,
       isFork: event.isFork,
     };
-    await publishSuggestions(reviews, target, report, (path) =>
-      gathered.source.read(gathered.head, path),
-    ).then(
+    // The head texts in one batched read (one pair of git processes), not one read per file.
+    const source = gathered.source;
+    const readHeads = (paths: string[]) =>
+      source.readMany
+        ? source.readMany(paths.map((path) => ({ ref: gathered.head, path })))
+        : Promise.all(
+            paths.map((path) =>
+              source.read(gathered.head, path).catch((error: unknown) => error as Error),
+            ),
+          );
+    await publishSuggestions(reviews, target, report, readHeads).then(
       ({ outcome, notice }) => {
         if (notice) {
           out.notice(notice);

@@ -55,7 +55,7 @@ export async function diffWorktree(
       overrides: servingPatch(values),
     },
   );
-  outReport(report, format, io);
+  await outReport(report, format, io);
   if (values.html !== undefined) await writeHtmlReport(values.html, report);
   return exitStatus(report, failOn);
 }

@@ -71,9 +71,14 @@ const OUT_BATCH = 1 << 20;
 
 /**
  * Writes the report to standard output; the JSON report a file at a time, in writes of about
- * a megabyte, so a report of thousands of files (40 MB at 3,000) is never held whole.
+ * a megabyte, each taken by the output before the next is made, so a report of thousands of
+ * files (40 MB at 3,000) is never held whole, not even in a pipe's queue.
  */
-export function outReport(report: GateReport, format: (typeof FORMATS)[number], io: Console): void {
+export async function outReport(
+  report: GateReport,
+  format: (typeof FORMATS)[number],
+  io: Console,
+): Promise<void> {
   if (format !== 'json') {
     io.out(renderReport(report, format, io));
     return;
@@ -84,6 +89,7 @@ export function outReport(report: GateReport, format: (typeof FORMATS)[number], 
     if (batch.length >= OUT_BATCH) {
       io.out(batch);
       batch = '';
+      await io.drained?.();
     }
   }
   if (batch !== '') io.out(batch);
@@ -159,7 +165,7 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
     labels: values.label ?? [],
     overrides: servingPatch(values),
   });
-  outReport(report, format, io);
+  await outReport(report, format, io);
   if (values.html !== undefined) await writeHtmlReport(values.html, report);
   return exitStatus(report, failOn);
 }
