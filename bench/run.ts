@@ -201,8 +201,8 @@ function printW6(rows: W6Row[], line: (s: string) => void): void {
   for (const r of rows) {
     line(
       `W6 ${r.configs} configs (${r.blockingChanges} blocking changes; ${r.filesBlocked} files blocked, ${r.blockingFindings} blocking findings): ` +
-        `floor ${r.median.floorMs.toFixed(0)} ms (CPU ${cpu(r.median.floorCpuMs)}), diff ${r.median.diffMs.toFixed(0)} ms (CPU ${cpu(r.median.diffCpuMs)}, peak RSS ${r.median.diffRssMiB?.toFixed(1) ?? 'n/a'} MiB) = ${r.ratio.diff.toFixed(2)}x floor, ` +
-        `action ${r.median.actionMs.toFixed(0)} ms (CPU ${cpu(r.median.actionCpuMs)}, peak RSS ${r.median.actionRssMiB?.toFixed(1) ?? 'n/a'} MiB) = ${r.ratio.action.toFixed(2)}x floor; medians of ${r.diff.length}`,
+        `floor ${r.median.floorMs.toFixed(0)} ms (CPU ${cpu(r.median.floorCpuMs)}), diff ${r.median.diffMs.toFixed(0)} ms (CPU ${cpu(r.median.diffCpuMs)}, peak RSS ${r.median.diffRssMiB?.toFixed(1) ?? 'n/a'} MiB) = ${r.ratio.diff.toFixed(2)}x floor (CPU ${r.ratio.diffCpu?.toFixed(2) ?? 'n/a'}x), ` +
+        `action ${r.median.actionMs.toFixed(0)} ms (CPU ${cpu(r.median.actionCpuMs)}, peak RSS ${r.median.actionRssMiB?.toFixed(1) ?? 'n/a'} MiB) = ${r.ratio.action.toFixed(2)}x floor (CPU ${r.ratio.actionCpu?.toFixed(2) ?? 'n/a'}x); medians of ${r.diff.length}`,
     );
   }
 }

@@ -10,7 +10,7 @@
 import { writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { runGate, type ContentSource } from '../src/core/gate.js';
+import { judgeAddedConfig } from '../test/support/one-config-gate.js';
 
 interface Case {
   /** The policy's limit that blocks: on the discrimination span, or on the separation floor. */
@@ -89,27 +89,11 @@ function config(c: Case): string {
   );
 }
 
-const encoder = new TextEncoder();
 async function judge(c: Case): Promise<{ cpuMs: number; blocking: number; incomplete: boolean }> {
-  const files = new Map([
-    ['.github/context-reach.yml', encoder.encode(POLICY(c))],
-    ['models/m/config.json', encoder.encode(config(c))],
-  ]);
-  const source: ContentSource = {
-    read: async (ref, file) =>
-      ref === 'head' || file.endsWith('.yml') ? (files.get(file) ?? null) : null,
-  };
-  const before = process.cpuUsage();
-  const report = await runGate(source, {
-    base: 'base',
-    head: 'head',
-    changes: [{ status: 'added', path: 'models/m/config.json', previousPath: null }],
-    policyPath: '.github/context-reach.yml',
-  });
-  const used = process.cpuUsage(before);
+  const { report, cpuMs } = await judgeAddedConfig(config(c), POLICY(c));
   const findings = report.files[0]?.findings ?? [];
   return {
-    cpuMs: (used.user + used.system) / 1000,
+    cpuMs,
     blocking: report.blocking,
     incomplete: findings.some((f) => f.rule === 'scan-incomplete'),
   };

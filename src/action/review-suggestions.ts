@@ -115,7 +115,8 @@ export async function publishSuggestions(
   api: ReviewApi,
   target: ReviewTarget & { isFork: boolean },
   report: import('../core/report/types.js').GateReport,
-  readHead: (path: string) => Promise<Uint8Array | null>,
+  /** The head versions of `paths`, in order, read at once (null or an Error where one cannot be read). */
+  readHeads: (paths: string[]) => Promise<(Uint8Array | null | Error)[]>,
 ): Promise<{ outcome: SuggestionOutcome | null; notice: string | null }> {
   if (target.isFork) return { outcome: null, notice: SUGGESTIONS_SKIPPED };
   const { planSuggestions } = await import('../core/render/suggestions.js');
@@ -123,9 +124,11 @@ export async function publishSuggestions(
     f.findings.some((x) => x.counts === 'block' && x.remedy),
   );
   const texts = new Map<string, string>();
-  for (const file of blocking) {
-    const bytes = await readHead(file.path).catch(() => null);
-    if (bytes) texts.set(file.path, decodeUtf8Lenient(bytes).replace(/^\uFEFF/, ''));
+  const heads = await readHeads(blocking.map((file) => file.path)).catch(() => []);
+  for (const [i, file] of blocking.entries()) {
+    const bytes = heads[i];
+    if (bytes instanceof Uint8Array)
+      texts.set(file.path, decodeUtf8Lenient(bytes).replace(/^\uFEFF/, ''));
   }
   try {
     const patches = blocking.length > 0 ? await api.listPatches(target) : new Map<string, string>();

@@ -4,7 +4,7 @@ import { runGate, type ContentSource } from '../core/gate.js';
 import { planAnnotations } from '../core/render/annotations.js';
 import { renderComment } from '../core/render/comment.js';
 import { renderFailure } from '../core/render/failure.js';
-import { renderGateJson } from '../core/render/gate-json.js';
+import { gateJsonParts } from '../core/render/gate-json.js';
 import { renderHtmlReport } from '../core/render/html-report.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
 import { renderSarif } from '../core/render/sarif.js';
@@ -33,7 +33,8 @@ export interface ActionDeps {
   readJson: (path: string) => Promise<unknown>;
   /** Bytes of a local file, refused past `maxBytes` without reading it whole (publish mode's report). */
   readFile: (path: string, maxBytes: number) => Promise<Uint8Array>;
-  writeFile(path: string, text: string): Promise<void>;
+  /** Writes a report file; `text` may come in parts (the JSON report, a file at a time). */
+  writeFile(path: string, text: string | Iterable<string>): Promise<void>;
   createGit(cwd: string): GitReader;
   createGitHub(token: string, options: GitHubClientOptions): GitHubClient;
   /** Review-comment calls for suggestions (default: the REST adapter's `createReviewApi`). */
@@ -244,7 +245,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   const { annotations, omitted } = planAnnotations(report);
   for (const annotation of annotations) out.annotate(annotation);
 
-  await deps.writeFile(settings.reportJson, renderGateJson(report));
+  await deps.writeFile(settings.reportJson, gateJsonParts(report));
   if (settings.sarif) await deps.writeFile(settings.sarif, renderSarif(report, VERSION));
   if (settings.htmlReport) await deps.writeFile(settings.htmlReport, renderHtmlReport(report));
   // The page is uploaded by a later step, so its own URL is not known yet: the run's page lists it.
@@ -298,9 +299,17 @@ export async function runAction(deps: ActionDeps): Promise<void> {
       headSha: gathered.head,
       isFork: event.isFork,
     };
-    await publishSuggestions(reviews, target, report, (path) =>
-      gathered.source.read(gathered.head, path),
-    ).then(
+    // The head texts in one batched read (one pair of git processes), not one read per file.
+    const source = gathered.source;
+    const readHeads = (paths: string[]) =>
+      source.readMany
+        ? source.readMany(paths.map((path) => ({ ref: gathered.head, path })))
+        : Promise.all(
+            paths.map((path) =>
+              source.read(gathered.head, path).catch((error: unknown) => error as Error),
+            ),
+          );
+    await publishSuggestions(reviews, target, report, readHeads).then(
       ({ outcome, notice }) => {
         if (notice) {
           out.notice(notice);

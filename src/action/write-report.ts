@@ -34,14 +34,14 @@ async function kindOf(
 }
 
 /**
- * Writes `text` to `path` (relative paths from `cwd`). Inside `workspace` (the checkout, which
+ * Writes `text` (whole, or in parts) to `path` (relative paths from `cwd`). Inside `workspace` (the checkout, which
  * the pull request shapes) every folder on the way is made or checked one by one and none may be
  * a symbolic link; the file itself is opened with `O_NOFOLLOW` and must be a regular file or
  * new. Outside the checkout (the runner's temp folder) folders are made as usual.
  */
 export async function writeReportFile(
   path: string,
-  text: string,
+  text: string | Iterable<string>,
   workspace: string,
   cwd = process.cwd(),
 ): Promise<void> {
@@ -79,7 +79,22 @@ export async function writeReportFile(
     0o644,
   );
   try {
-    await handle.writeFile(text, 'utf8');
+    if (typeof text === 'string') await handle.writeFile(text, 'utf8');
+    else {
+      // Parts gathered into writes of about a megabyte, each written whole.
+      let batch = '';
+      const flush = async () => {
+        const bytes = Buffer.from(batch, 'utf8');
+        for (let at = 0; at < bytes.length;)
+          at += (await handle.write(bytes, at, bytes.length - at)).bytesWritten;
+        batch = '';
+      };
+      for (const part of text) {
+        batch += part;
+        if (batch.length >= 1 << 20) await flush();
+      }
+      if (batch !== '') await flush();
+    }
   } finally {
     await handle.close();
   }

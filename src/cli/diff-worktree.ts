@@ -1,7 +1,7 @@
 import { createWorktreeGit, type GitReader } from '../adapters/git.js';
 import { runGate } from '../core/gate.js';
 import type { Console } from './console.js';
-import { commitOf, defaultBase, exitStatus, renderReport, writeHtmlReport } from './diff.js';
+import { commitOf, defaultBase, exitStatus, outReport, writeHtmlReport } from './diff.js';
 import { UsageError, servingPatch } from './options.js';
 import { createWorktreeFiles } from './worktree.js';
 
@@ -59,7 +59,7 @@ export async function diffWorktree(
       overrides: servingPatch(values),
     },
   );
-  io.out(renderReport(report, format, io));
+  await outReport(report, format, io);
   if (values.html !== undefined) await writeHtmlReport(values.html, report);
   return exitStatus(report, failOn);
 }

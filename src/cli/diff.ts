@@ -4,7 +4,7 @@ import { parseArgs } from 'node:util';
 import { runGate } from '../core/gate.js';
 import { renderComment } from '../core/render/comment.js';
 import { renderDiffText } from '../core/render/diff-text.js';
-import { renderGateJson } from '../core/render/gate-json.js';
+import { gateJsonParts, renderGateJson } from '../core/render/gate-json.js';
 import { renderHtmlReport } from '../core/render/html-report.js';
 import { createGitReader, gitContentSource, type GitReader } from '../adapters/git.js';
 import type { GateReport } from '../core/report/types.js';
@@ -64,6 +64,35 @@ export function renderReport(
   if (format === 'json') return renderGateJson(report);
   if (format === 'markdown') return renderComment(report);
   return renderDiffText(report, terminalStyle(io.stdout, io.env));
+}
+
+/** Parts of at least this many characters are written at once (1 Mi). */
+const OUT_BATCH = 1 << 20;
+
+/**
+ * Writes the report to standard output; the JSON report a file at a time, in writes of about
+ * a megabyte, each taken by the output before the next is made, so a report of thousands of
+ * files (40 MB at 3,000) is never held whole, not even in a pipe's queue.
+ */
+export async function outReport(
+  report: GateReport,
+  format: (typeof FORMATS)[number],
+  io: Console,
+): Promise<void> {
+  if (format !== 'json') {
+    io.out(renderReport(report, format, io));
+    return;
+  }
+  let batch = '';
+  for (const part of gateJsonParts(report)) {
+    batch += part;
+    if (batch.length >= OUT_BATCH) {
+      io.out(batch);
+      batch = '';
+      await io.drained?.();
+    }
+  }
+  if (batch !== '') io.out(batch);
 }
 
 export async function commitOf(git: GitReader, rev: string, flag: string): Promise<string> {
@@ -136,7 +165,7 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
     labels: values.label ?? [],
     overrides: servingPatch(values),
   });
-  io.out(renderReport(report, format, io));
+  await outReport(report, format, io);
   if (values.html !== undefined) await writeHtmlReport(values.html, report);
   return exitStatus(report, failOn);
 }

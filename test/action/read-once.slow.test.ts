@@ -8,6 +8,7 @@ import { runDiff } from '../../src/cli/diff.js';
 import { runGate } from '../../src/core/gate.js';
 import { stableKey, type ScanMemo } from '../../src/core/metrics/scan-memo.js';
 import { renderGateJson } from '../../src/core/render/gate-json.js';
+import { runScenario } from '../support/action-harness.js';
 import {
   checkpointConfig,
   scenarioRepo,
@@ -173,4 +174,33 @@ describe('the run-scoped memo of positional computations', () => {
     expect(hits).toBeGreaterThan(500);
     expect(counted.misses).toBeLessThan(100);
   }, 120_000);
+});
+
+describe('one run of the action on a pull request with blocking findings', () => {
+  it('reads the head texts its review suggestions need in one batch: the same git starts for 300 files as for 30', async () => {
+    const starts = async (count: number) => {
+      const { base, head } = pullRequest(count);
+      writeFileSync(log, '');
+      const path = process.env.PATH;
+      process.env.PATH = `${counting}:${path}`;
+      try {
+        const result = await runScenario({ base, head });
+        await result.fake.close();
+        expect(result.error).toBeNull();
+        // Suggestions were planned from the head texts: the review was written.
+        expect(result.out.outputs.verdict).toBe('block');
+      } finally {
+        process.env.PATH = path;
+      }
+      return readFileSync(log, 'utf8').trim().split('\n');
+    };
+    const big = await starts(300);
+    const few = await starts(30);
+    const batches = (s: string[]) =>
+      s.filter((x) => x.includes('cat-file --batch') && !x.includes('--batch-check')).length;
+    expect(batches(big)).toBe(batches(few));
+    expect(big.length).toBe(few.length);
+    // The policy, every config version, and the head texts of the files with a fix.
+    expect(batches(big)).toBeLessThanOrEqual(3);
+  }, 240_000);
 });

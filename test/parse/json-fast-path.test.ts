@@ -1,18 +1,11 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
-import { ReadError } from '../../src/core/parse/errors.js';
 import { readJsonSource } from '../../src/core/parse/json-read.js';
 import { checkJson } from '../../src/core/parse/json-syntax.js';
-import {
-  MAX_ENTRIES,
-  parseSource,
-  readYamlSource,
-  type PathSegment,
-  type SourceDocument,
-  type SourceValue,
-} from '../../src/core/parse/source.js';
+import { MAX_ENTRIES, parseSource, readYamlSource } from '../../src/core/parse/source.js';
 import { inspectModel } from '../../src/core/inspect.js';
+import { outcome } from './helpers.js';
 
 // The fast JSON reader (`json-read.ts`) must give what the YAML path gives for the same JSON
 // text: the same values, the same line for every key and item, the same literal for every
@@ -22,55 +15,6 @@ import { inspectModel } from '../../src/core/inspect.js';
 
 const FIXTURES = new URL('../../fixtures/checkpoints/', import.meta.url);
 const jsonFixtures = readdirSync(FIXTURES).filter((name) => name.endsWith('.json'));
-
-/** Every path into `value`, containers and scalars, in document order. */
-function pathsOf(value: SourceValue, prefix: PathSegment[] = []): PathSegment[][] {
-  if (value === null || typeof value !== 'object') return [];
-  const keys: PathSegment[] = Array.isArray(value) ? value.map((_, i) => i) : Object.keys(value);
-  return keys.flatMap((key) => {
-    const path = [...prefix, key];
-    const child = (value as Record<string, SourceValue>)[String(key)]!;
-    return [path, ...pathsOf(child, path)];
-  });
-}
-
-/** What a reader hands on, in a form `toEqual` compares exactly (-0 and NaN kept apart). */
-function reading(doc: SourceDocument) {
-  const exact = (v: SourceValue): unknown =>
-    typeof v === 'number'
-      ? Object.is(v, -0)
-        ? '-0'
-        : Number.isNaN(v)
-          ? 'NaN'
-          : v
-      : v === null || typeof v !== 'object'
-        ? v
-        : Array.isArray(v)
-          ? v.map(exact)
-          : Object.fromEntries(Object.entries(v).map(([k, x]) => [k, exact(x)]));
-  return {
-    value: exact(doc.value),
-    prototypeFree: Object.getPrototypeOf(doc.value) === null,
-    places: pathsOf(doc.value).map((path) => [
-      path.join('/'),
-      doc.lineOf(path),
-      doc.literalOf(path),
-    ]),
-    absent: [doc.lineOf(['no such key']), doc.literalOf(['no such key', 0])],
-  };
-}
-
-/** The outcome of a reader: its reading, or the message and line of its refusal. */
-function outcome(read: () => SourceDocument | null) {
-  try {
-    const doc = read();
-    return doc === null ? 'left to the YAML path' : reading(doc);
-  } catch (error) {
-    if (error instanceof ReadError)
-      return { refused: error.message, line: error.line, key: error.key };
-    throw error;
-  }
-}
 
 const viaFast = (text: string) => outcome(() => readJsonSource(text, 'config.json'));
 /** The YAML path as `parseSource` took it for every JSON file before the fast reader: JSON syntax first. */

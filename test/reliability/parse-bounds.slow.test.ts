@@ -50,14 +50,16 @@ describe('files with many keys or documents (point 4)', () => {
     expect(ms).toBeLessThan(2000);
   });
 
-  it('a YAML file of 40,000 keys is read with linear duplicate checks (before: 16–19 s)', () => {
+  it('a YAML file of 40,000 keys is read with linear duplicate checks (before: 16–19 s; 1.5–2.1 s CPU through the YAML package alone)', () => {
     const text = `format: context-reach-model/1\nnotes:\n${Array.from({ length: 40_000 }, (_, i) => `  k${i}: ${i}`).join('\n')}\n`;
     const { ms, value } = read(text, 'models/many/model.reach.yaml');
     console.log(
       `40,000 YAML keys (${(text.length / 1024).toFixed(0)} KiB): ${ms.toFixed(0)} ms CPU`,
     );
     expect(value).not.toBeInstanceOf(Error);
-    expect(ms).toBeLessThan(4000);
+    // Plain block YAML is read by the fast block reader (`yaml-block.ts`): 0.15–0.6 s measured
+    // on a busy 2-core machine, the first call in the process included.
+    expect(ms).toBeLessThan(1500);
   });
 
   it('a duplicate key among 40,000 is still found, at its line', () => {
@@ -110,9 +112,25 @@ describe('files with many keys or documents (point 4)', () => {
       `${(text.length / MIB).toFixed(2)} MiB ${path}: ${ms.toFixed(0)} ms CPU, RSS ${(rss / MIB).toFixed(0)} MiB (+${((rss - rssBefore) / MIB).toFixed(0)}): ${unreadable(value)}`,
     );
     expect(unreadable(value)).toMatch(/more than \d+ (syntax tokens|keys and list items)/);
-    expect(ms).toBeLessThan(3000);
+    // Measured 0.15–0.3 s of CPU on a busy 2-core machine (0.45–0.58 s before the fast readers).
+    expect(ms).toBeLessThan(1000);
     expect(rss).toBeLessThan(1024 * MIB);
   });
+
+  it.each([
+    ['JSON', 'models/deep/config.json', (n: number) => `{"a": ${'['.repeat(n)}${']'.repeat(n)}}`],
+    ['YAML', 'models/deep/model.reach.yaml', (n: number) => `a: ${'['.repeat(n)}${']'.repeat(n)}`],
+  ])(
+    '%s of 190,000 nested brackets (380 KB) is refused for its nesting in well under a second (before: 2.7–3.0 s)',
+    (_, path, make) => {
+      const { ms, value } = read(make(190_000), path);
+      console.log(
+        `190,000 nested brackets, ${path}: ${ms.toFixed(0)} ms CPU: ${unreadable(value)}`,
+      );
+      expect(unreadable(value)).toMatch(/line 1: nesting is deeper than 256 levels/);
+      expect(ms).toBeLessThan(1000);
+    },
+  );
 
   it('a valid config with two label maps of 21,843 classes each still reads without a finding about its size', () => {
     const labels = Array.from({ length: 21_843 }, (_, i) => [String(i), `class_${i}`]);

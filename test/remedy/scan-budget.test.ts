@@ -1,16 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { runGate, type ContentSource } from '../../src/core/gate.js';
-import type { GateReport } from '../../src/core/report/types.js';
 import { createScanMemo, type ScanMemo } from '../../src/core/metrics/scan-memo.js';
 import { MAX_REMEDY_SCAN_WORK, MAX_SCAN_WORK } from '../../src/core/metrics/scan-limits.js';
+import { judgeAddedConfig } from '../support/one-config-gate.js';
 
 // Issue 16: one judgement, remedy search included, within half a second of CPU for any span up
 // to 2^31. The similarity scan is the cost that grows with the span (its work units are counted
 // steps, `scan-limits.ts`): the file's own scan stops at MAX_SCAN_WORK, and every scan of the
 // remedy search is charged to MAX_REMEDY_SCAN_WORK as it runs. These tests count the work the
 // scans report (deterministic, whatever the machine's load), and log the CPU time beside it.
-
-const encoder = new TextEncoder();
 
 /** A memo that adds up the work of every scan it actually runs (a repeated question costs nothing). */
 function countingMemo(): ScanMemo & { work: number } {
@@ -43,34 +40,12 @@ function countingMemo(): ScanMemo & { work: number } {
 }
 
 /** The gate over a pull request adding one checkpoint config, with a policy serving `served` tokens. */
-async function judgeOne(
-  config: Record<string, unknown>,
-  served: number,
-  memo: ScanMemo,
-): Promise<{ report: GateReport; cpuMs: number }> {
-  const files = new Map([
-    [
-      '.github/context-reach.yml',
-      encoder.encode(
-        `serving:\n  span: ${served}\n  sequences: 1\n  device-memory-gib: 80\nlimits:\n  discriminationSpan:\n    min: 4096\n    severity: block\n`,
-      ),
-    ],
-    ['models/m/config.json', encoder.encode(JSON.stringify(config))],
-  ]);
-  const source: ContentSource = {
-    read: async (ref, path) =>
-      ref === 'head' || path.endsWith('.yml') ? (files.get(path) ?? null) : null,
-  };
-  const before = process.cpuUsage();
-  const report = await runGate(source, {
-    base: 'base',
-    head: 'head',
-    changes: [{ status: 'added', path: 'models/m/config.json', previousPath: null }],
-    policyPath: '.github/context-reach.yml',
+function judgeOne(config: Record<string, unknown>, served: number, memo: ScanMemo) {
+  return judgeAddedConfig(
+    JSON.stringify(config),
+    `serving:\n  span: ${served}\n  sequences: 1\n  device-memory-gib: 80\nlimits:\n  discriminationSpan:\n    min: 4096\n    severity: block\n`,
     memo,
-  });
-  const used = process.cpuUsage(before);
-  return { report, cpuMs: (used.user + used.system) / 1000 };
+  );
 }
 
 const checkpoint = (headDim: number, base: number, declared: number) => ({

@@ -141,7 +141,7 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
         }),
       readFile: (path, maxBytes) => createFileSource(maxBytes).read(path),
       writeFile: async (path, text) => {
-        written[path] = text;
+        written[path] = typeof text === 'string' ? text : [...text].join('');
       },
       createGit: (cwd) => createGitReader(cwd),
       createGitHub: (token, clientOptions) =>

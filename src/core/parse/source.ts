@@ -4,24 +4,19 @@
  * line of every key and the source text of every scalar.
  *
  * JSON files are held to JSON's grammar (`json-syntax.ts`) and read by the fast JSON reader
- * (`json-read.ts`); everything else, and JSON the YAML path must explain, goes through the one
- * YAML pipeline (`yaml.ts`, `yaml-build.ts`): JSON is YAML 1.2 flow style, so both give the same
- * values, lines and literals. Decoding and text checks: `text.ts`, `utf8.ts`.
+ * (`json-read.ts`); YAML files written as plain block YAML, the way model descriptions are, by
+ * the fast block reader (`yaml-block.ts`); everything else, and what those readers leave to it,
+ * goes through the one YAML pipeline (`yaml.ts`, `yaml-build.ts`). All give the same values,
+ * lines, literals and refusals for the same text. Decoding and text checks: `text.ts`, `utf8.ts`.
  */
 import { ReadError } from './errors.js';
 import { readJsonSource } from './json-read.js';
 import { quoteValue, truncate } from './quote.js';
 import { sourceDocument, type SourceDocument, type SourceMapping } from './source-document.js';
 import { BOM, checkText } from './text.js';
-import {
-  MAX_ENTRIES,
-  MAX_NESTING,
-  MAX_TOKENS,
-  YamlLimitError,
-  composeYaml,
-  type ComposedYaml,
-} from './yaml.js';
-import { YamlBuilder } from './yaml-build.js';
+import { YamlLimitError, composeYaml, type ComposedYaml } from './yaml.js';
+import { YamlBuilder, yamlLimitError } from './yaml-build.js';
+import { readBlockYaml } from './yaml-block.js';
 import { isMap, isScalar, isSeq } from 'yaml';
 import type { YAMLError } from 'yaml';
 
@@ -49,6 +44,9 @@ export function parseSource(text: string, file: string): SourceDocument {
   if (json) {
     const read = readJsonSource(text, file);
     if (read !== null) return read;
+  } else {
+    const read = readBlockYaml(text, file);
+    if (read !== null) return read;
   }
   return readYamlSource(text, file, json);
 }
@@ -68,7 +66,7 @@ export function readYamlSource(text: string, file: string, json: boolean): Sourc
       uniqueKeys: false,
     });
   } catch (error) {
-    if (error instanceof YamlLimitError) throw limitError(error, file);
+    if (error instanceof YamlLimitError) throw yamlLimitError(error, file);
     throw error;
   }
   const doc = composed.doc;
@@ -90,33 +88,6 @@ export function readYamlSource(text: string, file: string, json: boolean): Sourc
   const builder = new YamlBuilder(doc, file, lineAt, json);
   const value = builder.build(root, null, 1) as SourceMapping;
   return sourceDocument(value, text, builder.notes, lineAt);
-}
-
-/** The message of a crossed pipeline bound, at its line. */
-function limitError(error: YamlLimitError, file: string): ReadError {
-  const line = error.line;
-  switch (error.limit) {
-    case 'tokens':
-      return new ReadError(
-        file,
-        null,
-        `holds more than ${MAX_TOKENS} syntax tokens (keys, values and punctuation); a model file holds a few thousand, label maps a few hundred thousand at most`,
-      );
-    case 'documents':
-      return new ReadError(file, line, 'holds more than one YAML document; a model file holds one');
-    case 'nesting':
-      return new ReadError(
-        file,
-        line,
-        `nesting is deeper than ${MAX_NESTING} levels of mappings and lists; a model file needs a handful`,
-      );
-    case 'entries':
-      return new ReadError(
-        file,
-        line,
-        `holds more than ${MAX_ENTRIES} keys and list items; a model file holds a few hundred (label maps a few ten thousand)`,
-      );
-  }
 }
 
 function syntaxError(

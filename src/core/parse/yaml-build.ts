@@ -18,7 +18,14 @@ import {
   type SourceMapping,
   type SourceValue,
 } from './source-document.js';
-import { MAX_ALIASES, MAX_ALIAS_VALUES, MAX_NESTING } from './yaml.js';
+import {
+  MAX_ALIASES,
+  MAX_ALIAS_VALUES,
+  MAX_ENTRIES,
+  MAX_NESTING,
+  MAX_TOKENS,
+  type YamlLimitError,
+} from './yaml.js';
 import { nullRecord } from '../null-record.js';
 
 type Ranged = { range?: [number, number, number] | null } | null | undefined;
@@ -185,4 +192,31 @@ export class YamlBuilder {
 
 function offsetOf(node: Ranged): number {
   return node?.range?.[0] ?? 0;
+}
+
+/** The message of a crossed bound of the YAML pipeline, for a model file, at its line. */
+export function yamlLimitError(error: YamlLimitError, file: string): ReadError {
+  const line = error.line;
+  switch (error.limit) {
+    case 'tokens':
+      return new ReadError(
+        file,
+        null,
+        `holds more than ${MAX_TOKENS} syntax tokens (keys, values and punctuation); a model file holds a few thousand, label maps a few hundred thousand at most`,
+      );
+    case 'documents':
+      return new ReadError(file, line, 'holds more than one YAML document; a model file holds one');
+    case 'nesting':
+      return new ReadError(
+        file,
+        line,
+        `nesting is deeper than ${MAX_NESTING} levels of mappings and lists; a model file needs a handful`,
+      );
+    case 'entries':
+      return new ReadError(
+        file,
+        line,
+        `holds more than ${MAX_ENTRIES} keys and list items; a model file holds a few hundred (label maps a few ten thousand)`,
+      );
+  }
 }

@@ -60,6 +60,16 @@ export class YamlLimitError extends Error {
   }
 }
 
+/** Lexical tokens of `text` as the pipeline counts them, stopping once past `MAX_TOKENS`. */
+export function countYamlTokens(text: string): number {
+  let n = 0;
+  for (const lexeme of new Lexer().lex(text)) {
+    void lexeme;
+    if (++n > MAX_TOKENS) break;
+  }
+  return n;
+}
+
 /** A composed YAML document and the line lookup of its text. */
 export interface ComposedYaml {
   /** The first (and only) document; its `errors` and `warnings` hold what the composer found. */

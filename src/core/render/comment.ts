@@ -575,7 +575,19 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
             .join(
               ', ',
             )} are left out here; the job summary and the JSON report have everything._\n`;
-    const body = `${head}\n${trimNote}\n${report.files.map((f) => fileSection(f, ctx, parts)).join('\n')}\n${tail}\n`;
+    // Sections are rendered only while the body can still fit (`length` never exceeds the
+    // body's): a form over the limit is dropped as soon as it is (3,000 files were rendered in
+    // full for every form).
+    const sections: string[] = [];
+    let length = head.length + trimNote.length + tail.length + 3;
+    for (const file of report.files) {
+      if (length > limit) break;
+      const section = fileSection(file, ctx, parts);
+      sections.push(section);
+      length += section.length + 1;
+    }
+    if (length > limit) continue;
+    const body = `${head}\n${trimNote}\n${sections.join('\n')}\n${tail}\n`;
     if (body.length <= limit) return body;
   }
   // Still too long: as many whole file sections as fit, the rest named in one line each.

@@ -10,7 +10,17 @@ import type { GateReport } from '../report/types.js';
  * the context-reach release that wrote it. Published as `schema/report.schema.json`.
  */
 export function renderGateJson(report: GateReport): string {
-  const files = report.files.map((file) => ({
+  return [...gateJsonParts(report)].join('');
+}
+
+/**
+ * The text of `renderGateJson` in parts, a file at a time (joined, byte for byte the same), so
+ * a report of thousands of files is written without its whole text in memory: each file's part
+ * is `JSON.stringify` of the file at the indentation it has inside the whole (JSON strings hold
+ * no line break, so indenting every line of the part is exact).
+ */
+export function* gateJsonParts(report: GateReport): Generator<string> {
+  const fileJson = (file: GateReport['files'][number]) => ({
     path: file.path,
     previousPath: file.previousPath,
     status: file.status,
@@ -27,8 +37,8 @@ export function renderGateJson(report: GateReport): string {
     headError: file.headError,
     ...(file.remedyTogether ? { remedyTogether: file.remedyTogether } : {}),
     ...(file.assumed ? { assumed: file.assumed } : {}),
-  }));
-  return `${JSON.stringify(
+  });
+  const whole = JSON.stringify(
     {
       version: report.version,
       toolVersion: VERSION,
@@ -42,9 +52,21 @@ export function renderGateJson(report: GateReport): string {
       waiver: report.waiver,
       notices: report.notices,
       deleted: report.deleted,
-      files,
+      files: [],
     },
     null,
     2,
-  )}\n`;
+  );
+  if (report.files.length === 0) {
+    yield `${whole}\n`;
+    return;
+  }
+  // `"files": []` closes the whole; the files go between its brackets.
+  const EMPTY_END = '[]\n}';
+  yield `${whole.slice(0, whole.length - EMPTY_END.length)}[\n`;
+  for (const [i, file] of report.files.entries()) {
+    const text = JSON.stringify(fileJson(file), null, 2).replace(/\n/g, '\n    ');
+    yield `${i === 0 ? '' : ',\n'}    ${text}`;
+  }
+  yield '\n  ]\n}\n';
 }
