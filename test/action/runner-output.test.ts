@@ -6,6 +6,7 @@ import { join } from 'node:path';
 import * as core from '@actions/core';
 import fc from 'fast-check';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { forgetSummaryPath } from '../support/summary-path.js';
 import { readSettings } from '../../src/action/inputs.js';
 import { createRunnerOutput } from '../../src/action/runner-output.js';
 import type { Annotation } from '../../src/core/render/annotations.js';
@@ -193,12 +194,14 @@ describe('createRunnerOutput(core).output(name, value) and .summary(markdown)', 
     dir = mkdtempSync(join(tmpdir(), 'context-reach-commands-'));
     const file = join(dir, 'summary.md');
     writeFileSync(file, 'before\n');
-    // Asked first: the toolkit keeps the file's path once it has found one.
+    // The toolkit keeps the file's path once it has found one: forgotten first, then asked.
+    forgetSummaryPath();
     vi.stubEnv('GITHUB_STEP_SUMMARY', '');
     await expect(out.summary('x')).rejects.toThrow(/GITHUB_STEP_SUMMARY/);
     vi.stubEnv('GITHUB_STEP_SUMMARY', file);
     await out.summary('## Report');
     expect(readFileSync(file, 'utf8')).toBe(`before\n## Report${EOL}`);
+    forgetSummaryPath();
   });
 
   it('fails the step: exit status 1 and an error command', () => {

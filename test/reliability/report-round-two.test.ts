@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import * as core from '@actions/core';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { forgetSummaryPath } from '../support/summary-path.js';
 import { createGitReader } from '../../src/adapters/git.js';
 import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { runAction } from '../../src/action/run-action.js';
@@ -335,10 +336,12 @@ describe("the job summary fits GitHub's 1 MiB in bytes (point 9)", () => {
     const path = join(dir, 'summary.md');
     writeFileSync(path, '');
     vi.stubEnv('GITHUB_STEP_SUMMARY', path);
+    forgetSummaryPath();
     try {
       await createRunnerOutput(core).summary('é模'.repeat(400_000));
     } finally {
       vi.unstubAllEnvs();
+      forgetSummaryPath();
     }
     const written = readFileSync(path);
     const size = statSync(path).size;
