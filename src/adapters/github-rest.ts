@@ -442,10 +442,19 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
   // The Octokit stack is loaded and built on the first call (see `octokit.ts` for why).
   const connect = () =>
     (loading ??= import('./octokit.js').then(
-      ({ getOctokit, actionsDefaults, retry, throttling }) => {
+      ({ getOctokit, actionsDefaults, retry, throttling, Bottleneck }) => {
         const baseFetch = (actionsDefaults.request?.fetch ?? globalThis.fetch) as typeof fetch;
         const timedFetch = (url: string | URL | Request, init?: RequestInit): Promise<Response> =>
           baseFetch(url, { ...init, signal: init?.signal ?? AbortSignal.timeout(timeoutMs) });
+        // GitHub asks integrations to space writes a second apart, and more for writes that
+        // notify people; the throttling plugin's own spacing (1 s, 3 s), per client and scaled
+        // like every other wait GitHub asks for.
+        const spaced = (name: string, seconds: number) =>
+          new Bottleneck.Group({
+            id: `${limiterId}-${name}`,
+            maxConcurrent: 1,
+            minTime: seconds * msPerSecond,
+          });
         octokit = getOctokit(
           token,
           {
@@ -456,6 +465,8 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
             throttle: {
               // One limiter set per client: spacing between writes is per run, not shared across clients.
               id: limiterId,
+              write: spaced('write', 1),
+              notifications: spaced('notifications', 3),
               retryAfterBaseValue: msPerSecond,
               onRateLimit: limitHandler('rate limit'),
               onSecondaryRateLimit: limitHandler('secondary rate limit'),

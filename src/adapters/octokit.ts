@@ -7,3 +7,4 @@ export { getOctokit } from '@actions/github';
 export { defaults as actionsDefaults } from '@actions/github/lib/utils';
 export { retry } from '@octokit/plugin-retry';
 export { throttling } from '@octokit/plugin-throttling';
+export { default as Bottleneck } from 'bottleneck/light.js';

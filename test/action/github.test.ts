@@ -240,6 +240,23 @@ describe('getFileContent(owner, repo, path, ref)', () => {
 });
 
 describe('comments', () => {
+  test('writes are spaced as GitHub asks, scaled by msPerSecond: 1 s between writes, 3 s before one that notifies', async () => {
+    // GitHub's REST guidance (best practices for integrators, common practice): a second between
+    // mutative requests; the throttling plugin waits 3 s before a write that notifies people.
+    const unit = 40;
+    const api = client({ msPerSecond: unit });
+    const first = await api.createComment(OWNER, REPO, 7, 'one');
+    await api.createComment(OWNER, REPO, 7, 'two');
+    await api.updateComment(OWNER, REPO, first.id, 'one, edited');
+    const at = fake.requests
+      .filter((r) => r.method === 'POST' || r.method === 'PATCH')
+      .map((r) => r.at);
+    expect(at).toHaveLength(3);
+    // Timers may fire up to a millisecond early; lateness only widens the gaps.
+    expect(at[1]! - at[0]!).toBeGreaterThanOrEqual(3 * unit - 2);
+    expect(at[2]! - at[1]!).toBeGreaterThanOrEqual(unit - 2);
+  });
+
   test('findComment(…) takes the oldest bot comment that starts with the marker', async () => {
     const person = { login: 'someone', type: 'User' as const, id: 5 };
     addComment(7, `${MARKER}\nfake report by a person`, person);

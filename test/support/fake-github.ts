@@ -131,6 +131,8 @@ export interface LoggedRequest {
   authorized: boolean;
   /** The answer came from the fault queue. */
   fault: boolean;
+  /** When the request arrived (`performance.now()`, milliseconds). */
+  at: number;
 }
 
 export interface Mismatch {
@@ -1058,6 +1060,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
         status: authorized ? 200 : 401,
         authorized,
         fault: false,
+        at: performance.now(),
       };
       requests.push(entry);
       const queued = faults.get('graphql')?.shift();
@@ -1099,6 +1102,7 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       status: 0,
       authorized,
       fault: false,
+      at: performance.now(),
     };
     requests.push(entry);
     const queue = faults.get(check.operation?.operationId ?? '') ?? [];
