@@ -3,6 +3,7 @@ import { marked } from 'marked';
 import { decide, type ChangedConfig } from '../../src/core/compare/decide.js';
 import { BUILT_IN_JUDGING } from '../../src/core/policy/judging.js';
 import { inspectModel } from '../../src/core/inspect.js';
+import { PER_DEVICE_METRICS } from '../../src/core/metrics/types.js';
 import { COMMENT_LIMIT, renderComment } from '../../src/core/render/comment.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
@@ -97,6 +98,45 @@ describe('renderComment(report)', () => {
     expect(trimmed.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(trimmed).toContain("Trimmed to fit GitHub's comment limit");
     expect(trimmed.split('\n')[0]).toBe(COMMENT_MARKER);
+  });
+});
+
+describe('renderComment(report): the per-device metrics (PER_DEVICE_METRICS)', () => {
+  function commentAt(tensorParallel: number): string {
+    const path = 'models/a/config.json';
+    const options = { overrides: { tensorParallel } };
+    return renderComment(
+      decide({
+        configs: [
+          {
+            change: { status: 'modified', path, previousPath: null },
+            base: inspectModel(checkpointConfig(), path, options),
+            head: inspectModel(checkpointConfig({ max_position_embeddings: 8192 }), path, options),
+            judging: BUILT_IN_JUDGING,
+          },
+        ],
+        deleted: [],
+        policy: { source: 'file', path: '.github/context-reach.yml', changedInHead: false },
+        waiver: { label: null, applied: false },
+        notices: [],
+        base: '1'.repeat(40),
+        head: '2'.repeat(40),
+      }),
+    );
+  }
+
+  it('are left out on one device, where each equals its single-device figure, and shown on two', () => {
+    const one = commentAt(1);
+    const two = commentAt(2);
+    for (const metric of PER_DEVICE_METRICS) {
+      expect(one, metric).not.toContain(`\`${metric}\``);
+      expect(two, metric).toContain(`\`${metric}\``);
+    }
+    // The single-device figures stay in both.
+    for (const metric of ['weightBytes', 'cachePerTokenBytes', 'memoryBytes']) {
+      expect(one, metric).toContain(`\`${metric}\``);
+      expect(two, metric).toContain(`\`${metric}\``);
+    }
   });
 });
 
