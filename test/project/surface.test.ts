@@ -131,6 +131,31 @@ describe("the project's documents", () => {
     }
   });
 
+  it("names every suffix of the full project and the coverage floor in docs/architecture.md (and the suffixes in the README's quick start)", () => {
+    const config = read('vitest.config.ts');
+    const suffixes = [...config.matchAll(/'test\/\*\*\/\*(\.[a-z]+)\.test\.ts'/g)].map(
+      (match) => match[1] ?? '',
+    );
+    expect(suffixes.sort()).toEqual(
+      ['.browser', '.bundle', '.numpy', '.pack', '.property', '.slow'].sort(),
+    );
+    const architecture = read('docs/architecture.md');
+    const readme = read('README.md');
+    for (const suffix of suffixes) {
+      expect(architecture, suffix).toContain(`\`*${suffix}.test.ts\``);
+      expect(readme, suffix).toContain(`\`*${suffix}.test.ts\``);
+    }
+    const floor =
+      /thresholds: \{ statements: (\d+), branches: (\d+), functions: (\d+), lines: (\d+) \}/.exec(
+        config,
+      );
+    expect(floor, 'the coverage thresholds in vitest.config.ts').not.toBeNull();
+    const [, statements, branches, functions, lines] = floor ?? [];
+    expect(architecture.replace(/\s+/g, ' ')).toContain(
+      `statements ${statements} %, branches ${branches} %, functions ${functions} %, lines ${lines} %`,
+    );
+  });
+
   it("calls the README's test command from CI, and the heavy tests after it", () => {
     expect(read('.ci/run')).toMatch(/^npm test( |$)/m);
     expect(read('.ci/run')).toMatch(/^npm run test:full( |$)/m);
