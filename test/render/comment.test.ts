@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { marked } from 'marked';
 import { decide, type ChangedConfig } from '../../src/core/compare/decide.js';
 import { BUILT_IN_JUDGING } from '../../src/core/policy/judging.js';
-import { inspectModel } from '../../src/core/inspect.js';
+import { inspectModel, type InspectOptions } from '../../src/core/inspect.js';
 import { PER_DEVICE_METRICS } from '../../src/core/metrics/types.js';
 import { COMMENT_LIMIT, renderComment } from '../../src/core/render/comment.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
@@ -13,11 +13,12 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 function gateOver(
   files: { path: string; base: Record<string, unknown>; head: Record<string, unknown> }[],
   extra: Partial<Parameters<typeof decide>[0]> = {},
+  options: InspectOptions = {},
 ) {
   const configs: ChangedConfig[] = files.map((f) => ({
     change: { status: 'modified', path: f.path, previousPath: null },
-    base: inspectModel(checkpointConfig(f.base), f.path),
-    head: inspectModel(checkpointConfig(f.head), f.path),
+    base: inspectModel(checkpointConfig(f.base), f.path, options),
+    head: inspectModel(checkpointConfig(f.head), f.path, options),
     judging: BUILT_IN_JUDGING,
   }));
   return decide({
@@ -102,28 +103,14 @@ describe('renderComment(report)', () => {
 });
 
 describe('renderComment(report): the per-device metrics (PER_DEVICE_METRICS)', () => {
-  function commentAt(tensorParallel: number): string {
-    const path = 'models/a/config.json';
-    const options = { overrides: { tensorParallel } };
-    return renderComment(
-      decide({
-        configs: [
-          {
-            change: { status: 'modified', path, previousPath: null },
-            base: inspectModel(checkpointConfig(), path, options),
-            head: inspectModel(checkpointConfig({ max_position_embeddings: 8192 }), path, options),
-            judging: BUILT_IN_JUDGING,
-          },
-        ],
-        deleted: [],
-        policy: { source: 'file', path: '.github/context-reach.yml', changedInHead: false },
-        waiver: { label: null, applied: false },
-        notices: [],
-        base: '1'.repeat(40),
-        head: '2'.repeat(40),
-      }),
+  const commentAt = (tensorParallel: number) =>
+    renderComment(
+      gateOver(
+        [{ path: 'models/a/config.json', base: {}, head: { max_position_embeddings: 8192 } }],
+        {},
+        { overrides: { tensorParallel } },
+      ),
     );
-  }
 
   it('are left out on one device, where each equals its single-device figure, and shown on two', () => {
     const one = commentAt(1);
