@@ -7,8 +7,12 @@ export type PatchMode = 'default' | 'override';
 
 type Field = keyof ServingPatch;
 
-/** Where each patch field lands in the spec, as a location-map path. */
-const SPEC_PATH: Record<Field, string> = {
+/**
+ * Where each patch field lands in the spec, as the location map and a remedy's change name the
+ * field: the one list of what a serving patch (a policy's `serving`, the CLI's flags) can set. A
+ * group size sets the whole `quantization` record, located as `quantization`.
+ */
+export const SERVING_SPEC_PATH: Readonly<Record<Field, string>> = {
   span: 'serving.span',
   sequences: 'serving.sequences',
   deviceGiB: 'serving.deviceGiB',
@@ -22,7 +26,7 @@ const SPEC_PATH: Record<Field, string> = {
   tensorParallel: 'serving.tensorParallel',
   pipelineParallel: 'serving.pipelineParallel',
   activationReserveGiB: 'serving.activationReserveGiB',
-  weightGroupSize: 'quantization',
+  weightGroupSize: 'quantization.groupSize',
 };
 
 function current(spec: ModelSpec, field: Field): unknown {
@@ -55,7 +59,7 @@ export function applyServing(
   const nextLocations: LocationMap = { ...locations };
   const where = (field: Field) => (typeof origin === 'function' ? origin(field) : origin);
   let weightsSet = false;
-  for (const field of Object.keys(SPEC_PATH) as Field[]) {
+  for (const field of Object.keys(SERVING_SPEC_PATH) as Field[]) {
     const value = patch[field];
     if (value === undefined || field === 'weightGroupSize') continue;
     if (mode === 'default' && current(spec, field) !== null) continue;
@@ -74,7 +78,7 @@ export function applyServing(
       default:
         next.serving[field] = value as number;
     }
-    nextLocations[SPEC_PATH[field]] = where(field);
+    nextLocations[SERVING_SPEC_PATH[field]] = where(field);
   }
   // A weight format given here replaces the file's own quantization; with a group size, a
   // quantized format (int4, int8, fp8) counts its matrices at low width plus scales.

@@ -6,6 +6,11 @@ import { shardingDegrees, shards } from '../../src/core/metrics/per-device.js';
 import { servedSequences } from '../../src/core/metrics/kv-cache.js';
 import { readModel } from '../../src/core/parse/read-model.js';
 import type { ModelSpec } from '../../src/core/model.js';
+import {
+  PER_DEVICE_METRICS,
+  SCALAR_METRICS,
+  type PerDeviceMetric,
+} from '../../src/core/metrics/types.js';
 import { specFindings } from '../../src/core/rules/spec-rules.js';
 import { cpuClock } from '../support/cpu-time.js';
 
@@ -190,6 +195,17 @@ describe('with t = p = 1 every figure is the single-device one', () => {
         expect(m.weightBytes).toBe(weightBytes(spec, m.params));
         expect(m.cachePerTokenBytesPerDevice).toBe(m.cachePerTokenBytes);
         expect(m.memoryBytesPerDevice).toBe(m.memoryBytes);
+        // Every metric the catalogue lists as per-device (the comment hides them on one device
+        // because of this equality) has its single-device figure here: a new one must be added.
+        const single: Record<PerDeviceMetric, number | null> = {
+          devices: 1,
+          kvHeadsPerDevice: spec.kvHeads,
+          weightBytesPerDevice: m.weightBytes,
+          cachePerTokenBytesPerDevice: m.cachePerTokenBytes,
+          memoryBytesPerDevice: m.memoryBytes,
+        };
+        expect(Object.keys(single).sort()).toEqual([...PER_DEVICE_METRICS].sort());
+        for (const metric of PER_DEVICE_METRICS) expect(m[metric], metric).toBe(single[metric]);
         // The single-device formula of the context budget, kept in memory-fit.ts.
         expect(m.fitSequences).toBe(
           fitSequences(spec, m.weightBytes, m.cacheBytesAtSpan, servedSequences(spec)),
@@ -197,6 +213,16 @@ describe('with t = p = 1 every figure is the single-device one', () => {
       }
     },
   );
+});
+
+describe('the per-device metrics of the catalogue (PER_DEVICE_METRICS)', () => {
+  it('are the device count and every scalar metric named per device, the last of SCALAR_METRICS', () => {
+    expect(PER_DEVICE_METRICS).toEqual([
+      'devices',
+      ...SCALAR_METRICS.filter((metric) => metric.endsWith('PerDevice')),
+    ]);
+    expect(SCALAR_METRICS.slice(-PER_DEVICE_METRICS.length)).toEqual([...PER_DEVICE_METRICS]);
+  });
 });
 
 describe('the busiest pipeline stage', () => {

@@ -1,5 +1,5 @@
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { existsSync, readFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import * as core from '../../src/core/index.js';
 import { METRIC_PATHS } from '../../src/core/metrics/metric-path.js';
@@ -104,6 +104,56 @@ describe("the project's documents", () => {
     expect(quick).toContain('node dist/cli.js demo');
     expect(quick).toContain('npm ci && npm test');
     expect(readme.slice(0, 1500)).toMatch(/pull request/);
+  });
+
+  it("keeps the README's performance tables and points to the write-up in docs/performance.md", () => {
+    const readme = read('README.md');
+    const section = readme.slice(
+      readme.indexOf('## Performance'),
+      readme.indexOf('\n## ', readme.indexOf('## Performance') + 1),
+    );
+    expect(section).toContain('](docs/performance.md)');
+    expect(section).toMatch(/^\| workload \| median \| target \| result \|$/m);
+    expect(section).toMatch(/^\| changed configs \(files blocked\) \|/m);
+    // The prose lives in one place: the method is not written in both.
+    expect(section).not.toContain('Chebyshev');
+    expect(read('docs/performance.md')).toContain('Chebyshev');
+  });
+
+  it('links only to files that exist from the README and docs/performance.md', () => {
+    for (const doc of ['README.md', 'docs/performance.md']) {
+      const targets = [...read(doc).matchAll(/\]\(([^)#\s]+)(?:#[^)]*)?\)/g)]
+        .map((match) => match[1] ?? '')
+        .filter((target) => !/^[a-z]+:/.test(target));
+      expect(targets.length, doc).toBeGreaterThan(0);
+      for (const target of targets)
+        expect(existsSync(resolve(ROOT, dirname(doc), target)), `${doc} → ${target}`).toBe(true);
+    }
+  });
+
+  it("names every suffix of the full project and the coverage floor in docs/architecture.md (and the suffixes in the README's quick start)", () => {
+    const config = read('vitest.config.ts');
+    const suffixes = [...config.matchAll(/'test\/\*\*\/\*(\.[a-z]+)\.test\.ts'/g)].map(
+      (match) => match[1] ?? '',
+    );
+    expect(suffixes.sort()).toEqual(
+      ['.browser', '.bundle', '.numpy', '.pack', '.property', '.slow'].sort(),
+    );
+    const architecture = read('docs/architecture.md');
+    const readme = read('README.md');
+    for (const suffix of suffixes) {
+      expect(architecture, suffix).toContain(`\`*${suffix}.test.ts\``);
+      expect(readme, suffix).toContain(`\`*${suffix}.test.ts\``);
+    }
+    const floor =
+      /thresholds: \{ statements: (\d+), branches: (\d+), functions: (\d+), lines: (\d+) \}/.exec(
+        config,
+      );
+    expect(floor, 'the coverage thresholds in vitest.config.ts').not.toBeNull();
+    const [, statements, branches, functions, lines] = floor ?? [];
+    expect(architecture.replace(/\s+/g, ' ')).toContain(
+      `statements ${statements} %, branches ${branches} %, functions ${functions} %, lines ${lines} %`,
+    );
   });
 
   it("calls the README's test command from CI, and the heavy tests after it", () => {

@@ -22,6 +22,18 @@ import { checkedFakes, MODEL } from './checked-scenarios.js';
 
 const { scenario } = checkedFakes();
 
+/** Our report comment from an earlier run (id 1) on the pull request the scenarios judge (7). */
+function withOldComment(fake: FakeGitHub): void {
+  fake.state.comments.push({
+    id: 1,
+    issueNumber: 7,
+    body: `${COMMENT_MARKER}\nold`,
+    user: fake.state.tokenUser,
+    createdAt: '2024-01-01T00:00:00Z',
+    updatedAt: '2024-01-01T00:00:00Z',
+  });
+}
+
 const reports = (r: ScenarioResult) =>
   r.fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
 
@@ -51,15 +63,7 @@ describe('server errors (500, 502, 503) are retried and the run ends as if nothi
     ['issues/update-comment', false],
   ] as const)('on %s: verdict block, exactly one comment', async (operation, noHistory) => {
     const fake = await startFakeGitHub();
-    if (operation === 'issues/update-comment')
-      fake.state.comments.push({
-        id: 1,
-        issueNumber: 7,
-        body: `${COMMENT_MARKER}\nold`,
-        user: fake.state.tokenUser,
-        createdAt: '2024-01-01T00:00:00Z',
-        updatedAt: '2024-01-01T00:00:00Z',
-      });
+    if (operation === 'issues/update-comment') withOldComment(fake);
     const result = await scenario({
       noHistory,
       fake,
@@ -159,14 +163,7 @@ describe('missing and vanished things', () => {
 
   it('a 422 on update when the old comment is gone: one new comment', async () => {
     const fake = await startFakeGitHub();
-    fake.state.comments.push({
-      id: 1,
-      issueNumber: 7,
-      body: `${COMMENT_MARKER}\nold`,
-      user: fake.state.tokenUser,
-      createdAt: '2024-01-01T00:00:00Z',
-      updatedAt: '2024-01-01T00:00:00Z',
-    });
+    withOldComment(fake);
     const result = await scenario({
       fake,
       prepare: (f) =>
@@ -185,14 +182,7 @@ describe('missing and vanished things', () => {
 
   it('a 422 on update when the old comment is still there: no second comment, a warning, the verdict still decides', async () => {
     const fake = await startFakeGitHub();
-    fake.state.comments.push({
-      id: 1,
-      issueNumber: 7,
-      body: `${COMMENT_MARKER}\nold`,
-      user: fake.state.tokenUser,
-      createdAt: '2024-01-01T00:00:00Z',
-      updatedAt: '2024-01-01T00:00:00Z',
-    });
+    withOldComment(fake);
     const result = await scenario({
       fake,
       prepare: (f) => f.fail('issues/update-comment', statusFault(422, 'Validation Failed')),

@@ -1,8 +1,8 @@
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { GateReport } from '../../src/core/report/types.js';
 import { BaseUnreadableError, runGate, type ContentSource } from '../../src/core/gate.js';
 import { runScenario, type ScenarioResult } from '../support/action-harness.js';
-import type { FakeGitHub } from '../support/fake-github.js';
+import { checkedFakes } from './checked-scenarios.js';
 import { checkpointConfig, type Tree } from '../support/scenario-repo.js';
 
 // Issue 13's "done when": no path through the action turns a block into ok because something
@@ -28,14 +28,8 @@ model:
   declared-span: 16384
 `;
 
-const fakes: FakeGitHub[] = [];
-afterEach(async () => {
-  for (const fake of fakes.splice(0)) {
-    expect(fake.mismatches).toEqual([]);
-    expect(fake.unhandled).toEqual([]);
-    await fake.close();
-  }
-});
+/** Every fake of a run, checked against GitHub's REST description and closed after each test. */
+const { fakes } = checkedFakes();
 
 async function run(
   base: Tree,

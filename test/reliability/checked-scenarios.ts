@@ -1,6 +1,7 @@
 /**
- * What the API-fault and read-failure tests share (api-faults.*.ts, read-failures.slow.test.ts):
- * the change that blocks, and the fakes of a file's runs, each checked and closed after every test.
+ * What the tests of the action against the fake API share (api-faults.*.ts, read-failures.*.ts,
+ * base-unreadable.test.ts, moved-configs.test.ts): the change that blocks, and the fakes of a
+ * file's runs, each checked and closed after every test.
  */
 import { afterEach, expect } from 'vitest';
 import {

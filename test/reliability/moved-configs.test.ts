@@ -1,7 +1,7 @@
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { createGitReader } from '../../src/adapters/git.js';
 import { runScenario, type ScenarioResult } from '../support/action-harness.js';
-import type { FakeGitHub } from '../support/fake-github.js';
+import { checkedFakes } from './checked-scenarios.js';
 import { checkpointConfig, scenarioRepo } from '../support/scenario-repo.js';
 
 // Round two (issue 13, point 8): a config moved to another folder and rewritten (minified) is not
@@ -18,14 +18,8 @@ const minified = (overrides: Record<string, unknown> = {}) =>
     ),
   );
 
-const fakes: FakeGitHub[] = [];
-afterEach(async () => {
-  for (const fake of fakes.splice(0)) {
-    expect(fake.mismatches).toEqual([]);
-    expect(fake.unhandled).toEqual([]);
-    await fake.close();
-  }
-});
+/** Every fake of a run, checked against GitHub's REST description and closed after each test. */
+const { fakes } = checkedFakes();
 
 async function run(
   head: Record<string, string>,

@@ -1,9 +1,17 @@
 /**
- * The fork-safe two-workflow recipe's first half, shared by publish.test.ts and
- * publish.bundle.test.ts: the first workflow's run on a fork's pull request and the workflow_run
- * payload of the second.
+ * The fork-safe two-workflow recipe, shared by publish.test.ts, publish.bundle.test.ts and
+ * report-round-two.test.ts: the first workflow's run on a fork's pull request, the workflow_run
+ * payload of the second, and the second run in process.
  */
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { createFileSource } from '../../src/adapters/file-source.js';
+import { createGitReader } from '../../src/adapters/git.js';
+import { createGitHubClient } from '../../src/adapters/github-rest.js';
+import { runAction } from '../../src/action/run-action.js';
 import { OWNER, REPO, runScenario, type ScenarioResult } from '../support/action-harness.js';
+import type { FakeGitHub } from '../support/fake-github.js';
+import { createRecordingOutput, type RecordingOutput } from '../support/recording-output.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
 
 export const MODEL = 'models/a/config.json';
@@ -70,7 +78,13 @@ export async function firstWorkflow(): Promise<{ first: ScenarioResult; reportTe
     headRepo: `mallory/${REPO}`,
     files: [],
   });
-  fake.state.pulls.set(9, {
+  addClosedPullOfSameHead(first);
+  return { first, reportText };
+}
+
+/** A closed pull request (9) from the fork's branch at the first workflow's head commit. */
+export function addClosedPullOfSameHead(first: ScenarioResult): void {
+  first.fake.state.pulls.set(9, {
     number: 9,
     baseSha: first.base,
     headSha: first.head,
@@ -81,5 +95,55 @@ export async function firstWorkflow(): Promise<{ first: ScenarioResult; reportTe
     files: [],
     state: 'closed',
   });
-  return { first, reportText };
+}
+
+/**
+ * Workflow 2 in process with the real adapters: the action in publish mode on `report` (text or
+ * bytes, written to a file under `folder`) against `fake`, with the event `payload`.
+ */
+export async function publishInProcess(
+  fake: FakeGitHub,
+  folder: string,
+  report: string | Uint8Array,
+  payload: unknown,
+  eventName = 'workflow_run',
+): Promise<{ out: RecordingOutput; error: unknown }> {
+  const path = join(folder, `report-${Math.random().toString(36).slice(2)}.json`);
+  writeFileSync(path, report);
+  const out = createRecordingOutput();
+  let error: unknown = null;
+  await runAction({
+    env: {
+      GITHUB_EVENT_NAME: eventName,
+      GITHUB_EVENT_PATH: 'event.json',
+      GITHUB_API_URL: fake.url,
+      GITHUB_SERVER_URL: 'https://github.example',
+      RUNNER_TEMP: folder,
+    },
+    getInput: (name) =>
+      (({ 'github-token': fake.state.token, 'publish-report': path }) as Record<string, string>)[
+        name
+      ] ?? '',
+    out,
+    readJson: async () => payload,
+    readFile: (p, max) => createFileSource(max).read(p),
+    writeFile: async () => {
+      throw new Error('publish mode writes no files');
+    },
+    createGit: (cwd) => createGitReader(cwd),
+    createGitHub: (token, options) => createGitHubClient(token, { ...options, msPerSecond: 1 }),
+  }).catch((caught: unknown) => {
+    error = caught;
+  });
+  return { out, error };
+}
+
+/** The JSON report `reportText` with `change` made to it, as a forger would write it. */
+export function tamperedReport(
+  reportText: string,
+  change: (report: Record<string, unknown> & { files: Record<string, unknown>[] }) => void,
+): string {
+  const report = JSON.parse(reportText);
+  change(report);
+  return JSON.stringify(report);
 }

@@ -2,17 +2,20 @@ import { mkdtempSync, rmSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createGitReader } from '../../src/adapters/git.js';
-import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { MAX_REPORT_BYTES } from '../../src/action/publish.js';
-import { runAction } from '../../src/action/run-action.js';
 import { createFileSource } from '../../src/adapters/file-source.js';
 import type { GateReport } from '../../src/core/report/types.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import type { ScenarioResult } from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';
-import { createRecordingOutput, type RecordingOutput } from '../support/recording-output.js';
-import { firstWorkflow, workflowRunFor, type WorkflowRunOverrides } from './publish-recipe.js';
+import type { RecordingOutput } from '../support/recording-output.js';
+import {
+  firstWorkflow,
+  publishInProcess,
+  tamperedReport,
+  workflowRunFor,
+  type WorkflowRunOverrides,
+} from './publish-recipe.js';
 import { markdownProblems, renderGfm } from './report-checks.js';
 
 // The fork-safe two-workflow recipe, end to end against the loopback API: a first workflow on a
@@ -38,50 +41,16 @@ interface Published {
 }
 
 /** Runs the action in publish mode, in-process with the real GitHub adapter, on `report` (text or bytes). */
-async function publish(
+const publish = (
   report: string | Uint8Array,
   payload: unknown = workflowRun(),
   eventName = 'workflow_run',
-): Promise<Published> {
-  const path = join(folder, `report-${Math.random().toString(36).slice(2)}.json`);
-  writeFileSync(path, report);
-  const out = createRecordingOutput();
-  let error: unknown = null;
-  await runAction({
-    env: {
-      GITHUB_EVENT_NAME: eventName,
-      GITHUB_EVENT_PATH: 'event.json',
-      GITHUB_API_URL: fake.url,
-      GITHUB_SERVER_URL: 'https://github.example',
-      RUNNER_TEMP: folder,
-    },
-    getInput: (name) =>
-      (({ 'github-token': fake.state.token, 'publish-report': path }) as Record<string, string>)[
-        name
-      ] ?? '',
-    out,
-    readJson: async () => payload,
-    readFile: (p, max) => createFileSource(max).read(p),
-    writeFile: async () => {
-      throw new Error('publish mode writes no files');
-    },
-    createGit: (cwd) => createGitReader(cwd),
-    createGitHub: (token, options) => createGitHubClient(token, { ...options, msPerSecond: 1 }),
-  }).catch((caught: unknown) => {
-    error = caught;
-  });
-  return { out, error };
-}
+): Promise<Published> => publishInProcess(fake, folder, report, payload, eventName);
 
 const ours = () => fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
 
-function tampered(
-  change: (report: Record<string, unknown> & { files: Record<string, unknown>[] }) => void,
-): string {
-  const report = JSON.parse(reportText);
-  change(report);
-  return JSON.stringify(report);
-}
+const tampered = (change: Parameters<typeof tamperedReport>[1]) =>
+  tamperedReport(reportText, change);
 
 beforeAll(async () => {
   folder = mkdtempSync(join(tmpdir(), 'context-reach-publish-'));

@@ -1,12 +1,7 @@
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
-import {
-  runScenario,
-  type ScenarioOptions,
-  type ScenarioResult,
-} from '../support/action-harness.js';
-import type { FakeGitHub } from '../support/fake-github.js';
-import { checkpointConfig } from '../support/scenario-repo.js';
+import type { ScenarioResult } from '../support/action-harness.js';
+import { BLOCKING, checkedFakes, MODEL } from './checked-scenarios.js';
 
 // Round two of fail-closed reading (issue 13, points 2, 3, 10 and the read cost): whatever could
 // not be read, listed or parsed makes the check fail and says what and why; it never leaves the
@@ -14,26 +9,8 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 // against temporary repositories and the loopback API stand-in. A pull request of 3,200 files is
 // in read-failures.slow.test.ts (`npm run test:full`).
 
-const MODEL = 'models/a/config.json';
-const BLOCKING = {
-  base: { [MODEL]: checkpointConfig() },
-  head: { [MODEL]: checkpointConfig({ max_position_embeddings: 16384 }) },
-};
-
-const fakes: FakeGitHub[] = [];
-afterEach(async () => {
-  for (const fake of fakes.splice(0)) {
-    expect(fake.mismatches).toEqual([]);
-    expect(fake.unhandled).toEqual([]);
-    await fake.close();
-  }
-});
-
-async function scenario(options: Partial<ScenarioOptions> = {}): Promise<ScenarioResult> {
-  const result = await runScenario({ ...BLOCKING, ...options });
-  fakes.push(result.fake);
-  return result;
-}
+/** The action on the blocking change (or what the options say), its fake checked and closed after each test. */
+const { scenario } = checkedFakes();
 
 const comments = (r: ScenarioResult) =>
   r.fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));

@@ -4,11 +4,7 @@ import { join } from 'node:path';
 import * as core from '@actions/core';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { forgetSummaryPath } from '../support/summary-path.js';
-import { createGitReader } from '../../src/adapters/git.js';
-import { createGitHubClient } from '../../src/adapters/github-rest.js';
-import { runAction } from '../../src/action/run-action.js';
 import { createRunnerOutput, SUMMARY_LIMIT } from '../../src/action/runner-output.js';
-import { createFileSource } from '../../src/adapters/file-source.js';
 import type { GateReport } from '../../src/core/report/types.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderComment } from '../../src/core/render/comment.js';
@@ -19,8 +15,8 @@ import { renderSarif } from '../../src/core/render/sarif.js';
 import { gateOver } from '../support/demo-gate.js';
 import { OWNER, REPO, runScenario, type ScenarioResult } from '../support/action-harness.js';
 import type { FakeGitHub } from '../support/fake-github.js';
-import { createRecordingOutput, type RecordingOutput } from '../support/recording-output.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
+import { addClosedPullOfSameHead, publishInProcess, tamperedReport } from './publish-recipe.js';
 import { renderGfm } from './report-checks.js';
 
 // Round two of the report as an attack surface (issue 13, points 1, 9 and 11): every field a
@@ -58,47 +54,11 @@ function workflowRun(pullNumbers: number[] = []) {
   };
 }
 
-async function publish(
-  report: string,
-  payload: unknown = workflowRun(),
-): Promise<{ out: RecordingOutput; error: unknown }> {
-  const path = join(folder, `report-${Math.random().toString(36).slice(2)}.json`);
-  writeFileSync(path, report);
-  const out = createRecordingOutput();
-  let error: unknown = null;
-  await runAction({
-    env: {
-      GITHUB_EVENT_NAME: 'workflow_run',
-      GITHUB_EVENT_PATH: 'event.json',
-      GITHUB_API_URL: fake.url,
-      GITHUB_SERVER_URL: 'https://github.example',
-      RUNNER_TEMP: folder,
-    },
-    getInput: (name) =>
-      (({ 'github-token': fake.state.token, 'publish-report': path }) as Record<string, string>)[
-        name
-      ] ?? '',
-    out,
-    readJson: async () => payload,
-    readFile: (p, max) => createFileSource(max).read(p),
-    writeFile: async () => {
-      throw new Error('publish mode writes no files');
-    },
-    createGit: (cwd) => createGitReader(cwd),
-    createGitHub: (token, options) => createGitHubClient(token, { ...options, msPerSecond: 1 }),
-  }).catch((caught: unknown) => {
-    error = caught;
-  });
-  return { out, error };
-}
+const publish = (report: string, payload: unknown = workflowRun()) =>
+  publishInProcess(fake, folder, report, payload);
 
-function tampered(
-  change: (report: Record<string, unknown> & { files: Record<string, unknown>[] }) => void,
-): string {
-  const report = JSON.parse(reportText);
-  change(report);
-  return JSON.stringify(report);
-}
+const tampered = (change: Parameters<typeof tamperedReport>[1]) =>
+  tamperedReport(reportText, change);
 
 const ours = () => fake.state.comments.filter((c) => c.body.startsWith(COMMENT_MARKER));
 
@@ -115,17 +75,7 @@ beforeAll(async () => {
   fake.state.readOnly = false;
   // The same head in a closed pull request: the payload may name it, GitHub says it is closed.
   fake.state.pulls.delete(7);
-  fake.state.pulls.set(9, {
-    number: 9,
-    baseSha: first.base,
-    headSha: first.head,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: [],
-    headRepo: `someone-else/${REPO}`,
-    files: [],
-    state: 'closed',
-  });
+  addClosedPullOfSameHead(first);
 }, 60_000);
 
 afterAll(async () => {

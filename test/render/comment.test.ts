@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { marked } from 'marked';
 import { decide, type ChangedConfig } from '../../src/core/compare/decide.js';
 import { BUILT_IN_JUDGING } from '../../src/core/policy/judging.js';
-import { inspectModel } from '../../src/core/inspect.js';
+import { inspectModel, type InspectOptions } from '../../src/core/inspect.js';
+import { PER_DEVICE_METRICS } from '../../src/core/metrics/types.js';
 import { COMMENT_LIMIT, renderComment } from '../../src/core/render/comment.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
@@ -12,11 +13,12 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 function gateOver(
   files: { path: string; base: Record<string, unknown>; head: Record<string, unknown> }[],
   extra: Partial<Parameters<typeof decide>[0]> = {},
+  options: InspectOptions = {},
 ) {
   const configs: ChangedConfig[] = files.map((f) => ({
     change: { status: 'modified', path: f.path, previousPath: null },
-    base: inspectModel(checkpointConfig(f.base), f.path),
-    head: inspectModel(checkpointConfig(f.head), f.path),
+    base: inspectModel(checkpointConfig(f.base), f.path, options),
+    head: inspectModel(checkpointConfig(f.head), f.path, options),
     judging: BUILT_IN_JUDGING,
   }));
   return decide({
@@ -97,6 +99,31 @@ describe('renderComment(report)', () => {
     expect(trimmed.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(trimmed).toContain("Trimmed to fit GitHub's comment limit");
     expect(trimmed.split('\n')[0]).toBe(COMMENT_MARKER);
+  });
+});
+
+describe('renderComment(report): the per-device metrics (PER_DEVICE_METRICS)', () => {
+  const commentAt = (tensorParallel: number) =>
+    renderComment(
+      gateOver(
+        [{ path: 'models/a/config.json', base: {}, head: { max_position_embeddings: 8192 } }],
+        {},
+        { overrides: { tensorParallel } },
+      ),
+    );
+
+  it('are left out on one device, where each equals its single-device figure, and shown on two', () => {
+    const one = commentAt(1);
+    const two = commentAt(2);
+    for (const metric of PER_DEVICE_METRICS) {
+      expect(one, metric).not.toContain(`\`${metric}\``);
+      expect(two, metric).toContain(`\`${metric}\``);
+    }
+    // The single-device figures stay in both.
+    for (const metric of ['weightBytes', 'cachePerTokenBytes', 'memoryBytes']) {
+      expect(one, metric).toContain(`\`${metric}\``);
+      expect(two, metric).toContain(`\`${metric}\``);
+    }
   });
 });
 

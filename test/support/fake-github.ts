@@ -391,21 +391,24 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
     });
   };
 
-  /** A pull request as the list answers it (`pull-request-simple`), from the fake's state. */
-  const simplePull = (pull: FakePull): unknown => {
+  /**
+   * The fields of a pull request both answers give from the fake's state (the list's
+   * `pull-request-simple` and `pulls/get`'s `pull-request`); a label's description differs by
+   * shape (a string in the list's sample, null in the full one).
+   */
+  const pullFields = (pull: FakePull, labelDescription: string | null) => {
     const baseName = `${state.owner}/${state.repo}`;
-    return deepMerge(sampleOf('pull-request-simple'), {
+    const headOwner = pull.headRepo.split('/')[0] ?? '';
+    return {
       number: pull.number,
       state: pull.state ?? 'open',
       title: `Invented change ${pull.number}`,
-      url: `${url}/repos/${baseName}/pulls/${pull.number}`,
-      html_url: `${url}/${baseName}/pull/${pull.number}`,
       labels: pull.labels.map((name, index) => ({
         id: index + 1,
         node_id: `LA_${index}`,
         url: `${url}/labels/${index}`,
         name,
-        description: 'label',
+        description: labelDescription,
         color: 'ededed',
         default: false,
       })),
@@ -419,10 +422,20 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       head: {
         sha: pull.headSha,
         ref: pull.headRef,
-        label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
+        label: `${headOwner}:${pull.headRef}`,
         repo: repoObject(pull.headRepo),
-        user: userObject({ login: pull.headRepo.split('/')[0] ?? '', type: 'User', id: 8 }),
+        user: userObject({ login: headOwner, type: 'User', id: 8 }),
       },
+    };
+  };
+
+  /** A pull request as the list answers it (`pull-request-simple`), from the fake's state. */
+  const simplePull = (pull: FakePull): unknown => {
+    const baseName = `${state.owner}/${state.repo}`;
+    return deepMerge(sampleOf('pull-request-simple'), {
+      ...pullFields(pull, 'label'),
+      url: `${url}/repos/${baseName}/pulls/${pull.number}`,
+      html_url: `${url}/${baseName}/pull/${pull.number}`,
     });
   };
 
@@ -546,36 +559,10 @@ export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise
       case 'pulls/get': {
         const pull = state.pulls.get(Number(params.pull_number));
         if (!pull) return notFound();
-        const baseName = `${state.owner}/${state.repo}`;
         return {
           status: 200,
           json: deepMerge(sampleOf('pull-request'), {
-            number: pull.number,
-            state: pull.state ?? 'open',
-            title: `Invented change ${pull.number}`,
-            labels: pull.labels.map((name, index) => ({
-              id: index + 1,
-              node_id: `LA_${index}`,
-              url: `${url}/labels/${index}`,
-              name,
-              description: null,
-              color: 'ededed',
-              default: false,
-            })),
-            base: {
-              sha: pull.baseSha,
-              ref: pull.baseRef,
-              label: `${state.owner}:${pull.baseRef}`,
-              repo: repoObject(baseName),
-              user: userObject({ login: state.owner, type: 'User', id: 7 }),
-            },
-            head: {
-              sha: pull.headSha,
-              ref: pull.headRef,
-              label: `${pull.headRepo.split('/')[0]}:${pull.headRef}`,
-              repo: repoObject(pull.headRepo),
-              user: userObject({ login: pull.headRepo.split('/')[0] ?? '', type: 'User', id: 8 }),
-            },
+            ...pullFields(pull, null),
             changed_files: pull.files.length,
           }),
         };

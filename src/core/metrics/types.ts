@@ -101,6 +101,21 @@ export interface Metrics {
   layerKinds?: LayerKindMetrics[] | null;
 }
 
+/**
+ * The figures of serving across devices (docs/metrics.md): the device count and the per-device
+ * shares. With one device each equals its single-device figure (`per-device.ts`), so a report
+ * may leave them out there. The last of `SCALAR_METRICS`.
+ */
+export const PER_DEVICE_METRICS = [
+  'devices',
+  'kvHeadsPerDevice',
+  'weightBytesPerDevice',
+  'cachePerTokenBytesPerDevice',
+  'memoryBytesPerDevice',
+] as const satisfies readonly (keyof Metrics)[];
+
+export type PerDeviceMetric = (typeof PER_DEVICE_METRICS)[number];
+
 /** Scalar metric names (everything but `precision` and `alibiSlopes`), in report order. */
 export const SCALAR_METRICS = [
   'declaredSpan',
@@ -134,11 +149,7 @@ export const SCALAR_METRICS = [
   'fitSequences',
   'flopsPerToken',
   'tokenBudget',
-  'devices',
-  'kvHeadsPerDevice',
-  'weightBytesPerDevice',
-  'cachePerTokenBytesPerDevice',
-  'memoryBytesPerDevice',
+  ...PER_DEVICE_METRICS,
 ] as const satisfies readonly (keyof Metrics)[];
 
 export type ScalarMetric = (typeof SCALAR_METRICS)[number];

@@ -341,7 +341,8 @@ function semanticProblems(
   return problems;
 }
 
-const SERVING_FIELDS: ReadonlyArray<[keyof PolicyServingBlock, keyof ServingPatch]> = [
+/** The policy's `serving` keys as written (kebab-case), each with the serving-patch field it sets. */
+export const SERVING_FIELDS: ReadonlyArray<[keyof PolicyServingBlock, keyof ServingPatch]> = [
   ['span', 'span'],
   ['sequences', 'sequences'],
   ['device-memory-gib', 'deviceGiB'],

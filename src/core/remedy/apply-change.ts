@@ -36,7 +36,8 @@ export type ChangeKey = (typeof CHANGE_KEYS)[number];
 /** Thrown for a change no remedy can produce: an unknown field or a value of the wrong kind. */
 export class ChangeError extends Error {}
 
-function isKey(key: string): key is ChangeKey {
+/** Whether `key` is a field path a remedy may change. */
+export function isChangeKey(key: string): key is ChangeKey {
   return (CHANGE_KEYS as readonly string[]).includes(key);
 }
 
@@ -95,7 +96,7 @@ export function applyChange(spec: ModelSpec, change: Change): ModelSpec {
     return code.scaling;
   };
   for (const [key, value] of Object.entries(change)) {
-    if (!isKey(key))
+    if (!isChangeKey(key))
       throw new ChangeError(
         `change ${key}: not a field a remedy changes (${CHANGE_KEYS.join(', ')})`,
       );

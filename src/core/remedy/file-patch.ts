@@ -6,7 +6,9 @@
  * so an edit lands on the key the file already has, with the spelling it already uses.
  */
 import type { Dialect, LocationMap, ModelSpec } from '../model.js';
-import { changeEntries, type ChangeKey } from './apply-change.js';
+import { changeEntries, isChangeKey, type ChangeKey } from './apply-change.js';
+import { SERVING_FIELDS } from '../policy/parse.js';
+import { SERVING_SPEC_PATH } from '../serving-patch.js';
 import type { Change, ChangeValue } from '../report/types.js';
 
 /** One key to set: its dotted path in the file (as the reader names it), the value, and the line it is on now. */
@@ -52,30 +54,23 @@ const OWN_KEYS: Partial<Record<ChangeKey, string>> = {
   'quantization.groupSize': 'dtypes.weight-group-size',
 };
 
-/** Policy `serving` keys, kebab-case as the policy file spells them. */
-const POLICY_SERVING_KEYS: Partial<Record<ChangeKey, string>> = {
-  'serving.span': 'span',
-  'serving.sequences': 'sequences',
-  'dtypes.cache': 'cache',
-  'dtypes.positions': 'positions',
-  'serving.tensorParallel': 'tensor-parallel',
-  'serving.pipelineParallel': 'pipeline-parallel',
-  'dtypes.weights': 'weights',
-  'quantization.groupSize': 'weight-group-size',
-};
+/**
+ * Policy `serving` keys, kebab-case as the policy file spells them, for each field a remedy may
+ * change that the policy's serving block can set.
+ */
+const POLICY_SERVING_KEYS: ReadonlyMap<ChangeKey, string> = new Map(
+  SERVING_FIELDS.flatMap(([written, field]): [ChangeKey, string][] => {
+    const key = SERVING_SPEC_PATH[field];
+    return isChangeKey(key) ? [[key, written]] : [];
+  }),
+);
 
-/** Fields a checkpoint config cannot state: they are serving settings, set in the policy. */
-const SERVING_ONLY = new Set<ChangeKey>([
-  'serving.span',
-  'serving.sequences',
-  'dtypes.cache',
-  'dtypes.positions',
-  'serving.tensorParallel',
-  'serving.pipelineParallel',
-  // A quantized checkpoint is another checkpoint: for this one, the policy states the format it is served in.
-  'dtypes.weights',
-  'quantization.groupSize',
-]);
+/**
+ * Fields a checkpoint config cannot state: they are serving settings, set in the policy. A
+ * quantized checkpoint is another checkpoint: for this one, the policy states the format it is
+ * served in.
+ */
+export const SERVING_ONLY: ReadonlySet<ChangeKey> = new Set(POLICY_SERVING_KEYS.keys());
 
 /** A JSON value as published configs write it: factors and bases as floats (`4.0`), spans and counts as integers. */
 export function jsonValue(field: ChangeKey, value: ChangeValue): string {
@@ -197,7 +192,7 @@ export function filePatches(
       if (loc?.key) policyWhere = loc.key.replace(/ serving$/, '');
       policy.push({
         field,
-        key: `serving.${POLICY_SERVING_KEYS[field] ?? field}`,
+        key: `serving.${POLICY_SERVING_KEYS.get(field) ?? field}`,
         value,
         line: null,
       });

@@ -1,6 +1,6 @@
 import { markdownTable } from 'markdown-table';
 import { METRIC_PATHS, metricValue as metricOf } from '../metrics/metric-path.js';
-import type { MetricPath } from '../metrics/types.js';
+import { PER_DEVICE_METRICS, type MetricPath } from '../metrics/types.js';
 import type { LocationMap, ModelSpec } from '../model.js';
 import { filePatches, type FilePatch } from '../remedy/file-patch.js';
 import { needsText, remedyNeeds } from '../remedy/needs.js';
@@ -111,13 +111,7 @@ function shownDeltas(file: FileDecision): MetricDelta[] {
 const MAX_ALTERNATIVES = 2;
 
 /** Per-device metrics: on one device each equals its single-device figure, so they are not shown twice. */
-const PER_DEVICE = new Set<string>([
-  'devices',
-  'kvHeadsPerDevice',
-  'weightBytesPerDevice',
-  'cachePerTokenBytesPerDevice',
-  'memoryBytesPerDevice',
-]);
+const PER_DEVICE = new Set<string>(PER_DEVICE_METRICS);
 
 /** Whether base and head each run on one device (a missing version counts as one). */
 function oneDevice(file: FileDecision): boolean {
