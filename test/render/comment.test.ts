@@ -125,6 +125,17 @@ describe('renderComment(report): the per-device metrics (PER_DEVICE_METRICS)', (
       expect(two, metric).toContain(`\`${metric}\``);
     }
   });
+
+  it('mark the memory per device with the same caution as the memory (weights and cache only)', () => {
+    const rowOf = (metric: string) =>
+      commentAt(2)
+        .split('\n')
+        .find((line) => line.startsWith(`|\`${metric}\`|`));
+    for (const metric of ['memoryBytes', 'memoryBytesPerDevice']) {
+      expect(rowOf(metric), metric).toBeDefined();
+      expect(rowOf(metric), metric).toContain(' †');
+    }
+  });
 });
 
 describe('renderComment(report) with hundreds of blocking files', () => {

@@ -45,6 +45,7 @@ export const MEMORY_CAUTION =
 /** Memory figures the caution goes beside. */
 export const MEMORY_METRICS: ReadonlySet<string> = new Set([
   'memoryBytes',
+  'memoryBytesPerDevice',
   'fitSequences',
   'cacheBytesAtSpan',
 ]);
