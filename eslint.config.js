@@ -20,7 +20,7 @@ const nodeGlobals = {
 export default tseslint.config(
   {
     // Generated, bundled or test input (fixtures are hostile files on purpose).
-    ignores: ['dist/', 'build/', 'coverage/', 'fixtures/', 'node_modules/'],
+    ignores: ['dist/', 'build/', 'coverage/', 'fixtures/', 'node_modules/', '**/*.generated.ts'],
   },
   js.configs.recommended,
   tseslint.configs.recommendedTypeChecked,

@@ -8,6 +8,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { renderActionTables } from './action-tables.mjs';
 import { buildInputs } from './build-inputs.mjs';
+import { writeValidators } from './generate-validators.mjs';
 
 const require = createRequire(import.meta.url);
 const ncc = require('@vercel/ncc');
@@ -44,6 +45,9 @@ async function minifyChunk(name, source) {
     await rm(dir, { recursive: true, force: true });
   }
 }
+
+// The schema validators, compiled from schema/*.schema.json ahead of time, before the bundles take them in.
+for (const out of writeValidators(root)) console.log(`wrote ${out}`);
 
 await rm(dist, { recursive: true, force: true });
 await mkdir(dist, { recursive: true });

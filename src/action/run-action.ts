@@ -20,7 +20,6 @@ import {
   type ReviewApi,
 } from '../adapters/github-rest.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
-import { runPublish } from './publish.js';
 import { publishComment } from './report-comment.js';
 import { publishSuggestions } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
@@ -176,6 +175,9 @@ export async function runAction(deps: ActionDeps): Promise<void> {
         })
       : null;
   if (settings.publishReport !== null) {
+    // Only publish mode reads a JSON report back, and with it ajv and the report's schema:
+    // loaded when needed, so a judging run does not load them at start-up.
+    const { runPublish } = await import('./publish.js');
     await runPublish(
       { env, out, readJson: deps.readJson, readFile: deps.readFile, api: connect() },
       { ...settings, publishReport: settings.publishReport },

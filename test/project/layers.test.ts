@@ -41,7 +41,6 @@ const CORE_LAYERS: readonly { name: string; modules: readonly string[] }[] = [
       'changes.ts',
       'home.ts',
       'version.ts',
-      'schema-options.ts',
       'rules/catalog.ts',
       'element-at.ts',
       'null-record.ts',

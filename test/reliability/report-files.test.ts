@@ -68,3 +68,24 @@ describe('report files and symbolic links in the checkout', () => {
     );
   });
 });
+
+describe('a report given in parts', () => {
+  it('is written byte for byte as Node encodes the joined text as UTF-8 (TextEncoder)', async () => {
+    const { workspace } = setup();
+    // Parts past Latin-1 (−, ×, an astral character as a surrogate pair), many small parts that
+    // cross the 1 MiB write size, and single parts larger than it.
+    const parts = [
+      '{"a": "−×\u{1F600}"',
+      ...Array.from({ length: 40_000 }, (_, i) => `,\n  "k${i}": "${'é'.repeat(i % 50)}−"`),
+      `, "big": "${'\u{1F600}'.repeat(300_000)}"`,
+      `, "ascii": "${'x'.repeat(1_500_000)}"`,
+      '',
+      '}\n',
+    ];
+    await writeReportFile('report.json', parts, workspace, workspace);
+    const written = readFileSync(join(workspace, 'report.json'));
+    const expected = new TextEncoder().encode(parts.join(''));
+    expect(written.length).toBe(expected.length);
+    expect(Buffer.compare(written, Buffer.from(expected))).toBe(0);
+  });
+});

@@ -3,7 +3,6 @@
  * keys). `schema/model.schema.json` is its definition; the shipped schema is checked with ajv and
  * each schema error becomes a finding naming the key and its line.
  */
-import { Ajv } from 'ajv';
 import type { ErrorObject, ValidateFunction } from 'ajv';
 import modelSchema from '../../../schema/model.schema.json' with { type: 'json' };
 import type {
@@ -36,7 +35,7 @@ import {
   DEFAULT_YARN_BETA,
 } from './spec-defaults.js';
 import { suggestKey } from './suggest.js';
-import { SCHEMA_COMPILE_OPTIONS } from '../schema-options.js';
+import { validate } from './model-validator.generated.js';
 
 /** The value of `format` that marks the own dialect. */
 export const MODEL_FORMAT = 'context-reach-model/1';
@@ -46,17 +45,11 @@ export const MODEL_FORMAT_FAMILY = 'context-reach-model/';
 /** The model description's JSON Schema, as shipped in `schema/model.schema.json`. */
 export const MODEL_SCHEMA: Readonly<Record<string, unknown>> = modelSchema;
 
-let compiled: ValidateFunction | null = null;
+/** The schema's validator, compiled from `schema/model.schema.json` at build time (scripts/generate-validators.mjs). */
+const compiled = validate as ValidateFunction;
 
 /** Schema errors for a parsed own-dialect document (empty when it conforms); errors carry `data` and `parentSchema`. */
 export function validateModelValue(value: unknown): ErrorObject[] {
-  if (compiled === null)
-    compiled = new Ajv({
-      allErrors: true,
-      verbose: true,
-      strict: true,
-      ...SCHEMA_COMPILE_OPTIONS,
-    }).compile(modelSchema);
   return compiled(value) ? [] : [...(compiled.errors ?? [])];
 }
 
