@@ -31,7 +31,7 @@ export const MAX_TOKENS = 8 * MAX_ENTRIES;
  * Depth of flow brackets at which the lexer pass refuses a text without parsing it (default:
  * `4 × MAX_NESTING`); below it, the syntax tree decides, counting block levels as well.
  */
-const FLOW_DEPTH_CUTOFF = 4 * MAX_NESTING;
+export const FLOW_DEPTH_CUTOFF = 4 * MAX_NESTING;
 
 /** The lexer's zero-width markers (the `yaml` package's CST: DOCUMENT, SCALAR, FLOW_END). */
 const DOCUMENT_MARK = '\x02';
@@ -83,10 +83,15 @@ export interface ComposedYaml {
  * Composes the YAML document in `text`. Throws `YamlLimitError` before composing anything when
  * the text holds more than `MAX_TOKENS` lexical tokens, a second document, nesting deeper than
  * `MAX_NESTING` or more than `MAX_ENTRIES` entries; syntax errors are left in `doc.errors`.
+ * `maxTokens`: a lower bound on tokens than `MAX_TOKENS`, for readers that allow less.
  * `uniqueKeys`: whether the composer itself refuses duplicate keys (it compares every key of a
  * mapping with every other, so readers of large files check them in one pass instead).
  */
-export function composeYaml(text: string, options: { uniqueKeys: boolean }): ComposedYaml {
+export function composeYaml(
+  text: string,
+  options: { uniqueKeys: boolean; maxTokens?: number },
+): ComposedYaml {
+  const maxTokens = options.maxTokens ?? MAX_TOKENS;
   // One pass of the lexer alone, stopped at MAX_TOKENS, bounds what the parser builds; its
   // lexemes are then handed to the parser, so the text is lexed once.
   // Flow collections are counted too: a chain of brackets far deeper than MAX_NESTING costs the
@@ -97,7 +102,7 @@ export function composeYaml(text: string, options: { uniqueKeys: boolean }): Com
   let offset = 0;
   let tooDeepAt = -1;
   for (const lexeme of new Lexer().lex(text)) {
-    if (lexemes.length >= MAX_TOKENS) throw new YamlLimitError('tokens', null);
+    if (lexemes.length >= maxTokens) throw new YamlLimitError('tokens', null);
     lexemes.push(lexeme);
     if (lexeme === '{' || lexeme === '[') {
       flowDepth++;
