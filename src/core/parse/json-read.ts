@@ -90,7 +90,7 @@ export function readJsonSource(text: string, file: string): SourceDocument | nul
     }
     throw new ReadError(
       file,
-      lineIndex(text)(entriesPastLimit(text)),
+      lineIndex(text)(entriesPastLimit(text, measured.entries)),
       `holds more than ${MAX_ENTRIES} keys and list items; a model file holds a few hundred (label maps a few ten thousand)`,
     );
   }
@@ -117,6 +117,8 @@ interface Measured {
   lastTooDeep: number;
   /** Deepest level reached. */
   deepest: number;
+  /** Entries, as the YAML syntax tree counts them. */
+  entries: number;
 }
 
 /**
@@ -148,7 +150,7 @@ function measure(text: string): Measured {
     else if (c === COMMA) entries++;
   }
   const bounds = deepest > MAX_NESTING ? 'too deep' : entries > MAX_ENTRIES ? 'too many' : 'within';
-  return { bounds, firstTooDeep, lastTooDeep, deepest };
+  return { bounds, firstTooDeep, lastTooDeep, deepest, entries };
 }
 
 /**
@@ -164,13 +166,18 @@ function tooDeepAt(measured: Measured): number {
  * Offset of the collection at which the YAML pipeline's count of entries passes `MAX_ENTRIES`:
  * it visits a collection, then its child collections last to first, each with all it holds,
  * which is the reverse of the order in which collections close. Run only on a file past the
- * bound, so the memory it takes (two numbers per collection) is spent on refusing it.
+ * bound; `total` is its count of entries (from `measure`).
  */
-function entriesPastLimit(text: string): number {
-  const closedAt: number[] = [];
-  const closedItems: number[] = [];
+function entriesPastLimit(text: string, total: number): number {
+  // Counted from the last collection to close back, the count passes the bound at the last
+  // collection whose entries closed before it number fewer than `total - MAX_ENTRIES`: one
+  // forward pass finds it, holding only the open collections (before: every closed one, 1 s
+  // for 2 million).
+  const before = total - MAX_ENTRIES;
   const openAt: number[] = [];
   const openItems: number[] = [];
+  let closedEntries = 0;
+  let found = 0;
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
     if (c === QUOTE) i = stringEnd(text, i) - 1;
@@ -181,16 +188,13 @@ function entriesPastLimit(text: string): number {
     } else if (c === COMMA) {
       if (openItems.length > 0) openItems[openItems.length - 1]!++;
     } else if ((c === CLOSE_OBJECT || c === CLOSE_LIST) && openAt.length > 0) {
-      closedAt.push(openAt.pop()!);
-      closedItems.push(openItems.pop()!);
+      const at = openAt.pop()!;
+      if (closedEntries >= before) break;
+      found = at;
+      closedEntries += openItems.pop()!;
     }
   }
-  let entries = 0;
-  for (let k = closedAt.length - 1; k >= 0; k--) {
-    entries += closedItems[k]!;
-    if (entries > MAX_ENTRIES) return closedAt[k]!;
-  }
-  return 0;
+  return found;
 }
 
 /** The second pass: values and notes, keys checked as they come. */

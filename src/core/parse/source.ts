@@ -48,10 +48,11 @@ export const MAX_FULL_YAML_LENGTH = 1024 * 1024;
  */
 export const MAX_FULL_YAML_LINES = 100_000;
 /**
- * Lexical tokens of such a file (default: `50000`, an eighth of `MAX_TOKENS`): lexing, parsing
- * and composing cost about 6 µs a token (200,000 tokens of a flow mapping: 1.0–1.3 s).
+ * Lexical tokens of such a file (default: `25000`, a sixteenth of `MAX_TOKENS`; a model file
+ * holds a few hundred): lexing, parsing and composing cost 5–15 µs a token (200,000 tokens of a
+ * flow mapping: 1.0–1.3 s; 48,000 of JSON with carriage returns, 0.8–1.1 s under a load of 13).
  */
-export const MAX_FULL_YAML_TOKENS = 50_000;
+export const MAX_FULL_YAML_TOKENS = 25_000;
 
 /** Why a file is left to the YAML pipeline, for its budget's messages. */
 function fullYamlForm(json: boolean): string {
