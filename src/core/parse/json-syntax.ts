@@ -62,10 +62,13 @@ const isJsonSpace = (c: number): boolean => c === 0x20 || c === 0x09 || c === 0x
  */
 export function jsonSyntaxErrorOffset(text: string): number {
   const n = text.length;
-  const stack: number[] = [];
+  // The open brackets, as bytes: a plain array of millions of numbers cost the collector more
+  // than the scan (2 million nested lists: 0.46 s).
+  let stack = new Uint8Array(64);
+  let depth = 0;
   let i = 0;
   let expect: 'value' | 'key' | 'colon' | 'next' | 'done' = 'value';
-  const after = () => (stack.length === 0 ? 'done' : 'next');
+  const after = () => (depth === 0 ? 'done' : 'next');
   /** Index after the string opening at `i`, or -(offset + 1) of the fault. */
   const stringEnd = (start: number): number => {
     for (let j = start + 1; j < n; j += 1) {
@@ -94,7 +97,7 @@ export function jsonSyntaxErrorOffset(text: string): number {
       i += 1;
       expect = 'value';
     } else if (expect === 'next') {
-      const top = stack[stack.length - 1];
+      const top = depth > 0 ? stack[depth - 1] : undefined;
       if (c === 0x2c) {
         i += 1;
         expect = top === OPEN_OBJECT ? 'key' : 'value';
@@ -103,7 +106,7 @@ export function jsonSyntaxErrorOffset(text: string): number {
         (c === CLOSE_LIST && top === OPEN_LIST)
       ) {
         i += 1;
-        stack.pop();
+        depth -= 1;
         expect = after();
       } else return i;
     } else if (expect === 'key' || c === 0x22) {
@@ -113,12 +116,17 @@ export function jsonSyntaxErrorOffset(text: string): number {
       i = end;
       expect = expect === 'key' ? 'colon' : after();
     } else if (c === OPEN_OBJECT || c === OPEN_LIST) {
-      stack.push(c);
+      if (depth === stack.length) {
+        const grown = new Uint8Array(stack.length * 2);
+        grown.set(stack);
+        stack = grown;
+      }
+      stack[depth++] = c;
       i += 1;
       while (i < n && isJsonSpace(text.charCodeAt(i))) i += 1;
       if (text.charCodeAt(i) === (c === OPEN_OBJECT ? CLOSE_OBJECT : CLOSE_LIST)) {
         i += 1;
-        stack.pop();
+        depth -= 1;
         expect = after();
       } else expect = c === OPEN_OBJECT ? 'key' : 'value';
     } else {
