@@ -146,7 +146,7 @@ export interface GitHubClient {
     base: string,
     head: string,
   ): Promise<ChangedFile[]>;
-  /** A commit's recursive tree (one request; GitHub cuts it past 100,000 entries or 7 MB). */
+  /** A commit's recursive tree (one request per commit for the client's life; GitHub cuts it past 100,000 entries or 7 MB). */
   readTree?(owner: string, repo: string, ref: string): Promise<GitTree>;
   /**
    * One GraphQL query with its variables; the answer as sent, partial errors included (they are
@@ -571,7 +571,23 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     });
 
   type TreeItem = { path?: string; mode?: string; type?: string; sha?: string; size?: number };
-  const readTree = (owner: string, repo: string, commit: string): Promise<GitTree> =>
+  /**
+   * Each commit's tree is asked for once per client: the cut file list is completed from the two
+   * commits' trees (`listChangesBetween`), and the content source looks up the same commits'
+   * paths in them (`graphql-contents.ts`). A failed read is forgotten, so a later call asks again.
+   */
+  const trees = new Map<string, Promise<GitTree>>();
+  const readTree = (owner: string, repo: string, commit: string): Promise<GitTree> => {
+    const key = `${owner}/${repo}\u0000${commit}`;
+    let tree = trees.get(key);
+    if (tree === undefined) {
+      tree = askTree(owner, repo, commit);
+      trees.set(key, tree);
+      tree.catch(() => trees.delete(key));
+    }
+    return tree;
+  };
+  const askTree = (owner: string, repo: string, commit: string): Promise<GitTree> =>
     call(`read the tree of ${commit}`, async () => {
       const { data } = await octokit.rest.git.getTree({
         owner,

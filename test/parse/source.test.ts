@@ -3,6 +3,10 @@ import { ReadError } from '../../src/core/parse/errors.js';
 import {
   FORBIDDEN_KEYS,
   MAX_ALIASES,
+  MAX_ALIAS_VALUES,
+  MAX_FULL_YAML_LENGTH,
+  MAX_FULL_YAML_LINES,
+  MAX_FULL_YAML_TOKENS,
   MAX_NESTING,
   MAX_TEXT_LENGTH,
   decodeText,
@@ -290,8 +294,9 @@ describe('parseSource(text, file) against untrusted text', () => {
     const big = `[${Array(2_000).fill('1').join(', ')}]`;
     const text = `a: &a ${big}\nb: [${Array(60).fill('*a').join(', ')}]\n`;
     expect(readError(() => parseSource(text, 'wide.yaml')).reason).toContain(
-      'aliases expand to more than 100000 values',
+      `aliases expand to more than ${MAX_ALIAS_VALUES} values`,
     );
+    expect(MAX_ALIAS_VALUES).toBeLessThan(120_000);
   });
 
   test('parseSource refuses an alias inside the value it names', () => {
@@ -409,5 +414,54 @@ describe('decodeText(bytes, path)', () => {
       0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d,
     ]);
     expect(() => decodeText(png, 'image.json')).toThrow(ReadError);
+  });
+});
+
+describe('the budget of files the fast readers leave to the YAML pipeline', () => {
+  // The pipeline costs 5–15 µs a token and folds block scalars line by line, so what the fast
+  // readers do not take is held to MAX_FULL_YAML_LENGTH, _LINES and _TOKENS, each named.
+  test('past the length: refused from it, naming the form that took the file there', () => {
+    const flow = `{a: "${'x'.repeat(MAX_FULL_YAML_LENGTH)}"}`;
+    const error = readError(() => parseSource(flow, 'm/model.reach.yaml'));
+    expect(error.line).toBeNull();
+    expect(error.reason).toContain(
+      `is ${flow.length} characters long and is YAML written outside plain block style`,
+    );
+    // The same text as plain block YAML is for the fast reader, which reads up to 4 MiB.
+    expect(
+      parseSource(`a: ${'x'.repeat(MAX_FULL_YAML_LENGTH)}\n`, 'm/model.reach.yaml').value.a,
+    ).toHaveLength(MAX_FULL_YAML_LENGTH);
+  });
+
+  test('past the lines: refused at the first line past them', () => {
+    const text = `a: |\n${'  x\n'.repeat(MAX_FULL_YAML_LINES)}`;
+    const error = readError(() => parseSource(text, 'm/model.reach.yaml'));
+    expect(error.line).toBe(MAX_FULL_YAML_LINES + 1);
+    expect(error.reason).toContain(`has more than ${MAX_FULL_YAML_LINES} lines`);
+    const fits = `a: |\n${'  x\n'.repeat(MAX_FULL_YAML_LINES - 1)}`;
+    expect(parseSource(fits, 'm/model.reach.yaml').value.a).toBe(
+      'x\n'.repeat(MAX_FULL_YAML_LINES - 1),
+    );
+  });
+
+  test('past the tokens: refused by the lexer count; JSON left to the pipeline says why it was', () => {
+    const entries = (n: number) => Array.from({ length: n }, (_, i) => `k${i}: 1`).join(', ');
+    expect(
+      readError(() => parseSource(`{${entries(4_000)}}`, 'm/model.reach.yaml')).reason,
+    ).toContain(`holds more than ${MAX_FULL_YAML_TOKENS} syntax tokens`);
+    expect(
+      Object.keys(parseSource(`{${entries(2_000)}}`, 'm/model.reach.yaml').value),
+    ).toHaveLength(2_000);
+    const json = `{\r${Array.from({ length: 4_000 }, (_, i) => `"k${i}": 1`).join(',\r')}}`;
+    expect(readError(() => parseSource(json, 'm/config.json')).reason).toContain(
+      'and is JSON the JSON reader leaves to the YAML reader (a top level that is not an object, or a carriage return without a line feed)',
+    );
+  });
+
+  test('JSON past the nesting bound with a syntax error: the error, at its line, without parsing', () => {
+    const text = `{"a":\n${'['.repeat(300)}\n${']'.repeat(299)}}`;
+    const error = readError(() => parseSource(text, 'm/config.json'));
+    expect(error.line).toBe(3);
+    expect(error.reason).toBe('is not valid JSON: unexpected character "}"');
   });
 });

@@ -191,6 +191,55 @@ describe('a very large pull request through the API', () => {
   });
 });
 
+describe("a file list past GitHub's cap, completed from the trees and then read", () => {
+  it("asks for each commit's tree once: the list and the contents share them (before: 4 tree requests)", async () => {
+    // More changed configs than the GraphQL lookups take (2 × 100 paths), so the content source
+    // looks the paths up in the same two trees the changed files were listed from.
+    const base = new Map<string, FakeEntry>();
+    const head = new Map<string, FakeEntry>();
+    for (let i = 0; i < 250; i += 1) {
+      const path = `models/m${i}/config.json`;
+      base.set(path, { type: 'file', bytes: encode(checkpointConfig({ vocab_size: 32000 + i })) });
+      head.set(path, {
+        type: 'file',
+        bytes: encode(checkpointConfig({ vocab_size: 32000 + i, max_position_embeddings: 8192 })),
+      });
+    }
+    fake.state.trees.set(BASE, base);
+    fake.state.trees.set(HEAD, head);
+    const api = unspacedClient();
+    const changes = await api.listChangesBetween(OWNER, REPO, BASE, HEAD);
+    expect(changes).toHaveLength(250);
+    expect(fake.calls('git/get-tree')).toHaveLength(2);
+    const requests = changes.flatMap(({ path }) => [
+      { ref: HEAD, path },
+      { ref: BASE, path },
+    ]);
+    const answers = await source(api).readMany(requests);
+    answers.forEach((answer, i) => {
+      const { ref, path } = requests[i]!;
+      const want = (fake.state.trees.get(ref)!.get(path) as { bytes: Uint8Array }).bytes;
+      expect(Buffer.from(answer as Uint8Array).equals(Buffer.from(want)), path).toBe(true);
+    });
+    const trees = fake.calls('git/get-tree').map((call) => call.path);
+    expect(trees.sort()).toEqual(
+      [BASE, HEAD].map((sha) => `/repos/${OWNER}/${REPO}/git/trees/${sha}`),
+    );
+    expect(fake.calls('repos/get-content')).toHaveLength(0);
+  });
+
+  it('a tree read that fails is asked for again, not kept as the answer', async () => {
+    fake.state.trees.set(BASE, tree({ 'a/config.json': '{}' }));
+    fake.state.trees.set(HEAD, tree({ 'a/config.json': '{"x": 1}' }));
+    const api = client();
+    fake.fail('git/get-tree', serverError(404));
+    await expect(api.readTree!(OWNER, REPO, HEAD)).rejects.toThrow();
+    const again = await api.readTree!(OWNER, REPO, HEAD);
+    expect([...again.entries.keys()].sort()).toEqual(['a/config.json']);
+    expect(fake.calls('git/get-tree')).toHaveLength(2);
+  });
+});
+
 describe('the texts are the committed bytes, whatever GraphQL does with them', () => {
   const big = encode(`{"pad": "${'x'.repeat(FAKE_BLOB_TEXT_LIMIT)}"}\n`);
   const entries: Record<string, string | Uint8Array | FakeEntry> = {

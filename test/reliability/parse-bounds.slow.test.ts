@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { inspectModel } from '../../src/core/inspect.js';
-import { MAX_ENTRIES, MAX_TOKENS } from '../../src/core/parse/source.js';
+import {
+  MAX_ALIAS_VALUES,
+  MAX_ENTRIES,
+  MAX_FULL_YAML_LENGTH,
+  MAX_FULL_YAML_LINES,
+  MAX_FULL_YAML_TOKENS,
+  MAX_TOKENS,
+  parseSource,
+} from '../../src/core/parse/source.js';
 import { isModelConfig, parsePolicy } from '../../src/core/policy/index.js';
 
 // Round two of parse and match costs (issue 13, points 4 and 12): small files that took minutes.
@@ -76,7 +84,7 @@ describe('files with many keys or documents (point 4)', () => {
       `1,000,000 YAML documents (${(text.length / MIB).toFixed(1)} MiB): ${ms.toFixed(0)} ms CPU: ${unreadable(value)}`,
     );
     expect(unreadable(value)).toMatch(
-      /line 2: holds more than one YAML document|holds more than \d+ syntax tokens/,
+      /line 2: holds more than one YAML document|holds more than \d+ syntax tokens|is \d+ characters long and is YAML written outside plain block style/,
     );
     expect(ms).toBeLessThan(500);
   });
@@ -111,7 +119,9 @@ describe('files with many keys or documents (point 4)', () => {
     console.log(
       `${(text.length / MIB).toFixed(2)} MiB ${path}: ${ms.toFixed(0)} ms CPU, RSS ${(rss / MIB).toFixed(0)} MiB (+${((rss - rssBefore) / MIB).toFixed(0)}): ${unreadable(value)}`,
     );
-    expect(unreadable(value)).toMatch(/more than \d+ (syntax tokens|keys and list items)/);
+    expect(unreadable(value)).toMatch(
+      /more than \d+ (syntax tokens|keys and list items)|is \d+ characters long and is YAML written outside plain block style/,
+    );
     // Measured 0.15–0.3 s of CPU on a busy 2-core machine (0.45–0.58 s before the fast readers).
     expect(ms).toBeLessThan(1000);
     expect(rss).toBeLessThan(1024 * MIB);
@@ -149,6 +159,140 @@ describe('files with many keys or documents (point 4)', () => {
     const { ms, value } = read(`${JSON.stringify(config, null, 2)}\n`, 'models/vit/config.json');
     console.log(`two label maps of 21,843 entries: ${ms.toFixed(0)} ms CPU`);
     expect(unreadable(value)).not.toMatch(/more than \d+ (syntax tokens|keys and list items)/);
+  });
+});
+
+describe("each reader's worst case just under 4 MiB (point 4, round three)", () => {
+  // What an attacker would choose for each path through the readers: the fast JSON reader, the
+  // fast block-YAML reader, and the YAML pipeline for what they leave to it, which costs far
+  // more per byte and is held to `MAX_FULL_YAML_*`. Measured with `parseSource` here and with
+  // `node dist/cli.js inspect` (docs/reliability.md, point 4); the numbers before are from the
+  // same files on the code before this change, at a load of 5–10 on 2 cores.
+  const LIMIT = 4 * MIB - 64;
+  const repeatTo = (unit: string, prefix = '', suffix = '') =>
+    prefix +
+    unit.repeat(Math.floor((LIMIT - prefix.length - suffix.length) / unit.length)) +
+    suffix;
+  const cases: [string, string, () => string, RegExp][] = [
+    [
+      'JSON of 2 million nested lists (before: 2.2 s, 275 MiB: JSON.parse built them)',
+      'm/config.json',
+      () => `{"a":${'['.repeat(2_000_000)}${']'.repeat(2_000_000)}}`,
+      /line 1: nesting is deeper than 256 levels/,
+    ],
+    [
+      'JSON of lists 255 deep, over the entries bound (before: 1.0–1.25 s)',
+      'm/config.json',
+      () => repeatTo(`"k":${'['.repeat(255)}${']'.repeat(255)},`, '{', '"z":0}'),
+      /line 1: holds more than 50000 keys and list items/,
+    ],
+    [
+      'JSON with a carriage return without a line feed, 4 MiB (before: 1.9 s, 248 MiB through YAML)',
+      'm/config.json',
+      () =>
+        `{\r${Array.from({ length: 49_999 }, (_, i) => `"k${i}":"${'v'.repeat(70)}"`).join(',')}}`,
+      /is \d+ characters long and is JSON the JSON reader leaves to the YAML reader/,
+    ],
+    [
+      'YAML flow mapping of 49,999 long entries (before: 1.5 s; as JSON-style YAML 2.6 s, 243 MiB)',
+      'm/model.reach.yaml',
+      () =>
+        `{${Array.from({ length: 49_999 }, (_, i) => `"k${i}": "${'v'.repeat(68)}"`).join(', ')}}`,
+      /is \d+ characters long and is YAML written outside plain block style/,
+    ],
+    [
+      'YAML folded scalar of 4 million blank lines (before: 6.7 s, 561 MiB)',
+      'm/model.reach.yaml',
+      () => `a: >\n  x\n${'\n'.repeat(LIMIT - 32)}  y\n`,
+      /is \d+ characters long and is YAML written outside plain block style/,
+    ],
+    [
+      'YAML literal scalar of a million lines (before: 2.7 s, 304 MiB)',
+      'm/model.reach.yaml',
+      () => repeatTo('  x\n', 'a: |\n'),
+      /is \d+ characters long and is YAML written outside plain block style/,
+    ],
+  ];
+  it.each(cases)('%s: refused in bounded CPU time', (_, path, make, message) => {
+    const text = make();
+    expect(text.length).toBeLessThanOrEqual(4 * MIB);
+    const rssBefore = process.memoryUsage().rss;
+    const { ms, value } = read(text, path);
+    const rss = process.memoryUsage().rss;
+    console.log(
+      `${(text.length / MIB).toFixed(2)} MiB ${path}: ${ms.toFixed(0)} ms CPU, RSS ${(rss / MIB).toFixed(0)} MiB (+${((rss - rssBefore) / MIB).toFixed(0)}): ${unreadable(value)}`,
+    );
+    expect(unreadable(value)).toMatch(message);
+    // Measured 0.03–0.5 s of CPU through `parseSource` at a load of 8–15 on 2 cores.
+    expect(ms).toBeLessThan(1000);
+  });
+
+  it.each([
+    [
+      'a folded scalar of 99,990 blank lines',
+      () => `a: >\n  x\n${'\n'.repeat(MAX_FULL_YAML_LINES - 10)}  y\n`,
+    ],
+    [
+      'a literal scalar of 99,990 lines filling 1 MiB',
+      () => `a: |\n${`  ${'x'.repeat(7)}\n`.repeat(MAX_FULL_YAML_LINES - 10)}`,
+    ],
+    ['a double-quoted scalar of 1 MiB of escapes', () => `a: "${'\\n'.repeat(MIB / 2 - 16)}"\n`],
+    [
+      'a flow mapping just under the token budget',
+      () => `{${Array.from({ length: 3_000 }, (_, i) => `k${i}: ${'v'.repeat(150)}`).join(', ')}}`,
+    ],
+  ])('the YAML pipeline within its budget: %s reads in well under a second', (_, make) => {
+    const text = make();
+    expect(text.length).toBeLessThanOrEqual(MAX_FULL_YAML_LENGTH);
+    const { ms, value } = measured(() => parseSource(text, 'm/model.reach.yaml'));
+    console.log(`within the YAML budget, ${_}: ${ms.toFixed(0)} ms CPU`);
+    expect(value).not.toBeInstanceOf(Error);
+    // Measured 0.18–0.32 s at a load of 13 (1 MiB of block scalar lines, 0.6–2.2 s before the budget).
+    expect(ms).toBeLessThan(1000);
+  });
+
+  it('a flow mapping past the token budget is refused by the lexer count, naming the budget', () => {
+    const text = `{${Array.from({ length: 6_000 }, (_, i) => `k${i}: ${'v'.repeat(150)}`).join(', ')}}`;
+    expect(text.length).toBeLessThanOrEqual(MAX_FULL_YAML_LENGTH);
+    const { ms, value } = read(text, 'm/model.reach.yaml');
+    expect(unreadable(value)).toMatch(
+      `holds more than ${MAX_FULL_YAML_TOKENS} syntax tokens (keys, values and punctuation) and is YAML written outside plain block style`,
+    );
+    expect(ms).toBeLessThan(1000);
+  });
+
+  it('100 aliases of a 990-entry mapping are stopped at the alias values bound (before: 0.7–0.9 s at 100,000)', () => {
+    const text = `a: &a\n${Array.from({ length: 990 }, (_, i) => `  k${i}: ${i}\n`).join('')}${Array.from({ length: 100 }, (_, i) => `y${i}: *a\n`).join('')}`;
+    const { ms, value } = measured(() => parseSource(text, 'm/model.reach.yaml'));
+    expect((value as Error).message).toMatch(
+      `aliases expand to more than ${MAX_ALIAS_VALUES} values`,
+    );
+    expect(ms).toBeLessThan(1000);
+  });
+
+  it.each([
+    [
+      '44,000 unknown keys in the own dialect (before: 13.3 s)',
+      'm/model.reach.yaml',
+      () =>
+        `format: context-reach-model/1\n${Array.from({ length: 44_000 }, (_, i) => `k${i}: 1\n`).join('')}`,
+      /k43999 is not a known key at the top level/,
+    ],
+    [
+      '49,000 unread keys in a checkpoint config (before: 25.3 s)',
+      'm/config.json',
+      () =>
+        `{"model_type":"llama","hidden_size":4096,"num_hidden_layers":2,"num_attention_heads":32,"vocab_size":32000,"max_position_embeddings":4096,${Array.from({ length: 49_000 }, (_, i) => `"k${i}":1`).join(',')}}`,
+      /k48999 is not read/,
+    ],
+  ])('%s: one finding each, without comparing each with every other', (_, path, make, last) => {
+    const { ms, value } = read(make(), path);
+    const findings = (value as { findings: { message: string }[] }).findings;
+    console.log(`${_}: ${ms.toFixed(0)} ms CPU, ${findings.length} findings`);
+    expect(findings.some((f) => last.test(f.message))).toBe(true);
+    expect(findings.length).toBeGreaterThan(44_000);
+    // Measured 0.8–1.2 s at a load of 4–9 (the findings' messages and lines, one by one).
+    expect(ms).toBeLessThan(4000);
   });
 });
 

@@ -151,11 +151,7 @@ export class FieldReader {
    */
   report(rule: RuleId, path: readonly PathSegment[] | null, message: string): void {
     const key = path === null ? null : this.key(path);
-    if (
-      key !== null &&
-      this.findings.some((f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)))
-    )
-      return;
+    if (key !== null && this.covered(key)) return;
     this.findings.push({
       rule,
       severity: RULES[rule].severity,
@@ -167,10 +163,27 @@ export class FieldReader {
 
   /** Whether a finding about `path` (or a key containing it) has been made. */
   reported(path: readonly PathSegment[]): boolean {
-    const key = this.key(path);
-    return this.findings.some(
-      (f) => f.key !== null && (key === f.key || key.startsWith(`${f.key}.`)),
-    );
+    return this.covered(this.key(path));
+  }
+
+  /** Keys of the findings made so far (`findings` up to `synced`), for `covered`. */
+  private readonly findingKeys = new Set<string>();
+  private synced = 0;
+
+  /**
+   * Whether a finding about `key`, or about a key whose dotted form followed by `.` starts
+   * `key`, has been made: one set lookup per dot in `key`, not one comparison per finding
+   * (44,000 unknown keys took 13 s of comparisons). Findings pushed directly count too.
+   */
+  private covered(key: string): boolean {
+    for (; this.synced < this.findings.length; this.synced++) {
+      const made = this.findings[this.synced]!.key;
+      if (made !== null) this.findingKeys.add(made);
+    }
+    if (this.findingKeys.has(key)) return true;
+    for (let dot = key.indexOf('.'); dot !== -1; dot = key.indexOf('.', dot + 1))
+      if (this.findingKeys.has(key.slice(0, dot))) return true;
+    return false;
   }
 
   /** Reports `path` as missing; `what` completes "expected …". Returns NaN for the spec. */

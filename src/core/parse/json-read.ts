@@ -9,8 +9,9 @@
  * generated texts.
  *
  * Returns null where the YAML path reads the text differently or refuses it with a message of
- * its own (a carriage return not followed by a line feed, a top level that is not an object,
- * nesting past `MAX_NESTING`): the caller then takes the YAML path, which says why.
+ * its own (a carriage return not followed by a line feed, a top level that is not an object):
+ * the caller then takes the YAML path, which says why. Nesting past `MAX_NESTING` is refused
+ * here, at the line the YAML path names, without parsing.
  */
 import { ReadError } from './errors.js';
 import {
@@ -24,7 +25,8 @@ import {
   type SourceValue,
 } from './source-document.js';
 import { checkJson, jsonStandIn, jsonSyntaxErrorOffset } from './json-syntax.js';
-import { MAX_ENTRIES, MAX_NESTING } from './yaml.js';
+import { FLOW_DEPTH_CUTOFF, MAX_ENTRIES, MAX_NESTING, YamlLimitError } from './yaml.js';
+import { yamlLimitError } from './yaml-build.js';
 import { nullRecord } from '../null-record.js';
 
 const OPEN_OBJECT = 0x7b;
@@ -60,19 +62,35 @@ function stringEnd(text: string, start: number): number {
  * of tiny entries is refused in one pass), forbidden and duplicate keys, as the YAML path does.
  */
 export function readJsonSource(text: string, file: string): SourceDocument | null {
-  let bounds: Bounds | 'unreadable';
+  let measured: Measured | 'unreadable';
   try {
-    bounds = measure(text);
+    measured = measure(text);
   } catch (error) {
     if (!(error instanceof NotForFastPath)) throw error;
-    bounds = 'unreadable';
+    measured = 'unreadable';
   }
+  const bounds = measured === 'unreadable' ? measured : measured.bounds;
   // A syntax error is named before a bound, as on the YAML path: JSON's own grammar decides
-  // without building anything (`JSON.parse` then words the error).
-  if (bounds === 'too many' && jsonSyntaxErrorOffset(jsonStandIn(text)) === -1) {
+  // without building anything. Past a bound `JSON.parse` is not run at all (it would build every
+  // value first: 2 million nested lists took 2 s and 275 MiB), so the grammar words the error.
+  if (measured !== 'unreadable' && measured.bounds !== 'within') {
+    const fault = jsonSyntaxErrorOffset(jsonStandIn(text));
+    if (fault !== -1) {
+      const what =
+        fault >= text.length
+          ? 'the text ends before the JSON value does'
+          : `unexpected character ${JSON.stringify(text[fault])}`;
+      throw new ReadError(file, lineIndex(text)(fault), `is not valid JSON: ${what}`);
+    }
+    if (measured.bounds === 'too deep') {
+      throw yamlLimitError(
+        new YamlLimitError('nesting', lineIndex(text)(tooDeepAt(measured))),
+        file,
+      );
+    }
     throw new ReadError(
       file,
-      lineIndex(text)(entriesPastLimit(text)),
+      lineIndex(text)(entriesPastLimit(text, measured.entries)),
       `holds more than ${MAX_ENTRIES} keys and list items; a model file holds a few hundred (label maps a few ten thousand)`,
     );
   }
@@ -92,43 +110,74 @@ export function readJsonSource(text: string, file: string): SourceDocument | nul
 
 type Bounds = 'within' | 'too deep' | 'too many';
 
+interface Measured {
+  bounds: Bounds;
+  /** Offsets of the first and the last bracket that opens a level past `MAX_NESTING` (-1: none). */
+  firstTooDeep: number;
+  lastTooDeep: number;
+  /** Deepest level reached. */
+  deepest: number;
+  /** Entries, as the YAML syntax tree counts them. */
+  entries: number;
+}
+
 /**
  * The first pass, which builds nothing: whether nesting and entries are within `MAX_NESTING`
  * and `MAX_ENTRIES` (nesting first: the YAML path names the place of a deep one). Entries count
  * as the YAML syntax tree counts them: the items of a collection are its commas plus one, and
  * only `[]` and `{}` have none.
  */
-function measure(text: string): Bounds {
+function measure(text: string): Measured {
   const n = text.length;
   let depth = 0;
   let deepest = 0;
   let entries = 0;
+  let firstTooDeep = -1;
+  let lastTooDeep = -1;
   for (let i = 0; i < n; i++) {
     const c = text.charCodeAt(i);
     if (c === QUOTE) i = stringEnd(text, i) - 1;
     else if (c === OPEN_OBJECT || c === OPEN_LIST) {
       depth++;
       if (depth > deepest) deepest = depth;
+      if (depth === MAX_NESTING + 1) {
+        if (firstTooDeep < 0) firstTooDeep = i;
+        lastTooDeep = i;
+      }
       const next = text.charCodeAt(i + 1);
       if (next !== CLOSE_OBJECT && next !== CLOSE_LIST) entries++;
     } else if (c === CLOSE_OBJECT || c === CLOSE_LIST) depth--;
     else if (c === COMMA) entries++;
   }
-  if (deepest > MAX_NESTING) return 'too deep';
-  return entries > MAX_ENTRIES ? 'too many' : 'within';
+  const bounds = deepest > MAX_NESTING ? 'too deep' : entries > MAX_ENTRIES ? 'too many' : 'within';
+  return { bounds, firstTooDeep, lastTooDeep, deepest, entries };
+}
+
+/**
+ * Offset of the collection the YAML pipeline names for nesting past `MAX_NESTING`: its lexer
+ * pass stops past `FLOW_DEPTH_CUTOFF` at the first bracket past the level, and below that its
+ * tree walk, which visits a collection and then its children last to first, meets the last one.
+ */
+function tooDeepAt(measured: Measured): number {
+  return measured.deepest > FLOW_DEPTH_CUTOFF ? measured.firstTooDeep : measured.lastTooDeep;
 }
 
 /**
  * Offset of the collection at which the YAML pipeline's count of entries passes `MAX_ENTRIES`:
  * it visits a collection, then its child collections last to first, each with all it holds,
  * which is the reverse of the order in which collections close. Run only on a file past the
- * bound, so the memory it takes (two numbers per collection) is spent on refusing it.
+ * bound; `total` is its count of entries (from `measure`).
  */
-function entriesPastLimit(text: string): number {
-  const closedAt: number[] = [];
-  const closedItems: number[] = [];
+function entriesPastLimit(text: string, total: number): number {
+  // Counted from the last collection to close back, the count passes the bound at the last
+  // collection whose entries closed before it number fewer than `total - MAX_ENTRIES`: one
+  // forward pass finds it, holding only the open collections (before: every closed one, 1 s
+  // for 2 million).
+  const before = total - MAX_ENTRIES;
   const openAt: number[] = [];
   const openItems: number[] = [];
+  let closedEntries = 0;
+  let found = 0;
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
     if (c === QUOTE) i = stringEnd(text, i) - 1;
@@ -139,16 +188,13 @@ function entriesPastLimit(text: string): number {
     } else if (c === COMMA) {
       if (openItems.length > 0) openItems[openItems.length - 1]!++;
     } else if ((c === CLOSE_OBJECT || c === CLOSE_LIST) && openAt.length > 0) {
-      closedAt.push(openAt.pop()!);
-      closedItems.push(openItems.pop()!);
+      const at = openAt.pop()!;
+      if (closedEntries >= before) break;
+      found = at;
+      closedEntries += openItems.pop()!;
     }
   }
-  let entries = 0;
-  for (let k = closedAt.length - 1; k >= 0; k--) {
-    entries += closedItems[k]!;
-    if (entries > MAX_ENTRIES) return closedAt[k]!;
-  }
-  return 0;
+  return found;
 }
 
 /** The second pass: values and notes, keys checked as they come. */

@@ -782,7 +782,11 @@ function kindsFor(ctx: RemedyContext, target: Target): Kind[] | string {
   const entry = remedyRule(target.rule);
   if (entry !== undefined) return entry.kinds(ctx, target);
   const help = isRuleId(target.rule) ? ` ${RULES[target.rule].help}` : '';
-  return `no remedy is searched for ${target.rule}: the value itself must be corrected, as the message says.${help}`;
+  const cause =
+    target.rule === 'base-unreadable'
+      ? 'the head is not at fault, and no change to it can make the base version read'
+      : 'the value itself must be corrected, as the message says';
+  return `no remedy is searched for ${target.rule}: ${cause}.${help}`;
 }
 
 /**

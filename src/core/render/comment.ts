@@ -35,7 +35,7 @@ import {
 } from './marks.js';
 import { memoryChart } from './memory-chart.js';
 import { formatDeltaChange, formatMetric } from '../format/metric-format.js';
-import { COMMENT_MARKER, ESTIMATE_NOTICE } from './notice.js';
+import { COMMENT_MARKER, ESTIMATE_NOTICE, baseUnreadableText } from './notice.js';
 import { metricParts, PASSES_NOTE } from './remedy-text.js';
 
 export { COMMENT_MARKER };
@@ -164,7 +164,10 @@ function deltaTable(file: FileDecision): string {
 
 function buildDeltaTable(file: FileDecision): string {
   const rows = shownDeltas(file);
-  if (rows.length === 0) return '_No metric changed and none is limited by the policy._';
+  if (rows.length === 0)
+    return file.baseError && !file.base
+      ? "_No change is measured: the base version did not read, so there is nothing to compare the head with; the head's values are below._"
+      : '_No metric changed and none is limited by the policy._';
   return markdownTable(
     [
       ['metric', 'base', 'head', 'change', 'limit', 'state'],
@@ -357,7 +360,9 @@ function fileSummary(file: FileDecision): string {
       ? `, renamed from ${htmlCode(file.previousPath)}`
       : file.status === 'added'
         ? ', new file, judged on its own'
-        : '';
+        : file.baseError && !file.base
+          ? ', base version unreadable, head judged without it'
+          : '';
   return `${VERDICT_MARK[file.verdict]} ${htmlCode(file.path)}${status}: ${parts.length > 0 ? parts.join(', ') : 'no findings'}`;
 }
 
@@ -374,7 +379,9 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
   ];
   if (file.headError)
     lines.push(`Could not be read at head: ${escapeMarkdown(file.headError.message)}`, '');
-  if (file.baseError)
+  const baseNote = baseUnreadableText(file);
+  if (baseNote !== null) lines.push(`**${escapeMarkdown(baseNote)}**`, '');
+  else if (file.baseError)
     lines.push(
       `_The base version could not be read (${escapeMarkdown(file.baseError.message)}); the head is judged on its own._`,
       '',

@@ -1,7 +1,7 @@
 import { fitText, perDeviceText } from './device-text.js';
 import { formatInteger } from '../format/units.js';
 import { formatChange, formatMetric } from '../format/metric-format.js';
-import { ESTIMATE_NOTICE } from './notice.js';
+import { ESTIMATE_NOTICE, baseUnreadableText } from './notice.js';
 import { PLAIN, type TextStyle } from './inspect-text.js';
 import { remedyLines, togetherText, type RemedyNaming } from './remedy-text.js';
 import type { GateReport, FileDecision } from '../report/types.js';
@@ -48,10 +48,17 @@ export function renderDiffText(report: GateReport, style: TextStyle = PLAIN): st
       ? ` (renamed from ${file.previousPath})`
       : file.status === 'added'
         ? ' (new)'
-        : '';
+        : file.baseError && !file.base
+          ? ' (base unreadable: head judged without it)'
+          : '';
     lines.push('', `${style.bold(file.path)}${renamed}  ${file.verdict}`);
     if (file.headError)
       lines.push(`  ${style.severity('block', 'error')} ${file.headError.message}`);
+    const baseNote = baseUnreadableText(file);
+    if (baseNote !== null)
+      lines.push(
+        `  ${style.severity(file.verdict === 'ok' ? 'info' : file.verdict, 'base unreadable:')} ${baseNote}`,
+      );
     const width = Math.max(0, ...file.deltas.map((d) => d.metric.length));
     for (const d of file.deltas) {
       const mark =
