@@ -1,24 +1,26 @@
 import { execFileSync } from 'node:child_process';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/adapters/content-limit.js';
-import {
-  createGitHubClient,
-  type GitHubClient,
-  type GraphqlAnswer,
-} from '../../src/adapters/github-rest.js';
-import { createApiContentSource, gitBlobId } from '../../src/adapters/graphql-contents.js';
-import type { ContentRequest } from '../../src/core/gate.js';
+import { gitBlobId } from '../../src/adapters/graphql-contents.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { runScenario } from '../support/action-harness.js';
-import {
-  FAKE_BLOB_TEXT_LIMIT,
-  serverError,
-  startFakeGitHub,
-  tree,
-  type FakeEntry,
-  type FakeGitHub,
-} from '../support/fake-github.js';
+import { FAKE_BLOB_TEXT_LIMIT, serverError, tree, type FakeEntry } from '../support/fake-github.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
+import {
+  BASE,
+  client,
+  encode,
+  fake,
+  HEAD,
+  OWNER,
+  REPO,
+  restAlone,
+  shown,
+  source,
+  unspacedClient,
+  useApiFake,
+  warnings,
+} from './api-contents-fixture.js';
 
 // Issue 13's read cost: without local history the action read one contents request per file
 // version, so 5,000 changed configs (10,000 versions) cost about 10,000 requests, past the
@@ -28,76 +30,10 @@ import { checkpointConfig } from '../support/scenario-repo.js';
 // through the REST contents API, and nothing that failed becomes "absent". The loopback fake
 // checks every REST request against GitHub's REST description and every GraphQL query against
 // GitHub's published GraphQL schema (npm @octokit/graphql-schema), executed by npm `graphql`.
+// The two very large pull requests (5,000 configs; 500 read the old way) are in
+// api-contents.slow.test.ts (`npm run test:full`).
 
-const OWNER = 'example-org';
-const REPO = 'model-zoo';
-const BASE = 'a'.repeat(40);
-const HEAD = 'b'.repeat(40);
-const encode = (text: string) => new TextEncoder().encode(text);
-
-let fake: FakeGitHub;
-let warnings: string[];
-beforeEach(async () => {
-  fake = await startFakeGitHub({ owner: OWNER, repo: REPO });
-  warnings = [];
-});
-afterEach(async () => {
-  expect(fake.mismatches).toEqual([]);
-  expect(fake.responseMismatches).toEqual([]);
-  expect(fake.unhandled).toEqual([]);
-  await fake.close();
-});
-
-function client(): GitHubClient {
-  return createGitHubClient(fake.state.token, {
-    baseUrl: fake.url,
-    log: { debug: () => {}, info: () => {}, warn: (m) => warnings.push(m) },
-    msPerSecond: 1,
-  });
-}
-
-/**
- * The real client, but GraphQL posted straight to the fake: Octokit's throttling plugin spaces
- * GraphQL requests a second apart (as it does writes), which would make 100 queries take 100 s
- * here. What is counted is the same: every request reaches the fake and is logged there.
- */
-function unspacedClient(queries: string[] = []): GitHubClient {
-  return {
-    ...client(),
-    async graphql(query, variables, maxBytes): Promise<GraphqlAnswer> {
-      queries.push(query);
-      const response = await fetch(`${fake.url}/graphql`, {
-        method: 'POST',
-        headers: {
-          authorization: `token ${fake.state.token}`,
-          'content-type': 'application/json',
-        },
-        body: JSON.stringify({ query, variables }),
-      });
-      const text = await response.text();
-      if (!response.ok || text.length > maxBytes) throw new Error(`GraphQL ${response.status}`);
-      return JSON.parse(text) as GraphqlAnswer;
-    },
-  };
-}
-
-const source = (api: GitHubClient) =>
-  createApiContentSource(api, { owner: OWNER, repo: REPO, warn: (m) => warnings.push(m) });
-
-/** What the REST contents API alone gives for each request (the path the action took before). */
-async function restAlone(requests: ContentRequest[]): Promise<(Uint8Array | null | string)[]> {
-  const api = client();
-  return Promise.all(
-    requests.map((r) =>
-      api.getFileContent(OWNER, REPO, r.path, r.ref).catch((e: unknown) => (e as Error).name),
-    ),
-  );
-}
-
-const shown = (answers: (Uint8Array | null | Error | string)[]) =>
-  answers.map((a) =>
-    a instanceof Uint8Array ? Buffer.from(a).toString('hex') : a instanceof Error ? a.name : a,
-  );
+useApiFake();
 
 describe("git's object id of a blob", () => {
   it('equals `git hash-object` (SHA-1) for text, a byte-order mark, CR LF, bytes not UTF-8 and nothing', () => {
@@ -126,68 +62,6 @@ describe("git's object id of a blob", () => {
     execFileSync('rm', ['-rf', dir]);
     expect(fromGit).toHaveLength(64);
     expect(gitBlobId(bytes, 64)).toBe(fromGit);
-  });
-});
-
-describe('a very large pull request through the API', () => {
-  it('5,000 changed configs (10,000 versions) in at most 110 requests, every byte as committed', async () => {
-    const base = new Map<string, FakeEntry>();
-    const head = new Map<string, FakeEntry>();
-    const requests: ContentRequest[] = [];
-    for (let i = 0; i < 5000; i += 1) {
-      const path = `models/m${String(i).padStart(4, '0')}/config.json`;
-      base.set(path, { type: 'file', bytes: encode(checkpointConfig({ vocab_size: 32000 + i })) });
-      head.set(path, {
-        type: 'file',
-        bytes: encode(checkpointConfig({ vocab_size: 32000 + i, max_position_embeddings: 8192 })),
-      });
-      requests.push({ ref: HEAD, path }, { ref: BASE, path });
-    }
-    // Unrelated files in the trees, as a real repository has.
-    for (let i = 0; i < 2000; i += 1)
-      head.set(`docs/n${i}.md`, { type: 'file', bytes: encode('x') });
-    fake.state.trees.set(BASE, base);
-    fake.state.trees.set(HEAD, head);
-
-    const queries: string[] = [];
-    const started = performance.now();
-    const answers = await source(unspacedClient(queries)).readMany(requests);
-    const elapsed = performance.now() - started;
-
-    answers.forEach((answer, i) => {
-      const { ref, path } = requests[i]!;
-      const want = (fake.state.trees.get(ref)!.get(path) as { bytes: Uint8Array }).bytes;
-      expect(Buffer.from(answer as Uint8Array).equals(Buffer.from(want)), path).toBe(true);
-    });
-    const byOperation = (id: string) => fake.calls(id).length;
-    expect(byOperation('git/get-tree')).toBe(2);
-    expect(byOperation('repos/get-content')).toBe(0);
-    expect(byOperation('graphql')).toBe(100);
-    expect(fake.requests.length).toBeLessThanOrEqual(110);
-    // Nothing from a path is in a query's text: only generated aliases and variables.
-    for (const query of queries) {
-      expect(query).not.toMatch(/models\/|config\.json/);
-      for (const alias of query.matchAll(/(\w+): object\(/g)) expect(alias[1]).toMatch(/^b\d+$/);
-    }
-    console.log(
-      `api contents: 5,000 changed configs, 10,000 versions: ${fake.requests.length} requests (${byOperation('git/get-tree')} trees, ${byOperation('graphql')} GraphQL queries, ${byOperation('repos/get-content')} contents reads) in ${elapsed.toFixed(0)} ms without GraphQL's 1 s spacing`,
-    );
-  }, 120_000);
-
-  it('before: one contents request per version (counted on 500 versions: a client without GraphQL still reads so)', async () => {
-    const files = new Map<string, FakeEntry>();
-    const requests: ContentRequest[] = [];
-    for (let i = 0; i < 500; i += 1) {
-      const path = `models/m${i}/config.json`;
-      files.set(path, { type: 'file', bytes: encode(checkpointConfig()) });
-      requests.push({ ref: HEAD, path });
-    }
-    fake.state.trees.set(HEAD, files);
-    // A client without GraphQL is read the old way: one contents request per version.
-    const restOnly = { ...client(), graphql: undefined, readTree: undefined };
-    await source(restOnly).readMany(requests);
-    expect(fake.calls('repos/get-content')).toHaveLength(500);
-    expect(fake.calls('graphql')).toHaveLength(0);
   });
 });
 
