@@ -38,12 +38,15 @@ export default defineConfig({
     coverage: {
       provider: 'v8',
       include: ['src/core/**'],
+      // The validators ajv generates from schema/*.schema.json at build time: machine-written, and
+      // held to ajv compiling the schemas by test/policy/schema-options.test.ts.
+      exclude: ['src/core/**/*.generated.ts'],
       reporter: ['text-summary', 'json-summary'],
       // The floor for `npm test -- --coverage` (what .ci/run runs), about a point under what the
-      // unit project covered of src/core on 2026-12-02: statements 93.05 %, branches 85.15 %,
-      // functions 97.26 %, lines 95.25 % (of 6,325 statements). A change that leaves some 65 more
-      // statements, branches or lines, or 14 more functions, of the core untested fails; raise
-      // the floor when coverage rises.
+      // unit project covered of src/core on 2026-12-02 (16:10 UTC): statements 93.49 %, branches
+      // 86 %, functions 97.75 %, lines 95.75 % (of 6,933 statements). A change that leaves some 100
+      // more statements, branches or lines, or 20 more functions, of the core untested fails;
+      // raise the floor when coverage rises.
       thresholds: { statements: 92, branches: 84, functions: 96, lines: 94 },
     },
     projects: [
