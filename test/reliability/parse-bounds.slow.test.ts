@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { MAX_FINDINGS_PER_RULE } from '../../src/core/parse/fields.js';
 import { inspectModel } from '../../src/core/inspect.js';
 import {
   MAX_ALIAS_VALUES,
@@ -276,24 +277,35 @@ describe("each reader's worst case just under 4 MiB (point 4, round three)", () 
       'm/model.reach.yaml',
       () =>
         `format: context-reach-model/1\n${Array.from({ length: 44_000 }, (_, i) => `k${i}: 1\n`).join('')}`,
-      /k43999 is not a known key at the top level/,
+      /k998 is not a known key at the top level/,
+      44_000,
     ],
     [
       '49,000 unread keys in a checkpoint config (before: 25.3 s)',
       'm/config.json',
       () =>
         `{"model_type":"llama","hidden_size":4096,"num_hidden_layers":2,"num_attention_heads":32,"vocab_size":32000,"max_position_embeddings":4096,${Array.from({ length: 49_000 }, (_, i) => `"k${i}":1`).join(',')}}`,
-      /k48999 is not read/,
+      /k999 is not read/,
+      49_000,
     ],
-  ])('%s: one finding each, without comparing each with every other', (_, path, make, last) => {
-    const { ms, value } = read(make(), path);
-    const findings = (value as { findings: { message: string }[] }).findings;
-    console.log(`${_}: ${ms.toFixed(0)} ms CPU, ${findings.length} findings`);
-    expect(findings.some((f) => last.test(f.message))).toBe(true);
-    expect(findings.length).toBeGreaterThan(44_000);
-    // Measured 0.8–1.2 s at a load of 4–9 (the findings' messages and lines, one by one).
-    expect(ms).toBeLessThan(4000);
-  });
+  ])(
+    '%s: the first MAX_FINDINGS_PER_RULE one by one, the rest counted in one, without comparing each with every other',
+    (_, path, make, listed, keys) => {
+      const { ms, value } = read(make(), path);
+      const findings = (value as { findings: { message: string }[] }).findings;
+      console.log(`${_}: ${ms.toFixed(0)} ms CPU, ${findings.length} findings`);
+      expect(findings.some((f) => listed.test(f.message))).toBe(true);
+      const one = findings.filter((f) => /is not (a known key|read)/.test(f.message)).length;
+      const rest = findings.find((f) => /more (value-invalid|key-unread) findings/.test(f.message));
+      const counted = Number(/^([\d,]+) more/.exec(rest?.message ?? '')?.[1]?.replace(/,/g, ''));
+      // Every key is accounted for: listed, or counted in the one finding for the rest.
+      expect(one + counted).toBe(keys);
+      expect(one).toBeLessThanOrEqual(MAX_FINDINGS_PER_RULE);
+      // Measured 0.65–1.0 s of CPU in a fresh worker while CI ran beside it (0.62 s warm, own
+      // dialect); before the per-rule limit 0.86–1.41 s, and 13–25 s before set lookups.
+      expect(ms).toBeLessThan(2000);
+    },
+  );
 });
 
 describe('glob matching is bounded (point 12)', () => {

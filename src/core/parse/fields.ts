@@ -4,6 +4,7 @@
  * Ranges of sizes are left to the spec rules, so both dialects report them alike.
  */
 import type { Finding, LocationMap } from '../model.js';
+import { formatInteger } from '../format/units.js';
 import { RULES } from '../rules/catalog.js';
 import type { RuleId } from '../rules/catalog.js';
 import { dottedKey, kindOf, quoteValue } from './quote.js';
@@ -18,8 +19,19 @@ export interface NumberCheck {
   expected: string;
 }
 
+/**
+ * Findings of one rule a file gets one by one; past that, one more finding counts the rest and
+ * names the first of them. A config of tens of thousands of unknown or unread keys (a hostile or
+ * generated file) would otherwise make a report of tens of thousands of lines and seconds of
+ * work; no published config comes near it.
+ */
+export const MAX_FINDINGS_PER_RULE = 1000;
+
 export class FieldReader {
   readonly findings: Finding[] = [];
+  /** Findings made per rule, and the finding that counts those past `MAX_FINDINGS_PER_RULE`. */
+  private readonly perRule = new Map<RuleId, number>();
+  private readonly rest = new Map<RuleId, { finding: Finding; count: number; first: string }>();
   readonly locations: LocationMap = {};
   /**
    * Every path the reader looked up (present or not), so keys nobody consulted can be reported
@@ -152,6 +164,12 @@ export class FieldReader {
   report(rule: RuleId, path: readonly PathSegment[] | null, message: string): void {
     const key = path === null ? null : this.key(path);
     if (key !== null && this.covered(key)) return;
+    const made = this.perRule.get(rule) ?? 0;
+    if (made >= MAX_FINDINGS_PER_RULE) {
+      this.countPast(rule, key, path === null ? null : this.line(path));
+      return;
+    }
+    this.perRule.set(rule, made + 1);
     this.findings.push({
       rule,
       severity: RULES[rule].severity,
@@ -159,6 +177,29 @@ export class FieldReader {
       key,
       line: path === null ? null : this.line(path),
     });
+  }
+
+  /** Whether `rule` has had its `MAX_FINDINGS_PER_RULE` findings: a caller may skip the message. */
+  full(rule: RuleId): boolean {
+    return (this.perRule.get(rule) ?? 0) >= MAX_FINDINGS_PER_RULE;
+  }
+
+  /** Counts a finding past the limit in the one finding that stands for them all. */
+  private countPast(rule: RuleId, key: string | null, line: number | null): void {
+    if (key !== null) this.findingKeys.add(key);
+    let rest = this.rest.get(rule);
+    if (rest === undefined) {
+      const finding: Finding = { rule, severity: RULES[rule].severity, message: '', key, line };
+      rest = {
+        finding,
+        count: 0,
+        first: `${key ?? 'the file'}${line === null ? '' : ` (line ${line})`}`,
+      };
+      this.rest.set(rule, rest);
+      this.findings.push(finding);
+    }
+    rest.count += 1;
+    rest.finding.message = `${formatInteger(rest.count)} more ${rule} finding${rest.count === 1 ? '' : 's'} in this file, past the ${formatInteger(MAX_FINDINGS_PER_RULE)} listed one by one, the first about ${rest.first}: one problem repeated this often is best fixed where the file is made`;
   }
 
   /** Whether a finding about `path` (or a key containing it) has been made. */

@@ -576,6 +576,8 @@ function schemaFinding(r: FieldReader, error: ErrorObject): void {
       const name = String(params.additionalProperty);
       // Already reported (a long name shortened to the same key): no suggestion to look for.
       if (r.reported([...path, name])) return;
+      // Counted, not listed: no suggestion to look for.
+      if (r.full('value-invalid')) return r.report('value-invalid', [...path, name], '');
       const known = Object.keys(schema.properties ?? {}).filter((k) => k !== '$schema');
       const nearest = suggestKey(name, known);
       const where = path.length === 0 ? 'at the top level' : `under ${key}`;

@@ -203,7 +203,9 @@ export function reportUnreadKeys(r: FieldReader): void {
       r.report(
         'key-unread',
         path,
-        `${r.key(path)} is not read: no metric follows it. If it changes the model's shape, position code or memory, the figures here leave it out; describe the model in the context-reach format to state it`,
+        r.full('key-unread')
+          ? '' // counted, not listed: the message is not shown
+          : `${r.key(path)} is not read: no metric follows it. If it changes the model's shape, position code or memory, the figures here leave it out; describe the model in the context-reach format to state it`,
       );
     }
   };
