@@ -1,7 +1,7 @@
 import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { startFakeGitHub, statusFault } from '../support/fake-github.js';
-import { pullRequestEvent, runBundle } from '../support/run-bundle.js';
+import { runBundleOnPullRequest } from '../support/run-bundle.js';
 import { scenarioRepo } from '../support/scenario-repo.js';
 import { BLOCKING, checkedFakes, MODEL } from './checked-scenarios.js';
 
@@ -16,31 +16,14 @@ describe('pull requests from forks (read-only token)', () => {
     const fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
     fakes.push(fake);
     fake.state.readOnly = true;
-    fake.state.pulls.set(7, {
-      number: 7,
-      baseSha: repo.base,
-      headSha: repo.head,
-      baseRef: 'main',
-      headRef: 'feature',
-      labels: [],
-      headRepo: 'someone-else/model-zoo',
-      files: [{ filename: MODEL, status: 'modified' }],
-    });
-    const run = await runBundle({
-      eventName: 'pull_request',
-      event: pullRequestEvent({
-        owner: 'example-org',
-        repo: 'model-zoo',
-        number: 7,
-        base: repo.base,
-        head: repo.head,
+    const run = await runBundleOnPullRequest(
+      fake,
+      repo,
+      [{ filename: MODEL, status: 'modified' }],
+      {
         fork: true,
-      }),
-      workspace: repo.dir,
-      apiUrl: fake.url,
-      repository: 'example-org/model-zoo',
-      inputs: { 'github-token': fake.state.token },
-    });
+      },
+    );
     repo.remove();
     expect(run.code).toBe(1);
     expect(fake.state.comments).toHaveLength(0);
@@ -61,33 +44,17 @@ describe('the token', () => {
     const repo = scenarioRepo(BLOCKING.base, BLOCKING.head);
     const fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
     fakes.push(fake);
-    fake.state.pulls.set(7, {
-      number: 7,
-      baseSha: repo.base,
-      headSha: repo.head,
-      baseRef: 'main',
-      headRef: 'feature',
-      labels: [],
-      headRepo: 'example-org/model-zoo',
-      files: [{ filename: MODEL, status: 'modified' }],
-    });
     // A 422 is not retried, so the failure comes at once; its message quotes the token back.
     fake.fail('pulls/list-files', statusFault(422, `refused for ${fake.state.token}`));
     const empty = execFileSync('mktemp', ['-d'], { encoding: 'utf8' }).trim();
-    const run = await runBundle({
-      eventName: 'pull_request',
-      event: pullRequestEvent({
-        owner: 'example-org',
-        repo: 'model-zoo',
-        number: 7,
-        base: repo.base,
-        head: repo.head,
-      }),
-      workspace: empty,
-      apiUrl: fake.url,
-      repository: 'example-org/model-zoo',
-      inputs: { 'github-token': fake.state.token },
-    });
+    const run = await runBundleOnPullRequest(
+      fake,
+      repo,
+      [{ filename: MODEL, status: 'modified' }],
+      {
+        workspace: empty,
+      },
+    );
     repo.remove();
     expect(run.code).toBe(1);
     expect(run.stdout).toMatch(

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
-import { pullRequestEvent, runBundle, type BundleRun } from '../support/run-bundle.js';
+import { runBundleOnPullRequest, type BundleRun } from '../support/run-bundle.js';
 import { checkpointConfig, scenarioRepo, type ScenarioRepo } from '../support/scenario-repo.js';
 
 // The report as an attack surface, as in report-injection.test.ts, in the bundled action
@@ -19,30 +19,7 @@ describe('the bundled action: a file name that tries to inject workflow commands
       { [NAME]: checkpointConfig({ max_position_embeddings: 65536 }) },
     );
     fake = await startFakeGitHub({ owner: 'example-org', repo: 'model-zoo' });
-    fake.state.pulls.set(7, {
-      number: 7,
-      baseSha: repo.base,
-      headSha: repo.head,
-      baseRef: 'main',
-      headRef: 'feature',
-      labels: [],
-      headRepo: 'example-org/model-zoo',
-      files: [{ filename: NAME, status: 'modified' }],
-    });
-    run = await runBundle({
-      eventName: 'pull_request',
-      event: pullRequestEvent({
-        owner: 'example-org',
-        repo: 'model-zoo',
-        number: 7,
-        base: repo.base,
-        head: repo.head,
-      }),
-      workspace: repo.dir,
-      apiUrl: fake.url,
-      repository: 'example-org/model-zoo',
-      inputs: { 'github-token': fake.state.token },
-    });
+    run = await runBundleOnPullRequest(fake, repo, [{ filename: NAME, status: 'modified' }]);
   }, 60_000);
 
   afterAll(async () => {

@@ -2,6 +2,8 @@ import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import type { FakeGitHub, FakePullFile } from './fake-github.js';
+import type { ScenarioRepo } from './scenario-repo.js';
 
 export const ACTION_BUNDLE = resolve(import.meta.dirname, '../../dist/index.js');
 
@@ -204,4 +206,42 @@ export function pullRequestEvent(options: {
     },
     repository: { name: options.repo, full_name: full, owner: { login: options.owner } },
   };
+}
+
+/**
+ * Pull request #7 of example-org/model-zoo from `repo`'s base to its head, put on `fake` with
+ * `files` as its file list, then the bundled action run on it with the fake's token: what the
+ * bundle tests of API faults and hostile reports share.
+ */
+export async function runBundleOnPullRequest(
+  fake: FakeGitHub,
+  repo: ScenarioRepo,
+  files: FakePullFile[],
+  options: { fork?: boolean; workspace?: string } = {},
+): Promise<BundleRun> {
+  fake.state.pulls.set(7, {
+    number: 7,
+    baseSha: repo.base,
+    headSha: repo.head,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: [],
+    headRepo: options.fork ? 'someone-else/model-zoo' : 'example-org/model-zoo',
+    files,
+  });
+  return runBundle({
+    eventName: 'pull_request',
+    event: pullRequestEvent({
+      owner: 'example-org',
+      repo: 'model-zoo',
+      number: 7,
+      base: repo.base,
+      head: repo.head,
+      fork: options.fork,
+    }),
+    workspace: options.workspace ?? repo.dir,
+    apiUrl: fake.url,
+    repository: 'example-org/model-zoo',
+    inputs: { 'github-token': fake.state.token },
+  });
 }
