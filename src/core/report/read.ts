@@ -137,6 +137,48 @@ const metrics = record(
 
 const booleanOrNull: Schema = { type: ['boolean', 'null'] };
 
+/*
+ * Field lists the schema below and `NULLABLE_SPEC_FIELDS` both use: each named once, so a field
+ * added to one is in the other.
+ */
+/** Spec numbers a config may leave unstated (null). */
+const SPEC_OPTIONAL_NUMBERS = [
+  'trainedSpan',
+  'slidingWindow',
+  'windowLayers',
+  'embeddingInitStd',
+  'embeddingMultiplier',
+] as const;
+/** Spec fields older reports lack, null when unstated. */
+const SPEC_OPTIONAL = [
+  'latent',
+  'layerTypes',
+  'positionFreeLayers',
+  'chunkSize',
+  'localBase',
+  'layerNorms',
+  'qkNorms',
+  'encoderOnly',
+  'quantization',
+  'vision',
+] as const;
+/** A mixture of experts' fields older reports lack, null when unstated. */
+const EXPERT_OPTIONAL = ['width', 'shared', 'sharedWidth', 'denseLayers', 'sharedGate'] as const;
+/** A context scaling's fields older reports lack, null when unstated. */
+const SCALING_OPTIONAL = ['shortFactors', 'longFactors', 'attentionFactor'] as const;
+/** Serving fields older reports lack. */
+const SERVING_OPTIONAL = ['tensorParallel', 'pipelineParallel', 'activationReserveGiB'] as const;
+/** Every serving number, null when unstated. */
+const SERVING_NUMBERS = [
+  'span',
+  'sequences',
+  'deviceGiB',
+  'reserve',
+  'outputTokens',
+  'promptTokens',
+  ...SERVING_OPTIONAL,
+] as const;
+
 const spec = record(
   {
     name: textOrNull,
@@ -149,11 +191,7 @@ const spec = record(
       'ffn',
       'vocab',
       'declaredSpan',
-      'trainedSpan',
-      'slidingWindow',
-      'windowLayers',
-      'embeddingInitStd',
-      'embeddingMultiplier',
+      ...SPEC_OPTIONAL_NUMBERS,
     ]),
     gated: { type: 'boolean' },
     tied: { type: 'boolean' },
@@ -164,7 +202,7 @@ const spec = record(
         sharedGate: booleanOrNull,
       },
       true,
-      ['width', 'shared', 'sharedWidth', 'denseLayers', 'sharedGate'],
+      [...EXPERT_OPTIONAL],
     ),
     latent: record(numbers(['kvRank', 'qRank', 'ropeDim', 'nopeDim', 'valueDim']), true),
     layerTypes: { type: ['array', 'null'], items: { enum: [...LAYER_ATTENTIONS] } },
@@ -196,7 +234,7 @@ const spec = record(
               longFactors: { type: ['array', 'null'], items: { type: 'number' } },
             },
             true,
-            ['shortFactors', 'longFactors', 'attentionFactor'],
+            [...SCALING_OPTIONAL],
           ),
           buckets: numberOrNull,
           maxDistance: numberOrNull,
@@ -212,21 +250,7 @@ const spec = record(
       cache: { enum: [...STORAGE_DTYPES, null] },
       positions: { enum: [...FLOAT_FORMATS, null] },
     }),
-    serving: record(
-      numbers([
-        'span',
-        'sequences',
-        'deviceGiB',
-        'reserve',
-        'outputTokens',
-        'promptTokens',
-        'tensorParallel',
-        'pipelineParallel',
-        'activationReserveGiB',
-      ]),
-      false,
-      ['tensorParallel', 'pipelineParallel', 'activationReserveGiB'],
-    ),
+    serving: record(numbers(SERVING_NUMBERS), false, [...SERVING_OPTIONAL]),
     quantization: record(
       {
         method: text,
@@ -238,18 +262,7 @@ const spec = record(
     ),
   },
   false,
-  [
-    'latent',
-    'layerTypes',
-    'positionFreeLayers',
-    'chunkSize',
-    'localBase',
-    'layerNorms',
-    'qkNorms',
-    'encoderOnly',
-    'quantization',
-    'vision',
-  ],
+  [...SPEC_OPTIONAL],
 );
 
 const location = record({ key: text, line: lineOrNull });
@@ -434,49 +447,23 @@ function restoreNaN(value: unknown, nullable: ReadonlySet<string>): unknown {
 }
 
 /** Spec fields that are null by design ("not stated"); every other null was a NaN. */
-const NULLABLE_SPEC_FIELDS = new Set([
+const NULLABLE_SPEC_FIELDS = new Set<string>([
   'name',
   'experts',
   'encoder',
   'vision',
   'scaling',
   'originalSpan',
-  'shortFactors',
-  'longFactors',
-  'attentionFactor',
-  'trainedSpan',
-  'slidingWindow',
-  'windowLayers',
   'weights',
   'cache',
   'positions',
-  'embeddingInitStd',
-  'embeddingMultiplier',
-  'span',
-  'sequences',
-  'deviceGiB',
-  'reserve',
-  'outputTokens',
-  'promptTokens',
-  'tensorParallel',
-  'pipelineParallel',
-  'activationReserveGiB',
-  'quantization',
   'groupSize',
-  'latent',
   'qRank',
-  'layerTypes',
-  'positionFreeLayers',
-  'chunkSize',
-  'localBase',
-  'layerNorms',
-  'qkNorms',
-  'encoderOnly',
-  'width',
-  'shared',
-  'sharedWidth',
-  'sharedGate',
-  'denseLayers',
+  ...SPEC_OPTIONAL_NUMBERS,
+  ...SPEC_OPTIONAL,
+  ...EXPERT_OPTIONAL,
+  ...SCALING_OPTIONAL,
+  ...SERVING_NUMBERS,
 ]);
 
 /**
