@@ -1,4 +1,5 @@
 import { execFileSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -9,7 +10,7 @@ import { runAction } from '../../src/action/run-action.js';
 import { startFakeGitHub, type FakeGitHub, type FakePullFile } from './fake-github.js';
 import { createRecordingOutput, type RecordingOutput } from './recording-output.js';
 import { pullRequestEvent } from './run-bundle.js';
-import { scenarioRepo, type Tree } from './scenario-repo.js';
+import { scenarioRepo, type ScenarioRepo, type Tree } from './scenario-repo.js';
 
 export const OWNER = 'example-org';
 export const REPO = 'model-zoo';
@@ -75,11 +76,52 @@ function pullFiles(base: Tree, head: Tree): FakePullFile[] {
 }
 
 /**
+ * Repositories already built in this worker, by the content of their two trees. The action only
+ * reads a scenario's repository (its report files go to `written`, its fetches to a clone of its
+ * own), so scenarios with the same trees share one: a third of `npm test`'s scenarios repeat
+ * another's trees, and each build starts git four times. Small trees only: a repository holding
+ * a hostile file of megabytes is removed after its run. The test run's temporary root (removed
+ * when the run ends) holds the shared ones.
+ */
+const sharedRepos = new Map<string, ScenarioRepo>();
+const SHARED_TREE_BYTES = 1 << 20;
+
+/** The trees' content as a key (paths, kinds and bytes), or null when they are too large to keep. */
+function treesKey(base: Tree, head: Tree): string | null {
+  const hash = createHash('sha256');
+  let bytes = 0;
+  for (const tree of [base, head]) {
+    for (const [path, content] of Object.entries(tree)) {
+      const link = typeof content === 'object' && !(content instanceof Uint8Array);
+      const body = link ? Buffer.from(content.symlink) : Buffer.from(content);
+      bytes += body.length;
+      if (bytes > SHARED_TREE_BYTES) return null;
+      hash.update(`${link ? 'l' : 'f'}${Buffer.byteLength(path)}:${path}${body.length}:`);
+      hash.update(body);
+    }
+    hash.update('|');
+  }
+  return hash.digest('hex');
+}
+
+/** A repository with these trees: one built before in this worker, or a new one. */
+function repoFor(base: Tree, head: Tree): { repo: ScenarioRepo; shared: boolean } {
+  const key = treesKey(base, head);
+  if (key === null) return { repo: scenarioRepo(base, head), shared: false };
+  let repo = sharedRepos.get(key);
+  if (repo === undefined) {
+    repo = scenarioRepo(base, head);
+    sharedRepos.set(key, repo);
+  }
+  return { repo, shared: true };
+}
+
+/**
  * Runs the action in-process with the real git and GitHub adapters, against a temporary git
  * repository and the loopback API stand-in; waits GitHub asks for are shrunk to milliseconds.
  */
 export async function runScenario(options: ScenarioOptions): Promise<ScenarioResult> {
-  const repo = scenarioRepo(options.base, options.head);
+  const { repo, shared } = repoFor(options.base, options.head);
   const fake = options.fake ?? (await startFakeGitHub({ owner: OWNER, repo: REPO }));
   fake.state.readOnly = options.readOnly ?? false;
   fake.state.pulls.set(7, {
@@ -150,8 +192,8 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
   } catch (caught) {
     error = caught;
   }
-  // What the run wrote is in `written` and `out`: its folders go.
-  repo.remove();
+  // What the run wrote is in `written` and `out`: its folders go (a shared repository stays).
+  if (!shared) repo.remove();
   for (const dir of [temp, workspace])
     if (dir !== repo.dir) rmSync(dir, { recursive: true, force: true });
   return { out, fake, written, error, base: repo.base, head: repo.head };
