@@ -123,19 +123,31 @@ function buildRoutes(): Route[] {
   return result.sort((a, b) => b.literals - a.literals);
 }
 
-/** An OpenAPI 3.0 schema as draft-07 JSON Schema for ajv: references gathered, `nullable` spelled out. */
-function adapt(node: unknown, definitions: Record<string, unknown>): unknown {
-  if (Array.isArray(node)) return node.map((item) => adapt(item, definitions));
+/** Components already handed to ajv, by their `#/components/<group>/<name>` reference. */
+const components = new Set<string>();
+
+/** The `$id` a component has in ajv (any URI serves; this one names nothing real). */
+const componentId = (ref: string) =>
+  `https://openapi.example.invalid/${ref.slice('#/components/'.length)}`;
+
+/**
+ * An OpenAPI 3.0 schema as draft-07 JSON Schema for ajv, `nullable` spelled out. A referenced
+ * component is handed to ajv once, under an id of its own, and referred to by it: ajv compiles
+ * each component once per worker and every validator that uses it shares the compiled code (a
+ * copy per validator cost seconds of compiling per test worker).
+ */
+function adapt(node: unknown): unknown {
+  if (Array.isArray(node)) return node.map((item) => adapt(item));
   if (node === null || typeof node !== 'object') return node;
   const source = node as Schema;
   if (typeof source.$ref === 'string') {
-    const [, , group, name] = source.$ref.split('/');
-    const key = `${group}__${name}`;
-    if (!(key in definitions)) {
-      definitions[key] = true;
-      definitions[key] = adapt(componentAt(source.$ref), definitions);
+    const ref = source.$ref;
+    if (!components.has(ref)) {
+      // Marked first: a component that refers to itself finds its id and stops there.
+      components.add(ref);
+      ajv.addSchema(adapt(componentAt(ref)) as Schema, componentId(ref));
     }
-    return { $ref: `#/definitions/${key}` };
+    return { $ref: componentId(ref) };
   }
   const out: Schema = {};
   for (const [key, value] of Object.entries(source)) {
@@ -149,10 +161,10 @@ function adapt(node: unknown, definitions: Record<string, unknown>): unknown {
       continue;
     if (key === 'properties' || key === 'patternProperties') {
       out[key] = Object.fromEntries(
-        Object.entries(value as Schema).map(([name, schema]) => [name, adapt(schema, definitions)]),
+        Object.entries(value as Schema).map(([name, schema]) => [name, adapt(schema)]),
       );
     } else if (['items', 'additionalProperties', 'not', 'allOf', 'anyOf', 'oneOf'].includes(key)) {
-      out[key] = adapt(value, definitions);
+      out[key] = adapt(value);
     } else {
       out[key] = value;
     }
@@ -163,9 +175,7 @@ function adapt(node: unknown, definitions: Record<string, unknown>): unknown {
 function validatorFor(id: string, schema: unknown): ValidateFunction {
   let validate = validators.get(id);
   if (!validate) {
-    const definitions: Record<string, unknown> = {};
-    const root = adapt(schema, definitions) as Schema;
-    validate = ajv.compile({ ...root, definitions });
+    validate = ajv.compile(adapt(schema) as Schema);
     validators.set(id, validate);
   }
   return validate;
