@@ -7,7 +7,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, relative } from 'node:path';
 import { afterAll, beforeAll, expect } from 'vitest';
-import { createGitReader } from '../../src/adapters/git.js';
+import { createGitReader, gitContentSource } from '../../src/adapters/git.js';
 import type { FileDecision } from '../../src/core/report/types.js';
 import { runGate, type ContentSource } from '../../src/core/gate.js';
 import {
@@ -36,7 +36,7 @@ export interface HostileCheckout {
   /** The folder outside the checkout holding the canary. */
   outside: string;
   repo: ScenarioRepo;
-  /** Reads through the git adapter. */
+  /** Reads through the git adapter, as `diff` does (`gitContentSource`). */
   source: ContentSource;
   /** The good file's decision with nothing else in the pull request. */
   control: FileDecision;
@@ -67,7 +67,8 @@ export async function hostileCheckout(): Promise<HostileCheckout> {
   writeFileSync(join(outside, 'canary.json'), checkpointConfig({ hidden_size: CANARY }));
   const repo = scenarioRepo(tree(outside, false), tree(outside, true));
   const git = createGitReader(repo.dir);
-  const source: ContentSource = { read: (ref, path) => git.show(ref, path) };
+  // The content source `diff` and the demo read through: every version in one batch.
+  const source: ContentSource = gitContentSource(git);
   const control = (
     await runGate(source, {
       base: repo.base,

@@ -3,12 +3,16 @@ import { marked } from 'marked';
 import { decide, type ChangedConfig } from '../../src/core/compare/decide.js';
 import { BUILT_IN_JUDGING } from '../../src/core/policy/judging.js';
 import { inspectModel, type InspectOptions } from '../../src/core/inspect.js';
+import { createScanMemo } from '../../src/core/metrics/scan-memo.js';
 import { PER_DEVICE_METRICS } from '../../src/core/metrics/types.js';
 import { COMMENT_LIMIT, renderComment } from '../../src/core/render/comment.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderSarif } from '../../src/core/render/sarif.js';
 import { checkpointConfig } from '../support/scenario-repo.js';
+
+/** One memory of positional computations for the file, as the gate keeps one per run. */
+const memo = createScanMemo();
 
 function gateOver(
   files: { path: string; base: Record<string, unknown>; head: Record<string, unknown> }[],
@@ -17,8 +21,8 @@ function gateOver(
 ) {
   const configs: ChangedConfig[] = files.map((f) => ({
     change: { status: 'modified', path: f.path, previousPath: null },
-    base: inspectModel(checkpointConfig(f.base), f.path, options),
-    head: inspectModel(checkpointConfig(f.head), f.path, options),
+    base: inspectModel(checkpointConfig(f.base), f.path, { memo, ...options }),
+    head: inspectModel(checkpointConfig(f.head), f.path, { memo, ...options }),
     judging: BUILT_IN_JUDGING,
   }));
   return decide({

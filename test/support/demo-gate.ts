@@ -1,8 +1,9 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
-import { createGitReader } from '../../src/adapters/git.js';
+import { createGitReader, gitContentSource } from '../../src/adapters/git.js';
 import type { GateReport } from '../../src/core/report/types.js';
 import { runGate } from '../../src/core/gate.js';
+import { createScanMemo } from '../../src/core/metrics/scan-memo.js';
 import type { ServingPatch } from '../../src/core/model.js';
 import { scenarioRepo, type ScenarioRepo, type Tree } from './scenario-repo.js';
 
@@ -27,7 +28,17 @@ export function demoTrees(): { base: Record<string, string>; head: Record<string
   return { base: readTree(join(DEMO, 'base')), head: readTree(join(DEMO, 'head')) };
 }
 
-/** Runs the gate over a base and a head tree in a temporary git repository, as `diff` does. */
+/**
+ * One memory of positional computations for every gate run of a test worker: a pure
+ * computation's result depends on its arguments alone (`scan-memo.ts`), so the demo's codes and
+ * spans, judged again with each remedy applied, are computed once, not once per run.
+ */
+const memo = createScanMemo();
+
+/**
+ * Runs the gate over a base and a head tree in a temporary git repository, as `diff` does (the
+ * same content source), the positional computations shared across runs.
+ */
 export async function gateOver(
   base: Tree,
   head: Tree,
@@ -36,16 +47,14 @@ export async function gateOver(
   const repo = scenarioRepo(base, head);
   const git = createGitReader(repo.dir);
   try {
-    const report = await runGate(
-      { read: (ref, path) => git.show(ref, path) },
-      {
-        base: repo.base,
-        head: repo.head,
-        changes: await git.changedFiles(repo.base, repo.head),
-        policyPath: '.github/context-reach.yml',
-        overrides,
-      },
-    );
+    const report = await runGate(gitContentSource(git), {
+      base: repo.base,
+      head: repo.head,
+      changes: await git.changedFiles(repo.base, repo.head),
+      policyPath: '.github/context-reach.yml',
+      overrides,
+      memo,
+    });
     return { report, repo };
   } finally {
     repo.remove();
