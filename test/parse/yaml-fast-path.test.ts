@@ -2,7 +2,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { readBlockYaml, coreScalar } from '../../src/core/parse/yaml-block.js';
-import { MAX_ENTRIES, MAX_TOKENS, readYamlSource } from '../../src/core/parse/source.js';
+import { readYamlSource } from '../../src/core/parse/source.js';
 import { parseDocument } from 'yaml';
 import { outcome } from './helpers.js';
 
@@ -170,37 +170,5 @@ describe('the fast block-YAML reader gives what the YAML path gives', () => {
     expect(outcomes.read).toBeGreaterThan(60);
     expect(outcomes.refused).toBeGreaterThan(20);
     expect(outcomes.left).toBeGreaterThan(60);
-  });
-
-  test('more than MAX_ENTRIES entries: the same refusal at the same line', () => {
-    // Few enough tokens for the YAML path to count entries: top-level keys and list items.
-    const keys = (n: number) => Array.from({ length: n }, (_, i) => `k${i}: 1`).join('\n');
-    const items = (n: number, pad = '  ') =>
-      Array.from({ length: n }, () => `${pad}- 1`).join('\n');
-    for (const text of [
-      `${keys(MAX_ENTRIES + 1)}\n`,
-      `a:\n${items(30_000)}\nb:\n${items(21_000)}\nc: 1\n`,
-      `a:\n  b:\n${items(10_000, '    ')}\n  c: 2\nd:\n${items(41_000)}\n`,
-    ]) {
-      const yamlSays = viaYaml(text) as { refused: string; line: number };
-      expect(yamlSays.refused).toMatch(`more than ${MAX_ENTRIES} keys and list items`);
-      expect(viaFast(text)).toEqual(yamlSays);
-    }
-  });
-
-  test('more than MAX_TOKENS tokens: the same refusal, counted by the lexer near the bound', () => {
-    const text = `x:\n${'  - 1\n'.repeat(100_000)}`;
-    const yamlSays = viaYaml(text) as { refused: string };
-    expect(yamlSays.refused).toMatch(`more than ${MAX_TOKENS} syntax tokens`);
-    expect(viaFast(text)).toEqual(yamlSays);
-  });
-
-  test('a duplicate key among 40,000 is found at its line, after the bounds, as on the YAML path', () => {
-    const keys = Array.from({ length: 40_000 }, (_, i) => `  k${i}: ${i}`);
-    keys.push('  k17: 1');
-    const text = `notes:\n${keys.join('\n')}\n`;
-    const fast = viaFast(text) as { refused: string; line: number };
-    expect(fast.refused).toMatch(/line 40002: duplicate key "k17"/);
-    expect(fast).toEqual(viaYaml(text));
   });
 });
