@@ -55,6 +55,8 @@ interface Changes {
   changes: ChangedFile[];
   source: ContentSource;
   notices: string[];
+  /** The changes and contents come from the local repository (not the API). */
+  local: boolean;
 }
 
 /** Changes read from the local repository: the whole diff, every file through a few git processes. */
@@ -78,6 +80,7 @@ async function localChanges(
       exists: async (ref, path) => (await git.entry(ref, path)) !== null,
     },
     notices: [],
+    local: true,
   };
 }
 
@@ -141,6 +144,7 @@ async function gatherChanges(
     // Every version in a few requests (trees and GraphQL), not one contents request each.
     source: createApiContentSource(api, { owner: event.owner, repo: event.repo, warn }),
     notices: [],
+    local: false,
   };
 }
 
@@ -196,16 +200,30 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   }
   const api = connect();
   const git = deps.createGit(env.GITHUB_WORKSPACE ?? '.');
-  const gathered = await gatherChanges(event, event.base, git, api, (m) => out.warning(m));
-
-  let labels = event.labels;
-  if (api && event.pullNumber !== null) {
-    // Labels added after the event (the usual way to apply a waiver) count on a re-run.
-    labels = await api.getPullRequest(event.owner, event.repo, event.pullNumber).then(
-      (pr) => pr.labels,
-      () => event.labels,
-    );
+  // Labels added after the event (the usual way to apply a waiver) count on a re-run. Asked for
+  // now, so the request (and loading the API client) runs while git lists the changes.
+  const labelsAsked =
+    api && event.pullNumber !== null
+      ? api.getPullRequest(event.owner, event.repo, event.pullNumber).then(
+          (pr) => pr.labels,
+          () => event.labels,
+        )
+      : Promise.resolve(event.labels);
+  let gathered: Changes;
+  try {
+    gathered = await gatherChanges(event, event.base, git, api, (m) => out.warning(m));
+  } catch (error) {
+    await labelsAsked;
+    throw error;
   }
+  if (gathered.local && settings.comment === 'update' && event.pullNumber !== null && api) {
+    // Which account the token acts as, asked while the gate computes: the comment is written
+    // as soon as the report is ready. (The client keeps the answer; an error comes back when
+    // the comment asks.) Only when git gave the changes: reading them through the API uses
+    // the same GraphQL endpoint, whose requests then keep their order.
+    api.identity().catch(() => undefined);
+  }
+  const labels = await labelsAsked;
 
   let report: GateReport;
   try {
