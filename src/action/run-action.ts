@@ -100,7 +100,10 @@ async function gatherChanges(
 ): Promise<Changes> {
   // A checkout without the history (or without git at all) falls back to the API.
   const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
-  const [baseSha, headSha] = await Promise.all([local(base), local(event.head)]);
+  // Both in one git process; when that fails as a whole, each on its own as before.
+  const [baseSha = null, headSha = null] =
+    (await git.resolveCommits([base, event.head]).catch(() => null)) ??
+    (await Promise.all([local(base), local(event.head)]));
   if (baseSha !== null && headSha !== null) return localChanges(git, baseSha, headSha, null);
   if (api === null || event.pullNumber === null) {
     throw new Error(
