@@ -18,10 +18,11 @@ import {
   type GitHubClient,
   type GitHubClientOptions,
   type ReviewApi,
+  type ReviewTarget,
 } from '../adapters/github-rest.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { publishComment } from './report-comment.js';
-import { publishSuggestions } from './review-suggestions.js';
+import { patchesNeeded, publishSuggestions } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
@@ -263,6 +264,30 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     return;
   }
 
+  // Review suggestions need the pull request's patches (30 pages of the file list at 3,000
+  // files): asked for now, so they arrive while the reports are written and the comment published.
+  let suggesting: {
+    reviews: ReviewApi;
+    target: ReviewTarget & { isFork: boolean };
+    patchesAsked: Promise<Map<string, string>> | null;
+  } | null = null;
+  if (settings.suggestions === 'on' && event.pullNumber !== null && api) {
+    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, {
+      baseUrl: env.GITHUB_API_URL,
+    });
+    const target = {
+      owner: event.owner,
+      repo: event.repo,
+      pull: event.pullNumber,
+      headSha: gathered.head,
+      isFork: event.isFork,
+    };
+    const patchesAsked = patchesNeeded(target, report) ? reviews.listPatches(target) : null;
+    // Its failure is publishSuggestions' to report, when it awaits the answer.
+    patchesAsked?.catch(() => undefined);
+    suggesting = { reviews, target, patchesAsked };
+  }
+
   const server = env.GITHUB_SERVER_URL ?? 'https://github.com';
   const blobUrl = `${server}/${event.owner}/${event.repo}/blob/${gathered.head}`;
   const { annotations, omitted } = planAnnotations(report);
@@ -311,17 +336,8 @@ export async function runAction(deps: ActionDeps): Promise<void> {
       runNotices.push(notice);
     }
   }
-  if (settings.suggestions === 'on' && event.pullNumber !== null && api) {
-    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, {
-      baseUrl: env.GITHUB_API_URL,
-    });
-    const target = {
-      owner: event.owner,
-      repo: event.repo,
-      pull: event.pullNumber,
-      headSha: gathered.head,
-      isFork: event.isFork,
-    };
+  if (suggesting) {
+    const { reviews, target, patchesAsked } = suggesting;
     // The head texts in one batched read (one pair of git processes), not one read per file.
     const source = gathered.source;
     const readHeads = (paths: string[]) =>
@@ -332,7 +348,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
               source.read(gathered.head, path).catch((error: unknown) => error as Error),
             ),
           );
-    await publishSuggestions(reviews, target, report, readHeads).then(
+    await publishSuggestions(reviews, target, report, readHeads, patchesAsked).then(
       ({ outcome, notice }) => {
         if (notice) {
           out.notice(notice);
