@@ -102,6 +102,21 @@ export async function syncSuggestions(
   return outcome;
 }
 
+/** Files with a blocking finding that has a fix: where suggestions may go. */
+function filesWithFixes(
+  report: import('../core/report/types.js').GateReport,
+): import('../core/report/types.js').FileDecision[] {
+  return report.files.filter((f) => f.findings.some((x) => x.counts === 'block' && x.remedy));
+}
+
+/** Whether `publishSuggestions` will list the pull request's patches for this report. */
+export function patchesNeeded(
+  target: { isFork: boolean },
+  report: import('../core/report/types.js').GateReport,
+): boolean {
+  return !target.isFork && filesWithFixes(report).length > 0;
+}
+
 /** Said when suggestions are skipped because the token may not write them. */
 export const SUGGESTIONS_SKIPPED =
   'Review suggestions were skipped: the token cannot write review comments on this pull request (a read-only token, as pull requests from forks get). The fixes are in the report comment and the job summary.';
@@ -117,12 +132,12 @@ export async function publishSuggestions(
   report: import('../core/report/types.js').GateReport,
   /** The head versions of `paths`, in order, read at once (null or an Error where one cannot be read). */
   readHeads: (paths: string[]) => Promise<(Uint8Array | null | Error)[]>,
+  /** `api.listPatches(target)` when the caller asked for it already (`patchesNeeded`). */
+  patchesAsked: Promise<Map<string, string>> | null = null,
 ): Promise<{ outcome: SuggestionOutcome | null; notice: string | null }> {
   if (target.isFork) return { outcome: null, notice: SUGGESTIONS_SKIPPED };
   const { planSuggestions } = await import('../core/render/suggestions.js');
-  const blocking = report.files.filter((f) =>
-    f.findings.some((x) => x.counts === 'block' && x.remedy),
-  );
+  const blocking = filesWithFixes(report);
   const texts = new Map<string, string>();
   const heads = await readHeads(blocking.map((file) => file.path)).catch(() => []);
   for (const [i, file] of blocking.entries()) {
@@ -131,7 +146,10 @@ export async function publishSuggestions(
       texts.set(file.path, decodeUtf8Lenient(bytes).replace(/^\uFEFF/, ''));
   }
   try {
-    const patches = blocking.length > 0 ? await api.listPatches(target) : new Map<string, string>();
+    const patches =
+      blocking.length > 0
+        ? await (patchesAsked ?? api.listPatches(target))
+        : new Map<string, string>();
     const lines = new Map([...patches].map(([path, patch]) => [path, diffRightLines(patch)]));
     return {
       outcome: await syncSuggestions(api, target, planSuggestions(report, texts, lines)),

@@ -18,10 +18,11 @@ import {
   type GitHubClient,
   type GitHubClientOptions,
   type ReviewApi,
+  type ReviewTarget,
 } from '../adapters/github-rest.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { publishComment } from './report-comment.js';
-import { publishSuggestions } from './review-suggestions.js';
+import { patchesNeeded, publishSuggestions } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
@@ -55,6 +56,8 @@ interface Changes {
   changes: ChangedFile[];
   source: ContentSource;
   notices: string[];
+  /** The changes and contents come from the local repository (not the API). */
+  local: boolean;
 }
 
 /** Changes read from the local repository: the whole diff, every file through a few git processes. */
@@ -78,6 +81,7 @@ async function localChanges(
       exists: async (ref, path) => (await git.entry(ref, path)) !== null,
     },
     notices: [],
+    local: true,
   };
 }
 
@@ -97,7 +101,10 @@ async function gatherChanges(
 ): Promise<Changes> {
   // A checkout without the history (or without git at all) falls back to the API.
   const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
-  const [baseSha, headSha] = await Promise.all([local(base), local(event.head)]);
+  // Both in one git process; when that fails as a whole, each on its own as before.
+  const [baseSha = null, headSha = null] =
+    (await git.resolveCommits([base, event.head]).catch(() => null)) ??
+    (await Promise.all([local(base), local(event.head)]));
   if (baseSha !== null && headSha !== null) return localChanges(git, baseSha, headSha, null);
   if (api === null || event.pullNumber === null) {
     throw new Error(
@@ -141,6 +148,7 @@ async function gatherChanges(
     // Every version in a few requests (trees and GraphQL), not one contents request each.
     source: createApiContentSource(api, { owner: event.owner, repo: event.repo, warn }),
     notices: [],
+    local: false,
   };
 }
 
@@ -196,16 +204,30 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   }
   const api = connect();
   const git = deps.createGit(env.GITHUB_WORKSPACE ?? '.');
-  const gathered = await gatherChanges(event, event.base, git, api, (m) => out.warning(m));
-
-  let labels = event.labels;
-  if (api && event.pullNumber !== null) {
-    // Labels added after the event (the usual way to apply a waiver) count on a re-run.
-    labels = await api.getPullRequest(event.owner, event.repo, event.pullNumber).then(
-      (pr) => pr.labels,
-      () => event.labels,
-    );
+  // Labels added after the event (the usual way to apply a waiver) count on a re-run. Asked for
+  // now, so the request (and loading the API client) runs while git lists the changes.
+  const labelsAsked =
+    api && event.pullNumber !== null
+      ? api.getPullRequest(event.owner, event.repo, event.pullNumber).then(
+          (pr) => pr.labels,
+          () => event.labels,
+        )
+      : Promise.resolve(event.labels);
+  let gathered: Changes;
+  try {
+    gathered = await gatherChanges(event, event.base, git, api, (m) => out.warning(m));
+  } catch (error) {
+    await labelsAsked;
+    throw error;
   }
+  if (gathered.local && settings.comment === 'update' && event.pullNumber !== null && api) {
+    // Which account the token acts as, asked while the gate computes: the comment is written
+    // as soon as the report is ready. (The client keeps the answer; an error comes back when
+    // the comment asks.) Only when git gave the changes: reading them through the API uses
+    // the same GraphQL endpoint, whose requests then keep their order.
+    api.identity().catch(() => undefined);
+  }
+  const labels = await labelsAsked;
 
   let report: GateReport;
   try {
@@ -240,6 +262,30 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     setOutputs(out, { verdict: 'block', blocking: 1, warnings: 0 }, '', commentUrl);
     out.fail(message);
     return;
+  }
+
+  // Review suggestions need the pull request's patches (30 pages of the file list at 3,000
+  // files): asked for now, so they arrive while the reports are written and the comment published.
+  let suggesting: {
+    reviews: ReviewApi;
+    target: ReviewTarget & { isFork: boolean };
+    patchesAsked: Promise<Map<string, string>> | null;
+  } | null = null;
+  if (settings.suggestions === 'on' && event.pullNumber !== null && api) {
+    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, {
+      baseUrl: env.GITHUB_API_URL,
+    });
+    const target = {
+      owner: event.owner,
+      repo: event.repo,
+      pull: event.pullNumber,
+      headSha: gathered.head,
+      isFork: event.isFork,
+    };
+    const patchesAsked = patchesNeeded(target, report) ? reviews.listPatches(target) : null;
+    // Its failure is publishSuggestions' to report, when it awaits the answer.
+    patchesAsked?.catch(() => undefined);
+    suggesting = { reviews, target, patchesAsked };
   }
 
   const server = env.GITHUB_SERVER_URL ?? 'https://github.com';
@@ -290,17 +336,8 @@ export async function runAction(deps: ActionDeps): Promise<void> {
       runNotices.push(notice);
     }
   }
-  if (settings.suggestions === 'on' && event.pullNumber !== null && api) {
-    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, {
-      baseUrl: env.GITHUB_API_URL,
-    });
-    const target = {
-      owner: event.owner,
-      repo: event.repo,
-      pull: event.pullNumber,
-      headSha: gathered.head,
-      isFork: event.isFork,
-    };
+  if (suggesting) {
+    const { reviews, target, patchesAsked } = suggesting;
     // The head texts in one batched read (one pair of git processes), not one read per file.
     const source = gathered.source;
     const readHeads = (paths: string[]) =>
@@ -311,7 +348,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
               source.read(gathered.head, path).catch((error: unknown) => error as Error),
             ),
           );
-    await publishSuggestions(reviews, target, report, readHeads).then(
+    await publishSuggestions(reviews, target, report, readHeads, patchesAsked).then(
       ({ outcome, notice }) => {
         if (notice) {
           out.notice(notice);

@@ -39,6 +39,8 @@ export interface GitReader {
   hasCommit(rev: string): Promise<boolean>;
   /** Full object id of the commit `rev` names, or null when there is none. */
   resolveCommit(rev: string): Promise<string | null>;
+  /** `resolveCommit` of each revision, in order, in one git process. */
+  resolveCommits(revs: readonly string[]): Promise<(string | null)[]>;
   /** Files that differ between two commits, renames detected (`git diff --name-status -M -z`). */
   changedFiles(base: string, head: string): Promise<ChangedFile[]>;
   /** The tree entry at `path` in `commit`, or null when absent; symlinks are reported, never followed. */
@@ -231,6 +233,8 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
   const remember = (commit: string, path: string | null, entry: TreeEntry | null) => {
     if (path !== null && FULL_ID.test(commit)) known.set(knownKey(commit, path), entry);
   };
+  /** Sizes of blobs `cat-file --batch-check` gave, by object id (a blob's size never changes). */
+  const sizeOf = new Map<string, number>();
 
   async function resolveCommit(rev: string): Promise<string | null> {
     const args = ['rev-parse', '--verify', '--quiet', `${checkRevision(rev)}^{commit}`];
@@ -239,6 +243,33 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
     // --quiet turns "no such commit" into exit status 1 and nothing else.
     if (result.code === 1) return null;
     throw failed(args, result);
+  }
+
+  /**
+   * Several revisions in one `cat-file --batch-check` of `<rev>^{commit}` lines: git answers
+   * `<id> commit <size>` for a commit, `<line> missing` where `rev-parse --verify` finds none
+   * (no such name, or an object that does not peel to a commit). Revisions are checked as for
+   * `resolveCommit`, so no line holds a space or a line break.
+   */
+  async function resolveCommits(revs: readonly string[]): Promise<(string | null)[]> {
+    const names = revs.map((rev) => `${checkRevision(rev)}^{commit}`);
+    if (names.length === 0) return [];
+    const args = ['cat-file', '--batch-check'];
+    const result = await run(args, names.length * 400 + 4096, `${names.join('\n')}\n`);
+    if (result.code !== 0) throw failed(args, result);
+    const lines = result.stdout.toString('utf8').split('\n');
+    return names.map((name, i) => {
+      const line = lines[i] ?? '';
+      const found = /^([0-9a-f]{40}|[0-9a-f]{64}) commit \d+$/.exec(line);
+      if (found) return found[1]!;
+      if (line === `${name} missing` || line === `${name} ambiguous`) return null;
+      throw new GitError(
+        `git cat-file --batch-check answered ${JSON.stringify(line)} for ${name}; expected a commit id or "missing"`,
+        args,
+        null,
+        result.stderr,
+      );
+    });
   }
 
   async function entry(commit: string, path: string): Promise<TreeEntry | null> {
@@ -331,8 +362,14 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
    * Sizes of blobs by object id from one `cat-file --batch-check` (null for an object that is
    * missing or not a blob), so nothing over the size limit is ever read.
    */
-  async function blobSizes(oids: string[]): Promise<Map<string, number | Error | null>> {
+  async function blobSizes(all: string[]): Promise<Map<string, number | Error | null>> {
     const sizes = new Map<string, number | Error | null>();
+    // An object id names the same bytes for ever: a size asked once is not asked again.
+    const oids = all.filter((oid) => {
+      if (!sizeOf.has(oid)) return true;
+      sizes.set(oid, sizeOf.get(oid)!);
+      return false;
+    });
     if (oids.length === 0) return sizes;
     const args = ['cat-file', '--batch-check'];
     const result = await run(args, oids.length * 128 + 4096, `${oids.join('\n')}\n`);
@@ -350,7 +387,11 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
             '',
           ),
         );
-      else sizes.set(oid, type === 'blob' && size !== undefined ? Number(size) : null);
+      else {
+        const answer = type === 'blob' && size !== undefined ? Number(size) : null;
+        sizes.set(oid, answer);
+        if (answer !== null) sizeOf.set(oid, answer);
+      }
     });
     return sizes;
   }
@@ -452,6 +493,7 @@ export function createGitReader(cwd: string, options: GitReaderOptions = {}): Gi
       return (await resolveCommit(rev)) !== null;
     },
     resolveCommit,
+    resolveCommits,
     async changedFiles(base, head) {
       // `--raw` is `--name-status` with both sides' modes and blob ids: the blobs are then read
       // without listing any tree again.

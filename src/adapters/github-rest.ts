@@ -203,6 +203,9 @@ type Octokit = ReturnType<typeof getOctokit>;
 /** Pages of comments read at most, 100 each: past that a pull request is not a place to search. */
 const MAX_COMMENT_PAGES = 100;
 
+/** The identity look-up of an installation token: a read, which changes nothing. */
+const VIEWER_QUERY = 'query { viewer { login } }';
+
 let clientCount = 0;
 
 function toComment(data: {
@@ -390,6 +393,15 @@ export function isWriteRefused(error: unknown): boolean {
   );
 }
 
+/**
+ * Whether a GraphQL document only reads: it starts with a selection set or `query`, and the word
+ * `mutation` or `subscription` appears nowhere in it (a name or a string that holds the word
+ * counts against it: a doubtful document is spaced as a write).
+ */
+export function isReadOnlyQuery(document: string): boolean {
+  return /^\s*(?:query\b|\{)/.test(document) && !/(?:mutation|subscription)/i.test(document);
+}
+
 export function createGitHubClient(token: string, options: GitHubClientOptions): GitHubClient {
   const msPerSecond = options.msPerSecond ?? 1000;
   const rateLimitRetries = options.rateLimitRetries ?? 2;
@@ -438,6 +450,15 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
   clientCount += 1;
   const limiterId = `context-reach-${clientCount}`;
   let octokit!: Octokit;
+  /**
+   * The client for GraphQL queries that change nothing (never a mutation): GitHub counts such a
+   * query like a GET (REST documentation, "Rate limits for the REST API", "Calculating points for
+   * the secondary rate limit": 1 point, a mutation 5), but the throttling plugin spaces every
+   * request to /graphql like a write, so a look-up would hold the next real write back a second.
+   * Same token, retries, timeouts, log and rate-limit handling, the same concurrency limiter id;
+   * queries still run one at a time. Writes never go through it (`readOnlyQuery`).
+   */
+  let queries!: Octokit;
   let loading: Promise<void> | null = null;
   // The Octokit stack is loaded and built on the first call (see `octokit.ts` for why).
   const connect = () =>
@@ -455,28 +476,36 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
             maxConcurrent: 1,
             minTime: seconds * msPerSecond,
           });
-        octokit = getOctokit(
-          token,
-          {
-            baseUrl: options.baseUrl ?? 'https://api.github.com',
-            log,
-            request: { ...actionsDefaults.request, fetch: timedFetch },
-            retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
-            throttle: {
-              // One limiter set per client: spacing between writes is per run, not shared across clients.
-              id: limiterId,
-              write: spaced('write', 1),
-              notifications: spaced('notifications', 3),
-              retryAfterBaseValue: msPerSecond,
-              onRateLimit: limitHandler('rate limit'),
-              onSecondaryRateLimit: limitHandler('secondary rate limit'),
+        const notifications = spaced('notifications', 3);
+        const build = (write: InstanceType<typeof Bottleneck.Group>) =>
+          getOctokit(
+            token,
+            {
+              baseUrl: options.baseUrl ?? 'https://api.github.com',
+              log,
+              request: { ...actionsDefaults.request, fetch: timedFetch },
+              retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
+              throttle: {
+                // One limiter set per client: spacing between writes is per run, not shared across clients.
+                id: limiterId,
+                write,
+                notifications,
+                retryAfterBaseValue: msPerSecond,
+                onRateLimit: limitHandler('rate limit'),
+                onSecondaryRateLimit: limitHandler('secondary rate limit'),
+              },
             },
-          },
-          retry,
-          throttling,
-        );
+            retry,
+            throttling,
+          );
+        octokit = build(spaced('write', 1));
+        queries = build(spaced('query', 0));
       },
     ));
+
+  /** The client a GraphQL document goes through: the unspaced one only for a read-only query. */
+  const readOnlyQuery = (document: string): Octokit =>
+    isReadOnlyQuery(document) ? queries : octokit;
 
   async function call<T>(operation: string, run: () => Promise<T>): Promise<T> {
     try {
@@ -516,9 +545,9 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
       }
       try {
         return await call('read the authenticated identity (GraphQL viewer)', async () => {
-          const answer = await octokit.graphql<{ viewer?: { login?: unknown } }>(
-            'query { viewer { login } }',
-          );
+          const answer = await readOnlyQuery(VIEWER_QUERY).graphql<{
+            viewer?: { login?: unknown };
+          }>(VIEWER_QUERY);
           return typeof answer.viewer?.login === 'string' && answer.viewer.login !== ''
             ? answer.viewer.login
             : null;
@@ -728,7 +757,7 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     graphql(query, variables, maxBytes) {
       return call('run a GraphQL query', async () => {
         // The answer is read as a stream, so a bound holds however much GitHub sends.
-        const response = await octokit.request('POST /graphql', {
+        const response = await readOnlyQuery(query).request('POST /graphql', {
           query,
           variables,
           request: { parseSuccessResponseBody: false },

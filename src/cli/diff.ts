@@ -95,9 +95,12 @@ export async function outReport(
   if (batch !== '') io.out(batch);
 }
 
+const noCommit = (flag: string, rev: string) =>
+  new UsageError(`${flag} ${rev} names no commit in this repository`);
+
 export async function commitOf(git: GitReader, rev: string, flag: string): Promise<string> {
   const sha = await git.resolveCommit(rev);
-  if (sha === null) throw new UsageError(`${flag} ${rev} names no commit in this repository`);
+  if (sha === null) throw noCommit(flag, rev);
   return sha;
 }
 
@@ -148,11 +151,18 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
 
   const git = createGitReader(io.cwd);
   if (values.head === undefined) return diffWorktree(git, values, format, failOn, io);
-  const head = await commitOf(git, values.head, '--head');
-  const base =
-    values.base !== undefined
-      ? await commitOf(git, values.base, '--base')
-      : await defaultBase(git, head);
+  let head: string;
+  let base: string;
+  if (values.base !== undefined) {
+    // Both in one git process; each named in its own message when it names no commit.
+    const [headSha = null, baseSha = null] = await git.resolveCommits([values.head, values.base]);
+    if (headSha === null) throw noCommit('--head', values.head);
+    if (baseSha === null) throw noCommit('--base', values.base);
+    [head, base] = [headSha, baseSha];
+  } else {
+    head = await commitOf(git, values.head, '--head');
+    base = await defaultBase(git, head);
+  }
   // Changes since head left the base (as a pull request shows them); the policy from the base itself.
   const start = (await git.mergeBase(base, head)) ?? base;
   const changes = await git.changedFiles(start, head);

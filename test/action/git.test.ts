@@ -258,6 +258,45 @@ describe('hasCommit(rev), resolveCommit(rev), mergeBase(a, b)', () => {
     expect(await reader.resolveCommit('no-such-branch')).toBeNull();
   });
 
+  test('resolveCommits(revs) answers what `git rev-parse --verify --quiet <rev>^{commit}` answers, in one process', async () => {
+    git('tag', 'v-light', base);
+    git('tag', '-a', '-m', 'annotated', 'v-annotated', head);
+    const treeId = git('rev-parse', 'HEAD^{tree}');
+    const blobId = git('rev-parse', 'HEAD:models/stays.json');
+    const revs = [
+      head,
+      base,
+      'main',
+      'HEAD~1',
+      'v-light',
+      'v-annotated',
+      base.slice(0, 12),
+      'no-such-branch',
+      '0123456789abcdef0123456789abcdef01234567',
+      treeId,
+      blobId,
+      'HEAD:models/stays.json',
+      'HEAD~9',
+    ];
+    // The outside answer: git's own rev-parse, one process per revision.
+    const expected = revs.map((rev) => {
+      try {
+        return execFileSync('git', ['rev-parse', '--verify', '--quiet', `${rev}^{commit}`], {
+          cwd: repo,
+          encoding: 'utf8',
+          stdio: ['ignore', 'pipe', 'ignore'],
+        }).trim();
+      } catch {
+        return null;
+      }
+    });
+    expect(expected.filter((sha) => sha !== null)).toHaveLength(7);
+    expect(await reader.resolveCommits(revs)).toEqual(expected);
+    expect(await reader.resolveCommits([])).toEqual([]);
+    await expect(reader.resolveCommits([head, '--output=/tmp/x'])).rejects.toThrow(/not usable/);
+    await expect(reader.resolveCommits(['HEAD\nmain'])).rejects.toThrow(/not usable/);
+  });
+
   test('mergeBase of a commit and its descendant is the commit', async () => {
     expect(await reader.mergeBase(base, head)).toBe(git('merge-base', base, head));
     expect(await reader.mergeBase(base, head)).toBe(base);

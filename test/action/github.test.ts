@@ -4,6 +4,7 @@ import {
   createGitHubClient,
   isNotFoundError,
   isPermissionError,
+  isReadOnlyQuery,
 } from '../../src/adapters/github-rest.js';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/adapters/content-limit.js';
 import { publishComment } from '../../src/action/report-comment.js';
@@ -258,6 +259,39 @@ describe('comments', () => {
     // unit for that.
     expect(at[1]! - at[0]!).toBeGreaterThanOrEqual(2.5 * unit);
     expect(at[2]! - at[0]!).toBeGreaterThanOrEqual(1.5 * unit);
+  });
+
+  test('a GraphQL query that only reads is not spaced like a write; the writes around it still are', async () => {
+    // GitHub counts a GraphQL query without mutations like a GET (REST documentation, "Rate limits
+    // for the REST API", "Calculating points for the secondary rate limit": 1 point; a mutation or
+    // a POST, PATCH, PUT or DELETE, 5); the throttling plugin spaces every /graphql request.
+    const unit = 200;
+    const api = client({ msPerSecond: unit });
+    await api.createComment(OWNER, REPO, 7, 'one');
+    // The installation token cannot read /user: the identity comes from the GraphQL viewer.
+    expect(await api.identity()).toBe(fake.state.tokenUser.login);
+    await api.createComment(OWNER, REPO, 7, 'two');
+    const posts = fake.requests.filter((r) => r.method === 'POST' && r.path !== '/graphql');
+    const query = fake.requests.filter((r) => r.path === '/graphql');
+    expect(posts).toHaveLength(2);
+    expect(query).toHaveLength(1);
+    expect(query[0]!.at - posts[0]!.at).toBeLessThan(0.5 * unit);
+    expect(posts[1]!.at - posts[0]!.at).toBeGreaterThanOrEqual(2.5 * unit);
+  });
+
+  test('isReadOnlyQuery(…) takes a query or a bare selection set, and nothing that names a mutation or subscription', () => {
+    // GraphQL specification, "Operations": an operation is a query, a mutation or a subscription,
+    // and a document of one bare selection set is a query.
+    expect(isReadOnlyQuery('query { viewer { login } }')).toBe(true);
+    expect(isReadOnlyQuery('  { viewer { login } }')).toBe(true);
+    expect(isReadOnlyQuery('query($owner: String!) { repository(owner: $owner) { id } }')).toBe(
+      true,
+    );
+    expect(isReadOnlyQuery('mutation { addComment(input: {}) { clientMutationId } }')).toBe(false);
+    expect(isReadOnlyQuery('subscription { x }')).toBe(false);
+    expect(isReadOnlyQuery('query { a } mutation { b }')).toBe(false);
+    expect(isReadOnlyQuery('query Mutation { viewer { login } }')).toBe(false);
+    expect(isReadOnlyQuery('queryx { a }')).toBe(false);
   });
 
   test('findComment(…) takes the oldest bot comment that starts with the marker', async () => {

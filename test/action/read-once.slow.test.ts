@@ -119,8 +119,11 @@ describe('one run of diff on a pull request with blocking findings', () => {
       .filter((f) => f.severity === 'block' && f.remedy !== undefined);
     expect(remedied.length).toBeGreaterThanOrEqual(30);
     expect(big.starts.length).toBe(few.starts.length);
-    // Discovery once (rev-parse, merge-base, one diff), the policy, and the blobs in one batch.
-    expect(big.starts.length).toBeLessThanOrEqual(10);
+    // Discovery once (both revisions in one cat-file, merge-base, one diff), the policy, and the
+    // blobs in one batch: seven processes (eight before both revisions were resolved together).
+    expect(big.starts.length).toBeLessThanOrEqual(7);
+    expect(big.starts.filter((s) => s.includes('rev-parse'))).toHaveLength(0);
+    expect(big.starts.filter((s) => s.includes('cat-file --batch-check'))).toHaveLength(2); // revisions, sizes
     expect(big.starts.filter((s) => s.includes(' diff '))).toHaveLength(1);
     expect(big.starts.filter((s) => s.includes('merge-base'))).toHaveLength(1);
     expect(
@@ -202,5 +205,13 @@ describe('one run of the action on a pull request with blocking findings', () =>
     expect(big.length).toBe(few.length);
     // The policy, every config version, and the head texts of the files with a fix.
     expect(batches(big)).toBeLessThanOrEqual(3);
+    // Revisions in one process, blob sizes asked once (the head texts reuse them): eight in all
+    // (ten before).
+    expect(big.filter((x) => x.includes('cat-file --batch-check'))).toHaveLength(2);
+    expect(big.filter((x) => x.includes('rev-parse'))).toHaveLength(0);
+    // (The log also holds the harness's own git calls that build the repository.)
+    const reader = big.filter((x) => x.startsWith('-c core.fsmonitor=false'));
+    expect(reader.length).toBeGreaterThan(0);
+    expect(reader.length).toBeLessThanOrEqual(8);
   }, 240_000);
 });

@@ -86,6 +86,26 @@ describe("the comment is recognised by the token's own identity", () => {
   });
 });
 
+describe('reads the publishing needs are asked for early (issue 16)', () => {
+  it('the identity before the comment is looked for, the patches before it is written; still one comment and the review', async () => {
+    // Each is a read: asked for while the gate computes and the reports are written, so no write
+    // waits on it. The outcome is what asking late gave: one comment, the suggestions planned.
+    const fake = await startFakeGitHub();
+    for (let run = 0; run < 2; run += 1) {
+      const result = await scenario({ fake });
+      expect(result.error).toBeNull();
+      expect(result.out.outputs.verdict).toBe('block');
+    }
+    expect(marked(fake)).toHaveLength(1);
+    const first = (operation: string) => fake.calls(operation)[0]!.at;
+    expect(first('graphql')).toBeLessThan(first('issues/list-comments'));
+    expect(first('pulls/list-files')).toBeLessThan(first('issues/create-comment'));
+    // Two runs, each listing the patches once and asking the identity of its own client once.
+    expect(fake.calls('pulls/list-files')).toHaveLength(2);
+    expect(fake.calls('graphql')).toHaveLength(2);
+  });
+});
+
 describe('runs at the same time converge on one comment (point 7)', () => {
   it('two runs that each created a comment ("Passes" and "Blocked"): the next write keeps the oldest and deletes the other', async () => {
     const fake = await startFakeGitHub();

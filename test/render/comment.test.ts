@@ -5,7 +5,13 @@ import { BUILT_IN_JUDGING } from '../../src/core/policy/judging.js';
 import { inspectModel, type InspectOptions } from '../../src/core/inspect.js';
 import { createScanMemo } from '../../src/core/metrics/scan-memo.js';
 import { PER_DEVICE_METRICS } from '../../src/core/metrics/types.js';
-import { COMMENT_LIMIT, renderComment } from '../../src/core/render/comment.js';
+import {
+  COMMENT_LIMIT,
+  effectiveParts,
+  fileSection,
+  renderComment,
+  type FileSectionParts,
+} from '../../src/core/render/comment.js';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
 import { planAnnotations } from '../../src/core/render/annotations.js';
 import { renderSarif } from '../../src/core/render/sarif.js';
@@ -103,6 +109,57 @@ describe('renderComment(report)', () => {
     expect(trimmed.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(trimmed).toContain("Trimmed to fit GitHub's comment limit");
     expect(trimmed.split('\n')[0]).toBe(COMMENT_MARKER);
+  });
+});
+
+describe('fileSection(file, ctx, parts): the forms renderComment tries', () => {
+  // renderComment renders each distinct section once per call, keyed by effectiveParts: that
+  // is exact only if a section's text depends on the form through its effective parts alone.
+  const FORMS: FileSectionParts[] = [
+    { chart: true, details: true, maxFindings: Infinity },
+    { chart: true, details: false, maxFindings: Infinity },
+    { chart: false, details: false, maxFindings: Infinity },
+    { chart: false, details: false, maxFindings: 5 },
+    { chart: false, details: false, maxFindings: 0 },
+  ];
+  const report = gateOver(
+    Array.from({ length: 12 }, (_, i) => ({
+      path: `models/m${i}/config.json`,
+      base: {},
+      head: {
+        max_position_embeddings: 4096 * (1 + (i % 4)),
+        rope_theta: 10000 * (1 + i),
+        ...(i % 3 === 0 ? { num_hidden_layers: 400 } : {}),
+      },
+    })),
+  );
+
+  it('gives the same text for a form and for its effective parts', () => {
+    const ctx = { blobUrl: 'https://github.example/o/r/blob/222' };
+    let narrowed = 0;
+    for (const file of report.files) {
+      for (const parts of FORMS) {
+        const effective = effectiveParts(file, parts);
+        if (JSON.stringify(effective) !== JSON.stringify(parts)) narrowed += 1;
+        expect(fileSection(file, ctx, effective)).toBe(fileSection(file, ctx, parts));
+      }
+    }
+    // Some forms do narrow (a chart where memory is not at issue, a cap above the findings).
+    expect(narrowed).toBeGreaterThan(0);
+  });
+
+  it('keeps what differs: details with a head version, and a cap below the number of findings', () => {
+    const nonBlocking = (f: (typeof report.files)[number]) =>
+      f.findings.filter((x) => x.counts !== 'block').length;
+    const file = report.files.find((f) => nonBlocking(f) > 0);
+    expect(file).toBeDefined();
+    expect(effectiveParts(file!, FORMS[0]!).details).toBe(true);
+    expect(effectiveParts(file!, FORMS[1]!).details).toBe(false);
+    const others = nonBlocking(file!);
+    expect(effectiveParts(file!, { ...FORMS[3]!, maxFindings: others }).maxFindings).toBe(Infinity);
+    expect(effectiveParts(file!, { ...FORMS[3]!, maxFindings: others - 1 }).maxFindings).toBe(
+      others - 1,
+    );
   });
 });
 

@@ -372,7 +372,34 @@ export interface FileSectionParts {
   maxFindings: number;
 }
 
-function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectionParts): string {
+/** Whether a file has memory at issue: a memory finding, or a finding on a memory metric (its chart is then drawn). */
+function memoryAtIssue(file: FileDecision): boolean {
+  return file.findings.some(
+    (f) =>
+      f.rule === 'memory-over-budget' ||
+      (f.metric !== undefined && f.metric !== null && MEMORY_METRICS.has(f.metric)),
+  );
+}
+
+/**
+ * The parts of a form that change this file's section: a chart only where one is drawn, details
+ * only with a head version, a cap on findings only when the file has more than it. `fileSection`
+ * gives the same text for a form and for its effective parts.
+ */
+export function effectiveParts(file: FileDecision, parts: FileSectionParts): FileSectionParts {
+  const others = file.findings.filter((f) => f.counts !== 'block').length;
+  return {
+    chart: parts.chart && file.head !== null && file.head !== undefined && memoryAtIssue(file),
+    details: parts.details && file.head !== null && file.head !== undefined,
+    maxFindings: others <= parts.maxFindings ? Infinity : parts.maxFindings,
+  };
+}
+
+export function fileSection(
+  file: FileDecision,
+  ctx: MarkdownContext,
+  parts: FileSectionParts,
+): string {
   const lines = [
     `<details${file.verdict === 'ok' ? '' : ''}><summary>${fileSummary(file)}</summary>`,
     '',
@@ -435,12 +462,7 @@ function fileSection(file: FileDecision, ctx: MarkdownContext, parts: FileSectio
     lines.push('');
   }
   // The chart where memory is at issue (a memory finding or a memory limit crossed); the HTML report draws every file's.
-  const memoryAtIssue = file.findings.some(
-    (f) =>
-      f.rule === 'memory-over-budget' ||
-      (f.metric !== undefined && f.metric !== null && MEMORY_METRICS.has(f.metric)),
-  );
-  if (parts.chart && file.head && memoryAtIssue) {
+  if (parts.chart && file.head && memoryAtIssue(file)) {
     const chart = memoryChart(file);
     if (chart) lines.push(chart, '');
   }
@@ -562,6 +584,19 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
     ...notes(report),
   ].join('\n');
   const tail = footer(report, ctx).join('\n');
+  // A file's section depends on the form only through `effectiveParts`: most sections are the
+  // same in several forms, and each distinct one is rendered once per call (a 3,000-file
+  // summary rendered about five megabytes of sections for one megabyte kept).
+  const rendered = new Map<FileDecision, Map<string, string>>();
+  const sectionOf = (file: FileDecision, parts: FileSectionParts): string => {
+    const effective = effectiveParts(file, parts);
+    const key = `${effective.chart}|${effective.details}|${effective.maxFindings}`;
+    let forms = rendered.get(file);
+    if (forms === undefined) rendered.set(file, (forms = new Map<string, string>()));
+    let section = forms.get(key);
+    if (section === undefined) forms.set(key, (section = fileSection(file, ctx, effective)));
+    return section;
+  };
   for (const [index, parts] of attempts.entries()) {
     const trimNote =
       index === 0
@@ -583,7 +618,7 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
     let length = head.length + trimNote.length + tail.length + 3;
     for (const file of report.files) {
       if (length > limit) break;
-      const section = fileSection(file, ctx, parts);
+      const section = sectionOf(file, parts);
       sections.push(section);
       length += section.length + 1;
     }
@@ -597,7 +632,7 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
   let used = head.length + tail.length + 400;
   let shown = 0;
   for (const file of report.files) {
-    const section = fileSection(file, ctx, minimal);
+    const section = sectionOf(file, minimal);
     if (used + section.length > limit) break;
     sections.push(section);
     used += section.length;
