@@ -30,10 +30,13 @@ export default defineConfig({
   test: {
     testTimeout: 30_000,
     // vitest's default on a run is one worker fewer than the cores: one worker on a 2-core
-    // machine. Much of a test's time is waiting on git processes, which other workers fill with
-    // work: two workers per core. Measured on 2 cores (2026-12-02): 4 workers and 3 took the same
-    // time (60.1 s and 59.7 s), the waits on octokit's spacing being scaled to milliseconds now.
-    maxWorkers: 2 * availableParallelism(),
+    // machine, which leaves a core idle while a test waits on git. One worker per core: measured
+    // on 2 cores (2026-12-02, 19:11-19:20 UTC, three pairs, fresh transform cache each run),
+    // 2 workers took 57.9 s, 49.4 s and 48.7 s where 4 took 62.1 s, 49.9 s and 52.1 s (each
+    // worker loads the sources, GitHub's REST description and its validators once), and 3 took
+    // 62.6 s beside the first pair. The same commit's runs spread over 49-62 s as the host's
+    // load changed: compare figures taken side by side.
+    maxWorkers: availableParallelism(),
     // Transformed modules are kept under node_modules/.experimental-vitest-cache between runs (a
     // fresh `npm ci` starts without them): a second run transforms in 3.8 s instead of 17 s.
     experimental: { fsModuleCache: true },
