@@ -1,21 +1,11 @@
 import { describe, expect, test } from 'vitest';
-import { readJsonSource } from '../../src/core/parse/json-read.js';
-import { checkJson } from '../../src/core/parse/json-syntax.js';
-import { MAX_ENTRIES, readYamlSource } from '../../src/core/parse/source.js';
-import { outcome } from './helpers.js';
+import { MAX_ENTRIES } from '../../src/core/parse/source.js';
+import { jsonViaFast as viaFast, jsonViaYaml as viaYaml } from './fast-readers.js';
 
 // The fast JSON reader (`json-read.ts`) at the parser's bound on entries: texts of tens of
 // thousands of items, read by it and by the YAML path (the `yaml` package through the
 // project's pipeline, the reference), which must refuse them at the same collection. Seconds of
 // work, so it runs in `npm run test:full`; json-fast-path.test.ts holds the rest.
-
-const viaFast = (text: string) => outcome(() => readJsonSource(text, 'config.json'));
-/** The YAML path as `parseSource` took it for every JSON file before the fast reader: JSON syntax first. */
-const viaYaml = (text: string) =>
-  outcome(() => {
-    checkJson(text, 'config.json');
-    return readYamlSource(text, 'config.json', true);
-  });
 
 describe('the fast JSON reader gives what the YAML path gives, at the bound on entries', () => {
   test('more than MAX_ENTRIES entries are refused at the collection the YAML pipeline names', () => {

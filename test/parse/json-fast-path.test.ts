@@ -1,11 +1,10 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
-import { readJsonSource } from '../../src/core/parse/json-read.js';
-import { checkJson } from '../../src/core/parse/json-syntax.js';
-import { parseSource, readYamlSource } from '../../src/core/parse/source.js';
+import { parseSource } from '../../src/core/parse/source.js';
 import { inspectModel } from '../../src/core/inspect.js';
 import { createScanMemo } from '../../src/core/metrics/scan-memo.js';
+import { jsonViaFast as viaFast, jsonViaYaml as viaYaml } from './fast-readers.js';
 import { outcome } from './helpers.js';
 
 // The fast JSON reader (`json-read.ts`) must give what the YAML path gives for the same JSON
@@ -16,14 +15,6 @@ import { outcome } from './helpers.js';
 
 const FIXTURES = new URL('../../fixtures/checkpoints/', import.meta.url);
 const jsonFixtures = readdirSync(FIXTURES).filter((name) => name.endsWith('.json'));
-
-const viaFast = (text: string) => outcome(() => readJsonSource(text, 'config.json'));
-/** The YAML path as `parseSource` took it for every JSON file before the fast reader: JSON syntax first. */
-const viaYaml = (text: string) =>
-  outcome(() => {
-    checkJson(text, 'config.json');
-    return readYamlSource(text, 'config.json', true);
-  });
 
 describe('the fast JSON reader gives what the YAML path gives', () => {
   test.each(jsonFixtures)(

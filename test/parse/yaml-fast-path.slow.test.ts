@@ -1,15 +1,11 @@
 import { describe, expect, test } from 'vitest';
-import { readBlockYaml } from '../../src/core/parse/yaml-block.js';
-import { MAX_ENTRIES, MAX_TOKENS, readYamlSource } from '../../src/core/parse/source.js';
-import { outcome } from './helpers.js';
+import { MAX_ENTRIES, MAX_TOKENS } from '../../src/core/parse/source.js';
+import { yamlViaFast as viaFast, yamlViaYaml as viaYaml } from './fast-readers.js';
 
 // The fast block-YAML reader (`yaml-block.ts`) at the parser's bounds: texts of tens of thousands
 // of entries, read by it and by the YAML path (the `yaml` package through the project's
 // pipeline, the reference), which must refuse them alike. Seconds of work each, so they run in
 // `npm run test:full`; yaml-fast-path.test.ts holds the rest of the comparison.
-
-const viaFast = (text: string) => outcome(() => readBlockYaml(text, 'model.reach.yaml'));
-const viaYaml = (text: string) => outcome(() => readYamlSource(text, 'model.reach.yaml', false));
 
 describe('the fast block-YAML reader gives what the YAML path gives, at the bounds', () => {
   test('more than MAX_ENTRIES entries: the same refusal at the same line', () => {

@@ -1,10 +1,9 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
-import { readBlockYaml, coreScalar } from '../../src/core/parse/yaml-block.js';
-import { readYamlSource } from '../../src/core/parse/source.js';
+import { coreScalar } from '../../src/core/parse/yaml-block.js';
 import { parseDocument } from 'yaml';
-import { outcome } from './helpers.js';
+import { yamlViaFast as viaFast, yamlViaYaml as viaYaml } from './fast-readers.js';
 
 // The fast block-YAML reader (`yaml-block.ts`) must give what the YAML path gives for the same
 // text: values, the line of every key and item, the literal of every scalar, and the same
@@ -26,9 +25,6 @@ const demoFixtures = ['base', 'head'].flatMap((side) => {
   walk(dir);
   return found;
 });
-
-const viaFast = (text: string) => outcome(() => readBlockYaml(text, 'model.reach.yaml'));
-const viaYaml = (text: string) => outcome(() => readYamlSource(text, 'model.reach.yaml', false));
 
 describe('the fast block-YAML reader gives what the YAML path gives', () => {
   test.each([...yamlFixtures.map((name) => new URL(name, FIXTURES)), ...demoFixtures])(
