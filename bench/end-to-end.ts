@@ -21,7 +21,7 @@ import path from 'node:path';
 import type { Console } from '../src/cli/console.js';
 import type { FileSource } from '../src/adapters/file-source.js';
 import { runInspect } from '../src/cli/inspect.js';
-import { startFakeGitHub } from '../test/support/fake-github.js';
+import { putPullRequest, startFakeGitHub } from '../test/support/fake-github.js';
 import { pullRequestEvent, runBundle } from '../test/support/run-bundle.js';
 import { scenarioRepo, type Tree } from '../test/support/scenario-repo.js';
 import { pullRequestConfigs, type ConfigFile } from './configs.js';
@@ -115,16 +115,11 @@ export async function actionScenario(count = CONFIG_COUNT) {
     ]);
   const repo = scenarioRepo(tree(base), tree(head));
   const fake = await startFakeGitHub({ owner: OWNER, repo: REPO });
-  fake.state.pulls.set(7, {
-    number: 7,
-    baseSha: repo.base,
-    headSha: repo.head,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: [],
-    headRepo: `${OWNER}/${REPO}`,
-    files: head.map((f) => ({ filename: f.path, status: 'modified' as const })),
-  });
+  putPullRequest(
+    fake,
+    repo,
+    head.map((f) => ({ filename: f.path, status: 'modified' as const })),
+  );
   // The stand-in reads GitHub's REST description on its first request; that is the harness's
   // cost, not the action's, so it is paid here, before any run is timed.
   await fetch(`${fake.url}/repos/${OWNER}/${REPO}/pulls/7`, {

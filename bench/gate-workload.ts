@@ -19,7 +19,7 @@ import { createHash } from 'node:crypto';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { startFakeGitHub } from '../test/support/fake-github.js';
+import { putPullRequest, startFakeGitHub } from '../test/support/fake-github.js';
 import { pullRequestEvent } from '../test/support/run-bundle.js';
 import type { GateRepo } from './gate-repo.js';
 
@@ -122,16 +122,11 @@ const REPO = 'model-zoo';
 /** The bundled action on the W6 pull request: local git for the reads, the loopback API for labels and the comment. */
 export async function actionScenario(repo: GateRepo, files: string[]) {
   const fake = await startFakeGitHub({ owner: OWNER, repo: REPO });
-  fake.state.pulls.set(7, {
-    number: 7,
-    baseSha: repo.base,
-    headSha: repo.head,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: [],
-    headRepo: `${OWNER}/${REPO}`,
-    files: files.map((f) => ({ filename: f, status: 'modified' as const })),
-  });
+  putPullRequest(
+    fake,
+    repo,
+    files.map((f) => ({ filename: f, status: 'modified' as const })),
+  );
   // The stand-in reads GitHub's REST description on its first request: the harness's cost, paid before timing.
   await fetch(`${fake.url}/repos/${OWNER}/${REPO}/pulls/7`, {
     headers: { authorization: `token ${fake.state.token}` },

@@ -3,7 +3,7 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { COMMENT_MARKER } from '../../src/core/render/notice.js';
-import { startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
+import { putPullRequest, startFakeGitHub, type FakeGitHub } from '../support/fake-github.js';
 import {
   PEAK_RSS_PRELOAD,
   pullRequestEvent,
@@ -75,22 +75,13 @@ beforeAll(async () => {
     },
   );
   fake = await startFakeGitHub({ owner: OWNER, repo: REPO });
-  fake.state.pulls.set(7, {
-    number: 7,
-    baseSha: repo.base,
-    headSha: repo.head,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: [],
-    headRepo: `${OWNER}/${REPO}`,
-    files: [
-      {
-        filename: 'models/tiny/config.json',
-        status: 'modified',
-        patch: patchOf(repo.base, repo.head, 'models/tiny/config.json'),
-      },
-    ],
-  });
+  putPullRequest(fake, repo, [
+    {
+      filename: 'models/tiny/config.json',
+      status: 'modified',
+      patch: patchOf(repo.base, repo.head, 'models/tiny/config.json'),
+    },
+  ]);
   const snapshot = () =>
     fake.state.reviewComments.map((c) => ({ id: c.id, body: c.body, line: c.line }));
   first = await run();

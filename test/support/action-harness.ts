@@ -7,7 +7,13 @@ import { createGitReader } from '../../src/adapters/git.js';
 import { createFileSource } from '../../src/adapters/file-source.js';
 import { createGitHubClient } from '../../src/adapters/github-rest.js';
 import { runAction } from '../../src/action/run-action.js';
-import { startFakeGitHub, type FakeGitHub, type FakePullFile } from './fake-github.js';
+import {
+  putPullRequest,
+  startFakeGitHub,
+  tree,
+  type FakeGitHub,
+  type FakePullFile,
+} from './fake-github.js';
 import { createRecordingOutput, type RecordingOutput } from './recording-output.js';
 import { pullRequestEvent } from './run-bundle.js';
 import { scenarioRepo, type ScenarioRepo, type Tree } from './scenario-repo.js';
@@ -125,17 +131,10 @@ export async function runScenario(options: ScenarioOptions): Promise<ScenarioRes
   const { repo, shared } = repoFor(options.base, options.head);
   const fake = options.fake ?? (await startFakeGitHub({ owner: OWNER, repo: REPO }));
   fake.state.readOnly = options.readOnly ?? false;
-  fake.state.pulls.set(7, {
-    number: 7,
-    baseSha: repo.base,
-    headSha: repo.head,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: options.labels ?? [],
-    headRepo: options.fork ? `someone-else/${REPO}` : `${OWNER}/${REPO}`,
-    files: pullFiles(options.base, options.head),
+  putPullRequest(fake, repo, pullFiles(options.base, options.head), {
+    labels: options.labels,
+    fork: options.fork,
   });
-  const { tree } = await import('./fake-github.js');
   const asFakeTree = (t: Tree) =>
     tree(
       Object.fromEntries(

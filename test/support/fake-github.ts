@@ -302,6 +302,29 @@ interface Answer {
   raw?: Uint8Array;
 }
 
+/**
+ * Puts pull request #7 on the fake: branch `feature` onto `main`, from `repo.base` to `repo.head`,
+ * changing `files`; its head in another repository when `fork` is set.
+ */
+export function putPullRequest(
+  fake: FakeGitHub,
+  repo: { base: string; head: string },
+  files: FakePullFile[],
+  options: { labels?: string[]; fork?: boolean } = {},
+): void {
+  const { owner, repo: name } = fake.state;
+  fake.state.pulls.set(7, {
+    number: 7,
+    baseSha: repo.base,
+    headSha: repo.head,
+    baseRef: 'main',
+    headRef: 'feature',
+    labels: options.labels ?? [],
+    headRepo: options.fork ? `someone-else/${name}` : `${owner}/${name}`,
+    files,
+  });
+}
+
 export async function startFakeGitHub(initial: Partial<FakeState> = {}): Promise<FakeGitHub> {
   const state: FakeState = {
     owner: 'example-org',

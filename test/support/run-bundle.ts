@@ -2,7 +2,7 @@ import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import type { FakeGitHub, FakePullFile } from './fake-github.js';
+import { putPullRequest, type FakeGitHub, type FakePullFile } from './fake-github.js';
 import type { ScenarioRepo } from './scenario-repo.js';
 
 export const ACTION_BUNDLE = resolve(import.meta.dirname, '../../dist/index.js');
@@ -219,16 +219,7 @@ export async function runBundleOnPullRequest(
   files: FakePullFile[],
   options: { fork?: boolean; workspace?: string } = {},
 ): Promise<BundleRun> {
-  fake.state.pulls.set(7, {
-    number: 7,
-    baseSha: repo.base,
-    headSha: repo.head,
-    baseRef: 'main',
-    headRef: 'feature',
-    labels: [],
-    headRepo: options.fork ? 'someone-else/model-zoo' : 'example-org/model-zoo',
-    files,
-  });
+  putPullRequest(fake, repo, files, { fork: options.fork });
   return runBundle({
     eventName: 'pull_request',
     event: pullRequestEvent({
