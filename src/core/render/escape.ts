@@ -47,8 +47,9 @@ export function escapeMarkdown(text: string): string {
       .replace(/\r\n|[\r\n\u2028\u2029]|[\u0000-\u0008\u000b-\u001f\u007f]/g, ' ')
       .replace(/[&<>"|#\\`*_{}[\]()!~+=-]/g, (c) => MARKDOWN_ESCAPES[c] ?? `\\${c}`)
       // Mentions, team mentions and issue references are linked from text nodes, after entities
-      // are decoded; a zero-width space after the sign stops the link and reads the same.
-      .replace(/(@|&#35;)(?=[\p{L}\p{N}_])/gu, `$1${ZERO_WIDTH_SPACE}`)
+      // are decoded; a zero-width space after the sign stops the link and reads the same. An
+      // underscore is escaped above, and `\_` renders as `_`: a sign before it is broken too.
+      .replace(/(@|&#35;)(?=[\p{L}\p{N}_]|\\_)/gu, `$1${ZERO_WIDTH_SPACE}`)
       // Bare URLs and www. hosts are autolinked; break the scheme separator and the www. prefix.
       .replace(/:\/\//g, `:${ZERO_WIDTH_SPACE}//`)
       .replace(/\b(www)\./gi, `$1${ZERO_WIDTH_SPACE}.`)
