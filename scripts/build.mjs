@@ -8,6 +8,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { renderActionTables } from './action-tables.mjs';
 import { buildInputs } from './build-inputs.mjs';
+import { writeKernel } from './generate-kernel.mjs';
 import { writeValidators } from './generate-validators.mjs';
 
 const require = createRequire(import.meta.url);
@@ -48,6 +49,8 @@ async function minifyChunk(name, source) {
 
 // The schema validators, compiled from schema/*.schema.json ahead of time, before the bundles take them in.
 for (const out of writeValidators(root)) console.log(`wrote ${out}`);
+// The WebAssembly cosine-sum kernel, assembled from its text the same way.
+console.log(`wrote ${await writeKernel(root)}`);
 
 await rm(dist, { recursive: true, force: true });
 await mkdir(dist, { recursive: true });

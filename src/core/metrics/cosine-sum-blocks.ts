@@ -8,6 +8,7 @@
  */
 
 import { elementAt } from '../element-at.js';
+import { cosineKernel, type CosineKernel } from './cosine-sum-kernel.js';
 
 /** Offsets per block: the recurrence restarts from exact seeds this often. */
 export const COSINE_BLOCK = 512;
@@ -85,9 +86,17 @@ function reduceTurns(x: number): number {
 /**
  * Fills `buf[j]` with an approximation of `Σ_i cos((k0 + j) θ_i)`, `j < n <= COSINE_BLOCK`, within
  * `cosineSumMargin / 2.5`. Eight, then four, then single pairs per pass: independent recurrences
- * overlap in the CPU.
+ * overlap in the CPU. The seeds are computed here; the recurrence runs in `kernel`, the
+ * WebAssembly form of the loop below (cosine-sum-kernel.ts, identical values), unless it is null
+ * or cannot take the arrays, and then in the loop below.
  */
-export function fillCosineSums(plan: CosinePlan, k0: number, n: number, buf: Float64Array): void {
+export function fillCosineSums(
+  plan: CosinePlan,
+  k0: number,
+  n: number,
+  buf: Float64Array,
+  kernel: CosineKernel | null = cosineKernel(),
+): void {
   const { theta, twoCos: a2, cos: cT, sin: sT, seedNow, seedBefore } = plan;
   const P = theta.length;
   // Checked once here, so every `buf[j]` below (j < n) is inside: the innermost loops read it
@@ -101,6 +110,7 @@ export function fillCosineSums(plan: CosinePlan, k0: number, n: number, buf: Flo
     seedNow[i] = c;
     seedBefore[i] = c * elementAt(cT, i) + Math.sin(x) * elementAt(sT, i);
   }
+  if (kernel?.fill(plan.twoCos, seedNow, seedBefore, n, buf)) return;
   buf.fill(0, 0, n);
   let i = 0;
   for (; i + 8 <= P; i += 8) {
