@@ -7,7 +7,7 @@
 import { execFile } from 'node:child_process';
 import type { ChangedFile } from '../core/changes.js';
 import { elementAt } from '../core/element-at.js';
-import type { ContentSource } from '../core/gate.js';
+import type { ContentRequest, ContentSource } from '../core/gate.js';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from './content-limit.js';
 
 /** A git call that failed: exit status, signal, or output past its bound. */
@@ -651,10 +651,30 @@ function parseBatch(
  * The gate's content source over a git reader: single reads with `show`, and every version of a
  * run in one `showMany` (for the files `changedFiles` named, one `cat-file --batch-check` and
  * one `cat-file --batch`, however many files).
+ *
+ * `early` names files to start reading now, before the gate asks: the shells pass the policy, so
+ * its two git processes run while git still finds the merge base and lists the changes instead
+ * of after. The first `read` of such a file gets that read's result or error; later reads read
+ * again. A run that fails before it asks leaves the early read unused, and its error unreported.
  */
-export function gitContentSource(git: GitReader): ContentSource {
+export function gitContentSource(
+  git: GitReader,
+  early: readonly ContentRequest[] = [],
+): ContentSource {
+  const started = new Map<string, Promise<Uint8Array | null>>();
+  const key = (ref: string, path: string) => `${ref}\u0000${path}`;
+  for (const { ref, path } of early) {
+    const reading = git.show(ref, path);
+    reading.catch(() => undefined);
+    started.set(key(ref, path), reading);
+  }
   return {
-    read: (ref, path) => git.show(ref, path),
+    read: (ref, path) => {
+      const reading = started.get(key(ref, path));
+      if (reading === undefined) return git.show(ref, path);
+      started.delete(key(ref, path));
+      return reading;
+    },
     readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
     exists: async (ref, path) => (await git.entry(ref, path)) !== null,
   };

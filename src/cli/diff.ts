@@ -163,15 +163,18 @@ export async function runDiff(args: string[], io: Console): Promise<number> {
     head = await commitOf(git, values.head, '--head');
     base = await defaultBase(git, head);
   }
-  // Changes since head left the base (as a pull request shows them); the policy from the base itself.
+  // Changes since head left the base (as a pull request shows them); the policy from the base
+  // itself, read while git finds the merge base and lists the changes.
+  const policyPath = values.policy ?? '.github/context-reach.yml';
+  const source = gitContentSource(git, [{ ref: base, path: policyPath }]);
   const start = (await git.mergeBase(base, head)) ?? base;
   const changes = await git.changedFiles(start, head);
-  const report = await runGate(gitContentSource(git), {
+  const report = await runGate(source, {
     base: start,
     policyRef: base,
     head,
     changes,
-    policyPath: values.policy ?? '.github/context-reach.yml',
+    policyPath,
     labels: values.label ?? [],
     overrides: servingPatch(values),
   });

@@ -14,7 +14,12 @@ import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from '../../src/adapters/content-limit.js';
-import { GitError, createGitReader, parseNameStatus } from '../../src/adapters/git.js';
+import {
+  GitError,
+  createGitReader,
+  gitContentSource,
+  parseNameStatus,
+} from '../../src/adapters/git.js';
 import type { GitReader } from '../../src/adapters/git.js';
 import { createScratchRepository } from '../../src/cli/scratch-repository.js';
 
@@ -246,6 +251,51 @@ describe('showMany(requests)', () => {
     expect(await createGitReader(repo, { git: join(root, 'no-git-here') }).showMany([])).toEqual(
       [],
     );
+  });
+});
+
+describe('gitContentSource(git, early)', () => {
+  /** A reader whose `show` is counted and answers from git, or fails for one path. */
+  function countingReader(): { reader: GitReader; shown: string[] } {
+    const shown: string[] = [];
+    return {
+      shown,
+      reader: {
+        ...reader,
+        show: (commit, path) => {
+          shown.push(`${commit.slice(0, 7)}:${path}`);
+          return path === 'models/unreadable.json'
+            ? Promise.reject(new GitError('cannot read', ['cat-file'], 128, ''))
+            : reader.show(commit, path);
+        },
+      },
+    };
+  }
+
+  test('starts an early read at once and hands its result to the first read of that file only', async () => {
+    const { reader: counted, shown } = countingReader();
+    const source = gitContentSource(counted, [{ ref: base, path: 'models/a/config.json' }]);
+    // Started before anyone asks.
+    expect(shown).toEqual([`${base.slice(0, 7)}:models/a/config.json`]);
+    const first = await source.read(base, 'models/a/config.json');
+    expect(Buffer.from(first!).toString('utf8')).toBe(CONFIG_A);
+    expect(shown).toHaveLength(1);
+    // A second read, and a read of another version, go to git again.
+    expect(Buffer.from((await source.read(base, 'models/a/config.json'))!).toString('utf8')).toBe(
+      CONFIG_A,
+    );
+    await source.read(head, 'models/a/config.json');
+    expect(shown).toHaveLength(3);
+  });
+
+  test("hands an early read's error to the read that asks, and leaves it unreported when none does", async () => {
+    const { reader: counted } = countingReader();
+    const asked = gitContentSource(counted, [{ ref: base, path: 'models/unreadable.json' }]);
+    await expect(asked.read(base, 'models/unreadable.json')).rejects.toThrow('cannot read');
+    // Never asked: the run failed before the gate read its policy. An unhandled rejection would
+    // fail this test run (vitest reports them as errors).
+    gitContentSource(counted, [{ ref: base, path: 'models/unreadable.json' }]);
+    await new Promise((settle) => setTimeout(settle, 20));
   });
 });
 
