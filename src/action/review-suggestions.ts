@@ -117,6 +117,11 @@ export function patchesNeeded(
   return !target.isFork && filesWithFixes(report).length > 0;
 }
 
+/** The files whose head texts `publishSuggestions` reads for this report, in the order it asks for them. */
+export function suggestionPaths(report: import('../core/report/types.js').GateReport): string[] {
+  return filesWithFixes(report).map((file) => file.path);
+}
+
 /** Said when suggestions are skipped because the token may not write them. */
 export const SUGGESTIONS_SKIPPED =
   'Review suggestions were skipped: the token cannot write review comments on this pull request (a read-only token, as pull requests from forks get). The fixes are in the report comment and the job summary.';
@@ -139,7 +144,7 @@ export async function publishSuggestions(
   const { planSuggestions } = await import('../core/render/suggestions.js');
   const blocking = filesWithFixes(report);
   const texts = new Map<string, string>();
-  const heads = await readHeads(blocking.map((file) => file.path)).catch(() => []);
+  const heads = await readHeads(suggestionPaths(report)).catch(() => []);
   for (const [i, file] of blocking.entries()) {
     const bytes = heads[i];
     if (bytes instanceof Uint8Array)

@@ -15,14 +15,16 @@ import { createApiContentSource } from '../adapters/graphql-contents.js';
 import {
   createReviewApi,
   isPermissionError,
+  type Comment,
   type GitHubClient,
   type GitHubClientOptions,
   type ReviewApi,
+  type ReviewComment,
   type ReviewTarget,
 } from '../adapters/github-rest.js';
 import { readSettings, type GetInput, type Settings } from './inputs.js';
 import { publishComment } from './report-comment.js';
-import { patchesNeeded, publishSuggestions } from './review-suggestions.js';
+import { patchesNeeded, publishSuggestions, suggestionPaths } from './review-suggestions.js';
 import { fitSummary, type RunnerOutput } from './runner-output.js';
 
 /** Everything the action touches, passed in: the entry wires the real adapters, tests their own. */
@@ -56,8 +58,35 @@ interface Changes {
   changes: ChangedFile[];
   source: ContentSource;
   notices: string[];
-  /** The changes and contents come from the local repository (not the API). */
-  local: boolean;
+}
+
+/**
+ * `client`, whose first `findComment` answers with `lookup` (the same look-up, asked earlier);
+ * every later call asks again.
+ */
+function withLookup(client: GitHubClient, lookup: Promise<Comment | null> | null): GitHubClient {
+  if (lookup === null) return client;
+  let pending: Promise<Comment | null> | null = lookup;
+  return Object.assign(Object.create(client) as GitHubClient, {
+    findComment(...args: Parameters<GitHubClient['findComment']>) {
+      const asked = pending;
+      pending = null;
+      return asked ?? client.findComment(...args);
+    },
+  });
+}
+
+/** `reviews`, whose first `listReviewComments` answers with `listed` (asked earlier). */
+function withListed(reviews: ReviewApi, listed: Promise<ReviewComment[]> | null): ReviewApi {
+  if (listed === null) return reviews;
+  let pending: Promise<ReviewComment[]> | null = listed;
+  return Object.assign(Object.create(reviews) as ReviewApi, {
+    listReviewComments(target: ReviewTarget) {
+      const asked = pending;
+      pending = null;
+      return asked ?? reviews.listReviewComments(target);
+    },
+  });
 }
 
 /** Changes read from the local repository: the whole diff, every file through a few git processes. */
@@ -81,7 +110,6 @@ async function localChanges(
       exists: async (ref, path) => (await git.entry(ref, path)) !== null,
     },
     notices: [],
-    local: true,
   };
 }
 
@@ -97,7 +125,14 @@ async function gatherChanges(
   base: string,
   git: GitReader,
   api: GitHubClient | null,
-  warn: (message: string) => void,
+  {
+    warn,
+    onLocal,
+  }: {
+    warn: (message: string) => void;
+    /** Called once git is known to have both commits, with the head's id, before it reads the changes. */
+    onLocal: (headSha: string) => void;
+  },
 ): Promise<Changes> {
   // A checkout without the history (or without git at all) falls back to the API.
   const local = (rev: string) => git.resolveCommit(rev).catch(() => null);
@@ -105,7 +140,10 @@ async function gatherChanges(
   const [baseSha = null, headSha = null] =
     (await git.resolveCommits([base, event.head]).catch(() => null)) ??
     (await Promise.all([local(base), local(event.head)]));
-  if (baseSha !== null && headSha !== null) return localChanges(git, baseSha, headSha, null);
+  if (baseSha !== null && headSha !== null) {
+    onLocal(headSha);
+    return localChanges(git, baseSha, headSha, null);
+  }
   if (api === null || event.pullNumber === null) {
     throw new Error(
       `The checkout lacks commit ${baseSha === null ? base : event.head} and there is ${api === null ? 'no token' : 'no pull request'} to ask the API instead; check out with fetch-depth: 0, or give a base input that exists.`,
@@ -120,8 +158,10 @@ async function gatherChanges(
       local(event.head),
       local(mergeBase),
     ]);
-    if (fetchedBase !== null && fetchedHead !== null && fetchedStart !== null)
+    if (fetchedBase !== null && fetchedHead !== null && fetchedStart !== null) {
+      onLocal(fetchedHead);
       return localChanges(git, fetchedBase, fetchedHead, fetchedStart);
+    }
   }
   const listed = await api.listPullRequestFiles(event.owner, event.repo, event.pullNumber);
   let changes = listed.files;
@@ -148,7 +188,6 @@ async function gatherChanges(
     // Every version in a few requests (trees and GraphQL), not one contents request each.
     source: createApiContentSource(api, { owner: event.owner, repo: event.repo, warn }),
     notices: [],
-    local: false,
   };
 }
 
@@ -213,20 +252,53 @@ export async function runAction(deps: ActionDeps): Promise<void> {
           () => event.labels,
         )
       : Promise.resolve(event.labels);
+  // The reads the publishing starts with, asked as soon as git is known to have both commits, so
+  // that they are answered while git reads the changes and the gate computes, and no write waits
+  // on a read: which account the token acts as (the client keeps the answer; an error comes back
+  // when the comment asks), then the report comment to edit, and our review comments. Only when
+  // git gives the changes: reading them through the API uses the same GraphQL endpoint, whose
+  // requests then keep their order. A comment another run writes meanwhile is found by the look
+  // after the write (`publishComment`), as before; a failed read fails where it is awaited.
+  let commentLookup: Promise<Comment | null> | null = null;
+  let reviewsListed: Promise<ReviewComment[]> | null = null;
+  const reviews =
+    settings.suggestions === 'on' && event.pullNumber !== null && api
+      ? (deps.createReviews ?? createReviewApi)(settings.token, { baseUrl: env.GITHUB_API_URL })
+      : null;
+  const reviewTarget = (headSha: string) =>
+    event.pullNumber === null
+      ? null
+      : {
+          owner: event.owner,
+          repo: event.repo,
+          pull: event.pullNumber,
+          headSha,
+          isFork: event.isFork,
+        };
+  const onLocal = (headSha: string) => {
+    if (api === null || event.pullNumber === null) return;
+    if (settings.comment === 'update') {
+      api.identity().catch(() => undefined);
+      commentLookup = api.findComment(event.owner, event.repo, event.pullNumber, COMMENT_MARKER);
+      commentLookup.catch(() => undefined);
+    }
+    const target = reviewTarget(headSha);
+    if (reviews && target && !target.isFork) {
+      reviewsListed = reviews.listReviewComments(target);
+      reviewsListed.catch(() => undefined);
+    }
+  };
   let gathered: Changes;
   try {
-    gathered = await gatherChanges(event, event.base, git, api, (m) => out.warning(m));
+    gathered = await gatherChanges(event, event.base, git, api, {
+      warn: (m) => out.warning(m),
+      onLocal,
+    });
   } catch (error) {
     await labelsAsked;
     throw error;
   }
-  if (gathered.local && settings.comment === 'update' && event.pullNumber !== null && api) {
-    // Which account the token acts as, asked while the gate computes: the comment is written
-    // as soon as the report is ready. (The client keeps the answer; an error comes back when
-    // the comment asks.) Only when git gave the changes: reading them through the API uses
-    // the same GraphQL endpoint, whose requests then keep their order.
-    api.identity().catch(() => undefined);
-  }
+  const publisher = api ? withLookup(api, commentLookup) : null;
   const labels = await labelsAsked;
 
   let report: GateReport;
@@ -246,8 +318,8 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     const message = `context-reach could not judge this change: ${error instanceof Error ? error.message : String(error)}`;
     const body = renderFailure(message);
     let commentUrl = '';
-    if (settings.comment === 'update' && event.pullNumber !== null && api) {
-      commentUrl = await publishComment(api, {
+    if (settings.comment === 'update' && event.pullNumber !== null && publisher) {
+      commentUrl = await publishComment(publisher, {
         owner: event.owner,
         repo: event.repo,
         issueNumber: event.pullNumber,
@@ -265,27 +337,44 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   }
 
   // Review suggestions need the pull request's patches (30 pages of the file list at 3,000
-  // files): asked for now, so they arrive while the reports are written and the comment published.
+  // files) and the head texts (one batched read: one pair of git processes, not one read per
+  // file): asked for now, so they arrive while the reports are written and the comment published.
   let suggesting: {
     reviews: ReviewApi;
     target: ReviewTarget & { isFork: boolean };
     patchesAsked: Promise<Map<string, string>> | null;
+    readHeads: (paths: string[]) => Promise<(Uint8Array | null | Error)[]>;
   } | null = null;
-  if (settings.suggestions === 'on' && event.pullNumber !== null && api) {
-    const reviews = (deps.createReviews ?? createReviewApi)(settings.token, {
-      baseUrl: env.GITHUB_API_URL,
-    });
-    const target = {
-      owner: event.owner,
-      repo: event.repo,
-      pull: event.pullNumber,
-      headSha: gathered.head,
-      isFork: event.isFork,
-    };
-    const patchesAsked = patchesNeeded(target, report) ? reviews.listPatches(target) : null;
+  const target = reviewTarget(gathered.head);
+  if (reviews && target) {
+    const needed = patchesNeeded(target, report);
+    const patchesAsked = needed ? reviews.listPatches(target) : null;
     // Its failure is publishSuggestions' to report, when it awaits the answer.
     patchesAsked?.catch(() => undefined);
-    suggesting = { reviews, target, patchesAsked };
+    const source = gathered.source;
+    const readHeads = (paths: string[]) =>
+      source.readMany
+        ? source.readMany(paths.map((path) => ({ ref: gathered.head, path })))
+        : Promise.all(
+            paths.map((path) =>
+              source.read(gathered.head, path).catch((error: unknown) => error as Error),
+            ),
+          );
+    const early = needed ? suggestionPaths(report) : null;
+    const headsAsked = early ? readHeads(early) : null;
+    headsAsked?.catch(() => undefined);
+    suggesting = {
+      reviews: withListed(reviews, reviewsListed),
+      target,
+      patchesAsked,
+      readHeads: (paths) =>
+        headsAsked &&
+        early &&
+        paths.length === early.length &&
+        paths.every((p, i) => p === early[i])
+          ? headsAsked
+          : readHeads(paths),
+    };
   }
 
   const server = env.GITHUB_SERVER_URL ?? 'https://github.com';
@@ -312,10 +401,10 @@ export async function runAction(deps: ActionDeps): Promise<void> {
 
   let commentUrl = '';
   const runNotices: string[] = [];
-  if (settings.comment === 'update' && event.pullNumber !== null && api) {
+  if (settings.comment === 'update' && event.pullNumber !== null && publisher) {
     const body = renderComment(report, { blobUrl, unannotated: omitted, ...html });
     try {
-      const published = await publishComment(api, {
+      const published = await publishComment(publisher, {
         owner: event.owner,
         repo: event.repo,
         issueNumber: event.pullNumber,
@@ -337,17 +426,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     }
   }
   if (suggesting) {
-    const { reviews, target, patchesAsked } = suggesting;
-    // The head texts in one batched read (one pair of git processes), not one read per file.
-    const source = gathered.source;
-    const readHeads = (paths: string[]) =>
-      source.readMany
-        ? source.readMany(paths.map((path) => ({ ref: gathered.head, path })))
-        : Promise.all(
-            paths.map((path) =>
-              source.read(gathered.head, path).catch((error: unknown) => error as Error),
-            ),
-          );
+    const { reviews, target, patchesAsked, readHeads } = suggesting;
     await publishSuggestions(reviews, target, report, readHeads, patchesAsked).then(
       ({ outcome, notice }) => {
         if (notice) {

@@ -571,30 +571,41 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     repo: string,
     issueNumber: number,
     marker: string,
-    login: string,
+    login: string | Promise<string | null>,
     firstOnly: boolean,
   ) =>
     call(`list comments of #${issueNumber}`, async () => {
-      const found: Comment[] = [];
-      let pages = 0;
-      for await (const page of octokit.paginate.iterator(octokit.rest.issues.listComments, {
+      const listing = octokit.paginate.iterator(octokit.rest.issues.listComments, {
         owner,
         repo,
         issue_number: issueNumber,
         per_page: 100,
-      })) {
-        for (const comment of page.data) {
-          if (!isOurs(comment, marker, login)) continue;
+      });
+      const pages = listing[Symbol.asyncIterator]();
+      // The first page is asked at once, while the identity may still be on its way: the
+      // look-up then takes one round trip after it, not two.
+      let next = pages.next();
+      next.catch(() => undefined);
+      const author = await login;
+      if (author === null) return [];
+      const found: Comment[] = [];
+      let read = 0;
+      for (;;) {
+        const page = await next;
+        if (page.done) break;
+        for (const comment of page.value.data) {
+          if (!isOurs(comment, marker, author)) continue;
           found.push(toComment(comment));
           if (firstOnly) return found;
         }
-        pages += 1;
-        if (pages >= MAX_COMMENT_PAGES) {
+        read += 1;
+        if (read >= MAX_COMMENT_PAGES) {
           log.warn(
-            `Stopped looking for the report comment after ${pages * 100} comments on #${issueNumber}.`,
+            `Stopped looking for the report comment after ${read * 100} comments on #${issueNumber}.`,
           );
           break;
         }
+        next = pages.next();
       }
       return found.sort((a, b) => a.id - b.id);
     });
@@ -719,9 +730,7 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
     },
 
     async findComment(owner, repo, issueNumber, marker) {
-      const login = await identity();
-      if (login === null) return null;
-      return (await markedComments(owner, repo, issueNumber, marker, login, true))[0] ?? null;
+      return (await markedComments(owner, repo, issueNumber, marker, identity(), true))[0] ?? null;
     },
 
     listMarkedComments(owner, repo, issueNumber, marker, login) {

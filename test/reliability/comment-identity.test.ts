@@ -87,9 +87,10 @@ describe("the comment is recognised by the token's own identity", () => {
 });
 
 describe('reads the publishing needs are asked for early (issue 16)', () => {
-  it('the identity before the comment is looked for, the patches before it is written; still one comment and the review', async () => {
-    // Each is a read: asked for while the gate computes and the reports are written, so no write
-    // waits on it. The outcome is what asking late gave: one comment, the suggestions planned.
+  it('the identity, the comment look-up and our review comments before the first write, the patches before the comment is written; still one comment and the review, each read asked once', async () => {
+    // Each is a read: asked for while git reads the changes and the gate computes, so no write
+    // waits on it. The look-up's first page goes out with the identity, not after it. The outcome
+    // is what asking late gave: one comment, the suggestions planned.
     const fake = await startFakeGitHub();
     for (let run = 0; run < 2; run += 1) {
       const result = await scenario({ fake });
@@ -98,11 +99,17 @@ describe('reads the publishing needs are asked for early (issue 16)', () => {
     }
     expect(marked(fake)).toHaveLength(1);
     const first = (operation: string) => fake.calls(operation)[0]!.at;
-    expect(first('graphql')).toBeLessThan(first('issues/list-comments'));
+    expect(first('graphql')).toBeLessThan(first('issues/create-comment'));
+    expect(first('issues/list-comments')).toBeLessThan(first('issues/create-comment'));
+    expect(first('pulls/list-review-comments')).toBeLessThan(first('issues/create-comment'));
     expect(first('pulls/list-files')).toBeLessThan(first('issues/create-comment'));
-    // Two runs, each listing the patches once and asking the identity of its own client once.
+    // Two runs, each listing the patches once and asking the identity of its own client once,
+    // looking for the comment once before its write and once after it, and listing the review
+    // comments once: asking early adds no request.
     expect(fake.calls('pulls/list-files')).toHaveLength(2);
     expect(fake.calls('graphql')).toHaveLength(2);
+    expect(fake.calls('issues/list-comments')).toHaveLength(4);
+    expect(fake.calls('pulls/list-review-comments')).toHaveLength(2);
   });
 });
 
