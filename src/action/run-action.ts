@@ -10,7 +10,7 @@ import { COMMENT_MARKER } from '../core/render/notice.js';
 import { renderSarif } from '../core/render/sarif.js';
 import { VERSION } from '../core/version.js';
 import { parseEvent, type EventInfo } from './event.js';
-import type { GitReader } from '../adapters/git.js';
+import { gitContentSource, type GitReader } from '../adapters/git.js';
 import { createApiContentSource } from '../adapters/graphql-contents.js';
 import {
   createReviewApi,
@@ -95,20 +95,19 @@ async function localChanges(
   baseSha: string,
   headSha: string,
   start: string | null,
+  policyPath: string,
 ): Promise<Changes> {
-  // Like the pull request's own diff: changes since head left the base branch, not the base
-  // branch's later commits. The policy still comes from the base branch's commit.
+  // The policy comes from the base branch's commit, read while git finds the merge base and
+  // lists the changes. Like the pull request's own diff, the changes are those since head left
+  // the base branch, not the base branch's later commits.
+  const source = gitContentSource(git, [{ ref: baseSha, path: policyPath }]);
   const from = start ?? (await git.mergeBase(baseSha, headSha).catch(() => null)) ?? baseSha;
   return {
     base: from,
     policyRef: baseSha,
     head: headSha,
     changes: await git.changedFiles(from, headSha),
-    source: {
-      read: (ref, path) => git.show(ref, path),
-      readMany: (requests) => git.showMany(requests.map((r) => ({ commit: r.ref, path: r.path }))),
-      exists: async (ref, path) => (await git.entry(ref, path)) !== null,
-    },
+    source,
     notices: [],
   };
 }
@@ -128,8 +127,11 @@ async function gatherChanges(
   {
     warn,
     onLocal,
+    policyPath,
   }: {
     warn: (message: string) => void;
+    /** The policy file, read from the base commit early when git has both commits. */
+    policyPath: string;
     /** Called once git is known to have both commits, with the head's id, before it reads the changes. */
     onLocal: (headSha: string) => void;
   },
@@ -142,7 +144,7 @@ async function gatherChanges(
     (await Promise.all([local(base), local(event.head)]));
   if (baseSha !== null && headSha !== null) {
     onLocal(headSha);
-    return localChanges(git, baseSha, headSha, null);
+    return localChanges(git, baseSha, headSha, null, policyPath);
   }
   if (api === null || event.pullNumber === null) {
     throw new Error(
@@ -160,7 +162,7 @@ async function gatherChanges(
     ]);
     if (fetchedBase !== null && fetchedHead !== null && fetchedStart !== null) {
       onLocal(fetchedHead);
-      return localChanges(git, fetchedBase, fetchedHead, fetchedStart);
+      return localChanges(git, fetchedBase, fetchedHead, fetchedStart, policyPath);
     }
   }
   const listed = await api.listPullRequestFiles(event.owner, event.repo, event.pullNumber);
@@ -293,6 +295,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     gathered = await gatherChanges(event, event.base, git, api, {
       warn: (m) => out.warning(m),
       onLocal,
+      policyPath: settings.policyPath,
     });
   } catch (error) {
     await labelsAsked;
