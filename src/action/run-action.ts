@@ -5,9 +5,7 @@ import { planAnnotations } from '../core/render/annotations.js';
 import { renderComment } from '../core/render/comment.js';
 import { renderFailure } from '../core/render/failure.js';
 import { gateJsonParts } from '../core/render/gate-json.js';
-import { renderHtmlReport } from '../core/render/html-report.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
-import { renderSarif } from '../core/render/sarif.js';
 import { VERSION } from '../core/version.js';
 import { parseEvent, type EventInfo } from './event.js';
 import { gitContentSource, type GitReader } from '../adapters/git.js';
@@ -386,8 +384,15 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   for (const annotation of annotations) out.annotate(annotation);
 
   await deps.writeFile(settings.reportJson, gateJsonParts(report));
-  if (settings.sarif) await deps.writeFile(settings.sarif, renderSarif(report, VERSION));
-  if (settings.htmlReport) await deps.writeFile(settings.htmlReport, renderHtmlReport(report));
+  // Loaded only when asked for (34 KB of the bundle that most runs do not need).
+  if (settings.sarif) {
+    const { renderSarif } = await import('../core/render/sarif.js');
+    await deps.writeFile(settings.sarif, renderSarif(report, VERSION));
+  }
+  if (settings.htmlReport) {
+    const { renderHtmlReport } = await import('../core/render/html-report.js');
+    await deps.writeFile(settings.htmlReport, renderHtmlReport(report));
+  }
   // The page is uploaded by a later step, so its own URL is not known yet: the run's page lists it.
   const runPage =
     settings.htmlReport && env.GITHUB_RUN_ID
