@@ -1,9 +1,22 @@
 import { memoryAtSpan, usableDeviceBytes } from '../metrics/memory-curve.js';
 import { formatInteger, formatNumber } from '../format/units.js';
-import { sameCurveWords } from './html/memory-span-chart.js';
+import { servedSequences } from '../metrics/kv-cache.js';
+import { cacheDType } from '../metrics/storage-bytes.js';
+import type { ModelSpec } from '../model.js';
 import type { FileDecision } from '../report/types.js';
 
 const GIB = 1024 ** 3;
+
+/** `4 sequences with a bf16 cache hold as much as 8 with an fp8 cache`: why two curves coincide. */
+export function sameCurveWords(base: ModelSpec, head: ModelSpec): string {
+  const nb = servedSequences(base);
+  const nh = servedSequences(head);
+  const cb = cacheDType(base);
+  const ch = cacheDType(head);
+  if (nb !== nh || cb !== ch)
+    return `${formatInteger(nb)} sequence${nb === 1 ? '' : 's'} with a ${cb} cache take as much as ${formatInteger(nh)} with a ${ch} cache`;
+  return 'the change does not move memory';
+}
 
 /** Spans to plot: powers of two from 1k up to the larger evaluation span, plus both spans themselves. */
 export function chartSpans(...spans: (number | null)[]): number[] {

@@ -11,7 +11,6 @@ import { servedSequences } from '../../metrics/kv-cache.js';
 import { memoryAtSpan, reserveWords, usableDeviceBytes } from '../../metrics/memory-curve.js';
 import type { ModelSpec } from '../../model.js';
 import { formatBytes, formatInteger } from '../../format/units.js';
-import { cacheDType } from '../../metrics/storage-bytes.js';
 import {
   axisBottom,
   axisLeft,
@@ -24,6 +23,7 @@ import {
   type LegendEntry,
 } from './chart-frame.js';
 import { h, type Markup } from './markup.js';
+import { sameCurveWords } from '../memory-chart.js';
 
 const GIB = 2 ** 30;
 /** Points per curve: memory is linear in the span, so a few dozen on a log axis draw it exactly enough. */
@@ -46,17 +46,6 @@ function curve(spec: ModelSpec, spans: number[]): Point[] {
 function sequencesText(report: FileReport): string {
   const n = servedSequences(report.spec);
   return n === null ? '' : `${formatInteger(n)} sequence${n === 1 ? '' : 's'}`;
-}
-
-/** `4 sequences with a bf16 cache hold as much as 8 with an fp8 cache`: why two curves coincide. */
-export function sameCurveWords(base: ModelSpec, head: ModelSpec): string {
-  const nb = servedSequences(base);
-  const nh = servedSequences(head);
-  const cb = cacheDType(base);
-  const ch = cacheDType(head);
-  if (nb !== nh || cb !== ch)
-    return `${formatInteger(nb)} sequence${nb === 1 ? '' : 's'} with a ${cb} cache take as much as ${formatInteger(nh)} with a ${ch} cache`;
-  return 'the change does not move memory';
 }
 
 /** The chart, or null when neither version has a memory figure. */
