@@ -43,9 +43,10 @@ export default defineConfig({
     globalSetup: ['test/support/temp-root.ts'],
     coverage: {
       provider: 'v8',
-      include: ['src/core/**'],
-      // The validators ajv generates from schema/*.schema.json at build time: machine-written, and
-      // held to ajv compiling the schemas by test/policy/schema-options.test.ts.
+      include: ['src/core/**/*.ts'],
+      // The validators ajv generates from schema/*.schema.json and the kernel wabt assembles from
+      // its .wat at build time: machine-written, and held to their sources by
+      // test/policy/schema-options.test.ts and test/metrics/cosine-sum-kernel.test.ts.
       exclude: ['src/core/**/*.generated.ts'],
       reporter: ['text-summary', 'json-summary'],
       // The floor for `npm test -- --coverage` (what .ci/run runs), about a point under what the
