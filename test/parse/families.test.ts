@@ -3,6 +3,7 @@ import { inspectModel } from '../../src/core/inspect.js';
 import type { ModelSpec } from '../../src/core/model.js';
 import { CHECKPOINT_FAMILIES } from '../../src/core/parse/checkpoint-families.js';
 import { readModel } from '../../src/core/parse/read-model.js';
+import { frequencyPlan } from '../../src/core/metrics/compute.js';
 import { visionParams } from '../../src/core/metrics/vision-params.js';
 import { configText, fixture, lineOf } from './helpers.js';
 
@@ -88,6 +89,57 @@ describe('long-context scalings published configs ship', () => {
       8192, 131072, 131072,
     ]);
     expect(tuned.findings).toEqual([]);
+  });
+});
+
+describe('banded scaling with equal band factors (Llama 4)', () => {
+  // Llama-4-Scout-17B-16E's published config.json ships rope_scaling {rope_type: llama3, factor
+  // 16, low_freq_factor 1, high_freq_factor 1, original_max_position_embeddings 8192} (its values
+  // as inference code citing that config copies them). Equal factors leave no ramp: the common
+  // implementation (transformers' llama3 rope parameters) divides θ by the factor where the
+  // wavelength 2π/θ is above original/low and keeps θ below original/high, and its ramp between
+  // them is empty. The reference here is that rule written out per pair.
+  const scout = () => ({
+    ...(JSON.parse(fixture('llama4-chunked-experts.json')) as Record<string, unknown>),
+    max_position_embeddings: 10485760,
+    rope_scaling: {
+      rope_type: 'llama3',
+      factor: 16,
+      low_freq_factor: 1,
+      high_freq_factor: 1,
+      original_max_position_embeddings: 8192,
+    },
+  });
+
+  test('reads as a step, not an invalid ramp: no value-invalid, and θ/16 exactly for wavelengths past 8,192 tokens', () => {
+    const text = configText(scout());
+    const r = inspectModel(text, 'scout.json', {});
+    expect(r.findings.filter((f) => f.rule === 'value-invalid')).toEqual([]);
+    const code = rotary(r.spec);
+    expect([code.scaling?.kind, code.scaling?.low, code.scaling?.high]).toEqual(['banded', 1, 1]);
+    const plan = frequencyPlan(r.spec, 10485760, 8192)!;
+    expect(plan).not.toBeNull();
+    let scaledPairs = 0;
+    for (const [i, t] of plan.theta.entries()) {
+      const wavelength = (2 * Math.PI) / t;
+      const expected = wavelength > 8192 ? t / 16 : t;
+      if (wavelength > 8192) scaledPairs++;
+      expect(Object.is(plan.scaled[i], expected), `pair ${i}`).toBe(true);
+    }
+    // 64 pairs at base 500,000: the slow ones past 8,192 tokens are scaled, the fast ones kept.
+    expect(scaledPairs).toBeGreaterThan(0);
+    expect(scaledPairs).toBeLessThan(64);
+  });
+
+  test('a high factor below the low one is still refused, with a message that allows them equal', () => {
+    const config = scout();
+    (config.rope_scaling as Record<string, unknown>).high_freq_factor = 0.5;
+    const r = inspectModel(configText(config), 'scout.json', {});
+    const invalid = r.findings.filter((f) => f.rule === 'value-invalid');
+    expect(invalid.map((f) => f.key)).toEqual(['rope_scaling.high_freq_factor']);
+    expect(invalid[0]?.message).toContain(
+      'rope_scaling.high_freq_factor (0.5) must not be below rope_scaling.low_freq_factor (1)',
+    );
   });
 });
 

@@ -388,6 +388,25 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
     expect(readText(text).all.map((f) => f.rule)).toEqual(['scaling-factor-below-one']);
   });
 
+  test('banded low equal to high is a step, not an error; high below low is reported on the key that was written', () => {
+    const step = BASE.replace(
+      'code: rotary',
+      'code: rotary\n    scaling: {kind: banded, factor: 16, original-span: 8192, low: 1, high: 1}',
+    );
+    expect(readText(step).all.filter((f) => f.rule === 'value-invalid')).toEqual([]);
+    const backwards = BASE.replace(
+      'code: rotary',
+      'code: rotary\n    scaling: {kind: banded, factor: 16, original-span: 8192, low: 2, high: 1}',
+    );
+    const [f] = readText(backwards).all.filter((x) => x.rule === 'value-invalid');
+    expect([f?.key, f?.message]).toEqual([
+      'model.position.scaling.high',
+      expect.stringContaining(
+        'model.position.scaling.high (1) must not be below model.position.scaling.low (2)',
+      ),
+    ]);
+  });
+
   test('yarn alpha not below beta is reported on the key that was written', () => {
     const text = BASE.replace(
       'code: rotary',

@@ -126,13 +126,16 @@ export function scaleFrequencies(
       const { low, high } = scaling;
       if (
         trained === null ||
-        !(Number.isFinite(low) && Number.isFinite(high) && low >= 0 && high > low)
+        !(Number.isFinite(low) && Number.isFinite(high) && low >= 0 && high >= low)
       )
         return null;
       for (const [i, t] of theta.entries()) {
         const lambda = (2 * Math.PI) / t;
         if (lambda < trained / high) out[i] = t;
         else if (lambda > trained / low) out[i] = t / s;
+        // Equal ends (Llama 4's published configs): a step, no ramp. A wavelength exactly at the
+        // boundary keeps θ (where the common implementation's ramp is 0/0).
+        else if (high === low) out[i] = t;
         else {
           const g = (trained / lambda - low) / (high - low);
           out[i] = ((1 - g) * t) / s + g * t;

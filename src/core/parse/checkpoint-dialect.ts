@@ -723,6 +723,7 @@ function readScaling(r: FieldReader, at: PathSegment[], ctx: RotaryContext): Sca
       'high_freq_factor',
       draft.high,
       DEFAULT_BANDED_HIGH,
+      true,
     );
   }
   return draft;

@@ -352,7 +352,10 @@ export class FieldReader {
 
 /**
  * Ramp ends must be ordered (defaults standing in for an unstated end), or the ramp divides by
- * zero or runs backwards. Shared by both dialects' scaling readers.
+ * zero or runs backwards. Shared by both dialects' scaling readers. `stepAllowed`: equal ends are
+ * a step with no ramp between (banded scaling: wavelengths past the one boundary are scaled, the
+ * others kept), as Llama 4's published configs have them (`low_freq_factor` and
+ * `high_freq_factor` both 1).
  */
 export function orderedRamp(
   r: FieldReader,
@@ -363,15 +366,19 @@ export function orderedRamp(
   highKey: string,
   high: number | undefined,
   highDefault: number,
+  stepAllowed = false,
 ): void {
   if (low === undefined && high === undefined) return;
   low ??= lowDefault;
   high ??= highDefault;
-  if (Number.isNaN(low) || Number.isNaN(high) || high > low) return;
+  if (Number.isNaN(low) || Number.isNaN(high) || high > low || (stepAllowed && high === low))
+    return;
   const path = r.has([...at, highKey]) ? [...at, highKey] : [...at, lowKey];
   r.report(
     'value-invalid',
     path,
-    `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards; raise ${highKey} or lower ${lowKey}`,
+    stepAllowed
+      ? `${r.key([...at, highKey])} (${high}) must not be below ${r.key([...at, lowKey])} (${low}): the ramp between them would run backwards; raise ${highKey} or lower ${lowKey}`
+      : `${r.key([...at, highKey])} (${high}) must be above ${r.key([...at, lowKey])} (${low}): the ramp between them would divide by zero or run backwards; raise ${highKey} or lower ${lowKey}`,
   );
 }

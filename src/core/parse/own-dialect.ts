@@ -526,7 +526,17 @@ function readScaling(r: FieldReader, at: string[]): ScalingDraft | null {
     draft.beta,
     DEFAULT_YARN_BETA,
   );
-  orderedRamp(r, at, 'low', draft.low, DEFAULT_BANDED_LOW, 'high', draft.high, DEFAULT_BANDED_HIGH);
+  orderedRamp(
+    r,
+    at,
+    'low',
+    draft.low,
+    DEFAULT_BANDED_LOW,
+    'high',
+    draft.high,
+    DEFAULT_BANDED_HIGH,
+    true,
+  );
   for (const key of kind === 'yarn'
     ? ['low', 'high']
     : kind === 'banded'
