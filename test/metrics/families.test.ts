@@ -276,6 +276,44 @@ describe('layers that differ', () => {
     expect(m.receptiveField).toBeNull();
   });
 
+  it('Cohere2: the sliding layers rotate and the global ones have no position code (transformers, modular_cohere2.py: Cohere2Attention applies the rotary code only when the layer has a window)', () => {
+    // Command-R7B-style shape, invented: 32 layers, window 4096, every 4th layer global.
+    const cohere2 = {
+      architectures: ['Cohere2ForCausalLM'],
+      model_type: 'cohere2',
+      hidden_size: 4096,
+      intermediate_size: 14336,
+      num_hidden_layers: 32,
+      num_attention_heads: 32,
+      num_key_value_heads: 8,
+      sliding_window: 4096,
+      rope_theta: 50000,
+      max_position_embeddings: 131072,
+      vocab_size: 256000,
+    };
+    const global = [3, 7, 11, 15, 19, 23, 27, 31];
+    // From the family's every-4th pattern, and from layer_types spelled out.
+    const fromPattern = readModel(configText(cohere2), 'c.json').spec;
+    const layerTypes = Array.from({ length: 32 }, (_, i) =>
+      global.includes(i) ? 'full_attention' : 'sliding_attention',
+    );
+    const fromTypes = readModel(configText({ ...cohere2, layer_types: layerTypes }), 'c.json').spec;
+    for (const spec of [fromPattern, fromTypes]) {
+      expect(spec.positionFreeLayers).toEqual(global);
+      const m = computeMetrics(withSpan(spec, 131072));
+      expect(m.layerKinds!.map((k) => [k.attention, k.positionCode, k.layers])).toEqual([
+        ['sliding', 'rotary', 24],
+        ['full', 'none', 8],
+      ]);
+    }
+    // Cohere (the first generation) has no window and rotates in every layer.
+    const cohere = readModel(
+      configText({ ...cohere2, model_type: 'cohere', sliding_window: undefined }),
+      'c.json',
+    ).spec;
+    expect(cohere.positionFreeLayers ?? null).toBeNull();
+  });
+
   it('an empty no_rope_layers list takes the Llama-4-style default of every 4th layer position-free, as the config class does', () => {
     const cfg = {
       ...(JSON.parse(fixture('llama4-chunked-experts.json')) as Record<string, unknown>),

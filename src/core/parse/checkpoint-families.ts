@@ -43,6 +43,11 @@ export interface CheckpointFamily {
   globalEvery?: number;
   /** Without `no_rope_layers`, every Nth layer has no position code (the config class's interval). */
   noRopeEvery?: number;
+  /**
+   * Only the sliding-window layers rotate: the global layers of a windowed model have no position
+   * code (Cohere2: its attention applies the rotary code only when the layer has a window).
+   */
+  ropeOnSlidingOnly?: true;
   /** Mixture layers always add one shared expert as wide as a routed one (Llama-4 style). */
   oneSharedExpert?: true;
   /** The published config class defaults (default: none taken). */
@@ -177,7 +182,7 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
   llama4: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   llama4_text: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   qwen3_next: { position: 'rotary' },
-  cohere2: { position: 'rotary', gated: true, globalEvery: 4 },
+  cohere2: { position: 'rotary', gated: true, globalEvery: 4, ropeOnSlidingOnly: true },
   gpt2: { position: 'learned', bias: true },
   gpt_bigcode: { position: 'learned', bias: true },
   gpt_neo: { position: 'learned', bias: true },

@@ -10,6 +10,8 @@
  *   starting with a local layer; gemma3 / gemma3_text: N = 6; cohere2: N = 4 — each class's
  *   default); `max_window_layers`
  *   (layers from that index on slide, as the Qwen code does); otherwise every layer slides.
+ *   In cohere2 (`ropeOnSlidingOnly`) the layers that do not slide have no position code: its
+ *   attention applies the rotary code only in layers with a window.
  * - `attention_chunk_size` with `no_rope_layers` (one entry per layer, 1 = the layer has the
  *   rotary code, 0 = none) or `no_rope_layer_interval` (every Nth layer has none; default 4 for
  *   llama4 / llama4_text): as the Llama-4-style config class expands it, layers with the rotary
@@ -51,6 +53,24 @@ export function readLayerPlan(
   modelType: string | null,
   layers: number,
 ): LayerPlanDraft {
+  const plan = readLayerKinds(r, modelType, layers);
+  // A family whose global layers carry no position code (`ropeOnSlidingOnly`), unless the file
+  // says which layers have none.
+  if (
+    familyOf(modelType)?.ropeOnSlidingOnly &&
+    plan.positionFreeLayers === null &&
+    plan.layerTypes?.includes('sliding')
+  ) {
+    const free = plan.layerTypes.flatMap((kind, i) => (kind === 'sliding' ? [] : [i]));
+    if (free.length > 0) {
+      plan.positionFreeLayers = free;
+      r.locate('positionFreeLayers', ['model_type']);
+    }
+  }
+  return plan;
+}
+
+function readLayerKinds(r: FieldReader, modelType: string | null, layers: number): LayerPlanDraft {
   const plan: LayerPlanDraft = {
     slidingWindow: null,
     windowLayers: null,
