@@ -190,6 +190,11 @@ export interface WeightQuantization {
   zeroPoint: boolean;
   /** The output matrix is quantized too (default: `false`). */
   output: boolean;
+  /**
+   * Which matrices of the layers are quantized: `experts`, the routed experts' only (MXFP4
+   * checkpoints); absent, every matrix of the layers.
+   */
+  scope?: 'experts';
 }
 
 export interface ModelSpec {

@@ -235,6 +235,105 @@ describe('quantization_config of checkpoint configs', () => {
   });
 });
 
+describe('MXFP4 mixtures of experts (gpt-oss)', () => {
+  // OCP Microscaling Formats (MX) Specification v1.0 (2023): MXFP4 holds FP4 (E2M1) elements in
+  // blocks of 32 that share one 8-bit E8M0 scale, 4.25 bits per element. gpt-oss checkpoints store
+  // their routed experts' weights so and keep attention, router, embeddings and output in bf16
+  // (their quantization_config lists those in modules_to_not_convert). Published figures: OpenAI's
+  // gpt-oss model card (2025), Table 1: gpt-oss-120b 116.83B parameters, a 60.8 GiB checkpoint;
+  // gpt-oss-20b 20.91B and 12.8 GiB (from memory). The shapes are the published key style with
+  // the published sizes (hidden 2880, experts 2880 wide, 64 heads of 64, 8 key/value heads).
+  function gptOss(layers: number, experts: number, extra: Record<string, unknown> = {}): string {
+    return JSON.stringify(
+      {
+        architectures: ['GptOssForCausalLM'],
+        model_type: 'gpt_oss',
+        hidden_size: 2880,
+        intermediate_size: 2880,
+        num_hidden_layers: layers,
+        num_attention_heads: 64,
+        num_key_value_heads: 8,
+        head_dim: 64,
+        hidden_act: 'silu',
+        attention_bias: true,
+        num_local_experts: experts,
+        num_experts_per_tok: 4,
+        max_position_embeddings: 131072,
+        rope_theta: 150000,
+        vocab_size: 201088,
+        tie_word_embeddings: false,
+        torch_dtype: 'bfloat16',
+        quantization_config: {
+          quant_method: 'mxfp4',
+          modules_to_not_convert: [
+            'model.layers.*.self_attn',
+            'model.layers.*.mlp.router',
+            'model.embed_tokens',
+            'lm_head',
+          ],
+        },
+        ...extra,
+      },
+      null,
+      2,
+    );
+  }
+  const GIB = 2 ** 30;
+
+  it('stores a block of 32 weights in 32 · 4 + 8 bits: 4.25 bits per weight', () => {
+    const q = {
+      method: 'mxfp4',
+      bits: 4,
+      groupSize: 32,
+      scaleBits: 8,
+      zeroPoint: false,
+      output: false,
+    };
+    expect(quantizedBytes(32, q)).toBe((32 * 4 + 8) / 8);
+    expect((quantizedBytes(2 ** 20, q)! * 8) / 2 ** 20).toBe(4.25);
+  });
+
+  it('counts gpt-oss-120b and gpt-oss-20b within 1 % of the published parameters and checkpoint sizes, experts at 4.25 bits and the rest in bf16', () => {
+    for (const [layers, experts, params, gib] of [
+      [36, 128, 116.83e9, 60.8],
+      [24, 32, 20.91e9, 12.8],
+    ] as const) {
+      const report = inspectModel(gptOss(layers, experts), 'config.json');
+      expect(report.findings.filter((f) => f.severity !== 'info')).toEqual([]);
+      expect(Math.abs(report.metrics.params! - params) / params).toBeLessThan(0.01);
+      expect(Math.abs(report.metrics.weightBytes! / GIB - gib) / gib).toBeLessThan(0.01);
+      // Worked by hand: the routed experts' matrices (gated: 3 · 2880 · 2880 each) at 4.25 bits,
+      // every other parameter at 2 bytes.
+      const expertMatrices = layers * experts * 3 * 2880 * 2880;
+      expect(report.metrics.weightBytes).toBe(
+        (expertMatrices * 4.25) / 8 + (report.metrics.params! - expertMatrices) * 2,
+      );
+    }
+  });
+
+  it('says so when the model has no experts, or keeps expert modules unquantized', () => {
+    const dense = inspectModel(
+      gptOss(24, 32, { num_local_experts: undefined, num_experts_per_tok: undefined }),
+      'config.json',
+    );
+    const unknown = dense.findings.find((f) => f.rule === 'quantization-unknown');
+    expect(unknown?.key).toBe('quantization_config.quant_method');
+    expect(unknown?.message).toContain('no experts');
+    expect(dense.metrics.weightBytes).toBe(dense.metrics.params! * 2);
+    const keptExperts = inspectModel(
+      gptOss(24, 32, {
+        quantization_config: {
+          quant_method: 'mxfp4',
+          modules_to_not_convert: ['model.layers.0.mlp.experts', 'lm_head'],
+        },
+      }),
+      'config.json',
+    );
+    const ignored = keptExperts.findings.find((f) => f.rule === 'key-ignored');
+    expect(ignored?.key).toBe('quantization_config.modules_to_not_convert');
+  });
+});
+
 describe('quantized weights from the own description and the policy', () => {
   const own = (dtypes: string) => `format: context-reach-model/1
 model:

@@ -28,6 +28,8 @@ export interface ParameterBreakdown extends ParameterCounts {
   vectors: number;
   /** count: `matrices` with `k` routed experts instead of `E`. */
   activeMatrices: number;
+  /** count: the routed experts' matrices, all `E` of every mixture layer (0 for a dense model). */
+  expertMatrices: number;
 }
 
 /** A count split into weight matrices and vectors (norms, biases). */
@@ -197,6 +199,7 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
   const dense = feedForwardPart(hidden, ffn, gated, bias);
   let mixtureTotal = dense;
   let mixtureActive = dense;
+  let routedMatrices = 0;
   let denseLayers = 0;
   if (spec.experts !== null && spec.experts !== undefined) {
     const x = spec.experts;
@@ -228,6 +231,7 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
     });
     mixtureTotal = add(times(e, expert), always);
     mixtureActive = add(times(k, expert), always);
+    routedMatrices = e * expert.matrices;
   }
   const moeLayers = spec.experts ? layers - denseLayers : 0;
   const denseCount = layers - moeLayers;
@@ -273,7 +277,15 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
   }
   const params = total(stackTotal) + embedding + output;
   const activeParams = total(stackActive) + embedding + output;
-  const all = [params, activeParams, stackTotal.matrices, stackTotal.vectors, stackActive.matrices];
+  const expertMatrices = moeLayers * routedMatrices;
+  const all = [
+    params,
+    activeParams,
+    stackTotal.matrices,
+    stackTotal.vectors,
+    stackActive.matrices,
+    expertMatrices,
+  ];
   if (!all.every(Number.isFinite)) return null;
   return {
     params,
@@ -284,6 +296,7 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
     matrices: stackTotal.matrices,
     vectors: stackTotal.vectors,
     activeMatrices: stackActive.matrices,
+    expertMatrices,
   };
 }
 

@@ -74,7 +74,8 @@ export function quantizedBytes(weights: number, q: WeightQuantization): number |
 
 /**
  * bytes: `weightBytes` under a quantization: the layers' matrices (and the output matrix when
- * `output`) by `quantizedBytes`, everything else at the unquantized dtype. Null when the
+ * `output`; only the routed experts' matrices when `scope` is `experts`) by `quantizedBytes`,
+ * everything else at the unquantized dtype. Null when the
  * breakdown or the quantization is degenerate.
  */
 export function quantizedWeightBytes(
@@ -83,7 +84,8 @@ export function quantizedWeightBytes(
   q: WeightQuantization,
 ): number | null {
   const plain = bytesPerElement(unquantizedDType(spec));
-  const quantized = parts.matrices + (q.output ? parts.output : 0);
+  const quantized =
+    q.scope === 'experts' ? parts.expertMatrices : parts.matrices + (q.output ? parts.output : 0);
   const stored = quantizedBytes(quantized, q);
   if (plain === null || stored === null) return null;
   const total = stored + (parts.params - quantized) * plain;

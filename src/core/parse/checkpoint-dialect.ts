@@ -291,7 +291,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
         expected: 'a standard deviation above 0',
       }) ?? null,
     embeddingMultiplier: readMultiplier(r, modelType, hidden),
-    quantization: readQuantization(r, hidden),
+    quantization: readQuantization(r, hidden, experts !== null && experts !== undefined),
   };
 }
 

@@ -13,6 +13,10 @@
  *   per block, or with `bnb_4bit_use_double_quant` an 8-bit one plus a 32-bit scale per 256 of
  *   them (8.125 bits per block); `load_in_8bit`, 8-bit weights with a 32-bit scale per row
  *   (rows taken as the model width). Block sizes and scale widths from memory (common practice).
+ * - `mxfp4` (OCP Microscaling Formats v1.0, 2023: MXFP4 is FP4 E2M1 elements in blocks of 32
+ *   sharing one 8-bit E8M0 scale, 4.25 bits per weight): the routed experts' matrices only, as
+ *   MXFP4 checkpoints of mixtures of experts store them (gpt-oss); attention, router, embeddings
+ *   and output stay unquantized, which is what their `modules_to_not_convert` lists.
  * Modules listed in `modules_to_not_convert` / `llm_int8_skip_modules` other than `lm_head` are not
  * modelled (a `key-ignored` finding); any other method is a `quantization-unknown` finding and the
  * weights are counted unquantized, an upper bound, never a silent figure.
@@ -25,10 +29,14 @@ import { isCount } from '../metrics/sizes.js';
 const AT: PathSegment[] = ['quantization_config'];
 
 /** Methods counted, for messages. */
-export const COUNTED_METHODS: readonly string[] = ['gptq', 'awq', 'fp8', 'bitsandbytes'];
+export const COUNTED_METHODS: readonly string[] = ['gptq', 'awq', 'fp8', 'bitsandbytes', 'mxfp4'];
 
 /** Weights per scale when a gptq or awq config states none (default: `128`). */
 const DEFAULT_METHOD_GROUP = 128;
+/** MXFP4 (OCP Microscaling Formats v1.0, 2023): 4-bit elements, blocks of 32, one 8-bit scale each. */
+const MXFP4_BITS = 4;
+const MXFP4_BLOCK = 32;
+const MXFP4_SCALE_BITS = 8;
 /** bitsandbytes 4-bit block size (from memory: 64) and its scale bits, plain and double-quantized. */
 const BNB4_BLOCK = 64;
 const BNB4_SCALE_BITS = 32;
@@ -37,9 +45,14 @@ const BNB4_DOUBLE_SCALE_BITS = 8 + 32 / 256;
 /**
  * The weight quantization `quantization_config` states, or null when there is none (or it cannot
  * be counted: then a finding says so). `hidden` is the model width, the row width of a
- * one-scale-per-row format.
+ * one-scale-per-row format; `hasExperts`, whether the model has routed experts (what MXFP4
+ * quantizes).
  */
-export function readQuantization(r: FieldReader, hidden: number): WeightQuantization | null {
+export function readQuantization(
+  r: FieldReader,
+  hidden: number,
+  hasExperts = true,
+): WeightQuantization | null {
   if (!r.has(AT)) return null;
   const block = r.get(AT);
   if (block === null || typeof block !== 'object' || Array.isArray(block)) {
@@ -145,6 +158,43 @@ export function readQuantization(r: FieldReader, hidden: number): WeightQuantiza
         `${r.key(AT)} names bitsandbytes but neither load_in_4bit nor load_in_8bit is true, so the weights are counted unquantized`,
       );
       return null;
+    }
+    case 'mxfp4': {
+      if (!hasExperts) {
+        unknown(
+          r,
+          methodPath,
+          `${r.key(methodPath)} is "mxfp4", which the reader counts on the routed experts' matrices only, and this model has no experts`,
+        );
+        return null;
+      }
+      const skipPath = per(['modules_to_not_convert']);
+      const list = r.get(skipPath);
+      if (list !== undefined && !Array.isArray(list)) {
+        r.report(
+          'value-invalid',
+          skipPath,
+          `${r.key(skipPath)} ${r.is(skipPath)}; expected a list of module names`,
+        );
+      } else if (
+        Array.isArray(list) &&
+        list.some((name) => typeof name === 'string' && /expert/i.test(name))
+      ) {
+        r.report(
+          'key-ignored',
+          skipPath,
+          `${r.key(skipPath)} keeps expert modules unquantized, which is not modelled: every routed expert's matrices are counted at MXFP4's 4.25 bits (an under-count of what those modules hold)`,
+        );
+      }
+      return {
+        method,
+        bits: MXFP4_BITS,
+        groupSize: MXFP4_BLOCK,
+        scaleBits: MXFP4_SCALE_BITS,
+        zeroPoint: false,
+        output: false,
+        scope: 'experts',
+      };
     }
     default:
       unknown(

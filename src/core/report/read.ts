@@ -257,8 +257,11 @@ const spec = record(
         ...numbers(['bits', 'groupSize', 'scaleBits']),
         zeroPoint: { type: 'boolean' },
         output: { type: 'boolean' },
+        // Only MXFP4 checkpoints state it (their routed experts alone are quantized).
+        scope: { enum: ['experts'] },
       },
       true,
+      ['scope'],
     ),
   },
   false,
