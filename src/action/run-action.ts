@@ -59,30 +59,22 @@ interface Changes {
 }
 
 /**
- * `client`, whose first `findComment` answers with `lookup` (the same look-up, asked earlier);
- * every later call asks again.
+ * `target` whose first call of `method` answers with `early` (the same request, asked earlier);
+ * every later call asks again. `target` itself when nothing was asked early.
  */
-function withLookup(client: GitHubClient, lookup: Promise<Comment | null> | null): GitHubClient {
-  if (lookup === null) return client;
-  let pending: Promise<Comment | null> | null = lookup;
-  return Object.assign(Object.create(client) as GitHubClient, {
-    findComment(...args: Parameters<GitHubClient['findComment']>) {
+function answeredOnce<T extends object, K extends keyof T>(
+  target: T,
+  method: K,
+  early: Promise<unknown> | null,
+): T {
+  if (early === null) return target;
+  let pending: Promise<unknown> | null = early;
+  const call = target[method] as (...args: unknown[]) => unknown;
+  return Object.assign(Object.create(target) as T, {
+    [method]: (...args: unknown[]) => {
       const asked = pending;
       pending = null;
-      return asked ?? client.findComment(...args);
-    },
-  });
-}
-
-/** `reviews`, whose first `listReviewComments` answers with `listed` (asked earlier). */
-function withListed(reviews: ReviewApi, listed: Promise<ReviewComment[]> | null): ReviewApi {
-  if (listed === null) return reviews;
-  let pending: Promise<ReviewComment[]> | null = listed;
-  return Object.assign(Object.create(reviews) as ReviewApi, {
-    listReviewComments(target: ReviewTarget) {
-      const asked = pending;
-      pending = null;
-      return asked ?? reviews.listReviewComments(target);
+      return asked ?? call.apply(target, args);
     },
   });
 }
@@ -299,7 +291,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     await labelsAsked;
     throw error;
   }
-  const publisher = api ? withLookup(api, commentLookup) : null;
+  const publisher = api ? answeredOnce(api, 'findComment', commentLookup) : null;
   const labels = await labelsAsked;
 
   let report: GateReport;
@@ -365,7 +357,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     const headsAsked = early ? readHeads(early) : null;
     headsAsked?.catch(() => undefined);
     suggesting = {
-      reviews: withListed(reviews, reviewsListed),
+      reviews: answeredOnce(reviews, 'listReviewComments', reviewsListed),
       target,
       patchesAsked,
       readHeads: (paths) =>
