@@ -236,7 +236,8 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   const api = connect();
   const git = deps.createGit(env.GITHUB_WORKSPACE ?? '.');
   // Labels added after the event (the usual way to apply a waiver) count on a re-run. Asked for
-  // now, so the request (and loading the API client) runs while git lists the changes.
+  // now, and awaited by the gate only when it decides, so the request (and loading the API
+  // client) runs while git lists the changes and the gate measures them.
   const labelsAsked =
     api && event.pullNumber !== null
       ? api.getPullRequest(event.owner, event.repo, event.pullNumber).then(
@@ -292,7 +293,6 @@ export async function runAction(deps: ActionDeps): Promise<void> {
     throw error;
   }
   const publisher = api ? answeredOnce(api, 'findComment', commentLookup) : null;
-  const labels = await labelsAsked;
 
   let report: GateReport;
   try {
@@ -302,7 +302,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
       changes: gathered.changes,
       policyPath: settings.policyPath,
       policyRef: gathered.policyRef,
-      labels,
+      labels: labelsAsked,
       notices: gathered.notices,
     });
   } catch (error) {

@@ -46,8 +46,11 @@ export interface GateRequest {
   policyPath: string;
   /** Commit the policy is read at (default: `base`): the base branch's tip when `base` is the merge base. */
   policyRef?: string;
-  /** Labels on the pull request (default: none). */
-  labels?: string[];
+  /**
+   * Labels on the pull request (default: none). May be a promise: the gate reads and measures
+   * first and waits for the labels only to decide (the action asks GitHub for them meanwhile).
+   */
+  labels?: string[] | Promise<string[]>;
   /** Notices from gathering the changes (truncated lists, fork tokens). */
   notices?: string[];
   /** Serving overrides from the command line (default: none). */
@@ -326,7 +329,7 @@ export async function runGate(source: ContentSource, request: GateRequest): Prom
     return !skip;
   });
 
-  const labels = request.labels ?? [];
+  const labels = (await request.labels) ?? [];
   const waiverLabel = policy.waiverLabel ?? null;
   // Every blocking finding gets its remedy here, proven against the same policy and base.
   return attachRemedies(
