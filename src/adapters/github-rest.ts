@@ -6,7 +6,8 @@
  * limits, waiting as long as GitHub asks, within a bound). Errors leave as `ApiError`; the token
  * never reaches a log line or an error message.
  */
-import type { getOctokit } from '@actions/github';
+import { getProxyUrl } from '@actions/http-client/lib/proxy';
+import type * as OctokitStack from './octokit.js';
 import type { ChangedFile } from '../core/changes.js';
 import type { PlannedSuggestion } from '../core/render/suggestions.js';
 import { ContentTooLargeError, MAX_CONFIG_BYTES } from './content-limit.js';
@@ -198,7 +199,72 @@ export interface GitHubClientOptions {
   requestTimeoutMs?: number;
 }
 
-type Octokit = ReturnType<typeof getOctokit>;
+type Stack = typeof OctokitStack;
+
+/** The client class: Octokit with the REST methods, pagination, retries and rate-limit handling. */
+const clientClass = (stack: Stack) =>
+  stack.Octokit.plugin(
+    stack.restEndpointMethods,
+    stack.paginateRest,
+    stack.retry,
+    stack.throttling,
+  );
+/** Time one request of the review suggestions may take, in milliseconds. */
+const REVIEW_TIMEOUT_MS = 30_000;
+
+/** The review suggestions' client class: the same without rate-limit handling. */
+const reviewClass = (stack: Stack) =>
+  stack.Octokit.plugin(stack.restEndpointMethods, stack.paginateRest, stack.retry);
+type Octokit = InstanceType<ReturnType<typeof clientClass>>;
+
+/**
+ * The Octokit stack (`octokit.ts`) and the fetch its requests take to `baseUrl`: node-fetch, or,
+ * when a proxy applies to that address (`https_proxy`, `HTTPS_PROXY` and the like, less
+ * `no_proxy`, as `@actions/http-client` reads them), the toolkit's proxy-aware fetch.
+ */
+async function loadStack(baseUrl: string): Promise<Stack & { fetch: typeof globalThis.fetch }> {
+  const stack = await import('./octokit.js');
+  if (getProxyUrl(new URL(baseUrl)) === undefined)
+    return { ...stack, fetch: stack.nodeFetch as unknown as typeof globalThis.fetch };
+  const { proxyDefaults } = await import('./octokit-proxy.js');
+  return {
+    ...stack,
+    fetch: (proxyDefaults.request?.fetch ?? globalThis.fetch) as typeof globalThis.fetch,
+  };
+}
+
+/**
+ * `fetch` with a time limit per request (`AbortSignal.timeout`) unless the caller passes a signal.
+ * A request that runs out of time fails with the signal's `TimeoutError`, whichever fetch made it:
+ * Octokit turns that into a status-500 `RequestError`, which the retry plugin retries (node-fetch
+ * would reject with its own `AbortError`, which Octokit rethrows as it is, unretried).
+ */
+function timedFetch(fetch: typeof globalThis.fetch, timeoutMs: number): typeof globalThis.fetch {
+  return async (url, init) => {
+    if (init?.signal) return fetch(url, init);
+    const signal = AbortSignal.timeout(timeoutMs);
+    try {
+      return await fetch(url, { ...init, signal });
+    } catch (error) {
+      throw signal.aborted ? (signal.reason as Error) : error;
+    }
+  };
+}
+
+/**
+ * What the toolkit's `getOctokit` adds to a client's options: the token as `token …`
+ * authorization, and the workflow run's orchestration id (`ACTIONS_ORCHESTRATION_ID`, characters
+ * outside `[a-z0-9_.-]` as `_`) at the head of the user agent.
+ */
+function runnerOptions(token: string): { auth: string; userAgent?: string } {
+  const id = (process.env.ACTIONS_ORCHESTRATION_ID ?? '').trim();
+  return {
+    auth: `token ${token}`,
+    ...(id === ''
+      ? {}
+      : { userAgent: `actions_orchestration_id/${id.replace(/[^a-z0-9_.-]/gi, '_')}` }),
+  };
+}
 
 /** Pages of comments read at most, 100 each: past that a pull request is not a place to search. */
 const MAX_COMMENT_PAGES = 100;
@@ -253,18 +319,14 @@ async function readBounded(body: unknown, path: string, limit: number): Promise<
   }
   if (typeof body === 'string')
     return readBounded(new TextEncoder().encode(body).buffer, path, limit);
-  const reader = (body as ReadableStream<Uint8Array>).getReader();
+  // A web stream (fetch's) or a Node stream (node-fetch's): both are async iterables, and leaving
+  // the loop early, by the throw, cancels or destroys the stream.
   const chunks: Uint8Array[] = [];
   let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > limit) {
-      await reader.cancel();
-      throw new ContentTooLargeError(path, total, limit);
-    }
-    chunks.push(value);
+  for await (const chunk of body as AsyncIterable<Uint8Array>) {
+    total += chunk.byteLength;
+    if (total > limit) throw new ContentTooLargeError(path, total, limit);
+    chunks.push(chunk);
   }
   const bytes = new Uint8Array(total);
   let offset = 0;
@@ -312,19 +374,17 @@ export interface ReviewApi {
 
 /** The REST calls, with the runner's request defaults and the retry plugin; the Octokit stack loads on first use. */
 export function createReviewApi(token: string, options: { baseUrl?: string }): ReviewApi {
-  let octokit: Octokit | null = null;
-  const client = async (): Promise<Octokit> => {
+  let octokit: InstanceType<ReturnType<typeof reviewClass>> | null = null;
+  const client = async () => {
     if (octokit) return octokit;
-    const { getOctokit, actionsDefaults, retry } = await import('./octokit.js');
-    octokit = getOctokit(
-      token,
-      {
-        baseUrl: options.baseUrl ?? 'https://api.github.com',
-        request: { ...actionsDefaults.request },
-        retry: { retries: 2 },
-      },
-      retry,
-    );
+    const baseUrl = options.baseUrl ?? 'https://api.github.com';
+    const stack = await loadStack(baseUrl);
+    octokit = new (reviewClass(stack))({
+      ...runnerOptions(token),
+      baseUrl,
+      request: { fetch: timedFetch(stack.fetch, REVIEW_TIMEOUT_MS) },
+      retry: { retries: 2 },
+    });
     return octokit;
   };
   return {
@@ -462,46 +522,39 @@ export function createGitHubClient(token: string, options: GitHubClientOptions):
   let loading: Promise<void> | null = null;
   // The Octokit stack is loaded and built on the first call (see `octokit.ts` for why).
   const connect = () =>
-    (loading ??= import('./octokit.js').then(
-      ({ getOctokit, actionsDefaults, retry, throttling, Bottleneck }) => {
-        const baseFetch = (actionsDefaults.request?.fetch ?? globalThis.fetch) as typeof fetch;
-        const timedFetch = (url: string | URL | Request, init?: RequestInit): Promise<Response> =>
-          baseFetch(url, { ...init, signal: init?.signal ?? AbortSignal.timeout(timeoutMs) });
-        // GitHub asks integrations to space writes a second apart, and more for writes that
-        // notify people; the throttling plugin's own spacing (1 s, 3 s), per client and scaled
-        // like every other wait GitHub asks for.
-        const spaced = (name: string, seconds: number) =>
-          new Bottleneck.Group({
-            id: `${limiterId}-${name}`,
-            maxConcurrent: 1,
-            minTime: seconds * msPerSecond,
-          });
-        const notifications = spaced('notifications', 3);
-        const build = (write: InstanceType<typeof Bottleneck.Group>) =>
-          getOctokit(
-            token,
-            {
-              baseUrl: options.baseUrl ?? 'https://api.github.com',
-              log,
-              request: { ...actionsDefaults.request, fetch: timedFetch },
-              retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
-              throttle: {
-                // One limiter set per client: spacing between writes is per run, not shared across clients.
-                id: limiterId,
-                write,
-                notifications,
-                retryAfterBaseValue: msPerSecond,
-                onRateLimit: limitHandler('rate limit'),
-                onSecondaryRateLimit: limitHandler('secondary rate limit'),
-              },
-            },
-            retry,
-            throttling,
-          );
-        octokit = build(spaced('write', 1));
-        queries = build(spaced('query', 0));
-      },
-    ));
+    (loading ??= loadStack(options.baseUrl ?? 'https://api.github.com').then((stack) => {
+      const { Bottleneck } = stack;
+      // GitHub asks integrations to space writes a second apart, and more for writes that
+      // notify people; the throttling plugin's own spacing (1 s, 3 s), per client and scaled
+      // like every other wait GitHub asks for.
+      const spaced = (name: string, seconds: number) =>
+        new Bottleneck.Group({
+          id: `${limiterId}-${name}`,
+          maxConcurrent: 1,
+          minTime: seconds * msPerSecond,
+        });
+      const notifications = spaced('notifications', 3);
+      const Client = clientClass(stack);
+      const build = (write: InstanceType<typeof Bottleneck.Group>) =>
+        new Client({
+          ...runnerOptions(token),
+          baseUrl: options.baseUrl ?? 'https://api.github.com',
+          log,
+          request: { fetch: timedFetch(stack.fetch, timeoutMs) },
+          retry: { retries: options.retries ?? 3, retryAfterBaseValue: msPerSecond },
+          throttle: {
+            // One limiter set per client: spacing between writes is per run, not shared across clients.
+            id: limiterId,
+            write,
+            notifications,
+            retryAfterBaseValue: msPerSecond,
+            onRateLimit: limitHandler('rate limit'),
+            onSecondaryRateLimit: limitHandler('secondary rate limit'),
+          },
+        });
+      octokit = build(spaced('write', 1));
+      queries = build(spaced('query', 0));
+    }));
 
   /** The client a GraphQL document goes through: the unspaced one only for a read-only query. */
   const readOnlyQuery = (document: string): Octokit =>
