@@ -7,7 +7,7 @@ import { writeReportFile } from './write-report.js';
 import { createRunnerOutput } from './runner-output.js';
 
 // The entry only wires the real adapters to the action; errors become one failed-check message.
-import('@actions/core').then(
+import('./toolkit.js').then(
   (core) => {
     const out = createRunnerOutput(core);
     return runAction({
