@@ -2,7 +2,7 @@ import type { ChangedFile } from '../core/changes.js';
 import type { GateReport, Verdict } from '../core/report/types.js';
 import { runGate, type ContentSource } from '../core/gate.js';
 import { planAnnotations } from '../core/render/annotations.js';
-import { renderComment } from '../core/render/comment.js';
+import { commentRenderer } from '../core/render/comment.js';
 import { renderFailure } from '../core/render/failure.js';
 import { gateJsonParts } from '../core/render/gate-json.js';
 import { COMMENT_MARKER } from '../core/render/notice.js';
@@ -399,10 +399,12 @@ export async function runAction(deps: ActionDeps): Promise<void> {
         : null,
   };
 
+  // The comment and the job summary show the same files: one renderer renders each section once.
+  const render = commentRenderer({ blobUrl, unannotated: omitted, ...html });
   let commentUrl = '';
   const runNotices: string[] = [];
   if (settings.comment === 'update' && event.pullNumber !== null && publisher) {
-    const body = renderComment(report, { blobUrl, unannotated: omitted, ...html });
+    const body = render(report);
     try {
       const published = await publishComment(publisher, {
         owner: event.owner,
@@ -447,11 +449,7 @@ export async function runAction(deps: ActionDeps): Promise<void> {
   for (const notice of gathered.notices) out.warning(notice);
   const summaryReport =
     runNotices.length > 0 ? { ...report, notices: [...report.notices, ...runNotices] } : report;
-  await out.summary(
-    fitSummary((limit) =>
-      renderComment(summaryReport, { blobUrl, unannotated: omitted, limit, ...html }),
-    ),
-  );
+  await out.summary(fitSummary((limit) => render(summaryReport, limit)));
   setOutputs(out, report, settings.reportJson, commentUrl);
   out.info(
     `context-reach verdict: ${report.verdict} (${report.blocking} blocking, ${report.warnings} warnings)`,

@@ -7,6 +7,7 @@ import { createScanMemo } from '../../src/core/metrics/scan-memo.js';
 import { PER_DEVICE_METRICS } from '../../src/core/metrics/types.js';
 import {
   COMMENT_LIMIT,
+  commentRenderer,
   effectiveParts,
   fileSection,
   renderComment,
@@ -109,6 +110,35 @@ describe('renderComment(report)', () => {
     expect(trimmed.length).toBeLessThanOrEqual(COMMENT_LIMIT);
     expect(trimmed).toContain("Trimmed to fit GitHub's comment limit");
     expect(trimmed.split('\n')[0]).toBe(COMMENT_MARKER);
+  });
+});
+
+describe('commentRenderer(ctx): one context, several reports and limits', () => {
+  it("gives renderComment's text for every limit, in any order, and for a report with other notices", () => {
+    const many = gateOver(
+      Array.from({ length: 60 }, (_, i) => ({
+        path: `models/m${i}/config.json`,
+        base: {},
+        head: { max_position_embeddings: 8192, rope_theta: 20000 + i },
+      })),
+    );
+    const ctx = { blobUrl: 'https://github.example/o/r/blob/222', unannotated: 3 };
+    const render = commentRenderer(ctx);
+    const withNotice = { ...many, notices: [...many.notices, 'The comment could not be written.'] };
+    // The limits that pick each of the forms, the fallback that names files, and none at all.
+    const limits = [undefined, Infinity, 1_000_000, COMMENT_LIMIT, 40_000, 20_000, 5_000, 1_024];
+    const texts = new Set<string>();
+    for (const limit of [...limits, ...[...limits].reverse()]) {
+      for (const report of [many, withNotice]) {
+        const text = render(report, limit);
+        expect(text).toBe(
+          renderComment(report, { ...ctx, ...(limit === undefined ? {} : { limit }) }),
+        );
+        texts.add(text);
+      }
+    }
+    // The limits gave different texts: the cache was asked for several forms.
+    expect(texts.size).toBeGreaterThanOrEqual(8);
   });
 });
 

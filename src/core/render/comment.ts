@@ -568,6 +568,27 @@ function footer(report: GateReport, ctx: MarkdownContext): string[] {
  * then findings beyond the first few, then whole file sections; the comment says what was left out.
  */
 export function renderComment(report: GateReport, ctx: MarkdownContext = {}): string {
+  return renderWith(report, ctx, new WeakMap());
+}
+
+/**
+ * `renderComment` for several reports or limits in one context (`ctx` without `limit`): each
+ * file section is rendered once for all the calls, as one call renders it once for all its
+ * forms. The action renders its comment and then its job summary of the same files; the texts
+ * are those of `renderComment(report, { ...ctx, limit })`.
+ */
+export function commentRenderer(
+  ctx: Omit<MarkdownContext, 'limit'> = {},
+): (report: GateReport, limit?: number) => string {
+  const sections: SectionCache = new WeakMap();
+  return (report, limit) =>
+    renderWith(report, limit === undefined ? { ...ctx } : { ...ctx, limit }, sections);
+}
+
+/** Each file's rendered sections, by the form that decides them (`effectiveParts`). */
+type SectionCache = WeakMap<FileDecision, Map<string, string>>;
+
+function renderWith(report: GateReport, ctx: MarkdownContext, rendered: SectionCache): string {
   const limit = ctx.limit ?? COMMENT_LIMIT;
   const attempts: FileSectionParts[] = [
     { chart: true, details: true, maxFindings: Infinity },
@@ -585,9 +606,8 @@ export function renderComment(report: GateReport, ctx: MarkdownContext = {}): st
   ].join('\n');
   const tail = footer(report, ctx).join('\n');
   // A file's section depends on the form only through `effectiveParts`: most sections are the
-  // same in several forms, and each distinct one is rendered once per call (a 3,000-file
-  // summary rendered about five megabytes of sections for one megabyte kept).
-  const rendered = new Map<FileDecision, Map<string, string>>();
+  // same in several forms, and each distinct one is rendered once per call, or per renderer
+  // (a 3,000-file summary rendered about five megabytes of sections for one megabyte kept).
   const sectionOf = (file: FileDecision, parts: FileSectionParts): string => {
     const effective = effectiveParts(file, parts);
     const key = `${effective.chart}|${effective.details}|${effective.maxFindings}`;
