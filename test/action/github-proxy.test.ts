@@ -36,42 +36,36 @@ describe('the API client behind a proxy', () => {
     server = null;
   });
 
-  const proxyEnv = (proxy: string, noProxy: string) => {
+  /** A client of the API behind the refusing proxy, with `no_proxy` as given, and what the proxy was asked. */
+  const behindProxy = async (noProxy: string) => {
+    const proxy = await refusingProxy();
+    server = proxy.server;
     // The toolkit's proxy defaults are made for GITHUB_API_URL when they load.
     vi.stubEnv('GITHUB_API_URL', API);
-    for (const name of ['https_proxy', 'HTTPS_PROXY']) vi.stubEnv(name, proxy);
+    for (const name of ['https_proxy', 'HTTPS_PROXY']) vi.stubEnv(name, proxy.url);
     for (const name of ['no_proxy', 'NO_PROXY']) vi.stubEnv(name, noProxy);
     vi.resetModules();
-  };
-
-  test('sends every request through the proxy https_proxy names', async () => {
-    const proxy = await refusingProxy();
-    server = proxy.server;
-    proxyEnv(proxy.url, '');
-    const client = createGitHubClient('t0ken-value', {
-      baseUrl: API,
-      log: silent,
-      retries: 0,
-      requestTimeoutMs: 5_000,
-    });
-    const failed = await client.getPullRequest('o', 'r', 1).catch((error: unknown) => error);
-    expect(failed).toBeInstanceOf(ApiError);
-    expect(String((failed as Error).message)).not.toContain('t0ken-value');
-    expect(proxy.asked).toEqual(['CONNECT api.github.invalid:443']);
-  });
-
-  test('goes straight to a host that no_proxy names, asking the proxy nothing', async () => {
-    const proxy = await refusingProxy();
-    server = proxy.server;
-    proxyEnv(proxy.url, 'example.invalid,api.github.invalid');
     const client = createGitHubClient('t0ken-value', {
       baseUrl: API,
       log: silent,
       retries: 0,
       requestTimeoutMs: 3_000,
     });
+    return { client, asked: proxy.asked };
+  };
+
+  test('sends every request through the proxy https_proxy names', async () => {
+    const { client, asked } = await behindProxy('');
+    const failed = await client.getPullRequest('o', 'r', 1).catch((error: unknown) => error);
+    expect(failed).toBeInstanceOf(ApiError);
+    expect(String((failed as Error).message)).not.toContain('t0ken-value');
+    expect(asked).toEqual(['CONNECT api.github.invalid:443']);
+  });
+
+  test('goes straight to a host that no_proxy names, asking the proxy nothing', async () => {
+    const { client, asked } = await behindProxy('example.invalid,api.github.invalid');
     // No such host (RFC 6761 reserves .invalid): the direct request fails, the proxy is not asked.
     await expect(client.getPullRequest('o', 'r', 1)).rejects.toBeInstanceOf(ApiError);
-    expect(proxy.asked).toEqual([]);
+    expect(asked).toEqual([]);
   });
 });

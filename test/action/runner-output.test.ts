@@ -154,12 +154,17 @@ describe.each(toolkits)('through %s', (_name, kit) => {
       if (dir) rmSync(dir, { recursive: true, force: true });
       dir = undefined;
     });
-
-    it('appends name<<delimiter blocks that read back exactly, multi-line values included', () => {
+    /** An empty output file in a folder of its own, named by GITHUB_OUTPUT. */
+    const outputFile = (): string => {
       dir = mkdtempSync(join(tmpdir(), 'context-reach-commands-'));
       const file = join(dir, 'output.txt');
       writeFileSync(file, '');
       vi.stubEnv('GITHUB_OUTPUT', file);
+      return file;
+    };
+
+    it('appends name<<delimiter blocks that read back exactly, multi-line values included', () => {
+      const file = outputFile();
       out.output('verdict', 'block');
       out.output('comment-url', 'line one\nline two');
       expect(parseOutputFile(readFileSync(file, 'utf8'))).toEqual({
@@ -169,10 +174,7 @@ describe.each(toolkits)('through %s', (_name, kit) => {
     });
 
     it('writes the documented block with a random delimiter', () => {
-      dir = mkdtempSync(join(tmpdir(), 'context-reach-commands-'));
-      const file = join(dir, 'output.txt');
-      writeFileSync(file, '');
-      vi.stubEnv('GITHUB_OUTPUT', file);
+      const file = outputFile();
       out.output('report-json', '/tmp/r.json');
       const written = readFileSync(file, 'utf8');
       const delimiter = /<<(.+)/.exec(written)![1]!.trim();
@@ -181,10 +183,7 @@ describe.each(toolkits)('through %s', (_name, kit) => {
     });
 
     it('refuses a value that contains its delimiter, and a missing output file', () => {
-      dir = mkdtempSync(join(tmpdir(), 'context-reach-commands-'));
-      const file = join(dir, 'output.txt');
-      writeFileSync(file, '');
-      vi.stubEnv('GITHUB_OUTPUT', file);
+      const file = outputFile();
       // The delimiter is random; fixed here so a value can contain it.
       const uuid = vi.spyOn(crypto, 'randomUUID').mockReturnValue('1-1-1-1-1');
       syncBuiltinESMExports();

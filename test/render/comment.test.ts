@@ -44,6 +44,16 @@ function gateOver(
   });
 }
 
+/** Sixty files that each block: their comment is over GitHub's limit in full. */
+const sixtyBlocked = () =>
+  gateOver(
+    Array.from({ length: 60 }, (_, i) => ({
+      path: `models/m${i}/config.json`,
+      base: {},
+      head: { max_position_embeddings: 8192, rope_theta: 20000 + i },
+    })),
+  );
+
 describe('renderComment(report)', () => {
   const report = gateOver([
     { path: 'models/a/config.json', base: {}, head: { max_position_embeddings: 8192 } },
@@ -97,13 +107,7 @@ describe('renderComment(report)', () => {
   });
 
   it("stays under GitHub's 65,536-character limit and says what it trimmed", () => {
-    const many = gateOver(
-      Array.from({ length: 60 }, (_, i) => ({
-        path: `models/m${i}/config.json`,
-        base: {},
-        head: { max_position_embeddings: 8192, rope_theta: 20000 + i },
-      })),
-    );
+    const many = sixtyBlocked();
     const full = renderComment(many, { limit: Infinity });
     expect(full.length).toBeGreaterThan(COMMENT_LIMIT);
     const trimmed = renderComment(many);
@@ -115,13 +119,7 @@ describe('renderComment(report)', () => {
 
 describe('commentRenderer(ctx): one context, several reports and limits', () => {
   it("gives renderComment's text for every limit, in any order, and for a report with other notices", () => {
-    const many = gateOver(
-      Array.from({ length: 60 }, (_, i) => ({
-        path: `models/m${i}/config.json`,
-        base: {},
-        head: { max_position_embeddings: 8192, rope_theta: 20000 + i },
-      })),
-    );
+    const many = sixtyBlocked();
     const ctx = { blobUrl: 'https://github.example/o/r/blob/222', unannotated: 3 };
     const render = commentRenderer(ctx);
     const withNotice = { ...many, notices: [...many.notices, 'The comment could not be written.'] };
