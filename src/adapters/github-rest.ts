@@ -209,13 +209,13 @@ const clientClass = (stack: Stack) =>
     stack.retry,
     stack.throttling,
   );
-/** Time one request of the review suggestions may take, in milliseconds. */
-const REVIEW_TIMEOUT_MS = 30_000;
-
 /** The review suggestions' client class: the same without rate-limit handling. */
 const reviewClass = (stack: Stack) =>
   stack.Octokit.plugin(stack.restEndpointMethods, stack.paginateRest, stack.retry);
 type Octokit = InstanceType<ReturnType<typeof clientClass>>;
+
+/** Time one request of the review suggestions may take, in milliseconds. */
+const REVIEW_TIMEOUT_MS = 30_000;
 
 /**
  * The Octokit stack (`octokit.ts`) and the fetch its requests take to `baseUrl`: node-fetch, or,
