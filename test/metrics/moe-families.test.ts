@@ -7,7 +7,7 @@
  * memory" marks a published figure recalled and not re-read.
  */
 import { describe, expect, it } from 'vitest';
-import { computeMetrics } from '../../src/core/metrics/compute.js';
+import { computeMetrics, frequencyPlan } from '../../src/core/metrics/compute.js';
 import { parameterBreakdown } from '../../src/core/metrics/parameter-count.js';
 import type { ModelSpec } from '../../src/core/model.js';
 import { readModel } from '../../src/core/parse/read-model.js';
@@ -268,6 +268,29 @@ describe('Kimi K2 (model_type deepseek_v3, 384 routed experts)', () => {
       }),
     ).spec;
     expect(rel(parameterBreakdown(v3)!.params, 671e9)).toBeLessThan(0.005);
+  });
+
+  it('reads its yarn scaling (factor 32 from 4,096, beta_fast = beta_slow = 1) as a step, not an invalid ramp: no blocking finding, θ/32 exactly for pairs turning at most once over 4,096 tokens', () => {
+    const { spec, all } = read('kimi-k2-latent.json');
+    expect(blocking(all)).toEqual([]);
+    expect(spec.position).toMatchObject({
+      kind: 'rotary',
+      base: 50000,
+      scaling: { kind: 'yarn', factor: 32, originalSpan: 4096, alpha: 1, beta: 1 },
+    });
+    // The reference is the ramp's limit written out per pair (docs/metrics.md, yarn): ρ = L0/λ
+    // over the 32 pairs of the 64-wide decoupled rotary part (Liu et al. 2024, §2.1).
+    const plan = frequencyPlan(spec, 131072, 4096)!;
+    expect(plan.theta.length).toBe(32);
+    let scaled = 0;
+    for (const [i, t] of plan.theta.entries()) {
+      const rho = 4096 / ((2 * Math.PI) / t);
+      const expected = rho > 1 ? t : t / 32;
+      if (rho <= 1) scaled++;
+      expect(Object.is(plan.scaled[i], expected), `pair ${i}`).toBe(true);
+    }
+    expect(scaled).toBeGreaterThan(0);
+    expect(scaled).toBeLessThan(32);
   });
 
   it('caches the latent, (512 + 64) · 2 bytes on each of 61 layers (DeepSeek-V2, Table 1)', () => {

@@ -755,6 +755,7 @@ function readScaling(r: FieldReader, at: PathSegment[], ctx: RotaryContext): Sca
       'beta_fast',
       draft.beta,
       DEFAULT_YARN_BETA,
+      true,
     );
     for (const key of ['attention_factor', 'mscale', 'mscale_all_dim']) {
       if (r.has([...at, key])) {
