@@ -139,6 +139,22 @@ describe('Phi-3.5-MoE (model_type phimoe)', () => {
     expect(m.cachePerTokenBytes).toBe(32 * 2 * 8 * 128 * 2);
     expect(spec.position).toMatchObject({ kind: 'rotary', base: 10000 });
   });
+
+  it('names what its bias keys make the count miss: no expert biases (transformers PhimoeBlockSparseTop2MLP: w1, w2, w3 without bias) and the output bias (lm_head_bias); with them the hand count is exact', () => {
+    const { spec, findings } = read('phimoe-longrope.json');
+    const experts = findings.find((f) => f.key === 'attention_bias');
+    expect(experts?.rule).toBe('key-ignored');
+    // 32 layers · 16 experts · (2 · 6400 + 4096) bias weights; 2 active experts of them.
+    expect(experts?.message).toContain('params is high by 8,650,752, activeParams by 1,081,344');
+    const head = findings.find((f) => f.key === 'lm_head_bias');
+    expect(head?.message).toContain('(32,064 weights)');
+    const m = metricsAt(spec, 4096);
+    // Hand count: attention with q, k, v, o biases, two LayerNorms with shifts per layer, 16
+    // unbiased SwiGLU experts of 6400 and a 4096·16 router, a final LayerNorm, untied embeddings
+    // and the output bias: 41,873,153,344 total, 6,640,999,744 active.
+    expect(m.params! - 8_650_752 + 32_064).toBe(41_873_153_344);
+    expect(m.activeParams! - 1_081_344 + 32_064).toBe(6_640_999_744);
+  });
 });
 
 describe('DBRX (model_type dbrx, nested attn_config and ffn_config)', () => {

@@ -277,6 +277,26 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     );
   }
   readNextTokenLayers(r);
+  const bias = qkvBiasOnly ? false : readBias(r, modelType, gpt2Style);
+  if (bias === true && family?.unbiasedExperts === true && experts) {
+    const width = experts.width ?? ffn ?? NaN;
+    const perExpert = 2 * width + hidden;
+    const moeLayers = layers - (experts.denseLayers ?? 0);
+    const high = moeLayers * experts.total * perExpert;
+    const activeHigh = moeLayers * experts.active * perExpert;
+    const at = r.has(['attention_bias']) ? ['attention_bias'] : ['model_type'];
+    r.report(
+      'key-ignored',
+      at,
+      `${r.key(at)} turns biases on, but model_type "${modelType}" has none in its experts, which the count does not model, so it gives every expert biases: params is high by ${Number.isFinite(high) ? high.toLocaleString('en-US') : 'the expert biases'}, activeParams by ${Number.isFinite(activeHigh) ? activeHigh.toLocaleString('en-US') : 'those of the active experts'}`,
+    );
+  }
+  if (r.get(['lm_head_bias']) === true)
+    r.report(
+      'key-ignored',
+      ['lm_head_bias'],
+      `${r.key(['lm_head_bias'])} is true: the output layer's bias (${Number.isFinite(vocab) ? vocab.toLocaleString('en-US') : 'vocab'} weights) is not counted, so params is low by that many`,
+    );
   const encoderOnly =
     !encoderDecoder && family?.encoderOnly === true && r.get(['is_decoder']) !== true;
 
@@ -291,7 +311,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     gated: readGated(r, modelType) ?? mpt.gated,
     vocab,
     tied: r.flag('tied', ['tie_word_embeddings']),
-    bias: qkvBiasOnly ? false : readBias(r, modelType, gpt2Style),
+    bias,
     experts,
     encoder,
     position,

@@ -60,6 +60,11 @@ export interface CheckpointFamily {
    * feed-forward or norm biases), which the count does not model: a finding says by how much.
    */
   qkvBiasOnly?: true;
+  /**
+   * The experts and router have no biases whatever the bias keys say (Phi-3.5-MoE: `attention_bias`
+   * biases the attention only), which the count does not model: a finding says by how much.
+   */
+  unbiasedExperts?: true;
   /** Mixture layers always add one shared expert as wide as a routed one (Llama-4 style). */
   oneSharedExpert?: true;
   /** The published config class defaults (default: none taken). */
@@ -196,7 +201,8 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
   qwen3_next: { position: 'rotary' },
   glm4_moe: { position: 'rotary', gated: true, qkNormsKey: 'use_qk_norm', qkvBiasOnly: true },
   olmoe: { position: 'rotary', gated: true, qkNormsAllHeads: true },
-  phimoe: { position: 'rotary', gated: true },
+  // Gated experts without biases (PhimoeBlockSparseTop2MLP: w1, w2, w3 without bias).
+  phimoe: { position: 'rotary', gated: true, unbiasedExperts: true },
   granitemoe: { position: 'rotary', gated: true },
   granitemoeshared: { position: 'rotary', gated: true },
   ernie4_5_moe: {
