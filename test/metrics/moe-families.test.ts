@@ -202,6 +202,12 @@ describe('Granite 3.0 mixtures (model_type granitemoe, granitemoeshared)', () =>
     expect(m.cachePerTokenBytes).toBe(32 * 2 * 8 * 64 * 2);
   });
 
+  it('reads embedding_multiplier as the embedding factor (GraniteMoeModel multiplies inputs_embeds by it), and its routing and scaling keys raise no key-unread', () => {
+    const { spec, findings } = read('granitemoe-3b.json');
+    expect(spec.embeddingMultiplier).toBe(12);
+    expect(findings.filter((f) => f.rule === 'key-unread')).toEqual([]);
+  });
+
   it('shared_intermediate_size adds one ungated shared expert to every mixture layer (transformers GraniteMoeSharedMLP: input_linear hidden → 2w, output_linear w → hidden), and 0 adds none', () => {
     const base = { ...json('granitemoe-3b.json'), model_type: 'granitemoeshared' };
     const plain = readText(configText({ ...base, shared_intermediate_size: 0 })).spec;

@@ -465,6 +465,12 @@ function readMultiplier(r: FieldReader, modelType: string | null, hidden: number
   const scale = r.flag('embeddingMultiplier', ['scale_embedding']);
   const root = isCount(hidden) ? Math.sqrt(hidden) : NaN;
   if (scale !== undefined) return scale ? root : 1;
+  // Granite states its factor outright (embedding_multiplier 12 in granite-3.0 configs).
+  const stated = r.real('embeddingMultiplier', ['embedding_multiplier'], 'embedding multiplier', {
+    test: (n) => n > 0,
+    expected: 'a factor above 0',
+  });
+  if (stated !== undefined) return stated;
   if (familyOf(modelType)?.scaledEmbedding === true) {
     r.locate('embeddingMultiplier', ['model_type']);
     return root;
