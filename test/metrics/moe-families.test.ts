@@ -179,6 +179,31 @@ describe('DBRX (model_type dbrx, nested attn_config and ffn_config)', () => {
     expect(metricsAt(spec, 4096).cachePerTokenBytes).toBe(40 * 2 * 8 * 128 * 2);
   });
 
+  it('reads the same figures from the expanded form some copies save (each block with its own config-class fields, ffn_act_fn, uniform_expert_assignment); only the block-level extras are unread', () => {
+    const config = json('dbrx-nested.json');
+    const attn = config.attn_config as Record<string, unknown>;
+    const ffn = config.ffn_config as Record<string, unknown>;
+    const expanded = {
+      ...config,
+      attn_config: { ...attn, return_dict: true, tie_word_embeddings: true, attn_pdrop: 0 },
+      ffn_config: {
+        ...ffn,
+        return_dict: true,
+        tie_word_embeddings: true,
+        ffn_act_fn: { name: 'silu' },
+        moe_normalize_expert_weights: 1,
+        uniform_expert_assignment: false,
+      },
+    };
+    const { spec, findings } = readText(configText(expanded));
+    expect(findings.filter((f) => f.rule === 'key-unread').map((f) => f.key)).toEqual([
+      'attn_config.tie_word_embeddings',
+      'ffn_config.tie_word_embeddings',
+    ]);
+    expect(spec.tied).toBe(false);
+    expect(metricsAt(spec, 4096).params).toBe(131_596_523_520);
+  });
+
   it("takes DbrxAttentionConfig's 1 key/value head when attn_config states none, and says so", () => {
     const config = json('dbrx-nested.json');
     const { spec, findings } = readText(

@@ -190,6 +190,8 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   const mpt = readMptAttention(r);
   if (kvHeads === undefined && mpt.kvHeads !== undefined) kvHeads = mpt.kvHeads;
   if (kvHeads === undefined && modelType === 'dbrx') kvHeads = dbrxKvHeads(r);
+  // DBRX's experts are GLU blocks (DbrxExpertGLU) whatever activation ffn_act_fn names.
+  if (modelType === 'dbrx') r.get(['ffn_config', 'ffn_act_fn']);
   const headDim = size('headDim', ['head_dim', 'd_kv'], 'the width of one head', false);
   const ffn =
     size(

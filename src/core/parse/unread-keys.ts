@@ -155,6 +155,7 @@ const NO_METRIC_KEYS = new Set([
   'moe_jitter_eps',
   'moe_loss_weight',
   'moe_normalize_expert_weights',
+  'uniform_expert_assignment',
   'moe_gate',
   'moe_capacity',
   'moe_use_aux_free',
