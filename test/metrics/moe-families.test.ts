@@ -277,6 +277,9 @@ describe('ERNIE 4.5 mixtures (model_type ernie4_5_moe)', () => {
     // Mixture layers 3..20: 18 of 28.
     expect(layers({ moe_layer_start_index: 3, moe_layer_end_index: 20 })).toBe(10);
     expect(layers({ moe_layer_end_index: -1 })).toBe(1);
+    // Copies of the published config write the end as 27 or null (not set): the same 27 mixtures.
+    expect(layers({ moe_layer_end_index: 27 })).toBe(1);
+    expect(layers({ moe_layer_end_index: null, head_dim: null })).toBe(1);
   });
 });
 
