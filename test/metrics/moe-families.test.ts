@@ -129,6 +129,8 @@ describe('OLMoE-1B-7B (model_type olmoe)', () => {
 });
 
 describe('Phi-3.5-MoE (model_type phimoe)', () => {
+  // The fixture's long_factor and short_factor lists are 64 placeholder 1.0s, not the published
+  // values (not re-read): only the shapes, counts and the rotary base are checked here.
   it('reads 41.9B total and 6.6B active (Abdin et al. 2024, Phi-3 technical report, phi-3.5-MoE, from memory), 16 experts top 2', () => {
     const { spec, all } = read('phimoe-longrope.json');
     expect(blocking(all)).toEqual([]);
