@@ -784,14 +784,19 @@ describe('readModel(checkpoint) invalid values', () => {
     expect(rotary(noType.spec).scaling).toBeNull();
   });
 
-  test('readModel reports beta_fast not above beta_slow: the yarn ramp (β - α) would divide by zero', () => {
+  test('readModel reports beta_fast below beta_slow: the yarn ramp (β - α) would run backwards; equal ends are a step', () => {
     const { findings } = readConfig({
       ...BASE,
-      rope_scaling: { rope_type: 'yarn', factor: 4, beta_fast: 1, beta_slow: 1 },
+      rope_scaling: { rope_type: 'yarn', factor: 4, beta_fast: 1, beta_slow: 2 },
     });
     expect(findings.map((f) => [f.rule, f.key])).toEqual([
       ['value-invalid', 'rope_scaling.beta_fast'],
     ]);
+    const step = readConfig({
+      ...BASE,
+      rope_scaling: { rope_type: 'yarn', factor: 4, beta_fast: 1, beta_slow: 1 },
+    });
+    expect(step.findings).toEqual([]);
   });
 
   test('readModel reads 0 or 1 experts as a dense model', () => {

@@ -291,7 +291,7 @@ describe('sparse and nested configs', () => {
     expect(published.length).toBeGreaterThan(0);
     for (const [type, family] of published) {
       expect(family.source, type).toMatch(
-        /^from the published config class [A-Z][A-Za-z0-9]+Config$/,
+        /^from the published config class [A-Z][A-Za-z0-9_]+Config$/,
       );
       expect(Object.keys(family.values).length, type).toBeGreaterThan(0);
     }

@@ -407,7 +407,7 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
     ]);
   });
 
-  test('yarn alpha not below beta is reported on the key that was written', () => {
+  test('yarn alpha above beta is reported on the key that was written; alpha equal to beta is a step', () => {
     const text = BASE.replace(
       'code: rotary',
       'code: rotary\n    scaling: {kind: yarn, factor: 4, alpha: 40}',
@@ -415,8 +415,13 @@ describe('readModel(own dialect) schema findings name the key and its line', () 
     const [f] = readText(text).all;
     expect([f?.rule, f?.key]).toEqual(['value-invalid', 'model.position.scaling.alpha']);
     expect(f?.message).toContain(
-      'model.position.scaling.beta (32) must be above model.position.scaling.alpha (40)',
+      'model.position.scaling.beta (32) must not be below model.position.scaling.alpha (40)',
     );
+    const step = BASE.replace(
+      'code: rotary',
+      'code: rotary\n    scaling: {kind: yarn, factor: 4, alpha: 32}',
+    );
+    expect(readText(step).all.filter((x) => x.rule === 'value-invalid')).toEqual([]);
   });
 
   test('rotary keys on another code, and yarn keys on banded scaling, are key-ignored warnings', () => {

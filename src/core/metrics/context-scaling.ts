@@ -17,11 +17,12 @@ export function ntkBase(base: number, factor: number, r: number): number | null 
 
 /**
  * ratio: yarn ramp `γ = clamp((ρ - α)/(β - α), 0, 1)` of `ρ = L0/λ` (Peng et al. 2023, YaRN,
- * Eq. 18; docs/metrics.md takes `λ` from the unscaled frequencies); null when `α = β`.
+ * Eq. 18; docs/metrics.md takes `λ` from the unscaled frequencies). `α = β` (Kimi K2's published
+ * config) is the ramp's limit as `β` falls to `α`: a step, `γ = 1` for `ρ > α`, else 0.
  */
 export function yarnRamp(rho: number, alpha: number, beta: number): number | null {
-  if (!Number.isFinite(alpha) || !Number.isFinite(beta) || alpha === beta || Number.isNaN(rho))
-    return null;
+  if (!Number.isFinite(alpha) || !Number.isFinite(beta) || Number.isNaN(rho)) return null;
+  if (alpha === beta) return rho > alpha ? 1 : 0;
   const g = (rho - alpha) / (beta - alpha);
   return g < 0 ? 0 : g > 1 ? 1 : g;
 }

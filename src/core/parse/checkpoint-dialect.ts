@@ -189,6 +189,9 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   }
   const mpt = readMptAttention(r);
   if (kvHeads === undefined && mpt.kvHeads !== undefined) kvHeads = mpt.kvHeads;
+  if (kvHeads === undefined && modelType === 'dbrx') kvHeads = dbrxKvHeads(r);
+  // DBRX's experts are GLU blocks (DbrxExpertGLU) whatever activation ffn_act_fn names.
+  if (modelType === 'dbrx') r.get(['ffn_config', 'ffn_act_fn']);
   const headDim = size('headDim', ['head_dim', 'd_kv'], 'the width of one head', false);
   const ffn =
     size(
@@ -254,6 +257,48 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
   r.get(['max_window_layers']);
   r.get(['use_sliding_window']);
   const plan = readLayerPlan(r, modelType, layers);
+  const headWidth = headDim ?? defaultHeadDim(hidden, heads);
+  const qkvBiasOnly =
+    family?.qkvBiasOnly === true &&
+    r.get(['attention_bias']) === true &&
+    !['mlp_bias', 'bias', 'use_bias', 'no_bias'].some((k) => r.has([k]));
+  if (qkvBiasOnly) {
+    const low = layers * (heads + 2 * (kvHeads ?? heads)) * headWidth;
+    r.report(
+      'key-ignored',
+      ['attention_bias'],
+      `${r.key(['attention_bias'])} is true: for model_type "${modelType}" it puts biases on the query, key and value projections only, which the count does not model, so they are left out: params and activeParams are low by ${Number.isFinite(low) ? low.toLocaleString('en-US') : 'layers · (heads + 2 · kvHeads) · headDim'}`,
+    );
+  }
+  if (family?.qkNormsAllHeads === true && !latent) {
+    const low = layers * (heads + (kvHeads ?? heads)) * headWidth;
+    r.report(
+      'key-ignored',
+      ['model_type'],
+      `model_type "${modelType}" normalises queries and keys over all heads at once (q_norm of heads · headDim, k_norm of kvHeads · headDim weights per layer), which the count does not model, so they are left out: params and activeParams are low by ${Number.isFinite(low) ? low.toLocaleString('en-US') : 'layers · (heads + kvHeads) · headDim'}`,
+    );
+  }
+  readNextTokenLayers(r);
+  const bias = qkvBiasOnly ? false : readBias(r, modelType, gpt2Style);
+  if (bias === true && family?.unbiasedExperts === true && experts) {
+    const width = experts.width ?? ffn ?? NaN;
+    const perExpert = 2 * width + hidden;
+    const moeLayers = layers - (experts.denseLayers ?? 0);
+    const high = moeLayers * experts.total * perExpert;
+    const activeHigh = moeLayers * experts.active * perExpert;
+    const at = r.has(['attention_bias']) ? ['attention_bias'] : ['model_type'];
+    r.report(
+      'key-ignored',
+      at,
+      `${r.key(at)} turns biases on, but model_type "${modelType}" has none in its experts, which the count does not model, so it gives every expert biases: params is high by ${Number.isFinite(high) ? high.toLocaleString('en-US') : 'the expert biases'}, activeParams by ${Number.isFinite(activeHigh) ? activeHigh.toLocaleString('en-US') : 'those of the active experts'}`,
+    );
+  }
+  if (r.get(['lm_head_bias']) === true)
+    r.report(
+      'key-ignored',
+      ['lm_head_bias'],
+      `${r.key(['lm_head_bias'])} is true: the output layer's bias (${Number.isFinite(vocab) ? vocab.toLocaleString('en-US') : 'vocab'} weights) is not counted, so params is low by that many`,
+    );
   const encoderOnly =
     !encoderDecoder && family?.encoderOnly === true && r.get(['is_decoder']) !== true;
 
@@ -268,7 +313,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     gated: readGated(r, modelType) ?? mpt.gated,
     vocab,
     tied: r.flag('tied', ['tie_word_embeddings']),
-    bias: readBias(r, modelType, gpt2Style),
+    bias,
     experts,
     encoder,
     position,
@@ -282,7 +327,9 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     chunkSize: plan.chunkSize,
     localBase: plan.localBase,
     layerNorms: family?.fourNorms === true ? 4 : null,
-    qkNorms: family?.qkNorms === true,
+    qkNorms:
+      family?.qkNorms === true ||
+      (family?.qkNormsKey !== undefined && r.get([family.qkNormsKey]) === true),
     encoderOnly,
     dtypes: { weights: readWeights(r), cache: null, positions: null },
     embeddingInitStd:
@@ -293,6 +340,37 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     embeddingMultiplier: readMultiplier(r, modelType, hidden),
     quantization: readQuantization(r, hidden, experts !== null && experts !== undefined),
   };
+}
+
+/** DbrxAttentionConfig's default key/value heads when `attn_config.kv_n_heads` is not stated. */
+const DBRX_KV_HEADS = 1;
+
+/** DBRX states its key/value heads in `attn_config.kv_n_heads` (DbrxAttentionConfig, default 1). */
+function dbrxKvHeads(r: FieldReader): number | undefined {
+  const at = ['attn_config', 'kv_n_heads'];
+  if (r.has(at)) return r.count('kvHeads', at, 'key/value heads');
+  r.report(
+    'family-default-taken',
+    ['model_type'],
+    `${r.key(at)} is not stated; the published config class DbrxAttentionConfig takes ${DBRX_KV_HEADS} key/value head for model_type "dbrx"; state it if the model differs`,
+  );
+  return DBRX_KV_HEADS;
+}
+
+/**
+ * Multi-token-prediction layers (`num_nextn_predict_layers`, DeepSeek-V3 and GLM-4.5 style) sit
+ * after the last decoder layer and are used in training and speculative decoding; they are not
+ * counted, which a finding says when there are any.
+ */
+function readNextTokenLayers(r: FieldReader): void {
+  const at = ['num_nextn_predict_layers'];
+  const n = r.get(at);
+  if (typeof n === 'number' && n > 0)
+    r.report(
+      'key-ignored',
+      at,
+      `${r.key(at)} is ${n}: the multi-token-prediction layer${n === 1 ? '' : 's'} it adds after the last decoder layer (each a full decoder layer plus a 2 · hidden → hidden projection) ${n === 1 ? 'is' : 'are'} not counted, so params is low by about ${n} layer${n === 1 ? '' : 's'}; the cache and activeParams of ordinary decoding are unaffected`,
+    );
 }
 
 /** ALiBi configs (BLOOM) may state no maximum positions: ALiBi has no hard limit. */
@@ -389,6 +467,12 @@ function readMultiplier(r: FieldReader, modelType: string | null, hidden: number
   const scale = r.flag('embeddingMultiplier', ['scale_embedding']);
   const root = isCount(hidden) ? Math.sqrt(hidden) : NaN;
   if (scale !== undefined) return scale ? root : 1;
+  // Granite states its factor outright (embedding_multiplier 12 in granite-3.0 configs).
+  const stated = r.real('embeddingMultiplier', ['embedding_multiplier'], 'embedding multiplier', {
+    test: (n) => n > 0,
+    expected: 'a factor above 0',
+  });
+  if (stated !== undefined) return stated;
   if (familyOf(modelType)?.scaledEmbedding === true) {
     r.locate('embeddingMultiplier', ['model_type']);
     return root;
@@ -418,7 +502,10 @@ function readPosition(
   ) {
     return readBuckets(r, modelType, bucketKeys);
   }
-  const mptRotary = r.get(['attn_config', 'rope']) === true && alibiPath === null;
+  const mptRotary =
+    alibiPath === null &&
+    (r.get(['attn_config', 'rope']) === true ||
+      (modelType === 'dbrx' && r.has(['attn_config', 'rope_theta'])));
   // Family defaults stand in for rotary keys only when the file states no other code.
   const rotaryKeys = ROTARY_KEYS.filter((k) =>
     alibiPath === null && !r.stated(typePath) ? r.has([k]) : r.stated([k]),
@@ -455,7 +542,11 @@ function readPosition(
   } else if (rotaryKeys.length > 0 || mptRotary) {
     r.locate(
       'position',
-      rotaryKeys.length > 0 ? [elementAt(rotaryKeys, 0)] : ['attn_config', 'rope'],
+      rotaryKeys.length > 0
+        ? [elementAt(rotaryKeys, 0)]
+        : r.has(['attn_config', 'rope'])
+          ? ['attn_config', 'rope']
+          : ['attn_config', 'rope_theta'],
     );
     kind = 'rotary';
   } else if (
@@ -692,6 +783,7 @@ function readScaling(r: FieldReader, at: PathSegment[], ctx: RotaryContext): Sca
       'beta_fast',
       draft.beta,
       DEFAULT_YARN_BETA,
+      true,
     );
     for (const key of ['attention_factor', 'mscale', 'mscale_all_dim']) {
       if (r.has([...at, key])) {

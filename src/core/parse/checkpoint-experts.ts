@@ -9,6 +9,12 @@
  *   `first_k_dense_replace` with `moe_layer_freq` (DeepSeek style: layer i is a mixture when
  *   `i >= k` and `i % freq == 0`), or `mlp_only_layers` with `decoder_sparse_step` (Qwen-MoE
  *   style: layer i is a mixture when it is not listed and `(i + 1) % step == 0`).
+ * - The same quantities under other names: ERNIE 4.5 (`moe_num_experts`, `moe_k`,
+ *   `moe_num_shared_experts` of the routed width; a layer is a mixture when
+ *   `moe_layer_start_index <= i <= moe_layer_end_index` (-1: the last layer) and
+ *   `(i + 1) % moe_layer_interval == 0`, as the published decoder layer tests it); DBRX
+ *   (`ffn_config.moe_num_experts`, `ffn_config.moe_top_k`, every expert `ffn_config.ffn_hidden_size`
+ *   wide); Granite-MoE-shared (one ungated shared expert of `shared_intermediate_size`, 0 for none).
  * - Latent attention (Liu et al. 2024, DeepSeek-V2, §2.1): `kv_lora_rank` (d_c), `q_lora_rank`
  *   (d_c', null for a plain query projection), `qk_rope_head_dim` (d_h^R), `qk_nope_head_dim`,
  *   `v_head_dim`.
@@ -17,6 +23,7 @@ import type { Experts, LatentAttention } from '../model.js';
 import type { FieldReader } from './fields.js';
 import { familyOf } from './checkpoint-families.js';
 import { isCount } from '../metrics/sizes.js';
+import { elementAt } from '../element-at.js';
 
 type SizeReader = (
   field: string,
@@ -101,20 +108,18 @@ export function readMixture(
 
 /** Reads the experts block; null for a dense model. */
 export function readExperts(r: FieldReader, size: SizeReader, layers: number): Experts | null {
-  const totalKeys = ['num_local_experts', 'num_experts', 'n_routed_experts'];
-  const totalPath = r.first(totalKeys.map((k) => [k]));
+  const totalPath = r.first(TOTAL_PATHS);
   if (totalPath === null) return null;
   // Dense configs of mixture-capable families write 0 or 1 experts.
   const stated = r.get(totalPath);
   if (stated === 0 || stated === 1) return null;
+  const activePath = r.first(ACTIVE_PATHS);
   const experts: Experts = {
-    total: size('experts.total', totalKeys, 'the number of experts', true)!,
-    active: size(
-      'experts.active',
-      ['num_experts_per_tok'],
-      'the number of experts each token uses',
-      true,
-    )!,
+    total: r.count('experts.total', totalPath, 'the number of experts') ?? NaN,
+    active:
+      activePath === null
+        ? r.missing(elementAt(ACTIVE_PATHS, 0), 'the number of experts each token uses')
+        : (r.count('experts.active', activePath, 'the number of experts each token uses') ?? NaN),
   };
   const width = size(
     'experts.width',
@@ -124,7 +129,12 @@ export function readExperts(r: FieldReader, size: SizeReader, layers: number): E
   );
   if (width !== undefined) experts.width = width;
 
-  const sharedCount = size('experts.shared', ['n_shared_experts'], 'shared experts', false);
+  const sharedCount = size(
+    'experts.shared',
+    ['n_shared_experts', 'moe_num_shared_experts'],
+    'shared experts',
+    false,
+  );
   const sharedWidth = size(
     'experts.sharedWidth',
     ['shared_expert_intermediate_size'],
@@ -143,12 +153,34 @@ export function readExperts(r: FieldReader, size: SizeReader, layers: number): E
     experts.shared = 1;
     experts.sharedWidth = sharedWidth;
     experts.sharedGate = true;
+  } else if (sharedWidth === undefined && r.has(['shared_intermediate_size'])) {
+    // Granite-MoE-shared: one shared expert, its output added without a gate.
+    const plain = r.count(
+      'experts.sharedWidth',
+      ['shared_intermediate_size'],
+      'the width of the shared expert',
+    );
+    if (plain !== undefined && plain !== 0) {
+      experts.shared = 1;
+      experts.sharedWidth = plain;
+    }
   }
 
   const dense = readDenseLayers(r, layers);
   if (dense !== null) experts.denseLayers = dense;
   return experts;
 }
+
+/** Where published configs state the number of routed experts, first match. */
+const TOTAL_PATHS: string[][] = [
+  ['num_local_experts'],
+  ['num_experts'],
+  ['n_routed_experts'],
+  ['moe_num_experts'],
+  ['ffn_config', 'moe_num_experts'],
+];
+/** Where they state the experts each token uses. */
+const ACTIVE_PATHS: string[][] = [['num_experts_per_tok'], ['moe_k'], ['ffn_config', 'moe_top_k']];
 
 /** count: decoder layers with a dense feed-forward; null when none are stated (every layer is a mixture). */
 function readDenseLayers(r: FieldReader, layers: number): number | null {
@@ -171,6 +203,37 @@ function readDenseLayers(r: FieldReader, layers: number): number | null {
     }
     if (n === null) return null;
     return n - countLayers(n, (i) => i >= k && i % freq === 0);
+  }
+  if (
+    r.has(['moe_layer_start_index']) ||
+    r.has(['moe_layer_end_index']) ||
+    r.has(['moe_layer_interval'])
+  ) {
+    const start = r.has(['moe_layer_start_index'])
+      ? r.count('experts.denseLayers', ['moe_layer_start_index'], 'the first mixture layer')
+      : 0;
+    const endStated = r.get(['moe_layer_end_index']);
+    const end =
+      endStated === undefined || endStated === -1
+        ? n === null
+          ? NaN
+          : n - 1
+        : r.count('experts.denseLayers', ['moe_layer_end_index'], 'the last mixture layer');
+    const step = r.has(['moe_layer_interval'])
+      ? r.count('experts.denseLayers', ['moe_layer_interval'], 'every Nth layer is a mixture')
+      : 1;
+    if (start === undefined || end === undefined || step === undefined) return NaN;
+    if (Number.isNaN(start) || Number.isNaN(step) || (Number.isNaN(end) && n !== null)) return NaN;
+    if (!isCount(step)) {
+      r.report(
+        'value-invalid',
+        ['moe_layer_interval'],
+        `${r.key(['moe_layer_interval'])} is ${r.quote(['moe_layer_interval'])}; expected a whole number of at least 1`,
+      );
+      return NaN;
+    }
+    if (n === null) return null;
+    return n - countLayers(n, (i) => i >= start && i <= end && (i + 1) % step === 0);
   }
   if (r.has(['mlp_only_layers']) || r.has(['decoder_sparse_step'])) {
     const listPath = ['mlp_only_layers'];

@@ -48,6 +48,23 @@ export interface CheckpointFamily {
    * code (Cohere2: its attention applies the rotary code only when the layer has a window).
    */
   ropeOnSlidingOnly?: true;
+  /** Per-head query/key norms (as `qkNorms`) only when this key is true (GLM-4.5: `use_qk_norm`). */
+  qkNormsKey?: string;
+  /**
+   * Query/key norms over every head at once (OLMoE: `q_norm` of `heads·headDim`, `k_norm` of
+   * `kvHeads·headDim`), which the count does not model: a finding says by how much params are low.
+   */
+  qkNormsAllHeads?: true;
+  /**
+   * `attention_bias` puts biases on the query, key and value projections only (GLM-4.5: no output,
+   * feed-forward or norm biases), which the count does not model: a finding says by how much.
+   */
+  qkvBiasOnly?: true;
+  /**
+   * The experts and router have no biases whatever the bias keys say (Phi-3.5-MoE: `attention_bias`
+   * biases the attention only), which the count does not model: a finding says by how much.
+   */
+  unbiasedExperts?: true;
   /** Mixture layers always add one shared expert as wide as a routed one (Llama-4 style). */
   oneSharedExpert?: true;
   /** The published config class defaults (default: none taken). */
@@ -182,6 +199,42 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
   llama4: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   llama4_text: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   qwen3_next: { position: 'rotary' },
+  glm4_moe: { position: 'rotary', gated: true, qkNormsKey: 'use_qk_norm', qkvBiasOnly: true },
+  olmoe: { position: 'rotary', gated: true, qkNormsAllHeads: true },
+  // Gated experts without biases (PhimoeBlockSparseTop2MLP: w1, w2, w3 without bias).
+  phimoe: { position: 'rotary', gated: true, unbiasedExperts: true },
+  granitemoe: { position: 'rotary', gated: true },
+  granitemoeshared: { position: 'rotary', gated: true },
+  ernie4_5_moe: {
+    position: 'rotary',
+    gated: true,
+    published: {
+      source: 'from the published config class Ernie4_5_MoeConfig',
+      values: {
+        vocab_size: 103424,
+        hidden_size: 2560,
+        intermediate_size: 12288,
+        num_hidden_layers: 28,
+        num_attention_heads: 20,
+        num_key_value_heads: 4,
+        max_position_embeddings: 131072,
+        rope_theta: 500000,
+        tie_word_embeddings: true,
+        hidden_act: 'silu',
+        use_bias: false,
+        moe_intermediate_size: 1536,
+        moe_k: 6,
+        moe_num_experts: 64,
+        moe_num_shared_experts: 2,
+        moe_layer_start_index: 1,
+        moe_layer_end_index: -1,
+        moe_layer_interval: 1,
+      },
+    },
+  },
+  // DbrxConfig nests its attention and feed-forward values (attn_config, ffn_config; their defaults in
+  // checkpoint-dialect.ts); its experts are gated (DbrxExpertGLU: w1, v1, w2).
+  dbrx: { position: 'rotary', gated: true },
   cohere2: { position: 'rotary', gated: true, globalEvery: 4, ropeOnSlidingOnly: true },
   gpt2: { position: 'learned', bias: true },
   gpt_bigcode: { position: 'learned', bias: true },

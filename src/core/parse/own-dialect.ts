@@ -525,6 +525,7 @@ function readScaling(r: FieldReader, at: string[]): ScalingDraft | null {
     'beta',
     draft.beta,
     DEFAULT_YARN_BETA,
+    true,
   );
   orderedRamp(
     r,

@@ -141,6 +141,29 @@ const NO_METRIC_KEYS = new Set([
   'router_aux_loss_coef',
   'router_z_loss_coef',
   'router_jitter_noise',
+  // Routing rules: which experts a token picks and how their outputs are weighted, never how many
+  // there are or how wide (DeepSeek-V3 and Kimi K2, GLM-4.5, OLMoE, Phi-3.5-MoE, DBRX, ERNIE 4.5).
+  'norm_topk_prob',
+  'n_group',
+  'topk_group',
+  'topk_method',
+  'routed_scaling_factor',
+  'scoring_func',
+  'seq_aux',
+  'aux_loss_alpha',
+  'input_jitter_noise',
+  'moe_jitter_eps',
+  'moe_loss_weight',
+  'moe_normalize_expert_weights',
+  'uniform_expert_assignment',
+  'moe_gate',
+  'moe_capacity',
+  'moe_use_aux_free',
+  'moe_norm_min',
+  // Granite's scalings of attention scores, residuals and logits change no size or span.
+  'attention_multiplier',
+  'residual_multiplier',
+  'logits_scaling',
   // Multimodal rotary: text positions share one id (the spectrum is the plain rotary one).
   'mrope_interleaved',
   // GPT-2 sequence-summary head, not part of the language model.
