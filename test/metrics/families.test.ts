@@ -417,3 +417,80 @@ describe('parameterBreakdown(spec)', () => {
     expect(parameterBreakdown(read('mixtral-moe.json').spec)!.output).toBe(32000 * 4096);
   });
 });
+
+describe('multimodal wrappers and long-context families, as their configs are published', () => {
+  // Configs written in the published key style (values from the published config.json files, from
+  // memory; invented where a key changes no figure). Each check names its source.
+  const inspect = (config: Record<string, unknown>) => {
+    const r = readModel(configText(config), 'config.json');
+    return { ...r, metrics: computeMetrics(r.spec) };
+  };
+
+  const paligemma = {
+    architectures: ['PaliGemmaForConditionalGeneration'],
+    hidden_size: 2048,
+    image_token_index: 257152,
+    model_type: 'paligemma',
+    projection_dim: 2048,
+    text_config: {
+      hidden_size: 2048,
+      intermediate_size: 16384,
+      model_type: 'gemma',
+      num_attention_heads: 8,
+      num_hidden_layers: 18,
+      num_image_tokens: 256,
+      num_key_value_heads: 1,
+      torch_dtype: 'float32',
+      vocab_size: 257216,
+    },
+    vision_config: {
+      hidden_size: 1152,
+      intermediate_size: 4304,
+      model_type: 'siglip_vision_model',
+      num_attention_heads: 16,
+      num_hidden_layers: 27,
+      patch_size: 14,
+      projection_dim: 2048,
+    },
+    vocab_size: 257216,
+  };
+
+  it("PaliGemma: a wrapper that repeats hidden_size at the top level is read from text_config; Gemma 2B's 1,981,884,416 non-embedding parameters (Gemma report 2024, Table 2, from memory) with GemmaConfig's head_dim 256 and 8,192 positions", () => {
+    const { spec, metrics, findings, locations } = inspect(paligemma);
+    expect(findings.filter((f) => f.severity === 'block')).toEqual([]);
+    expect(locations.layers?.key).toBe('text_config.num_hidden_layers');
+    expect([spec.layers, spec.heads, spec.kvHeads, spec.headDim, spec.declaredSpan]).toEqual([
+      18, 8, 1, 256, 8192,
+    ]);
+    expect(metrics.nonEmbeddingParams).toBe(1_981_884_416);
+    // One key/value head of 256 in 18 layers, fp32 as the file states (multi-query: Gemma report, §2).
+    expect(metrics.cachePerTokenBytes).toBe(18 * 2 * 1 * 256 * 4);
+    const taken = findings.find((f) => f.rule === 'family-default-taken');
+    expect(taken?.message).toContain('GemmaConfig');
+  });
+
+  it("PaliGemma 2: the gemma2 text block takes Gemma2Config's head_dim 256, not 2304/8 = 288; Gemma 2 2B's 2,024,517,888 non-embedding parameters (Gemma 2 report 2024, Table 2, from memory)", () => {
+    const { spec, metrics } = inspect({
+      ...paligemma,
+      num_hidden_layers: 26,
+      text_config: {
+        hidden_activation: 'gelu_pytorch_tanh',
+        hidden_size: 2304,
+        intermediate_size: 9216,
+        model_type: 'gemma2',
+        num_attention_heads: 8,
+        num_hidden_layers: 26,
+        num_key_value_heads: 4,
+        query_pre_attn_scalar: 256,
+        sliding_window: 4096,
+        torch_dtype: 'bfloat16',
+        vocab_size: 257216,
+      },
+    });
+    expect(spec.headDim).toBe(256);
+    expect(metrics.nonEmbeddingParams).toBe(2_024_517_888);
+    // Local and global layers alternate (Gemma 2 report, §2): 13 of each at window 4,096, span 8,192.
+    expect(metrics.cacheBytesAtSpan).toBe(2 * 4 * 256 * 2 * (13 * 4096 + 13 * 8192));
+  });
+
+});
