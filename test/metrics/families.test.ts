@@ -493,4 +493,69 @@ describe('multimodal wrappers and long-context families, as their configs are pu
     expect(metrics.cacheBytesAtSpan).toBe(2 * 4 * 256 * 2 * (13 * 4096 + 13 * 8192));
   });
 
+  const exaone4 = {
+    architectures: ['Exaone4ForCausalLM'],
+    head_dim: 128,
+    hidden_act: 'silu',
+    hidden_size: 5120,
+    intermediate_size: 27392,
+    max_position_embeddings: 131072,
+    model_type: 'exaone4',
+    num_attention_heads: 40,
+    num_hidden_layers: 64,
+    num_key_value_heads: 8,
+    rope_scaling: {
+      factor: 16.0,
+      high_freq_factor: 4.0,
+      low_freq_factor: 1.0,
+      original_max_position_embeddings: 8192,
+      rope_type: 'llama3',
+    },
+    rope_theta: 1000000,
+    sliding_window: 4096,
+    sliding_window_pattern: 'LLLG',
+    tie_word_embeddings: false,
+    torch_dtype: 'bfloat16',
+    vocab_size: 102400,
+  };
+
+  it('EXAONE 4.0 32B: sliding_window_pattern "LLLG" gives 48 local and 16 global layers (3:1, EXAONE 4.0 report 2025, from memory), the global ones without a rotary code; 30.95B without embeddings (model card, from memory)', () => {
+    const { spec, metrics, findings } = inspect(exaone4);
+    expect(findings.filter((f) => f.severity === 'block')).toEqual([]);
+    expect(spec.layerTypes!.slice(0, 8)).toEqual([
+      'sliding',
+      'sliding',
+      'sliding',
+      'full',
+      'sliding',
+      'sliding',
+      'sliding',
+      'full',
+    ]);
+    // Exaone4Attention: "We use global NoPE for hybrid attention model" (transformers, modular_exaone4.py).
+    expect(metrics.layerKinds!.map((k) => [k.attention, k.positionCode, k.layers])).toEqual([
+      ['sliding', 'rotary', 48],
+      ['full', 'none', 16],
+    ]);
+    expect(rel(metrics.nonEmbeddingParams, 30.95e9)).toBeLessThan(0.001);
+    expect(metrics.cacheBytesAtSpan).toBe(2 * 8 * 128 * 2 * (48 * 4096 + 16 * 131072));
+  });
+
+  it('a letter pattern puts a global layer last whatever the letters (Exaone4Config documentation) and rejects other letters', () => {
+    const { spec } = inspect({ ...exaone4, num_hidden_layers: 6, sliding_window_pattern: 'LLLL' });
+    expect(spec.layerTypes).toEqual([
+      'sliding',
+      'sliding',
+      'sliding',
+      'sliding',
+      'sliding',
+      'full',
+    ]);
+    const bad = inspect({ ...exaone4, sliding_window_pattern: 'LLXG' });
+    expect(bad.findings.map((f) => [f.rule, f.key])).toContainEqual([
+      'value-invalid',
+      'sliding_window_pattern',
+    ]);
+  });
+
 });

@@ -218,6 +218,15 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
   llama4_text: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   qwen3_next: { position: 'rotary' },
   cohere2: { position: 'rotary', gated: true, globalEvery: 4, ropeOnSlidingOnly: true },
+  // Exaone4Attention applies the rotary code only when the model has no window or the layer slides
+  // ("global NoPE"), with per-head query/key norms; the class's pattern default is 4.
+  exaone4: {
+    position: 'rotary',
+    gated: true,
+    qkNorms: true,
+    globalEvery: 4,
+    ropeOnSlidingOnly: true,
+  },
   gpt2: { position: 'learned', bias: true },
   gpt_bigcode: { position: 'learned', bias: true },
   gpt_neo: { position: 'learned', bias: true },

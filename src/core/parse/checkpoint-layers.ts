@@ -5,7 +5,8 @@
  *   `chunked_attention`.
  * - `sliding_window` (unless `use_sliding_window` is false; Qwen families turn it off unless it
  *   is true), with, first match: `sliding_window_pattern` N (every Nth layer is global: layer i
- *   slides when `(i + 1) % N != 0`, as the Gemma-3-style config classes expand it); the family
+ *   slides when `(i + 1) % N != 0`, as the Gemma-3-style config classes expand it) or letters
+ *   such as "LLLG" (L local, G global, repeated, the last layer global: EXAONE 4); the family
  *   patterns (`globalEvery` in `checkpoint-families.ts`; gemma2: local and global alternate,
  *   starting with a local layer; gemma3 / gemma3_text: N = 6; cohere2: N = 4 — each class's
  *   default); `max_window_layers`
@@ -162,6 +163,13 @@ function readLayerKinds(r: FieldReader, modelType: string | null, layers: number
   const family = familyOf(modelType)?.globalEvery;
   if (r.has(patternPath) || family !== undefined) {
     let every: number | undefined = family;
+    const letters = r.get(patternPath);
+    if (typeof letters === 'string') {
+      const kinds = readLetterPattern(r, letters, n);
+      if (kinds === undefined) return dropWindow(plan);
+      if (kinds === null) return plan;
+      return patternPlan(r, plan, kinds, `the pattern ${r.quote(patternPath)}`);
+    }
     if (r.has(patternPath)) {
       const stated = r.count('layerTypes', patternPath, 'every Nth layer is global');
       if (stated === undefined || Number.isNaN(stated)) return dropWindow(plan);
@@ -176,21 +184,10 @@ function readLayerKinds(r: FieldReader, modelType: string | null, layers: number
       every = stated;
     } else r.locate('layerTypes', ['model_type']);
     if (n === null) return plan;
-    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention =>
+    const kinds = Array.from({ length: n }, (_, i): LayerAttention =>
       (i + 1) % (every as number) !== 0 ? 'sliding' : 'full',
     );
-    plan.windowLayers = plan.layerTypes.filter((t) => t === 'sliding').length || null;
-    if (plan.windowLayers === null) {
-      r.report(
-        'key-ignored',
-        ['sliding_window'],
-        `${r.key(['sliding_window'])} has no effect: with every ${every === 1 ? '' : `${every}th `}layer global, no layer slides`,
-      );
-      plan.slidingWindow = null;
-      plan.layerTypes = null;
-    }
-    readLocalBase(r, plan);
-    return plan;
+    return patternPlan(r, plan, kinds, `every ${every === 1 ? '' : `${every}th `}layer global`);
   }
   if (r.has(['max_window_layers'])) {
     const first = r.count('windowLayers', ['max_window_layers'], 'layer index');
@@ -212,6 +209,55 @@ function readLayerKinds(r: FieldReader, modelType: string | null, layers: number
   }
   readLocalBase(r, plan);
   return plan;
+}
+
+/** The plan with `kinds` from a repeating pattern; the window is dropped (reported) when no layer slides. */
+function patternPlan(
+  r: FieldReader,
+  plan: LayerPlanDraft,
+  kinds: LayerAttention[],
+  pattern: string,
+): LayerPlanDraft {
+  plan.layerTypes = kinds;
+  plan.windowLayers = kinds.filter((t) => t === 'sliding').length || null;
+  if (plan.windowLayers === null) {
+    r.report(
+      'key-ignored',
+      ['sliding_window'],
+      `${r.key(['sliding_window'])} has no effect: with ${pattern}, no layer slides`,
+    );
+    plan.slidingWindow = null;
+    plan.layerTypes = null;
+  }
+  readLocalBase(r, plan);
+  return plan;
+}
+
+/**
+ * `sliding_window_pattern` written as letters (EXAONE-4-style configs): "L" a local (sliding)
+ * layer, "G" a global one, repeated from layer 0, and the last layer always global (the
+ * Exaone4Config documentation: "The final layer always uses global attention regardless of the
+ * pattern"). Undefined (reported) when a letter is neither; null when the layer count is unusable.
+ */
+function readLetterPattern(
+  r: FieldReader,
+  letters: string,
+  n: number | null,
+): LayerAttention[] | null | undefined {
+  const path = ['sliding_window_pattern'];
+  r.locate('layerTypes', path);
+  if (!/^[LG]+$/.test(letters)) {
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} is ${r.quote(path)}; expected a whole number (every Nth layer is global) or a pattern of the letters L (local) and G (global), such as "LLLG"`,
+    );
+    return undefined;
+  }
+  if (n === null) return null;
+  return Array.from({ length: n }, (_, i): LayerAttention =>
+    i === n - 1 || letters[i % letters.length] === 'G' ? 'full' : 'sliding',
+  );
 }
 
 /** Whether `path` holds a list with at least one entry. */
