@@ -558,4 +558,69 @@ describe('multimodal wrappers and long-context families, as their configs are pu
     ]);
   });
 
+  const mllama = {
+    architectures: ['MllamaForConditionalGeneration'],
+    image_token_index: 128256,
+    model_type: 'mllama',
+    text_config: {
+      cross_attention_layers: [3, 8, 13, 18, 23, 28, 33, 38],
+      hidden_act: 'silu',
+      hidden_size: 4096,
+      intermediate_size: 14336,
+      max_position_embeddings: 131072,
+      model_type: 'mllama_text_model',
+      num_attention_heads: 32,
+      num_hidden_layers: 40,
+      num_key_value_heads: 8,
+      rope_scaling: {
+        factor: 8.0,
+        high_freq_factor: 4.0,
+        low_freq_factor: 1.0,
+        original_max_position_embeddings: 8192,
+        rope_type: 'llama3',
+      },
+      rope_theta: 500000.0,
+      tie_word_embeddings: false,
+      torch_dtype: 'bfloat16',
+      vocab_size: 128256,
+    },
+    vision_config: {
+      hidden_act: 'gelu',
+      hidden_size: 1280,
+      image_size: 560,
+      intermediate_size: 5120,
+      max_num_tiles: 4,
+      model_type: 'mllama_vision_model',
+      num_channels: 3,
+      num_global_layers: 8,
+      num_hidden_layers: 32,
+      patch_size: 14,
+      vision_output_dim: 7680,
+    },
+  };
+
+  it('Llama 3.2 11B Vision: the 8 cross-attention layers hold no cache per text token and have no position code; the 32 self-attention layers cache 131,072 bytes per token (Llama 3.1 8B shape, common practice)', () => {
+    const { spec, metrics, findings } = inspect(mllama);
+    expect(spec.positionFreeLayers).toEqual([3, 8, 13, 18, 23, 28, 33, 38]);
+    expect(
+      metrics.layerKinds!.map((k) => [k.attention, k.positionCode, k.layers, k.window]),
+    ).toEqual([
+      ['full', 'rotary', 32, null],
+      ['cross', 'none', 8, 0],
+    ]);
+    expect(metrics.cachePerTokenBytes).toBe(32 * 2 * 8 * 128 * 2);
+    expect(metrics.cacheBytesAtSpan).toBe(32 * 2 * 8 * 128 * 2 * 131072);
+    // Kaplan et al. 2020, Table 1: the context term counts only the layers that attend to text.
+    expect(metrics.flopsPerToken).toBe(
+      2 * metrics.nonEmbeddingParams! + 2 * 32 * 131072 * 32 * 128,
+    );
+    // Tensor-parallel over 8 ranks: one key/value head per rank, still only the 32 self-attention
+    // layers (docs/metrics.md, "Serving across devices").
+    const split = computeMetrics({ ...spec, serving: { ...spec.serving, tensorParallel: 8 } });
+    expect(split.cachePerTokenBytesPerDevice).toBe(32 * 2 * 1 * 128 * 2);
+    const note = findings.find((f) => f.key === 'text_config.cross_attention_layers');
+    expect(note).toMatchObject({ rule: 'vision-not-counted', severity: 'info' });
+    expect(note!.message).toContain('understated');
+  });
+
 });

@@ -18,6 +18,8 @@
  *   llama4 / llama4_text): as the Llama-4-style config class expands it, layers with the rotary
  *   code use chunked attention and the others full attention.
  * - `no_rope_layers` alone: the layers without a position code.
+ * - `cross_attention_layers` (Mllama): those layers cross-attend to the image tokens only, with no
+ *   position code and no cache per text token.
  * - `rope_local_base_freq`, or `rope_parameters.sliding_attention.rope_theta`: the rotary base
  *   of the local layers, which run without the model's context scaling (as the Gemma-3-style
  *   code builds its local rotary embedding).
@@ -55,6 +57,7 @@ export function readLayerPlan(
   layers: number,
 ): LayerPlanDraft {
   const plan = readLayerKinds(r, modelType, layers);
+  readCrossLayers(r, plan, isCount(layers) && layers <= 1 << 16 ? layers : null);
   // A family whose global layers carry no position code (`ropeOnSlidingOnly`), unless the file
   // says which layers have none.
   if (
@@ -69,6 +72,57 @@ export function readLayerPlan(
     }
   }
   return plan;
+}
+
+/**
+ * `cross_attention_layers` (Mllama, Llama 3.2 Vision): the listed layers attend to the image
+ * tokens only, through their own key and value projections, and apply no position code (the
+ * published MllamaTextCrossAttention rotates nothing): they hold no cache per text token. The
+ * image tokens' keys and values they keep (fixed per image) are not counted, which a
+ * `vision-not-counted` finding says.
+ */
+function readCrossLayers(r: FieldReader, plan: LayerPlanDraft, n: number | null): void {
+  const path = ['cross_attention_layers'];
+  if (!r.has(path)) return;
+  const list = r.get(path);
+  if (
+    !Array.isArray(list) ||
+    list.some(
+      (x) => typeof x !== 'number' || !Number.isInteger(x) || x < 0 || (n !== null && x >= n),
+    )
+  ) {
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} ${Array.isArray(list) ? 'lists an entry that is not a layer index' : r.is(path)}; expected a list of layer indices from 0${n !== null ? ` to ${n - 1}` : ''}`,
+    );
+    return;
+  }
+  if (n === null || list.length === 0) return;
+  if (plan.layerTypes === null && plan.slidingWindow !== null) {
+    r.report(
+      'key-ignored',
+      path,
+      `${r.key(path)} is not read: the sliding window is not stated per layer, so which layers cross-attend cannot be combined with it; every layer is read as self-attention and the cache is overstated — state layer_types`,
+    );
+    return;
+  }
+  const kinds: LayerAttention[] = plan.layerTypes ?? Array.from({ length: n }, () => 'full');
+  const cross = [...new Set(list as number[])].sort((a, b) => a - b);
+  for (const i of cross) kinds[i] = 'cross';
+  plan.layerTypes = kinds;
+  plan.windowLayers = kinds.filter((t) => t === 'sliding').length || null;
+  if (plan.windowLayers === null) plan.slidingWindow = null;
+  plan.positionFreeLayers = [...new Set([...(plan.positionFreeLayers ?? []), ...cross])].sort(
+    (a, b) => a - b,
+  );
+  r.locate('layerTypes', path);
+  r.locate('positionFreeLayers', path);
+  r.report(
+    'vision-not-counted',
+    path,
+    `${r.key(path)}: ${cross.length} of ${n} layers attend to the image tokens only; they hold no keys or values per text token, so cachePerTokenBytes and cacheBytesAtSpan leave them out, and the image tokens' own keys and values in those layers (fixed per image) are not counted: the cache is understated by that amount when images are present`,
+  );
 }
 
 function readLayerKinds(r: FieldReader, modelType: string | null, layers: number): LayerPlanDraft {
