@@ -623,4 +623,64 @@ describe('multimodal wrappers and long-context families, as their configs are pu
     expect(note!.message).toContain('understated');
   });
 
+  it('Llama 3.2 11B Vision counts 10.6B with its tower (Meta model card 2024: 10.6B), the 8 global vision layers included; each cross layer adds query and key norms (128 each) and two gates (MllamaCrossAttentionDecoderLayer)', () => {
+    const { spec, metrics } = inspect(mllama);
+    expect(spec.vision?.layers).toBe(40);
+    expect(rel(metrics.params! + metrics.visionParams!, 10.6e9)).toBeLessThan(0.01);
+    const plain = inspect({
+      ...mllama,
+      text_config: { ...mllama.text_config, cross_attention_layers: [] },
+    }).metrics;
+    expect(metrics.params! - plain.params!).toBe(8 * (2 * 128 + 2));
+  });
+
+  it('Mistral Small 3.1 (24B, Mistral AI model card 2025, from memory): the Pixtral tower is read with findings for its gated feed-forward and its rotary code, both sized', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['Mistral3ForConditionalGeneration'],
+      model_type: 'mistral3',
+      projector_hidden_act: 'gelu',
+      spatial_merge_size: 2,
+      text_config: {
+        head_dim: 128,
+        hidden_act: 'silu',
+        hidden_size: 5120,
+        intermediate_size: 32768,
+        max_position_embeddings: 131072,
+        model_type: 'mistral',
+        num_attention_heads: 32,
+        num_hidden_layers: 40,
+        num_key_value_heads: 8,
+        rope_theta: 1000000000.0,
+        sliding_window: null,
+        vocab_size: 131072,
+      },
+      vision_config: {
+        head_dim: 64,
+        hidden_act: 'silu',
+        hidden_size: 1024,
+        image_size: 1540,
+        intermediate_size: 4096,
+        model_type: 'pixtral',
+        num_attention_heads: 16,
+        num_channels: 3,
+        num_hidden_layers: 24,
+        patch_size: 14,
+        rope_theta: 10000.0,
+      },
+    });
+    const tower = findings.filter((f) => f.key?.startsWith('vision_config.'));
+    expect(tower.map((f) => [f.rule, f.key])).toEqual([
+      ['vision-not-counted', 'vision_config.hidden_act'],
+      ['vision-not-counted', 'vision_config.rope_theta'],
+    ]);
+    expect(tower[0]!.message).toContain(
+      `understated by ${(24 * 1024 * 4096).toLocaleString('en-US')}`,
+    );
+    expect(tower[1]!.message).toContain(
+      `overstated by ${((110 * 110 + 1) * 1024).toLocaleString('en-US')}`,
+    );
+    expect(rel(metrics.params! + metrics.visionParams!, 24e9)).toBeLessThan(0.02);
+    // 40 layers, 8 key/value heads of 128, bf16 by default: 163,840 bytes per token (common practice).
+    expect(metrics.cachePerTokenBytes).toBe(40 * 2 * 8 * 128 * 2);
+  });
 });
