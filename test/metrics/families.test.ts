@@ -634,6 +634,36 @@ describe('multimodal wrappers and long-context families, as their configs are pu
     expect(metrics.params! - plain.params!).toBe(8 * (2 * 128 + 2));
   });
 
+  it('Qwen2.5-7B-Instruct-1M: dual_chunk_attention_config is a key-ignored warning naming the chunk and the trained span, not an unread key (Qwen2.5-1M report 2025: trained to 256K, dual chunk attention to 1M, from memory); 7.6B parameters (Qwen2.5 report, from memory)', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['Qwen2ForCausalLM'],
+      hidden_act: 'silu',
+      hidden_size: 3584,
+      intermediate_size: 18944,
+      max_position_embeddings: 1010000,
+      max_window_layers: 28,
+      model_type: 'qwen2',
+      num_attention_heads: 28,
+      num_hidden_layers: 28,
+      num_key_value_heads: 4,
+      rope_theta: 10000000.0,
+      sliding_window: 32768,
+      tie_word_embeddings: false,
+      use_sliding_window: false,
+      vocab_size: 152064,
+      dual_chunk_attention_config: {
+        chunk_size: 262144,
+        local_size: 8192,
+        original_max_position_embeddings: 262144,
+      },
+    });
+    const dca = findings.filter((f) => f.key?.startsWith('dual_chunk_attention_config'));
+    expect(dca.map((f) => [f.rule, f.severity])).toEqual([['key-ignored', 'warn']]);
+    expect(dca[0]!.message).toContain('chunk_size (262,144)');
+    expect(dca[0]!.message).toContain('trainedSpan and reach');
+    expect(rel(metrics.params, 7.6e9)).toBeLessThan(0.02);
+  });
+
   it('Mistral Small 3.1 (24B, Mistral AI model card 2025, from memory): the Pixtral tower is read with findings for its gated feed-forward and its rotary code, both sized', () => {
     const { metrics, findings } = inspect({
       architectures: ['Mistral3ForConditionalGeneration'],

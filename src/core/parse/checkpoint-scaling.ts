@@ -100,6 +100,27 @@ export function readPairwise(
 }
 
 /**
+ * `dual_chunk_attention_config` (Qwen2.5-1M, dual chunk attention): relative positions are
+ * remapped so that no query-key offset exceeds `chunk_size`, within the span the model was trained
+ * at (`original_max_position_embeddings`). Not modelled: reported (`key-ignored`) with the numbers
+ * it changes. Its keys are consulted so none is reported again as unread.
+ */
+export function reportDualChunk(r: FieldReader, declaredSpan: number): void {
+  const path = ['dual_chunk_attention_config'];
+  const block = r.get(path);
+  if (block === undefined || block === null) return;
+  const chunk = r.get([...path, 'chunk_size']);
+  const original = r.get([...path, 'original_max_position_embeddings']);
+  r.get([...path, 'local_size']);
+  const show = (v: unknown) => (typeof v === 'number' ? v.toLocaleString('en-US') : 'not stated');
+  r.report(
+    'key-ignored',
+    path,
+    `${r.key(path)} (dual chunk attention) is not modelled: it keeps every query-key offset below chunk_size (${show(chunk)}) within the span the model was trained at (original_max_position_embeddings ${show(original)}), but trainedSpan and reach are read as the declared span (${show(Number.isFinite(declaredSpan) ? declaredSpan : undefined)}) and the positional scans run over offsets up to the span, which this attention never produces: those figures are not the model's — describe it in the context-reach format with trained-span ${show(original)} and read the scans as pessimistic`,
+  );
+}
+
+/**
  * `mrope_section` (Qwen2-VL's multimodal rotary code): the rotary pairs split into sections for
  * time, height and width position ids. For text every section gets the same position id, so the
  * spectrum is the plain rotary one and nothing changes a metric; the sections must add up to the
