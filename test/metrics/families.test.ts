@@ -664,6 +664,39 @@ describe('multimodal wrappers and long-context families, as their configs are pu
     expect(rel(metrics.params, 7.6e9)).toBeLessThan(0.02);
   });
 
+  const smollm3 = {
+    architectures: ['SmolLM3ForCausalLM'],
+    hidden_act: 'silu',
+    hidden_size: 2048,
+    intermediate_size: 11008,
+    max_position_embeddings: 65536,
+    model_type: 'smollm3',
+    no_rope_layer_interval: 4,
+    no_rope_layers: Array.from({ length: 36 }, (_, i) => ((i + 1) % 4 === 0 ? 0 : 1)),
+    num_attention_heads: 16,
+    num_hidden_layers: 36,
+    num_key_value_heads: 4,
+    rope_theta: 5000000.0,
+    use_sliding_window: false,
+    vocab_size: 128256,
+  };
+
+  it('SmolLM3-3B: every 4th layer without a position code (SmolLM3 blog 2025: NoPE in every fourth layer, from memory), from the list or, without it, from the family interval; 3.08B parameters (model card, from memory)', () => {
+    const stated = inspect(smollm3);
+    expect(stated.findings.filter((f) => f.rule === 'key-unread')).toEqual([]);
+    const { no_rope_layers: _list, ...withoutList } = smollm3;
+    void _list;
+    const fromFamily = inspect({ ...withoutList, no_rope_layer_interval: undefined });
+    for (const r of [stated, fromFamily]) {
+      expect(r.spec.positionFreeLayers).toEqual([3, 7, 11, 15, 19, 23, 27, 31, 35]);
+      expect(r.metrics.layerKinds!.map((k) => [k.positionCode, k.layers])).toEqual([
+        ['rotary', 27],
+        ['none', 9],
+      ]);
+    }
+    expect(rel(stated.metrics.params, 3.08e9)).toBeLessThan(0.01);
+  });
+
   it('Mistral Small 3.1 (24B, Mistral AI model card 2025, from memory): the Pixtral tower is read with findings for its gated feed-forward and its rotary code, both sized', () => {
     const { metrics, findings } = inspect({
       architectures: ['Mistral3ForConditionalGeneration'],

@@ -214,6 +214,9 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
       },
     },
   },
+  // SmolLM3Config: every 4th layer without a position code unless no_rope_layers says otherwise;
+  // the window applies only with use_sliding_window.
+  smollm3: { position: 'rotary', gated: true, noRopeEvery: 4, windowOff: true },
   llama4: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   llama4_text: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   qwen3_next: { position: 'rotary' },

@@ -396,6 +396,9 @@ function readPositionFree(
   if (r.has(listPath) && !(Array.isArray(stated) && stated.length === 0)) {
     const list = r.get(listPath);
     r.locate('positionFreeLayers', listPath);
+    // The list wins over an interval (the SmolLM3- and Llama-4-style classes expand the interval
+    // only when no list is given).
+    r.get(['no_rope_layer_interval']);
     if (
       !Array.isArray(list) ||
       list.some((x) => x !== 0 && x !== 1) ||
