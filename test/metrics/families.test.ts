@@ -697,6 +697,40 @@ describe('multimodal wrappers and long-context families, as their configs are pu
     expect(rel(stated.metrics.params, 3.08e9)).toBeLessThan(0.01);
   });
 
+  it('Phi-3.5-MoE: long_mscale 1.243163121016122 (its published config.json, from memory) is the attention factor past the original span, not the default sqrt(1 + ln 32 / ln 4096) = 1.190; 41.9B total and 6.6B active (model card, from memory)', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['PhiMoEForCausalLM'],
+      attention_bias: true,
+      hidden_act: 'silu',
+      hidden_size: 4096,
+      intermediate_size: 6400,
+      max_position_embeddings: 131072,
+      model_type: 'phimoe',
+      num_attention_heads: 32,
+      num_experts_per_tok: 2,
+      num_hidden_layers: 32,
+      num_key_value_heads: 8,
+      num_local_experts: 16,
+      original_max_position_embeddings: 4096,
+      rope_scaling: {
+        long_factor: Array(64).fill(1.5),
+        long_mscale: 1.243163121016122,
+        original_max_position_embeddings: 4096,
+        short_factor: Array(64).fill(1.0),
+        short_mscale: 1.243163121016122,
+        type: 'longrope',
+      },
+      rope_theta: 10000.0,
+      sliding_window: 131072,
+      tie_word_embeddings: false,
+      vocab_size: 32064,
+    });
+    expect(metrics.attentionScale).toBe(1.243163121016122);
+    expect(findings.filter((f) => f.key?.includes('mscale'))).toEqual([]);
+    expect(rel(metrics.params, 41.9e9)).toBeLessThan(0.01);
+    expect(rel(metrics.activeParams, 6.6e9)).toBeLessThan(0.02);
+  });
+
   it('Mistral Small 3.1 (24B, Mistral AI model card 2025, from memory): the Pixtral tower is read with findings for its gated feed-forward and its rotary code, both sized', () => {
     const { metrics, findings } = inspect({
       architectures: ['Mistral3ForConditionalGeneration'],

@@ -70,15 +70,20 @@ export function readPairwise(
 ): ScalingDraft {
   const short = factorList(r, [...at, 'short_factor'], ctx);
   const long = factorList(r, [...at, 'long_factor'], ctx);
-  const attention = r.real(
-    'position.scaling.attentionFactor',
+  // PhiMoE-style blocks state the factor past the original span as long_mscale (short_mscale
+  // within it, where the short factors apply); attentionScale is the long-range one.
+  const attentionPath = r.first([
     [...at, 'attention_factor'],
-    'attention factor',
-    {
-      test: (n) => n > 0,
-      expected: 'an attention factor above 0',
-    },
-  );
+    [...at, 'long_mscale'],
+  ]);
+  r.get([...at, 'short_mscale']);
+  const attention =
+    attentionPath === null
+      ? undefined
+      : r.real('position.scaling.attentionFactor', attentionPath, 'attention factor', {
+          test: (n) => n > 0,
+          expected: 'an attention factor above 0',
+        });
   let factor = r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor');
   if (factor === undefined) {
     if (isCount(originalSpan ?? NaN) && isCount(ctx.declaredSpan))
