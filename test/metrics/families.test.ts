@@ -731,6 +731,47 @@ describe('multimodal wrappers and long-context families, as their configs are pu
     expect(rel(metrics.activeParams, 6.6e9)).toBeLessThan(0.02);
   });
 
+  it('LLaVA-1.5-7B: the sparse llama text_config reads with LlamaConfig defaults, the CLIP ViT-L/14-336 tower counts 303.5M, and the projector left out is a finding with its smallest size (LLaVA-1.5: 7.06B, Liu et al. 2023 model release, from memory)', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['LlavaForConditionalGeneration'],
+      image_token_index: 32000,
+      model_type: 'llava',
+      projector_hidden_act: 'gelu',
+      text_config: {
+        architectures: ['LlamaForCausalLM'],
+        max_position_embeddings: 4096,
+        model_type: 'llama',
+        rms_norm_eps: 1e-5,
+        torch_dtype: 'float16',
+        vocab_size: 32064,
+      },
+      tie_word_embeddings: false,
+      vision_config: {
+        hidden_size: 1024,
+        image_size: 336,
+        intermediate_size: 4096,
+        model_type: 'clip_vision_model',
+        num_attention_heads: 16,
+        num_hidden_layers: 24,
+        patch_size: 14,
+        projection_dim: 768,
+      },
+      vision_feature_layer: -2,
+      vocab_size: 32064,
+    });
+    // Llama 2 7B's shape (Touvron et al. 2023, Table 1) with 64 more vocabulary rows in two tables.
+    expect(metrics.params).toBe(6_738_939_904);
+    expect(rel(metrics.visionParams, 303.5e6)).toBeLessThan(0.001);
+    const projector = findings.find(
+      (f) => f.key === 'vision_config' && f.message.includes('projector'),
+    );
+    expect(projector).toMatchObject({ rule: 'vision-not-counted', severity: 'info' });
+    expect(projector!.message).toContain('at least 4,194,304 parameters');
+    // Its two matrices, 1024·4096 + 4096·4096 plus biases, close the gap to the published figure.
+    const mlp = 1024 * 4096 + 4096 + 4096 * 4096 + 4096;
+    expect(rel(metrics.params! + metrics.visionParams! + mlp, 7.06e9)).toBeLessThan(0.001);
+  });
+
   it('Mistral Small 3.1 (24B, Mistral AI model card 2025, from memory): the Pixtral tower is read with findings for its gated feed-forward and its rotary code, both sized', () => {
     const { metrics, findings } = inspect({
       architectures: ['Mistral3ForConditionalGeneration'],

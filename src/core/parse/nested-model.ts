@@ -78,12 +78,15 @@ function reportUnlikeViT(r: FieldReader, block: SourceMapping): void {
 /**
  * The vision tower beside a language model: `vision_config` of `parent` (the mapping that holds
  * the model block, or the model block itself for flat files), read ViT style. Returns the tower
- * when every size is stated, and the findings (a `vision-not-counted` info otherwise).
+ * when every size is stated, and the findings (a `vision-not-counted` info otherwise, and one
+ * for the projector into the language model, which no count covers; `modelHidden` is the
+ * language model's width, for its smallest size).
  */
 export function readVisionTower(
   doc: SourceDocument,
   parent: SourceMapping,
   prefix: readonly PathSegment[],
+  modelHidden = NaN,
 ): { tower: VisionTower | null; findings: Finding[] } {
   const block = parent.vision_config;
   if (!isMapping(block)) return { tower: null, findings: [] };
@@ -111,6 +114,12 @@ export function readVisionTower(
     ? (r.count('vision.layers', ['num_global_layers'], 'a number of layers') ?? NaN)
     : 0;
   reportUnlikeViT(r, block);
+  const least = (block.hidden_size as number) * modelHidden;
+  r.report(
+    'vision-not-counted',
+    [],
+    `${r.key([])}: the projector from the tower into the language model (one or more matrices${Number.isFinite(least) ? `, at least ${least.toLocaleString('en-US')} parameters (tower width × model width)` : ''}) is not counted in params or visionParams, which understate the model by its size`,
+  );
   const channels = r.has(['num_channels']) ? n('num_channels') : DEFAULT_VISION_CHANNELS;
   if (!r.has(['num_channels'])) {
     r.report(

@@ -101,7 +101,7 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
   if (dialect === 'checkpoint') {
     reportUnreadKeys(reader);
     defaultsTaken(reader);
-    const vision = readVisionTower(doc, parent.value, parent.prefix);
+    const vision = readVisionTower(doc, parent.value, parent.prefix, draft.hidden);
     findings.push(...vision.findings);
     if (vision.tower !== null) draft.vision = vision.tower;
   }
