@@ -147,9 +147,15 @@ export interface LatentAttention {
   valueDim: number;
 }
 
-/** Attention of one decoder layer: every earlier token, a sliding window, or a fixed chunk. */
-export type LayerAttention = 'full' | 'sliding' | 'chunked';
-export const LAYER_ATTENTIONS: readonly LayerAttention[] = ['full', 'sliding', 'chunked'];
+/**
+ * Attention of one decoder layer: every earlier token, a sliding window, a fixed chunk, or
+ * cross-attention to the image tokens only (Mllama-style `cross_attention_layers`: the layer
+ * attends to no earlier text token and caches none per text token).
+ */
+export type LayerAttention = 'full' | 'sliding' | 'chunked' | 'cross';
+export const LAYER_ATTENTIONS: readonly LayerAttention[] = ['full', 'sliding', 'chunked', 'cross'];
+/** The kinds the own model format states (its `layer-pattern`); `cross` is read from checkpoint configs only. */
+export const OWN_LAYER_ATTENTIONS: readonly LayerAttention[] = ['full', 'sliding', 'chunked'];
 
 export interface Serving {
   /** Served span in tokens (default: `null`, the declared span is evaluated). */

@@ -417,3 +417,408 @@ describe('parameterBreakdown(spec)', () => {
     expect(parameterBreakdown(read('mixtral-moe.json').spec)!.output).toBe(32000 * 4096);
   });
 });
+
+describe('multimodal wrappers and long-context families, as their configs are published', () => {
+  // Configs written in the published key style (values from the published config.json files, from
+  // memory; invented where a key changes no figure). Each check names its source.
+  const inspect = (config: Record<string, unknown>) => {
+    const r = readModel(configText(config), 'config.json');
+    return { ...r, metrics: computeMetrics(r.spec) };
+  };
+
+  const paligemma = {
+    architectures: ['PaliGemmaForConditionalGeneration'],
+    hidden_size: 2048,
+    image_token_index: 257152,
+    model_type: 'paligemma',
+    projection_dim: 2048,
+    text_config: {
+      hidden_size: 2048,
+      intermediate_size: 16384,
+      model_type: 'gemma',
+      num_attention_heads: 8,
+      num_hidden_layers: 18,
+      num_image_tokens: 256,
+      num_key_value_heads: 1,
+      torch_dtype: 'float32',
+      vocab_size: 257216,
+    },
+    vision_config: {
+      hidden_size: 1152,
+      intermediate_size: 4304,
+      model_type: 'siglip_vision_model',
+      num_attention_heads: 16,
+      num_hidden_layers: 27,
+      patch_size: 14,
+      projection_dim: 2048,
+    },
+    vocab_size: 257216,
+  };
+
+  it("PaliGemma: a wrapper that repeats hidden_size at the top level is read from text_config; Gemma 2B's 1,981,884,416 non-embedding parameters (Gemma report 2024, Table 2, from memory) with GemmaConfig's head_dim 256 and 8,192 positions", () => {
+    const { spec, metrics, findings, locations } = inspect(paligemma);
+    expect(findings.filter((f) => f.severity === 'block')).toEqual([]);
+    expect(locations.layers?.key).toBe('text_config.num_hidden_layers');
+    expect([spec.layers, spec.heads, spec.kvHeads, spec.headDim, spec.declaredSpan]).toEqual([
+      18, 8, 1, 256, 8192,
+    ]);
+    expect(metrics.nonEmbeddingParams).toBe(1_981_884_416);
+    // One key/value head of 256 in 18 layers, fp32 as the file states (multi-query: Gemma report, §2).
+    expect(metrics.cachePerTokenBytes).toBe(18 * 2 * 1 * 256 * 4);
+    const taken = findings.find((f) => f.rule === 'family-default-taken');
+    expect(taken?.message).toContain('GemmaConfig');
+  });
+
+  it("PaliGemma 2: the gemma2 text block takes Gemma2Config's head_dim 256, not 2304/8 = 288; Gemma 2 2B's 2,024,517,888 non-embedding parameters (Gemma 2 report 2024, Table 2, from memory)", () => {
+    const { spec, metrics } = inspect({
+      ...paligemma,
+      num_hidden_layers: 26,
+      text_config: {
+        hidden_activation: 'gelu_pytorch_tanh',
+        hidden_size: 2304,
+        intermediate_size: 9216,
+        model_type: 'gemma2',
+        num_attention_heads: 8,
+        num_hidden_layers: 26,
+        num_key_value_heads: 4,
+        query_pre_attn_scalar: 256,
+        sliding_window: 4096,
+        torch_dtype: 'bfloat16',
+        vocab_size: 257216,
+      },
+    });
+    expect(spec.headDim).toBe(256);
+    expect(metrics.nonEmbeddingParams).toBe(2_024_517_888);
+    // Local and global layers alternate (Gemma 2 report, §2): 13 of each at window 4,096, span 8,192.
+    expect(metrics.cacheBytesAtSpan).toBe(2 * 4 * 256 * 2 * (13 * 4096 + 13 * 8192));
+  });
+
+  const exaone4 = {
+    architectures: ['Exaone4ForCausalLM'],
+    head_dim: 128,
+    hidden_act: 'silu',
+    hidden_size: 5120,
+    intermediate_size: 27392,
+    max_position_embeddings: 131072,
+    model_type: 'exaone4',
+    num_attention_heads: 40,
+    num_hidden_layers: 64,
+    num_key_value_heads: 8,
+    rope_scaling: {
+      factor: 16.0,
+      high_freq_factor: 4.0,
+      low_freq_factor: 1.0,
+      original_max_position_embeddings: 8192,
+      rope_type: 'llama3',
+    },
+    rope_theta: 1000000,
+    sliding_window: 4096,
+    sliding_window_pattern: 'LLLG',
+    tie_word_embeddings: false,
+    torch_dtype: 'bfloat16',
+    vocab_size: 102400,
+  };
+
+  it('EXAONE 4.0 32B: sliding_window_pattern "LLLG" gives 48 local and 16 global layers (3:1, EXAONE 4.0 report 2025, from memory), the global ones without a rotary code; 30.95B without embeddings (model card, from memory)', () => {
+    const { spec, metrics, findings } = inspect(exaone4);
+    expect(findings.filter((f) => f.severity === 'block')).toEqual([]);
+    expect(spec.layerTypes!.slice(0, 8)).toEqual([
+      'sliding',
+      'sliding',
+      'sliding',
+      'full',
+      'sliding',
+      'sliding',
+      'sliding',
+      'full',
+    ]);
+    // Exaone4Attention: "We use global NoPE for hybrid attention model" (transformers, modular_exaone4.py).
+    expect(metrics.layerKinds!.map((k) => [k.attention, k.positionCode, k.layers])).toEqual([
+      ['sliding', 'rotary', 48],
+      ['full', 'none', 16],
+    ]);
+    expect(rel(metrics.nonEmbeddingParams, 30.95e9)).toBeLessThan(0.001);
+    expect(metrics.cacheBytesAtSpan).toBe(2 * 8 * 128 * 2 * (48 * 4096 + 16 * 131072));
+  });
+
+  it('a letter pattern puts a global layer last whatever the letters (Exaone4Config documentation) and rejects other letters', () => {
+    const { spec } = inspect({ ...exaone4, num_hidden_layers: 6, sliding_window_pattern: 'LLLL' });
+    expect(spec.layerTypes).toEqual([
+      'sliding',
+      'sliding',
+      'sliding',
+      'sliding',
+      'sliding',
+      'full',
+    ]);
+    const bad = inspect({ ...exaone4, sliding_window_pattern: 'LLXG' });
+    expect(bad.findings.map((f) => [f.rule, f.key])).toContainEqual([
+      'value-invalid',
+      'sliding_window_pattern',
+    ]);
+  });
+
+  const mllama = {
+    architectures: ['MllamaForConditionalGeneration'],
+    image_token_index: 128256,
+    model_type: 'mllama',
+    text_config: {
+      cross_attention_layers: [3, 8, 13, 18, 23, 28, 33, 38],
+      hidden_act: 'silu',
+      hidden_size: 4096,
+      intermediate_size: 14336,
+      max_position_embeddings: 131072,
+      model_type: 'mllama_text_model',
+      num_attention_heads: 32,
+      num_hidden_layers: 40,
+      num_key_value_heads: 8,
+      rope_scaling: {
+        factor: 8.0,
+        high_freq_factor: 4.0,
+        low_freq_factor: 1.0,
+        original_max_position_embeddings: 8192,
+        rope_type: 'llama3',
+      },
+      rope_theta: 500000.0,
+      tie_word_embeddings: false,
+      torch_dtype: 'bfloat16',
+      vocab_size: 128256,
+    },
+    vision_config: {
+      hidden_act: 'gelu',
+      hidden_size: 1280,
+      image_size: 560,
+      intermediate_size: 5120,
+      max_num_tiles: 4,
+      model_type: 'mllama_vision_model',
+      num_channels: 3,
+      num_global_layers: 8,
+      num_hidden_layers: 32,
+      patch_size: 14,
+      vision_output_dim: 7680,
+    },
+  };
+
+  it('Llama 3.2 11B Vision: the 8 cross-attention layers hold no cache per text token and have no position code; the 32 self-attention layers cache 131,072 bytes per token (Llama 3.1 8B shape, common practice)', () => {
+    const { spec, metrics, findings } = inspect(mllama);
+    expect(spec.positionFreeLayers).toEqual([3, 8, 13, 18, 23, 28, 33, 38]);
+    expect(
+      metrics.layerKinds!.map((k) => [k.attention, k.positionCode, k.layers, k.window]),
+    ).toEqual([
+      ['full', 'rotary', 32, null],
+      ['cross', 'none', 8, 0],
+    ]);
+    expect(metrics.cachePerTokenBytes).toBe(32 * 2 * 8 * 128 * 2);
+    expect(metrics.cacheBytesAtSpan).toBe(32 * 2 * 8 * 128 * 2 * 131072);
+    // Kaplan et al. 2020, Table 1: the context term counts only the layers that attend to text.
+    expect(metrics.flopsPerToken).toBe(
+      2 * metrics.nonEmbeddingParams! + 2 * 32 * 131072 * 32 * 128,
+    );
+    // Tensor-parallel over 8 ranks: one key/value head per rank, still only the 32 self-attention
+    // layers (docs/metrics.md, "Serving across devices").
+    const split = computeMetrics({ ...spec, serving: { ...spec.serving, tensorParallel: 8 } });
+    expect(split.cachePerTokenBytesPerDevice).toBe(32 * 2 * 1 * 128 * 2);
+    const note = findings.find((f) => f.key === 'text_config.cross_attention_layers');
+    expect(note).toMatchObject({ rule: 'vision-not-counted', severity: 'info' });
+    expect(note!.message).toContain('understated');
+  });
+
+  it('Llama 3.2 11B Vision counts 10.6B with its tower (Meta model card 2024: 10.6B), the 8 global vision layers included; each cross layer adds query and key norms (128 each) and two gates (MllamaCrossAttentionDecoderLayer)', () => {
+    const { spec, metrics } = inspect(mllama);
+    expect(spec.vision?.layers).toBe(40);
+    expect(rel(metrics.params! + metrics.visionParams!, 10.6e9)).toBeLessThan(0.01);
+    const plain = inspect({
+      ...mllama,
+      text_config: { ...mllama.text_config, cross_attention_layers: [] },
+    }).metrics;
+    expect(metrics.params! - plain.params!).toBe(8 * (2 * 128 + 2));
+  });
+
+  it('Qwen2.5-7B-Instruct-1M: dual_chunk_attention_config is a key-ignored warning naming the chunk and the trained span, not an unread key (Qwen2.5-1M report 2025: trained to 256K, dual chunk attention to 1M, from memory); 7.6B parameters (Qwen2.5 report, from memory)', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['Qwen2ForCausalLM'],
+      hidden_act: 'silu',
+      hidden_size: 3584,
+      intermediate_size: 18944,
+      max_position_embeddings: 1010000,
+      max_window_layers: 28,
+      model_type: 'qwen2',
+      num_attention_heads: 28,
+      num_hidden_layers: 28,
+      num_key_value_heads: 4,
+      rope_theta: 10000000.0,
+      sliding_window: 32768,
+      tie_word_embeddings: false,
+      use_sliding_window: false,
+      vocab_size: 152064,
+      dual_chunk_attention_config: {
+        chunk_size: 262144,
+        local_size: 8192,
+        original_max_position_embeddings: 262144,
+      },
+    });
+    const dca = findings.filter((f) => f.key?.startsWith('dual_chunk_attention_config'));
+    expect(dca.map((f) => [f.rule, f.severity])).toEqual([['key-ignored', 'warn']]);
+    expect(dca[0]!.message).toContain('chunk_size (262,144)');
+    expect(dca[0]!.message).toContain('trainedSpan and reach');
+    expect(rel(metrics.params, 7.6e9)).toBeLessThan(0.02);
+  });
+
+  const smollm3 = {
+    architectures: ['SmolLM3ForCausalLM'],
+    hidden_act: 'silu',
+    hidden_size: 2048,
+    intermediate_size: 11008,
+    max_position_embeddings: 65536,
+    model_type: 'smollm3',
+    no_rope_layer_interval: 4,
+    no_rope_layers: Array.from({ length: 36 }, (_, i) => ((i + 1) % 4 === 0 ? 0 : 1)),
+    num_attention_heads: 16,
+    num_hidden_layers: 36,
+    num_key_value_heads: 4,
+    rope_theta: 5000000.0,
+    use_sliding_window: false,
+    vocab_size: 128256,
+  };
+
+  it('SmolLM3-3B: every 4th layer without a position code (SmolLM3 blog 2025: NoPE in every fourth layer, from memory), from the list or, without it, from the family interval; 3.08B parameters (model card, from memory)', () => {
+    const stated = inspect(smollm3);
+    expect(stated.findings.filter((f) => f.rule === 'key-unread')).toEqual([]);
+    const { no_rope_layers: _list, ...withoutList } = smollm3;
+    void _list;
+    const fromFamily = inspect({ ...withoutList, no_rope_layer_interval: undefined });
+    for (const r of [stated, fromFamily]) {
+      expect(r.spec.positionFreeLayers).toEqual([3, 7, 11, 15, 19, 23, 27, 31, 35]);
+      expect(r.metrics.layerKinds!.map((k) => [k.positionCode, k.layers])).toEqual([
+        ['rotary', 27],
+        ['none', 9],
+      ]);
+    }
+    expect(rel(stated.metrics.params, 3.08e9)).toBeLessThan(0.01);
+  });
+
+  it('Phi-3.5-MoE: long_mscale 1.243163121016122 (its published config.json, from memory) is the attention factor past the original span, not the default sqrt(1 + ln 32 / ln 4096) = 1.190; 41.9B total and 6.6B active (model card, from memory)', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['PhiMoEForCausalLM'],
+      attention_bias: true,
+      hidden_act: 'silu',
+      hidden_size: 4096,
+      intermediate_size: 6400,
+      max_position_embeddings: 131072,
+      model_type: 'phimoe',
+      num_attention_heads: 32,
+      num_experts_per_tok: 2,
+      num_hidden_layers: 32,
+      num_key_value_heads: 8,
+      num_local_experts: 16,
+      original_max_position_embeddings: 4096,
+      rope_scaling: {
+        long_factor: Array(64).fill(1.5),
+        long_mscale: 1.243163121016122,
+        original_max_position_embeddings: 4096,
+        short_factor: Array(64).fill(1.0),
+        short_mscale: 1.243163121016122,
+        type: 'longrope',
+      },
+      rope_theta: 10000.0,
+      sliding_window: 131072,
+      tie_word_embeddings: false,
+      vocab_size: 32064,
+    });
+    expect(metrics.attentionScale).toBe(1.243163121016122);
+    expect(findings.filter((f) => f.key?.includes('mscale'))).toEqual([]);
+    expect(rel(metrics.params, 41.9e9)).toBeLessThan(0.01);
+    expect(rel(metrics.activeParams, 6.6e9)).toBeLessThan(0.02);
+  });
+
+  it('LLaVA-1.5-7B: the sparse llama text_config reads with LlamaConfig defaults, the CLIP ViT-L/14-336 tower counts 303.5M, and the projector left out is a finding with its smallest size (LLaVA-1.5: 7.06B, Liu et al. 2023 model release, from memory)', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['LlavaForConditionalGeneration'],
+      image_token_index: 32000,
+      model_type: 'llava',
+      projector_hidden_act: 'gelu',
+      text_config: {
+        architectures: ['LlamaForCausalLM'],
+        max_position_embeddings: 4096,
+        model_type: 'llama',
+        rms_norm_eps: 1e-5,
+        torch_dtype: 'float16',
+        vocab_size: 32064,
+      },
+      tie_word_embeddings: false,
+      vision_config: {
+        hidden_size: 1024,
+        image_size: 336,
+        intermediate_size: 4096,
+        model_type: 'clip_vision_model',
+        num_attention_heads: 16,
+        num_hidden_layers: 24,
+        patch_size: 14,
+        projection_dim: 768,
+      },
+      vision_feature_layer: -2,
+      vocab_size: 32064,
+    });
+    // Llama 2 7B's shape (Touvron et al. 2023, Table 1) with 64 more vocabulary rows in two tables.
+    expect(metrics.params).toBe(6_738_939_904);
+    expect(rel(metrics.visionParams, 303.5e6)).toBeLessThan(0.001);
+    const projector = findings.find(
+      (f) => f.key === 'vision_config' && f.message.includes('projector'),
+    );
+    expect(projector).toMatchObject({ rule: 'vision-not-counted', severity: 'info' });
+    expect(projector!.message).toContain('at least 4,194,304 parameters');
+    // Its two matrices, 1024·4096 + 4096·4096 plus biases, close the gap to the published figure.
+    const mlp = 1024 * 4096 + 4096 + 4096 * 4096 + 4096;
+    expect(rel(metrics.params! + metrics.visionParams! + mlp, 7.06e9)).toBeLessThan(0.001);
+  });
+
+  it('Mistral Small 3.1 (24B, Mistral AI model card 2025, from memory): the Pixtral tower is read with findings for its gated feed-forward and its rotary code, both sized', () => {
+    const { metrics, findings } = inspect({
+      architectures: ['Mistral3ForConditionalGeneration'],
+      model_type: 'mistral3',
+      projector_hidden_act: 'gelu',
+      spatial_merge_size: 2,
+      text_config: {
+        head_dim: 128,
+        hidden_act: 'silu',
+        hidden_size: 5120,
+        intermediate_size: 32768,
+        max_position_embeddings: 131072,
+        model_type: 'mistral',
+        num_attention_heads: 32,
+        num_hidden_layers: 40,
+        num_key_value_heads: 8,
+        rope_theta: 1000000000.0,
+        sliding_window: null,
+        vocab_size: 131072,
+      },
+      vision_config: {
+        head_dim: 64,
+        hidden_act: 'silu',
+        hidden_size: 1024,
+        image_size: 1540,
+        intermediate_size: 4096,
+        model_type: 'pixtral',
+        num_attention_heads: 16,
+        num_channels: 3,
+        num_hidden_layers: 24,
+        patch_size: 14,
+        rope_theta: 10000.0,
+      },
+    });
+    const tower = findings.filter((f) => f.key?.startsWith('vision_config.'));
+    expect(tower.map((f) => [f.rule, f.key])).toEqual([
+      ['vision-not-counted', 'vision_config.hidden_act'],
+      ['vision-not-counted', 'vision_config.rope_theta'],
+    ]);
+    expect(tower[0]!.message).toContain(
+      `understated by ${(24 * 1024 * 4096).toLocaleString('en-US')}`,
+    );
+    expect(tower[1]!.message).toContain(
+      `overstated by ${((110 * 110 + 1) * 1024).toLocaleString('en-US')}`,
+    );
+    expect(rel(metrics.params! + metrics.visionParams!, 24e9)).toBeLessThan(0.02);
+    // 40 layers, 8 key/value heads of 128, bf16 by default: 163,840 bytes per token (common practice).
+    expect(metrics.cachePerTokenBytes).toBe(40 * 2 * 8 * 128 * 2);
+  });
+});

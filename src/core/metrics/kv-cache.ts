@@ -5,7 +5,7 @@
  * attention: Liu et al. 2024, DeepSeek-V2, Table 1, `(d_c + d_h^R)` elements per token and layer).
  */
 import type { ModelSpec } from '../model.js';
-import { layerGroups, visibleSpan } from './layer-kinds.js';
+import { crossLayers, layerGroups, visibleSpan } from './layer-kinds.js';
 import { positiveCount } from './sizes.js';
 import { bytesPerElement, cacheDType } from './storage-bytes.js';
 
@@ -40,13 +40,15 @@ function layerTokenBytes(spec: ModelSpec): number | null {
 /**
  * bytes: `cachePerTokenBytes = Σ_decoder layers 2·kvHeads·headDim·bytes(cache dtype)` (common
  * practice; latent attention `(d_c + d_h^R)·bytes`). An encoder-only model keeps no decoding
- * cache: 0.
+ * cache: 0. Layers that cross-attend to image tokens hold none per text token.
  */
 export function cachePerTokenBytes(spec: ModelSpec): number | null {
   const layers = positiveCount(spec.layers);
   if (layers !== null && spec.encoderOnly === true) return 0;
   const perLayer = layerTokenBytes(spec);
-  return layers === null || perLayer === null ? null : finite(layers * perLayer);
+  return layers === null || perLayer === null
+    ? null
+    : finite((layers - crossLayers(spec)) * perLayer);
 }
 
 /** count: sequences held in the cache; null when stated but not a positive whole number (default: `1`). */

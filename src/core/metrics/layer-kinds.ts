@@ -13,7 +13,10 @@ export interface LayerGroup {
   positional: boolean;
   /** count: decoder layers of this kind. */
   layers: number;
-  /** tokens: the most earlier tokens one query sees (window or chunk); null for full attention. */
+  /**
+   * tokens: the most earlier tokens one query sees (window or chunk); null for full attention; 0
+   * for cross-attention layers, which see no earlier text token.
+   */
   window: number | null;
 }
 
@@ -83,11 +86,18 @@ export function layerGroups(spec: ModelSpec): LayerGroup[] | null {
           ? (spec.slidingWindow as number)
           : attention === 'chunked'
             ? (spec.chunkSize as number)
-            : null;
+            : attention === 'cross'
+              ? 0
+              : null;
       groups.push({ attention, positional, layers: 1, window });
     }
   });
   return groups;
+}
+
+/** count: decoder layers that cross-attend to image tokens (`cross` in the layer list), 0 without a list. */
+export function crossLayers(spec: ModelSpec): number {
+  return spec.layerTypes ? spec.layerTypes.filter((t) => t === 'cross').length : 0;
 }
 
 /** tokens: what one layer of the group holds and attends to at span `T`: `min(T, window)`, or T. */

@@ -5,6 +5,7 @@
  * attention", the latter after Liu et al. 2024, DeepSeek-V2, §2.1).
  */
 import type { ModelSpec } from '../model.js';
+import { crossLayers } from './layer-kinds.js';
 import { positiveCount, nonNegativeCount } from './sizes.js';
 
 export interface ParameterCounts {
@@ -135,7 +136,8 @@ export const DEFAULT_LAYER_NORMS = 2;
  * `hidden·E` and, where stated, a `hidden → 1` gate on the shared experts; `k` routed experts for
  * the active count — and its norms (`layerNorms` of width hidden, per-head query/key norms where
  * stated); decoder layers of an encoder-decoder add cross-attention (the same shapes) and a third
- * norm; encoder layers (dense) have attention, feed-forward and two norms; one final norm per
+ * norm; layers that cross-attend to image tokens (`cross`) add per-head query and key norms and
+ * two scalar gates; encoder layers (dense) have attention, feed-forward and two norms; one final norm per
  * stack. Embeddings: `vocab·hidden`, a separate output matrix when untied, and a learned position
  * table `declaredSpan·hidden`. Null when any size it needs is not a positive whole number or a
  * count is not finite.
@@ -248,6 +250,14 @@ export function parameterBreakdown(spec: ModelSpec): ParameterBreakdown | null {
     times(moeLayers, mixtureActive),
     finalNorm,
   );
+  // Cross-attention layers (Mllama's MllamaCrossAttentionDecoderLayer) have the shapes of a
+  // self-attention layer plus per-head query and key norms and two scalar gates (attention, MLP).
+  const cross = crossLayers(spec);
+  if (cross > 0) {
+    const gates = { matrices: 0, vectors: cross * ((spec.qkNorms === true ? 0 : 2 * headDim) + 2) };
+    stackTotal = add(stackTotal, gates);
+    stackActive = add(stackActive, gates);
+  }
 
   if (encoderDecoder) {
     const enc = spec.encoder!;

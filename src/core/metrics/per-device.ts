@@ -48,7 +48,8 @@ export function weightBytesPerDevice(spec: ModelSpec, weights: number | null): n
 
 /** bytes per token a group's layers each hold at span `span` (per token when `span` is null). */
 function tokensHeld(group: CacheLayerGroup, span: number | null): number {
-  return span === null ? 1 : group.window === null ? span : Math.min(span, group.window);
+  if (span === null) return group.window === 0 ? 0 : 1;
+  return group.window === null ? span : Math.min(span, group.window);
 }
 
 /**

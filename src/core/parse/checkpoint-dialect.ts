@@ -54,6 +54,7 @@ import { familyOf } from './checkpoint-families.js';
 import {
   checkSections,
   readPairwise,
+  reportDualChunk,
   rotaryPairs,
   type RotaryContext,
 } from './checkpoint-scaling.js';
@@ -253,6 +254,7 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     latent ? latent.ropeDim : (headDim ?? defaultHeadDim(hidden, heads)),
     declaredSpan,
   );
+  reportDualChunk(r, declaredSpan);
   // Consulted even when the window is off: then they have no effect.
   r.get(['max_window_layers']);
   r.get(['use_sliding_window']);

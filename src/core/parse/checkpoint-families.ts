@@ -135,13 +135,48 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
   qwen2_moe: { position: 'rotary', gated: true, windowOff: true },
   qwen3: { position: 'rotary', gated: true, qkNorms: true, windowOff: true },
   qwen3_moe: { position: 'rotary', gated: true, qkNorms: true, windowOff: true },
-  gemma: { position: 'rotary', gated: true, scaledEmbedding: true },
+  gemma: {
+    position: 'rotary',
+    gated: true,
+    scaledEmbedding: true,
+    published: {
+      source: 'from the published config class GemmaConfig',
+      values: {
+        vocab_size: 256000,
+        hidden_size: 3072,
+        intermediate_size: 24576,
+        num_hidden_layers: 28,
+        num_attention_heads: 16,
+        num_key_value_heads: 16,
+        head_dim: 256,
+        max_position_embeddings: 8192,
+        rope_theta: 10000,
+        tie_word_embeddings: true,
+      },
+    },
+  },
   gemma2: {
     position: 'rotary',
     gated: true,
     scaledEmbedding: true,
     fourNorms: true,
     globalEvery: 2,
+    published: {
+      source: 'from the published config class Gemma2Config',
+      values: {
+        vocab_size: 256000,
+        hidden_size: 2304,
+        intermediate_size: 9216,
+        num_hidden_layers: 26,
+        num_attention_heads: 8,
+        num_key_value_heads: 4,
+        head_dim: 256,
+        max_position_embeddings: 8192,
+        rope_theta: 10000,
+        sliding_window: 4096,
+        tie_word_embeddings: true,
+      },
+    },
   },
   gemma3_text: {
     position: 'rotary',
@@ -196,6 +231,9 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
       },
     },
   },
+  // SmolLM3Config: every 4th layer without a position code unless no_rope_layers says otherwise;
+  // the window applies only with use_sliding_window.
+  smollm3: { position: 'rotary', gated: true, noRopeEvery: 4, windowOff: true },
   llama4: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   llama4_text: { position: 'rotary', gated: true, oneSharedExpert: true, noRopeEvery: 4 },
   qwen3_next: { position: 'rotary' },
@@ -236,6 +274,15 @@ export const CHECKPOINT_FAMILIES: Readonly<Record<string, CheckpointFamily>> = {
   // checkpoint-dialect.ts); its experts are gated (DbrxExpertGLU: w1, v1, w2).
   dbrx: { position: 'rotary', gated: true },
   cohere2: { position: 'rotary', gated: true, globalEvery: 4, ropeOnSlidingOnly: true },
+  // Exaone4Attention applies the rotary code only when the model has no window or the layer slides
+  // ("global NoPE"), with per-head query/key norms; the class's pattern default is 4.
+  exaone4: {
+    position: 'rotary',
+    gated: true,
+    qkNorms: true,
+    globalEvery: 4,
+    ropeOnSlidingOnly: true,
+  },
   gpt2: { position: 'learned', bias: true },
   gpt_bigcode: { position: 'learned', bias: true },
   gpt_neo: { position: 'learned', bias: true },

@@ -5,7 +5,8 @@
  *   `chunked_attention`.
  * - `sliding_window` (unless `use_sliding_window` is false; Qwen families turn it off unless it
  *   is true), with, first match: `sliding_window_pattern` N (every Nth layer is global: layer i
- *   slides when `(i + 1) % N != 0`, as the Gemma-3-style config classes expand it); the family
+ *   slides when `(i + 1) % N != 0`, as the Gemma-3-style config classes expand it) or letters
+ *   such as "LLLG" (L local, G global, repeated, the last layer global: EXAONE 4); the family
  *   patterns (`globalEvery` in `checkpoint-families.ts`; gemma2: local and global alternate,
  *   starting with a local layer; gemma3 / gemma3_text: N = 6; cohere2: N = 4 — each class's
  *   default); `max_window_layers`
@@ -17,6 +18,8 @@
  *   llama4 / llama4_text): as the Llama-4-style config class expands it, layers with the rotary
  *   code use chunked attention and the others full attention.
  * - `no_rope_layers` alone: the layers without a position code.
+ * - `cross_attention_layers` (Mllama): those layers cross-attend to the image tokens only, with no
+ *   position code and no cache per text token.
  * - `rope_local_base_freq`, or `rope_parameters.sliding_attention.rope_theta`: the rotary base
  *   of the local layers, which run without the model's context scaling (as the Gemma-3-style
  *   code builds its local rotary embedding).
@@ -54,6 +57,7 @@ export function readLayerPlan(
   layers: number,
 ): LayerPlanDraft {
   const plan = readLayerKinds(r, modelType, layers);
+  readCrossLayers(r, plan, isCount(layers) && layers <= 1 << 16 ? layers : null);
   // A family whose global layers carry no position code (`ropeOnSlidingOnly`), unless the file
   // says which layers have none.
   if (
@@ -68,6 +72,57 @@ export function readLayerPlan(
     }
   }
   return plan;
+}
+
+/**
+ * `cross_attention_layers` (Mllama, Llama 3.2 Vision): the listed layers attend to the image
+ * tokens only, through their own key and value projections, and apply no position code (the
+ * published MllamaTextCrossAttention rotates nothing): they hold no cache per text token. The
+ * image tokens' keys and values they keep (fixed per image) are not counted, which a
+ * `vision-not-counted` finding says.
+ */
+function readCrossLayers(r: FieldReader, plan: LayerPlanDraft, n: number | null): void {
+  const path = ['cross_attention_layers'];
+  if (!r.has(path)) return;
+  const list = r.get(path);
+  if (
+    !Array.isArray(list) ||
+    list.some(
+      (x) => typeof x !== 'number' || !Number.isInteger(x) || x < 0 || (n !== null && x >= n),
+    )
+  ) {
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} ${Array.isArray(list) ? 'lists an entry that is not a layer index' : r.is(path)}; expected a list of layer indices from 0${n !== null ? ` to ${n - 1}` : ''}`,
+    );
+    return;
+  }
+  if (n === null || list.length === 0) return;
+  if (plan.layerTypes === null && plan.slidingWindow !== null) {
+    r.report(
+      'key-ignored',
+      path,
+      `${r.key(path)} is not read: the sliding window is not stated per layer, so which layers cross-attend cannot be combined with it; every layer is read as self-attention and the cache is overstated — state layer_types`,
+    );
+    return;
+  }
+  const kinds: LayerAttention[] = plan.layerTypes ?? Array.from({ length: n }, () => 'full');
+  const cross = [...new Set(list as number[])].sort((a, b) => a - b);
+  for (const i of cross) kinds[i] = 'cross';
+  plan.layerTypes = kinds;
+  plan.windowLayers = kinds.filter((t) => t === 'sliding').length || null;
+  if (plan.windowLayers === null) plan.slidingWindow = null;
+  plan.positionFreeLayers = [...new Set([...(plan.positionFreeLayers ?? []), ...cross])].sort(
+    (a, b) => a - b,
+  );
+  r.locate('layerTypes', path);
+  r.locate('positionFreeLayers', path);
+  r.report(
+    'vision-not-counted',
+    path,
+    `${r.key(path)}: ${cross.length} of ${n} layers attend to the image tokens only; they hold no keys or values per text token, so cachePerTokenBytes and cacheBytesAtSpan leave them out, and the image tokens' own keys and values in those layers (fixed per image) are not counted: the cache is understated by that amount when images are present`,
+  );
 }
 
 function readLayerKinds(r: FieldReader, modelType: string | null, layers: number): LayerPlanDraft {
@@ -162,6 +217,13 @@ function readLayerKinds(r: FieldReader, modelType: string | null, layers: number
   const family = familyOf(modelType)?.globalEvery;
   if (r.has(patternPath) || family !== undefined) {
     let every: number | undefined = family;
+    const letters = r.get(patternPath);
+    if (typeof letters === 'string') {
+      const kinds = readLetterPattern(r, letters, n);
+      if (kinds === undefined) return dropWindow(plan);
+      if (kinds === null) return plan;
+      return patternPlan(r, plan, kinds, `the pattern ${r.quote(patternPath)}`);
+    }
     if (r.has(patternPath)) {
       const stated = r.count('layerTypes', patternPath, 'every Nth layer is global');
       if (stated === undefined || Number.isNaN(stated)) return dropWindow(plan);
@@ -176,21 +238,10 @@ function readLayerKinds(r: FieldReader, modelType: string | null, layers: number
       every = stated;
     } else r.locate('layerTypes', ['model_type']);
     if (n === null) return plan;
-    plan.layerTypes = Array.from({ length: n }, (_, i): LayerAttention =>
+    const kinds = Array.from({ length: n }, (_, i): LayerAttention =>
       (i + 1) % (every as number) !== 0 ? 'sliding' : 'full',
     );
-    plan.windowLayers = plan.layerTypes.filter((t) => t === 'sliding').length || null;
-    if (plan.windowLayers === null) {
-      r.report(
-        'key-ignored',
-        ['sliding_window'],
-        `${r.key(['sliding_window'])} has no effect: with every ${every === 1 ? '' : `${every}th `}layer global, no layer slides`,
-      );
-      plan.slidingWindow = null;
-      plan.layerTypes = null;
-    }
-    readLocalBase(r, plan);
-    return plan;
+    return patternPlan(r, plan, kinds, `every ${every === 1 ? '' : `${every}th `}layer global`);
   }
   if (r.has(['max_window_layers'])) {
     const first = r.count('windowLayers', ['max_window_layers'], 'layer index');
@@ -212,6 +263,55 @@ function readLayerKinds(r: FieldReader, modelType: string | null, layers: number
   }
   readLocalBase(r, plan);
   return plan;
+}
+
+/** The plan with `kinds` from a repeating pattern; the window is dropped (reported) when no layer slides. */
+function patternPlan(
+  r: FieldReader,
+  plan: LayerPlanDraft,
+  kinds: LayerAttention[],
+  pattern: string,
+): LayerPlanDraft {
+  plan.layerTypes = kinds;
+  plan.windowLayers = kinds.filter((t) => t === 'sliding').length || null;
+  if (plan.windowLayers === null) {
+    r.report(
+      'key-ignored',
+      ['sliding_window'],
+      `${r.key(['sliding_window'])} has no effect: with ${pattern}, no layer slides`,
+    );
+    plan.slidingWindow = null;
+    plan.layerTypes = null;
+  }
+  readLocalBase(r, plan);
+  return plan;
+}
+
+/**
+ * `sliding_window_pattern` written as letters (EXAONE-4-style configs): "L" a local (sliding)
+ * layer, "G" a global one, repeated from layer 0, and the last layer always global (the
+ * Exaone4Config documentation: "The final layer always uses global attention regardless of the
+ * pattern"). Undefined (reported) when a letter is neither; null when the layer count is unusable.
+ */
+function readLetterPattern(
+  r: FieldReader,
+  letters: string,
+  n: number | null,
+): LayerAttention[] | null | undefined {
+  const path = ['sliding_window_pattern'];
+  r.locate('layerTypes', path);
+  if (!/^[LG]+$/.test(letters)) {
+    r.report(
+      'value-invalid',
+      path,
+      `${r.key(path)} is ${r.quote(path)}; expected a whole number (every Nth layer is global) or a pattern of the letters L (local) and G (global), such as "LLLG"`,
+    );
+    return undefined;
+  }
+  if (n === null) return null;
+  return Array.from({ length: n }, (_, i): LayerAttention =>
+    i === n - 1 || letters[i % letters.length] === 'G' ? 'full' : 'sliding',
+  );
 }
 
 /** Whether `path` holds a list with at least one entry. */
@@ -296,6 +396,9 @@ function readPositionFree(
   if (r.has(listPath) && !(Array.isArray(stated) && stated.length === 0)) {
     const list = r.get(listPath);
     r.locate('positionFreeLayers', listPath);
+    // The list wins over an interval (the SmolLM3- and Llama-4-style classes expand the interval
+    // only when no list is given).
+    r.get(['no_rope_layer_interval']);
     if (
       !Array.isArray(list) ||
       list.some((x) => x !== 0 && x !== 1) ||

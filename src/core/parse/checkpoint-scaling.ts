@@ -70,15 +70,20 @@ export function readPairwise(
 ): ScalingDraft {
   const short = factorList(r, [...at, 'short_factor'], ctx);
   const long = factorList(r, [...at, 'long_factor'], ctx);
-  const attention = r.real(
-    'position.scaling.attentionFactor',
+  // PhiMoE-style blocks state the factor past the original span as long_mscale (short_mscale
+  // within it, where the short factors apply); attentionScale is the long-range one.
+  const attentionPath = r.first([
     [...at, 'attention_factor'],
-    'attention factor',
-    {
-      test: (n) => n > 0,
-      expected: 'an attention factor above 0',
-    },
-  );
+    [...at, 'long_mscale'],
+  ]);
+  r.get([...at, 'short_mscale']);
+  const attention =
+    attentionPath === null
+      ? undefined
+      : r.real('position.scaling.attentionFactor', attentionPath, 'attention factor', {
+          test: (n) => n > 0,
+          expected: 'an attention factor above 0',
+        });
   let factor = r.real('position.scaling.factor', [...at, 'factor'], 'scaling factor');
   if (factor === undefined) {
     if (isCount(originalSpan ?? NaN) && isCount(ctx.declaredSpan))
@@ -97,6 +102,27 @@ export function readPairwise(
     longFactors: long ?? null,
     attentionFactor: attention ?? null,
   };
+}
+
+/**
+ * `dual_chunk_attention_config` (Qwen2.5-1M, dual chunk attention): relative positions are
+ * remapped so that no query-key offset exceeds `chunk_size`, within the span the model was trained
+ * at (`original_max_position_embeddings`). Not modelled: reported (`key-ignored`) with the numbers
+ * it changes. Its keys are consulted so none is reported again as unread.
+ */
+export function reportDualChunk(r: FieldReader, declaredSpan: number): void {
+  const path = ['dual_chunk_attention_config'];
+  const block = r.get(path);
+  if (block === undefined || block === null) return;
+  const chunk = r.get([...path, 'chunk_size']);
+  const original = r.get([...path, 'original_max_position_embeddings']);
+  r.get([...path, 'local_size']);
+  const show = (v: unknown) => (typeof v === 'number' ? v.toLocaleString('en-US') : 'not stated');
+  r.report(
+    'key-ignored',
+    path,
+    `${r.key(path)} (dual chunk attention) is not modelled: it keeps every query-key offset below chunk_size (${show(chunk)}) within the span the model was trained at (original_max_position_embeddings ${show(original)}), but trainedSpan and reach are read as the declared span (${show(Number.isFinite(declaredSpan) ? declaredSpan : undefined)}) and the positional scans run over offsets up to the span, which this attention never produces: those figures are not the model's — describe it in the context-reach format with trained-span ${show(original)} and read the scans as pessimistic`,
+  );
 }
 
 /**

@@ -7,7 +7,7 @@
  */
 import type { Finding, VisionTower } from '../model.js';
 import { familyOf } from './checkpoint-families.js';
-import { isCheckpointConfig } from './checkpoint-dialect.js';
+import { GATED_ACTIVATIONS, isCheckpointConfig } from './checkpoint-dialect.js';
 import { FieldReader } from './fields.js';
 import type { PathSegment } from './quote.js';
 import type { SourceDocument, SourceMapping, SourceValue } from './source.js';
@@ -49,14 +49,44 @@ export function nestedModelKey(root: SourceMapping): string | null {
 }
 
 /**
+ * A tower whose config says it is unlike the ViT-style count (Pixtral-style: a gated feed-forward,
+ * `hidden_act` silu, and a rotary code in place of the position table, `rope_theta`): reported
+ * with the direction and size of the difference, as `vision-not-counted` (info).
+ */
+function reportUnlikeViT(r: FieldReader, block: SourceMapping): void {
+  const num = (k: string) => (typeof block[k] === 'number' ? block[k] : NaN);
+  const act = block.hidden_act;
+  if (typeof act === 'string' && GATED_ACTIVATIONS.includes(act.toLowerCase())) {
+    const extra = num('num_hidden_layers') * num('hidden_size') * num('intermediate_size');
+    r.report(
+      'vision-not-counted',
+      ['hidden_act'],
+      `${r.key(['hidden_act'])} is ${r.quote(['hidden_act'])}, a gated feed-forward (three matrices), but visionParams counts the ViT-style plain one (two): the tower is understated${Number.isFinite(extra) ? ` by ${extra.toLocaleString('en-US')} parameters (layers × hidden × intermediate)` : ''}`,
+    );
+  }
+  if (block.rope_theta !== undefined && block.rope_theta !== null) {
+    const side = Math.floor(num('image_size') / num('patch_size'));
+    const table = (side * side + 1) * num('hidden_size');
+    r.report(
+      'vision-not-counted',
+      ['rope_theta'],
+      `${r.key(['rope_theta'])}: the tower uses a rotary code, not a learned position table, but visionParams counts the ViT-style table: the tower is overstated${Number.isFinite(table) ? ` by ${table.toLocaleString('en-US')} parameters ((image/patch)² + 1 positions × hidden)` : ''}`,
+    );
+  }
+}
+
+/**
  * The vision tower beside a language model: `vision_config` of `parent` (the mapping that holds
  * the model block, or the model block itself for flat files), read ViT style. Returns the tower
- * when every size is stated, and the findings (a `vision-not-counted` info otherwise).
+ * when every size is stated, and the findings (a `vision-not-counted` info otherwise, and one
+ * for the projector into the language model, which no count covers; `modelHidden` is the
+ * language model's width, for its smallest size).
  */
 export function readVisionTower(
   doc: SourceDocument,
   parent: SourceMapping,
   prefix: readonly PathSegment[],
+  modelHidden = NaN,
 ): { tower: VisionTower | null; findings: Finding[] } {
   const block = parent.vision_config;
   if (!isMapping(block)) return { tower: null, findings: [] };
@@ -78,6 +108,18 @@ export function readVisionTower(
     return { tower: null, findings: r.findings };
   }
   const n = (k: string): number => r.count(`vision.${k}`, [k], 'a size') ?? NaN;
+  // Mllama's tower adds num_global_layers encoder layers of the same shape after its
+  // num_hidden_layers (MllamaVisionModel's global transformer).
+  const global = r.has(['num_global_layers'])
+    ? (r.count('vision.layers', ['num_global_layers'], 'a number of layers') ?? NaN)
+    : 0;
+  reportUnlikeViT(r, block);
+  const least = (block.hidden_size as number) * modelHidden;
+  r.report(
+    'vision-not-counted',
+    [],
+    `${r.key([])}: the projector from the tower into the language model (one or more matrices${Number.isFinite(least) ? `, at least ${least.toLocaleString('en-US')} parameters (tower width × model width)` : ''}) is not counted in params or visionParams, which understate the model by its size`,
+  );
   const channels = r.has(['num_channels']) ? n('num_channels') : DEFAULT_VISION_CHANNELS;
   if (!r.has(['num_channels'])) {
     r.report(
@@ -89,7 +131,7 @@ export function readVisionTower(
   return {
     tower: {
       hidden: n('hidden_size'),
-      layers: n('num_hidden_layers'),
+      layers: n('num_hidden_layers') + global,
       ffn: n('intermediate_size'),
       patch: n('patch_size'),
       image: n('image_size'),

@@ -18,7 +18,7 @@ import { dtypeQuantization } from '../metrics/quantized-weights.js';
 import { isCount } from '../metrics/sizes.js';
 import {
   FLOAT_FORMATS,
-  LAYER_ATTENTIONS,
+  OWN_LAYER_ATTENTIONS,
   POSITION_KINDS,
   SCALING_KINDS,
   STORAGE_DTYPES,
@@ -326,7 +326,9 @@ function readShapes(
   if (
     Array.isArray(kinds) &&
     kinds.length > 0 &&
-    kinds.every((k) => typeof k === 'string' && (LAYER_ATTENTIONS as readonly string[]).includes(k))
+    kinds.every(
+      (k) => typeof k === 'string' && (OWN_LAYER_ATTENTIONS as readonly string[]).includes(k),
+    )
   ) {
     r.locate('layerTypes', [...lp, 'kinds']);
     if (

@@ -76,7 +76,7 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
   let dialect = detectDialect(root);
   // A multimodal file: the language model is nested (text_config, language_config, …), never the vision tower.
   let parent: { value: SourceMapping; prefix: PathSegment[] } = { value: root, prefix };
-  if (dialect === null) {
+  if (dialect === null || (dialect === 'checkpoint' && wrapsNestedModel(root))) {
     const nested = nestedModelKey(root);
     if (nested !== null) {
       parent = { value: root, prefix };
@@ -101,11 +101,27 @@ export function readModel(text: string, path: string, options: ReadModelOptions 
   if (dialect === 'checkpoint') {
     reportUnreadKeys(reader);
     defaultsTaken(reader);
-    const vision = readVisionTower(doc, parent.value, parent.prefix);
+    const vision = readVisionTower(doc, parent.value, parent.prefix, draft.hidden);
     findings.push(...vision.findings);
     if (vision.tower !== null) draft.vision = vision.tower;
   }
   return { dialect, spec: completeSpec(draft), locations: reader.locations, findings };
+}
+
+/**
+ * Whether a mapping with checkpoint keys of its own is a wrapper around a nested language model:
+ * it holds one (`nestedModelKey`) but does not state a layer count and a head count itself
+ * (PaliGemma-style files repeat the text model's `hidden_size`, and sometimes its layer count, at
+ * the top level; the model is the nested block). A top level that states both is read as the model.
+ */
+function wrapsNestedModel(root: SourceMapping): boolean {
+  if (nestedModelKey(root) === null) return false;
+  const states = (keys: string[]) =>
+    keys.some((k) => Object.prototype.hasOwnProperty.call(root, k) && root[k] !== null);
+  return !(
+    states(['num_hidden_layers', 'n_layer', 'num_layers', 'n_layers']) &&
+    states(['num_attention_heads', 'n_head', 'num_heads', 'n_heads'])
+  );
 }
 
 /** One `family-default-taken` finding listing every default a sparse config relied on. */

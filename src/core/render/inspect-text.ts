@@ -85,7 +85,7 @@ function layerKindRows(m: Metrics): string[] {
   const rows = kinds.map((k) => [
     formatInteger(k.layers),
     k.attention,
-    k.window === null ? 'all' : formatTokens(k.visibleSpan),
+    k.attention === 'cross' ? 'images' : k.window === null ? 'all' : formatTokens(k.visibleSpan),
     k.positionCode === 'rotary'
       ? `rotary ${formatNumber(k.rotaryBase)}${k.scaled ? ', scaled' : ''}`
       : k.positionCode,
