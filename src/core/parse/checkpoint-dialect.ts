@@ -281,6 +281,9 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     );
   }
   readNextTokenLayers(r);
+  // Read in the order the report's locations have always listed them: gated, tied, bias.
+  const gated = readGated(r, modelType) ?? mpt.gated;
+  const tied = r.flag('tied', ['tie_word_embeddings']);
   const bias = qkvBiasOnly ? false : readBias(r, modelType, gpt2Style);
   if (bias === true && family?.unbiasedExperts === true && experts) {
     const width = experts.width ?? ffn ?? NaN;
@@ -312,9 +315,9 @@ export function readCheckpoint(r: FieldReader): SpecDraft {
     kvHeads,
     headDim,
     ffn: mixture.denseFfn ?? ffn,
-    gated: readGated(r, modelType) ?? mpt.gated,
+    gated,
     vocab,
-    tied: r.flag('tied', ['tie_word_embeddings']),
+    tied,
     bias,
     experts,
     encoder,
