@@ -182,6 +182,22 @@ const TOTAL_PATHS: string[][] = [
 /** Where they state the experts each token uses. */
 const ACTIVE_PATHS: string[][] = [['num_experts_per_tok'], ['moe_k'], ['ffn_config', 'moe_top_k']];
 
+/** count: the N of "every Nth layer is a mixture" stated at `key` (1 when not stated). */
+function layerStep(r: FieldReader, key: string): number | undefined {
+  return r.has([key]) ? r.count('experts.denseLayers', [key], 'every Nth layer is a mixture') : 1;
+}
+
+/** Whether a layer step read from `key` is not a whole number of at least 1 (reported). */
+function badStep(r: FieldReader, key: string, step: number): boolean {
+  if (isCount(step)) return false;
+  r.report(
+    'value-invalid',
+    [key],
+    `${r.key([key])} is ${r.quote([key])}; expected a whole number of at least 1`,
+  );
+  return true;
+}
+
 /** count: decoder layers with a dense feed-forward; null when none are stated (every layer is a mixture). */
 function readDenseLayers(r: FieldReader, layers: number): number | null {
   const n = isCount(layers) && layers <= 1 << 16 ? layers : null;
@@ -189,18 +205,9 @@ function readDenseLayers(r: FieldReader, layers: number): number | null {
     const k = r.has(['first_k_dense_replace'])
       ? r.count('experts.denseLayers', ['first_k_dense_replace'], 'leading dense layers')
       : 0;
-    const freq = r.has(['moe_layer_freq'])
-      ? r.count('experts.denseLayers', ['moe_layer_freq'], 'every Nth layer is a mixture')
-      : 1;
+    const freq = layerStep(r, 'moe_layer_freq');
     if (k === undefined || freq === undefined || Number.isNaN(k) || Number.isNaN(freq)) return NaN;
-    if (!isCount(freq)) {
-      r.report(
-        'value-invalid',
-        ['moe_layer_freq'],
-        `${r.key(['moe_layer_freq'])} is ${r.quote(['moe_layer_freq'])}; expected a whole number of at least 1`,
-      );
-      return NaN;
-    }
+    if (badStep(r, 'moe_layer_freq', freq)) return NaN;
     if (n === null) return null;
     return n - countLayers(n, (i) => i >= k && i % freq === 0);
   }
@@ -219,19 +226,10 @@ function readDenseLayers(r: FieldReader, layers: number): number | null {
           ? NaN
           : n - 1
         : r.count('experts.denseLayers', ['moe_layer_end_index'], 'the last mixture layer');
-    const step = r.has(['moe_layer_interval'])
-      ? r.count('experts.denseLayers', ['moe_layer_interval'], 'every Nth layer is a mixture')
-      : 1;
+    const step = layerStep(r, 'moe_layer_interval');
     if (start === undefined || end === undefined || step === undefined) return NaN;
     if (Number.isNaN(start) || Number.isNaN(step) || (Number.isNaN(end) && n !== null)) return NaN;
-    if (!isCount(step)) {
-      r.report(
-        'value-invalid',
-        ['moe_layer_interval'],
-        `${r.key(['moe_layer_interval'])} is ${r.quote(['moe_layer_interval'])}; expected a whole number of at least 1`,
-      );
-      return NaN;
-    }
+    if (badStep(r, 'moe_layer_interval', step)) return NaN;
     if (n === null) return null;
     return n - countLayers(n, (i) => i >= start && i <= end && (i + 1) % step === 0);
   }
