@@ -280,8 +280,7 @@ function patternPlan(
       ['sliding_window'],
       `${r.key(['sliding_window'])} has no effect: with ${pattern}, no layer slides`,
     );
-    plan.slidingWindow = null;
-    plan.layerTypes = null;
+    dropWindow(plan);
   }
   readLocalBase(r, plan);
   return plan;
